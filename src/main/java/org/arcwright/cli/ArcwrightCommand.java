@@ -1,0 +1,27 @@
+package org.arcwright.cli;
+
+import picocli.CommandLine.Command;
+
+/** The root command: lists the jobs. With no arguments on a desktop, the launcher opens the window instead. */
+@Command(name = "arcwright",
+        mixinStandardHelpOptions = true,
+        versionProvider = VersionProvider.class,
+        description = {
+                "Tolerancing assistant for fillets, rounds and edge radii.",
+                "Run with no arguments on a desktop to open the window."},
+        subcommands = {
+                LimitsCommand.class,
+                GeneralToleranceCommand.class,
+                picocli.CommandLine.HelpCommand.class
+        },
+        footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
+                "Design guidance only: defer to the governing standard, your company's practice and licensed engineering judgement."})
+public final class ArcwrightCommand implements Runnable {
+    @picocli.CommandLine.Spec
+    picocli.CommandLine.Model.CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+}

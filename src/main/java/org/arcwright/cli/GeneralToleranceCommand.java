@@ -1,0 +1,107 @@
+package org.arcwright.cli;
+
+import java.io.PrintWriter;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.PackStack;
+import org.arcwright.tolerance.GeneralTolerance;
+import org.arcwright.tolerance.GeneralToleranceTable;
+import org.arcwright.tolerance.GeneralToleranceTables;
+import org.arcwright.tolerance.ToleranceQuantity;
+import org.arcwright.tolerance.Units;
+import picocli.CommandLine.ArgGroup;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Spec;
+import picocli.CommandLine.Model.CommandSpec;
+
+/** {@code arcwright general-tolerance}: the title-block (ISO 2768-1 or company) tolerance of a size. */
+@Command(name = "general-tolerance", mixinStandardHelpOptions = true,
+        description = "The general tolerance a title block grants a radius, a linear size or an angle (ISO 2768-1 or a company table).")
+final class GeneralToleranceCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Option(names = "--class", required = true, paramLabel = "f|m|c|v", description = "Tolerance class.")
+    String toleranceClass;
+
+    @ArgGroup(exclusive = true, multiplicity = "1")
+    What what;
+
+    static final class What {
+        @Option(names = "--radius", paramLabel = "X", description = "An external radius or chamfer height (broken edge).")
+        Double radius;
+        @Option(names = "--linear", paramLabel = "X", description = "A linear size.")
+        Double linear;
+        @Option(names = "--angle-side", paramLabel = "X", description = "Length of the shorter side of an angle.")
+        Double angleSide;
+    }
+
+    @Option(names = "--units", paramLabel = "mm|in", defaultValue = "mm",
+            description = "Units of the size given (default: ${DEFAULT-VALUE}); tables are in mm.")
+    String units;
+
+    @Option(names = "--table", paramLabel = "ID", description = "A table id other than ISO 2768-1 (from a practice pack).")
+    String tableId;
+
+    @Option(names = "--pack", paramLabel = "DIR", description = "A practice pack to layer over the built-in one (repeatable).")
+    List<java.nio.file.Path> packs = List.of();
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE}).")
+    OutputFormat format;
+
+    @Override
+    public Integer call() {
+        Units u = Units.parse(units);
+        ToleranceQuantity q = what.radius != null ? ToleranceQuantity.RADIUS_CHAMFER
+                : what.linear != null ? ToleranceQuantity.LINEAR : ToleranceQuantity.ANGULAR;
+        double size = what.radius != null ? what.radius : what.linear != null ? what.linear : what.angleSide;
+        String field = what.radius != null ? "--radius" : what.linear != null ? "--linear" : "--angle-side";
+        if (!Double.isFinite(size)) throw org.arcwright.io.InputProblem.ofField(field, "not a finite number");
+        if (size <= 0) throw org.arcwright.io.InputProblem.ofField(field, "must be greater than zero, got " + size);
+        PackStack stack = PackStack.load(packs, null);
+        if (!stack.problems().isEmpty()) throw stack.problems().get(0);
+        GeneralToleranceTables tables = GeneralToleranceTables.load(stack);
+        GeneralToleranceTable table = tableId == null ? tables.iso(q) : tables.require(tableId);
+        double sizeMm = size * u.millimetres();
+        GeneralTolerance t;
+        try {
+            t = table.lookup(toleranceClass, sizeMm);
+        } catch (org.arcwright.io.InputProblem p) {
+            throw "size".equals(p.field()) ? org.arcwright.io.InputProblem.ofField(field, p.problem()) : p;
+        }
+        double tol = q == ToleranceQuantity.ANGULAR ? t.plusMinus() : t.plusMinus() / u.millimetres();
+        PrintWriter out = spec.commandLine().getOut();
+        if (format == OutputFormat.json) {
+            Map<String, Object> m = new LinkedHashMap<>();
+            m.put("tolerance", tol);
+            m.put("toleranceUnits", q == ToleranceQuantity.ANGULAR ? "deg" : u.symbol());
+            m.put("formatted", t.formatted());
+            m.put("class", t.toleranceClass());
+            m.put("className", table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()));
+            m.put("range", t.range() + " mm");
+            m.put("quantity", q.key());
+            m.put("size", size);
+            m.put("units", u.symbol());
+            m.put("table", table.id());
+            m.put("source", table.source());
+            out.println(new JsonFiles().write(m));
+        } else {
+            String what = switch (q) {
+                case RADIUS_CHAMFER -> "radius/chamfer";
+                case LINEAR -> "linear size";
+                case ANGULAR -> "angle, shorter side";
+            };
+            out.printf("%s %s %s, class %s (%s): %s%s%n", what, Numbers.plain(size), u.symbol(), t.toleranceClass(),
+                    table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()),
+                    q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + Numbers.plain(tol),
+                    q == ToleranceQuantity.ANGULAR ? "" : " " + u.symbol());
+            out.printf("  range   %s mm%n", t.range());
+            out.printf("  table   %s — %s%n", table.title(), table.source());
+        }
+        return Cli.OK;
+    }
+}

@@ -1,0 +1,122 @@
+package org.arcwright.tolerance;
+
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
+
+/**
+ * How a radius callout is written on the drawing, following the drawing standard in force.
+ *
+ * <p>{@link #ASME} follows ASME Y14.5-2018 (from memory: 1.6.1 and 2.3.1 for millimetres, 1.6.2 and
+ * 2.3.2 for inches):
+ * <ul>
+ *   <li>mm: a zero before the decimal point of a value under one; no trailing zeros after a whole
+ *       nominal; a zero deviation shown as a single {@code 0} without sign; both deviations of a
+ *       bilateral tolerance and both limits with the same number of places.</li>
+ *   <li>inch: no zero before the point; dimension and tolerance (and both limits) with the same
+ *       number of places, zeros added where needed; a zero deviation keeps its sign and places
+ *       ({@code -.000}).</li>
+ * </ul>
+ * {@link #ISO} follows ISO 129-1:2018 and ISO 14405-1 (from memory): a zero before the point, both
+ * deviations with the same number of places, a zero deviation as {@code 0}, single limits as
+ * lower-case {@code max}/{@code min}. ISO has no controlled radius: a CR callout is written as R
+ * and {@link #remarks(RadiusCallout)} says what to add.
+ */
+public enum DrawingStyle {
+    ASME,
+    ISO;
+
+    /** Reads {@code asme} or {@code iso} (any case). */
+    public static DrawingStyle parse(String text) {
+        if (text == null) throw org.arcwright.io.InputProblem.ofField("standard", "missing; use asme or iso");
+        return switch (text.trim().toLowerCase(java.util.Locale.ROOT)) {
+            case "asme", "asme-y14.5", "y14.5" -> ASME;
+            case "iso" -> ISO;
+            default -> throw org.arcwright.io.InputProblem.ofField("standard",
+                    "unknown standard '" + text + "'; use asme or iso");
+        };
+    }
+
+    /** The callout text as it would be drawn. */
+    public String format(RadiusCallout c) {
+        String prefix = (this == ISO ? RadiusKind.R : c.kind()).symbol();
+        boolean inch = c.units() == Units.INCH;
+        return prefix + body(c.form(), c.units() == Units.INCH);
+    }
+
+    private String body(ToleranceForm form, boolean inch) {
+        boolean asmeInch = inch && this == ASME;
+        if (form instanceof ToleranceForm.EqualBilateral f) {
+            if (asmeInch) {
+                int p = Math.max(f.nominalValue().scale(), f.plusMinus().scale());
+                return value(f.nominalValue(), p, true) + " ±" + value(f.plusMinus(), p, true);
+            }
+            return nominal(f.nominalValue(), inch) + " ±" + value(f.plusMinus(), f.plusMinus().scale(), inch);
+        }
+        if (form instanceof ToleranceForm.Deviations f) {
+            int p = Math.max(f.plus().scale(), f.minus().scale());
+            if (asmeInch) {
+                p = Math.max(p, f.nominalValue().scale());
+                return value(f.nominalValue(), p, true) + " " + signedInch(f.plus(), p, true) + "/"
+                        + signedInch(f.minus(), p, false);
+            }
+            return nominal(f.nominalValue(), inch) + " " + signed(f.plus(), p, inch) + "/" + signed(f.minus(), p, inch);
+        }
+        if (form instanceof ToleranceForm.Limits f) {
+            int p = Math.max(f.min().scale(), f.max().scale());
+            return value(f.min(), p, inch) + "-" + value(f.max(), p, inch);
+        }
+        if (form instanceof ToleranceForm.SingleLimit f) {
+            String word = f.side() == LimitSide.MAX ? "MAX" : "MIN";
+            if (this == ISO) word = word.toLowerCase(java.util.Locale.ROOT);
+            return (asmeInch ? value(f.value(), f.value().scale(), true) : nominal(f.value(), inch)) + " " + word;
+        }
+        ToleranceForm.Untoleranced f = (ToleranceForm.Untoleranced) form;
+        return asmeInch ? value(f.nominalValue(), f.nominalValue().scale(), true) : nominal(f.nominalValue(), inch);
+    }
+
+    /** What a reader of this style must be told beyond the callout text. */
+    public List<String> remarks(RadiusCallout c) {
+        List<String> out = new ArrayList<>();
+        if (this == ISO && c.kind() == RadiusKind.CR) {
+            out.add("Controlled radius (CR) is an ASME Y14.5 concept with no ISO equivalent: the ISO form states the "
+                    + "limits as R, and a profile of a surface tolerance (ISO 1101) where form matters.");
+        }
+        if (this == ISO && c.units() == Units.INCH) {
+            out.add("ISO drawings are normally dimensioned in millimetres.");
+        }
+        if (c.form() instanceof ToleranceForm.Untoleranced) {
+            out.add("No tolerance is drawn: the general tolerance of the title block applies.");
+        }
+        return out;
+    }
+
+    /** A nominal: ASME mm and ISO drop trailing zeros of a whole number; the place count is kept otherwise. */
+    private String nominal(BigDecimal v, boolean inch) {
+        BigDecimal stripped = v.stripTrailingZeros();
+        if (stripped.scale() <= 0) return leadingZero(stripped.setScale(0).toPlainString(), inch);
+        return value(v, v.scale(), inch);
+    }
+
+    private String value(BigDecimal v, int places, boolean inch) {
+        String s = v.setScale(places, java.math.RoundingMode.UNNECESSARY).toPlainString();
+        return leadingZero(s, inch);
+    }
+
+    private String leadingZero(String s, boolean inch) {
+        if (inch && this == ASME && s.startsWith("0.")) return s.substring(1);
+        return s;
+    }
+
+    private String signed(BigDecimal v, int places, boolean inch) {
+        if (v.signum() == 0) return "0";
+        String body = value(v.abs(), places, inch);
+        return (v.signum() > 0 ? "+" : "-") + body;
+    }
+
+    private String signedInch(BigDecimal v, int places, boolean upper) {
+        String body = value(v.abs(), places, true);
+        char sign = v.signum() > 0 ? '+' : v.signum() < 0 ? '-' : upper ? '+' : '-';
+        return sign + body;
+    }
+}

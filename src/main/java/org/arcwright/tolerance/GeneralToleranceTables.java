@@ -1,0 +1,71 @@
+package org.arcwright.tolerance;
+
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Optional;
+import org.arcwright.io.InputProblem;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.PackStack;
+
+/**
+ * The general-tolerance tables in force: every {@code tables/*.json} of every pack whose
+ * {@code kind} is a general-tolerance table, later layers replacing earlier ones by id.
+ */
+public final class GeneralToleranceTables {
+    /** Id of the built-in ISO 2768-1 table for each quantity. */
+    public static final String ISO_LINEAR = "iso2768-1-linear";
+    public static final String ISO_RADIUS_CHAMFER = "iso2768-1-radius-chamfer";
+    public static final String ISO_ANGULAR = "iso2768-1-angular";
+
+    private final Map<String, GeneralToleranceTable> byId;
+
+    public GeneralToleranceTables(List<GeneralToleranceTable> tables) {
+        Map<String, GeneralToleranceTable> m = new LinkedHashMap<>();
+        for (GeneralToleranceTable t : tables) m.put(t.id(), t);
+        this.byId = java.util.Collections.unmodifiableMap(m);
+    }
+
+    /** Loads the tables of every pack in {@code stack}; a malformed table file is an error naming it. */
+    public static GeneralToleranceTables load(PackStack stack) {
+        JsonFiles json = new JsonFiles();
+        List<GeneralToleranceTable> tables = new ArrayList<>();
+        for (PackStack.PackFile f : stack.files("tables", ".json")) {
+            var tree = json.readTree(f.path());
+            if (!"general-tolerance".equals(tree.path("kind").asText())) continue;
+            var obj = ((com.fasterxml.jackson.databind.node.ObjectNode) tree.deepCopy());
+            obj.remove("kind");
+            try {
+                tables.add(json.convert(obj, f.path().toString(), GeneralToleranceTable.class));
+            } catch (InputProblem p) {
+                throw p;
+            }
+        }
+        return new GeneralToleranceTables(tables);
+    }
+
+    /** All tables, in load order. */
+    public List<GeneralToleranceTable> all() { return List.copyOf(byId.values()); }
+
+    public Optional<GeneralToleranceTable> byId(String id) { return Optional.ofNullable(byId.get(id)); }
+
+    /** The table with {@code id}, or an error listing the ids there are. */
+    public GeneralToleranceTable require(String id) {
+        GeneralToleranceTable t = byId.get(id);
+        if (t == null) {
+            throw InputProblem.ofField("table", "no general-tolerance table '" + id + "'; known tables: "
+                    + String.join(", ", byId.keySet()));
+        }
+        return t;
+    }
+
+    /** The ISO 2768-1 table (or its company replacement) for a quantity. */
+    public GeneralToleranceTable iso(ToleranceQuantity q) {
+        return require(switch (q) {
+            case LINEAR -> ISO_LINEAR;
+            case RADIUS_CHAMFER -> ISO_RADIUS_CHAMFER;
+            case ANGULAR -> ISO_ANGULAR;
+        });
+    }
+}
