@@ -1,0 +1,49 @@
+package org.arcwright.app;
+
+import java.nio.file.Path;
+import java.time.Clock;
+import java.util.concurrent.ExecutorService;
+import java.util.concurrent.Executors;
+import java.util.concurrent.ThreadFactory;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.arcwright.app.model.RecoveryStore;
+import org.arcwright.app.model.SettingsStore;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.worksheet.WorksheetFiles;
+
+/**
+ * The collaborators the window is built from, gathered so that tests can build a window over a
+ * temporary config directory. {@code background} runs long work (advice, indexing, inspection);
+ * {@code io} writes settings and autosaves in order.
+ */
+public record AppServices(Path configDir, JsonFiles json, WorksheetFiles files, SettingsStore settings,
+                          RecoveryStore recovery, ExecutorService background, ExecutorService io, Clock clock) {
+
+    /** The standard services over {@code configDir}. */
+    public static AppServices over(Path configDir) {
+        JsonFiles json = new JsonFiles();
+        return new AppServices(configDir, json, new WorksheetFiles(json), new SettingsStore(configDir, json),
+                new RecoveryStore(configDir, json), Executors.newFixedThreadPool(2, daemon("arcwright-work")),
+                Executors.newSingleThreadExecutor(daemon("arcwright-io")), Clock.systemUTC());
+    }
+
+    /** Stops the worker threads, letting queued writes finish. */
+    public void shutdown() {
+        background.shutdownNow();
+        io.shutdown();
+        try {
+            io.awaitTermination(5, java.util.concurrent.TimeUnit.SECONDS);
+        } catch (InterruptedException e) {
+            Thread.currentThread().interrupt();
+        }
+    }
+
+    private static ThreadFactory daemon(String name) {
+        AtomicInteger n = new AtomicInteger();
+        return r -> {
+            Thread t = new Thread(r, name + "-" + n.incrementAndGet());
+            t.setDaemon(true);
+            return t;
+        };
+    }
+}

@@ -1,0 +1,446 @@
+package org.arcwright.app.decide;
+
+import java.awt.Toolkit;
+import java.awt.datatransfer.StringSelection;
+import java.util.EnumMap;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.Executor;
+import java.util.function.Consumer;
+import javax.swing.JCheckBox;
+import javax.swing.JComboBox;
+import javax.swing.JComponent;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTextField;
+import javax.swing.ScrollPaneConstants;
+import javax.swing.SwingUtilities;
+import javax.swing.Timer;
+import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
+import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.model.AdviceSource;
+import org.arcwright.app.model.DecideForm;
+import org.arcwright.app.model.Numbers;
+import org.arcwright.app.model.Question;
+import org.arcwright.app.model.WorksheetSession;
+import org.arcwright.app.shell.Cautions;
+import org.arcwright.app.shell.ScrollablePanel;
+import org.arcwright.app.shell.Themes;
+import org.arcwright.rules.BlendFunction;
+import org.arcwright.rules.BlendKind;
+import org.arcwright.rules.DesignCase;
+import org.arcwright.rules.Loading;
+import org.arcwright.rules.Process;
+import org.arcwright.rules.Recommendation;
+import org.arcwright.tolerance.DrawingStyle;
+import org.arcwright.tolerance.LimitsReport;
+import org.arcwright.tolerance.Units;
+import org.arcwright.worksheet.RadiusFeature;
+
+/**
+ * The Decide panel: a guided form for the selected feature's case, every question with its help
+ * text and, when the answer is wrong, what is wrong in its place; the limits of the tolerance intent
+ * as you type; and the ranked recommendations, one of which goes on the worksheet.
+ */
+public final class DecidePanel extends JPanel {
+    private static final long serialVersionUID = 1L;
+    private final transient DecideForm form;
+    private final transient WorksheetSession session;
+    private final transient Executor background;
+    private final transient Consumer<String> status;
+    private transient AdviceSource advice;
+    private final Map<Question, JComponent> fields = new EnumMap<>(Question.class);
+    private final Map<Question, JLabel> notes = new EnumMap<>(Question.class);
+    private final JLabel figures = new JLabel();
+    private final JLabel featureTitle = new JLabel();
+    private final JPanel cards = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 10", "[grow,fill]", ""));
+    private final Timer adviseLater = new Timer(250, e -> adviseNow());
+    private transient List<Recommendation> shown = List.of();
+    private String featureId;
+    private DesignCase loadedCase;
+    private boolean binding;
+    private long generation;
+
+    public DecidePanel(DecideForm form, WorksheetSession session, AdviceSource advice, Executor background,
+                       Consumer<String> status) {
+        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[][grow,fill]"));
+        this.form = Objects.requireNonNull(form, "form");
+        this.session = Objects.requireNonNull(session, "session");
+        this.advice = Objects.requireNonNull(advice, "advice");
+        this.background = Objects.requireNonNull(background, "background");
+        this.status = Objects.requireNonNull(status, "status");
+        setName("decidePanel");
+        adviseLater.setRepeats(false);
+        add(Cautions.box(Cautions.ADVICE));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, scroll(buildForm()), scroll(buildResults()));
+        split.setResizeWeight(0.5);
+        split.setBorder(null);
+        add(split);
+        form.listeners().add(this::formChanged);
+        session.listeners().add(this::sessionChanged);
+        sessionChanged();
+    }
+
+    /** Replaces where recommendations come from (when the practice packs have loaded). */
+    public void setAdviceSource(AdviceSource source) {
+        this.advice = Objects.requireNonNull(source, "source");
+        adviseNow();
+    }
+
+    /** The field bound to question {@code q} (for tests and keyboard focus). */
+    public JComponent field(Question q) { return fields.get(q); }
+
+    private static JScrollPane scroll(JComponent c) {
+        JScrollPane s = new JScrollPane(c, ScrollPaneConstants.VERTICAL_SCROLLBAR_AS_NEEDED,
+                ScrollPaneConstants.HORIZONTAL_SCROLLBAR_NEVER);
+        s.setBorder(null);
+        s.getVerticalScrollBar().setUnitIncrement(16);
+        return s;
+    }
+
+    private JPanel buildForm() {
+        JPanel p = new ScrollablePanel(new MigLayout("insets 4 4 12 12, wrap 1, gap 0 2", "[grow,fill]", ""));
+        featureTitle.putClientProperty("FlatLaf.styleClass", "h3");
+        featureTitle.setName("decideFeature");
+        p.add(featureTitle, "wmin 10, gapbottom 6");
+        section(p, "The radius");
+        text(p, Question.FEATURE);
+        combo(p, Question.KIND, BlendKind.values(), form::setKind);
+        text(p, Question.NOMINAL);
+        combo(p, Question.FUNCTION, BlendFunction.values(), form::setFunction);
+        combo(p, Question.LOADING, Loading.values(), form::setLoading);
+        section(p, "What matters");
+        check(p, Question.FORM_MATTERS, form::setFormMatters);
+        check(p, Question.LOCATION_MATTERS, form::setLocationMatters);
+        text(p, Question.DATUMS);
+        section(p, "The drawing");
+        combo(p, Question.PROCESS, Process.values(), form::setProcess);
+        combo(p, Question.STANDARD, DrawingStyle.values(), form::setStandard);
+        combo(p, Question.UNITS, Units.values(), form::setUnits);
+        text(p, Question.TOLERANCE);
+        text(p, Question.ANGLE);
+        section(p, "Stress concentration");
+        check(p, Question.STRESS, form::setStressEnabled);
+        choice(p, Question.SHAPE);
+        choice(p, Question.LOAD);
+        text(p, Question.BIG_D);
+        text(p, Question.SMALL_D);
+        text(p, Question.STRENGTH);
+        choice(p, Question.STRENGTH_UNITS);
+        text(p, Question.TARGET_KT);
+        section(p, "Mating corner");
+        check(p, Question.MATING, form::setMatingEnabled);
+        choice(p, Question.CORNER);
+        text(p, Question.CORNER_SIZE);
+        text(p, Question.CORNER_ANGLE);
+        return p;
+    }
+
+    private JPanel buildResults() {
+        JPanel p = new ScrollablePanel(new MigLayout("insets 4 12 12 4, wrap 1, gap 6", "[grow,fill]", ""));
+        JLabel h1 = new JLabel("Your tolerance at this corner");
+        h1.putClientProperty("FlatLaf.styleClass", "h4");
+        p.add(h1);
+        figures.setName("limitsFigures");
+        figures.setFont(Themes.font("Arcwright.figure.font"));
+        p.add(figures, "wmin 10");
+        JLabel h2 = new JLabel("Recommendations, best first");
+        h2.putClientProperty("FlatLaf.styleClass", "h4");
+        p.add(h2, "gaptop 10");
+        cards.setOpaque(false);
+        cards.setName("cards");
+        p.add(cards, "wmin 10");
+        return p;
+    }
+
+    private static void section(JPanel p, String title) {
+        JLabel l = new JLabel(title);
+        l.putClientProperty("FlatLaf.styleClass", "h4");
+        p.add(l, "gaptop 12, gapbottom 2");
+    }
+
+    private void text(JPanel p, Question q) {
+        JTextField f = new JTextField(form.text(q), 14);
+        f.getDocument().addDocumentListener(new DocumentListener() {
+            public void insertUpdate(DocumentEvent e) { typed(q, f); }
+            public void removeUpdate(DocumentEvent e) { typed(q, f); }
+            public void changedUpdate(DocumentEvent e) { typed(q, f); }
+        });
+        row(p, q, f);
+    }
+
+    private <E> void combo(JPanel p, Question q, E[] values, Consumer<E> setter) {
+        JComboBox<E> c = new JComboBox<>(values);
+        c.setRenderer(new KeyRenderer());
+        c.addActionListener(e -> picked(c, setter));
+        row(p, q, c);
+    }
+
+    private void choice(JPanel p, Question q) {
+        JComboBox<String> c = new JComboBox<>(DecideForm.choices(q).toArray(new String[0]));
+        c.addActionListener(e -> typedChoice(q, c));
+        row(p, q, c);
+    }
+
+    private void check(JPanel p, Question q, Consumer<Boolean> setter) {
+        JCheckBox c = new JCheckBox(q.label());
+        c.addActionListener(e -> ticked(c, setter));
+        c.setName("q." + q.name());
+        c.setToolTipText(q.help());
+        fields.put(q, c);
+        p.add(c, "wmin 10, gaptop 4");
+        note(p, q);
+    }
+
+    private void row(JPanel p, Question q, JComponent c) {
+        c.setName("q." + q.name());
+        c.setToolTipText(q.help());
+        JLabel l = new JLabel(q.label());
+        l.setLabelFor(c);
+        fields.put(q, c);
+        p.add(l, "gaptop 4");
+        p.add(c, "wmin 10");
+        note(p, q);
+    }
+
+    private void note(JPanel p, Question q) {
+        JLabel n = new JLabel();
+        n.setName("note." + q.name());
+        n.putClientProperty("FlatLaf.styleClass", "small");
+        notes.put(q, n);
+        p.add(n, "wmin 10, gapleft 2");
+    }
+
+    // ---- listeners: one line each, dispatching to the form ----
+
+    private void typed(Question q, JTextField f) { if (!binding) form.setText(q, f.getText()); }
+
+    private void typedChoice(Question q, JComboBox<String> c) { if (!binding) form.setText(q, (String) c.getSelectedItem()); }
+
+    private <E> void picked(JComboBox<E> c, Consumer<E> setter) {
+        if (!binding) setter.accept(c.getItemAt(c.getSelectedIndex()));
+    }
+
+    private void ticked(JCheckBox c, Consumer<Boolean> setter) { if (!binding) setter.accept(c.isSelected()); }
+
+    // ---- model to view ----
+
+    private void sessionChanged() {
+        Optional<RadiusFeature> sel = session.selected();
+        if (sel.isEmpty()) {
+            featureId = null;
+            featureTitle.setText("No feature selected: add one in the Part panel");
+            setCards(List.of());
+            return;
+        }
+        RadiusFeature f = sel.get();
+        featureTitle.setText(f.id() + (f.designCase().feature() == null ? "" : "  " + f.designCase().feature()));
+        if (!f.id().equals(featureId) || !f.designCase().equals(loadedCase)) {
+            featureId = f.id();
+            loadedCase = f.designCase();
+            form.load(f.designCase());
+        } else {
+            renderCards();
+        }
+    }
+
+    private void formChanged() {
+        binding = true;
+        try {
+            for (Map.Entry<Question, JComponent> e : fields.entrySet()) bind(e.getKey(), e.getValue());
+        } finally {
+            binding = false;
+        }
+        for (Map.Entry<Question, JLabel> e : notes.entrySet()) {
+            Optional<String> problem = form.problem(e.getKey());
+            JLabel n = e.getValue();
+            n.setText("<html>" + problem.orElse(e.getKey().help()) + "</html>");
+            n.setForeground(Themes.color(problem.isPresent() ? "Arcwright.error.foreground" : "Arcwright.help.foreground"));
+        }
+        boolean s = form.stressEnabled();
+        for (Question q : List.of(Question.SHAPE, Question.LOAD, Question.BIG_D, Question.SMALL_D, Question.STRENGTH,
+                Question.STRENGTH_UNITS, Question.TARGET_KT)) enable(q, s, "tick 'Check stress concentration' first");
+        boolean m = form.matingEnabled();
+        for (Question q : List.of(Question.CORNER, Question.CORNER_SIZE, Question.CORNER_ANGLE)) {
+            enable(q, m, "tick 'Check the mating corner' first");
+        }
+        showFigures();
+        adviseLater.restart();
+    }
+
+    private void enable(Question q, boolean on, String why) {
+        JComponent c = fields.get(q);
+        c.setEnabled(on);
+        c.setToolTipText(on ? q.help() : "Unavailable: " + why);
+    }
+
+    @SuppressWarnings("unchecked")
+    private void bind(Question q, JComponent c) {
+        if (c instanceof JTextField) {
+            JTextField f = (JTextField) c;
+            if (!f.getText().equals(form.text(q))) {
+                f.setText(form.text(q));
+                f.setCaretPosition(0);
+            }
+        } else if (c instanceof JCheckBox) {
+            JCheckBox b = (JCheckBox) c;
+            b.setSelected(checked(q));
+        } else if (c instanceof JComboBox) {
+            JComboBox<Object> box = (JComboBox<Object>) c;
+            Object v = selectedValue(q);
+            if (!Objects.equals(box.getSelectedItem(), v)) box.setSelectedItem(v);
+        }
+    }
+
+    private boolean checked(Question q) {
+        switch (q) {
+            case FORM_MATTERS: return form.formMatters();
+            case LOCATION_MATTERS: return form.locationMatters();
+            case STRESS: return form.stressEnabled();
+            case MATING: return form.matingEnabled();
+            default: return false;
+        }
+    }
+
+    private Object selectedValue(Question q) {
+        switch (q) {
+            case KIND: return form.kind();
+            case FUNCTION: return form.function();
+            case LOADING: return form.loading();
+            case PROCESS: return form.process();
+            case STANDARD: return form.standard();
+            case UNITS: return form.units();
+            default: return form.text(q);
+        }
+    }
+
+    private void showFigures() {
+        Optional<LimitsReport> r = form.limits();
+        if (r.isEmpty()) {
+            figures.setText("<html>" + (form.text(Question.TOLERANCE).isBlank()
+                    ? "No tolerance intent given: the title block's general tolerance applies."
+                    : "Fix the tolerance intent to see its limits.") + "</html>");
+            return;
+        }
+        LimitsReport l = r.get();
+        StringBuilder sb = new StringBuilder("<html><table cellpadding=1>");
+        rowHtml(sb, "As drawn (ASME)", l.asme());
+        rowHtml(sb, "As drawn (ISO)", l.iso());
+        rowHtml(sb, "Smallest radius", l.min() == null ? "open (MAX only)" : Numbers.fixed(l.min(), 4));
+        rowHtml(sb, "Largest radius", l.max() == null ? "open (MIN only)" : Numbers.fixed(l.max(), 4));
+        if (l.crescent() != null) {
+            rowHtml(sb, "Crescent width on the bisector", Numbers.fixed(l.crescent().width(), 4));
+            rowHtml(sb, "Equal-bilateral profile holding it", Numbers.fixed(l.crescent().equalBilateralProfile(), 4));
+            rowHtml(sb, "Shortcut profile (2 × larger deviation)", Numbers.fixed(l.crescent().shortcutProfile(), 4));
+        }
+        sb.append("</table>");
+        for (String remark : l.remarks()) sb.append("<p style='margin-top:4px'>").append(remark).append("</p>");
+        figures.setText(sb.append("</html>").toString());
+    }
+
+    private static void rowHtml(StringBuilder sb, String label, String value) {
+        sb.append("<tr><td>").append(label).append("</td><td nowrap><b>").append(value.replace(" ", "&nbsp;"))
+                .append("</b></td></tr>");
+    }
+
+    private void adviseNow() {
+        long g = ++generation;
+        Optional<DesignCase> c = form.toCase();
+        if (c.isEmpty()) {
+            setCards(List.of());
+            return;
+        }
+        AdviceSource source = advice;
+        CompletableFuture.supplyAsync(() -> source.advise(c.get()), background)
+                .whenComplete((list, error) -> SwingUtilities.invokeLater(() -> advised(g, list, error)));
+    }
+
+    private void advised(long g, List<Recommendation> list, Throwable error) {
+        if (g != generation) return;
+        if (error != null) {
+            status.accept("Advice failed: " + error.getMessage());
+            setCards(List.of());
+            return;
+        }
+        setCards(list);
+    }
+
+    private void setCards(List<Recommendation> list) {
+        shown = List.copyOf(list);
+        renderCards();
+    }
+
+    private void renderCards() {
+        java.awt.Component focus = java.awt.KeyboardFocusManager.getCurrentKeyboardFocusManager().getFocusOwner();
+        boolean focusInCards = focus != null && javax.swing.SwingUtilities.isDescendingFrom(focus, cards);
+        cards.removeAll();
+        Recommendation chosen = session.selected().map(RadiusFeature::chosen).orElse(null);
+        if (shown.isEmpty()) {
+            JLabel none = new JLabel("<html>" + (form.isValid()
+                    ? "No recommendation yet. Give a tolerance intent to take it as written, or wait for the practice packs."
+                    : "Answer the questions marked in red to see recommendations.") + "</html>");
+            none.setForeground(Themes.color("Arcwright.help.foreground"));
+            cards.add(none, "wmin 10");
+        }
+        int rank = 1;
+        for (Recommendation r : shown) {
+            boolean isChosen = chosen != null && chosen.callout().equals(r.callout()) && chosen.ruleId().equals(r.ruleId());
+            cards.add(new RecommendationCard(rank++, r, this::choose, this::copy, isChosen), "wmin 10");
+        }
+        cards.revalidate();
+        cards.repaint();
+        if (focusInCards) keepFocusInCards();
+    }
+
+    /** After the cards are rebuilt, the keyboard focus stays on them instead of falling out of the window. */
+    private void keepFocusInCards() {
+        for (java.awt.Component c : cards.getComponents()) {
+            if (c instanceof RecommendationCard) {
+                ((RecommendationCard) c).focusFirstButton();
+                return;
+            }
+        }
+        cards.requestFocusInWindow();
+    }
+
+    private void choose(Recommendation r) {
+        Optional<DesignCase> c = form.toCase();
+        if (featureId == null || c.isEmpty()) return;
+        loadedCase = c.get();
+        session.choose(featureId, c.get(), r);
+        status.accept("Put " + r.text() + " on " + featureId + " (Ctrl+Z to undo)");
+    }
+
+    private void copy(Recommendation r) {
+        Toolkit.getDefaultToolkit().getSystemClipboard().setContents(new StringSelection(r.text()), null);
+        status.accept("Copied " + r.text());
+    }
+
+    /** Shows enum values by their file key, as the trade writes them. */
+    private static final class KeyRenderer extends javax.swing.DefaultListCellRenderer {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> list, Object value, int index,
+                                                               boolean selected, boolean focus) {
+            String text = value instanceof Enum ? keyOf(value) : String.valueOf(value);
+            return super.getListCellRendererComponent(list, text, index, selected, focus);
+        }
+
+        private static String keyOf(Object v) {
+            if (v instanceof BlendKind) return ((BlendKind) v).key();
+            if (v instanceof BlendFunction) return ((BlendFunction) v).key();
+            if (v instanceof Loading) return ((Loading) v).key();
+            if (v instanceof Process) return ((Process) v).key();
+            if (v instanceof DrawingStyle) return v == DrawingStyle.ASME ? "ASME Y14.5" : "ISO";
+            if (v instanceof Units) return v == Units.MM ? "millimetres" : "inches";
+            return String.valueOf(v);
+        }
+    }
+}

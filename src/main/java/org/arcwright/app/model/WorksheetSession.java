@@ -1,0 +1,235 @@
+package org.arcwright.app.model;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Objects;
+import java.util.Optional;
+import org.arcwright.rules.DesignCase;
+import org.arcwright.rules.Recommendation;
+import org.arcwright.tolerance.DrawingStyle;
+import org.arcwright.tolerance.Units;
+import org.arcwright.worksheet.InspectionRecord;
+import org.arcwright.worksheet.PartWorksheet;
+import org.arcwright.worksheet.RadiusFeature;
+import org.arcwright.worksheet.WorksheetFiles;
+
+/**
+ * The worksheet open in the window: its file, the selected feature, whether it differs from what is
+ * saved, and undo/redo of every edit. Every edit goes through here so that undo, autosave and the
+ * views all see the same change.
+ */
+public final class WorksheetSession {
+    private final WorksheetFiles files;
+    private final UndoHistory<PartWorksheet> history = new UndoHistory<>(200);
+    private final Listeners listeners = new Listeners();
+    private PartWorksheet worksheet;
+    private PartWorksheet saved;
+    private Path file;
+    private String selectedId;
+    private long revision;
+
+    public WorksheetSession(WorksheetFiles files, PartWorksheet initial, Path file) {
+        this.files = Objects.requireNonNull(files, "files");
+        this.worksheet = Objects.requireNonNull(initial, "initial");
+        this.saved = initial;
+        this.file = file;
+        this.selectedId = initial.features().isEmpty() ? null : initial.features().get(0).id();
+    }
+
+    /** Called after every change of worksheet, file or selection. */
+    public Listeners listeners() { return listeners; }
+
+    public PartWorksheet worksheet() { return worksheet; }
+
+    public Optional<Path> file() { return Optional.ofNullable(file); }
+
+    /** True when the worksheet has edits not yet saved (a fresh or demo worksheet is not dirty until edited). */
+    public boolean isDirty() { return !worksheet.equals(saved); }
+
+    /** Grows with every change; autosave compares it. */
+    public long revision() { return revision; }
+
+    /** A short title for the window: file name or part number, with a mark when unsaved. */
+    public String title() {
+        String name = file == null ? worksheet.part().number() : file.getFileName().toString();
+        return (isDirty() ? "• " : "") + name;
+    }
+
+    public Optional<RadiusFeature> selected() {
+        return selectedId == null ? Optional.empty() : worksheet.feature(selectedId);
+    }
+
+    public void select(String id) {
+        String next = id != null && worksheet.feature(id).isPresent() ? id : null;
+        if (Objects.equals(next, selectedId)) return;
+        selectedId = next;
+        changed();
+    }
+
+    // ---- edits (each undoable) ----
+
+    /** Adds a new open feature after the selection (or at the end) and selects it. */
+    public RadiusFeature addFeature() {
+        String id = worksheet.nextFeatureId();
+        DesignCase c = new DesignCase(worksheet.units(), worksheet.standard(), "New fillet", org.arcwright.rules.BlendKind.FILLET,
+                worksheet.units() == Units.INCH ? 0.06 : 1.0, org.arcwright.rules.BlendFunction.COSMETIC,
+                org.arcwright.rules.Loading.NONE, false, false, List.of(), org.arcwright.rules.Process.MACHINED,
+                null, null, null);
+        RadiusFeature f = new RadiusFeature(id, c, null, null);
+        edit("Add " + id, worksheet.withFeatureAt(insertionIndex(), f));
+        selectedId = id;
+        changed();
+        return f;
+    }
+
+    /** Copies the selected feature under a new id, placed after it, and selects the copy. */
+    public Optional<RadiusFeature> duplicateSelected() {
+        Optional<RadiusFeature> sel = selected();
+        if (sel.isEmpty()) return Optional.empty();
+        String id = worksheet.nextFeatureId();
+        RadiusFeature copy = sel.get().withId(id).withInspection(null);
+        edit("Duplicate " + sel.get().id(), worksheet.withFeatureAt(insertionIndex(), copy));
+        selectedId = id;
+        changed();
+        return Optional.of(copy);
+    }
+
+    /** Deletes the selected feature and selects its neighbour. */
+    public boolean deleteSelected() {
+        Optional<RadiusFeature> sel = selected();
+        if (sel.isEmpty()) return false;
+        int i = worksheet.features().indexOf(sel.get());
+        PartWorksheet next = worksheet.withoutFeature(sel.get().id());
+        edit("Delete " + sel.get().id(), next);
+        List<RadiusFeature> fs = next.features();
+        selectedId = fs.isEmpty() ? null : fs.get(Math.min(i, fs.size() - 1)).id();
+        changed();
+        return true;
+    }
+
+    /** Replaces the case of feature {@code id}; a changed case clears the chosen callout. */
+    public void updateCase(String id, DesignCase c) {
+        RadiusFeature f = require(id);
+        if (f.designCase().equals(c)) return;
+        edit("Edit " + id, worksheet.withFeature(f.withCase(c)));
+    }
+
+    /** Puts {@code r} on the drawing for feature {@code id}, keeping the case it was decided for. */
+    public void choose(String id, DesignCase c, Recommendation r) {
+        RadiusFeature f = require(id);
+        RadiusFeature next = new RadiusFeature(f.id(), c, r, f.inspection());
+        edit("Choose " + (r.text() == null ? r.ruleId() : r.text()) + " for " + id, worksheet.withFeature(next));
+    }
+
+    /** Keeps the outcome of inspecting a measured contour of feature {@code id}. */
+    public void recordInspection(String id, InspectionRecord record) {
+        RadiusFeature f = require(id);
+        edit("Inspect " + id, worksheet.withFeature(f.withInspection(record)));
+    }
+
+    /** Renames the part (number, name...) as one undoable edit. */
+    public void updatePart(PartWorksheet.PartInfo info) {
+        if (info.equals(worksheet.part())) return;
+        edit("Edit part", worksheet.withPart(info));
+    }
+
+    public boolean canUndo() { return history.canUndo(); }
+
+    public boolean canRedo() { return history.canRedo(); }
+
+    public Optional<String> undoLabel() { return history.undoLabel(); }
+
+    public Optional<String> redoLabel() { return history.redoLabel(); }
+
+    public void undo() {
+        if (!history.canUndo()) return;
+        worksheet = history.undo(worksheet);
+        keepSelectionValid();
+        changed();
+    }
+
+    public void redo() {
+        if (!history.canRedo()) return;
+        worksheet = history.redo(worksheet);
+        keepSelectionValid();
+        changed();
+    }
+
+    // ---- files ----
+
+    /** Replaces the session's content with the worksheet in {@code path}; throws InputProblem on bad content. */
+    public void open(Path path) {
+        PartWorksheet read = files.read(path);
+        replace(read, path, read);
+    }
+
+    /** Shows {@code ws} as unsaved edits (a recovered autosave of {@code origin}, which may be null). */
+    public void showUnsaved(PartWorksheet ws, Path origin) {
+        replace(ws, origin, null);
+    }
+
+    /** Shows {@code ws} with no file and no edits yet (the demo). */
+    public void showFresh(PartWorksheet ws) {
+        replace(ws, null, ws);
+    }
+
+    /** Saves to the current file; false when there is none yet (the view asks where). */
+    public boolean save() {
+        if (file == null) return false;
+        saveAs(file);
+        return true;
+    }
+
+    /** Saves atomically to {@code path}, which becomes the current file. */
+    public void saveAs(Path path) {
+        Path target = path.toString().endsWith(WorksheetFiles.EXTENSION) ? path
+                : path.resolveSibling(path.getFileName() + WorksheetFiles.EXTENSION);
+        files.write(target, worksheet);
+        file = target;
+        saved = worksheet;
+        changed();
+    }
+
+    /** A new empty worksheet. */
+    public void newWorksheet(Units units, DrawingStyle standard) {
+        showFresh(PartWorksheet.empty(new PartWorksheet.PartInfo("NEW-PART", "New part", null, null, "A"), units, standard));
+    }
+
+    private void replace(PartWorksheet ws, Path path, PartWorksheet savedState) {
+        worksheet = ws;
+        file = path;
+        saved = savedState;
+        history.clear();
+        selectedId = ws.features().isEmpty() ? null : ws.features().get(0).id();
+        changed();
+    }
+
+    private void edit(String label, PartWorksheet next) {
+        if (next.equals(worksheet)) return;
+        history.record(label, worksheet);
+        worksheet = next;
+        changed();
+    }
+
+    private RadiusFeature require(String id) {
+        return worksheet.feature(id).orElseThrow(() -> new IllegalArgumentException("no feature " + id));
+    }
+
+    private int insertionIndex() {
+        Optional<RadiusFeature> sel = selected();
+        return sel.map(f -> worksheet.features().indexOf(f) + 1).orElse(worksheet.features().size());
+    }
+
+    private void keepSelectionValid() {
+        if (selectedId == null || worksheet.feature(selectedId).isEmpty()) {
+            List<RadiusFeature> fs = new ArrayList<>(worksheet.features());
+            selectedId = fs.isEmpty() ? null : fs.get(0).id();
+        }
+    }
+
+    private void changed() {
+        revision++;
+        listeners.fire();
+    }
+}

@@ -1,0 +1,155 @@
+package org.arcwright.app.model;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.arcwright.tolerance.CrescentZone;
+
+/**
+ * The Zone view's drawing in part coordinates (drawing units): the vertex at the origin, the corner's
+ * bisector at 45°, the nominal contour (surface, blend, surface) and the zone boundaries with their
+ * deviation from nominal multiplied by the magnification, so a 0.04 mm crescent can be seen on a
+ * 2 mm fillet. Pure geometry for display; conformance is the core's job.
+ *
+ * <p>An arc of radius r tangent to both surfaces has its centre on the bisector at {@code r/sin(θ/2)}
+ * from the vertex and touches the surfaces {@code r/tan(θ/2)} from it (see {@link CrescentZone}).
+ *
+ * @param nominal the nominal contour
+ * @param lower the boundary toward the vertex (smaller radius, or the profile band's vertex side)
+ * @param upper the boundary away from the vertex
+ * @param crescentWidth the true zone width on the bisector (not magnified), or NaN without a zone
+ * @param magnification the factor applied to deviations from nominal
+ * @param caption what is drawn, in words
+ */
+public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, double crescentWidth,
+                          double magnification, String caption) {
+
+    /** A point in drawing units. */
+    public record Pt(double x, double y) {}
+
+    private static final int ARC_STEPS = 72;
+
+    public static ZonePicture of(ZoneSpec spec, double magnification) {
+        if (!(magnification >= 1)) throw new IllegalArgumentException("magnification must be at least 1, got " + magnification);
+        double th = Math.toRadians(spec.angleDeg());
+        double r = spec.nominal();
+        double reach = 1.35 * extentRadius(spec, magnification) / Math.tan(th / 2) + 0.5 * r;
+        List<Pt> nominal = contour(r, th, reach);
+        if (spec instanceof ZoneSpec.LimitArcs a) {
+            double lo = Math.max(1e-9, r + magnification * (a.min() - r));
+            double hi = r + magnification * (a.max() - r);
+            double w = CrescentZone.of(a.min(), Math.min(Math.max(r, a.min()), a.max()), a.max(), spec.angleDeg()).width();
+            String what = (a.controlled() ? "CR" : "R") + " limits " + Numbers.trim(a.min()) + " to " + Numbers.trim(a.max());
+            return new ZonePicture(nominal, contour(lo, th, reach), contour(hi, th, reach), w, magnification, what);
+        }
+        if (spec instanceof ZoneSpec.Band b) {
+            double addMaterial = b.outward();
+            double removeMaterial = b.zone() - b.outward();
+            // Vertex side is the add-material side of a round, the remove-material side of a fillet.
+            boolean round = b.kind() == org.arcwright.rules.BlendKind.ROUND;
+            double towardVertex = round ? addMaterial : removeMaterial;
+            double away = round ? removeMaterial : addMaterial;
+            List<Pt> lower = offset(nominal, r, th, reach, magnification * towardVertex);
+            List<Pt> upper = offset(nominal, r, th, reach, -magnification * away);
+            return new ZonePicture(nominal, lower, upper, b.zone(), magnification,
+                    "profile zone " + Numbers.trim(b.zone()) + (Math.abs(b.outward() - b.zone() / 2) > 1e-12
+                            ? " (" + Numbers.trim(b.outward()) + " add-material side)" : " equally disposed"));
+        }
+        return new ZonePicture(nominal, List.of(), List.of(), Double.NaN, magnification, "nominal only: no tolerance yet");
+    }
+
+    /** Shortest distance from {@code p} to the nominal contour, in drawing units. */
+    public double distanceToNominal(Pt p) {
+        double best = Double.POSITIVE_INFINITY;
+        for (int i = 1; i < nominal.size(); i++) best = Math.min(best, segmentDistance(p, nominal.get(i - 1), nominal.get(i)));
+        return best;
+    }
+
+    /**
+     * The part's material near the corner as a closed outline, for shading: inside the corner for a
+     * round, outside it (with the fillet's added material) for a fillet.
+     */
+    public List<Pt> material(org.arcwright.rules.BlendKind kind, double angleDeg) {
+        List<Pt> out = new ArrayList<>(nominal);
+        Pt first = nominal.get(0);
+        Pt last = nominal.get(nominal.size() - 1);
+        if (kind == org.arcwright.rules.BlendKind.ROUND) {
+            out.add(new Pt(last.x() + first.x(), last.y() + first.y()));
+            return out;
+        }
+        double th = Math.toRadians(angleDeg);
+        double beta = Math.PI / 4;
+        double m = 0.2 * Math.hypot(first.x(), first.y());
+        double n1 = beta - th / 2 - Math.PI / 2;
+        double n2 = beta + th / 2 + Math.PI / 2;
+        double d = m / Math.sin(th / 2);
+        out.add(new Pt(last.x() + m * Math.cos(n2), last.y() + m * Math.sin(n2)));
+        out.add(new Pt(-d * Math.cos(beta), -d * Math.sin(beta)));
+        out.add(new Pt(first.x() + m * Math.cos(n1), first.y() + m * Math.sin(n1)));
+        return out;
+    }
+
+    /** All points drawn, for fitting the view. */
+    public List<Pt> allPoints() {
+        List<Pt> all = new ArrayList<>(nominal);
+        all.addAll(lower);
+        all.addAll(upper);
+        return all;
+    }
+
+    private static double extentRadius(ZoneSpec spec, double m) {
+        if (spec instanceof ZoneSpec.LimitArcs a) return spec.nominal() + m * (a.max() - spec.nominal());
+        if (spec instanceof ZoneSpec.Band b) return spec.nominal() + m * b.zone();
+        return spec.nominal();
+    }
+
+    /** Surface 1, the blend of radius r, surface 2; the bisector points at 45°. */
+    static List<Pt> contour(double r, double th, double reach) {
+        double beta = Math.PI / 4;
+        double a1 = beta - th / 2;
+        double a2 = beta + th / 2;
+        double dc = r / Math.sin(th / 2);
+        double dt = r / Math.tan(th / 2);
+        double cx = dc * Math.cos(beta);
+        double cy = dc * Math.sin(beta);
+        List<Pt> pts = new ArrayList<>();
+        double far = Math.max(reach, dt * 1.2);
+        pts.add(new Pt(far * Math.cos(a1), far * Math.sin(a1)));
+        for (int i = 0; i <= ARC_STEPS; i++) {
+            double t = (double) i / ARC_STEPS;
+            double phi = beta + Math.PI - (t - 0.5) * (Math.PI - th);
+            pts.add(new Pt(cx + r * Math.cos(phi), cy + r * Math.sin(phi)));
+        }
+        pts.add(new Pt(far * Math.cos(a2), far * Math.sin(a2)));
+        return pts;
+    }
+
+    /** The contour moved {@code d} toward the vertex side along its normal (negative: away). */
+    static List<Pt> offset(List<Pt> contour, double r, double th, double reach, double d) {
+        double beta = Math.PI / 4;
+        double dc = r / Math.sin(th / 2);
+        double cx = dc * Math.cos(beta);
+        double cy = dc * Math.sin(beta);
+        List<Pt> out = new ArrayList<>();
+        double n1 = beta - th / 2 - Math.PI / 2;
+        double n2 = beta + th / 2 + Math.PI / 2;
+        Pt first = contour.get(0);
+        out.add(new Pt(first.x() + d * Math.cos(n1), first.y() + d * Math.sin(n1)));
+        for (int i = 1; i < contour.size() - 1; i++) {
+            Pt p = contour.get(i);
+            double nx = (p.x() - cx) / r;
+            double ny = (p.y() - cy) / r;
+            out.add(new Pt(p.x() + d * nx, p.y() + d * ny));
+        }
+        Pt last = contour.get(contour.size() - 1);
+        out.add(new Pt(last.x() + d * Math.cos(n2), last.y() + d * Math.sin(n2)));
+        return out;
+    }
+
+    private static double segmentDistance(Pt p, Pt a, Pt b) {
+        double dx = b.x() - a.x();
+        double dy = b.y() - a.y();
+        double len2 = dx * dx + dy * dy;
+        double t = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((p.x() - a.x()) * dx + (p.y() - a.y()) * dy) / len2));
+        return Math.hypot(p.x() - (a.x() + t * dx), p.y() - (a.y() + t * dy));
+    }
+}

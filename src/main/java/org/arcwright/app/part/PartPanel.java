@@ -1,0 +1,136 @@
+package org.arcwright.app.part;
+
+import java.awt.Component;
+import java.util.List;
+import javax.swing.Action;
+import javax.swing.JButton;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JTable;
+import javax.swing.JToolBar;
+import javax.swing.ListSelectionModel;
+import javax.swing.table.DefaultTableCellRenderer;
+import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.model.FeatureColumn;
+import org.arcwright.app.model.WorksheetSession;
+import org.arcwright.app.shell.Themes;
+import org.arcwright.worksheet.PartWorksheet;
+import org.arcwright.worksheet.RadiusFeature;
+
+/**
+ * The Part panel: what part this is and its radius features, one row each, with the status of each
+ * (open, decided, measured). Selecting a row makes it the feature every other panel works on.
+ */
+public final class PartPanel extends JPanel {
+    private static final long serialVersionUID = 1L;
+    private final transient WorksheetSession session;
+    private final FeatureTableModel model;
+    private final JTable table;
+    private final JLabel partNumber = new JLabel();
+    private final JLabel partName = new JLabel();
+    private boolean syncing;
+
+    /** @param rowActions add, duplicate and delete, shown above the table */
+    public PartPanel(WorksheetSession session, List<Action> rowActions) {
+        super(new MigLayout("insets 8, wrap 1, gap 4", "[grow,fill]", "[][][][grow,fill]"));
+        this.session = session;
+        this.model = new FeatureTableModel(session);
+        this.table = new JTable(model);
+        setName("partPanel");
+        table.setName("featureTable");
+        table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
+        table.setFillsViewportHeight(true);
+        table.getTableHeader().setReorderingAllowed(false);
+        table.setDefaultRenderer(Object.class, new StatusRenderer());
+        table.getSelectionModel().addListSelectionListener(e -> rowSelected(e.getValueIsAdjusting()));
+        partNumber.setName("partNumber");
+        partNumber.putClientProperty("FlatLaf.styleClass", "h3");
+        partName.putClientProperty("FlatLaf.styleClass", "small");
+        JToolBar bar = new JToolBar();
+        bar.setFloatable(false);
+        for (Action a : rowActions) {
+            JButton b = bar.add(a);
+            b.setHideActionText(false);
+            b.setHorizontalTextPosition(javax.swing.SwingConstants.RIGHT);
+            b.setVerticalTextPosition(javax.swing.SwingConstants.CENTER);
+            b.setName("part." + a.getValue(Action.NAME));
+        }
+        add(partNumber);
+        add(partName);
+        add(bar);
+        add(new JScrollPane(table));
+        session.listeners().add(this::sessionChanged);
+        sessionChanged();
+        sizeColumns();
+    }
+
+    public JTable table() { return table; }
+
+    private void sizeColumns() {
+        int[] widths = {34, 56, 100, 66, 130, 110};
+        for (int i = 0; i < widths.length && i < table.getColumnCount(); i++) {
+            table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
+        }
+    }
+
+    private void sessionChanged() {
+        syncing = true;
+        try {
+            PartWorksheet ws = session.worksheet();
+            partNumber.setText(ws.part().number() + (ws.part().revision() == null ? "" : "  rev " + ws.part().revision()));
+            partName.setText("<html>" + escape(ws.part().name() == null ? "" : ws.part().name())
+                    + (ws.part().material() == null ? "" : "<br>" + escape(ws.part().material())) + "</html>");
+            model.fireTableDataChanged();
+            session.selected().ifPresent(this::selectRow);
+        } finally {
+            syncing = false;
+        }
+    }
+
+    private void selectRow(RadiusFeature f) {
+        int i = session.worksheet().features().indexOf(f);
+        if (i >= 0) {
+            table.getSelectionModel().setSelectionInterval(i, i);
+            table.scrollRectToVisible(table.getCellRect(i, 0, true));
+        }
+    }
+
+    private void rowSelected(boolean adjusting) {
+        if (syncing || adjusting) return;
+        int row = table.getSelectedRow();
+        if (row >= 0 && row < model.getRowCount()) session.select(model.rows().get(row).id());
+    }
+
+    private static String escape(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+    }
+
+    /** Colours the status column by outcome; the id column in bold. */
+    private final class StatusRenderer extends DefaultTableCellRenderer {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public Component getTableCellRendererComponent(JTable t, Object value, boolean selected, boolean focus,
+                                                       int row, int column) {
+            Component c = super.getTableCellRendererComponent(t, value, selected, focus, row, column);
+            FeatureColumn col = model.column(column);
+            RadiusFeature f = model.rows().get(row);
+            if (!selected && col == FeatureColumn.STATUS) {
+                switch (f.status()) {
+                    case MEASURED_PASS: c.setForeground(Themes.color("Arcwright.pass.foreground")); break;
+                    case MEASURED_FAIL: c.setForeground(Themes.color("Arcwright.fail.foreground")); break;
+                    case OPEN: c.setForeground(Themes.color("Arcwright.help.foreground")); break;
+                    default: c.setForeground(t.getForeground());
+                }
+            } else if (!selected) {
+                c.setForeground(t.getForeground());
+            }
+            c.setFont(col == FeatureColumn.ID ? t.getFont().deriveFont(java.awt.Font.BOLD) : t.getFont());
+            if (c instanceof JLabel) {
+                ((JLabel) c).setToolTipText(col == FeatureColumn.ID ? f.designCase().feature() : null);
+            }
+            return c;
+        }
+    }
+}

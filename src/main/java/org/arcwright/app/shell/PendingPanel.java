@@ -1,0 +1,23 @@
+package org.arcwright.app.shell;
+
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import net.miginfocom.swing.MigLayout;
+
+/** Stands in for a panel whose core capability is not in this build yet, and says so plainly. */
+public final class PendingPanel extends JPanel {
+    private static final long serialVersionUID = 1L;
+
+    public PendingPanel(String name, String title, String whatItDoes, String icon) {
+        super(new MigLayout("insets 24, wrap 1, gap 8", "[grow,fill]", "push[][][]push"));
+        setName(name);
+        add(new JLabel(Icons.get(icon, 48)), "center");
+        JLabel t = new JLabel(title);
+        t.putClientProperty("FlatLaf.styleClass", "h2");
+        add(t, "center");
+        JLabel w = new JLabel("<html><div style='text-align:center'>" + whatItDoes
+                + "<br><br>Not available in this build yet: its calculation is still being added to Arcwright's core.</div></html>");
+        w.setForeground(Themes.color("Arcwright.help.foreground"));
+        add(w, "wmin 10, wmax 420lp");
+    }
+}

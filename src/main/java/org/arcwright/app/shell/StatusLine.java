@@ -1,0 +1,75 @@
+package org.arcwright.app.shell;
+
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JProgressBar;
+import javax.swing.JButton;
+import net.miginfocom.swing.MigLayout;
+
+/**
+ * The strip along the bottom of the window: the latest message, the progress of background work
+ * with its cancel button, the selected feature, and which practice packs are in force.
+ */
+public final class StatusLine extends JPanel {
+    private static final long serialVersionUID = 1L;
+    private final JLabel message = new JLabel(" ");
+    private final JLabel feature = new JLabel();
+    private final JLabel packs = new JLabel("Packs: loading…");
+    private final JProgressBar progress = new JProgressBar(0, 100);
+    private final JButton cancel = new JButton("Cancel");
+    private transient Runnable cancelAction;
+
+    public StatusLine() {
+        super(new MigLayout("insets 2 8 2 8, gap 12, hidemode 3", "[grow,fill][][][][]", "[]"));
+        setName("statusLine");
+        message.setName("statusMessage");
+        progress.setVisible(false);
+        cancel.setVisible(false);
+        cancel.putClientProperty("JButton.buttonType", "borderless");
+        cancel.addActionListener(e -> cancelPressed());
+        add(message);
+        add(progress, "w 120!");
+        add(cancel);
+        add(feature);
+        add(packs);
+        setBackground(Themes.color("Arcwright.statusLine.background"));
+    }
+
+    @Override
+    public void updateUI() {
+        super.updateUI();
+        setBackground(Themes.color("Arcwright.statusLine.background"));
+    }
+
+    public void show(String text) { message.setText(text == null || text.isEmpty() ? " " : text); }
+
+    public String message() { return message.getText(); }
+
+    public void feature(String text) { feature.setText(text); }
+
+    public void packs(String text, String tooltip) {
+        packs.setText(text);
+        packs.setToolTipText(tooltip);
+    }
+
+    /** Shows progress of background work; {@code onCancel} runs when the user presses Cancel. */
+    public void progress(String what, int percent, Runnable onCancel) {
+        show(what);
+        progress.setVisible(true);
+        progress.setIndeterminate(percent < 0);
+        if (percent >= 0) progress.setValue(percent);
+        cancelAction = onCancel;
+        cancel.setVisible(onCancel != null);
+    }
+
+    public void done(String text) {
+        progress.setVisible(false);
+        cancel.setVisible(false);
+        cancelAction = null;
+        show(text);
+    }
+
+    private void cancelPressed() {
+        if (cancelAction != null) cancelAction.run();
+    }
+}

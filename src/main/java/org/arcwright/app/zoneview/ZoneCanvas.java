@@ -1,0 +1,179 @@
+package org.arcwright.app.zoneview;
+
+import java.awt.BasicStroke;
+import java.awt.Graphics;
+import java.awt.Graphics2D;
+import java.awt.Point;
+import java.awt.RenderingHints;
+import java.awt.event.MouseAdapter;
+import java.awt.event.MouseEvent;
+import java.awt.event.MouseWheelEvent;
+import java.awt.geom.AffineTransform;
+import java.awt.geom.NoninvertibleTransformException;
+import java.awt.geom.Path2D;
+import java.awt.geom.Point2D;
+import java.util.List;
+import javax.swing.JComponent;
+import org.arcwright.app.model.Numbers;
+import org.arcwright.app.model.ZonePicture;
+import org.arcwright.app.shell.Themes;
+
+/**
+ * Draws a {@link ZonePicture}: the zone between its boundaries filled, the boundaries, the nominal
+ * contour on top. Wheel zooms about the cursor, drag pans, hovering shows the position and its
+ * distance from nominal.
+ */
+final class ZoneCanvas extends JComponent {
+    private static final long serialVersionUID = 1L;
+    private transient ZonePicture picture;
+    private double zoom = 1;
+    private double panX;
+    private double panY;
+    private Point dragFrom;
+    private String units = "mm";
+    private org.arcwright.rules.BlendKind kind = org.arcwright.rules.BlendKind.FILLET;
+    private double angle = 90;
+
+    ZoneCanvas() {
+        setName("zoneCanvas");
+        setToolTipText("");
+        MouseAdapter m = new MouseAdapter() {
+            @Override public void mousePressed(MouseEvent e) { dragStarted(e.getPoint()); }
+            @Override public void mouseDragged(MouseEvent e) { dragged(e.getPoint()); }
+            @Override public void mouseWheelMoved(MouseWheelEvent e) { wheeled(e); }
+        };
+        addMouseListener(m);
+        addMouseMotionListener(m);
+        addMouseWheelListener(m);
+    }
+
+    void show(ZonePicture p, String unitSymbol, org.arcwright.rules.BlendKind blendKind, double angleDeg) {
+        this.picture = p;
+        this.kind = blendKind;
+        this.angle = angleDeg;
+        this.units = unitSymbol;
+        repaint();
+    }
+
+    void fit() {
+        zoom = 1;
+        panX = 0;
+        panY = 0;
+        repaint();
+    }
+
+    void zoomBy(double factor) {
+        zoom = Math.max(0.2, Math.min(200, zoom * factor));
+        repaint();
+    }
+
+    private void dragStarted(Point p) { dragFrom = p; }
+
+    private void dragged(Point p) {
+        if (dragFrom == null) return;
+        panX += p.x - dragFrom.x;
+        panY += p.y - dragFrom.y;
+        dragFrom = p;
+        repaint();
+    }
+
+    private void wheeled(MouseWheelEvent e) {
+        double f = Math.pow(1.15, -e.getPreciseWheelRotation());
+        double before = zoom;
+        zoom = Math.max(0.2, Math.min(200, zoom * f));
+        double k = zoom / before;
+        // keep the point under the cursor still
+        double cx = getWidth() / 2.0 + panX;
+        double cy = getHeight() / 2.0 + panY;
+        panX += (e.getX() - cx) * (1 - k);
+        panY += (e.getY() - cy) * (1 - k);
+        repaint();
+    }
+
+    /** Part coordinates to screen: fit the drawing, then zoom and pan; y up. */
+    private AffineTransform transform() {
+        List<ZonePicture.Pt> pts = new java.util.ArrayList<>(picture.allPoints());
+        pts.addAll(picture.material(kind, angle));
+        double minX = 0, minY = 0, maxX = 0, maxY = 0;
+        for (ZonePicture.Pt p : pts) {
+            minX = Math.min(minX, p.x());
+            minY = Math.min(minY, p.y());
+            maxX = Math.max(maxX, p.x());
+            maxY = Math.max(maxY, p.y());
+        }
+        double w = Math.max(1e-9, maxX - minX);
+        double h = Math.max(1e-9, maxY - minY);
+        double margin = 40;
+        double s = Math.min((getWidth() - 2 * margin) / w, (getHeight() - 2 * margin) / h) * zoom;
+        AffineTransform t = new AffineTransform();
+        t.translate(getWidth() / 2.0 + panX, getHeight() / 2.0 + panY);
+        t.scale(s, -s);
+        t.translate(-(minX + maxX) / 2, -(minY + maxY) / 2);
+        return t;
+    }
+
+    @Override
+    public String getToolTipText(MouseEvent e) {
+        if (picture == null) return null;
+        try {
+            Point2D p = transform().inverseTransform(e.getPoint(), null);
+            double d = picture.distanceToNominal(new ZonePicture.Pt(p.getX(), p.getY()));
+            double m = picture.magnification();
+            return "x " + Numbers.fixed(p.getX(), 3) + ", y " + Numbers.fixed(p.getY(), 3) + " " + units
+                    + (m > 1 ? " · " + Numbers.fixed(d / m, 4) + " " + units + " from nominal (shown ×" + Numbers.trim(m) + ")"
+                    : " · " + Numbers.fixed(d, 4) + " " + units + " from nominal");
+        } catch (NoninvertibleTransformException ex) {
+            return null;
+        }
+    }
+
+    @Override
+    protected void paintComponent(Graphics g) {
+        Graphics2D g2 = (Graphics2D) g.create();
+        try {
+            g2.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+            g2.setColor(Themes.color("Arcwright.zone.background"));
+            g2.fillRect(0, 0, getWidth(), getHeight());
+            if (picture == null || getWidth() < 10 || getHeight() < 10) return;
+            AffineTransform t = transform();
+            g2.setColor(Themes.color("Arcwright.zone.material"));
+            Path2D material = path(picture.material(kind, angle), true);
+            g2.fill(t.createTransformedShape(material));
+            if (!picture.lower().isEmpty()) {
+                Path2D band = path(picture.lower(), false);
+                List<ZonePicture.Pt> up = picture.upper();
+                for (int i = up.size() - 1; i >= 0; i--) band.lineTo(up.get(i).x(), up.get(i).y());
+                band.closePath();
+                g2.setColor(Themes.color("Arcwright.zone.band"));
+                g2.fill(t.createTransformedShape(band));
+                g2.setColor(Themes.color("Arcwright.zone.limit"));
+                g2.setStroke(new BasicStroke(1.2f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND, 1, new float[] {6, 4}, 0));
+                g2.draw(t.createTransformedShape(path(picture.lower(), false)));
+                g2.draw(t.createTransformedShape(path(picture.upper(), false)));
+            }
+            g2.setColor(Themes.color("Arcwright.zone.nominal"));
+            g2.setStroke(new BasicStroke(1.8f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
+            g2.draw(t.createTransformedShape(path(picture.nominal(), false)));
+            g2.setFont(Themes.font("Arcwright.figure.font"));
+            g2.setColor(Themes.color("Label.foreground"));
+            int y = g2.getFontMetrics().getAscent() + 8;
+            g2.drawString(picture.caption() + " · material shaded", 10, y);
+            if (!Double.isNaN(picture.crescentWidth())) {
+                g2.drawString("zone width on the bisector: " + Numbers.fixed(picture.crescentWidth(), 4) + " " + units
+                        + (picture.magnification() > 1 ? "  (deviations shown ×" + Numbers.trim(picture.magnification()) + ")" : ""),
+                        10, y + g2.getFontMetrics().getHeight());
+            }
+        } finally {
+            g2.dispose();
+        }
+    }
+
+    private static Path2D path(List<ZonePicture.Pt> pts, boolean close) {
+        Path2D p = new Path2D.Double();
+        for (int i = 0; i < pts.size(); i++) {
+            if (i == 0) p.moveTo(pts.get(i).x(), pts.get(i).y()); else p.lineTo(pts.get(i).x(), pts.get(i).y());
+        }
+        if (close) p.closePath();
+        return p;
+    }
+}

@@ -1,0 +1,88 @@
+package org.arcwright.app.zoneview;
+
+import java.util.Hashtable;
+import java.util.Optional;
+import javax.swing.JButton;
+import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.JSlider;
+import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.model.WorksheetSession;
+import org.arcwright.app.model.ZonePicture;
+import org.arcwright.app.model.ZoneSpec;
+import org.arcwright.worksheet.RadiusFeature;
+
+/**
+ * The Zone view of the selected feature: its chosen control's zone (or, before a choice, the zone of
+ * the tolerance intent) about the nominal blend, with a magnification for deviations.
+ */
+public final class ZoneViewPanel extends JPanel {
+    private static final long serialVersionUID = 1L;
+    private static final double ANGLE = 90;
+    private final transient WorksheetSession session;
+    private final ZoneCanvas canvas = new ZoneCanvas();
+    private final JSlider magnification = new JSlider(0, 100, 50);
+    private final JLabel magnificationText = new JLabel();
+    private final JLabel what = new JLabel();
+
+    public ZoneViewPanel(WorksheetSession session) {
+        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[][][grow,fill]"));
+        this.session = session;
+        setName("zoneView");
+        magnification.setName("magnification");
+        magnification.setToolTipText("Multiplies deviations from nominal so a narrow zone can be seen; the figures stay true");
+        magnification.addChangeListener(e -> redraw());
+        Hashtable<Integer, JLabel> labels = new Hashtable<>();
+        labels.put(0, new JLabel("×1"));
+        labels.put(50, new JLabel("×10"));
+        labels.put(100, new JLabel("×100"));
+        magnification.setLabelTable(labels);
+        magnification.setPaintLabels(true);
+        JButton fit = new JButton("Fit");
+        fit.setToolTipText("Undo zoom and pan (wheel zooms, drag pans)");
+        fit.addActionListener(e -> canvas.fit());
+        JButton in = new JButton("+");
+        in.setToolTipText("Zoom in");
+        in.addActionListener(e -> canvas.zoomBy(1.5));
+        JButton out = new JButton("−");
+        out.setToolTipText("Zoom out");
+        out.addActionListener(e -> canvas.zoomBy(1 / 1.5));
+        JPanel bar = new JPanel(new MigLayout("insets 0, gap 8", "[grow,fill][][][][]", "[]"));
+        what.setName("zoneWhat");
+        what.putClientProperty("FlatLaf.styleClass", "h4");
+        add(what, "wmin 10");
+        bar.add(new JLabel(), "");
+        bar.add(new JLabel("Deviation magnification"));
+        bar.add(magnification, "w 14sp!");
+        bar.add(magnificationText, "w 3sp!");
+        bar.add(in, "split 3");
+        bar.add(out);
+        bar.add(fit);
+        add(bar);
+        add(canvas);
+        session.listeners().add(this::redraw);
+        redraw();
+    }
+
+    /** The magnification the slider stands at: 1 to 100 on a logarithmic scale. */
+    public double magnification() {
+        return Math.round(Math.pow(10, magnification.getValue() / 50.0));
+    }
+
+    private void redraw() {
+        magnificationText.setText("×" + (long) magnification());
+        Optional<RadiusFeature> f = session.selected();
+        if (f.isEmpty()) {
+            what.setText("No feature selected");
+            canvas.show(null, "mm", null, ANGLE);
+            return;
+        }
+        RadiusFeature feature = f.get();
+        ZoneSpec spec = feature.chosen() != null ? ZoneSpec.of(feature.designCase(), feature.chosen().callout(), ANGLE)
+                : ZoneSpec.ofIntent(feature.designCase(), ANGLE);
+        what.setText(feature.id() + " · " + (feature.chosen() != null ? "chosen: " + feature.chosen().text()
+                : "not decided: showing the tolerance intent") + " · 90° corner");
+        canvas.show(ZonePicture.of(spec, magnification()), feature.designCase().units().symbol(), feature.designCase().kind(),
+                ANGLE);
+    }
+}

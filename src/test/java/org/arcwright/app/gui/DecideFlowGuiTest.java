@@ -1,0 +1,85 @@
+package org.arcwright.app.gui;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Path;
+import javax.swing.JFrame;
+import javax.swing.JTable;
+import org.arcwright.app.AppServices;
+import org.arcwright.app.DesktopApp;
+import org.arcwright.app.model.Settings;
+import org.arcwright.app.model.ThemeChoice;
+import org.arcwright.app.shell.MainWindow;
+import org.arcwright.worksheet.RadiusFeature;
+import org.assertj.swing.core.BasicRobot;
+import org.assertj.swing.core.Robot;
+import org.assertj.swing.fixture.FrameFixture;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Walks the main decision flow through the real window: a fatigue-loaded shoulder fillet from the
+ * form to a callout on the worksheet, in the light look and again in the dark one.
+ */
+class DecideFlowGuiTest {
+    @TempDir
+    static Path config;
+
+    private static MainWindow window;
+    private static FrameFixture fixture;
+    private static Robot robot;
+
+    @BeforeAll
+    static void openWindow() {
+        GuiSupport.requireDisplay();
+        AppServices services = AppServices.over(config);
+        window = GuiSupport.onEdt(() -> DesktopApp.start(services, Settings.DEFAULTS.withTheme(ThemeChoice.LIGHT)));
+        robot = BasicRobot.robotWithCurrentAwtHierarchy();
+        fixture = new FrameFixture(robot, window.frame());
+        GuiSupport.settle(300);
+    }
+
+    @AfterAll
+    static void closeWindow() {
+        if (fixture != null) fixture.cleanUp();
+        if (window != null) GuiSupport.onEdt(() -> window.frame().dispose());
+    }
+
+    @Test
+    void aFatigueLoadedShoulderFilletIsDecidedOntoTheWorksheet() {
+        GuiSupport.screenshot(window.frame(), "main-light");
+        assertThat(window.notice().message()).contains("demo worksheet");
+        fixture.table("featureTable").selectRows(0);
+        assertThat(window.session().selected().map(RadiusFeature::id)).contains("F1");
+        GuiSupport.onEdt(() -> window.showTab(0));
+        fixture.textBox("q.TOLERANCE").deleteText().enterText("R2 +0.3/-0.1");
+        GuiSupport.settle(500);
+        assertThat(fixture.label("limitsFigures").text()).contains("1.9000").contains("2.3000");
+        GuiSupport.screenshot(window.frame(), "decide-light");
+        fixture.button("choose1").click();
+        GuiSupport.settle(200);
+        RadiusFeature f1 = window.session().worksheet().feature("F1").orElseThrow();
+        assertThat(f1.chosen()).isNotNull();
+        assertThat(f1.chosen().text()).isEqualTo("R2 +0.3/-0.1");
+        assertThat(f1.status()).isEqualTo(RadiusFeature.Status.DECIDED);
+        JTable table = (JTable) fixture.table("featureTable").target();
+        assertThat(GuiSupport.onEdt(() -> table.getValueAt(0, 4))).isEqualTo("R2 +0.3/-0.1");
+        GuiSupport.chord(robot, java.awt.event.KeyEvent.VK_Z);
+        GuiSupport.settle(100);
+        assertThat(window.session().worksheet().feature("F1").orElseThrow().chosen()).isNull();
+        GuiSupport.onEdt(() -> window.session().redo());
+        GuiSupport.onEdt(() -> window.showTab(1));
+        GuiSupport.settle(200);
+        GuiSupport.screenshot(window.frame(), "zone-light");
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.DARK));
+        GuiSupport.onEdt(() -> window.showTab(0));
+        GuiSupport.settle(300);
+        GuiSupport.screenshot(window.frame(), "decide-dark");
+        GuiSupport.onEdt(() -> window.showTab(1));
+        GuiSupport.settle(200);
+        GuiSupport.screenshot(window.frame(), "zone-dark");
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
+    }
+}

@@ -1,0 +1,96 @@
+package org.arcwright.app.gui;
+
+import static org.junit.jupiter.api.Assertions.fail;
+
+import java.awt.Component;
+import java.awt.GraphicsEnvironment;
+import java.awt.image.BufferedImage;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.concurrent.Callable;
+import java.util.concurrent.atomic.AtomicReference;
+import javax.imageio.ImageIO;
+import javax.swing.SwingUtilities;
+import org.junit.jupiter.api.Assumptions;
+
+/**
+ * What every GUI test needs: a display (failing, not skipping, when CI expects one), work on the
+ * event thread, and screenshots under {@code target/screenshots}.
+ */
+final class GuiSupport {
+    private GuiSupport() {}
+
+    /** Fails under CI without a display; skips on a developer machine without one. */
+    static void requireDisplay() {
+        if (!GraphicsEnvironment.isHeadless()) return;
+        if (System.getenv("CI") != null) {
+            fail("No display, but CI is set: GUI tests must run under a display. Use xvfb-run -a mvn -B verify.");
+        }
+        Assumptions.abort("no display on this machine; run under xvfb-run to include the GUI tests");
+    }
+
+    static <T> T onEdt(Callable<T> c) {
+        AtomicReference<T> result = new AtomicReference<>();
+        AtomicReference<Exception> error = new AtomicReference<>();
+        try {
+            SwingUtilities.invokeAndWait(() -> {
+                try {
+                    result.set(c.call());
+                } catch (Exception e) {
+                    error.set(e);
+                }
+            });
+        } catch (Exception e) {
+            throw new IllegalStateException(e);
+        }
+        if (error.get() != null) throw new IllegalStateException(error.get());
+        return result.get();
+    }
+
+    static void onEdt(Runnable r) {
+        onEdt(() -> {
+            r.run();
+            return null;
+        });
+    }
+
+    /** Lets queued events, timers and background results settle. */
+    static void settle(long millis) {
+        try {
+            Thread.sleep(millis);
+            SwingUtilities.invokeAndWait(() -> { });
+        } catch (Exception e) {
+            throw new IllegalStateException(e);
+        }
+    }
+
+    /** Presses Ctrl with {@code key}, as a user would. */
+    static void chord(org.assertj.swing.core.Robot robot, int key) {
+        robot.pressKey(java.awt.event.KeyEvent.VK_CONTROL);
+        robot.pressAndReleaseKey(key);
+        robot.releaseKey(java.awt.event.KeyEvent.VK_CONTROL);
+        robot.waitForIdle();
+    }
+
+    /** Paints {@code c} into {@code target/screenshots/name.png}. */
+    static Path screenshot(Component c, String name) {
+        Path dir = Path.of(System.getProperty("arcwright.screenshots", "target/screenshots"));
+        Path file = dir.resolve(name + ".png");
+        BufferedImage img = onEdt(() -> {
+            BufferedImage i = new BufferedImage(c.getWidth(), c.getHeight(), BufferedImage.TYPE_INT_RGB);
+            java.awt.Graphics2D g = i.createGraphics();
+            c.paint(g);
+            g.dispose();
+            return i;
+        });
+        try {
+            Files.createDirectories(dir);
+            ImageIO.write(img, "png", file.toFile());
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        return file;
+    }
+}

@@ -1,0 +1,30 @@
+package org.arcwright.app.model;
+
+import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
+
+import com.tngtech.archunit.core.domain.JavaClasses;
+import com.tngtech.archunit.core.importer.ClassFileImporter;
+import com.tngtech.archunit.core.importer.ImportOption;
+import org.junit.jupiter.api.Test;
+
+/** Keeps the window's view models free of Swing, so they are tested without a screen. */
+class AppArchitectureTest {
+    private final JavaClasses classes = new ClassFileImporter()
+            .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS).importPackages("org.arcwright.app");
+
+    @Test
+    void viewModelsDoNotUseSwingOrAwt() {
+        noClasses().that().resideInAPackage("org.arcwright.app.model..")
+                .should().dependOnClassesThat().resideInAnyPackage("javax.swing..", "java.awt..", "com.formdev..",
+                        "net.miginfocom..")
+                .check(classes);
+    }
+
+    @Test
+    void viewModelsDoNotDependOnViews() {
+        noClasses().that().resideInAPackage("org.arcwright.app.model..")
+                .should().dependOnClassesThat().resideInAnyPackage("org.arcwright.app.shell..", "org.arcwright.app.part..",
+                        "org.arcwright.app.decide..", "org.arcwright.app.zoneview..")
+                .check(classes);
+    }
+}

@@ -1,0 +1,50 @@
+package org.arcwright.app.model;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import org.arcwright.callout.Callout;
+import org.arcwright.rules.BlendKind;
+import org.junit.jupiter.api.Test;
+
+class ZonePictureTest {
+    @Test
+    void theNominalBlendIsTangentToBothSurfacesOfARightAngle() {
+        ZonePicture p = ZonePicture.of(new ZoneSpec.NominalOnly(2, 90, BlendKind.FILLET), 1);
+        // centre at (r, r); every arc point lies r from it (tangent-arc geometry, common practice)
+        for (ZonePicture.Pt pt : p.nominal().subList(1, p.nominal().size() - 1)) {
+            assertThat(Math.hypot(pt.x() - 2, pt.y() - 2)).isEqualTo(2, within(1e-9));
+        }
+        assertThat(p.distanceToNominal(new ZonePicture.Pt(2, 2))).isEqualTo(2, within(1e-3));
+    }
+
+    @Test
+    void limitArcsAreMagnifiedButTheStatedWidthStaysTrue() {
+        ZoneSpec spec = ZoneSpec.of(Fixtures.fillet(0.55, null), new Callout.Radius(0.5, 0.6, 0.55), 90);
+        ZonePicture p = ZonePicture.of(spec, 10);
+        // crescent 0.1 × (√2 − 1) on the bisector of a 90° corner (see CrescentZone)
+        assertThat(p.crescentWidth()).isEqualTo(0.1 * (Math.sqrt(2) - 1), within(1e-12));
+        ZonePicture.Pt mid = p.upper().get(p.upper().size() / 2);
+        double upperRadiusDrawn = 0.55 + 10 * 0.05;
+        assertThat(Math.hypot(mid.x() - upperRadiusDrawn, mid.y() - upperRadiusDrawn)).isEqualTo(upperRadiusDrawn, within(1e-9));
+    }
+
+    @Test
+    void aProfileBandOfAFilletPutsItsOutwardPartAwayFromTheVertex() {
+        ZoneSpec spec = ZoneSpec.of(Fixtures.fillet(2, null), new Callout.Profile(0.2, 0.15, java.util.List.of(), false, null), 90);
+        ZonePicture p = ZonePicture.of(spec, 1);
+        ZonePicture.Pt nomMid = p.nominal().get(p.nominal().size() / 2);
+        ZonePicture.Pt lowMid = p.lower().get(p.lower().size() / 2);
+        ZonePicture.Pt upMid = p.upper().get(p.upper().size() / 2);
+        double toVertexNom = Math.hypot(nomMid.x(), nomMid.y());
+        assertThat(toVertexNom - Math.hypot(lowMid.x(), lowMid.y())).isEqualTo(0.05, within(1e-9));
+        assertThat(Math.hypot(upMid.x(), upMid.y()) - toVertexNom).isEqualTo(0.15, within(1e-9));
+    }
+
+    @Test
+    void withoutAToleranceOnlyTheNominalIsDrawn() {
+        ZonePicture p = ZonePicture.of(ZoneSpec.ofIntent(Fixtures.fillet(1, null), 90), 5);
+        assertThat(p.lower()).isEmpty();
+        assertThat(p.crescentWidth()).isNaN();
+    }
+}
