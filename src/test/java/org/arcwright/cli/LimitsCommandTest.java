@@ -39,6 +39,20 @@ class LimitsCommandTest {
     }
 
     @Test
+    void blendKindGivesTheUnequallyDisposedZone() throws Exception {
+        // A fillet R3 +0.2/-0.1 at 90°: larger arcs add material, so 0.2 × (√2 - 1) lies outward of nominal.
+        JsonNode n = json.readTree(CliRun.of("limits", "R3 +0.2/-0.1", "--blend", "fillet", "--format", "json").out());
+        double k = Math.sqrt(2) - 1;
+        assertThat(n.at("/unequalProfile/zone").asDouble()).isCloseTo(0.3 * k, within(1e-12));
+        assertThat(n.at("/unequalProfile/outward").asDouble()).isCloseTo(0.2 * k, within(1e-12));
+        assertThat(n.at("/unequalProfile/isoOffset").asDouble()).isCloseTo(0.05 * k, within(1e-12));
+        // A round: smaller arcs add material.
+        JsonNode r = json.readTree(CliRun.of("limits", "R3 +0.2/-0.1", "--blend", "round", "--format", "json").out());
+        assertThat(r.at("/unequalProfile/outward").asDouble()).isCloseTo(0.1 * k, within(1e-12));
+        assertThat(CliRun.of("limits", "R3 +0.2/-0.1", "--blend", "chamfer").exitCode()).isEqualTo(2);
+    }
+
+    @Test
     void textOutputNamesBothProfileValuesAndWhichIsWhich() {
         CliRun run = CliRun.of("limits", "R0.55 +/-0.05");
         assertThat(run.exitCode()).isZero();
