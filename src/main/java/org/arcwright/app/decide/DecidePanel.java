@@ -31,6 +31,7 @@ import org.arcwright.app.model.Question;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.shell.Cautions;
 import org.arcwright.app.shell.ScrollablePanel;
+import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.app.shell.Themes;
 import org.arcwright.rules.BlendFunction;
 import org.arcwright.rules.BlendKind;
@@ -56,8 +57,8 @@ public final class DecidePanel extends JPanel {
     private final transient Consumer<String> status;
     private transient AdviceSource advice;
     private final Map<Question, JComponent> fields = new EnumMap<>(Question.class);
-    private final Map<Question, JLabel> notes = new EnumMap<>(Question.class);
-    private final JLabel figures = new JLabel();
+    private final Map<Question, WrapLabel> notes = new EnumMap<>(Question.class);
+    private final JPanel figures = new JPanel(new MigLayout("insets 0, wrap 2, gap 12 2", "[][grow,fill]", ""));
     private final JLabel featureTitle = new JLabel();
     private final JPanel cards = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 10", "[grow,fill]", ""));
     private final Timer adviseLater = new Timer(250, e -> adviseNow());
@@ -79,12 +80,23 @@ public final class DecidePanel extends JPanel {
         adviseLater.setRepeats(false);
         add(Cautions.box(Cautions.ADVICE));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, scroll(buildForm()), scroll(buildResults()));
-        split.setResizeWeight(0.5);
+        split.setResizeWeight(0.45);
+        split.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) { splitFirstSized(split, this); }
+        });
         split.setBorder(null);
         add(split);
         form.listeners().add(this::formChanged);
         session.listeners().add(this::sessionChanged);
         sessionChanged();
+    }
+
+    /** Puts the divider at 45% the first time the split has a size; the user moves it after that. */
+    private static void splitFirstSized(JSplitPane split, java.awt.event.ComponentListener self) {
+        if (split.getWidth() <= 0) return;
+        split.setDividerLocation(0.45);
+        split.removeComponentListener(self);
     }
 
     /** Replaces where recommendations come from (when the practice packs have loaded). */
@@ -148,7 +160,7 @@ public final class DecidePanel extends JPanel {
         h1.putClientProperty("FlatLaf.styleClass", "h4");
         p.add(h1);
         figures.setName("limitsFigures");
-        figures.setFont(Themes.font("Arcwright.figure.font"));
+        figures.setOpaque(false);
         p.add(figures, "wmin 10");
         JLabel h2 = new JLabel("Recommendations, best first");
         h2.putClientProperty("FlatLaf.styleClass", "h4");
@@ -210,9 +222,8 @@ public final class DecidePanel extends JPanel {
     }
 
     private void note(JPanel p, Question q) {
-        JLabel n = new JLabel();
+        WrapLabel n = new WrapLabel(q.help(), "Arcwright.help.font", "Arcwright.help.foreground");
         n.setName("note." + q.name());
-        n.putClientProperty("FlatLaf.styleClass", "small");
         notes.put(q, n);
         p.add(n, "wmin 10, gapleft 2");
     }
@@ -257,11 +268,10 @@ public final class DecidePanel extends JPanel {
         } finally {
             binding = false;
         }
-        for (Map.Entry<Question, JLabel> e : notes.entrySet()) {
+        for (Map.Entry<Question, WrapLabel> e : notes.entrySet()) {
             Optional<String> problem = form.problem(e.getKey());
-            JLabel n = e.getValue();
-            n.setText("<html>" + problem.orElse(e.getKey().help()) + "</html>");
-            n.setForeground(Themes.color(problem.isPresent() ? "Arcwright.error.foreground" : "Arcwright.help.foreground"));
+            e.getValue().show(problem.orElse(e.getKey().help()),
+                    problem.isPresent() ? "Arcwright.error.foreground" : "Arcwright.help.foreground");
         }
         boolean s = form.stressEnabled();
         for (Question q : List.of(Question.SHAPE, Question.LOAD, Question.BIG_D, Question.SMALL_D, Question.STRENGTH,
@@ -321,32 +331,47 @@ public final class DecidePanel extends JPanel {
     }
 
     private void showFigures() {
+        figures.removeAll();
         Optional<LimitsReport> r = form.limits();
         if (r.isEmpty()) {
-            figures.setText("<html>" + (form.text(Question.TOLERANCE).isBlank()
+            figures.add(new WrapLabel(form.text(Question.TOLERANCE).isBlank()
                     ? "No tolerance intent given: the title block's general tolerance applies."
-                    : "Fix the tolerance intent to see its limits.") + "</html>");
-            return;
+                    : "Fix the tolerance intent to see its limits.", "Label.font", "Arcwright.help.foreground"), "span 2, growx, wmin 10");
+        } else {
+            LimitsReport l = r.get();
+            figure("As drawn (ASME)", l.asme());
+            figure("As drawn (ISO)", l.iso());
+            figure("Smallest radius", l.min() == null ? "open (MAX only)" : Numbers.fixed(l.min(), 4));
+            figure("Largest radius", l.max() == null ? "open (MIN only)" : Numbers.fixed(l.max(), 4));
+            if (l.crescent() != null) {
+                figure("Crescent width (bisector)", Numbers.fixed(l.crescent().width(), 4));
+                figure("Equal-bilateral profile", Numbers.fixed(l.crescent().equalBilateralProfile(), 4));
+                figure("Shortcut profile (2 × dev.)", Numbers.fixed(l.crescent().shortcutProfile(), 4));
+            }
+            for (String remark : l.remarks()) figures.add(new WrapLabel(remark, "Label.font", null), "span 2, growx, wmin 10, gaptop 4");
         }
-        LimitsReport l = r.get();
-        StringBuilder sb = new StringBuilder("<html><table cellpadding=1>");
-        rowHtml(sb, "As drawn (ASME)", l.asme());
-        rowHtml(sb, "As drawn (ISO)", l.iso());
-        rowHtml(sb, "Smallest radius", l.min() == null ? "open (MAX only)" : Numbers.fixed(l.min(), 4));
-        rowHtml(sb, "Largest radius", l.max() == null ? "open (MIN only)" : Numbers.fixed(l.max(), 4));
-        if (l.crescent() != null) {
-            rowHtml(sb, "Crescent width on the bisector", Numbers.fixed(l.crescent().width(), 4));
-            rowHtml(sb, "Equal-bilateral profile holding it", Numbers.fixed(l.crescent().equalBilateralProfile(), 4));
-            rowHtml(sb, "Shortcut profile (2 × larger deviation)", Numbers.fixed(l.crescent().shortcutProfile(), 4));
-        }
-        sb.append("</table>");
-        for (String remark : l.remarks()) sb.append("<p style='margin-top:4px'>").append(remark).append("</p>");
-        figures.setText(sb.append("</html>").toString());
+        figures.revalidate();
+        figures.repaint();
     }
 
-    private static void rowHtml(StringBuilder sb, String label, String value) {
-        sb.append("<tr><td>").append(label).append("</td><td nowrap><b>").append(value.replace(" ", "&nbsp;"))
-                .append("</b></td></tr>");
+    private void figure(String label, String value) {
+        JLabel l = new JLabel(label);
+        l.setToolTipText(label);
+        figures.add(l, "wmin 10");
+        JLabel v = new JLabel(value);
+        v.setName("figure." + label);
+        v.setFont(Themes.font("Arcwright.figure.font").deriveFont(java.awt.Font.BOLD));
+        figures.add(v);
+    }
+
+    /** The figures shown for the tolerance intent, as label and value pairs, for tests. */
+    public String figuresText() {
+        StringBuilder sb = new StringBuilder();
+        for (java.awt.Component c : figures.getComponents()) {
+            if (c instanceof JLabel) sb.append(((JLabel) c).getText()).append('\n');
+            if (c instanceof WrapLabel) sb.append(((WrapLabel) c).getText()).append('\n');
+        }
+        return sb.toString();
     }
 
     private void adviseNow() {
@@ -382,11 +407,10 @@ public final class DecidePanel extends JPanel {
         cards.removeAll();
         Recommendation chosen = session.selected().map(RadiusFeature::chosen).orElse(null);
         if (shown.isEmpty()) {
-            JLabel none = new JLabel("<html>" + (form.isValid()
+            cards.add(new WrapLabel(form.isValid()
                     ? "No recommendation yet. Give a tolerance intent to take it as written, or wait for the practice packs."
-                    : "Answer the questions marked in red to see recommendations.") + "</html>");
-            none.setForeground(Themes.color("Arcwright.help.foreground"));
-            cards.add(none, "wmin 10");
+                    : "Answer the questions marked in red to see recommendations.", "Label.font", "Arcwright.help.foreground"),
+                    "wmin 10");
         }
         int rank = 1;
         for (Recommendation r : shown) {

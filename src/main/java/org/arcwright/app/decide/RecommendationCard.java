@@ -9,6 +9,7 @@ import org.arcwright.app.model.Numbers;
 import org.arcwright.app.shell.Card;
 import org.arcwright.app.shell.Icons;
 import org.arcwright.app.shell.Themes;
+import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.Recommendation;
 
@@ -30,20 +31,23 @@ final class RecommendationCard extends Card {
         tag.setForeground(Themes.color(r.demoted() ? "Arcwright.error.foreground" : "Arcwright.help.foreground"));
         add(tag, "gapleft push");
         if (!r.numbers().isEmpty()) {
-            StringBuilder sb = new StringBuilder("<html>");
+            StringBuilder sb = new StringBuilder();
             for (Map.Entry<String, Object> e : r.numbers().entrySet()) {
-                sb.append(label(e.getKey())).append(": <b>").append(value(e.getValue())).append("</b> &nbsp; ");
+                if (sb.length() > 0) sb.append("  ·  ");
+                sb.append(label(e.getKey())).append(" ").append(value(e.getValue()));
             }
-            add(new JLabel(sb.append("</html>").toString()), "span 2, wmin 10");
+            WrapLabel numbers = new WrapLabel(sb.toString(), "Arcwright.figure.font", null);
+            numbers.setName("cardNumbers");
+            add(numbers, "span 2, growx, wmin 10");
         }
-        for (String b : r.because()) add(wrap("• " + b, null), "span 2, wmin 10");
+        for (String b : r.because()) add(wrap("• " + b, null), "span 2, growx, wmin 10");
         for (String c : r.cautions()) {
             add(new JLabel(Icons.get("caution")), "top");
-            add(wrap(c, null), "wmin 10");
+            add(wrap(c, null), "growx, wmin 10");
         }
-        for (NoteLink n : r.notes()) add(wrap("Note: " + n.title() + " (" + n.pack() + ")", "Arcwright.help.foreground"), "span 2, wmin 10");
+        for (NoteLink n : r.notes()) add(wrap("Note: " + n.title() + " (" + n.pack() + ")", "Arcwright.help.foreground"), "span 2, growx, wmin 10");
         if (!r.references().isEmpty()) {
-            add(wrap("References: " + String.join("; ", r.references()), "Arcwright.help.foreground"), "span 2, wmin 10");
+            add(wrap("References: " + String.join("; ", r.references()), "Arcwright.help.foreground"), "span 2, growx, wmin 10");
         }
         JButton choose = new JButton(chosen ? "Chosen" : "Put on worksheet");
         choose.setName("choose" + rank);
@@ -68,10 +72,8 @@ final class RecommendationCard extends Card {
         }
     }
 
-    private static JLabel wrap(String text, String colourKey) {
-        JLabel l = new JLabel("<html>" + text.replace("&", "&amp;").replace("<", "&lt;") + "</html>");
-        if (colourKey != null) l.setForeground(Themes.color(colourKey));
-        return l;
+    private static WrapLabel wrap(String text, String colourKey) {
+        return new WrapLabel(text, "Label.font", colourKey);
     }
 
     private static String label(String key) {

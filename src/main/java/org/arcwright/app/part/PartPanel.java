@@ -29,11 +29,12 @@ public final class PartPanel extends JPanel {
     private final JTable table;
     private final JLabel partNumber = new JLabel();
     private final JLabel partName = new JLabel();
+    private final JLabel material = new JLabel();
     private boolean syncing;
 
     /** @param rowActions add, duplicate and delete, shown above the table */
     public PartPanel(WorksheetSession session, List<Action> rowActions) {
-        super(new MigLayout("insets 8, wrap 1, gap 4", "[grow,fill]", "[][][][grow,fill]"));
+        super(new MigLayout("insets 8, wrap 1, gap 4", "[grow,fill]", "[][][][][grow,fill]"));
         this.session = session;
         this.model = new FeatureTableModel(session);
         this.table = new JTable(model);
@@ -46,7 +47,7 @@ public final class PartPanel extends JPanel {
         table.getSelectionModel().addListSelectionListener(e -> rowSelected(e.getValueIsAdjusting()));
         partNumber.setName("partNumber");
         partNumber.putClientProperty("FlatLaf.styleClass", "h3");
-        partName.putClientProperty("FlatLaf.styleClass", "small");
+        material.putClientProperty("FlatLaf.styleClass", "small");
         JToolBar bar = new JToolBar();
         bar.setFloatable(false);
         for (Action a : rowActions) {
@@ -58,6 +59,7 @@ public final class PartPanel extends JPanel {
         }
         add(partNumber);
         add(partName);
+        add(material);
         add(bar);
         add(new JScrollPane(table));
         session.listeners().add(this::sessionChanged);
@@ -79,8 +81,8 @@ public final class PartPanel extends JPanel {
         try {
             PartWorksheet ws = session.worksheet();
             partNumber.setText(ws.part().number() + (ws.part().revision() == null ? "" : "  rev " + ws.part().revision()));
-            partName.setText("<html>" + escape(ws.part().name() == null ? "" : ws.part().name())
-                    + (ws.part().material() == null ? "" : "<br>" + escape(ws.part().material())) + "</html>");
+            partName.setText(ws.part().name() == null ? " " : ws.part().name());
+            material.setText(ws.part().material() == null ? " " : ws.part().material());
             model.fireTableDataChanged();
             session.selected().ifPresent(this::selectRow);
         } finally {
@@ -100,10 +102,6 @@ public final class PartPanel extends JPanel {
         if (syncing || adjusting) return;
         int row = table.getSelectedRow();
         if (row >= 0 && row < model.getRowCount()) session.select(model.rows().get(row).id());
-    }
-
-    private static String escape(String s) {
-        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
     }
 
     /** Colours the status column by outcome; the id column in bold. */

@@ -83,11 +83,19 @@ public final class MainWindow {
     private JComponent notesPanel;
     private PackStack packs;
 
-    public MainWindow(AppServices services, Themes themes, Settings settings) {
+    /**
+     * The worksheet the window opens with, read before the window is built (off the event thread).
+     *
+     * @param worksheet what to show
+     * @param file where it was read from, or null for the demo
+     */
+    public record Opening(PartWorksheet worksheet, Path file) {}
+
+    public MainWindow(AppServices services, Themes themes, Settings settings, Opening opening) {
         this.services = services;
         this.themes = themes;
         this.settings = settings;
-        this.session = new WorksheetSession(services.files(), initialWorksheet(), null);
+        this.session = new WorksheetSession(services.files(), opening.worksheet(), opening.file());
         this.autosaver = new Autosaver(services.recovery(), services.io(), services.clock());
         registerCommands();
         this.actions = new CommandActions(catalog, icons());
@@ -109,6 +117,8 @@ public final class MainWindow {
     public NoticeStrip notice() { return notice; }
 
     public JTabbedPane workArea() { return work; }
+
+    public DecidePanel decidePanel() { return decidePanel; }
 
     /** Shows the window, then restores the last work and loads packs in the background. */
     public void show() {
@@ -161,9 +171,11 @@ public final class MainWindow {
         content.add(main, BorderLayout.CENTER);
         content.add(status, BorderLayout.SOUTH);
         frame.setContentPane(content);
-        frame.setSize(1400, 860);
-        main.setDividerLocation(500);
-        right.setDividerLocation(1400 - 500 - 250);
+        java.awt.Rectangle screen = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment().getMaximumWindowBounds();
+        int w = Math.min(1480, screen.width);
+        frame.setSize(w, Math.min(900, screen.height));
+        main.setDividerLocation(Math.min(470, w / 3));
+        right.setDividerLocation(w - Math.min(470, w / 3) - Math.min(240, w / 6));
         frame.setLocationRelativeTo(null);
         rebuildRecent();
     }
@@ -421,17 +433,35 @@ public final class MainWindow {
         if (confirmDiscard()) open(Path.of(f));
     }
 
-    private PartWorksheet initialWorksheet() {
-        return demo();
-    }
+    private PartWorksheet demo() { return readDemo(services.files()); }
 
-    private PartWorksheet demo() {
+    /** The bundled demo worksheet of an invented part. */
+    public static PartWorksheet readDemo(WorksheetFiles files) {
         try (InputStream in = MainWindow.class.getResourceAsStream(DEMO_RESOURCE)) {
             if (in == null) throw new IllegalStateException("demo worksheet missing: " + DEMO_RESOURCE);
-            return services.files().parse(new String(in.readAllBytes(), StandardCharsets.UTF_8), DEMO_RESOURCE);
+            return files.parse(new String(in.readAllBytes(), StandardCharsets.UTF_8), DEMO_RESOURCE);
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
+    }
+
+    /**
+     * What to open with: after the first run, the most recent worksheet that still reads; else the
+     * demo. Runs before the window exists, so it may run on any thread.
+     */
+    public static Opening opening(Settings settings, WorksheetFiles files) {
+        if (settings.demoShown()) {
+            for (String f : settings.recentFiles()) {
+                Path p = Path.of(f);
+                if (!Files.isRegularFile(p)) continue;
+                try {
+                    return new Opening(files.read(p), p);
+                } catch (RuntimeException e) {
+                    break;
+                }
+            }
+        }
+        return new Opening(readDemo(files), null);
     }
 
     /** The first run shows the demo; later runs offer an autosave left behind, else reopen the last file. */
@@ -449,12 +479,7 @@ public final class MainWindow {
                     + "and look at each panel.", "Start a new worksheet", this::newWorksheet, "Keep exploring", null);
             return;
         }
-        for (String f : settings.recentFiles()) {
-            if (Files.isRegularFile(Path.of(f))) {
-                open(Path.of(f));
-                return;
-            }
-        }
+        session.file().ifPresent(f -> status.show("Reopened " + f.getFileName()));
     }
 
     private void restore(RecoveryStore.Recovered r) {

@@ -15,9 +15,7 @@ public final class PendingPanel extends JPanel {
         JLabel t = new JLabel(title);
         t.putClientProperty("FlatLaf.styleClass", "h2");
         add(t, "center");
-        JLabel w = new JLabel("<html><div style='text-align:center'>" + whatItDoes
-                + "<br><br>Not available in this build yet: its calculation is still being added to Arcwright's core.</div></html>");
-        w.setForeground(Themes.color("Arcwright.help.foreground"));
-        add(w, "wmin 10, wmax 420lp");
+        add(new WrapLabel(whatItDoes + "\n\nNot available in this build yet: its calculation is still being added to "
+                + "Arcwright's core.", "Label.font", "Arcwright.help.foreground"), "wmin 10, wmax 420lp, center");
     }
 }

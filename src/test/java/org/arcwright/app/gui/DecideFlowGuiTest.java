@@ -56,7 +56,7 @@ class DecideFlowGuiTest {
         GuiSupport.onEdt(() -> window.showTab(0));
         fixture.textBox("q.TOLERANCE").deleteText().enterText("R2 +0.3/-0.1");
         GuiSupport.settle(500);
-        assertThat(fixture.label("limitsFigures").text()).contains("1.9000").contains("2.3000");
+        assertThat(GuiSupport.onEdt(() -> window.decidePanel().figuresText())).contains("1.9000").contains("2.3000");
         GuiSupport.screenshot(window.frame(), "decide-light");
         fixture.button("choose1").click();
         GuiSupport.settle(200);

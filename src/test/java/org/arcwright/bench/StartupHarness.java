@@ -1,0 +1,137 @@
+package org.arcwright.bench;
+
+import java.io.BufferedReader;
+import java.io.IOException;
+import java.io.InputStreamReader;
+import java.io.OutputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.List;
+import java.util.Locale;
+import java.util.concurrent.TimeUnit;
+import java.util.jar.Attributes;
+import java.util.jar.JarEntry;
+import java.util.jar.JarOutputStream;
+import java.util.jar.Manifest;
+
+/**
+ * Start-up harness: wall time from starting a JVM to the first usable window (shown, painted, event
+ * queue drained), for the Arcwright window and for a bare Swing frame started the same way, with and
+ * without a class-data-sharing archive made by a training run (as {@code ./arcwright} does).
+ *
+ * <p>Run on a display (e.g. {@code xvfb-run -a}) after {@code mvn -B -o -q package -DskipTests}:
+ * {@code xvfb-run -a mvn -B -o -q -Pharness test-compile exec:exec -Dharness=org.arcwright.bench.StartupHarness}.
+ * Arguments: runs per configuration (default 7). Each Arcwright run uses a fresh config directory,
+ * so it takes the first-run path with the demo worksheet.
+ */
+public final class StartupHarness {
+    private StartupHarness() {}
+
+    public static void main(String[] args) throws Exception {
+        int runs = args.length > 0 ? Integer.parseInt(args[0]) : 7;
+        Path target = Path.of("target");
+        Path appJar = target.resolve("arcwright.jar");
+        if (!Files.exists(appJar)) throw new IllegalStateException("build the jar first: mvn -B -o -q package -DskipTests");
+        Path bench = Files.createDirectories(target.resolve("bench"));
+        Path bareJar = bareJar(bench);
+        Path appCds = bench.resolve("app.jsa");
+        Path bareCds = bench.resolve("bare.jsa");
+        Files.deleteIfExists(appCds);
+        Files.deleteIfExists(bareCds);
+        time(List.of("-XX:ArchiveClassesAtExit=" + appCds), appJar, "exit", bench);
+        time(List.of("-XX:ArchiveClassesAtExit=" + bareCds), bareJar, "exit", bench);
+        List<Sample> app = new ArrayList<>();
+        List<Sample> bare = new ArrayList<>();
+        List<Sample> appCold = new ArrayList<>();
+        List<Sample> bareCold = new ArrayList<>();
+        for (int i = 0; i < runs; i++) {
+            bare.add(time(List.of("-XX:SharedArchiveFile=" + bareCds), bareJar, "exit", bench));
+            app.add(time(List.of("-XX:SharedArchiveFile=" + appCds), appJar, "exit", bench));
+            bareCold.add(time(List.of(), bareJar, "exit", bench));
+            appCold.add(time(List.of(), appJar, "exit", bench));
+        }
+        System.out.printf(Locale.ROOT, "load average at start: %s%n", Files.readString(Path.of("/proc/loadavg")).trim());
+        System.out.println("| configuration | wall median ms | wall min ms | wall max ms | CPU median ms | CPU min ms |");
+        System.out.println("|---|---:|---:|---:|---:|---:|");
+        row("bare JFrame, CDS archive", bare);
+        row("Arcwright window, CDS archive (as ./arcwright)", app);
+        row("bare JFrame, JDK default CDS only", bareCold);
+        row("Arcwright window, JDK default CDS only", appCold);
+        System.out.printf(Locale.ROOT, "ratio Arcwright/bare with CDS, wall medians: %.2f, wall minima: %.2f, CPU medians: %.2f%n",
+                median(wall(app)) / median(wall(bare)), Collections.min(wall(app)) / Collections.min(wall(bare)),
+                median(cpu(app)) / median(cpu(bare)));
+        System.out.printf(Locale.ROOT, "ratio Arcwright/bare without archive, wall medians: %.2f, CPU medians: %.2f%n",
+                median(wall(appCold)) / median(wall(bareCold)), median(cpu(appCold)) / median(cpu(bareCold)));
+    }
+
+    private static List<Double> wall(List<Sample> s) { return s.stream().map(Sample::wall).toList(); }
+
+    private static List<Double> cpu(List<Sample> s) { return s.stream().map(Sample::cpu).toList(); }
+
+    private static void row(String name, List<Sample> s) {
+        List<Double> w = wall(s);
+        List<Double> c = cpu(s);
+        System.out.printf(Locale.ROOT, "| %s | %.0f | %.0f | %.0f | %.0f | %.0f |%n", name, median(w), Collections.min(w),
+                Collections.max(w), median(c), Collections.min(c));
+    }
+
+    private static double median(List<Double> v) {
+        List<Double> s = new ArrayList<>(v);
+        Collections.sort(s);
+        int n = s.size();
+        return n % 2 == 1 ? s.get(n / 2) : (s.get(n / 2 - 1) + s.get(n / 2)) / 2;
+    }
+
+    /** Wall and CPU milliseconds from process start to the usable marker. */
+    record Sample(double wall, double cpu) {}
+
+    private static Sample time(List<String> jvm, Path jar, String probe, Path bench) throws Exception {
+        Path config = Files.createTempDirectory(bench, "config");
+        List<String> cmd = new ArrayList<>(List.of("java", "-Xshare:auto"));
+        cmd.addAll(jvm);
+        cmd.add("-Darcwright.startupProbe=" + probe);
+        cmd.add("-Darcwright.config=" + config.toAbsolutePath());
+        cmd.addAll(List.of("-jar", jar.toString()));
+        ProcessBuilder pb = new ProcessBuilder(cmd).redirectError(ProcessBuilder.Redirect.DISCARD);
+        long start = System.nanoTime();
+        Process p = pb.start();
+        double ms = -1;
+        double cpu = -1;
+        try (BufferedReader r = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
+            String line;
+            while ((line = r.readLine()) != null) {
+                if (line.contains("arcwright-window-usable")) {
+                    ms = (System.nanoTime() - start) / 1e6;
+                    int i = line.indexOf("cpu=");
+                    if (i >= 0) cpu = Double.parseDouble(line.substring(i + 4).trim());
+                    break;
+                }
+            }
+        }
+        if (!p.waitFor(30, TimeUnit.SECONDS)) p.destroyForcibly();
+        if (ms < 0) throw new IllegalStateException("no usable marker from " + cmd);
+        return new Sample(ms, cpu);
+    }
+
+    /** Packs {@link BareFrame} into its own jar, so it can use a class-data-sharing archive like the app. */
+    private static Path bareJar(Path bench) throws IOException {
+        Path jar = bench.resolve("bareframe.jar");
+        Manifest mf = new Manifest();
+        mf.getMainAttributes().put(Attributes.Name.MANIFEST_VERSION, "1.0");
+        mf.getMainAttributes().put(Attributes.Name.MAIN_CLASS, BareFrame.class.getName());
+        String entry = BareFrame.class.getName().replace('.', '/');
+        try (OutputStream out = Files.newOutputStream(jar); JarOutputStream j = new JarOutputStream(out, mf)) {
+            for (String suffix : List.of(".class", "$1.class")) {
+                Path cls = Path.of("target/test-classes", entry + suffix);
+                if (!Files.exists(cls)) continue;
+                j.putNextEntry(new JarEntry(entry + suffix));
+                j.write(Files.readAllBytes(cls));
+                j.closeEntry();
+            }
+        }
+        return jar;
+    }
+}
