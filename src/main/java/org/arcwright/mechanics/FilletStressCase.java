@@ -25,9 +25,10 @@ public record FilletStressCase(ShoulderShape shape, LoadCase load, Units units, 
         if (load == null) throw InputProblem.ofField("load", "missing; use tension, bending or torsion");
         Objects.requireNonNull(units, "units");
         StressConcentration.checkGeometry(bigD, smallD);
-        StressConcentration.positive("rMin", rMin);
+        boolean single = rMin == rNominal && rNominal == rMax;
+        StressConcentration.positive(single ? "r" : "rMin", rMin);
         StressConcentration.positive("r", rNominal);
-        StressConcentration.positive("rMax", rMax);
+        StressConcentration.positive(single ? "r" : "rMax", rMax);
         if (rMin > rMax) throw InputProblem.ofField("rMin", "rMin = " + rMin + " exceeds rMax = " + rMax);
         if (rNominal < rMin || rNominal > rMax) {
             throw InputProblem.ofField("r", "nominal r = " + rNominal + " lies outside the limits " + rMin + ".." + rMax);
