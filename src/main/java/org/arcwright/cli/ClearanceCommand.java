@@ -86,8 +86,9 @@ final class ClearanceCommand implements Callable<Integer> {
     private static void printText(PrintWriter out, CornerClearance r) {
         ClearanceCase c = r.input();
         String u = c.units().symbol();
+        int places = Math.max(1, Math.max(scale(c.filletMin()), scale(c.filletMax())));
         String fillet = c.filletMin() == c.filletMax() ? "R " + Numbers.plain(c.filletMax())
-                : "R " + Numbers.plain(c.filletMin()) + "–" + Numbers.plain(c.filletMax());
+                : "R " + Numbers.fixed(c.filletMin(), places) + "–" + Numbers.fixed(c.filletMax(), places);
         out.printf("Fillet %s %s against the mating part's %s%n", fillet, u, c.corner().describe());
         out.printf("  relief     %s along the seat, %s up the shoulder%n", Numbers.fixed(r.reliefAlongSeat(), 3),
                 Numbers.fixed(r.reliefAlongShoulder(), 3));
@@ -107,5 +108,9 @@ final class ClearanceCommand implements Callable<Integer> {
         }
         for (String n : r.notes()) out.println("  note: " + n);
         for (String n : r.cautions()) out.println("  caution: " + n);
+    }
+
+    private static int scale(double v) {
+        return Math.max(0, new java.math.BigDecimal(Numbers.plain(v)).scale());
     }
 }

@@ -166,6 +166,9 @@ final class FilletStressCommand implements Callable<Integer> {
             if (meets) {
                 out.printf("  verdict    PASS: r min %s %s is at or above %s %s, the smallest radius that meets %s%n",
                         Numbers.plain(c.rMin()), u, Numbers.plain(g.radius()), u, minima.size() > 1 ? "every target" : "the target");
+            } else if (g.limitedByFit()) {
+                out.printf("  verdict    FAIL: r min %s %s is below %s %s, the sharpest fillet the fit covers; "
+                        + "below it the target cannot be confirmed%n", Numbers.plain(c.rMin()), u, Numbers.plain(g.radius()), u);
             } else if (g.found()) {
                 out.printf("  verdict    FAIL: r min %s %s is below %s %s, the smallest radius that meets %s%n",
                         Numbers.plain(c.rMin()), u, Numbers.plain(g.radius()), u, minima.size() > 1 ? "every target" : "the target");

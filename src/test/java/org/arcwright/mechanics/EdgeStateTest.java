@@ -14,7 +14,7 @@ import org.junit.jupiter.api.Test;
 /** ISO 13715 edges of undefined shape. */
 class EdgeStateTest {
 
-    /** ISO 13715:2017 text forms: sign and size, two sizes of one sign, or a sign alone. */
+    /** ISO 13715:2019 text forms: sign and size, two sizes of one sign, or a sign alone. */
     @ParameterizedTest(name = "{0}")
     @CsvSource(delimiter = '|', value = {
             "-0.3        | MINUS  | 0.3  |     | -0.3",

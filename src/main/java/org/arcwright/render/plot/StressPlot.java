@@ -192,7 +192,8 @@ public final class StressPlot {
         }
         if (minimum != null && minimum.found() && minimum.radius() >= curves.rFrom() && minimum.radius() <= curves.rTo()) {
             ValueMarker mm = new ValueMarker(minimum.radius(), TARGET, new BasicStroke(1.2f));
-            mm.setLabel("smallest r for target: " + num(minimum.radius()));
+            mm.setLabel((minimum.limitedByFit() ? "sharpest r the fit covers: " : "smallest r for target: ")
+                    + num(minimum.radius()));
             mm.setLabelFont(new Font(FONT, Font.PLAIN, 12));
             mm.setLabelPaint(TARGET);
             mm.setLabelAnchor(RectangleAnchor.BOTTOM_RIGHT);
