@@ -91,6 +91,7 @@ final class FilletStressCommand implements Callable<Integer> {
         m.put("fit", r.atNominal().kt().fitName());
         m.put("fitSource", r.atNominal().kt().source());
         m.put("r", c.rNominal());
+        m.put("hOverR", r.atNominal().kt().hOverR());
         m.put("kt", r.atNominal().kt().kt());
         m.put("withinFit", r.withinFit());
         if (c.strength() != null) {

@@ -133,6 +133,17 @@ class FilletStressCommandTest {
     }
 
     @Test
+    void negativeStrengthIsBadInputAtItsNestedField() throws Exception {
+        Path f = file("""
+                {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 38, "d": 32, "r": 1,
+                 "ultimateStrength": {
+                    "value": -690, "units": "MPa"}}
+                """);
+        assertThat(run("fillet-stress", f.toString())).isEqualTo(Cli.BAD_INPUT);
+        assertThat(err.toString()).contains("fillet.json:3:").contains("ultimateStrength.value: must be greater than zero");
+    }
+
+    @Test
     void zeroRadiusIsBadInput() throws Exception {
         Path f = file("""
                 {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 38, "d": 32, "r": 0}
