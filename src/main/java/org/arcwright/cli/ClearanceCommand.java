@@ -23,7 +23,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "clearance", mixinStandardHelpOptions = true,
         description = {"Whether a shoulder fillet at its largest still lets the mating part seat flush, "
                 + "the margin, and the shoulder flat left to carry it.",
-                "FILE (JSON): units, fillet {r | rMin, rMax}, mating {type: chamfer, leg, angle} | {type: radius, rMin} "
+                "FILE (JSON): units, fillet {r | rMin, rMax | callout}, mating {type: chamfer, leg, angle} | {type: radius, rMin} "
                         + "| {type: bearing, chamferMin}, optional shoulderHeight, shoulderEdgeBreak, requiredSupport.",
                 "Exit 1 when the part does not seat or the shoulder gives less support than required."})
 final class ClearanceCommand implements Callable<Integer> {
