@@ -37,14 +37,14 @@ public record Note(String id, String title, List<String> tags, List<String> func
                     + "' must be 1 to 80 lower-case letters, digits or hyphens, starting with a letter or digit");
         }
         Objects.requireNonNull(title, "title");
-        title = title.strip();
+        title = title.replaceAll("\\s+", " ").strip();
         if (title.isEmpty()) throw new IllegalArgumentException("title must not be blank");
         tags = labels(tags);
         functions = labels(functions);
         processes = labels(processes);
         standards = standards == null ? List.of()
                 : standards.stream().map(String::strip).filter(s -> !s.isEmpty()).distinct().toList();
-        author = author == null ? "" : author.strip();
+        author = author == null ? "" : author.replaceAll("\\s+", " ").strip();
         body = body == null ? "" : body;
     }
 

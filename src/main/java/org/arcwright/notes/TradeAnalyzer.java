@@ -23,8 +23,9 @@ import org.apache.lucene.analysis.synonym.SynonymMap;
  * The analysis chain for practice notes, fitted to how tolerancing is written.
  *
  * <ol>
- *   <li>A character filter joins a radius symbol to its value ({@code R 0.5} to {@code R0.5},
- *       {@code CR 1.5} to {@code CR1.5}).</li>
+ *   <li>Character filters join a radius symbol to its value ({@code R 0.5} to {@code R0.5},
+ *       {@code CR 1.5} to {@code CR1.5}) and read {@code +/-} as {@code ±}, which is a token of
+ *       its own.</li>
  *   <li>A pattern tokenizer keeps tokens that contain a digit whole with their inner dots, hyphens
  *       and slashes ({@code R0.5}, {@code 2768-m}, {@code Y14.5-2018}, {@code H7/g6}, {@code .060}),
  *       and splits plain words at hyphens ({@code title-block} is two words).</li>
@@ -33,7 +34,8 @@ import org.apache.lucene.analysis.synonym.SynonymMap;
  *       digit in them.</li>
  *   <li>When querying only: the trade's synonyms ({@code fillet}, {@code round}, {@code blend},
  *       {@code radius}; {@code edge break}, {@code broken edge}; {@code CR}, {@code controlled radius};
- *       British and American spellings) from {@code trade-synonyms.txt}.</li>
+ *       British and American spellings) from {@code trade-synonyms.txt}, each weighted half as much
+ *       as the word typed, so a note using the user's own word ranks first.</li>
  * </ol>
  *
  * <p>No stop words are removed (multi-word synonyms need unbroken positions, and BM25 already gives
@@ -44,10 +46,13 @@ public final class TradeAnalyzer extends Analyzer {
     public static final String SYNONYMS_RESOURCE = "/org/arcwright/notes/trade-synonyms.txt";
 
     static final Pattern TOKEN = Pattern.compile(
-            "(?:\\p{L}{0,4}\\d[\\p{L}\\p{N}]*|\\.\\d[\\p{L}\\p{N}]*)(?:[.\\-/][\\p{L}\\p{N}]+)*"
+            "\\p{L}{0,4}\\.?\\d[\\p{L}\\p{N}]*(?:[.\\-/][\\p{L}\\p{N}]+)*"
                     + "|\\p{L}+(?:['’]\\p{L}+)*"
-                    + "|µm");
+                    + "|µm|±");
+    private static final Pattern PLUS_MINUS = Pattern.compile("\\+\\s*/\\s*-|\\+-(?=\\s*\\.?\\d)");
     private static final Pattern RADIUS_GAP = Pattern.compile("\\b(R|CR|SR|CSR|r|cr)\\s+(?=\\.?\\d)");
+    /** Weight of a synonym relative to the word the user typed. */
+    static final float SYNONYM_WEIGHT = 0.5f;
     private static final Pattern HAS_DIGIT = Pattern.compile(".*\\d.*");
 
     private final boolean querySide;
@@ -70,14 +75,14 @@ public final class TradeAnalyzer extends Analyzer {
 
     @Override
     protected java.io.Reader initReader(String fieldName, java.io.Reader reader) {
-        return new PatternReplaceCharFilter(RADIUS_GAP, "$1", reader);
+        return new PatternReplaceCharFilter(RADIUS_GAP, "$1", new PatternReplaceCharFilter(PLUS_MINUS, " ± ", reader));
     }
 
     @Override
     protected TokenStreamComponents createComponents(String fieldName) {
         Tokenizer source = new PatternTokenizer(TOKEN, 0);
         TokenStream s = baseChain(source, !querySide);
-        if (querySide && synonyms != null) s = new SynonymGraphFilter(s, synonyms, true);
+        if (querySide && synonyms != null) s = new SynonymWeightFilter(new SynonymGraphFilter(s, synonyms, true), SYNONYM_WEIGHT);
         return new TokenStreamComponents(source, s);
     }
 

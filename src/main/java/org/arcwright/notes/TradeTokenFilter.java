@@ -73,8 +73,9 @@ final class TradeTokenFilter extends TokenFilter {
             return;
         }
         if (t.indexOf('-') >= 0 || t.indexOf('/') >= 0) {
-            for (String part : t.split("[-/]")) {
-                if (!part.isEmpty() && !part.equals(t)) pending.addFirst(new Pending(s, part, 0));
+            String[] parts = t.split("[-/]");
+            for (int i = parts.length - 1; i >= 0; i--) {
+                if (!parts[i].isEmpty() && !parts[i].equals(t)) pending.addFirst(new Pending(s, parts[i], 0));
             }
         }
     }
