@@ -374,7 +374,7 @@ public final class NotesStore implements Closeable {
         } catch (IOException | RuntimeException e) {
             if (e instanceof InputProblem) throw (InputProblem) e;
             closeQuietly();
-            rebuild("index corrupt: " + e.getClass().getSimpleName(), t0, scan);
+            rebuild("index corrupt: " + e, t0, scan);
         }
     }
 
