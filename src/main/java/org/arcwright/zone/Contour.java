@@ -55,17 +55,36 @@ public record Contour(List<Segment> segments, Side air) {
      * @param work scratch array of at least 5 doubles
      */
     public void measure(double x, double y, double[] out, double[] work) {
+        measure(x, y, out, work, closed());
+    }
+
+    /**
+     * Measures {@code n} points at once: signed deviations, normals toward air and stations into the
+     * given arrays (any may be null).
+     */
+    public void measureAll(double[] xs, double[] ys, int n, double[] dev, double[] nx, double[] ny, double[] station) {
+        boolean closed = closed();
+        double[] out = new double[4], work = new double[5];
+        for (int i = 0; i < n; i++) {
+            measure(xs[i], ys[i], out, work, closed);
+            if (dev != null) dev[i] = out[0];
+            if (nx != null) nx[i] = out[1];
+            if (ny != null) ny[i] = out[2];
+            if (station != null) station[i] = out[3];
+        }
+    }
+
+    private void measure(double x, double y, double[] out, double[] work, boolean closed) {
         double sign = air == Side.LEFT ? 1 : -1;
         double best = Double.POSITIVE_INFINITY;
         double bestDev = 0, bnx = 0, bny = 0, bestStation = 0;
         double station0 = 0;
         int n = segments.size();
-        boolean closed = closed();
         for (int i = 0; i < n; i++) {
             Segment s = segments.get(i);
             s.nearest(x, y, work);
             double ex = x - work[1], ey = y - work[2];
-            double dist = Math.hypot(ex, ey);
+            double dist = Math.sqrt(ex * ex + ey * ey);
             if (dist < best) {
                 double along = work[0];
                 double nx = work[3], ny = work[4];

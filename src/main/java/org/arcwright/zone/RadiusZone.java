@@ -83,6 +83,25 @@ public record RadiusZone(Corner corner, double min, double max, double resolutio
                 resolution);
     }
 
+    /**
+     * How far one point's radius lies beyond the limits (radius units; negative: inside by that
+     * much); NaN for a point beyond the zone's extent.
+     */
+    public double excess(double x, double y) {
+        double tanA = Math.tan(corner.halfAngle());
+        double reach = max / tanA + resolution;
+        Point2 v = corner.vertex(), a = corner.legA(), b = corner.legB();
+        Point2 na = corner.inwardNormalA(), nb = corner.inwardNormalB();
+        double qx = x - v.x(), qy = y - v.y();
+        double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
+        if (xa > reach || xb > reach) return Double.NaN;
+        double ha = qx * na.x() + qy * na.y(), hb = qx * nb.x() + qy * nb.y();
+        if (ha < -resolution || hb < -resolution) return min - Math.min(ha, hb);
+        double[] lo = new double[1], hi = new double[1];
+        allowed(x, y, ha, hb, xa, xb, tanA, lo, hi);
+        return Math.max(min - hi[0], lo[0] - max);
+    }
+
     private void allowed(double x, double y, double ha, double hb, double xa, double xb, double tanA,
                          double[] lo, double[] hi) {
         if (ha <= resolution || hb <= resolution) {

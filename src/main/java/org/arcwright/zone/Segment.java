@@ -30,7 +30,7 @@ public sealed interface Segment permits Segment.Line, Segment.Arc {
         @Override
         public void nearest(double x, double y, double[] out) {
             double dx = to.x() - from.x(), dy = to.y() - from.y();
-            double len = Math.hypot(dx, dy);
+            double len = Math.sqrt(dx * dx + dy * dy);
             double ux = dx / len, uy = dy / len;
             double t = (x - from.x()) * ux + (y - from.y()) * uy;
             if (t < 0) t = 0;
