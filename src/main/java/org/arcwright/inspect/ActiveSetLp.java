@@ -43,6 +43,8 @@ final class ActiveSetLp {
         int total = p.constraints();
         int[] work = Arrays.copyOf(initial, Math.max(16, initial.length * 2));
         int size = initial.length;
+        java.util.Set<Integer> inWork = new java.util.HashSet<>();
+        for (int j : initial) inWork.add(j);
         double[] row = new double[n];
         int[] topIdx = new int[ADD_PER_PASS];
         double[] topVal = new double[ADD_PER_PASS];
@@ -60,7 +62,7 @@ final class ActiveSetLp {
             int minSlot = 0;
             for (int j = 0; j < total; j++) {
                 double v = p.violation(j, z);
-                if (v <= tol) continue;
+                if (v <= tol || (v <= 1e3 * tol && inWork.contains(j))) continue;
                 if (found < ADD_PER_PASS) {
                     topIdx[found] = j;
                     topVal[found] = v;
@@ -72,9 +74,16 @@ final class ActiveSetLp {
                     minSlot = argMin(topVal, found);
                 }
             }
-            if (found == 0) return new Result(z, Arrays.copyOf(work, size), pass);
+            int added = 0;
             if (size + found > work.length) work = Arrays.copyOf(work, (size + found) * 2);
-            for (int k = 0; k < found; k++) work[size++] = topIdx[k];
+            for (int k = 0; k < found; k++) {
+                if (inWork.add(topIdx[k])) {
+                    work[size++] = topIdx[k];
+                    added++;
+                }
+            }
+            // nothing new: the violations left are the working set's own rounding
+            if (added == 0) return new Result(z, Arrays.copyOf(work, size), pass);
         }
         throw new IllegalStateException("active set did not settle");
     }
