@@ -124,9 +124,9 @@ public final class CircleFits {
             }
             double[] trial = new double[9];
             double tc = normal(xs, ys, n, mx, my, a + d[0], b + d[1], r + d[2], trial);
-            if (tc <= cost) {
-                boolean done = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]) <= 1e-15 * (Math.abs(r) + Math.hypot(a, b))
-                        || cost - tc <= 1e-30 * n * r * r;
+            // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
+            if (tc <= cost * (1 + 1e-15)) {
+                boolean done = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]) <= 1e-14 * (Math.abs(r) + Math.hypot(a, b));
                 a += d[0]; b += d[1]; r += d[2];
                 cost = tc;
                 ne = trial;
