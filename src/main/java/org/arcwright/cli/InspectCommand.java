@@ -54,7 +54,12 @@ final class InspectCommand implements Callable<Integer> {
         }
         InspectionRequest req = new InspectionFiles(new JsonFiles()).read(file).withCompare(compare);
         if (window != null) req = req.withWindow(window);
-        InspectionResult r = new Inspector().inspect(req);
+        InspectionResult r;
+        try {
+            r = new Inspector().inspect(req);
+        } catch (InputProblem p) {
+            throw p.source() == null || "points".equals(p.source()) ? p.in(file.toString()) : p;
+        }
         PrintWriter out = spec.commandLine().getOut();
         if (format == OutputFormat.json) {
             out.println(new JsonFiles().write(InspectionJson.tree(r)));

@@ -104,7 +104,8 @@ public final class InspectionFiles {
         try {
             return s.get();
         } catch (InputProblem p) {
-            String f = p.field() == null ? field : p.field().startsWith(field) ? p.field() : field + "." + p.field();
+            String f = p.field() == null ? field : field == null || p.field().startsWith(field) ? p.field() : field + "." + p.field();
+            if (f != null && f.startsWith("callout.")) f = f.substring("callout.".length());
             throw new IllegalArgumentException((f == null ? "" : f + ": ") + p.problem());
         }
     }

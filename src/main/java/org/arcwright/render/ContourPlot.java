@@ -53,6 +53,7 @@ public final class ContourPlot {
         String name = out.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".svg")) {
             org.jfree.svg.SVGGraphics2D g = new org.jfree.svg.SVGGraphics2D(WIDTH, HEIGHT);
+            g.setDefsKeyPrefix("arcwright-");
             draw(r, g);
             AtomicFiles.writeString(out, g.getSVGDocument());
         } else if (name.endsWith(".png")) {
@@ -111,7 +112,7 @@ public final class ContourPlot {
             nominal.measure(p[0], p[1], m4, w5);
             maxDev = Math.max(maxDev, Math.abs(m4[0]));
         }
-        double mag = niceFactor(0.07 * span / Math.max(Math.max(band, maxDev), 1e-12 * span));
+        double mag = niceFactor(0.12 * span / Math.max(Math.max(visibleBand(q, po), maxDev), 1e-12 * span));
         double sx = (WIDTH - 120) / (view[2] - view[0]), sy = (HEIGHT - 190) / (view[3] - view[1]);
         double scale = Math.min(sx, sy);
         double ox = 60 + ((WIDTH - 120) - scale * (view[2] - view[0])) / 2 - scale * view[0];
@@ -192,6 +193,14 @@ public final class ContourPlot {
     private static double band(InspectionRequest q, ProfileOutcome po) {
         if (q.callout() instanceof InspectionCallout.RadiusLimits rl) return Math.max(rl.max() - rl.min(), 1e-12);
         return po == null ? 1 : po.zone().width();
+    }
+
+    /** Width of the zone as drawn: the crescent on the bisector for R/CR, the zone for profile. */
+    private static double visibleBand(InspectionRequest q, ProfileOutcome po) {
+        if (q.callout() instanceof InspectionCallout.RadiusLimits rl && q.nominal() instanceof Nominal.CornerBlend cb) {
+            return (rl.max() - rl.min()) * (1 / Math.sin(cb.corner().halfAngle()) - 1);
+        }
+        return po == null ? 0 : po.zone().width();
     }
 
     private static Color colour(double excess, double band) {
@@ -366,7 +375,10 @@ public final class ContourPlot {
                         y += offset * mm[2];
                     }
                     double[] sc = screen(x, y);
-                    if (sc[0] < -5000 || sc[0] > 5000 + WIDTH || sc[1] < -5000 || sc[1] > 5000 + HEIGHT) continue;
+                    if (sc[0] < -400 || sc[0] > 400 + WIDTH || sc[1] < -400 || sc[1] > 400 + HEIGHT) {
+                        first = true;
+                        continue;
+                    }
                     if (first) p.moveTo(sc[0], sc[1]);
                     else p.lineTo(sc[0], sc[1]);
                     first = false;
