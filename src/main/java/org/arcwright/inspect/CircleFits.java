@@ -106,7 +106,7 @@ public final class CircleFits {
         double a = start.cx() - mx, b = start.cy() - my, r = start.r();
         double[] ne = new double[9];
         double cost = normal(xs, ys, n, mx, my, a, b, r, ne);
-        double lambda = 1e-3;
+        double lambda = 1e-6; // the Taubin start is close: begin nearly Gauss-Newton
         int it = 0;
         for (; it < 200; it++) {
             double[][] m = new double[3][4];
@@ -124,9 +124,16 @@ public final class CircleFits {
             }
             double[] trial = new double[9];
             double tc = normal(xs, ys, n, mx, my, a + d[0], b + d[1], r + d[2], trial);
+            boolean tiny = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]) <= 1e-11 * (Math.abs(r) + Math.hypot(a, b));
+            if (tiny) {
+                // converged: the cost is flat to rounding here, a step this small changes nothing that matters
+                if (tc <= cost) { a += d[0]; b += d[1]; r += d[2]; cost = tc; }
+                it++;
+                break;
+            }
             // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
             if (tc <= cost * (1 + 1e-15)) {
-                boolean done = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]) <= 1e-14 * (Math.abs(r) + Math.hypot(a, b));
+                boolean done = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]) <= 1e-11 * (Math.abs(r) + Math.hypot(a, b));
                 a += d[0]; b += d[1]; r += d[2];
                 cost = tc;
                 ne = trial;
@@ -188,7 +195,7 @@ public final class CircleFits {
             double step = Math.hypot(dx, dy);
             if (nw <= width || step <= 1e-14 * scale) {
                 cx += dx; cy += dy;
-                boolean done = step <= 1e-13 * scale || width - nw <= 1e-15 * scale;
+                boolean done = step <= 1e-9 * scale || width - nw <= 1e-15 * scale;
                 width = Math.min(width, nw);
                 d = nd; ux = nux; uy = nuy;
                 if (done) break;

@@ -100,7 +100,8 @@ public final class ProfileCheck {
             double obj = objective(t.dev, n, f);
             double size = Math.abs(step[0]) + Math.abs(step[1]) + Math.abs(step[2]) * spread + Math.abs(step[3]);
             if (obj <= best || Double.isNaN(best)) {
-                boolean done = size <= 1e-13 * spread || (best - obj) <= 1e-15 * spread;
+                // quadratic convergence: after a step of 1e-9 the next would be ~1e-18 of the spread
+                boolean done = size <= 1e-9 * spread || (best - obj) <= 1e-15 * spread;
                 s = t;
                 best = obj;
                 if (done) break;
@@ -169,7 +170,7 @@ public final class ProfileCheck {
             for (int i = 0; i < n; i++) {
                 double dx = xs[i] - ox, dy = ys[i] - oy;
                 double x = ox + c * dx - s * dy + tx, y = oy + s * dx + c * dy + ty;
-                contour.measure(x, y, out, work);
+                contour.measureDeviation(x, y, out, work);
                 dev[i] = out[0] - offset;
                 nx[i] = out[1];
                 ny[i] = out[2];

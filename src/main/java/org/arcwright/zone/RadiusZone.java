@@ -26,13 +26,41 @@ import org.arcwright.io.InputProblem;
  * @param max largest radius allowed, >= min
  * @param resolution distance below which a point counts as on a leg, > 0
  */
-public record RadiusZone(Corner corner, double min, double max, double resolution) {
-    public RadiusZone {
+public final class RadiusZone {
+    private final Corner corner;
+    private final double min, max, resolution;
+    private final double vx, vy, bisX, bisY, s1, s2, cot2;
+
+    public RadiusZone(Corner corner, double min, double max, double resolution) {
+        java.util.Objects.requireNonNull(corner, "corner");
         if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + min);
         if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + max);
         if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + max + " < " + min + ")");
         if (!(resolution > 0)) throw InputProblem.ofField("resolution", "must be above zero");
+        this.corner = corner;
+        this.min = min;
+        this.max = max;
+        this.resolution = resolution;
+        double a = corner.halfAngle();
+        this.vx = corner.vertex().x();
+        this.vy = corner.vertex().y();
+        this.bisX = corner.bisector().x();
+        this.bisY = corner.bisector().y();
+        this.s1 = 1 / Math.sin(a);
+        this.s2 = s1 * s1;
+        this.cot2 = 1 / (Math.tan(a) * Math.tan(a));
     }
+
+    public Corner corner() { return corner; }
+
+    /** Smallest radius allowed. */
+    public double min() { return min; }
+
+    /** Largest radius allowed. */
+    public double max() { return max; }
+
+    /** Distance below which a point counts as on a leg. */
+    public double resolution() { return resolution; }
 
     /**
      * Evaluates points against the zone.
@@ -111,10 +139,19 @@ public record RadiusZone(Corner corner, double min, double max, double resolutio
             lo[0] = 0;
             hi[0] = h;
         } else {
-            double r = corner.blendRadiusThrough(x, y);
+            double r = blend(x, y);
             lo[0] = r;
             hi[0] = r;
         }
+    }
+
+    /** {@link Corner#blendRadiusThrough} with the corner's constants computed once. */
+    private double blend(double x, double y) {
+        double qx = x - vx, qy = y - vy;
+        double qu = qx * bisX + qy * bisY;
+        double q2 = qx * qx + qy * qy;
+        double disc = Math.max(0, s2 * qu * qu - cot2 * q2);
+        return (s1 * qu + Math.sqrt(disc)) / cot2;
     }
 
     private static String fmt(double v) { return String.format(java.util.Locale.ROOT, "%.6g", v); }
