@@ -15,6 +15,7 @@ import picocli.CommandLine.Command;
                 FilletStressCommand.class,
                 ClearanceCommand.class,
                 NotesCommand.class,
+                InspectCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
