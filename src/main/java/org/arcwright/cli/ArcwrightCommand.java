@@ -14,6 +14,8 @@ import picocli.CommandLine.Command;
                 GeneralToleranceCommand.class,
                 FilletStressCommand.class,
                 ClearanceCommand.class,
+                NotesCommand.class,
+                InspectCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
