@@ -12,6 +12,10 @@ import picocli.CommandLine.Command;
         subcommands = {
                 LimitsCommand.class,
                 GeneralToleranceCommand.class,
+                FilletStressCommand.class,
+                ClearanceCommand.class,
+                NotesCommand.class,
+                InspectCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
