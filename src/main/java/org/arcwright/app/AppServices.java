@@ -14,22 +14,32 @@ import org.arcwright.worksheet.WorksheetFiles;
 /**
  * The collaborators the window is built from, gathered so that tests can build a window over a
  * temporary config directory. {@code background} runs long work (advice, indexing, inspection);
- * {@code io} writes settings and autosaves in order.
+ * {@code io} writes settings and autosaves in order; {@code search} runs notes searches one at a time.
+ * The notes index and the default personal pack live under {@code configDir} too.
  */
 public record AppServices(Path configDir, JsonFiles json, WorksheetFiles files, SettingsStore settings,
-                          RecoveryStore recovery, ExecutorService background, ExecutorService io, Clock clock) {
+                          RecoveryStore recovery, ExecutorService background, ExecutorService io,
+                          ExecutorService search, Clock clock) {
 
     /** The standard services over {@code configDir}. */
     public static AppServices over(Path configDir) {
         JsonFiles json = new JsonFiles();
         return new AppServices(configDir, json, new WorksheetFiles(json), new SettingsStore(configDir, json),
                 new RecoveryStore(configDir, json), Executors.newFixedThreadPool(2, daemon("arcwright-work")),
-                Executors.newSingleThreadExecutor(daemon("arcwright-io")), Clock.systemUTC());
+                Executors.newSingleThreadExecutor(daemon("arcwright-io")),
+                Executors.newSingleThreadExecutor(daemon("arcwright-search")), Clock.systemUTC());
     }
+
+    /** The folder under which the notes index is cached. */
+    public Path notesIndexRoot() { return configDir.resolve("notes-index"); }
+
+    /** The personal practice pack used when the settings name none. */
+    public Path defaultPersonalPack() { return configDir.resolve("personal-pack"); }
 
     /** Stops the worker threads, letting queued writes finish. */
     public void shutdown() {
         background.shutdownNow();
+        search.shutdownNow();
         io.shutdown();
         try {
             io.awaitTermination(5, java.util.concurrent.TimeUnit.SECONDS);

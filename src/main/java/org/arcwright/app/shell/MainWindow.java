@@ -48,6 +48,13 @@ import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.part.PartPanel;
 import org.arcwright.app.zoneview.ZoneViewPanel;
+import org.arcwright.app.check.CheckPanel;
+import org.arcwright.app.model.CheckRequests;
+import org.arcwright.app.notes.NotesPanel;
+import org.arcwright.app.stress.StressViewPanel;
+import org.arcwright.mechanics.FilletMechanics;
+import org.arcwright.notes.NotesPaths;
+import org.arcwright.notes.NotesStore;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackStack;
 import org.arcwright.tolerance.DrawingStyle;
@@ -80,8 +87,11 @@ public final class MainWindow {
     private Settings settings;
     private PartPanel partPanel;
     private DecidePanel decidePanel;
-    private JComponent notesPanel;
+    private NotesPanel notesPanel;
+    private StressViewPanel stressPanel;
+    private CheckPanel checkPanel;
     private PackStack packs;
+    private NotesStore notesStore;
 
     /**
      * The worksheet the window opens with, read before the window is built (off the event thread).
@@ -146,17 +156,15 @@ public final class MainWindow {
         work.setName("workArea");
         work.addTab("Decide", Icons.get("decide"), decidePanel, "The guided form and its recommendations (Alt+2)");
         work.addTab("Zone view", Icons.get("zone"), new ZoneViewPanel(session), "The zone of the chosen control (Alt+3)");
-        work.addTab("Stress view", Icons.get("stress"), new PendingPanel("stressView", "Stress view",
-                "Kt and Kf against the radius, with the tolerance band and the smallest radius that meets your target.",
-                "stress"), "Stress concentration across the tolerance (Alt+4)");
-        work.addTab("Check", Icons.get("check"), new PendingPanel("checkPanel", "Check",
-                "Import measured points (CSV, or drop a file here), run the inspection, and see the verdict under every callout.",
-                "check"), "Conformance of a measured contour (Alt+5)");
+        stressPanel = new StressViewPanel(session, services.background());
+        work.addTab("Stress view", Icons.get("stress"), stressPanel, "Stress concentration across the tolerance (Alt+4)");
+        checkPanel = new CheckPanel(session, new CheckRequests(services.json()), services.background(), services.clock(),
+                status::show);
+        work.addTab("Check", Icons.get("check"), checkPanel, "Conformance of a measured contour (Alt+5)");
         work.addTab("Practice editor", Icons.get("practice"), new PendingPanel("practiceEditor", "Practice editor",
                 "The rules of the active practice packs in a form, validated as you type, with each pack's examples runnable in one click.",
                 "practice"), "Rules and templates of the practice packs (Alt+7)");
-        notesPanel = new PendingPanel("notesPanel", "Notes",
-                "Search the practice notes as you type, with highlighted snippets and facets.", "notes");
+        notesPanel = new NotesPanel(services.search(), services.background(), status::show);
         JSplitPane right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);
         right.setResizeWeight(1);
         right.setBorder(null);
@@ -174,8 +182,9 @@ public final class MainWindow {
         java.awt.Rectangle screen = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment().getMaximumWindowBounds();
         int w = Math.min(1480, screen.width);
         frame.setSize(w, Math.min(900, screen.height));
-        main.setDividerLocation(Math.min(470, w / 3));
-        right.setDividerLocation(w - Math.min(470, w / 3) - Math.min(240, w / 6));
+        int partWidth = Math.min(470, w * 10 / 32);
+        main.setDividerLocation(partWidth);
+        right.setDividerLocation(w - partWidth - Math.min(290, w * 2 / 9));
         frame.setLocationRelativeTo(null);
         rebuildRecent();
     }
@@ -357,7 +366,7 @@ public final class MainWindow {
 
     private void focusPart() { partPanel.table().requestFocusInWindow(); }
 
-    private void focusNotes() { notesPanel.requestFocusInWindow(); }
+    private void focusNotes() { notesPanel.focusSearch(); }
 
     /** Shows work-area tab {@code index} and moves the keyboard focus into it. */
     public void showTab(int index) {
@@ -386,6 +395,7 @@ public final class MainWindow {
         if (!confirmDiscard()) return;
         services.recovery().clear();
         frame.dispose();
+        if (notesStore != null) notesStore.close();
         services.shutdown();
     }
 
@@ -496,10 +506,13 @@ public final class MainWindow {
         status.progress("Loading practice packs…", -1, null);
         List<Path> team = new ArrayList<>();
         for (String t : settings.teamPacks()) team.add(Path.of(t));
-        Path personal = settings.personalPack() == null ? null : Path.of(settings.personalPack());
+        Path personal = settings.personalPack() == null ? services.defaultPersonalPack() : Path.of(settings.personalPack());
         new SwingWorker<PackStack, Void>() {
             @Override
-            protected PackStack doInBackground() { return PackStack.load(team, personal); }
+            protected PackStack doInBackground() {
+                NotesPaths.ensurePersonalPack(personal);
+                return PackStack.load(team, personal);
+            }
 
             @Override
             protected void done() { packsLoaded(this); }
@@ -513,6 +526,8 @@ public final class MainWindow {
             packs.packs().forEach(p -> names.append(p.name()).append(" (").append(p.layer()).append(")<br>"));
             status.packs("Packs: " + packs.packs().size(), "<html>" + names + "</html>");
             status.done("Ready");
+            stressPanel.setMechanics(FilletMechanics.load(packs));
+            openNotesInBackground(packs);
             if (!packs.problems().isEmpty()) {
                 notice.show("A practice pack could not be opened: " + packs.problems().get(0).getMessage(), "OK", null, null, null);
             }
@@ -523,6 +538,30 @@ public final class MainWindow {
             status.packs("Packs: none", null);
         }
     }
+
+    private void openNotesInBackground(PackStack stack) {
+        status.progress("Opening the notes index…", -1, null);
+        PackStack s = stack;
+        java.util.concurrent.CompletableFuture
+                .supplyAsync(() -> NotesStore.open(s, NotesStore.indexFolderFor(services.notesIndexRoot(), s)), services.background())
+                .whenComplete((store, e) -> javax.swing.SwingUtilities.invokeLater(() -> notesOpened(store, e)));
+    }
+
+    private void notesOpened(NotesStore store, Throwable e) {
+        if (e != null) {
+            status.done("The notes index could not open: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));
+            return;
+        }
+        notesStore = store;
+        notesPanel.setStore(store);
+        status.done("Ready · " + store.report().describe());
+    }
+
+    public NotesPanel notesPanel() { return notesPanel; }
+
+    public StressViewPanel stressPanel() { return stressPanel; }
+
+    public CheckPanel checkPanel() { return checkPanel; }
 
     /** The Swing action of command {@code id}, for tests and toolbars. */
     public Action action(String id) { return actions.get(id); }

@@ -1,0 +1,109 @@
+package org.arcwright.app.notes;
+
+import java.awt.Color;
+import java.awt.Component;
+import java.awt.Dimension;
+import java.awt.Font;
+import java.awt.FontMetrics;
+import java.awt.Graphics;
+import java.awt.Graphics2D;
+import java.awt.RenderingHints;
+import java.awt.font.FontRenderContext;
+import java.awt.font.LineBreakMeasurer;
+import java.awt.font.TextAttribute;
+import java.awt.font.TextLayout;
+import java.text.AttributedString;
+import java.util.ArrayList;
+import java.util.List;
+import javax.swing.JComponent;
+import javax.swing.JList;
+import javax.swing.ListCellRenderer;
+import javax.swing.UIManager;
+import org.arcwright.app.shell.Themes;
+import org.arcwright.notes.NoteHit;
+
+/**
+ * Paints one search hit: the title in bold with its pack, then up to three lines of the snippet with
+ * the matched words in bold. Drawn with text layouts rather than an HTML label, so that listing
+ * thirty hits as the user types costs the event thread next to nothing.
+ */
+final class HitCell extends JComponent implements ListCellRenderer<NoteHit> {
+    private static final long serialVersionUID = 1L;
+    private static final int SNIPPET_LINES = 3;
+    private transient NoteHit hit;
+    private boolean selected;
+    private Color background;
+    private Color foreground;
+
+    @Override
+    public Component getListCellRendererComponent(JList<? extends NoteHit> list, NoteHit value, int index,
+                                                  boolean isSelected, boolean focus) {
+        hit = value;
+        selected = isSelected;
+        background = isSelected ? list.getSelectionBackground() : list.getBackground();
+        foreground = isSelected ? list.getSelectionForeground() : list.getForeground();
+        setFont(list.getFont());
+        return this;
+    }
+
+    @Override
+    public Dimension getPreferredSize() {
+        FontMetrics fm = getFontMetrics(UIManager.getFont("List.font"));
+        return new Dimension(120, fm.getHeight() * (1 + SNIPPET_LINES) + 10);
+    }
+
+    @Override
+    protected void paintComponent(Graphics g) {
+        if (hit == null) return;
+        Graphics2D g2 = (Graphics2D) g.create();
+        try {
+            g2.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+            g2.setColor(background);
+            g2.fillRect(0, 0, getWidth(), getHeight());
+            Font base = getFont();
+            FontMetrics fm = g2.getFontMetrics(base);
+            int x = 6;
+            int y = 4 + fm.getAscent();
+            g2.setFont(base.deriveFont(Font.BOLD));
+            g2.setColor(foreground);
+            g2.drawString(hit.title(), x, y);
+            int w = g2.getFontMetrics().stringWidth(hit.title());
+            g2.setFont(base.deriveFont(base.getSize2D() - 1));
+            g2.setColor(selected ? foreground : Themes.color("Arcwright.help.foreground"));
+            g2.drawString("  " + hit.pack(), x + w, y);
+            paintSnippet(g2, base.deriveFont(base.getSize2D() - 1), x, y + fm.getDescent(), getWidth() - 2 * x);
+        } finally {
+            g2.dispose();
+        }
+    }
+
+    private void paintSnippet(Graphics2D g2, Font font, int x, int top, int width) {
+        String marked = hit.snippet() == null ? "" : hit.snippet().replaceAll("\\s+", " ").strip();
+        StringBuilder plain = new StringBuilder();
+        List<int[]> bold = new ArrayList<>();
+        int i = 0;
+        int start = -1;
+        while (i < marked.length()) {
+            if (marked.startsWith("**", i)) {
+                if (start < 0) start = plain.length(); else { bold.add(new int[] {start, plain.length()}); start = -1; }
+                i += 2;
+            } else {
+                plain.append(marked.charAt(i++));
+            }
+        }
+        if (plain.length() == 0 || width < 20) return;
+        AttributedString text = new AttributedString(plain.toString());
+        text.addAttribute(TextAttribute.FONT, font);
+        for (int[] b : bold) text.addAttribute(TextAttribute.FONT, font.deriveFont(Font.BOLD), b[0], b[1]);
+        g2.setColor(selected ? foreground : UIManager.getColor("Label.foreground"));
+        FontRenderContext frc = g2.getFontRenderContext();
+        LineBreakMeasurer m = new LineBreakMeasurer(text.getIterator(), frc);
+        float y = top;
+        for (int line = 0; line < SNIPPET_LINES && m.getPosition() < plain.length(); line++) {
+            TextLayout layout = m.nextLayout(width);
+            y += layout.getAscent();
+            layout.draw(g2, x, y);
+            y += layout.getDescent() + layout.getLeading();
+        }
+    }
+}

@@ -1,0 +1,211 @@
+package org.arcwright.app.notes;
+
+import java.time.LocalDate;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Executor;
+import java.util.concurrent.ExecutorService;
+import java.util.function.Consumer;
+import javax.swing.DefaultListModel;
+import javax.swing.JButton;
+import javax.swing.JCheckBox;
+import javax.swing.JLabel;
+import javax.swing.JList;
+import javax.swing.JOptionPane;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JTextArea;
+import javax.swing.JTextField;
+import javax.swing.SwingUtilities;
+import javax.swing.Timer;
+import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
+import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.model.NoteSearch;
+import org.arcwright.app.shell.Icons;
+import org.arcwright.app.shell.Themes;
+import org.arcwright.notes.FacetCount;
+import org.arcwright.notes.FiledNote;
+import org.arcwright.notes.Note;
+import org.arcwright.notes.NoteFacet;
+import org.arcwright.notes.NoteHit;
+import org.arcwright.notes.NotesStore;
+import org.arcwright.notes.SearchResult;
+
+/**
+ * The Notes side panel: search the practice notes as you type (debounced, searched off the UI
+ * thread), matched words in bold in each snippet, facets to narrow by function, standard, process
+ * and pack, a note opened below the list, and a form to write a note into the personal pack.
+ */
+public final class NotesPanel extends JPanel {
+    private static final long serialVersionUID = 1L;
+    private static final List<NoteFacet> FACETS = List.of(NoteFacet.FUNCTION, NoteFacet.PROCESS, NoteFacet.STANDARD,
+            NoteFacet.PACK);
+    private final transient Executor background;
+    private final transient Consumer<String> status;
+    private transient NotesStore store;
+    private transient NoteSearch search;
+    private final JTextField query = new JTextField();
+    private final DefaultListModel<NoteHit> hits = new DefaultListModel<>();
+    private final JList<NoteHit> list = new JList<>(hits);
+    private final JPanel facets = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 0", "[grow,fill]", ""));
+    private final JLabel count = new JLabel("Notes load after the window opens…");
+    private final JTextArea reader = new JTextArea();
+    private final JButton write = new JButton("Write a note…", Icons.get("notes"));
+    private final Timer debounce = new Timer(150, e -> searchNow());
+    private boolean rebuildingFacets;
+
+    /** @param searchThread a single thread for searches, so they run in order off the UI thread */
+    public NotesPanel(ExecutorService searchThread, Executor background, Consumer<String> status) {
+        super(new MigLayout("insets 8, wrap 1, gap 4", "[grow,fill]", "[][][][grow 60,fill][][grow 40,fill]"));
+        this.background = background;
+        this.status = status;
+        setName("notesPanel");
+        query.setName("notesQuery");
+        list.setName("notesHits");
+        reader.setName("notesReader");
+        query.putClientProperty("JTextField.placeholderText", "Search notes…");
+        query.putClientProperty("JTextField.leadingIcon", Icons.get("finder"));
+        query.putClientProperty("JTextField.showClearButton", true);
+        query.setEnabled(false);
+        query.setToolTipText("Unavailable until the notes index has opened");
+        write.setEnabled(false);
+        write.setToolTipText("Unavailable until the notes index has opened");
+        write.addActionListener(e -> writeNote());
+        count.putClientProperty("FlatLaf.styleClass", "small");
+        count.setName("notesCount");
+        list.setCellRenderer(new HitCell());
+        list.addListSelectionListener(e -> opened(e.getValueIsAdjusting()));
+        reader.setEditable(false);
+        reader.setLineWrap(true);
+        reader.setWrapStyleWord(true);
+        facets.setOpaque(false);
+        debounce.setRepeats(false);
+        query.getDocument().addDocumentListener(new DocumentListener() {
+            public void insertUpdate(DocumentEvent e) { typed(); }
+            public void removeUpdate(DocumentEvent e) { typed(); }
+            public void changedUpdate(DocumentEvent e) { typed(); }
+        });
+        JLabel title = new JLabel("Notes");
+        title.putClientProperty("FlatLaf.styleClass", "h4");
+        add(title, "split 2");
+        add(write, "gapleft push");
+        add(query, "wmin 10");
+        add(count);
+        add(new JScrollPane(list), "wmin 10, hmin 10");
+        add(facets, "wmin 10");
+        add(new JScrollPane(reader), "wmin 10, hmin 10");
+        this.search = null;
+        this.searchThread = searchThread;
+    }
+
+    private final transient ExecutorService searchThread;
+
+    /** Called once the notes store has opened; enables searching and lists every note. */
+    public void setStore(NotesStore s) {
+        this.store = s;
+        this.search = new NoteSearch(q -> s.search(q.text(), q.filters(), q.limit()), searchThread,
+                r -> SwingUtilities.invokeLater(() -> show(r)));
+        query.setEnabled(true);
+        query.setToolTipText("Words of the note: matched in titles, tags and text, as you type");
+        write.setEnabled(true);
+        write.setToolTipText("Write a practice note into your personal pack");
+        search.run();
+    }
+
+    /** Moves the keyboard focus to the search field. */
+    public void focusSearch() { query.requestFocusInWindow(); }
+
+    public JTextField queryField() { return query; }
+
+    /** Titles of the notes listed now, for tests. */
+    public List<String> listedTitles() {
+        return Arrays.stream(hits.toArray()).map(h -> ((NoteHit) h).title()).toList();
+    }
+
+    private void typed() { debounce.restart(); }
+
+    private void searchNow() { if (search != null) search.setQuery(query.getText()); }
+
+    private void show(SearchResult r) {
+        if (!r.query().equals(search.query())) return;
+        NoteHit selected = list.getSelectedValue();
+        hits.clear();
+        for (NoteHit h : r.hits()) hits.addElement(h);
+        count.setText(r.totalHits() + (r.totalHits() == 1 ? " note" : " notes") + (r.query().isBlank() ? "" : " for '" + r.query() + "'"));
+        if (selected != null) {
+            for (int i = 0; i < hits.size(); i++) if (hits.get(i).id().equals(selected.id())) list.setSelectedIndex(i);
+        }
+        showFacets(r.facets());
+    }
+
+    private void showFacets(Map<NoteFacet, List<FacetCount>> counts) {
+        rebuildingFacets = true;
+        facets.removeAll();
+        for (NoteFacet f : FACETS) {
+            List<FacetCount> values = counts.getOrDefault(f, List.of());
+            if (values.isEmpty()) continue;
+            JLabel l = new JLabel(f.key());
+            l.putClientProperty("FlatLaf.styleClass", "small");
+            l.setForeground(Themes.color("Arcwright.help.foreground"));
+            facets.add(l, "gaptop 4");
+            int shown = 0;
+            for (FacetCount c : values) {
+                if (shown++ == 4) break;
+                JCheckBox b = new JCheckBox(c.value() + " (" + c.count() + ")", search.isTicked(f, c.value()));
+                b.addActionListener(e -> ticked(f, c.value(), b.isSelected()));
+                facets.add(b, "wmin 10");
+            }
+        }
+        rebuildingFacets = false;
+        facets.revalidate();
+        facets.repaint();
+    }
+
+    private void ticked(NoteFacet f, String value, boolean on) {
+        if (!rebuildingFacets) search.tick(f, value, on);
+    }
+
+    private void opened(boolean adjusting) {
+        NoteHit h = list.getSelectedValue();
+        if (adjusting || h == null || store == null) return;
+        NotesStore s = store;
+        java.util.concurrent.CompletableFuture.supplyAsync(() -> s.get(h.id()), background)
+                .whenComplete((n, e) -> SwingUtilities.invokeLater(() -> read(n.orElse(null))));
+    }
+
+    private void read(FiledNote n) {
+        if (n == null) return;
+        Note note = n.note();
+        reader.setText(note.title() + "\n" + String.join(", ", note.standards()) + " · " + n.pack() + "\n\n" + note.body());
+        reader.setCaretPosition(0);
+    }
+
+    private void writeNote() {
+        NoteEditor editor = new NoteEditor(list.getSelectedValue() == null || store == null ? null
+                : store.get(list.getSelectedValue().id()).map(FiledNote::note).orElse(null));
+        int answer = JOptionPane.showConfirmDialog(this, editor, "Practice note", JOptionPane.OK_CANCEL_OPTION,
+                JOptionPane.PLAIN_MESSAGE);
+        if (answer != JOptionPane.OK_OPTION) return;
+        Note note;
+        try {
+            note = editor.note(LocalDate.now());
+        } catch (IllegalArgumentException e) {
+            status.accept("Note not saved: " + e.getMessage());
+            return;
+        }
+        NotesStore s = store;
+        java.util.concurrent.CompletableFuture.supplyAsync(() -> s.save(note), background)
+                .whenComplete((f, e) -> SwingUtilities.invokeLater(() -> saved(f, e)));
+    }
+
+    private void saved(FiledNote f, Throwable e) {
+        if (e != null) {
+            status.accept("Note not saved: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));
+            return;
+        }
+        status.accept("Saved note " + f.note().id() + " to " + f.location());
+        search.run();
+    }
+}
