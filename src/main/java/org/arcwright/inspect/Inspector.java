@@ -80,6 +80,9 @@ public final class Inspector {
                 cr = ControlledRadiusCheck.evaluate(cb.corner(), cb.radius(), rl.min(), rl.max(), env, blend,
                         req.window(), res);
                 pass = cr.pass();
+                if (cr.worstIndex() >= 0 && (worst == null || cr.worstExcess() > worst.excess())) {
+                    worst = worstOf(pts, cr.worstIndex(), cr.worstExcess(), "radius");
+                }
                 notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s-long windows along the blend, stepped by a quarter window (%d windows)",
                         fmt(cr.windowLength()), cr.windows()));
             }
