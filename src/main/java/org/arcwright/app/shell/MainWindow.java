@@ -88,7 +88,7 @@ public final class MainWindow {
     private PartPanel partPanel;
     private DecidePanel decidePanel;
     private NotesPanel notesPanel;
-    private StressViewPanel stressPanel;
+    private LazyTab<StressViewPanel> stressTab;
     private CheckPanel checkPanel;
     private PackStack packs;
     private NotesStore notesStore;
@@ -156,8 +156,8 @@ public final class MainWindow {
         work.setName("workArea");
         work.addTab("Decide", Icons.get("decide"), decidePanel, "The guided form and its recommendations (Alt+2)");
         work.addTab("Zone view", Icons.get("zone"), new ZoneViewPanel(session), "The zone of the chosen control (Alt+3)");
-        stressPanel = new StressViewPanel(session, services.background());
-        work.addTab("Stress view", Icons.get("stress"), stressPanel, "Stress concentration across the tolerance (Alt+4)");
+        stressTab = new LazyTab<>("stressView", () -> new StressViewPanel(session, services.background()));
+        work.addTab("Stress view", Icons.get("stress"), stressTab, "Stress concentration across the tolerance (Alt+4)");
         checkPanel = new CheckPanel(session, new CheckRequests(services.json()), services.background(), services.clock(),
                 status::show);
         work.addTab("Check", Icons.get("check"), checkPanel, "Conformance of a measured contour (Alt+5)");
@@ -507,11 +507,12 @@ public final class MainWindow {
         List<Path> team = new ArrayList<>();
         for (String t : settings.teamPacks()) team.add(Path.of(t));
         Path personal = settings.personalPack() == null ? services.defaultPersonalPack() : Path.of(settings.personalPack());
-        new SwingWorker<PackStack, Void>() {
+        new SwingWorker<Loaded, Void>() {
             @Override
-            protected PackStack doInBackground() {
+            protected Loaded doInBackground() {
                 NotesPaths.ensurePersonalPack(personal);
-                return PackStack.load(team, personal);
+                PackStack stack = PackStack.load(team, personal);
+                return new Loaded(stack, FilletMechanics.load(stack));
             }
 
             @Override
@@ -519,14 +520,18 @@ public final class MainWindow {
         }.execute();
     }
 
-    private void packsLoaded(SwingWorker<PackStack, Void> worker) {
+    /** What loads in the background after the window shows. */
+    private record Loaded(PackStack packs, FilletMechanics mechanics) {}
+
+    private void packsLoaded(SwingWorker<Loaded, Void> worker) {
         try {
-            packs = worker.get();
+            Loaded loaded = worker.get();
+            packs = loaded.packs();
             StringBuilder names = new StringBuilder();
             packs.packs().forEach(p -> names.append(p.name()).append(" (").append(p.layer()).append(")<br>"));
             status.packs("Packs: " + packs.packs().size(), "<html>" + names + "</html>");
             status.done("Ready");
-            stressPanel.setMechanics(FilletMechanics.load(packs));
+            stressTab.whenBuilt(p -> p.setMechanics(loaded.mechanics()));
             openNotesInBackground(packs);
             if (!packs.problems().isEmpty()) {
                 notice.show("A practice pack could not be opened: " + packs.problems().get(0).getMessage(), "OK", null, null, null);
@@ -559,7 +564,7 @@ public final class MainWindow {
 
     public NotesPanel notesPanel() { return notesPanel; }
 
-    public StressViewPanel stressPanel() { return stressPanel; }
+    public StressViewPanel stressPanel() { return stressTab.panel(); }
 
     public CheckPanel checkPanel() { return checkPanel; }
 
