@@ -12,6 +12,8 @@ import picocli.CommandLine.Command;
         subcommands = {
                 LimitsCommand.class,
                 GeneralToleranceCommand.class,
+                AdviseCommand.class,
+                PackCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
