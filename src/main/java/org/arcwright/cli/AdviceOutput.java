@@ -100,7 +100,7 @@ final class AdviceOutput {
         StringBuilder sb = new StringBuilder();
         String u = String.valueOf(m.get("units"));
         int p = "in".equals(u) ? 4 : 3;
-        append(sb, (m.containsKey("zone") ? "radius range the zone admits " : "limits ") + num(m, "min", p) + " to "
+        append(sb, m.containsKey("zone") ? "radius range the zone admits" : "limits", num(m, "min", p) + " to "
                 + num(m, "max", p) + " " + u);
         if (m.containsKey("zone")) append(sb, "zone", m.get("zone") + (m.containsKey("tierZones") ? " (tiers " + m.get("tierZones") + ")" : ""));
         append(sb, "crescent", num(m, "crescentWidth", p + 1));
