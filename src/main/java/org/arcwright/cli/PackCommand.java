@@ -50,9 +50,16 @@ final class PackCommand implements Runnable {
         @Override
         public Integer call() {
             PracticePack checked = PracticePack.open(dir, PackLayer.TEAM, new JsonFiles());
-            List<Path> layers = new java.util.ArrayList<>(below);
-            layers.add(dir);
-            PackStack stack = PackStack.load(layers, null);
+            PackStack stack;
+            PracticePack builtIn = PracticePack.open(PackStack.builtInRoot(), PackLayer.BUILT_IN, new JsonFiles());
+            if (checked.name().equals(builtIn.name()) && below.isEmpty()) {
+                // the built-in pack itself, e.g. knowledge/ while editing it: check it alone
+                stack = new PackStack(List.of(PracticePack.open(dir, PackLayer.BUILT_IN, new JsonFiles())), List.of());
+            } else {
+                List<Path> layers = new java.util.ArrayList<>(below);
+                layers.add(dir);
+                stack = PackStack.load(layers, null);
+            }
             RuleBook book = RuleBook.load(stack);
             PackCheck.Report report = new PackCheck(Advisors.standard(book)).run(checked.name());
             PrintWriter out = spec.commandLine().getOut();
