@@ -234,18 +234,19 @@ public final class Advisor {
             if (table.isPresent()) {
                 try {
                     GeneralTolerance g = table.get().lookup(cls, nomMm);
+                    String label = generalLabel(table.get(), cls);
                     d.fromPlusMinus(g.plusMinus() * s.factor() / mmPer, CalloutPlan.Disposition.EQUAL,
-                            generalLabel(tableId, cls) + " ±" + plain(g.plusMinus()) + " mm (" + table.get().source() + ")");
-                    d.general(tableId, cls, generalLabel(tableId, cls));
+                            label + " ±" + plain(g.plusMinus()) + " mm (" + table.get().source() + ")");
+                    d.general(tableId, cls, label);
                     return;
                 } catch (InputProblem p) {
-                    cautions.add("The general tolerance " + generalLabel(tableId, cls) + " gives no value here ("
+                    cautions.add("The general tolerance " + generalLabel(table.get(), cls) + " gives no value here ("
                             + p.problem() + "): state the tolerance on the radius.");
                 }
             } else {
                 cautions.add("No general-tolerance table '" + tableId + "' is loaded; the process capability sizes it.");
             }
-            d.general(tableId, cls, generalLabel(tableId, cls));
+            d.general(tableId, cls, tableId + " class " + cls);
         }
         CapabilityTable cap = book.capability();
         Optional<Double> t = cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), nomMm);
@@ -261,9 +262,9 @@ public final class Advisor {
         }
     }
 
-    private static String generalLabel(String tableId, String cls) {
-        if (tableId.startsWith("iso2768-1")) return "ISO 2768-" + cls;
-        return tableId + " class " + cls;
+    private static String generalLabel(GeneralToleranceTable table, String cls) {
+        if (table.id().startsWith("iso2768-1")) return "ISO 2768-" + cls;
+        return table.title() + ", class " + cls;
     }
 
     /** The case's facts that many rules share, computed once. */

@@ -81,7 +81,8 @@ public final class PackCheck {
 
     private ExampleResult runOne(RuleBook.Entry e, RuleExample ex, boolean own) {
         RuleExample.Expectation want = ex.expect();
-        String expected = want.first() + (want.callout() == null ? "" : " (" + want.callout().key() + ")");
+        String expected = want.first() + (want.callout() == null ? "" : " (" + want.callout().key() + ")")
+                + (want.textContains() == null ? "" : " drawn with \"" + want.textContains() + "\"");
         String actual;
         boolean passed;
         try {
@@ -93,7 +94,8 @@ public final class PackCheck {
                 Recommendation r = advice.first().get();
                 actual = r.ruleId() + " (" + r.callout().typeName() + ")" + (r.demoted() ? " demoted" : "") + ": " + r.text();
                 passed = r.ruleId().equals(want.first())
-                        && (want.callout() == null || r.callout().typeName().equals(want.callout().key()));
+                        && (want.callout() == null || r.callout().typeName().equals(want.callout().key()))
+                        && (want.textContains() == null || r.text().contains(want.textContains()));
             }
         } catch (InputProblem p) {
             actual = "error: " + p.getMessage();

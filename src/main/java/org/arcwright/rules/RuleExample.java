@@ -30,15 +30,18 @@ public record RuleExample(String name, DesignCase designCase, Expectation expect
     /**
      * @param first the rule id that must rank first
      * @param callout the callout type it must carry, or null for any
+     * @param textContains text the drawn callout must contain, or null
      */
     @JsonInclude(JsonInclude.Include.NON_NULL)
-    public record Expectation(String first, CalloutPlan.CalloutKind callout) {
+    public record Expectation(String first, CalloutPlan.CalloutKind callout, String textContains) {
         @JsonCreator
         public Expectation(@JsonProperty(value = "first", required = true) String first,
-                           @JsonProperty("callout") CalloutPlan.CalloutKind callout) {
+                           @JsonProperty("callout") CalloutPlan.CalloutKind callout,
+                           @JsonProperty("textContains") String textContains) {
             if (first == null || first.isBlank()) throw new IllegalArgumentException("expect.first must name a rule id");
             this.first = first;
             this.callout = callout;
+            this.textContains = textContains;
         }
     }
 }
