@@ -120,8 +120,7 @@ public final class Advisor {
         Draft d = new Draft(plan, c, ctx.places);
         List<String> cautions = new ArrayList<>(rule.cautions());
         List<String> trace = new ArrayList<>();
-        trace.add("rule " + rule.id() + " from " + e.pack() + (e.replaces() == null ? "" : " (overrides " + e.replaces()
-                + ")") + ", weight " + rule.weight());
+        trace.add(e.describe());
         List<String> fired = rule.when().firedBy(facts);
         trace.add(fired.isEmpty() ? "fires on every case" : "fired by " + String.join(", ", fired));
         size(d, plan, c, cautions);
@@ -482,8 +481,7 @@ public final class Advisor {
         }
 
         private String frame(double zone, List<DatumReference> datums) {
-            StringBuilder sb = new StringBuilder("|⌓|").append(fmt(zone, places).replaceAll("0+$", "").replaceAll("\\.$", ""))
-                    .append('|');
+            StringBuilder sb = new StringBuilder("|⌓|").append(plain(zone)).append('|');
             for (DatumReference r : datums) sb.append(r.text()).append('|');
             return sb.toString();
         }
@@ -525,35 +523,78 @@ public final class Advisor {
         }
     }
 
+    private static final double[] POW10 = {1, 1e1, 1e2, 1e3, 1e4, 1e5, 1e6, 1e7, 1e8, 1e9};
+    /** Slack for binary fractions such as 2.2 - 0.1 when rounding toward a decimal grid. */
+    private static final double GRID_SLACK = 1e-9;
+
+    /** {@code v} on the decimal grid of {@code places}; plain arithmetic, as BigDecimal costs too much per case. */
     static double roundTo(double v, int places, RoundingMode mode) {
-        return BigDecimal.valueOf(v).setScale(places, mode).doubleValue();
+        if (!Double.isFinite(v) || places < 0 || places >= POW10.length || Math.abs(v) > 1e9) {
+            return BigDecimal.valueOf(v).setScale(places, mode).doubleValue();
+        }
+        double scale = POW10[places];
+        double x = v * scale;
+        double n = switch (mode) {
+            case CEILING -> Math.ceil(x - GRID_SLACK);
+            case FLOOR -> Math.floor(x + GRID_SLACK);
+            case HALF_UP -> Math.floor(Math.abs(x) + 0.5 + GRID_SLACK) * Math.signum(x);
+            default -> Math.rint(x);
+        };
+        return n / scale;
     }
 
     private static double round(double v) {
-        return Double.isFinite(v) ? roundTo(v, 6, RoundingMode.HALF_EVEN) : v;
+        return roundTo(v, 6, RoundingMode.HALF_EVEN);
     }
 
     private static double round2(double v) {
         return roundTo(v, 2, RoundingMode.HALF_EVEN);
     }
 
+    /** {@code v} with exactly {@code places} decimals. */
     static String fmt(double v, int places) {
-        return BigDecimal.valueOf(v).setScale(places, RoundingMode.HALF_EVEN).toPlainString();
+        if (!Double.isFinite(v) || places >= POW10.length || Math.abs(v) > 1e9) {
+            return BigDecimal.valueOf(v).setScale(places, RoundingMode.HALF_EVEN).toPlainString();
+        }
+        long n = Math.round(Math.rint(v * POW10[places]));
+        boolean negative = n < 0;
+        String digits = Long.toString(Math.abs(n));
+        if (places == 0) return (negative ? "-" : "") + digits;
+        StringBuilder sb = new StringBuilder(digits.length() + 3);
+        if (negative) sb.append('-');
+        if (digits.length() <= places) {
+            sb.append("0.");
+            for (int i = digits.length(); i < places; i++) sb.append('0');
+            sb.append(digits);
+        } else {
+            sb.append(digits, 0, digits.length() - places).append('.').append(digits, digits.length() - places, digits.length());
+        }
+        return sb.toString();
     }
 
+    /** {@code v} to at most six decimals, trailing zeros dropped. */
     static String plain(double v) {
-        BigDecimal b = BigDecimal.valueOf(v).round(new java.math.MathContext(6)).stripTrailingZeros();
-        return b.scale() < 0 ? b.setScale(0).toPlainString() : b.toPlainString();
+        String s = fmt(v, 6);
+        if (s.indexOf('.') < 0) return s;
+        int end = s.length();
+        while (s.charAt(end - 1) == '0') end--;
+        if (s.charAt(end - 1) == '.') end--;
+        return s.substring(0, end);
     }
+
+    /** The figures that decide a recommendation, for the trace; the full set is in its numbers. */
+    private static final List<String> DECIDING = List.of("min", "max", "zone", "ktAtMin", "kfAtMin",
+            "minRadiusForTarget", "seats", "seatingMargin");
 
     private static String summary(Map<String, Object> numbers) {
-        List<String> parts = new ArrayList<>();
-        for (var e : numbers.entrySet()) {
-            if (e.getKey().equals("toleranceSource") || e.getKey().equals("stressMethod") || e.getKey().equals("units")) continue;
-            Object v = e.getValue();
-            parts.add(e.getKey() + "=" + (v instanceof Double dv ? plain(dv) : v));
+        StringBuilder sb = new StringBuilder(80);
+        for (String k : DECIDING) {
+            Object v = numbers.get(k);
+            if (v == null) continue;
+            if (sb.length() > 0) sb.append(", ");
+            sb.append(k).append('=').append(v instanceof Double dv ? plain(dv) : v.toString());
         }
-        return String.join(", ", parts);
+        return sb.toString();
     }
 
     private static List<String> dedupe(List<String> list) {

@@ -39,8 +39,14 @@ public final class RuleBook {
      * @param layer that pack's layer
      * @param file the file it was read from
      * @param replaces the name of the lower pack whose rule of the same id it overrides, or null
+     * @param describe the rule, its pack and weight in words, as the reasoning trace starts
      */
-    public record Entry(Rule rule, String pack, PackLayer layer, String file, String replaces) {
+    public record Entry(Rule rule, String pack, PackLayer layer, String file, String replaces, String describe) {
+        public Entry(Rule rule, String pack, PackLayer layer, String file, String replaces) {
+            this(rule, pack, layer, file, replaces, "rule " + rule.id() + " from " + pack
+                    + (replaces == null ? "" : " (overrides " + replaces + ")") + ", weight " + rule.weight());
+        }
+
         public Entry {
             Objects.requireNonNull(rule, "rule");
         }
