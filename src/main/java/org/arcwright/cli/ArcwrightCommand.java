@@ -12,6 +12,8 @@ import picocli.CommandLine.Command;
         subcommands = {
                 LimitsCommand.class,
                 GeneralToleranceCommand.class,
+                FilletStressCommand.class,
+                ClearanceCommand.class,
                 AdviseCommand.class,
                 PackCommand.class,
                 picocli.CommandLine.HelpCommand.class
