@@ -62,7 +62,7 @@ final class AdviseCommand implements Callable<Integer> {
         }
         PackStack stack = PackStack.load(packs, null);
         RuleBook book = RuleBook.load(stack);
-        Advisor advisor = Advisors.standard(book);
+        Advisor advisor = Advisors.standard(stack, book);
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         for (InputProblem p : book.problems()) err.println("arcwright advise: pack problem, skipped: " + p.getMessage());

@@ -1,7 +1,8 @@
 package org.arcwright.cli;
 
+import org.arcwright.pack.PackStack;
 import org.arcwright.rules.Advisor;
-import org.arcwright.rules.FilletChecks;
+import org.arcwright.rules.MechanicsChecks;
 import org.arcwright.rules.NoteLinker;
 import org.arcwright.rules.RuleBook;
 
@@ -9,7 +10,8 @@ import org.arcwright.rules.RuleBook;
 final class Advisors {
     private Advisors() {}
 
-    static Advisor standard(RuleBook book) {
-        return new Advisor(book, FilletChecks.NONE, NoteLinker.NONE);
+    /** Rules of {@code stack}, the mechanics checks; notes are linked once the notes store lands. */
+    static Advisor standard(PackStack stack, RuleBook book) {
+        return new Advisor(book, MechanicsChecks.standard(stack), NoteLinker.NONE);
     }
 }

@@ -61,7 +61,7 @@ final class PackCommand implements Runnable {
                 stack = PackStack.load(layers, null);
             }
             RuleBook book = RuleBook.load(stack);
-            PackCheck.Report report = new PackCheck(Advisors.standard(book)).run(checked.name());
+            PackCheck.Report report = new PackCheck(Advisors.standard(stack, book)).run(checked.name());
             PrintWriter out = spec.commandLine().getOut();
             if (format == OutputFormat.json) {
                 java.util.Map<String, Object> m = new java.util.LinkedHashMap<>();

@@ -142,8 +142,14 @@ public final class Advisor {
                 String why = "the smallest radius the callout allows, " + fmt(d.lo(), d.places) + ", gives "
                         + m.factor() + " over the target " + plain(m.target()) + " (the smallest radius that meets it is "
                         + fmt(m.radius(), d.places + 1) + ")";
-                if (d.raiseLowerEnd(m.radius())) {
+                double bandBefore = d.hi() - d.lo();
+                if (d.raiseLowerEnd(m.radius(), ctx.stepHeight())) {
                     cautions.add("Limits adjusted: " + why + "; the lower end was raised to " + fmt(d.lo(), d.places) + ".");
+                    if (d.hi() - d.lo() < bandBefore - 1e-9) {
+                        cautions.add("The band had to shrink to " + fmt(d.hi() - d.lo(), d.places) + " to stay under the step "
+                                + "height h = " + fmt(ctx.stepHeight(), d.places) + ": check the shop can hold it, or "
+                                + "consider a relief groove, an undercut or a larger step.");
+                    }
                     trace.add("adjusted for the stress target: " + d.describeRange());
                 } else {
                     demoted = true;
@@ -189,7 +195,7 @@ public final class Advisor {
                 mech.put("target" + m.factor(), m.target());
                 if (m.found()) mech.put("minRadiusForTarget", round(m.radius()));
             });
-            cautions.addAll(checks.stressCautions());
+            cautions.addAll(withoutPlainDeference(checks.stressCautions()));
         }
         if (matingCase) {
             checks.seating(c, d.hi()).ifPresent(s -> {
@@ -198,7 +204,7 @@ public final class Advisor {
                 mech.put("largestSeatingRadius", round(s.largestRadius()));
                 trace.add("seating: " + s.message());
             });
-            cautions.addAll(checks.seatingCautions());
+            cautions.addAll(withoutPlainDeference(checks.seatingCautions()));
         }
         Callout callout = d.callout(datums);
         String text = d.text(callout);
@@ -276,6 +282,11 @@ public final class Advisor {
             this.c = c;
             int nominalPlaces = Math.max(0, BigDecimal.valueOf(c.nominalRadius()).stripTrailingZeros().scale());
             this.places = Math.max(c.units() == Units.INCH ? 3 : 2, nominalPlaces);
+        }
+
+        /** The largest fillet tangent to both faces of the shoulder, h = (D - d)/2; infinite without a section. */
+        double stepHeight() {
+            return c.stress() == null ? Double.POSITIVE_INFINITY : (c.stress().bigD() - c.stress().smallD()) / 2;
         }
 
         Optional<FilletChecks.MinimumRadiusFigure> minimumRadius() {
@@ -364,8 +375,11 @@ public final class Advisor {
             return nominal + zones[zones.length - 1] / 2 / k;
         }
 
-        /** Raises the smallest admitted radius to at least {@code floor}; false when this control cannot. */
-        boolean raiseLowerEnd(double floor) {
+        /**
+         * Raises the smallest admitted radius to at least {@code floor}, keeping the largest at most
+         * {@code ceiling}; false when this control cannot.
+         */
+        boolean raiseLowerEnd(double floor, double ceiling) {
             if (plan.callout() == CalloutKind.GENERAL || plan.callout() == CalloutKind.COMPOSITE_PROFILE) return false;
             if (isProfile()) {
                 if (!(nominal > floor)) return false;
@@ -374,8 +388,12 @@ public final class Advisor {
                 zones[0] = z;
             } else {
                 double band = max - min;
-                min = roundTo(floor, places, RoundingMode.CEILING);
-                max = Math.max(max, roundTo(min + band, places, RoundingMode.HALF_EVEN));
+                double newMin = roundTo(floor, places, RoundingMode.CEILING);
+                double newMax = Math.max(max, roundTo(newMin + band, places, RoundingMode.HALF_EVEN));
+                if (newMax > ceiling) newMax = roundTo(ceiling, places, RoundingMode.FLOOR);
+                if (!(newMax > newMin)) return false;
+                min = newMin;
+                max = newMax;
                 nominal = Math.min(Math.max(nominal, min), max);
             }
             adjusted = true;
@@ -595,6 +613,15 @@ public final class Advisor {
             sb.append(k).append('=').append(v instanceof Double dv ? plain(dv) : v.toString());
         }
         return sb.toString();
+    }
+
+    /** The mechanics' cautions less a bare deference line, which {@link #GUIDANCE_CAUTION} already gives. */
+    private static List<String> withoutPlainDeference(List<String> cautions) {
+        List<String> out = new ArrayList<>(cautions.size());
+        for (String c : cautions) {
+            if (!c.startsWith("Defer to the governing standard")) out.add(c);
+        }
+        return out;
     }
 
     private static List<String> dedupe(List<String> list) {
