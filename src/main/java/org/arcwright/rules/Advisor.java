@@ -123,7 +123,7 @@ public final class Advisor {
         trace.add(e.describe());
         List<String> fired = rule.when().firedBy(facts);
         trace.add(fired.isEmpty() ? "fires on every case" : "fired by " + String.join(", ", fired));
-        size(d, plan, c, cautions);
+        size(d, plan, ctx, cautions);
         trace.add("tolerance from " + d.source);
         if (plan.callout() == CalloutKind.PROFILE || plan.callout() == CalloutKind.COMPOSITE_PROFILE) {
             d.zoneFromBand();
@@ -158,8 +158,8 @@ public final class Advisor {
                 }
             }
         }
+        Optional<FilletChecks.SeatingFigure> seat = matingCase ? checks.seating(c, d.hi()) : Optional.empty();
         if (matingCase) {
-            Optional<FilletChecks.SeatingFigure> seat = checks.seating(c, d.hi());
             if (seat.isPresent() && !seat.get().seats()) {
                 FilletChecks.SeatingFigure s = seat.get();
                 String why = "the largest radius the callout allows, " + fmt(d.hi(), d.places)
@@ -169,6 +169,7 @@ public final class Advisor {
                 if (d.lowerUpperEnd(s.largestRadius(), floor)) {
                     cautions.add("Limits adjusted: " + why + "; the upper end was lowered to " + fmt(d.hi(), d.places) + ".");
                     trace.add("adjusted for seating: " + d.describeRange());
+                    seat = checks.seating(c, d.hi());
                 } else {
                     demoted = true;
                     cautions.add("Demoted: " + why + "; no limits of this control both seat and meet the other checks. "
@@ -198,7 +199,7 @@ public final class Advisor {
             cautions.addAll(withoutPlainDeference(checks.stressCautions()));
         }
         if (matingCase) {
-            checks.seating(c, d.hi()).ifPresent(s -> {
+            seat.ifPresent(s -> {
                 mech.put("seats", s.seats());
                 mech.put("seatingMargin", round(s.margin()));
                 mech.put("largestSeatingRadius", round(s.largestRadius()));
@@ -219,7 +220,8 @@ public final class Advisor {
                 numbers, trace, linked, demoted);
     }
 
-    private void size(Draft d, CalloutPlan plan, DesignCase c, List<String> cautions) {
+    private void size(Draft d, CalloutPlan plan, Context ctx, List<String> cautions) {
+        DesignCase c = ctx.c;
         double mmPer = c.units().millimetres();
         double nomMm = c.nominalRadius() * mmPer;
         CalloutPlan.Sizing s = plan.size();
@@ -256,9 +258,7 @@ public final class Advisor {
         CapabilityTable cap = book.capability();
         Optional<Double> t = cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), nomMm);
         if (t.isPresent()) {
-            d.fromPlusMinus(t.get() * s.factor() / mmPer, s.disposition(), "process capability, " + c.process().key()
-                    + " at R" + plain(nomMm) + " mm: ±" + plain(t.get()) + " mm" + (s.factor() == 1 ? "" : " × "
-                    + plain(s.factor())) + " (" + cap.source() + ")");
+            d.fromPlusMinus(t.get() * s.factor() / mmPer, s.disposition(), ctx.capabilitySource(t.get(), s.factor(), cap));
         } else {
             d.fromPlusMinus(c.nominalRadius() * 0.1 * s.factor(), s.disposition(),
                     "10% of the nominal: no process capability entry for " + c.process().key());
@@ -282,6 +282,15 @@ public final class Advisor {
             this.c = c;
             int nominalPlaces = Math.max(0, BigDecimal.valueOf(c.nominalRadius()).stripTrailingZeros().scale());
             this.places = Math.max(c.units() == Units.INCH ? 3 : 2, nominalPlaces);
+        }
+
+        private final Map<Double, String> capabilitySources = new java.util.HashMap<>(4);
+
+        /** Where a capability-sized tolerance came from, in words; built once per factor. */
+        String capabilitySource(double plusMinusMm, double factor, CapabilityTable cap) {
+            return capabilitySources.computeIfAbsent(factor, f -> "process capability, " + c.process().key() + " at R"
+                    + plain(c.nominalRadius() * c.units().millimetres()) + " mm: ±" + plain(plusMinusMm) + " mm"
+                    + (f == 1 ? "" : " × " + plain(f)) + " (" + cap.source() + ")");
         }
 
         /** The largest fillet tangent to both faces of the shoulder, h = (D - d)/2; infinite without a section. */

@@ -12,8 +12,8 @@ import org.arcwright.rules.Advisor;
 import org.arcwright.rules.BlendFunction;
 import org.arcwright.rules.BlendKind;
 import org.arcwright.rules.DesignCase;
-import org.arcwright.rules.FilletChecks;
 import org.arcwright.rules.Loading;
+import org.arcwright.rules.MechanicsChecks;
 import org.arcwright.rules.NoteLinker;
 import org.arcwright.rules.Process;
 import org.arcwright.rules.RuleBook;
@@ -51,7 +51,8 @@ public class AdvisorBench {
     public void setUp() throws IOException {
         packDir = Files.createTempDirectory("arcwright-bench-pack");
         writeThousandRulePack(packDir);
-        advisor = new Advisor(RuleBook.load(PackStack.builtIn()), BenchChecks.checks(), NoteLinker.NONE);
+        PackStack stack = PackStack.builtIn();
+        advisor = new Advisor(RuleBook.load(stack), MechanicsChecks.standard(stack), NoteLinker.NONE);
         cases = generateCases(new Random(20261201L));
     }
 
@@ -131,13 +132,6 @@ public class AdvisorBench {
             sb.append("\n]}\n");
             Files.writeString(dir.resolve("rules/bench-" + file + ".json"), sb.toString());
         }
-    }
-
-    /** The checks the advisor runs in the benchmark. */
-    static final class BenchChecks {
-        private BenchChecks() {}
-
-        static FilletChecks checks() { return FilletChecks.NONE; }
     }
 
     /**
