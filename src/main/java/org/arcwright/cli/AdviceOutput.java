@@ -27,7 +27,7 @@ final class AdviceOutput {
             ObjectNode n = recs.addObject();
             n.put("rule", r.ruleId());
             ObjectNode callout = json.mapper().valueToTree(r.callout());
-            if (!callout.has("datums")) callout.set("datums", json.mapper().createArrayNode());
+            if (!callout.has("datums")) callout.set("datums", json.mapper().valueToTree(r.callout().allDatums()));
             Map<String, Object> nums = r.numbers();
             if (!callout.has("min") && nums.get("min") != null && !"general".equals(r.callout().typeName())) {
                 callout.set("admitsMin", json.mapper().valueToTree(nums.get("min")));
