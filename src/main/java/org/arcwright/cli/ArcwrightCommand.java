@@ -16,6 +16,8 @@ import picocli.CommandLine.Command;
                 ClearanceCommand.class,
                 AdviseCommand.class,
                 PackCommand.class,
+                NotesCommand.class,
+                InspectCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
