@@ -52,6 +52,16 @@ final class AdviseCommand implements Callable<Integer> {
     @Option(names = "--all", description = "In text, list every recommendation, not only the first three.")
     boolean all;
 
+    @Option(names = "--personal", paramLabel = "DIR",
+            description = "Your personal pack, layered last (default: the personal pack of your settings, when it exists).")
+    Path personal;
+
+    @Option(names = "--no-notes", description = "Do not link practice notes (skips opening the notes index).")
+    boolean noNotes;
+
+    @Option(names = "--notes-index", paramLabel = "DIR", hidden = true, description = "Where the notes index is cached.")
+    Path notesIndex;
+
     @Override
     public Integer call() {
         if ((file == null) == (batch == null)) {
@@ -60,12 +70,21 @@ final class AdviseCommand implements Callable<Integer> {
         if (!List.of("text", "json", "csv").contains(format)) {
             throw InputProblem.ofField("--format", "use text, json or csv, got '" + format + "'");
         }
-        PackStack stack = PackStack.load(packs, null);
+        PackStack stack = PackStack.load(packs, Advisors.personalPack(personal));
         RuleBook book = RuleBook.load(stack);
-        Advisor advisor = Advisors.standard(stack, book);
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
         for (InputProblem p : book.problems()) err.println("arcwright advise: pack problem, skipped: " + p.getMessage());
+        Advisors.WithNotes wn = noNotes ? new Advisors.WithNotes(Advisors.standard(stack, book), () -> { })
+                : Advisors.withNotes(stack, book, notesIndex, w -> err.println("arcwright advise: " + w));
+        try (java.io.Closeable store = wn.store()) {
+            return advise(wn.advisor(), stack, book, out);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    private int advise(Advisor advisor, PackStack stack, RuleBook book, PrintWriter out) {
         List<String[]> cases = new ArrayList<>();
         List<DesignCase> designCases = new ArrayList<>();
         boolean single = false;

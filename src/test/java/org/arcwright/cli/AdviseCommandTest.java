@@ -7,6 +7,8 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import org.arcwright.io.JsonFiles;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -19,8 +21,14 @@ class AdviseCommandTest {
     private final StringWriter out = new StringWriter();
     private final StringWriter err = new StringWriter();
 
+    /** Runs a command; advise gets a private notes index and no personal pack, so the user's folders are not touched. */
     private int run(String... args) {
-        return Cli.commandLine(new PrintWriter(out, true), new PrintWriter(err, true)).execute(args);
+        List<String> all = new ArrayList<>(List.of(args));
+        if (args[0].equals("advise")) {
+            all.addAll(List.of("--notes-index", dir.resolve("notes-index").toString(),
+                    "--personal", dir.resolve("no-personal-pack").toString()));
+        }
+        return Cli.commandLine(new PrintWriter(out, true), new PrintWriter(err, true)).execute(all.toArray(new String[0]));
     }
 
     private Path caseFile(String json) throws Exception {
@@ -53,6 +61,14 @@ class AdviseCommandTest {
         assertThat(first.get("trace").get(0).asText()).startsWith("rule stress-relief.fatigue.asme-cr");
         assertThat(first.get("notes").isArray()).isTrue();
         assertThat(root.get("packs").get(0).asText()).isEqualTo("Arcwright built-in practice");
+    }
+
+    @Test
+    void recommendationsLinkTheBuiltInPracticeNotesByTheirRuleTags() throws Exception {
+        assertThat(run("advise", "examples/advisor/seal-groove-iso.json", "--format", "json")).as(err.toString()).isZero();
+        JsonNode notes = new JsonFiles().mapper().readTree(out.toString()).get("recommendations").get(0).get("notes");
+        assertThat(notes.size()).isPositive();
+        assertThat(notes.toString()).contains("composite-profile");
     }
 
     @Test
