@@ -129,6 +129,11 @@ public final class Advisor {
             d.zoneFromBand();
         }
         boolean demoted = false;
+        if (d.generalMissing != null) {
+            demoted = true;
+            cautions.add("Demoted: " + d.generalMissing + "; the title block does not cover this radius, so state its "
+                    + "tolerance on the drawing.");
+        }
         Map<String, Object> mech = new LinkedHashMap<>();
         boolean stressCase = c.stress() != null && c.kind() == BlendKind.FILLET;
         boolean matingCase = c.mating() != null && c.kind() == BlendKind.FILLET;
@@ -247,13 +252,18 @@ public final class Advisor {
                     d.general(tableId, cls, label);
                     return;
                 } catch (InputProblem p) {
-                    cautions.add("The general tolerance " + generalLabel(table.get(), cls) + " gives no value here ("
-                            + p.problem() + "): state the tolerance on the radius.");
+                    d.generalMissing = "the general tolerance " + generalLabel(table.get(), cls) + " gives no value at R"
+                            + plain(c.nominalRadius()) + " " + c.units().symbol() + " (" + p.problem() + ")";
                 }
+                d.general(tableId, cls, generalLabel(table.get(), cls));
             } else {
-                cautions.add("No general-tolerance table '" + tableId + "' is loaded; the process capability sizes it.");
+                d.generalMissing = "no general-tolerance table '" + tableId + "' is loaded";
+                d.general(tableId, cls, tableId + " class " + cls);
             }
-            d.general(tableId, cls, tableId + " class " + cls);
+            if (plan.callout() != CalloutKind.GENERAL) {
+                cautions.add("Sized from the process capability instead: " + d.generalMissing + ".");
+                d.generalMissing = null;
+            }
         }
         CapabilityTable cap = book.capability();
         Optional<Double> t = cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), nomMm);
@@ -323,6 +333,8 @@ public final class Advisor {
         String generalTable;
         String generalClass;
         String generalLabel;
+        /** Why the title-block table gives no value here, or null. */
+        String generalMissing;
 
         Draft(CalloutPlan plan, DesignCase c, int places) {
             this.plan = plan;
@@ -472,7 +484,8 @@ public final class Advisor {
             if (callout instanceof Callout.General g) {
                 String s = style.format(new RadiusCallout(RadiusKind.R, c.units(),
                         new ToleranceForm.Untoleranced(BigDecimal.valueOf(nominal).stripTrailingZeros())))
-                        + " (general tolerance " + generalLabel + ": " + fmt(min, places) + " to " + fmt(max, places) + ")";
+                        + (generalMissing != null ? " (" + generalLabel + " gives no value at this size)"
+                        : " (general tolerance " + generalLabel + ": " + fmt(min, places) + " to " + fmt(max, places) + ")");
                 return g.edgeNote() == null ? s : s + "; " + g.edgeNote();
             }
             StringBuilder sb = new StringBuilder();
