@@ -181,6 +181,20 @@ class AdvisorScenarioTest {
     }
 
     @Test
+    void belowTheSmallestIso2768RangeTheTitleBlockIsDemotedAndALimitRadiusComesFirst() {
+        // ISO 2768-1:1989 Table 2 starts at 0.5 mm: smaller radii get their deviations stated next to the size
+        DesignCase c = new DesignCase(Units.MM, DrawingStyle.ISO, null, BlendKind.ROUND, 0.3, BlendFunction.COSMETIC,
+                Loading.NONE, false, false, List.of(), Process.MOLDED, null, null, null);
+        Advice a = advisor.advise(c);
+        assertThat(a.first().orElseThrow().ruleId()).isEqualTo("fallback.limits");
+        assertThat(a.recommendations()).filteredOn(r -> r.callout() instanceof Callout.General)
+                .isNotEmpty().allSatisfy(r -> {
+                    assertThat(r.demoted()).isTrue();
+                    assertThat(r.cautions()).anySatisfy(t -> assertThat(t).startsWith("Demoted:").contains("no value"));
+                });
+    }
+
+    @Test
     void aCaseOwnToleranceIsUsedWhereTheRuleSizesFromIntent() {
         DesignCase c = new DesignCase(Units.MM, DrawingStyle.ASME, null, BlendKind.FILLET, 2.0,
                 BlendFunction.STRESS_RELIEF, Loading.FATIGUE, true, false, List.of(), Process.MACHINED, null, null,
