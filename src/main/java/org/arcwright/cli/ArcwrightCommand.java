@@ -12,6 +12,7 @@ import picocli.CommandLine.Command;
         subcommands = {
                 LimitsCommand.class,
                 GeneralToleranceCommand.class,
+                NoteCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
