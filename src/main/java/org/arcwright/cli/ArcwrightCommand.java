@@ -13,6 +13,7 @@ import picocli.CommandLine.Command;
                 LimitsCommand.class,
                 GeneralToleranceCommand.class,
                 NoteCommand.class,
+                RenderCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
