@@ -14,6 +14,7 @@ import picocli.CommandLine.Command;
                 GeneralToleranceCommand.class,
                 NoteCommand.class,
                 RenderCommand.class,
+                SheetCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
