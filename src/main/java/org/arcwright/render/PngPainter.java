@@ -60,16 +60,14 @@ public final class PngPainter {
         try {
             ImageWriter writer = ImageIO.getImageWritersByFormatName("png").next();
             IIOMetadata meta = writer.getDefaultImageMetadata(ImageTypeSpecifier.createFromRenderedImage(img), null);
-            IIOMetadataNode root = new IIOMetadataNode("javax_imageio_1.0");
-            IIOMetadataNode dim = new IIOMetadataNode("Dimension");
-            IIOMetadataNode hps = new IIOMetadataNode("HorizontalPixelSize");
-            hps.setAttribute("value", Double.toString(25.4 / dpi));
-            IIOMetadataNode vps = new IIOMetadataNode("VerticalPixelSize");
-            vps.setAttribute("value", Double.toString(25.4 / dpi));
-            dim.appendChild(hps);
-            dim.appendChild(vps);
-            root.appendChild(dim);
-            meta.mergeTree("javax_imageio_1.0", root);
+            String perMetre = Long.toString(Math.round(dpi / 0.0254));
+            IIOMetadataNode phys = new IIOMetadataNode("pHYs");
+            phys.setAttribute("pixelsPerUnitXAxis", perMetre);
+            phys.setAttribute("pixelsPerUnitYAxis", perMetre);
+            phys.setAttribute("unitSpecifier", "meter");
+            IIOMetadataNode root = new IIOMetadataNode("javax_imageio_png_1.0");
+            root.appendChild(phys);
+            meta.mergeTree("javax_imageio_png_1.0", root);
             ByteArrayOutputStream bytes = new ByteArrayOutputStream();
             try (ImageOutputStream out = ImageIO.createImageOutputStream(bytes)) {
                 writer.setOutput(out);
