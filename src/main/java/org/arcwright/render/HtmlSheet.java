@@ -23,7 +23,7 @@ final class HtmlSheet {
         for (SheetContent.Fact f : s.partFacts()) {
             sb.append("<tr><th>").append(esc(f.label())).append("</th><td>").append(esc(f.value())).append("</td></tr>\n");
         }
-        sb.append("</table>\n<h2>Summary</h2>\n<table class=\"summary\">\n<tr><th>Feature</th><th>Radius</th><th>Function</th>"
+        sb.append("</table>\n<h2>Summary</h2>\n<table class=\"summary\">\n<tr><th>ID</th><th>Feature</th><th>Function</th>"
                 + "<th>Control</th><th>Callout</th><th>Status</th></tr>\n");
         for (SheetContent.SummaryRow r : s.summary()) {
             sb.append("<tr><td><a href=\"#").append(esc(r.id())).append("\">").append(esc(r.id())).append("</a></td><td>")

@@ -20,11 +20,11 @@ final class MarkdownSheet {
         sb.append("# ").append(s.title()).append("\n\n");
         for (SheetContent.Fact f : s.partFacts()) sb.append("- **").append(f.label()).append(":** ").append(esc(f.value())).append('\n');
         sb.append("\n## Summary\n\n");
-        sb.append("| Feature | Radius | Function | Control | Callout | Status |\n");
+        sb.append("| ID | Feature | Function | Control | Callout | Status |\n");
         sb.append("|---|---|---|---|---|---|\n");
         for (SheetContent.SummaryRow r : s.summary()) {
             sb.append("| ").append(r.id()).append(" | ").append(cell(r.feature())).append(" | ").append(r.function())
-                    .append(" | ").append(cell(r.control())).append(" | `").append(r.callout().replace("|", "¦"))
+                    .append(" | ").append(cell(r.control())).append(" | `").append(r.callout().replace("|", "\\|"))
                     .append("` | ").append(r.status()).append(" |\n");
         }
         if (!s.generalNotes().isEmpty()) {

@@ -204,7 +204,7 @@ final class PdfSheet {
 
     private void summary(SheetContent s) throws IOException {
         float[] cols = {MARGIN, MARGIN + 28, MARGIN + 190, MARGIN + 255, MARGIN + 340, MARGIN + 445};
-        String[] head = {"ID", "Radius", "Function", "Control", "Callout", "Status"};
+        String[] head = {"ID", "Feature", "Function", "Control", "Callout", "Status"};
         float size = BODY - 1.5f;
         need(size * 3);
         y -= size * LEADING;
