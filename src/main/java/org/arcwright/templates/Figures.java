@@ -42,12 +42,27 @@ public final class Figures {
             new Known("envelope", "measured envelope", Kind.LENGTH),
             new Known("requiredZone", "zone required to pass", Kind.LENGTH),
             new Known("fittedRadius", "fitted radius", Kind.LENGTH),
-            new Known("points", "points measured", Kind.TEXT));
+            new Known("points", "points measured", Kind.TEXT),
+            new Known("equivalentProfileZone", "equivalent profile zone", Kind.LENGTH),
+            new Known("zone", "profile zone", Kind.LENGTH),
+            new Known("tierZones", "tier zones", Kind.LENGTH),
+            new Known("toleranceSource", "tolerance from", Kind.TEXT),
+            new Known("adjusted", "limits adjusted by the checks", Kind.TEXT),
+            new Known("stressMethod", "stress method", Kind.TEXT),
+            new Known("targetKf", "largest acceptable Kf", Kind.FACTOR),
+            new Known("minRadiusForTarget", "smallest radius meeting the target", Kind.LENGTH),
+            new Known("seats", "mating part seats", Kind.TEXT),
+            new Known("largestSeatingRadius", "largest fillet that still seats", Kind.LENGTH));
+
+    /** Keys that are context, not figures: left out of the list. */
+    private static final java.util.Set<String> SKIPPED = java.util.Set.of("units");
 
     /** The figures of {@code numbers}, in its order, formatted by {@code text}'s style and units. */
     public static List<Figure> of(Map<String, Object> numbers, CalloutText text) {
         List<Figure> out = new ArrayList<>();
-        for (Map.Entry<String, Object> e : numbers.entrySet()) add(out, "", e.getKey(), e.getValue(), text);
+        for (Map.Entry<String, Object> e : numbers.entrySet()) {
+            if (!SKIPPED.contains(e.getKey())) add(out, "", e.getKey(), e.getValue(), text);
+        }
         return out;
     }
 
