@@ -12,6 +12,8 @@ import picocli.CommandLine.Command;
         subcommands = {
                 LimitsCommand.class,
                 GeneralToleranceCommand.class,
+                FilletStressCommand.class,
+                ClearanceCommand.class,
                 NoteCommand.class,
                 RenderCommand.class,
                 SheetCommand.class,

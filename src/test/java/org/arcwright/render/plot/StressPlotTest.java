@@ -1,0 +1,87 @@
+package org.arcwright.render.plot;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayInputStream;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.Locale;
+import javax.imageio.ImageIO;
+import org.arcwright.mechanics.FilletStressAnalysis;
+import org.arcwright.mechanics.FilletStressCase;
+import org.arcwright.mechanics.LoadCase;
+import org.arcwright.mechanics.NotchSensitivity;
+import org.arcwright.mechanics.PetersonFits;
+import org.arcwright.mechanics.ShoulderShape;
+import org.arcwright.mechanics.StressConcentration;
+import org.arcwright.mechanics.StressPoint;
+import org.arcwright.mechanics.StressTarget;
+import org.arcwright.mechanics.UltimateStrength;
+import org.arcwright.tolerance.Units;
+import org.jfree.chart.JFreeChart;
+import org.junit.jupiter.api.Test;
+
+/** The K<sub>t</sub>/K<sub>f</sub> chart: what it draws, and that both formats come out readable. */
+class StressPlotTest {
+    private static final Path GOLDEN = Path.of("src/test/resources/golden/mechanics/stress-plot-curves.csv");
+
+    private final FilletStressAnalysis analysis =
+            new FilletStressAnalysis(new StressConcentration(PetersonFits.published()), new NotchSensitivity());
+    private final StressPlot plot = new StressPlot(analysis);
+    private final FilletStressCase shaft = FilletStressCase.ofLimits(ShoulderShape.STEPPED_SHAFT, LoadCase.BENDING,
+            Units.MM, 38, 32, 0.8, 1.2, UltimateStrength.ofMpa(690));
+
+    /** Golden file of the sampled curves; regenerate with -Darcwright.updateGolden=true after a reviewed change. */
+    @Test
+    void sampledCurvesMatchTheGoldenFile() throws Exception {
+        StringBuilder sb = new StringBuilder("r,kt,q,kf,withinFit\n");
+        for (StressPoint p : plot.curves(shaft).samples()) {
+            sb.append(String.format(Locale.ROOT, "%.6f,%.6f,%.6f,%.6f,%s%n", p.r(), p.kt().kt(), p.q(), p.kf(), p.withinFit()));
+        }
+        if (Boolean.getBoolean("arcwright.updateGolden")) Files.writeString(GOLDEN, sb.toString());
+        assertThat(sb.toString()).isEqualTo(Files.readString(GOLDEN, StandardCharsets.UTF_8));
+    }
+
+    @Test
+    void pngShowsTheShadedToleranceBand() throws Exception {
+        JFreeChart chart = plot.chart(shaft, StressTarget.kf(2.0), analysis.minimumRadius(shaft, StressTarget.kf(2.0)));
+        BufferedImage img = ImageIO.read(new ByteArrayInputStream(plot.png(chart)));
+        assertThat(img.getWidth()).isEqualTo(StressPlot.WIDTH);
+        assertThat(img.getHeight()).isEqualTo(StressPlot.HEIGHT);
+        int greenish = 0;
+        for (int y = 0; y < img.getHeight(); y++) {
+            for (int x = 0; x < img.getWidth(); x++) {
+                int rgb = img.getRGB(x, y);
+                int r = (rgb >> 16) & 0xff;
+                int g = (rgb >> 8) & 0xff;
+                int b = rgb & 0xff;
+                if (g > r + 12 && g > b + 5) greenish++;
+            }
+        }
+        assertThat(greenish).as("pixels of the shaded band").isGreaterThan(20_000);
+    }
+
+    @Test
+    void svgIsRepeatableAndCarriesTitleBandTargetAndCaution() {
+        JFreeChart chart = plot.chart(shaft, StressTarget.kf(2.0), analysis.minimumRadius(shaft, StressTarget.kf(2.0)));
+        String svg = plot.svg(chart);
+        assertThat(plot.svg(plot.chart(shaft, StressTarget.kf(2.0), analysis.minimumRadius(shaft, StressTarget.kf(2.0)))))
+                .isEqualTo(svg);
+        assertThat(svg).startsWith("<?xml").contains("Kt and Kf across the fillet tolerance")
+                .contains("tolerance  R 0.8 – 1.2").contains("target Kf ≤ 2").contains("licensed engineer")
+                .contains("rgb(31,78,154)");
+    }
+
+    /** Sharp torsion runs outside the fit: the chart draws a separate, dashed stretch for it. */
+    @Test
+    void extrapolatedStretchIsItsOwnSeries() {
+        FilletStressCase sharp = FilletStressCase.ofLimits(ShoulderShape.STEPPED_SHAFT, LoadCase.TORSION, Units.MM,
+                45, 30, 1.0, 2.0, null);
+        JFreeChart chart = plot.chart(sharp, null, null);
+        var data = (org.jfree.data.xy.XYSeriesCollection) chart.getXYPlot().getDataset();
+        assertThat(data.getSeries(0).getItemCount()).isPositive();
+        assertThat(data.getSeries(1).getItemCount()).as("extrapolated stretch").isPositive();
+    }
+}
