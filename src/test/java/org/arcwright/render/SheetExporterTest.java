@@ -47,7 +47,7 @@ class SheetExporterTest {
             assertThat(text).contains(f.id() + " " + f.heading());
             if (f.decided()) assertThat(text).as(f.id()).contains(f.calloutPlain().replace("\n", " / "));
         }
-        assertThat(text).contains("Summary", "undecided", "Kt at the smallest radius", "1.86", "seating margin", "0.1 mm",
+        assertThat(text).contains("Summary", "undecided", "Kt at the smallest radius", "1.94", "seating margin", "0.1 mm",
                 "crescent width", "0.1657 mm", "governing standard", "licensed engineering judgement", "page 1 of");
         // the frame's own text is real text in the PDF, not only outlines
         assertThat(text).contains("0.06", "CR2 ±0.2");
