@@ -150,14 +150,23 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
                         List.of(), List.of(), List.of(), "", "", inspection(f.inspection(), ctx), false));
                 continue;
             }
-            cautions.addAll(r.cautions());
+            List<String> featureCautions = new ArrayList<>(styleRemarks(r.callout(), ws));
+            featureCautions.addAll(r.cautions());
+            cautions.addAll(featureCautions);
             sections.add(new FeatureSection(f.id(), heading, caseLine, r.callout(), text.line(r.callout(), false),
                     text.line(r.callout(), true), text.words(r.callout()), r.because(), Figures.of(r.numbers(), text),
-                    r.cautions(), r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
+                    featureCautions, r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
                     fill(templates, "inspection-plan", ctx, f), inspection(f.inspection(), ctx), r.demoted()));
         }
         return new SheetContent(title, p.number() + (p.revision() == null ? "" : " rev " + p.revision()), facts, rows, general, sections, List.copyOf(cautions), DEFERRAL,
                 generatedBy == null ? "Arcwright" : generatedBy, ws.standard(), ws.units());
+    }
+
+    /** What the drawing style says beyond the text, e.g. that ISO has no controlled radius. */
+    private static List<String> styleRemarks(Callout c, PartWorksheet ws) {
+        if (c instanceof Callout.ControlledRadius cr) return ws.standard().remarks(cr.toRadiusCallout(ws.units(), 4));
+        if (c instanceof Callout.Radius r) return ws.standard().remarks(r.toRadiusCallout(ws.units(), 4));
+        return List.of();
     }
 
     private static String fill(NoteTemplates templates, String name, NoteContext ctx, RadiusFeature f) {

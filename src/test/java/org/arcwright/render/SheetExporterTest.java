@@ -106,4 +106,14 @@ class SheetExporterTest {
             assertThat(new PDFTextStripper().getText(doc)).contains("0 decided, 5 undecided");
         }
     }
+
+    @Test
+    void anIsoSheetSaysThatIsoHasNoControlledRadius() {
+        PartWorksheet iso = new PartWorksheet(1, demo.part(), demo.units(), org.arcwright.tolerance.DrawingStyle.ISO,
+                demo.titleBlock(), demo.features());
+        SheetContent content = exporter.content(iso, templates, "t");
+        SheetContent.FeatureSection f1 = content.features().get(0);
+        assertThat(f1.calloutPlain()).isEqualTo("R2 ±0.2");
+        assertThat(f1.cautions().get(0)).contains("no ISO equivalent");
+    }
 }
