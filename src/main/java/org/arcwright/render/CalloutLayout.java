@@ -206,7 +206,9 @@ public final class CalloutLayout {
         if (extent.kind() == Extent.Kind.BETWEEN || extent.kind() == Extent.Kind.WITH_ADJACENT) {
             double baseline = bottom + 0.8 * h + h;
             double size = textSize();
-            double x = x0;
+            String first = extent.kind() == Extent.Kind.BETWEEN ? extent.from() : CalloutText.extentLabel(extent, false);
+            // letters such as J reach left of their origin: start the ink, not the origin, at the frame's edge
+            double x = x0 + Math.max(0, x0 - font.inkBounds(first, size, x0, baseline).getMinX());
             if (extent.kind() == Extent.Kind.BETWEEN) {
                 marks.add(new CalloutDrawing.Label(extent.from(), x, baseline, size));
                 x += font.width(extent.from(), size) + gap();
@@ -218,17 +220,17 @@ public final class CalloutLayout {
                 x += len + gap();
                 marks.add(new CalloutDrawing.Label(extent.to(), x, baseline, size));
                 x += font.width(extent.to(), size);
-                cells.add(new CalloutDrawing.Cell(new Rectangle2D.Double(x0, baseline - h, x - x0, h),
+                cells.add(new CalloutDrawing.Cell(new Rectangle2D.Double(x0, baseline - 1.5 * h, x - x0, 2 * h),
                         CalloutDrawing.Role.TEXT, CalloutText.extentLabel(extent, false), 0));
             } else {
                 String label = CalloutText.extentLabel(extent, false);
                 marks.add(new CalloutDrawing.Label(label, x, baseline, size));
                 x += font.width(label, size);
-                cells.add(new CalloutDrawing.Cell(new Rectangle2D.Double(x0, baseline - h, x - x0, h),
+                cells.add(new CalloutDrawing.Cell(new Rectangle2D.Double(x0, baseline - 1.5 * h, x - x0, 2 * h),
                         CalloutDrawing.Role.TEXT, label, 0));
             }
             right = Math.max(right, x);
-            contentBottom = Math.max(contentBottom, baseline + 0.3 * h);
+            contentBottom = Math.max(contentBottom, baseline + 0.5 * h);
         }
         return new CalloutDrawing(right + margin, contentBottom + margin, lineWidth, cells, marks);
     }
