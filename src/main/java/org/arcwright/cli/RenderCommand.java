@@ -51,6 +51,9 @@ final class RenderCommand implements Callable<Integer> {
             renderer.write(out, r.callout(), r.standard(), r.units(), dpi, unicode);
             pw.println("wrote " + out);
         }
+        for (String remark : renderer.remarks(r.callout(), r.standard(), r.units())) {
+            spec.commandLine().getErr().println("note: " + remark);
+        }
         pw.flush();
         return Cli.OK;
     }

@@ -60,6 +60,16 @@ public final class FrameRenderer {
     }
 
     /**
+     * What a reader must be told beyond the drawn callout in this style, e.g. that ISO has no
+     * controlled radius and the CR is drawn as R (from {@link DrawingStyle#remarks}).
+     */
+    public java.util.List<String> remarks(Callout c, DrawingStyle style, Units units) {
+        if (c instanceof Callout.ControlledRadius cr) return style.remarks(cr.toRadiusCallout(units, 4));
+        if (c instanceof Callout.Radius r) return style.remarks(r.toRadiusCallout(units, 4));
+        return java.util.List.of();
+    }
+
+    /**
      * Writes the callout to {@code out}, the format chosen by its extension: {@code .svg},
      * {@code .png} (at {@code dpi}) or {@code .txt} (plain, or Unicode when {@code unicode}).
      * The file is replaced atomically.

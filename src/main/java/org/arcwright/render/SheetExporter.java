@@ -109,10 +109,11 @@ public final class SheetExporter {
 
     /** The sheet as one HTML page. */
     public String html(SheetContent content, Progress progress) {
+        Progress p = progress == null ? Progress.NONE : progress;
         Map<String, String> svgs = new LinkedHashMap<>();
         int i = 0;
         for (SheetContent.FeatureSection f : content.features()) {
-            progress.update(i++, content.features().size() + 1, "frame of " + f.id());
+            p.update(i++, content.features().size() + 1, "frame of " + f.id());
             if (f.decided()) svgs.put(f.id(), frames.svgElement(f.callout(), content.style(), content.units()));
         }
         return HtmlSheet.write(content, svgs);

@@ -87,4 +87,14 @@ class OutputCommandsTest {
         assertThat(r.code()).isEqualTo(Cli.BAD_INPUT);
         assertThat(r.err()).contains("mine.mustache:2:7", "titleBlock.klass", "toleranceClass");
     }
+
+    @Test
+    void renderingAControlledRadiusOnAnIsoDrawingSaysIsoHasNone(@TempDir Path dir) throws Exception {
+        Path in = callout(dir, "{\"units\": \"mm\", \"standard\": \"iso\", \"callout\": "
+                + "{\"type\": \"controlled-radius\", \"min\": 1.8, \"max\": 2.2}}");
+        Run r = run("render", in.toString());
+        assertThat(r.code()).isZero();
+        assertThat(r.out()).isEqualTo("R1.8-2.2\nR1.8-2.2\n");
+        assertThat(r.err()).contains("note: Controlled radius (CR) is an ASME Y14.5 concept with no ISO equivalent");
+    }
 }
