@@ -138,7 +138,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
             String status = r == null ? "undecided" : f.status().label() + (r.demoted() ? " (demoted)" : "");
             rows.add(new SummaryRow(f.id(), heading, c.function().key(),
                     r == null ? "—" : CalloutText.controlName(r.callout()),
-                    r == null ? "undecided" : text.line(r.callout(), true).replace("\n", " / "), status));
+                    r == null ? "undecided" : text.line(r.callout(), false).replace("\n", " / "), status));
             String caseLine = c.kind().key() + ", " + c.function().key() + ", "
                     + (c.loading() == org.arcwright.rules.Loading.NONE ? "no service load" : c.loading().key() + " loading")
                     + ", "
