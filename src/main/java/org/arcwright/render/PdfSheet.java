@@ -215,8 +215,7 @@ final class PdfSheet {
         cs.lineTo(MARGIN + width(), y);
         cs.stroke();
         for (SheetContent.SummaryRow r : s.summary()) {
-            String callout = plainCallout(s, r.id());
-            String[] cells = {r.id(), r.feature(), r.function(), r.control(), callout, r.status()};
+            String[] cells = {r.id(), r.feature(), r.function(), r.control(), r.callout(), r.status()};
             List<List<String>> wrapped = new ArrayList<>();
             int lines = 1;
             for (int i = 0; i < cells.length; i++) {
@@ -240,13 +239,6 @@ final class PdfSheet {
             cs.lineTo(MARGIN + width(), y);
             cs.stroke();
         }
-    }
-
-    private static String plainCallout(SheetContent s, String id) {
-        for (SheetContent.FeatureSection f : s.features()) {
-            if (f.id().equals(id)) return f.decided() ? f.calloutPlain().replace("\n", " / ") : "undecided";
-        }
-        return "";
     }
 
     private void drawFrame(CalloutDrawing d) throws IOException {
