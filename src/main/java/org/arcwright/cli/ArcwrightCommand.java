@@ -14,6 +14,8 @@ import picocli.CommandLine.Command;
                 GeneralToleranceCommand.class,
                 FilletStressCommand.class,
                 ClearanceCommand.class,
+                NotesCommand.class,
+                InspectCommand.class,
                 NoteCommand.class,
                 RenderCommand.class,
                 SheetCommand.class,

@@ -7,10 +7,9 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.arcwright.io.JsonFiles;
-import org.arcwright.mechanics.BearingSeatTable;
-import org.arcwright.mechanics.ClearanceAnalysis;
 import org.arcwright.mechanics.ClearanceCase;
 import org.arcwright.mechanics.CornerClearance;
+import org.arcwright.mechanics.FilletMechanics;
 import org.arcwright.mechanics.MechanicsFiles;
 import org.arcwright.mechanics.PetersonFits;
 import org.arcwright.pack.PackStack;
@@ -24,7 +23,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "clearance", mixinStandardHelpOptions = true,
         description = {"Whether a shoulder fillet at its largest still lets the mating part seat flush, "
                 + "the margin, and the shoulder flat left to carry it.",
-                "FILE (JSON): units, fillet {r | rMin, rMax}, mating {type: chamfer, leg, angle} | {type: radius, rMin} "
+                "FILE (JSON): units, fillet {r | rMin, rMax | callout}, mating {type: chamfer, leg, angle} | {type: radius, rMin} "
                         + "| {type: bearing, chamferMin}, optional shoulderHeight, shoulderEdgeBreak, requiredSupport.",
                 "Exit 1 when the part does not seat or the shoulder gives less support than required."})
 final class ClearanceCommand implements Callable<Integer> {
@@ -45,7 +44,7 @@ final class ClearanceCommand implements Callable<Integer> {
         ClearanceCase c = new MechanicsFiles(new JsonFiles(), PetersonFits.published()).readClearance(file);
         PackStack stack = PackStack.load(packs, null);
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
-        CornerClearance result = new ClearanceAnalysis(BearingSeatTable.load(stack, BearingSeatTable.BUILT_IN_ID)).check(c);
+        CornerClearance result = FilletMechanics.load(stack).clearance().check(c);
         PrintWriter out = spec.commandLine().getOut();
         if (format == OutputFormat.json) {
             out.println(new JsonFiles().write(toJson(result)));

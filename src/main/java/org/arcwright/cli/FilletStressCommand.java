@@ -30,7 +30,7 @@ import picocli.CommandLine.Spec;
         description = {"Stress concentration of a shoulder fillet at its smallest, nominal and largest radius "
                 + "(Peterson's fits; Neuber/Shigley notch sensitivity for steels), and the smallest radius for a target.",
                 "FILE (JSON): units, shape (stepped-shaft|stepped-bar), load (tension|bending|torsion), D, d, "
-                        + "r or rMin/rMax, optional ultimateStrength {value, units: MPa|ksi}, targetKt, targetKf.",
+                        + "r or rMin/rMax or callout (\"R1 +0.2/-0.1\"), optional ultimateStrength {value, units: MPa|ksi}, targetKt, targetKf.",
                 "Exit 1 when a target is given and the smallest radius allowed does not meet it."})
 final class FilletStressCommand implements Callable<Integer> {
     @Spec
@@ -91,6 +91,7 @@ final class FilletStressCommand implements Callable<Integer> {
         m.put("fit", r.atNominal().kt().fitName());
         m.put("fitSource", r.atNominal().kt().source());
         m.put("r", c.rNominal());
+        m.put("hOverR", r.atNominal().kt().hOverR());
         m.put("kt", r.atNominal().kt().kt());
         m.put("withinFit", r.withinFit());
         if (c.strength() != null) {

@@ -19,7 +19,7 @@ import picocli.CommandLine.Spec;
 
 /** {@code arcwright note TEMPLATE PART}: fills one drawing-note template from a part worksheet. */
 @Command(name = "note", mixinStandardHelpOptions = true,
-        description = {"Fills one drawing-note template from a part worksheet and prints the note.",
+        description = {"Fills one drawing-note template from a part worksheet and prints the drawing note.",
                 "TEMPLATE is a template name from the packs (e.g. title-block-notes, callout-note, edge-break-notes,",
                 "inspection-plan) or the path of a .mustache file being written."})
 final class NoteCommand implements Callable<Integer> {

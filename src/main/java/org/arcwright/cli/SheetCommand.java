@@ -18,9 +18,9 @@ import picocli.CommandLine.Spec;
 
 /** {@code arcwright sheet PART --out OUT}: the part's tolerancing sheet as Markdown, HTML or PDF. */
 @Command(name = "sheet", mixinStandardHelpOptions = true,
-        description = {"Exports the tolerancing sheet of a part worksheet: a summary table, then per feature the callout,",
-                "its frame, the reasoning, the numbers, cautions and notes; the cautions and the deferral to the",
-                "governing standard at the end. The format follows the extension of OUT: .md, .html or .pdf."})
+        description = {"Exports a part's tolerancing sheet as Markdown, HTML or PDF, chosen by the extension of OUT.",
+                "A summary table, then per feature the callout, its frame, the reasoning, the numbers, cautions and",
+                "notes; the cautions and the deferral to the governing standard at the end."})
 final class SheetCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;

@@ -18,8 +18,8 @@ import org.arcwright.tolerance.Units;
  *   <li>{@code ±a}: either, up to a: a "sharp" edge.</li>
  *   <li>Two sizes of the same sign ({@code -0.1 -0.5}) bound the deviation both ways.</li>
  * </ul>
- * Source: ISO 13715:2019 (edges of undefined shape), written from the standard's principles; the
- * graphical symbol itself is drawn by the render package. ASME Y14.5 has no such symbol: the
+ * Source: ISO 13715:2019 (edges of undefined shape), written from the standard's principles (the
+ * graphical symbol is not drawn here). ASME Y14.5 has no such symbol: the
  * {@link #asmeNote(Units)} wording is {@code common practice}.
  *
  * @param type external or internal edge

@@ -11,6 +11,8 @@ import java.util.List;
 import java.util.Objects;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.tolerance.CalloutParser;
+import org.arcwright.tolerance.RadiusCallout;
 import org.arcwright.tolerance.Units;
 
 /**
@@ -20,10 +22,10 @@ import org.arcwright.tolerance.Units;
  *
  * <p>Fillet-stress file: {@code units} (mm|in), {@code shape} (stepped-shaft|stepped-bar),
  * {@code load} (tension|bending|torsion), {@code D}, {@code d}, {@code r} or {@code rMin}/{@code rMax}
- * (with an optional nominal {@code r} between them), optional {@code ultimateStrength}
+ * (with an optional nominal {@code r} between them) or a {@code callout} as drawn ({@code "R1 +0.2/-0.1"}), optional {@code ultimateStrength}
  * {value, units: MPa|ksi}, optional {@code targetKt} and {@code targetKf}.
  *
- * <p>Clearance file: {@code units}, {@code fillet} {r | rMin, rMax}, {@code mating}
+ * <p>Clearance file: {@code units}, {@code fillet} {r | rMin, rMax | callout}, {@code mating}
  * {type: chamfer, leg, angle (default 45)} | {type: radius, rMin} | {type: bearing, chamferMin (mm)},
  * optional {@code shoulderHeight}, {@code shoulderEdgeBreak}, {@code requiredSupport}.
  */
@@ -50,11 +52,13 @@ public final class MechanicsFiles {
     record StressDto(@JsonProperty("units") String units, @JsonProperty("shape") String shape,
                      @JsonProperty("load") String load, @JsonProperty("D") Double bigD, @JsonProperty("d") Double smallD,
                      @JsonProperty("r") Double r, @JsonProperty("rMin") Double rMin, @JsonProperty("rMax") Double rMax,
+                     @JsonProperty("callout") String callout,
                      @JsonProperty("ultimateStrength") StrengthDto ultimateStrength,
                      @JsonProperty("targetKt") Double targetKt, @JsonProperty("targetKf") Double targetKf,
                      @JsonProperty("description") String description) {}
 
-    record FilletDto(@JsonProperty("r") Double r, @JsonProperty("rMin") Double rMin, @JsonProperty("rMax") Double rMax) {}
+    record FilletDto(@JsonProperty("r") Double r, @JsonProperty("rMin") Double rMin, @JsonProperty("rMax") Double rMax,
+                     @JsonProperty("callout") String callout) {}
 
     record MatingDto(@JsonProperty("type") String type, @JsonProperty("leg") Double leg, @JsonProperty("angle") Double angle,
                      @JsonProperty("rMin") Double rMin, @JsonProperty("chamferMin") Double chamferMin) {}
@@ -83,7 +87,13 @@ public final class MechanicsFiles {
                         UltimateStrength.Unit.parse(s.units()));
             }
             FilletStressCase c;
-            if (dto.rMin() != null || dto.rMax() != null) {
+            if (dto.callout() != null) {
+                if (dto.r() != null || dto.rMin() != null || dto.rMax() != null) {
+                    throw InputProblem.ofField("callout", "give either a callout or r/rMin/rMax, not both");
+                }
+                double[] l = limits(dto.callout(), units, "callout");
+                c = new FilletStressCase(shape, load, units, bigD, smallD, l[0], l[1], l[2], strength);
+            } else if (dto.rMin() != null || dto.rMax() != null) {
                 double lo = required(dto.rMin(), "rMin");
                 double hi = required(dto.rMax(), "rMax");
                 c = dto.r() == null ? FilletStressCase.ofLimits(shape, load, units, bigD, smallD, lo, hi, strength)
@@ -116,7 +126,14 @@ public final class MechanicsFiles {
             FilletDto f = dto.fillet();
             double lo;
             double hi;
-            if (f.rMin() != null || f.rMax() != null) {
+            if (f.callout() != null) {
+                if (f.r() != null || f.rMin() != null || f.rMax() != null) {
+                    throw InputProblem.ofField("fillet.callout", "give either a callout or r/rMin/rMax, not both");
+                }
+                double[] l = limits(f.callout(), units, "fillet.callout");
+                lo = l[0];
+                hi = l[2];
+            } else if (f.rMin() != null || f.rMax() != null) {
                 lo = required(f.rMin(), "fillet.rMin");
                 hi = required(f.rMax(), "fillet.rMax");
             } else {
@@ -148,6 +165,26 @@ public final class MechanicsFiles {
             default:
                 throw InputProblem.ofField("mating.type", "unknown type '" + m.type() + "'; use chamfer, radius or bearing");
         }
+    }
+
+    /** {min, nominal, max} of a radius callout such as {@code R1 +0.2/-0.1} (nominal: as drawn, else the mean). */
+    private static double[] limits(String text, Units units, String field) {
+        RadiusCallout rc;
+        try {
+            rc = CalloutParser.parse(text, units);
+        } catch (InputProblem p) {
+            throw InputProblem.ofField(field, p.problem() + (p.column() > 0 ? " (at character " + p.column() + ")" : ""));
+        }
+        if (rc.units() != units) {
+            throw InputProblem.ofField(field, "the callout is in " + rc.units() + " but the file's units are " + units);
+        }
+        if (rc.min().isEmpty() || rc.max().isEmpty()) {
+            throw InputProblem.ofField(field, "'" + text.trim() + "' does not give both limits; these checks need the "
+                    + "smallest and the largest radius (give limits, or rMin and rMax from the general tolerance)");
+        }
+        double min = rc.min().getAsDouble();
+        double max = rc.max().getAsDouble();
+        return new double[] {min, rc.nominal().isPresent() ? rc.nominal().getAsDouble() : (min + max) / 2, max};
     }
 
     private static void only(boolean ok, String what) {

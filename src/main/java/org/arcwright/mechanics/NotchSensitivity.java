@@ -16,7 +16,9 @@ import java.util.Objects;
  *
  * <p>Units: strengths come in as {@link UltimateStrength}, radii in mm; √a is converted to √mm by
  * √25.4. Outside the strength range the fit is evaluated at the nearer end (clamped) and the result
- * says so. The fits are for steels; other materials need their own notch-sensitivity data.
+ * says so. The torsion cubic falls below zero above about 234 ksi (1610 MPa), inside the stated
+ * range; there √a is taken as 0 (q = 1, the conservative limit) and flagged, never q &gt; 1.
+ * The fits are for steels; other materials need their own notch-sensitivity data.
  */
 public final class NotchSensitivity {
     /** Lower end of the fitted strength range, kpsi. */
@@ -38,6 +40,14 @@ public final class NotchSensitivity {
         String message = within ? "" : String.format(Locale.ROOT,
                 "S_ut = %.0f MPa (%.1f ksi) lies outside the fit's range %.0f..%.0f ksi; Neuber's constant is taken at %.0f ksi",
                 strength.mpa(), s, SUT_MIN_KSI, SUT_MAX_KSI, used);
+        if (sqrtA < 0) {
+            // the torsion cubic crosses zero near 234 ksi: a negative √a would give q > 1
+            sqrtA = 0;
+            within = false;
+            message = (message.isEmpty() ? "" : message + "; ") + String.format(Locale.ROOT,
+                    "the %s fit gives no positive Neuber constant at %.0f ksi; q is taken as 1 (fully notch-sensitive)",
+                    load.isShear() ? "torsion" : "bending", used);
+        }
         return new NeuberConstant(sqrtA, sqrtA * SQRT_MM_PER_SQRT_IN, used, within, message);
     }
 

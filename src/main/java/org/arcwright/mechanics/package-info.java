@@ -16,6 +16,8 @@
  *       mating part ({@link org.arcwright.mechanics.MatingCorner}: chamfer at any angle, radius, or a
  *       rolling bearing from {@link org.arcwright.mechanics.BearingSeatTable}) seat flush, and the
  *       shoulder support left.</li>
+ *   <li>{@link org.arcwright.mechanics.FilletMechanics}: all of the above wired together from the
+ *       packs in force, for the advisor and the shells.</li>
  *   <li>{@link org.arcwright.mechanics.EdgeState}: ISO 13715 edges of undefined shape and the ASME
  *       note that says the same.</li>
  * </ul>

@@ -1,6 +1,7 @@
 /**
  * Drawing output: feature control frames and radius dimensions as a vector model, painted to SVG,
- * PNG, PDF and text; and the part's tolerancing sheet exported as Markdown, HTML and PDF.
+ * PNG, PDF and text; the part's tolerancing sheet exported as Markdown, HTML and PDF; and plots
+ * of measured contours against their zones (Java2D to PNG, JFreeSVG to SVG).
  *
  * <h2>Main abstractions</h2>
  * <ul>
@@ -18,7 +19,7 @@
  *       Markdown, HTML or PDF, with an optional progress callback.</li>
  * </ul>
  *
- * <p>May import: the core packages, java.awt (geometry, fonts, images), javax.imageio, JFreeSVG
- * and PDFBox. Must not import javax.swing or the app; opens no window.
+ * <p>May import: the JDK including {@code java.awt} and {@code javax.imageio}, JFreeSVG, JFreeChart,
+ * PDFBox and the core packages. Must not import Swing or the app, and opens no window.
  */
 package org.arcwright.render;

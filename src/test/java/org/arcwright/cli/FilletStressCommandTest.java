@@ -111,6 +111,39 @@ class FilletStressCommandTest {
     }
 
     @Test
+    void calloutAsDrawnGivesTheLimits() throws Exception {
+        Path f = file("""
+                {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 42, "d": 35, "callout": "R2 +0.2/-0.1"}
+                """);
+        assertThat(run("fillet-stress", f.toString(), "--format", "json")).isZero();
+        JsonNode j = json();
+        assertThat(j.get("atMin").get("r").asDouble()).isEqualTo(1.9);
+        assertThat(j.get("atNominal").get("r").asDouble()).isEqualTo(2.0);
+        assertThat(j.get("atMax").get("r").asDouble()).isEqualTo(2.2);
+    }
+
+    @Test
+    void calloutWithOneLimitIsBadInputAtItsLine() throws Exception {
+        Path f = file("""
+                {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 42, "d": 35,
+                 "callout": "R2 MAX"}
+                """);
+        assertThat(run("fillet-stress", f.toString())).isEqualTo(Cli.BAD_INPUT);
+        assertThat(err.toString()).contains("fillet.json:2:").contains("callout: 'R2 MAX' does not give both limits");
+    }
+
+    @Test
+    void negativeStrengthIsBadInputAtItsNestedField() throws Exception {
+        Path f = file("""
+                {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 38, "d": 32, "r": 1,
+                 "ultimateStrength": {
+                    "value": -690, "units": "MPa"}}
+                """);
+        assertThat(run("fillet-stress", f.toString())).isEqualTo(Cli.BAD_INPUT);
+        assertThat(err.toString()).contains("fillet.json:3:").contains("ultimateStrength.value: must be greater than zero");
+    }
+
+    @Test
     void zeroRadiusIsBadInput() throws Exception {
         Path f = file("""
                 {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 38, "d": 32, "r": 0}

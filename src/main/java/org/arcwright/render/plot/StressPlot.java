@@ -68,9 +68,18 @@ public final class StressPlot {
 
     /** Samples K<sub>t</sub>/K<sub>f</sub> from half the smallest radius to twice the largest (within the step). */
     public Curves curves(FilletStressCase c) {
+        return curves(c, Double.NaN);
+    }
+
+    /** As {@link #curves(FilletStressCase)}, widened to show {@code alsoShow} (NaN for nothing) with some room. */
+    public Curves curves(FilletStressCase c, double alsoShow) {
         double h = c.stepHeight();
         double from = Math.max(h / 40, c.rMin() / 2);
         double to = Math.min(h, Math.max(2 * c.rMax(), c.rMax() + 2 * (c.rMax() - c.rMin())));
+        if (Double.isFinite(alsoShow)) {
+            from = Math.max(h / 40, Math.min(from, alsoShow / 1.3));
+            to = Math.min(h, Math.max(to, alsoShow * 1.3));
+        }
         if (to <= from) from = to / 2;
         List<StressPoint> pts = new ArrayList<>();
         for (int i = 0; i <= SAMPLES; i++) pts.add(analysis.point(c, from + (to - from) * i / SAMPLES));
@@ -84,7 +93,7 @@ public final class StressPlot {
      * @param minimum the smallest radius for the target, or null
      */
     public JFreeChart chart(FilletStressCase c, StressTarget target, MinimumRadius minimum) {
-        Curves curves = curves(c);
+        Curves curves = curves(c, minimum != null && minimum.found() ? minimum.radius() : Double.NaN);
         boolean withKf = c.strength() != null;
         XYSeriesCollection data = new XYSeriesCollection();
         XYSeries kt = new XYSeries("Kt  (Peterson's fit)", false, true);
@@ -102,7 +111,7 @@ public final class StressPlot {
             data.addSeries(kf);
             data.addSeries(kfOut);
         }
-        XYSeries marks = new XYSeries("at r min, nominal, max", false, true);
+        XYSeries marks = new XYSeries(c.hasTolerance() ? "at r min, nominal, max" : "at R " + num(c.rNominal()), false, true);
         StressPoint[] three = {analysis.point(c, c.rMin()), analysis.point(c, c.rNominal()), analysis.point(c, c.rMax())};
         for (StressPoint p : three) {
             marks.add(p.r(), p.kt().kt());
@@ -169,7 +178,8 @@ public final class StressPlot {
         plot.addDomainMarker(band, Layer.BACKGROUND);
 
         StressPoint atMin = three[0];
-        String minText = String.format(Locale.ROOT, "at r min %s:  Kt %.2f%s", num(c.rMin()), atMin.kt().kt(),
+        String minText = String.format(Locale.ROOT, "at %s %s:  Kt %.2f%s", c.hasTolerance() ? "r min" : "R", num(c.rMin()),
+                atMin.kt().kt(),
                 withKf ? String.format(Locale.ROOT, ", Kf %.2f", atMin.kf()) : "");
         double dx = (curves.rTo() - curves.rFrom()) / 120;
         boolean rightHalf = c.rMin() > (curves.rFrom() + curves.rTo()) / 2;
@@ -185,8 +195,9 @@ public final class StressPlot {
             tm.setLabel("target " + target.factor().symbol() + " ≤ " + num(target.value()));
             tm.setLabelFont(new Font(FONT, Font.PLAIN, 12));
             tm.setLabelPaint(TARGET);
-            tm.setLabelAnchor(RectangleAnchor.TOP_RIGHT);
-            tm.setLabelTextAnchor(TextAnchor.BOTTOM_RIGHT);
+            tm.setLabelAnchor(RectangleAnchor.LEFT);
+            tm.setLabelTextAnchor(TextAnchor.TOP_LEFT);
+            tm.setLabelOffset(new RectangleInsets(4, 6, 0, 0));
             tm.setLabelBackgroundColor(new Color(255, 255, 255, 0));
             plot.addRangeMarker(tm);
         }
@@ -196,14 +207,16 @@ public final class StressPlot {
                     + num(minimum.radius()));
             mm.setLabelFont(new Font(FONT, Font.PLAIN, 12));
             mm.setLabelPaint(TARGET);
-            mm.setLabelAnchor(RectangleAnchor.BOTTOM_RIGHT);
-            mm.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
+            boolean right = minimum.radius() > (curves.rFrom() + curves.rTo()) / 2;
+            mm.setLabelAnchor(right ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.BOTTOM_RIGHT);
+            mm.setLabelTextAnchor(right ? TextAnchor.BOTTOM_RIGHT : TextAnchor.BOTTOM_LEFT);
             mm.setLabelBackgroundColor(new Color(255, 255, 255, 200));
             plot.addDomainMarker(mm);
         }
 
         JFreeChart chart = new JFreeChart(null, new Font(FONT, Font.BOLD, 17), plot, false);
         chart.setBackgroundPaint(Color.WHITE);
+        chart.setPadding(new RectangleInsets(6, 8, 4, 22));
         chart.setTitle(new TextTitle((withKf ? "Kt and Kf" : "Kt") + " across the fillet tolerance", new Font(FONT, Font.BOLD, 17)));
         TextTitle sub = new TextTitle(String.format(Locale.ROOT, "%s in %s,  D %s / d %s %s,  h = %s %s   (%s)",
                 c.shape().description(), c.load().key(), num(c.bigD()), num(c.smallD()), u, num(c.stepHeight()), u,

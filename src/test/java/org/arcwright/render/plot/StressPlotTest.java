@@ -74,6 +74,32 @@ class StressPlotTest {
                 .contains("rgb(31,78,154)");
     }
 
+    /**
+     * Golden SVG. Text positions depend on the machine's fonts, so the comparison runs only where
+     * the SansSerif font measures as it did when the golden file was made (the fingerprint file).
+     * Regenerate with -Darcwright.updateGolden=true after looking at the new chart.
+     */
+    @Test
+    void svgMatchesTheGoldenFileWhereTheFontsMatch() throws Exception {
+        Path golden = Path.of("src/test/resources/golden/mechanics/stress-plot.svg");
+        Path fonts = Path.of("src/test/resources/golden/mechanics/stress-plot.svg.fonts");
+        String svg = plot.svg(plot.chart(shaft, StressTarget.kf(2.0), analysis.minimumRadius(shaft, StressTarget.kf(2.0))));
+        if (Boolean.getBoolean("arcwright.updateGolden")) {
+            Files.writeString(golden, svg);
+            Files.writeString(fonts, fontFingerprint());
+        }
+        org.junit.jupiter.api.Assumptions.assumeTrue(fontFingerprint().equals(Files.readString(fonts)),
+                "this machine's SansSerif font differs from the one the golden SVG was drawn with");
+        assertThat(svg).isEqualTo(Files.readString(golden, StandardCharsets.UTF_8));
+    }
+
+    private static String fontFingerprint() {
+        java.awt.Font f = new java.awt.Font("SansSerif", java.awt.Font.PLAIN, 13);
+        double w = f.getStringBounds("Kt and Kf across the fillet tolerance 0123456789 ≤ –",
+                new java.awt.font.FontRenderContext(null, true, true)).getWidth();
+        return String.format(Locale.ROOT, "SansSerif 13 width %.4f%n", w);
+    }
+
     /** Sharp torsion runs outside the fit: the chart draws a separate, dashed stretch for it. */
     @Test
     void extrapolatedStretchIsItsOwnSeries() {
