@@ -309,17 +309,40 @@ final class PdfSheet {
     private List<String> wrap(String text, float size, float maxWidth) throws IOException {
         List<String> lines = new ArrayList<>();
         StringBuilder line = new StringBuilder();
-        for (String word : safe(text).split(" ")) {
-            String candidate = line.length() == 0 ? word : line + " " + word;
-            if (line.length() > 0 && font.getStringWidth(candidate) / 1000 * size > maxWidth) {
-                lines.add(line.toString());
-                line = new StringBuilder(word);
-            } else {
-                line = new StringBuilder(candidate);
+        for (String whole : safe(text).split(" ")) {
+            for (String word : breakLong(whole, size, maxWidth)) {
+                String candidate = line.length() == 0 ? word : line + " " + word;
+                if (line.length() > 0 && font.getStringWidth(candidate) / 1000 * size > maxWidth) {
+                    lines.add(line.toString());
+                    line = new StringBuilder(word);
+                } else {
+                    line = new StringBuilder(candidate);
+                }
             }
         }
         lines.add(line.toString());
         return lines;
+    }
+
+    /** A word wider than the line (a long file path) cut into pieces that fit. */
+    private List<String> breakLong(String word, float size, float maxWidth) throws IOException {
+        List<String> parts = new ArrayList<>();
+        if (font.getStringWidth(word) / 1000 * size <= maxWidth) {
+            parts.add(word);
+            return parts;
+        }
+        StringBuilder piece = new StringBuilder();
+        for (int i = 0; i < word.length(); i++) {
+            String next = piece.toString() + word.charAt(i);
+            if (piece.length() > 0 && font.getStringWidth(next) / 1000 * size > maxWidth) {
+                parts.add(piece.toString());
+                piece = new StringBuilder().append(word.charAt(i));
+            } else {
+                piece = new StringBuilder(next);
+            }
+        }
+        parts.add(piece.toString());
+        return parts;
     }
 
     private void closeAll() throws IOException {

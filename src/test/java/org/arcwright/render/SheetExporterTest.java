@@ -116,4 +116,20 @@ class SheetExporterTest {
         assertThat(f1.calloutPlain()).isEqualTo("R2 ±0.2");
         assertThat(f1.cautions().get(0)).contains("no ISO equivalent");
     }
+
+    @Test
+    void aLongUnbrokenPathIsWrappedInsideThePage(@TempDir Path dir) throws Exception {
+        String path = "cmm/" + "very-long-inspection-folder-name-".repeat(8) + "f1.csv";
+        RadiusFeature f1 = demo.features().get(0);
+        PartWorksheet ws = demo.withFeature(f1.withInspection(
+                new org.arcwright.worksheet.InspectionRecord("pass", path, "2026-11-20", java.util.Map.of())));
+        Path out = dir.resolve("long.pdf");
+        exporter.export(ws, templates, "t", out, null);
+        try (PDDocument doc = Loader.loadPDF(out.toFile())) {
+            PDFTextStripper strip = new PDFTextStripper();
+            String text = strip.getText(doc);
+            assertThat(text.replace("\n", "").replace("\r", "")).contains(path);
+            for (String line : text.split("\n")) assertThat(line.length()).as(line).isLessThan(140);
+        }
+    }
 }
