@@ -32,7 +32,8 @@ import org.arcwright.worksheet.RadiusFeature;
  * @param summary one row per feature
  * @param generalNotes filled title-block and edge-break note templates, may be empty
  * @param features one section per feature, in drawing order
- * @param cautions the usual cautions and every feature's, without repeats
+ * @param cautions the usual cautions, then every feature's prefixed with the ids of the features it
+ *     concerns, each text once
  * @param deferral the closing deferral to the governing standard
  * @param generatedBy program and version
  * @param style the part's drawing style
@@ -130,7 +131,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
 
         List<SummaryRow> rows = new ArrayList<>();
         List<FeatureSection> sections = new ArrayList<>();
-        Set<String> cautions = new LinkedHashSet<>(USUAL_CAUTIONS);
+        Map<String, List<String>> byCaution = new java.util.LinkedHashMap<>();
         for (RadiusFeature f : ws.features()) {
             DesignCase c = f.designCase();
             String heading = c.feature() == null ? f.id() : c.feature();
@@ -152,11 +153,15 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
             }
             List<String> featureCautions = new ArrayList<>(styleRemarks(r.callout(), ws));
             featureCautions.addAll(r.cautions());
-            cautions.addAll(featureCautions);
+            for (String c : featureCautions) byCaution.computeIfAbsent(c, k -> new ArrayList<>()).add(f.id());
             sections.add(new FeatureSection(f.id(), heading, caseLine, r.callout(), text.line(r.callout(), false),
                     text.line(r.callout(), true), text.words(r.callout()), r.because(), Figures.of(r.numbers(), text),
                     featureCautions, r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
                     fill(templates, "inspection-plan", ctx, f), inspection(f.inspection(), ctx), r.demoted()));
+        }
+        Set<String> cautions = new LinkedHashSet<>(USUAL_CAUTIONS);
+        for (Map.Entry<String, List<String>> e : byCaution.entrySet()) {
+            cautions.add(String.join(", ", e.getValue()) + ": " + e.getKey());
         }
         return new SheetContent(title, p.number() + (p.revision() == null ? "" : " rev " + p.revision()), facts, rows, general, sections, List.copyOf(cautions), DEFERRAL,
                 generatedBy == null ? "Arcwright" : generatedBy, ws.standard(), ws.units());
