@@ -153,7 +153,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
             }
             List<String> featureCautions = new ArrayList<>(styleRemarks(r.callout(), ws));
             featureCautions.addAll(r.cautions());
-            for (String c : featureCautions) byCaution.computeIfAbsent(c, k -> new ArrayList<>()).add(f.id());
+            for (String fc : featureCautions) byCaution.computeIfAbsent(fc, k -> new ArrayList<>()).add(f.id());
             sections.add(new FeatureSection(f.id(), heading, caseLine, r.callout(), text.line(r.callout(), false),
                     text.line(r.callout(), true), text.words(r.callout()), r.because(), Figures.of(r.numbers(), text),
                     featureCautions, r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
