@@ -165,6 +165,9 @@ public final class CircleFits {
         return cost;
     }
 
+    /** Above this many points, the minimum zone first converges on an evenly thinned subset. */
+    private static final int COARSE_LIMIT = 20_000;
+
     /** The minimum-zone circle, started from the least-squares centre. */
     public static MinimumZoneCircle minimumZone(double[] xs, double[] ys, int n) {
         requireCircular(xs, ys, n, "points");
@@ -174,10 +177,18 @@ public final class CircleFits {
     /** The minimum-zone circle, started from {@code start}. */
     public static MinimumZoneCircle minimumZone(double[] xs, double[] ys, int n, Circle start) {
         requireCircular(xs, ys, n, "points");
+        if (n > COARSE_LIMIT) {
+            // converge on every k-th point first; the full set then needs a pass or two
+            int k = n / COARSE_LIMIT + 1, m = (n + k - 1) / k;
+            double[] sx = new double[m], sy = new double[m];
+            for (int i = 0, j = 0; i < n; i += k, j++) { sx[j] = xs[i]; sy[j] = ys[i]; }
+            MinimumZoneCircle coarse = minimumZone(sx, sy, m, start);
+            start = new Circle(coarse.cx(), coarse.cy(), (coarse.inner() + coarse.outer()) / 2);
+        }
         double cx = start.cx(), cy = start.cy();
         double scale = Math.max(start.r(), 1e-300);
         double[] d = new double[n], ux = new double[n], uy = new double[n];
-        double trust = scale;
+        double trust = n > COARSE_LIMIT ? scale / 1000 : scale;
         double width = distances(xs, ys, n, cx, cy, d, ux, uy);
         int[] working = initialSectors(xs, ys, n, cx, cy, d);
         int pass = 0;

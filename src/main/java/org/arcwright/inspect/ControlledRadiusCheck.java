@@ -47,6 +47,8 @@ public final class ControlledRadiusCheck {
         double step = w / 4;
         int lo = 0;
         boolean last = false;
+        int worstMid = -1;
+        double worstEx = Double.NEGATIVE_INFINITY;
         for (double start = s0; !last; start += step) {
             if (start + w >= sEnd) {
                 start = Math.max(s0, sEnd - w);
@@ -75,6 +77,11 @@ public final class ControlledRadiusCheck {
                 localMax = Math.max(localMax, c.r());
             }
             boolean reversed = !flat && !sameSense;
+            double ex = flat || reversed ? max : Math.max(min - c.r(), c.r() - max);
+            if (ex > worstEx) {
+                worstEx = ex;
+                worstMid = blend.indices()[mid];
+            }
             if (reversed) {
                 if (Double.isNaN(revFrom)) {
                     revFrom = st[lo];
@@ -91,6 +98,7 @@ public final class ControlledRadiusCheck {
         if (localMin == Double.POSITIVE_INFINITY) localMin = Double.NaN;
         boolean pass = envelope.pass() && reversals.isEmpty() && flats == 0
                 && localMin >= min - resolution && localMax <= max + resolution;
-        return new ControlledRadiusOutcome(envelope, localMin, localMax, List.copyOf(reversals), flats, w, windows, pass);
+        return new ControlledRadiusOutcome(envelope, localMin, localMax, List.copyOf(reversals), flats, w, windows, pass,
+                worstMid, worstEx);
     }
 }

@@ -16,10 +16,13 @@ import org.arcwright.zone.RadiusEnvelope;
  * @param windowLength length of each window along the nominal contour
  * @param windows number of windows fitted
  * @param pass envelope passes, no reversal, no flat, local radii within the limits
+ * @param worstIndex index (in the full point set) of the middle point of the window whose local
+ *     radius lies farthest beyond a limit, or -1
+ * @param worstExcess how far beyond (radius units; the largest limit for a flat or reversed window)
  */
 public record ControlledRadiusOutcome(RadiusEnvelope envelope, double localMin, double localMax,
                                       List<Reversal> reversals, int flats, double windowLength, int windows,
-                                      boolean pass) {
+                                      boolean pass, int worstIndex, double worstExcess) {
     /**
      * A run of windows curving against the blend.
      *

@@ -68,7 +68,7 @@ public final class Inspector {
             env = new RadiusZone(cb.corner(), rl.min(), rl.max(), res).evaluate(pts.xs(), pts.ys(), pts.size());
             pass = env.pass();
             worst = worstOf(pts, env.worst(), env.worstExcess(), "radius");
-            notes.add(String.format(Locale.ROOT, "points within %s %s of a leg count as on it (the zone narrows to nothing at the tangent points); limits compared with the same slack",
+            notes.add(String.format(Locale.ROOT, "points within %s %s of a leg may be taken as on it (the zone narrows to nothing at the tangent points); limits compared with the same slack",
                     fmt(res), req.units().symbol()));
             if (env.beyond() > 0) {
                 notes.add(env.beyond() + " point(s) beyond the tangent points of the " + fmt(rl.max())
@@ -80,6 +80,9 @@ public final class Inspector {
                 cr = ControlledRadiusCheck.evaluate(cb.corner(), cb.radius(), rl.min(), rl.max(), env, blend,
                         req.window(), res);
                 pass = cr.pass();
+                if (cr.worstIndex() >= 0 && (worst == null || cr.worstExcess() > worst.excess())) {
+                    worst = worstOf(pts, cr.worstIndex(), cr.worstExcess(), "radius");
+                }
                 notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s-long windows along the blend, stepped by a quarter window (%d windows)",
                         fmt(cr.windowLength()), cr.windows()));
             }

@@ -70,6 +70,9 @@ public final class ProfileCheck {
         return w;
     }
 
+    /** Above this many points, the registration first converges on an evenly thinned subset. */
+    private static final int COARSE_LIMIT = 20_000;
+
     private Registration register(PointSet points, double f, Set<Freedom> free, boolean dynamic, double[] dev) {
         int n = points.size();
         double[] xs = points.xs(), ys = points.ys();
@@ -82,11 +85,35 @@ public final class ProfileCheck {
         }
         ox /= n; oy /= n;
         double spread = Math.max(Math.hypot(maxX - minX, maxY - minY), 1e-300);
+        double[] start = new double[4];
+        if (n > COARSE_LIMIT) {
+            // converge on every k-th point first; the full set then needs a pass or two (ADR 0301)
+            int k = n / COARSE_LIMIT + 1, m = (n + k - 1) / k;
+            double[] sx = new double[m], sy = new double[m];
+            for (int i = 0, j = 0; i < n; i += k, j++) { sx[j] = xs[i]; sy[j] = ys[i]; }
+            State coarse = converge(sx, sy, m, ox, oy, spread, spread / 10, f, free, dynamic, start);
+            start = new double[] {coarse.tx, coarse.ty, coarse.theta, coarse.offset};
+        }
+        State s = converge(xs, ys, n, ox, oy, spread, n > COARSE_LIMIT ? spread / 1000 : spread / 10, f, free, dynamic, start);
+        System.arraycopy(s.dev, 0, dev, 0, n);
+        double c = Math.cos(s.theta), sn = Math.sin(s.theta);
+        // report the move as a turn about the pivot: t_P = t + (I - R)(o - P)
+        double qx = ox - pivotX, qy = oy - pivotY;
+        double rx = s.tx + qx - (c * qx - sn * qy), ry = s.ty + qy - (sn * qx + c * qy);
+        return new Registration(rx, ry, Math.toDegrees(s.theta), s.offset, pivotX, pivotY);
+    }
+
+    /** Successive linear programmes from {@code start} (tx, ty, θ, offset) until the move vanishes. */
+    private State converge(double[] xs, double[] ys, int n, double ox, double oy, double spread, double trust, double f,
+                           Set<Freedom> free, boolean dynamic, double[] start) {
         boolean fx = free.contains(Freedom.X), fy = free.contains(Freedom.Y), fr = free.contains(Freedom.ROTATION);
         State s = new State(n, ox, oy);
+        s.tx = start[0];
+        s.ty = start[1];
+        s.theta = start[2];
+        s.offset = start[3];
         s.measure(xs, ys, contour);
         double best = objective(s.dev, n, f);
-        double trust = spread / 10;
         int pass = 0;
         int[] working = new int[0];
         while (pass++ < 200) {
@@ -99,7 +126,7 @@ public final class ProfileCheck {
             State t = s.moved(step, xs, ys, contour);
             double obj = objective(t.dev, n, f);
             double size = Math.abs(step[0]) + Math.abs(step[1]) + Math.abs(step[2]) * spread + Math.abs(step[3]);
-            if (obj <= best || Double.isNaN(best)) {
+            if (obj <= best) {
                 // quadratic convergence: after a step of 1e-9 the next would be ~1e-18 of the spread
                 boolean done = size <= 1e-9 * spread || (best - obj) <= 1e-15 * spread;
                 s = t;
@@ -111,12 +138,7 @@ public final class ProfileCheck {
                 if (trust < 1e-15 * spread) break;
             }
         }
-        System.arraycopy(s.dev, 0, dev, 0, n);
-        double c = Math.cos(s.theta), sn = Math.sin(s.theta);
-        // report the move as a turn about the pivot: t_P = t + (I - R)(o - P)
-        double qx = ox - pivotX, qy = oy - pivotY;
-        double rx = s.tx + qx - (c * qx - sn * qy), ry = s.ty + qy - (sn * qx + c * qy);
-        return new Registration(rx, ry, Math.toDegrees(s.theta), s.offset, pivotX, pivotY);
+        return s;
     }
 
     /** The minimax objective (the zone width needed), NaN-safe. */

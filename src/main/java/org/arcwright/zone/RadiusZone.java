@@ -18,8 +18,8 @@ import org.arcwright.io.InputProblem;
  *
  * <h2>Resolution</h2>
  * The zone narrows to nothing at the tangent points, so points are classified against the leg lines
- * with a stated resolution (default 1e-6 of the drawing unit): within it a point counts as on the
- * leg. Limits are compared with the same slack.
+ * with a stated resolution (default 1e-6 of the drawing unit): within it a point may be taken as on
+ * the leg or where it lies, whichever allows more. Limits are compared with the same slack.
  *
  * @param corner the adjacent surfaces
  * @param min smallest radius allowed, >= 0
@@ -136,6 +136,8 @@ public final class RadiusZone {
             double h = Double.POSITIVE_INFINITY;
             if (ha <= resolution) h = Math.min(h, Math.max(0, xa) * tanA);
             if (hb <= resolution) h = Math.min(h, Math.max(0, xb) * tanA);
+            // within the resolution of a leg the point may be taken as on it, or as where it is
+            if (ha > 0 && hb > 0) h = Math.max(h, blend(x, y));
             lo[0] = 0;
             hi[0] = h;
         } else {

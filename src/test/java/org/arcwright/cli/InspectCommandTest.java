@@ -108,6 +108,20 @@ class InspectCommandTest {
     }
 
     @Test
+    void generalContourFileIsJudgedForProfile() throws IOException {
+        String contour = "\"units\": \"mm\", \"contour\": {\"air\": \"left\", \"segments\": ["
+                + "{\"type\": \"line\", \"from\": [6, 0], \"to\": [2, 0]},"
+                + "{\"type\": \"arc\", \"from\": [2, 0], \"to\": [0, 2], \"centre\": [2, 2], \"turn\": \"cw\"},"
+                + "{\"type\": \"line\", \"from\": [0, 2], \"to\": [0, 6]}]}";
+        Path f = file("g.json", "{" + contour + ", \"callout\": {\"type\": \"profile\", \"zone\": 0.2}, \"points\": " + arcPoints(2.05) + "}");
+        assertThat(run("inspect", f.toString(), "--format", "json")).isEqualTo(0);
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        // the 2.05 blend lies inside (toward the material) of the 2.0 nominal of a round: negative deviations
+        assertThat(j.get("maxInward").asDouble()).isPositive();
+        assertThat(j.has("fits")).isFalse();
+    }
+
+    @Test
     void csvJunkLineIsBadInputNamingTheLine() throws IOException {
         Files.writeString(dir.resolve("s.csv"), "x,y\n1,0\n0.5,0.1\nabc,2\n");
         Path f = file("run.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"pointsFile\": \"s.csv\"}");

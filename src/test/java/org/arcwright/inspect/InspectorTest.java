@@ -97,6 +97,38 @@ class InspectorTest {
     }
 
     @Test
+    void unequallyDisposedRequiredZoneKeepsTheDisposition() {
+        // all deviations 0..+0.01 toward air; a zone with 80% outward needs 0.01 / 0.8 (ASME Y14.5-2018
+        // unequally disposed profile, from memory: the zone scales with its disposition kept)
+        PointSet pts = Sections.section(Sections.SQUARE, 2, 40, 200, 0, 1, f -> 0.01);
+        var unequal = new InspectionCallout.ProfileTolerance(new ProfileZone(0.02, 0.016), Freedom.none(), false);
+        InspectionResult r = inspector.inspect(Sections.request(Sections.SQUARE, 2, unequal, pts));
+        assertThat(r.profile().requiredZone()).isCloseTo(0.0125, within(1e-12));
+        assertThat(r.pass()).isTrue();
+        var iso = new InspectionCallout.ProfileTolerance(ProfileZone.isoOffset(0.02, 0.006), Freedom.none(), false);
+        assertThat(inspector.inspect(Sections.request(Sections.SQUARE, 2, iso, pts)).profile().requiredZone())
+                .isCloseTo(0.0125, within(1e-12));
+        // floating in x and y with the same disposition: the zone can move, so it needs no more
+        var floatingXy = new InspectionCallout.ProfileTolerance(new ProfileZone(0.02, 0.016), java.util.EnumSet.of(Freedom.X, Freedom.Y), false);
+        assertThat(inspector.inspect(Sections.request(Sections.SQUARE, 2, floatingXy, pts)).profile().requiredZone())
+                .isLessThanOrEqualTo(0.0125 + 1e-12);
+    }
+
+    @Test
+    void generalContourGivesTheSameProfileVerdictAsTheCorner() {
+        PointSet pts = Sections.section(Sections.SQUARE, 2, 30, 150, 0.002, 4, f -> 0.005 * Math.sin(2 * Math.PI * f));
+        var floating = new InspectionCallout.ProfileTolerance(ProfileZone.bilateral(0.05), Freedom.all(), false);
+        double viaCorner = inspector.inspect(Sections.request(Sections.SQUARE, 2, floating, pts)).profile().requiredZone();
+        org.arcwright.zone.Contour chain = Sections.SQUARE.contour(2, 20);
+        InspectionRequest req = new InspectionRequest(org.arcwright.tolerance.Units.MM, new Nominal.Chain(chain), floating, pts, 1e-6,
+                Double.NaN, false);
+        assertThat(inspector.inspect(req).profile().requiredZone()).isCloseTo(viaCorner, within(1e-9));
+        InspectionRequest radius = new InspectionRequest(org.arcwright.tolerance.Units.MM, new Nominal.Chain(chain), R, pts, 1e-6,
+                Double.NaN, false);
+        assertThatThrownBy(() -> inspector.inspect(radius)).isInstanceOf(InputProblem.class).hasMessageContaining("needs a corner");
+    }
+
+    @Test
     void dynamicProfileAbsorbsAUniformOffset() {
         // every point 0.01 toward air (legs and blend): a uniform offset, which dynamic profile frees
         Corner c = Sections.SQUARE;
