@@ -166,7 +166,8 @@ public final class CircleFits {
             double dx = xs[i] - mx - a, dy = ys[i] - my - b;
             double d = Math.sqrt(dx * dx + dy * dy);
             double e = d - r;
-            double j0 = d > 0 ? -dx / d : 0, j1 = d > 0 ? -dy / d : 0;
+            double inv = d > 0 ? -1 / d : 0;
+            double j0 = dx * inv, j1 = dy * inv;
             s00 += j0 * j0; s01 += j0 * j1; s02 -= j0; s11 += j1 * j1; s12 -= j1; s22 += 1;
             g0 += j0 * e; g1 += j1 * e; g2 -= e;
             cost += e * e;
