@@ -12,6 +12,9 @@ import picocli.CommandLine.Command;
         subcommands = {
                 LimitsCommand.class,
                 GeneralToleranceCommand.class,
+                FilletStressCommand.class,
+                ClearanceCommand.class,
+                NotesCommand.class,
                 InspectCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },

@@ -27,6 +27,7 @@ public enum DrawingStyle {
     ISO;
 
     /** Reads {@code asme} or {@code iso} (any case). */
+    @com.fasterxml.jackson.annotation.JsonCreator
     public static DrawingStyle parse(String text) {
         if (text == null) throw org.arcwright.io.InputProblem.ofField("standard", "missing; use asme or iso");
         return switch (text.trim().toLowerCase(java.util.Locale.ROOT)) {
@@ -36,6 +37,10 @@ public enum DrawingStyle {
                     "unknown standard '" + text + "'; use asme or iso");
         };
     }
+
+    /** The name used in files: {@code asme} or {@code iso}. */
+    @com.fasterxml.jackson.annotation.JsonValue
+    public String key() { return name().toLowerCase(java.util.Locale.ROOT); }
 
     /** The callout text as it would be drawn. */
     public String format(RadiusCallout c) {

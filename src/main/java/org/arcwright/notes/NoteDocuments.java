@@ -1,0 +1,101 @@
+package org.arcwright.notes;
+
+import java.nio.charset.StandardCharsets;
+import java.security.MessageDigest;
+import java.security.NoSuchAlgorithmException;
+import java.util.HexFormat;
+import org.apache.lucene.document.BinaryDocValuesField;
+import org.apache.lucene.document.Document;
+import org.apache.lucene.document.Field;
+import org.apache.lucene.document.FieldType;
+import org.apache.lucene.document.StoredField;
+import org.apache.lucene.document.StringField;
+import org.apache.lucene.document.TextField;
+import org.apache.lucene.facet.FacetsConfig;
+import org.apache.lucene.facet.sortedset.SortedSetDocValuesFacetField;
+import org.apache.lucene.index.IndexOptions;
+import org.apache.lucene.util.BytesRef;
+import org.arcwright.pack.PackLayer;
+
+/** How a note becomes a Lucene document, and the field names of the index. */
+final class NoteDocuments {
+    /** Bump when fields or analysis change: an index with another schema is rebuilt. */
+    static final String SCHEMA = "arcwright-notes-5";
+
+    static final String ID = "id";
+    static final String TITLE = "title";
+    static final String TAGS = "tags";
+    static final String BODY = "body";
+    static final String SOURCE = "source";
+    static final String PACK = "pack_name";
+    static final String LAYER = "layer";
+    static final String LOCATION = "location";
+    static final String HASH = "hash";
+
+    static final String COMMIT_SCHEMA = "schema";
+    static final String COMMIT_STAMP = "sources";
+
+    private static final FieldType BODY_TYPE = new FieldType(TextField.TYPE_STORED);
+
+    static {
+        BODY_TYPE.setIndexOptions(IndexOptions.DOCS_AND_FREQS_AND_POSITIONS_AND_OFFSETS);
+        BODY_TYPE.freeze();
+    }
+
+    private NoteDocuments() {}
+
+    static FacetsConfig facetsConfig() {
+        FacetsConfig c = new FacetsConfig();
+        for (NoteFacet f : NoteFacet.values()) {
+            c.setMultiValued(f.key(), f != NoteFacet.PACK);
+        }
+        return c;
+    }
+
+    /** The index field used to filter on a facet (exact values). */
+    static String filterField(NoteFacet f) {
+        return "f_" + f.key();
+    }
+
+    static Document toDocument(FacetsConfig config, Note note, String source, String pack, PackLayer layer,
+                               String location, String hash) {
+        Document d = new Document();
+        d.add(new StringField(ID, note.id(), Field.Store.YES));
+        d.add(new BinaryDocValuesField(ID, new BytesRef(note.id())));
+        d.add(new TextField(TITLE, note.title(), Field.Store.YES));
+        d.add(new TextField(TAGS, String.join(" , ", note.tags()), Field.Store.NO));
+        d.add(new Field(BODY, NoteFormat.plainText(note.body()), BODY_TYPE));
+        d.add(new StoredField(SOURCE, source));
+        d.add(new StoredField(PACK, pack));
+        d.add(new StoredField(LAYER, layer.name()));
+        d.add(new StoredField(LOCATION, location));
+        d.add(new BinaryDocValuesField(LOCATION, new BytesRef(location)));
+        d.add(new BinaryDocValuesField(HASH, new BytesRef(hash)));
+        for (NoteFacet f : NoteFacet.values()) {
+            for (String v : f.valuesOf(note, pack)) {
+                d.add(new StringField(filterField(f), v, Field.Store.NO));
+                d.add(new SortedSetDocValuesFacetField(f.key(), v));
+            }
+        }
+        try {
+            return config.build(d);
+        } catch (java.io.IOException e) {
+            throw new java.io.UncheckedIOException(e);
+        }
+    }
+
+    /** The content hash of a note file as supplied by a pack: pack, layer and bytes. */
+    static String hash(byte[] bytes, String pack, PackLayer layer) {
+        try {
+            MessageDigest md = MessageDigest.getInstance("SHA-256");
+            md.update(pack.getBytes(StandardCharsets.UTF_8));
+            md.update((byte) 0);
+            md.update(layer.name().getBytes(StandardCharsets.UTF_8));
+            md.update((byte) 0);
+            md.update(bytes);
+            return HexFormat.of().formatHex(md.digest(), 0, 16);
+        } catch (NoSuchAlgorithmException e) {
+            throw new IllegalStateException("SHA-256 is part of every Java 17 runtime", e);
+        }
+    }
+}

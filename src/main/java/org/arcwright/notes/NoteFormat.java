@@ -1,0 +1,174 @@
+package org.arcwright.notes;
+
+import java.time.LocalDate;
+import java.time.format.DateTimeParseException;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import org.arcwright.io.InputProblem;
+
+/**
+ * Reads and writes the note file format: a header of {@code key: value} lines between two lines
+ * of three hyphens, then the Markdown body.
+ *
+ * <pre>
+ * ---
+ * id: seal-groove-corner-radii
+ * title: Corner radii in O-ring grooves
+ * tags: o-ring, groove, sealing land
+ * functions: sealing
+ * standard: ISO 3601-2, common practice
+ * process: machined
+ * author: Arcwright built-in
+ * updated: 2026-11-30
+ * ---
+ * Body in Markdown...
+ * </pre>
+ *
+ * <p>{@code id} and {@code title} are required; lists are separated by commas; {@code updated} is
+ * an ISO date. Unknown or repeated keys are errors (a misspelt key silently ignored is how a note
+ * quietly drops out of a filter). Errors are {@link InputProblem}s naming file, line, column and
+ * key. See decision record 0500.
+ */
+public final class NoteFormat {
+    /** The header keys, in the order they are written. */
+    public static final List<String> KEYS =
+            List.of("id", "title", "tags", "functions", "standard", "process", "author", "updated");
+
+    private static final String FENCE = "---";
+
+    private NoteFormat() {}
+
+    /**
+     * Parses a note.
+     *
+     * @param text the whole file
+     * @param source the file name for error messages
+     * @throws InputProblem when the header is missing, unclosed, has an unknown, repeated or
+     *     malformed key, or lacks {@code id} or {@code title}
+     */
+    public static Note parse(String text, String source) {
+        String t = text.startsWith("\uFEFF") ? text.substring(1) : text;
+        String[] lines = t.split("\r?\n", -1);
+        if (lines.length == 0 || !lines[0].strip().equals(FENCE)) {
+            throw new InputProblem(source, 1, 1, null,
+                    "a note starts with a header between two '---' lines (id, title, tags, ...)");
+        }
+        Map<String, String> values = new LinkedHashMap<>();
+        Map<String, Integer> lineOf = new LinkedHashMap<>();
+        int close = -1;
+        for (int i = 1; i < lines.length; i++) {
+            String line = lines[i];
+            if (line.strip().equals(FENCE)) {
+                close = i;
+                break;
+            }
+            if (line.isBlank() || line.stripLeading().startsWith("#")) continue;
+            int colon = line.indexOf(':');
+            if (colon < 0) {
+                throw new InputProblem(source, i + 1, 1, null,
+                        "header line must be 'key: value' (or the header is not closed with '---')");
+            }
+            String key = line.substring(0, colon).strip();
+            if (!KEYS.contains(key)) {
+                throw new InputProblem(source, i + 1, 1, key, "unknown header key; known keys: " + String.join(", ", KEYS));
+            }
+            if (values.containsKey(key)) {
+                throw new InputProblem(source, i + 1, 1, key, "repeated header key (first on line " + lineOf.get(key) + ")");
+            }
+            values.put(key, line.substring(colon + 1).strip());
+            lineOf.put(key, i + 1);
+        }
+        if (close < 0) {
+            throw new InputProblem(source, lines.length, 1, null, "header not closed: add a line '---' after the last key");
+        }
+        for (String required : List.of("id", "title")) {
+            if (values.getOrDefault(required, "").isEmpty()) {
+                throw new InputProblem(source, lineOf.getOrDefault(required, 1), 1, required, "missing required header key");
+            }
+        }
+        LocalDate updated = null;
+        String u = values.getOrDefault("updated", "");
+        if (!u.isEmpty()) {
+            try {
+                updated = LocalDate.parse(u);
+            } catch (DateTimeParseException e) {
+                throw new InputProblem(source, lineOf.get("updated"), valueColumn(lines, lineOf.get("updated")), "updated",
+                        "'" + u + "' is not a date of the form 2026-11-30");
+            }
+        }
+        String body = String.join("\n", Arrays.asList(lines).subList(close + 1, lines.length)).strip();
+        try {
+            return new Note(values.get("id"), values.get("title"), list(values.get("tags")),
+                    list(values.get("functions")), list(values.get("standard")), list(values.get("process")),
+                    values.get("author"), updated, body);
+        } catch (IllegalArgumentException e) {
+            String field = e.getMessage().startsWith("id") ? "id" : "title";
+            int line = lineOf.getOrDefault(field, 1);
+            throw new InputProblem(source, line, valueColumn(lines, line), field, e.getMessage());
+        }
+    }
+
+    /** Writes a note in the file format; {@link #parse} reads it back to an equal note. */
+    public static String format(Note note) {
+        StringBuilder sb = new StringBuilder();
+        sb.append(FENCE).append('\n');
+        sb.append("id: ").append(note.id()).append('\n');
+        sb.append("title: ").append(oneLine(note.title())).append('\n');
+        appendList(sb, "tags", note.tags());
+        appendList(sb, "functions", note.functions());
+        appendList(sb, "standard", note.standards());
+        appendList(sb, "process", note.processes());
+        if (!note.author().isEmpty()) sb.append("author: ").append(oneLine(note.author())).append('\n');
+        if (note.updated() != null) sb.append("updated: ").append(note.updated()).append('\n');
+        sb.append(FENCE).append('\n');
+        if (!note.body().isEmpty()) sb.append(note.body().strip()).append('\n');
+        return sb.toString();
+    }
+
+    /**
+     * The body without Markdown marks (headings, emphasis, code ticks, link targets, list bullets),
+     * for indexing and snippets.
+     */
+    public static String plainText(String markdown) {
+        StringBuilder sb = new StringBuilder(markdown.length());
+        for (String line : markdown.split("\r?\n", -1)) {
+            String l = line.replaceFirst("^\\s{0,3}#{1,6}\\s+", "")
+                    .replaceFirst("^\\s*[-*+]\\s+", "")
+                    .replaceFirst("^\\s*>\\s?", "")
+                    .replaceAll("\\[([^\\]]*)\\]\\([^)]*\\)", "$1")
+                    .replaceAll("(\\*\\*|__|`)", "")
+                    .replaceAll("(?<![\\w*])\\*(?!\\s)([^*]+?)(?<!\\s)\\*(?![\\w*])", "$1");
+            sb.append(l).append('\n');
+        }
+        return sb.toString();
+    }
+
+    private static void appendList(StringBuilder sb, String key, List<String> values) {
+        if (!values.isEmpty()) sb.append(key).append(": ").append(String.join(", ", values)).append('\n');
+    }
+
+    private static String oneLine(String s) {
+        return s.replaceAll("\\s+", " ").strip();
+    }
+
+    private static List<String> list(String raw) {
+        if (raw == null || raw.isBlank()) return List.of();
+        List<String> out = new ArrayList<>();
+        for (String part : raw.split(",")) {
+            String p = part.strip();
+            if (!p.isEmpty()) out.add(p);
+        }
+        return out;
+    }
+
+    private static int valueColumn(String[] lines, int oneBasedLine) {
+        String line = lines[oneBasedLine - 1];
+        int colon = line.indexOf(':');
+        int col = colon + 1;
+        while (col < line.length() && Character.isWhitespace(line.charAt(col))) col++;
+        return col + 1;
+    }
+}

@@ -1,0 +1,813 @@
+package org.arcwright.notes;
+
+import java.io.Closeable;
+import java.io.IOException;
+import java.io.StringReader;
+import java.io.UncheckedIOException;
+import java.nio.ByteBuffer;
+import java.nio.charset.CharacterCodingException;
+import java.nio.charset.CodingErrorAction;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Collection;
+import java.util.Collections;
+import java.util.Comparator;
+import java.util.EnumMap;
+import java.util.HashMap;
+import java.util.HashSet;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Optional;
+import java.util.Set;
+import java.util.WeakHashMap;
+import java.util.stream.Stream;
+import org.apache.lucene.document.Document;
+import org.apache.lucene.facet.FacetResult;
+import org.apache.lucene.facet.Facets;
+import org.apache.lucene.facet.FacetsCollectorManager;
+import org.apache.lucene.facet.FacetsConfig;
+import org.apache.lucene.facet.LabelAndValue;
+import org.apache.lucene.facet.sortedset.DefaultSortedSetDocValuesReaderState;
+import org.apache.lucene.facet.sortedset.SortedSetDocValuesFacetCounts;
+import org.apache.lucene.facet.sortedset.SortedSetDocValuesReaderState;
+import org.apache.lucene.index.BinaryDocValues;
+import org.apache.lucene.index.DirectoryReader;
+import org.apache.lucene.index.IndexReader;
+import org.apache.lucene.index.IndexWriter;
+import org.apache.lucene.index.IndexWriterConfig;
+import org.apache.lucene.index.LeafReaderContext;
+import org.apache.lucene.index.SegmentInfos;
+import org.apache.lucene.index.StoredFields;
+import org.apache.lucene.index.Term;
+import org.apache.lucene.queries.mlt.MoreLikeThis;
+import org.apache.lucene.search.BooleanClause.Occur;
+import org.apache.lucene.search.BooleanQuery;
+import org.apache.lucene.search.BoostQuery;
+import org.apache.lucene.search.IndexSearcher;
+import org.apache.lucene.search.MatchAllDocsQuery;
+import org.apache.lucene.search.Query;
+import org.apache.lucene.search.ScoreDoc;
+import org.apache.lucene.search.SearcherManager;
+import org.apache.lucene.search.TermQuery;
+import org.apache.lucene.search.TopDocs;
+import org.apache.lucene.search.uhighlight.DefaultPassageFormatter;
+import org.apache.lucene.search.uhighlight.UnifiedHighlighter;
+import org.apache.lucene.store.ByteBuffersDirectory;
+import org.apache.lucene.store.Directory;
+import org.apache.lucene.store.FSDirectory;
+import org.apache.lucene.store.LockObtainFailedException;
+import org.apache.lucene.util.Bits;
+import org.apache.lucene.util.QueryBuilder;
+import org.arcwright.io.AtomicFiles;
+import org.arcwright.io.InputProblem;
+import org.arcwright.pack.PackLayer;
+import org.arcwright.pack.PackStack;
+import org.arcwright.pack.PracticePack;
+
+/**
+ * The practice notes of a pack stack, searchable through a Lucene index kept in a cache folder.
+ *
+ * <p>The note files are the truth; the index is derived from them and never trusted over them.
+ * {@link #open} compares a stamp of the note files (paths, sizes, times) with the one recorded in
+ * the index: when they match the index is opened as it is; when they differ the notes are read and
+ * only those whose content hash changed are re-indexed; when the index is missing, unreadable,
+ * corrupt or of another schema it is rebuilt; when its folder is locked by a live process or cannot
+ * be written it is built in memory for this session. A search that meets a corrupt index rebuilds
+ * it and searches again.
+ *
+ * <p>A note file that cannot be parsed is reported in {@link #problems()} with file, line and key;
+ * the version of it last indexed stays searchable, so a half-saved file loses nothing.
+ *
+ * <p>{@link #add} and {@link #save} write into the stack's personal pack through
+ * {@link AtomicFiles} and update the index for that one note.
+ *
+ * <p>Searches may run from several threads; writes are serialised. Close the store to release
+ * the index files.
+ */
+public final class NotesStore implements Closeable {
+    private static final float TITLE_BOOST = 3.0f;
+    private static final float TAGS_BOOST = 2.5f;
+    private static final float BODY_BOOST = 1.0f;
+    private static final float PHRASE_BOOST = 1.5f;
+    private static final int FACET_VALUES = 20;
+    private static final int SUMMARY_CHARS = 220;
+
+    private final PackStack stack;
+    private final Path indexFolder;
+    private final TradeAnalyzer indexAnalyzer = TradeAnalyzer.forIndexing();
+    private final TradeAnalyzer queryAnalyzer = TradeAnalyzer.forQueries();
+    private final FacetsConfig facetsConfig = NoteDocuments.facetsConfig();
+    private final Map<IndexReader, SortedSetDocValuesReaderState> facetStates =
+            Collections.synchronizedMap(new WeakHashMap<>());
+
+    private Directory directory;
+    private volatile SearcherManager manager;
+    private volatile List<InputProblem> problems = List.of();
+    private volatile IndexReport report;
+    private boolean inMemory;
+
+    private NotesStore(PackStack stack, Path indexFolder) {
+        this.stack = Objects.requireNonNull(stack, "stack");
+        this.indexFolder = Objects.requireNonNull(indexFolder, "indexFolder");
+    }
+
+    /**
+     * Opens the notes of {@code stack} with their index in {@code indexFolder} (created if
+     * missing), bringing the index in line with the notes first.
+     *
+     * @param stack the packs whose {@code notes/*.md} files are the notes, lowest layer first
+     * @param indexFolder the cache folder for this stack's index, e.g. from {@link #indexFolderFor}
+     */
+    public static NotesStore open(PackStack stack, Path indexFolder) {
+        NotesStore s = new NotesStore(stack, indexFolder);
+        s.start();
+        return s;
+    }
+
+    /**
+     * A folder under {@code indexRoot} for the index of this stack: stacks of different packs get
+     * different folders, so switching between them does not rebuild each time.
+     */
+    public static Path indexFolderFor(Path indexRoot, PackStack stack) {
+        StringBuilder key = new StringBuilder();
+        for (PracticePack p : stack.packs()) key.append(p.layer()).append('|').append(p.root().toAbsolutePath()).append('\n');
+        return indexRoot.resolve("stack-" + NoteDocuments.hash(key.toString().getBytes(StandardCharsets.UTF_8), "", PackLayer.BUILT_IN));
+    }
+
+    /** How the index was brought in line with the notes at open, or by the last {@link #reindex}. */
+    public IndexReport report() {
+        return report;
+    }
+
+    /** Note files that could not be read or parsed at the last check, each naming file, line and key. */
+    public List<InputProblem> problems() {
+        return problems;
+    }
+
+    /** The cache folder of the index. */
+    public Path indexFolder() {
+        return indexFolder;
+    }
+
+    /** How many notes are in force (after layering). */
+    public int size() {
+        return withSearcher(s -> s.getIndexReader().numDocs());
+    }
+
+    /**
+     * Finds notes for a query typed by a user. The text is analysed, never parsed as a query
+     * language: quotes, brackets, {@code *} and {@code AND} are words or nothing, never errors.
+     * Title and tags weigh more than the body; words found near each other in the body weigh more.
+     * An empty query lists the notes the filters allow.
+     *
+     * @param text what the user typed
+     * @param filters facet restrictions, {@link NoteFilters#none()} for none
+     * @param limit how many hits at most, 1 or more
+     */
+    public SearchResult search(String text, NoteFilters filters, int limit) {
+        Objects.requireNonNull(filters, "filters");
+        if (limit < 1) throw InputProblem.ofField("limit", "must be 1 or more, got " + limit);
+        String q = text == null ? "" : text;
+        Query textQuery = q.isBlank() ? new MatchAllDocsQuery() : textQuery(q);
+        if (textQuery == null) return SearchResult.empty(q);
+        Query query = withFilters(textQuery, filters);
+        return withSearcher(s -> {
+            FacetsCollectorManager.FacetsResult r = FacetsCollectorManager.search(s, query, limit, new FacetsCollectorManager());
+            TopDocs top = r.topDocs();
+            String[] snippets = snippets(s, query, top);
+            List<NoteHit> hits = new ArrayList<>();
+            StoredFields stored = s.storedFields();
+            for (int i = 0; i < top.scoreDocs.length; i++) {
+                ScoreDoc sd = top.scoreDocs[i];
+                hits.add(hit(stored.document(sd.doc), sd.score, snippets == null ? null : snippets[i]));
+            }
+            return new SearchResult(q, top.totalHits.value, hits, facetCounts(s.getIndexReader(), r));
+        });
+    }
+
+    /**
+     * Notes to recommend beside a decision: those sharing the given labels (matched against tags,
+     * functions and processes) and those whose words are most like {@code text} (more-like-this by
+     * tf-idf). For the advisor, which passes the function and tags of the case and its explanation.
+     *
+     * @param tags labels such as {@code stress-relief}, {@code sealing}, {@code cast}; may be empty
+     * @param text free text describing the case; may be empty
+     * @param limit how many at most, 1 or more
+     * @return the best notes first; empty when neither tags nor text give anything to go on
+     */
+    public List<NoteHit> related(Collection<String> tags, String text, int limit) {
+        return related(tags, text, limit, Set.of());
+    }
+
+    /** Notes related to the note {@code id} by its tags and its text, the note itself left out. */
+    public List<NoteHit> relatedTo(String id, int limit) {
+        Optional<FiledNote> n = get(id);
+        if (n.isEmpty()) return List.of();
+        Note note = n.get().note();
+        List<String> labels = new ArrayList<>(note.tags());
+        labels.addAll(note.functions());
+        return related(labels, note.title() + "\n" + NoteFormat.plainText(note.body()), limit, Set.of(id));
+    }
+
+    private List<NoteHit> related(Collection<String> tags, String text, int limit, Set<String> exclude) {
+        Objects.requireNonNull(tags, "tags");
+        if (limit < 1) throw InputProblem.ofField("limit", "must be 1 or more, got " + limit);
+        return withSearcher(s -> {
+            BooleanQuery.Builder b = new BooleanQuery.Builder();
+            boolean any = false;
+            for (String t : tags) {
+                if (t == null || t.isBlank()) continue;
+                String label = Note.label(t);
+                b.add(new BoostQuery(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.TAG), label)), 2.0f), Occur.SHOULD);
+                b.add(new BoostQuery(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.FUNCTION), label)), 1.5f), Occur.SHOULD);
+                b.add(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.PROCESS), label)), Occur.SHOULD);
+                any = true;
+            }
+            if (text != null && !text.isBlank()) {
+                MoreLikeThis mlt = new MoreLikeThis(s.getIndexReader());
+                mlt.setAnalyzer(indexAnalyzer);
+                mlt.setFieldNames(new String[] {NoteDocuments.BODY});
+                mlt.setMinTermFreq(1);
+                mlt.setMinDocFreq(1);
+                mlt.setMaxQueryTerms(25);
+                mlt.setMinWordLen(2);
+                mlt.setStopWords(org.apache.lucene.analysis.en.EnglishAnalyzer.ENGLISH_STOP_WORDS_SET);
+                Query like = mlt.like(NoteDocuments.BODY, new StringReader(text));
+                if (like instanceof BooleanQuery bq && !bq.clauses().isEmpty()) {
+                    b.add(like, Occur.SHOULD);
+                    any = true;
+                }
+            }
+            if (!any) return List.<NoteHit>of();
+            for (String x : exclude) b.add(new TermQuery(new Term(NoteDocuments.ID, x)), Occur.MUST_NOT);
+            TopDocs top = s.search(b.build(), limit);
+            StoredFields stored = s.storedFields();
+            List<NoteHit> out = new ArrayList<>();
+            for (ScoreDoc sd : top.scoreDocs) out.add(hit(stored.document(sd.doc), sd.score, null));
+            return out;
+        });
+    }
+
+    /** The note in force under {@code id}, with the pack that supplies it. */
+    public Optional<FiledNote> get(String id) {
+        Objects.requireNonNull(id, "id");
+        return withSearcher(s -> {
+            TopDocs top = s.search(new TermQuery(new Term(NoteDocuments.ID, id)), 1);
+            if (top.scoreDocs.length == 0) return Optional.<FiledNote>empty();
+            Document d = s.storedFields().document(top.scoreDocs[0].doc);
+            return Optional.of(filed(d));
+        });
+    }
+
+    /** The ids of all notes in force, sorted. */
+    public List<String> ids() {
+        return withSearcher(s -> {
+            List<String> out = new ArrayList<>(idsIn(s.getIndexReader()).keySet());
+            Collections.sort(out);
+            return out;
+        });
+    }
+
+    /**
+     * Adds a note file to the personal pack (as {@code notes/ID.md}, text unchanged) and indexes it.
+     * A note with the same id in a lower layer is thereby replaced for this user.
+     *
+     * @param file a Markdown note with a header
+     * @param replace whether a note with the same id already in the personal pack may be replaced
+     * @throws InputProblem when the file cannot be read or parsed, or the id is taken and
+     *     {@code replace} is false
+     */
+    public synchronized FiledNote add(Path file, boolean replace) {
+        String text = readNoteText(file);
+        Note note = NoteFormat.parse(text, file.toString());
+        Path target = personalTarget(note.id());
+        if (Files.exists(target) && !replace) {
+            throw new InputProblem(file.toString(), 0, 0, "id", "a note '" + note.id()
+                    + "' is already in the personal pack (" + target + "); replace it or choose another id");
+        }
+        return write(note, text.endsWith("\n") ? text : text + "\n", target);
+    }
+
+    /**
+     * Saves a new or edited note into the personal pack and re-indexes it. Editing a built-in or team
+     * note this way creates a personal note with the same id that replaces it for this user.
+     */
+    public synchronized FiledNote save(Note note) {
+        Objects.requireNonNull(note, "note");
+        return write(note, NoteFormat.format(note), personalTarget(note.id()));
+    }
+
+    /** Throws the index away and builds it again from the notes. */
+    public synchronized IndexReport reindex() {
+        long t0 = System.nanoTime();
+        rebuild("asked for", t0);
+        return report;
+    }
+
+    @Override
+    public synchronized void close() {
+        try {
+            if (manager != null) manager.close();
+            if (directory != null) directory.close();
+        } catch (IOException e) {
+            throw new UncheckedIOException("could not close the notes index in " + indexFolder, e);
+        } finally {
+            manager = null;
+            directory = null;
+            indexAnalyzer.close();
+            queryAnalyzer.close();
+        }
+    }
+
+    // ---------------------------------------------------------------- opening and syncing
+
+    private synchronized void start() {
+        long t0 = System.nanoTime();
+        try {
+            Files.createDirectories(indexFolder);
+            directory = FSDirectory.open(indexFolder);
+        } catch (IOException e) {
+            buildInMemory("index folder unusable: " + e.getMessage(), t0);
+            return;
+        }
+        SourceScan scan = SourceScan.of(stack);
+        Map<String, String> commit;
+        try {
+            if (!DirectoryReader.indexExists(directory)) {
+                rebuild("no index yet", t0, scan);
+                return;
+            }
+            commit = SegmentInfos.readLatestCommit(directory).getUserData();
+        } catch (IOException | RuntimeException e) {
+            rebuild("index unreadable: " + e.getClass().getSimpleName(), t0, scan);
+            return;
+        }
+        if (!NoteDocuments.SCHEMA.equals(commit.get(NoteDocuments.COMMIT_SCHEMA))) {
+            rebuild("index from another version", t0, scan);
+            return;
+        }
+        try {
+            manager = new SearcherManager(directory, null);
+            probe();
+        } catch (IOException | RuntimeException e) {
+            closeQuietly();
+            rebuild("index corrupt: " + e.getClass().getSimpleName(), t0, scan);
+            return;
+        }
+        if (Long.toString(scan.stamp()).equals(commit.get(NoteDocuments.COMMIT_STAMP))) {
+            report = new IndexReport(IndexReport.Kind.OPENED, "", size(), 0, 0, 0, millisSince(t0));
+            return;
+        }
+        try {
+            SyncCounts c = sync(scan, false);
+            manager.maybeRefreshBlocking();
+            report = new IndexReport(IndexReport.Kind.UPDATED, "notes changed", size(), c.written, c.removed,
+                    problems.size(), millisSince(t0));
+        } catch (LockObtainFailedException e) {
+            closeQuietly();
+            buildInMemory("index locked by another process", t0);
+        } catch (IOException | RuntimeException e) {
+            if (e instanceof InputProblem) throw (InputProblem) e;
+            closeQuietly();
+            rebuild("index corrupt: " + e, t0, scan);
+        }
+    }
+
+    private void rebuild(String reason, long t0) {
+        rebuild(reason, t0, SourceScan.of(stack));
+    }
+
+    private void rebuild(String reason, long t0, SourceScan scan) {
+        closeQuietly();
+        if (inMemory) {
+            buildInMemory(reason, t0);
+            return;
+        }
+        try {
+            wipeIndexFolder();
+            directory = FSDirectory.open(indexFolder);
+            SyncCounts c = sync(scan, true);
+            manager = new SearcherManager(directory, null);
+            report = new IndexReport(IndexReport.Kind.REBUILT, reason, size(), c.written, c.removed, problems.size(),
+                    millisSince(t0));
+        } catch (IOException | RuntimeException e) {
+            if (e instanceof InputProblem) throw (InputProblem) e;
+            closeQuietly();
+            buildInMemory(reason + "; index folder not writable: " + e.getClass().getSimpleName(), t0);
+        }
+    }
+
+    private void buildInMemory(String reason, long t0) {
+        inMemory = true;
+        directory = new ByteBuffersDirectory();
+        try {
+            SyncCounts c = sync(SourceScan.of(stack), true);
+            manager = new SearcherManager(directory, null);
+            report = new IndexReport(IndexReport.Kind.IN_MEMORY, reason, size(), c.written, 0, problems.size(),
+                    millisSince(t0));
+        } catch (IOException e) {
+            throw new UncheckedIOException("could not build the notes index even in memory", e);
+        }
+    }
+
+    private void wipeIndexFolder() throws IOException {
+        if (directory != null) {
+            directory.close();
+            directory = null;
+        }
+        if (Files.isDirectory(indexFolder)) {
+            try (Stream<Path> s = Files.walk(indexFolder)) {
+                for (Path p : s.sorted(Comparator.reverseOrder()).toList()) {
+                    if (!p.equals(indexFolder)) Files.deleteIfExists(p);
+                }
+            }
+        }
+        Files.createDirectories(indexFolder);
+    }
+
+    private void closeQuietly() {
+        try {
+            if (manager != null) manager.close();
+        } catch (IOException | RuntimeException ignored) {
+            // the index is being thrown away or replaced; nothing in it is needed
+        }
+        manager = null;
+    }
+
+    private void probe() throws IOException {
+        IndexSearcher s = manager.acquire();
+        try {
+            s.search(new MatchAllDocsQuery(), 1);
+            IndexReader r = s.getIndexReader();
+            for (LeafReaderContext leaf : r.leaves()) {
+                leaf.reader().getBinaryDocValues(NoteDocuments.HASH);
+            }
+        } finally {
+            manager.release(s);
+        }
+    }
+
+    private record SyncCounts(int written, int removed) {}
+
+    private record Indexed(String id, String hash, String location) {}
+
+    /**
+     * Brings the index in {@link #directory} in line with the notes. Packs are read from the top
+     * layer down, so the first note seen under an id is the one in force, and only the set of seen
+     * ids is kept in memory (not the notes).
+     */
+    private SyncCounts sync(SourceScan scan, boolean fresh) throws IOException {
+        Map<String, Indexed> existing = new HashMap<>();
+        Map<String, String> idAtLocation = new HashMap<>();
+        if (!fresh) {
+            try (DirectoryReader r = DirectoryReader.open(directory)) {
+                existing = idsIn(r);
+            }
+            for (Indexed x : existing.values()) idAtLocation.put(x.location(), x.id());
+        }
+        IndexWriterConfig cfg = new IndexWriterConfig(indexAnalyzer)
+                .setOpenMode(fresh ? IndexWriterConfig.OpenMode.CREATE : IndexWriterConfig.OpenMode.CREATE_OR_APPEND)
+                .setRAMBufferSizeMB(48)
+                .setCommitOnClose(false);
+        List<InputProblem> found = new ArrayList<>();
+        Map<String, Integer> seen = new HashMap<>();
+        Set<String> pinned = new HashSet<>();
+        int written = 0;
+        int removed = 0;
+        List<SourceScan.Entry> entries = scan.entries();
+        try (IndexWriter w = new IndexWriter(directory, cfg)) {
+            int start = 0;
+            List<int[]> packRanges = new ArrayList<>();
+            for (int i = 1; i <= entries.size(); i++) {
+                if (i == entries.size() || entries.get(i).packIndex() != entries.get(start).packIndex()) {
+                    packRanges.add(new int[] {start, i});
+                    start = i;
+                }
+            }
+            Collections.reverse(packRanges);
+            for (int[] range : packRanges) {
+                for (int i = range[0]; i < range[1]; i++) {
+                    SourceScan.Entry e = entries.get(i);
+                    String location = e.path().toString();
+                    Note note;
+                    byte[] bytes;
+                    String text;
+                    try {
+                        bytes = Files.readAllBytes(e.path());
+                        text = decode(bytes, e.path());
+                        note = NoteFormat.parse(text, location);
+                    } catch (InputProblem p) {
+                        found.add(p);
+                        String kept = idAtLocation.get(location);
+                        if (kept != null) {
+                            pinned.add(kept);
+                            seen.putIfAbsent(kept, e.packIndex());
+                        }
+                        continue;
+                    } catch (NoSuchFileException gone) {
+                        continue;
+                    }
+                    Integer seenIn = seen.get(note.id());
+                    if (seenIn != null) {
+                        if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
+                            found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
+                                    + note.id() + "'; this one is ignored"));
+                        }
+                        continue;
+                    }
+                    seen.put(note.id(), e.packIndex());
+                    String hash = NoteDocuments.hash(bytes, e.pack().name(), e.pack().layer());
+                    Indexed old = existing.get(note.id());
+                    if (old != null && old.hash().equals(hash) && old.location().equals(location)) continue;
+                    Document doc = NoteDocuments.toDocument(facetsConfig, note, text, e.pack().name(), e.pack().layer(),
+                            location, hash);
+                    if (fresh) {
+                        w.addDocument(doc);
+                    } else {
+                        w.updateDocument(new Term(NoteDocuments.ID, note.id()), doc);
+                    }
+                    written++;
+                }
+            }
+            for (String id : existing.keySet()) {
+                if (!seen.containsKey(id)) {
+                    w.deleteDocuments(new Term(NoteDocuments.ID, id));
+                    removed++;
+                }
+            }
+            found.sort(Comparator.comparing(p -> p.source() == null ? "" : p.source()));
+            w.setLiveCommitData(commitData(found.isEmpty() ? Long.toString(scan.stamp()) : "unclean").entrySet());
+            w.commit();
+        }
+        problems = List.copyOf(found);
+        return new SyncCounts(written, removed);
+    }
+
+    private static Map<String, String> commitData(String stamp) {
+        Map<String, String> m = new HashMap<>();
+        m.put(NoteDocuments.COMMIT_SCHEMA, NoteDocuments.SCHEMA);
+        m.put(NoteDocuments.COMMIT_STAMP, stamp);
+        return m;
+    }
+
+    private static Map<String, Indexed> idsIn(IndexReader r) throws IOException {
+        Map<String, Indexed> out = new HashMap<>();
+        for (LeafReaderContext leaf : r.leaves()) {
+            Bits live = leaf.reader().getLiveDocs();
+            BinaryDocValues ids = leaf.reader().getBinaryDocValues(NoteDocuments.ID);
+            BinaryDocValues hashes = leaf.reader().getBinaryDocValues(NoteDocuments.HASH);
+            BinaryDocValues locations = leaf.reader().getBinaryDocValues(NoteDocuments.LOCATION);
+            if (ids == null || hashes == null || locations == null) continue;
+            for (int doc = ids.nextDoc(); doc != BinaryDocValues.NO_MORE_DOCS; doc = ids.nextDoc()) {
+                if (live != null && !live.get(doc)) continue;
+                String id = ids.binaryValue().utf8ToString();
+                String hash = hashes.advanceExact(doc) ? hashes.binaryValue().utf8ToString() : "";
+                String loc = locations.advanceExact(doc) ? locations.binaryValue().utf8ToString() : "";
+                out.put(id, new Indexed(id, hash, loc));
+            }
+        }
+        return out;
+    }
+
+    private static String decode(byte[] bytes, Path file) {
+        try {
+            String s = StandardCharsets.UTF_8.newDecoder()
+                    .onMalformedInput(CodingErrorAction.REPORT)
+                    .onUnmappableCharacter(CodingErrorAction.REPORT)
+                    .decode(ByteBuffer.wrap(bytes)).toString();
+            return s;
+        } catch (CharacterCodingException e) {
+            throw new InputProblem(file.toString(), 0, 0, null, "not UTF-8 text (a truncated or binary file?)");
+        }
+    }
+
+    private static String readNoteText(Path file) {
+        try {
+            return decode(Files.readAllBytes(file), file);
+        } catch (NoSuchFileException e) {
+            throw new InputProblem(file.toString(), 0, 0, null, "file not found");
+        } catch (IOException e) {
+            throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
+        }
+    }
+
+    // ---------------------------------------------------------------- writing notes
+
+    private PracticePack personalPack() {
+        for (int i = stack.packs().size() - 1; i >= 0; i--) {
+            PracticePack p = stack.packs().get(i);
+            if (p.layer() == PackLayer.PERSONAL) return p;
+        }
+        throw InputProblem.ofField("personal pack", "no personal pack is open, so there is nowhere to save the note");
+    }
+
+    private int packIndexOf(PracticePack pack) {
+        return stack.packs().indexOf(pack);
+    }
+
+    private Path personalTarget(String id) {
+        PracticePack personal = personalPack();
+        Optional<FiledNote> current = get(id);
+        if (current.isPresent() && current.get().layer() == PackLayer.PERSONAL
+                && current.get().pack().equals(personal.name())) {
+            Path p = Path.of(current.get().location());
+            if (p.startsWith(personal.root())) return p;
+        }
+        return personal.root().resolve("notes").resolve(id + ".md");
+    }
+
+    private FiledNote write(Note note, String text, Path target) {
+        PracticePack personal = personalPack();
+        int packIndex = packIndexOf(personal);
+        long delta = 0;
+        if (Files.exists(target)) delta -= SourceScan.entry(packIndex, personal, target).stamp();
+        AtomicFiles.writeString(target, text);
+        delta += SourceScan.entry(packIndex, personal, target).stamp();
+        String location = target.toString();
+        String hash = NoteDocuments.hash(text.getBytes(StandardCharsets.UTF_8), personal.name(), personal.layer());
+        Document doc = NoteDocuments.toDocument(facetsConfig, note, text, personal.name(), personal.layer(), location, hash);
+        try {
+            Map<String, String> old = DirectoryReader.indexExists(directory)
+                    ? SegmentInfos.readLatestCommit(directory).getUserData() : Map.of();
+            String oldStamp = old.getOrDefault(NoteDocuments.COMMIT_STAMP, "unclean");
+            String newStamp = "unclean".equals(oldStamp) ? oldStamp : Long.toString(parseLong(oldStamp) + delta);
+            IndexWriterConfig cfg = new IndexWriterConfig(indexAnalyzer)
+                    .setOpenMode(IndexWriterConfig.OpenMode.CREATE_OR_APPEND).setCommitOnClose(false);
+            try (IndexWriter w = new IndexWriter(directory, cfg)) {
+                w.updateDocument(new Term(NoteDocuments.ID, note.id()), doc);
+                w.setLiveCommitData(commitData(newStamp).entrySet());
+                w.commit();
+            }
+            manager.maybeRefreshBlocking();
+        } catch (LockObtainFailedException e) {
+            closeQuietly();
+            buildInMemory("index locked by another process", System.nanoTime());
+        } catch (IOException | RuntimeException e) {
+            if (e instanceof InputProblem) throw (InputProblem) e;
+            rebuild("index corrupt: " + e.getClass().getSimpleName(), System.nanoTime());
+        }
+        return new FiledNote(note, personal.name(), personal.layer(), location);
+    }
+
+    private static long parseLong(String s) {
+        try {
+            return Long.parseLong(s);
+        } catch (NumberFormatException e) {
+            return 0;
+        }
+    }
+
+    // ---------------------------------------------------------------- searching
+
+    /** Something done with a searcher that may meet a broken index. */
+    @FunctionalInterface
+    private interface SearchWork<T> {
+        T apply(IndexSearcher s) throws IOException;
+    }
+
+    /** Runs {@code work} on the current searcher; if the index turns out broken, rebuilds and retries once. */
+    private <T> T withSearcher(SearchWork<T> work) {
+        try {
+            return once(work);
+        } catch (IOException | RuntimeException e) {
+            if (e instanceof InputProblem) throw (InputProblem) e;
+            synchronized (this) {
+                rebuild("index failed during a search: " + e.getClass().getSimpleName(), System.nanoTime());
+            }
+            try {
+                return once(work);
+            } catch (IOException again) {
+                throw new UncheckedIOException("the notes index failed again after a rebuild", again);
+            }
+        }
+    }
+
+    private <T> T once(SearchWork<T> work) throws IOException {
+        SearcherManager m = manager;
+        if (m == null) throw new IllegalStateException("the notes store is closed");
+        IndexSearcher s = m.acquire();
+        try {
+            return work.apply(s);
+        } finally {
+            m.release(s);
+        }
+    }
+
+    private Query textQuery(String text) {
+        QueryBuilder qb = new QueryBuilder(queryAnalyzer);
+        BooleanQuery.Builder b = new BooleanQuery.Builder();
+        boolean any = false;
+        String[] fields = {NoteDocuments.TITLE, NoteDocuments.TAGS, NoteDocuments.BODY};
+        float[] boosts = {TITLE_BOOST, TAGS_BOOST, BODY_BOOST};
+        for (int i = 0; i < fields.length; i++) {
+            Query q = qb.createBooleanQuery(fields[i], text, Occur.SHOULD);
+            if (q != null) {
+                b.add(new BoostQuery(q, boosts[i]), Occur.SHOULD);
+                any = true;
+            }
+        }
+        if (!any) return null;
+        Query phrase = qb.createPhraseQuery(NoteDocuments.BODY, text, 3);
+        if (phrase != null && !(phrase instanceof TermQuery)) b.add(new BoostQuery(phrase, PHRASE_BOOST), Occur.SHOULD);
+        return b.build();
+    }
+
+    private static Query withFilters(Query main, NoteFilters filters) {
+        if (filters.isEmpty()) return main;
+        BooleanQuery.Builder b = new BooleanQuery.Builder().add(main, Occur.MUST);
+        for (Map.Entry<NoteFacet, Set<String>> e : filters.values().entrySet()) {
+            BooleanQuery.Builder any = new BooleanQuery.Builder();
+            for (String v : e.getValue()) any.add(new TermQuery(new Term(NoteDocuments.filterField(e.getKey()), v)), Occur.SHOULD);
+            b.add(any.build(), Occur.FILTER);
+        }
+        return b.build();
+    }
+
+    private String[] snippets(IndexSearcher s, Query query, TopDocs top) throws IOException {
+        if (top.scoreDocs.length == 0) return new String[0];
+        UnifiedHighlighter h = UnifiedHighlighter.builder(s, indexAnalyzer)
+                .withFormatter(new DefaultPassageFormatter("**", "**", " … ", false))
+                .withMaxLength(20_000)
+                .build();
+        String[] out = h.highlight(NoteDocuments.BODY, query, top, 2);
+        for (int i = 0; i < out.length; i++) {
+            if (out[i] != null) out[i] = trimSnippet(out[i].replaceAll("\\s+", " ").strip());
+        }
+        return out;
+    }
+
+    /** Keeps a snippet to about two lines, cutting at a word outside a highlight. */
+    private static String trimSnippet(String s) {
+        int max = 320;
+        if (s.length() <= max) return s;
+        int cut = s.lastIndexOf(' ', max);
+        if (cut < max / 2) cut = max;
+        String head = s.substring(0, cut);
+        int marks = head.split("\\*\\*", -1).length - 1;
+        if (marks % 2 == 1) head = head + "**";
+        return head + " …";
+    }
+
+    private Map<NoteFacet, List<FacetCount>> facetCounts(IndexReader reader, FacetsCollectorManager.FacetsResult r)
+            throws IOException {
+        Map<NoteFacet, List<FacetCount>> out = new EnumMap<>(NoteFacet.class);
+        if (reader.numDocs() == 0) return out;
+        SortedSetDocValuesReaderState state;
+        try {
+            state = facetStates.computeIfAbsent(reader, rd -> {
+                try {
+                    return new DefaultSortedSetDocValuesReaderState(rd, facetsConfig);
+                } catch (IOException e) {
+                    throw new UncheckedIOException(e);
+                }
+            });
+        } catch (IllegalArgumentException noFacets) {
+            return out;
+        }
+        Facets facets = new SortedSetDocValuesFacetCounts(state, r.facetsCollector());
+        for (NoteFacet f : NoteFacet.values()) {
+            FacetResult fr;
+            try {
+                fr = facets.getTopChildren(FACET_VALUES, f.key());
+            } catch (IllegalArgumentException dimensionNeverIndexed) {
+                fr = null;
+            }
+            List<FacetCount> counts = new ArrayList<>();
+            if (fr != null) {
+                for (LabelAndValue lv : fr.labelValues) counts.add(new FacetCount(lv.label, lv.value.intValue()));
+            }
+            out.put(f, counts);
+        }
+        return out;
+    }
+
+    private NoteHit hit(Document d, float score, String snippet) {
+        FiledNote f = filed(d);
+        Note n = f.note();
+        String sn = snippet == null || snippet.isBlank() ? n.summary(SUMMARY_CHARS) : snippet;
+        return new NoteHit(n.id(), n.title(), score, sn, f.pack(), f.layer(), n.tags(), n.functions(), n.standards(),
+                n.processes());
+    }
+
+    private static FiledNote filed(Document d) {
+        String location = d.get(NoteDocuments.LOCATION);
+        Note n = NoteFormat.parse(d.get(NoteDocuments.SOURCE), location);
+        return new FiledNote(n, d.get(NoteDocuments.PACK), PackLayer.valueOf(d.get(NoteDocuments.LAYER)), location);
+    }
+
+    private static long millisSince(long t0) {
+        return (System.nanoTime() - t0) / 1_000_000;
+    }
+
+    /** Distinct non-blank labels, in order; a convenience for callers assembling {@link #related} input. */
+    public static List<String> labels(Collection<String> raw) {
+        Set<String> out = new LinkedHashSet<>();
+        for (String r : raw) if (r != null && !r.isBlank()) out.add(Note.label(r));
+        return List.copyOf(out);
+    }
+}

@@ -1,0 +1,124 @@
+package org.arcwright.notes;
+
+import java.io.IOException;
+import java.io.StringReader;
+import java.io.UncheckedIOException;
+import java.text.ParseException;
+import java.util.regex.Pattern;
+import org.apache.lucene.analysis.Analyzer;
+import org.apache.lucene.analysis.LowerCaseFilter;
+import org.apache.lucene.analysis.TokenStream;
+import org.apache.lucene.analysis.Tokenizer;
+import org.apache.lucene.analysis.en.EnglishPossessiveFilter;
+import org.apache.lucene.analysis.en.PorterStemFilter;
+import org.apache.lucene.analysis.miscellaneous.ASCIIFoldingFilter;
+import org.apache.lucene.analysis.miscellaneous.PatternKeywordMarkerFilter;
+import org.apache.lucene.analysis.pattern.PatternReplaceCharFilter;
+import org.apache.lucene.analysis.pattern.PatternTokenizer;
+import org.apache.lucene.analysis.synonym.SolrSynonymParser;
+import org.apache.lucene.analysis.synonym.SynonymGraphFilter;
+import org.apache.lucene.analysis.synonym.SynonymMap;
+
+/**
+ * The analysis chain for practice notes, fitted to how tolerancing is written.
+ *
+ * <ol>
+ *   <li>Character filters join a radius symbol to its value ({@code R 0.5} to {@code R0.5},
+ *       {@code CR 1.5} to {@code CR1.5}) and read {@code +/-} as {@code ±}, which is a token of
+ *       its own.</li>
+ *   <li>A pattern tokenizer keeps tokens that contain a digit whole with their inner dots, hyphens
+ *       and slashes ({@code R0.5}, {@code 2768-m}, {@code Y14.5-2018}, {@code H7/g6}, {@code .060}),
+ *       and splits plain words at hyphens ({@code title-block} is two words).</li>
+ *   <li>Lower case; {@link TradeTokenFilter} splits numbers from units and, when indexing, stacks
+ *       the parts of compounds; English possessives go; Porter stemming, except for tokens with a
+ *       digit in them.</li>
+ *   <li>When querying only: the trade's synonyms ({@code fillet}, {@code round}, {@code blend},
+ *       {@code radius}; {@code edge break}, {@code broken edge}; {@code CR}, {@code controlled radius};
+ *       British and American spellings) from {@code trade-synonyms.txt}, each weighted half as much
+ *       as the word typed, so a note using the user's own word ranks first.</li>
+ * </ol>
+ *
+ * <p>No stop words are removed (multi-word synonyms need unbroken positions, and BM25 already gives
+ * common words little weight). See decision record 0501.
+ */
+public final class TradeAnalyzer extends Analyzer {
+    /** The synonym list on the classpath, Solr format, applied at query time. */
+    public static final String SYNONYMS_RESOURCE = "/org/arcwright/notes/trade-synonyms.txt";
+
+    static final Pattern TOKEN = Pattern.compile(
+            "\\p{L}{0,4}\\.?\\d[\\p{L}\\p{N}]*(?:[.\\-/][\\p{L}\\p{N}]+)*"
+                    + "|\\p{L}+(?:['’]\\p{L}+)*"
+                    + "|µm|±");
+    private static final Pattern PLUS_MINUS = Pattern.compile("\\+\\s*/\\s*-|\\+-(?=\\s*\\.?\\d)");
+    private static final Pattern RADIUS_GAP = Pattern.compile("\\b(R|CR|SR|CSR|r|cr)\\s+(?=\\.?\\d)");
+    /** Weight of a synonym relative to the word the user typed. */
+    static final float SYNONYM_WEIGHT = 0.5f;
+    private static final Pattern HAS_DIGIT = Pattern.compile(".*\\d.*");
+
+    private final boolean querySide;
+    private final SynonymMap synonyms;
+
+    private TradeAnalyzer(boolean querySide, SynonymMap synonyms) {
+        this.querySide = querySide;
+        this.synonyms = synonyms;
+    }
+
+    /** The chain used to index notes: no synonyms, compound parts stacked. */
+    public static TradeAnalyzer forIndexing() {
+        return new TradeAnalyzer(false, null);
+    }
+
+    /** The chain used for user queries: compounds kept exact, synonyms expanded. */
+    public static TradeAnalyzer forQueries() {
+        return new TradeAnalyzer(true, loadSynonyms());
+    }
+
+    @Override
+    protected java.io.Reader initReader(String fieldName, java.io.Reader reader) {
+        return new PatternReplaceCharFilter(RADIUS_GAP, "$1", new PatternReplaceCharFilter(PLUS_MINUS, " ± ", reader));
+    }
+
+    @Override
+    protected TokenStreamComponents createComponents(String fieldName) {
+        Tokenizer source = new PatternTokenizer(TOKEN, 0);
+        TokenStream s = baseChain(source, !querySide);
+        if (querySide && synonyms != null) s = new SynonymWeightFilter(new SynonymGraphFilter(s, synonyms, true), SYNONYM_WEIGHT);
+        return new TokenStreamComponents(source, s);
+    }
+
+    @Override
+    protected TokenStream normalize(String fieldName, TokenStream in) {
+        return new LowerCaseFilter(in);
+    }
+
+    private static TokenStream baseChain(Tokenizer source, boolean indexSide) {
+        TokenStream s = new LowerCaseFilter(source);
+        s = new ASCIIFoldingFilter(s);
+        s = new TradeTokenFilter(s, indexSide);
+        s = new EnglishPossessiveFilter(s);
+        s = new PatternKeywordMarkerFilter(s, HAS_DIGIT);
+        return new PorterStemFilter(s);
+    }
+
+    private static SynonymMap loadSynonyms() {
+        Analyzer ruleAnalyzer = new Analyzer() {
+            @Override
+            protected TokenStreamComponents createComponents(String fieldName) {
+                Tokenizer source = new PatternTokenizer(TOKEN, 0);
+                return new TokenStreamComponents(source, baseChain(source, false));
+            }
+        };
+        try (var in = TradeAnalyzer.class.getResourceAsStream(SYNONYMS_RESOURCE)) {
+            if (in == null) throw new IllegalStateException("synonym list missing from the classpath: " + SYNONYMS_RESOURCE);
+            SolrSynonymParser parser = new SolrSynonymParser(true, true, ruleAnalyzer);
+            parser.parse(new StringReader(new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8)));
+            return parser.build();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        } catch (ParseException e) {
+            throw new IllegalStateException("bad synonym list " + SYNONYMS_RESOURCE + " at offset " + e.getErrorOffset(), e);
+        } finally {
+            ruleAnalyzer.close();
+        }
+    }
+}

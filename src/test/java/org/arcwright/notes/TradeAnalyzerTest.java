@@ -1,0 +1,101 @@
+package org.arcwright.notes;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.io.IOException;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.lucene.analysis.Analyzer;
+import org.apache.lucene.analysis.TokenStream;
+import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
+import org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute;
+import org.junit.jupiter.api.AfterAll;
+import org.junit.jupiter.api.Test;
+
+/** The analysis chain keeps the trade's tokens whole and reads its synonyms. */
+class TradeAnalyzerTest {
+    private static final TradeAnalyzer INDEX = TradeAnalyzer.forIndexing();
+    private static final TradeAnalyzer QUERY = TradeAnalyzer.forQueries();
+
+    @AfterAll
+    static void close() {
+        INDEX.close();
+        QUERY.close();
+    }
+
+    /** Tokens, with a leading {@code +} for a token stacked on the previous position. */
+    static List<String> tokens(Analyzer a, String text) {
+        List<String> out = new ArrayList<>();
+        try (TokenStream ts = a.tokenStream("body", text)) {
+            CharTermAttribute term = ts.addAttribute(CharTermAttribute.class);
+            PositionIncrementAttribute inc = ts.addAttribute(PositionIncrementAttribute.class);
+            ts.reset();
+            while (ts.incrementToken()) out.add((inc.getPositionIncrement() == 0 ? "+" : "") + term);
+            ts.end();
+        } catch (IOException e) {
+            throw new AssertionError(e);
+        }
+        return out;
+    }
+
+    static List<String> terms(Analyzer a, String text) {
+        return tokens(a, text).stream().map(t -> t.startsWith("+") ? t.substring(1) : t).toList();
+    }
+
+    @Test
+    void radiusValuesStayWholeWhetherOrNotASpaceFollowsTheSymbol() {
+        assertThat(tokens(QUERY, "R0.5")).containsExactly("r0.5");
+        assertThat(tokens(QUERY, "R 0.5")).containsExactly("r0.5");
+        assertThat(tokens(QUERY, "CR 1.5")).containsExactly("cr1.5");
+        assertThat(tokens(QUERY, "R .060 MAX")).containsExactly("r.060", "max");
+    }
+
+    @Test
+    void theIndexAlsoStacksTheSymbolAndNumberOfARadius() {
+        assertThat(tokens(INDEX, "CR 1.5")).containsExactly("cr1.5", "+cr", "+1.5");
+    }
+
+    @Test
+    void standardDesignationsStayWholeAndTheirPartsAreIndexed() {
+        assertThat(tokens(QUERY, "ISO 2768-m")).containsExactly("iso", "2768-m");
+        assertThat(tokens(INDEX, "ISO 2768-m")).containsExactly("iso", "2768-m", "+2768", "+m");
+        assertThat(tokens(QUERY, "ASME Y14.5-2018")).containsExactly("asm", "y14.5-2018");
+        assertThat(tokens(QUERY, "H7/g6 fit")).containsExactly("h7/g6", "fit");
+    }
+
+    @Test
+    void unitsGluedToNumbersAreSplitOff() {
+        assertThat(tokens(INDEX, "0.5mm")).containsExactly("0.5", "mm");
+        assertThat(tokens(INDEX, "R3mm")).containsExactly("r3", "+r", "+3", "mm");
+        assertThat(tokens(QUERY, "0.5mm")).isEqualTo(tokens(QUERY, "0.5 mm"));
+    }
+
+    @Test
+    void plainWordsAreStemmedAndSplitAtHyphens() {
+        assertThat(tokens(INDEX, "fillets")).containsExactly("fillet");
+        assertThat(tokens(INDEX, "title-block tolerances")).containsExactly("titl", "block", "toler");
+        assertThat(tokens(INDEX, "Peterson's charts")).containsExactly("peterson", "chart");
+    }
+
+    @Test
+    void plusMinusIsReadAsTheToleranceSign() {
+        assertThat(tokens(INDEX, "+/- radius")).containsExactly("±", "radiu");
+        assertThat(tokens(QUERY, "±0.05")).containsExactly("±", "0.05");
+        assertThat(tokens(QUERY, "+0.2/-0.1")).containsExactly("0.2", "0.1");
+    }
+
+    @Test
+    void queriesExpandTheTradesSynonyms() {
+        assertThat(terms(QUERY, "fillet")).contains("fillet", "round", "blend", "radiu");
+        assertThat(terms(QUERY, "moulded")).contains("mould", "mold");
+        assertThat(terms(QUERY, "CR")).contains("cr", "control", "radiu");
+        assertThat(terms(QUERY, "break all sharp edges")).contains("deburr");
+        assertThat(tokens(INDEX, "fillet")).containsExactly("fillet");
+    }
+
+    @Test
+    void queryLanguageSymbolsProduceNoTokens() {
+        assertThat(tokens(QUERY, "\" * ( ) [ ] { } ~ ^ : \\ / !")).isEmpty();
+        assertThat(tokens(QUERY, "AND")).containsExactly("and");
+    }
+}
