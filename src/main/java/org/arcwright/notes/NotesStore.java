@@ -491,47 +491,57 @@ public final class NotesStore implements Closeable {
             }
             Collections.reverse(packRanges);
             for (int[] range : packRanges) {
-                for (int i = range[0]; i < range[1]; i++) {
-                    SourceScan.Entry e = entries.get(i);
-                    String location = e.path().toString();
-                    Note note;
-                    byte[] bytes;
-                    String text;
+                for (int from = range[0]; from < range[1]; from += CHUNK) {
+                    int to = Math.min(range[1], from + CHUNK);
+                    List<Loaded> loaded = java.util.stream.IntStream.range(from, to).parallel()
+                            .mapToObj(i -> load(entries.get(i))).toList();
+                    List<Loaded> toWrite = new ArrayList<>();
+                    for (Loaded l : loaded) {
+                        SourceScan.Entry e = l.entry();
+                        String location = e.path().toString();
+                        if (l.gone()) continue;
+                        if (l.problem() != null) {
+                            found.add(l.problem());
+                            String kept = idAtLocation.get(location);
+                            if (kept != null) {
+                                pinned.add(kept);
+                                seen.putIfAbsent(kept, e.packIndex());
+                            }
+                            continue;
+                        }
+                        Note note = l.note();
+                        Integer seenIn = seen.get(note.id());
+                        if (seenIn != null) {
+                            if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
+                                found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
+                                        + note.id() + "'; this one is ignored"));
+                            }
+                            continue;
+                        }
+                        seen.put(note.id(), e.packIndex());
+                        Indexed old = existing.get(note.id());
+                        if (old != null && old.hash().equals(l.hash()) && old.location().equals(location)) continue;
+                        toWrite.add(l);
+                    }
                     try {
-                        bytes = Files.readAllBytes(e.path());
-                        text = decode(bytes, e.path());
-                        note = NoteFormat.parse(text, location);
-                    } catch (InputProblem p) {
-                        found.add(p);
-                        String kept = idAtLocation.get(location);
-                        if (kept != null) {
-                            pinned.add(kept);
-                            seen.putIfAbsent(kept, e.packIndex());
-                        }
-                        continue;
-                    } catch (NoSuchFileException gone) {
-                        continue;
+                        toWrite.parallelStream().forEach(l -> {
+                            SourceScan.Entry e = l.entry();
+                            Document doc = NoteDocuments.toDocument(facetsConfig, l.note(), l.text(), e.pack().name(),
+                                    e.pack().layer(), e.path().toString(), l.hash());
+                            try {
+                                if (fresh) {
+                                    w.addDocument(doc);
+                                } else {
+                                    w.updateDocument(new Term(NoteDocuments.ID, l.note().id()), doc);
+                                }
+                            } catch (IOException x) {
+                                throw new UncheckedIOException(x);
+                            }
+                        });
+                    } catch (UncheckedIOException x) {
+                        throw x.getCause();
                     }
-                    Integer seenIn = seen.get(note.id());
-                    if (seenIn != null) {
-                        if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
-                            found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
-                                    + note.id() + "'; this one is ignored"));
-                        }
-                        continue;
-                    }
-                    seen.put(note.id(), e.packIndex());
-                    String hash = NoteDocuments.hash(bytes, e.pack().name(), e.pack().layer());
-                    Indexed old = existing.get(note.id());
-                    if (old != null && old.hash().equals(hash) && old.location().equals(location)) continue;
-                    Document doc = NoteDocuments.toDocument(facetsConfig, note, text, e.pack().name(), e.pack().layer(),
-                            location, hash);
-                    if (fresh) {
-                        w.addDocument(doc);
-                    } else {
-                        w.updateDocument(new Term(NoteDocuments.ID, note.id()), doc);
-                    }
-                    written++;
+                    written += toWrite.size();
                 }
             }
             for (String id : existing.keySet()) {
@@ -546,6 +556,28 @@ public final class NotesStore implements Closeable {
         }
         problems = List.copyOf(found);
         return new SyncCounts(written, removed);
+    }
+
+    /** Notes are read, parsed and indexed in chunks of this many, two threads at a time. */
+    private static final int CHUNK = 512;
+
+    /** A note file read and parsed (or the problem with it). */
+    private record Loaded(SourceScan.Entry entry, String text, Note note, String hash, InputProblem problem, boolean gone) {}
+
+    private static Loaded load(SourceScan.Entry e) {
+        try {
+            byte[] bytes = Files.readAllBytes(e.path());
+            String text = decode(bytes, e.path());
+            Note note = NoteFormat.parse(text, e.path().toString());
+            return new Loaded(e, text, note, NoteDocuments.hash(bytes, e.pack().name(), e.pack().layer()), null, false);
+        } catch (InputProblem p) {
+            return new Loaded(e, null, null, null, p, false);
+        } catch (NoSuchFileException gone) {
+            return new Loaded(e, null, null, null, null, true);
+        } catch (IOException x) {
+            return new Loaded(e, null, null, null, new InputProblem(e.path().toString(), 0, 0, null,
+                    "could not read the note: " + x.getMessage()), false);
+        }
     }
 
     private static Map<String, String> commitData(String stamp) {
