@@ -773,16 +773,24 @@ public final class NotesStore implements Closeable {
         return out;
     }
 
-    /** Keeps a snippet to about two lines, cutting at a word outside a highlight. */
-    private static String trimSnippet(String s) {
+    /** Keeps a snippet to about two lines, starting shortly before the first highlight, cut at words. */
+    static String trimSnippet(String s) {
         int max = 320;
         if (s.length() <= max) return s;
+        int first = s.indexOf("**");
+        String head = "";
+        if (first > max - 100) {
+            int from = s.lastIndexOf(' ', first - 60);
+            s = s.substring(from < 0 ? first : from + 1);
+            head = "… ";
+        }
+        if (s.length() <= max) return head + s;
         int cut = s.lastIndexOf(' ', max);
         if (cut < max / 2) cut = max;
-        String head = s.substring(0, cut);
-        int marks = head.split("\\*\\*", -1).length - 1;
-        if (marks % 2 == 1) head = head + "**";
-        return head + " …";
+        String body = s.substring(0, cut);
+        int marks = body.split("\\*\\*", -1).length - 1;
+        if (marks % 2 == 1) body = body + "**";
+        return head + body + " …";
     }
 
     private Map<NoteFacet, List<FacetCount>> facetCounts(IndexReader reader, FacetsCollectorManager.FacetsResult r)
