@@ -51,10 +51,12 @@ import org.apache.lucene.search.BoostQuery;
 import org.apache.lucene.search.IndexSearcher;
 import org.apache.lucene.search.MatchAllDocsQuery;
 import org.apache.lucene.search.Query;
+import org.apache.lucene.search.QueryRescorer;
 import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TermQuery;
 import org.apache.lucene.search.TopDocs;
+import org.apache.lucene.search.TopScoreDocCollectorManager;
 import org.apache.lucene.search.uhighlight.DefaultPassageFormatter;
 import org.apache.lucene.search.uhighlight.UnifiedHighlighter;
 import org.apache.lucene.store.ByteBuffersDirectory;
@@ -96,6 +98,8 @@ public final class NotesStore implements Closeable {
     private static final float PHRASE_BOOST = 1.5f;
     private static final int FACET_VALUES = 20;
     private static final int SUMMARY_CHARS = 220;
+    private static final int TOTAL_HITS_THRESHOLD = 1000;
+    private static final int RESCORE_WINDOW = 50;
 
     private final PackStack stack;
     private final Path indexFolder;
@@ -162,7 +166,8 @@ public final class NotesStore implements Closeable {
     /**
      * Finds notes for a query typed by a user. The text is analysed, never parsed as a query
      * language: quotes, brackets, {@code *} and {@code AND} are words or nothing, never errors.
-     * Title and tags weigh more than the body; words found near each other in the body weigh more.
+     * Title and tags weigh more than the body; among the best 50, words found near each other in the
+     * body weigh more.
      * An empty query lists the notes the filters allow.
      *
      * @param text what the user typed
@@ -170,15 +175,36 @@ public final class NotesStore implements Closeable {
      * @param limit how many hits at most, 1 or more
      */
     public SearchResult search(String text, NoteFilters filters, int limit) {
+        return search(text, filters, limit, true);
+    }
+
+    /**
+     * As {@link #search(String, NoteFilters, int)}; with {@code countFacets} false the facets are
+     * left empty and {@link SearchResult#totalHits()} is exact only up to 1,000 (beyond that it is a
+     * lower bound), which lets Lucene skip notes that cannot reach the top: the fast path for
+     * search-as-you-type, with facet counts fetched separately when the user pauses.
+     */
+    public SearchResult search(String text, NoteFilters filters, int limit, boolean countFacets) {
         Objects.requireNonNull(filters, "filters");
         if (limit < 1) throw InputProblem.ofField("limit", "must be 1 or more, got " + limit);
         String q = text == null ? "" : text;
         Query textQuery = q.isBlank() ? new MatchAllDocsQuery() : textQuery(q);
         if (textQuery == null) return SearchResult.empty(q);
         Query query = withFilters(textQuery, filters);
+        Query phrase = q.isBlank() ? null : phraseQuery(q);
+        int window = phrase == null ? limit : Math.max(limit, RESCORE_WINDOW);
         return withSearcher(s -> {
-            FacetsCollectorManager.FacetsResult r = FacetsCollectorManager.search(s, query, limit, new FacetsCollectorManager());
-            TopDocs top = r.topDocs();
+            TopDocs top;
+            Map<NoteFacet, List<FacetCount>> facets;
+            if (countFacets) {
+                FacetsCollectorManager.FacetsResult r = FacetsCollectorManager.search(s, query, window, new FacetsCollectorManager());
+                top = r.topDocs();
+                facets = facetCounts(s.getIndexReader(), r);
+            } else {
+                top = s.search(query, new TopScoreDocCollectorManager(window, null, TOTAL_HITS_THRESHOLD, false));
+                facets = Map.of();
+            }
+            if (phrase != null) top = QueryRescorer.rescore(s, top, phrase, PHRASE_BOOST, limit);
             String[] snippets = snippets(s, query, top);
             List<NoteHit> hits = new ArrayList<>();
             StoredFields stored = s.storedFields();
@@ -186,7 +212,7 @@ public final class NotesStore implements Closeable {
                 ScoreDoc sd = top.scoreDocs[i];
                 hits.add(hit(stored.document(sd.doc), sd.score, snippets == null ? null : snippets[i]));
             }
-            return new SearchResult(q, top.totalHits.value, hits, facetCounts(s.getIndexReader(), r));
+            return new SearchResult(q, top.totalHits.value, hits, facets);
         });
     }
 
@@ -743,10 +769,17 @@ public final class NotesStore implements Closeable {
                 any = true;
             }
         }
-        if (!any) return null;
-        Query phrase = qb.createPhraseQuery(NoteDocuments.BODY, text, 3);
-        if (phrase != null && !(phrase instanceof TermQuery)) b.add(new BoostQuery(phrase, PHRASE_BOOST), Occur.SHOULD);
-        return b.build();
+        return any ? b.build() : null;
+    }
+
+    /**
+     * Words of the query found near each other in the body: applied to the best
+     * {@link #RESCORE_WINDOW} notes only (rescoring), since a sloppy phrase over every match is the
+     * most expensive part of a search. Null for a one-word query.
+     */
+    private Query phraseQuery(String text) {
+        Query phrase = new QueryBuilder(queryAnalyzer).createPhraseQuery(NoteDocuments.BODY, text, 3);
+        return phrase == null || phrase instanceof TermQuery ? null : phrase;
     }
 
     private static Query withFilters(Query main, NoteFilters filters) {
