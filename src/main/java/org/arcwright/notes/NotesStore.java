@@ -795,15 +795,44 @@ public final class NotesStore implements Closeable {
 
     private String[] snippets(IndexSearcher s, Query query, TopDocs top) throws IOException {
         if (top.scoreDocs.length == 0) return new String[0];
-        UnifiedHighlighter h = UnifiedHighlighter.builder(s, indexAnalyzer)
+        UnifiedHighlighter h = new BodyFromSource(UnifiedHighlighter.builder(s, indexAnalyzer)
                 .withFormatter(new DefaultPassageFormatter("**", "**", " … ", false))
-                .withMaxLength(20_000)
-                .build();
+                .withMaxLength(20_000));
         String[] out = h.highlight(NoteDocuments.BODY, query, top, 2);
         for (int i = 0; i < out.length; i++) {
             if (out[i] != null) out[i] = trimSnippet(out[i].replaceAll("\\s+", " ").strip());
         }
         return out;
+    }
+
+    /**
+     * A highlighter that takes the body text from the stored note source instead of a stored copy of
+     * the body: the index keeps the text once (the offsets in the postings refer to the same
+     * {@link NoteFormat#plainText} of the body).
+     */
+    private static final class BodyFromSource extends UnifiedHighlighter {
+        BodyFromSource(UnifiedHighlighter.Builder builder) {
+            super(builder);
+        }
+
+        @Override
+        protected List<CharSequence[]> loadFieldValues(String[] fields, org.apache.lucene.search.DocIdSetIterator docIter,
+                                                       int cacheCharsThreshold) throws IOException {
+            List<CharSequence[]> out = new ArrayList<>();
+            StoredFields stored = searcher.storedFields();
+            java.util.Set<String> wanted = Set.of(NoteDocuments.SOURCE, NoteDocuments.LOCATION);
+            for (int doc = docIter.nextDoc(); doc != org.apache.lucene.search.DocIdSetIterator.NO_MORE_DOCS; doc = docIter.nextDoc()) {
+                Document d = stored.document(doc, wanted);
+                CharSequence[] values = new CharSequence[fields.length];
+                for (int i = 0; i < fields.length; i++) {
+                    values[i] = NoteDocuments.BODY.equals(fields[i])
+                            ? NoteFormat.plainText(NoteFormat.parse(d.get(NoteDocuments.SOURCE), d.get(NoteDocuments.LOCATION)).body())
+                            : "";
+                }
+                out.add(values);
+            }
+            return out;
+        }
     }
 
     /** Keeps a snippet to about two lines, starting shortly before the first highlight, cut at words. */
