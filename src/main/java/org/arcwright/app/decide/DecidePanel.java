@@ -56,6 +56,8 @@ public final class DecidePanel extends JPanel {
     private final transient Executor background;
     private final transient Consumer<String> status;
     private transient AdviceSource advice;
+    private transient java.util.function.Function<Recommendation, java.awt.image.BufferedImage> frames = r -> null;
+    private transient Map<Recommendation, java.awt.image.BufferedImage> frameImages = Map.of();
     private final Map<Question, JComponent> fields = new EnumMap<>(Question.class);
     private final Map<Question, WrapLabel> notes = new EnumMap<>(Question.class);
     private final JPanel figures = new JPanel(new MigLayout("insets 0, wrap 2, gap 12 2", "[][grow,fill]", ""));
@@ -90,6 +92,12 @@ public final class DecidePanel extends JPanel {
         form.listeners().add(this::formChanged);
         session.listeners().add(this::sessionChanged);
         sessionChanged();
+    }
+
+    /** Sets how feature control frames are drawn for the cards (once the frame renderer is available). */
+    public void setFrames(java.util.function.Function<Recommendation, java.awt.image.BufferedImage> renderer) {
+        this.frames = Objects.requireNonNull(renderer, "renderer");
+        adviseNow();
     }
 
     /** Puts the divider at 45% the first time the split has a size; the user moves it after that. */
@@ -364,6 +372,9 @@ public final class DecidePanel extends JPanel {
         figures.add(v);
     }
 
+    /** The recommendations shown now, best first. */
+    public List<Recommendation> shownRecommendations() { return shown; }
+
     /** The figures shown for the tolerance intent, as label and value pairs, for tests. */
     public String figuresText() {
         StringBuilder sb = new StringBuilder();
@@ -382,18 +393,36 @@ public final class DecidePanel extends JPanel {
             return;
         }
         AdviceSource source = advice;
-        CompletableFuture.supplyAsync(() -> source.advise(c.get()), background)
+        java.util.function.Function<Recommendation, java.awt.image.BufferedImage> draw = frames;
+        CompletableFuture.supplyAsync(() -> withFrames(source.advise(c.get()), draw), background)
                 .whenComplete((list, error) -> SwingUtilities.invokeLater(() -> advised(g, list, error)));
     }
 
-    private void advised(long g, List<Recommendation> list, Throwable error) {
+    private record Advised(List<Recommendation> list, Map<Recommendation, java.awt.image.BufferedImage> frames) {}
+
+    private static Advised withFrames(List<Recommendation> list,
+                                      java.util.function.Function<Recommendation, java.awt.image.BufferedImage> draw) {
+        Map<Recommendation, java.awt.image.BufferedImage> images = new java.util.HashMap<>();
+        for (Recommendation r : list) {
+            try {
+                java.awt.image.BufferedImage img = draw.apply(r);
+                if (img != null) images.put(r, img);
+            } catch (RuntimeException e) {
+                // a frame that cannot be drawn is left out; the callout text still shows
+            }
+        }
+        return new Advised(list, images);
+    }
+
+    private void advised(long g, Advised a, Throwable error) {
         if (g != generation) return;
         if (error != null) {
             status.accept("Advice failed: " + error.getMessage());
             setCards(List.of());
             return;
         }
-        setCards(list);
+        frameImages = a.frames();
+        setCards(a.list());
     }
 
     private void setCards(List<Recommendation> list) {
@@ -415,7 +444,8 @@ public final class DecidePanel extends JPanel {
         int rank = 1;
         for (Recommendation r : shown) {
             boolean isChosen = chosen != null && chosen.callout().equals(r.callout()) && chosen.ruleId().equals(r.ruleId());
-            cards.add(new RecommendationCard(rank++, r, this::choose, this::copy, isChosen), "wmin 10");
+            cards.add(new RecommendationCard(rank++, r, frameImages.get(r), this::choose, this::copy, this::copyFrame, isChosen),
+                    "wmin 10");
         }
         cards.revalidate();
         cards.repaint();
@@ -439,6 +469,13 @@ public final class DecidePanel extends JPanel {
         loadedCase = c.get();
         session.choose(featureId, c.get(), r);
         status.accept("Put " + r.text() + " on " + featureId + " (Ctrl+Z to undo)");
+    }
+
+    private void copyFrame(Recommendation r) {
+        java.awt.image.BufferedImage img = frameImages.get(r);
+        if (img == null) return;
+        Toolkit.getDefaultToolkit().getSystemClipboard().setContents(new org.arcwright.app.shell.ImageSelection(img), null);
+        status.accept("Copied the frame of " + r.text() + " as an image");
     }
 
     private void copy(Recommendation r) {

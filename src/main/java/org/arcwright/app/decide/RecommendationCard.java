@@ -17,8 +17,8 @@ import org.arcwright.rules.Recommendation;
 final class RecommendationCard extends Card {
     private static final long serialVersionUID = 1L;
 
-    RecommendationCard(int rank, Recommendation r, Consumer<Recommendation> onChoose, Consumer<Recommendation> onCopy,
-                       boolean chosen) {
+    RecommendationCard(int rank, Recommendation r, java.awt.image.BufferedImage frame, Consumer<Recommendation> onChoose,
+                       Consumer<Recommendation> onCopy, Consumer<Recommendation> onCopyFrame, boolean chosen) {
         super(new MigLayout("insets 10 12 10 12, wrap 2, gap 6 3", "[][grow,fill]", ""), "card");
         setName("card" + rank);
         setSelected(chosen);
@@ -30,6 +30,12 @@ final class RecommendationCard extends Card {
         tag.putClientProperty("FlatLaf.styleClass", "small");
         tag.setForeground(Themes.color(r.demoted() ? "Arcwright.error.foreground" : "Arcwright.help.foreground"));
         add(tag, "gapleft push");
+        if (frame != null) {
+            JLabel preview = new JLabel(new javax.swing.ImageIcon(frame));
+            preview.setName("cardFrame");
+            preview.setToolTipText("The feature control frame as drawn");
+            add(preview, "span 2, left, gaptop 2, gapbottom 2");
+        }
         if (!r.numbers().isEmpty()) {
             StringBuilder sb = new StringBuilder();
             for (Map.Entry<String, Object> e : r.numbers().entrySet()) {
@@ -54,12 +60,19 @@ final class RecommendationCard extends Card {
         choose.setEnabled(!chosen);
         choose.setToolTipText(chosen ? "Already the callout of this feature" : "Make this the feature's callout (undo with Ctrl+Z)");
         choose.addActionListener(e -> onChoose.accept(r));
-        JButton copy = new JButton("Copy callout", Icons.get("copy"));
+        JButton copy = new JButton("Copy text", Icons.get("copy"));
         copy.setName("copy" + rank);
         copy.setToolTipText("Copy the callout text to the clipboard");
         copy.addActionListener(e -> onCopy.accept(r));
-        add(choose, "span 2, split 2, gaptop 6");
-        add(copy);
+        JButton copyFrame = new JButton("Copy frame");
+        copyFrame.setName("copyFrame" + rank);
+        copyFrame.setEnabled(frame != null);
+        copyFrame.setToolTipText(frame != null ? "Copy the feature control frame as an image"
+                : "Unavailable: this callout has no frame drawing");
+        copyFrame.addActionListener(e -> onCopyFrame.accept(r));
+        add(choose, "span 2, gaptop 6");
+        add(copy, "span 2, split 2");
+        add(copyFrame);
     }
 
     /** Gives the keyboard focus to the card's first enabled button. */

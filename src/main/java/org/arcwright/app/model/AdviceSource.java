@@ -13,6 +13,21 @@ public interface AdviceSource {
     /** Recommendations for {@code c}, best first. */
     List<Recommendation> advise(DesignCase c);
 
+    /**
+     * The advisor's ranked recommendations, followed by the engineer's own tolerance intent as
+     * written when no recommendation already proposes that callout.
+     */
+    static AdviceSource advisor(java.util.function.Function<DesignCase, List<Recommendation>> advise, double angleDeg) {
+        return c -> {
+            List<Recommendation> out = new java.util.ArrayList<>(advise.apply(c));
+            IntentCard.of(c, angleDeg).ifPresent(intent -> {
+                boolean proposed = out.stream().anyMatch(r -> r.callout().equals(intent.callout()));
+                if (!proposed) out.add(intent);
+            });
+            return out;
+        };
+    }
+
     /** Only the engineer's own tolerance intent, as written. */
     static AdviceSource intentOnly(double angleDeg) {
         return c -> IntentCard.of(c, angleDeg).map(List::of).orElse(List.of());

@@ -55,6 +55,14 @@ import org.arcwright.app.stress.StressViewPanel;
 import org.arcwright.mechanics.FilletMechanics;
 import org.arcwright.notes.NotesPaths;
 import org.arcwright.notes.NotesStore;
+import org.arcwright.render.FrameRenderer;
+import org.arcwright.render.SheetExporter;
+import org.arcwright.rules.Advisor;
+import org.arcwright.rules.MechanicsChecks;
+import org.arcwright.rules.NoteLink;
+import org.arcwright.rules.NoteLinker;
+import org.arcwright.rules.RuleBook;
+import org.arcwright.templates.NoteTemplates;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackStack;
 import org.arcwright.tolerance.DrawingStyle;
@@ -92,6 +100,7 @@ public final class MainWindow {
     private CheckPanel checkPanel;
     private PackStack packs;
     private NotesStore notesStore;
+    private Loaded core;
 
     /**
      * The worksheet the window opens with, read before the window is built (off the event thread).
@@ -252,7 +261,8 @@ public final class MainWindow {
         catalog.add(Command.always("file.save", "Save", "File", "ctrl S", this::save));
         catalog.add(Command.always("file.saveAs", "Save as…", "File", "ctrl shift S", this::saveAs));
         catalog.add(new Command("file.export", "Export the sheet (PDF, HTML, Markdown)…", "File", "ctrl E",
-                () -> Optional.of("the sheet export is not in this build yet"), this::nothing));
+                () -> core == null ? Optional.of("the practice packs and templates are still loading") : Optional.empty(),
+                this::exportSheet));
         catalog.add(Command.always("file.quit", "Quit", "File", "ctrl Q", this::quit));
         catalog.add(new Command("edit.undo", "Undo", "Edit", "ctrl Z",
                 () -> session.canUndo() ? Optional.empty() : Optional.of("there is nothing to undo"), session::undo));
@@ -284,10 +294,6 @@ public final class MainWindow {
     }
 
     // ---- commands ----
-
-    private void nothing() {
-        // never runs: the command is disabled and says why
-    }
 
     private void newWorksheet() {
         if (!confirmDiscard()) return;
@@ -512,7 +518,9 @@ public final class MainWindow {
             protected Loaded doInBackground() {
                 NotesPaths.ensurePersonalPack(personal);
                 PackStack stack = PackStack.load(team, personal);
-                return new Loaded(stack, FilletMechanics.load(stack));
+                RuleBook book = RuleBook.load(stack);
+                return new Loaded(stack, FilletMechanics.load(stack), book, MechanicsChecks.standard(stack),
+                        FrameRenderer.withBundledFont(), NoteTemplates.load(stack));
             }
 
             @Override
@@ -521,7 +529,8 @@ public final class MainWindow {
     }
 
     /** What loads in the background after the window shows. */
-    private record Loaded(PackStack packs, FilletMechanics mechanics) {}
+    private record Loaded(PackStack packs, FilletMechanics mechanics, RuleBook book, MechanicsChecks checks,
+                          FrameRenderer frames, NoteTemplates templates) {}
 
     private void packsLoaded(SwingWorker<Loaded, Void> worker) {
         try {
@@ -532,6 +541,10 @@ public final class MainWindow {
             status.packs("Packs: " + packs.packs().size(), "<html>" + names + "</html>");
             status.done("Ready");
             stressTab.whenBuilt(p -> p.setMechanics(loaded.mechanics()));
+            core = loaded;
+            useAdvisor(new Advisor(loaded.book(), loaded.checks(), NoteLinker.NONE));
+            decidePanel.setFrames(r -> loaded.frames().image(r.callout(), decideForm.standard(), decideForm.units(), 110));
+            actions.refresh();
             openNotesInBackground(packs);
             if (!packs.problems().isEmpty()) {
                 notice.show("A practice pack could not be opened: " + packs.problems().get(0).getMessage(), "OK", null, null, null);
@@ -559,7 +572,46 @@ public final class MainWindow {
         }
         notesStore = store;
         notesPanel.setStore(store);
+        if (core != null) {
+            NoteLinker linker = (tags, text, limit) -> store.related(tags, text, limit).stream()
+                    .map(h -> new NoteLink(h.id(), h.title(), h.pack())).toList();
+            useAdvisor(new Advisor(core.book(), core.checks(), linker));
+        }
         status.done("Ready · " + store.report().describe());
+    }
+
+    private void useAdvisor(Advisor a) {
+        decidePanel.setAdviceSource(AdviceSource.advisor(c -> a.advise(c).recommendations(), 90));
+    }
+
+    private void exportSheet() {
+        JFileChooser c = new JFileChooser(session.file().map(p -> p.toAbsolutePath().getParent().toFile()).orElse(null));
+        c.setFileFilter(new FileNameExtensionFilter("Sheets (*.pdf, *.html, *.md)", "pdf", "html", "md"));
+        c.setSelectedFile(new java.io.File(session.worksheet().part().number() + ".pdf"));
+        if (c.showSaveDialog(frame) == JFileChooser.APPROVE_OPTION) export(c.getSelectedFile().toPath());
+    }
+
+    /** Exports the sheet to {@code out} (PDF, HTML or Markdown by extension) in the background, with progress. */
+    public void export(Path out) {
+        Loaded loaded = core;
+        PartWorksheet ws = session.worksheet();
+        java.util.concurrent.Future<?>[] job = new java.util.concurrent.Future<?>[1];
+        status.progress("Exporting " + out.getFileName() + "…", 0, () -> cancelExport(job[0]));
+        job[0] = services.background().submit(() -> {
+            try {
+                SheetExporter.withBundledFont().export(ws, loaded.templates(), "Arcwright", out,
+                        (done, total, step) -> javax.swing.SwingUtilities.invokeLater(() ->
+                                status.progress("Exporting: " + step, total == 0 ? -1 : 100 * done / total, () -> cancelExport(job[0]))));
+                javax.swing.SwingUtilities.invokeLater(() -> status.done("Exported " + out.getFileName()));
+            } catch (RuntimeException e) {
+                javax.swing.SwingUtilities.invokeLater(() -> status.done("Export failed: " + e.getMessage()));
+            }
+        });
+    }
+
+    private void cancelExport(java.util.concurrent.Future<?> job) {
+        if (job != null) job.cancel(true);
+        status.done("Export cancelled");
     }
 
     public NotesPanel notesPanel() { return notesPanel; }
