@@ -52,6 +52,7 @@ import org.arcwright.app.check.CheckPanel;
 import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.notes.NotesPanel;
 import org.arcwright.app.stress.StressViewPanel;
+import org.arcwright.app.practice.PracticeEditorPanel;
 import org.arcwright.mechanics.FilletMechanics;
 import org.arcwright.notes.NotesPaths;
 import org.arcwright.notes.NotesStore;
@@ -97,6 +98,7 @@ public final class MainWindow {
     private DecidePanel decidePanel;
     private NotesPanel notesPanel;
     private LazyTab<StressViewPanel> stressTab;
+    private LazyTab<PracticeEditorPanel> practiceTab;
     private CheckPanel checkPanel;
     private PackStack packs;
     private NotesStore notesStore;
@@ -170,9 +172,8 @@ public final class MainWindow {
         checkPanel = new CheckPanel(session, new CheckRequests(services.json()), services.background(), services.clock(),
                 status::show);
         work.addTab("Check", Icons.get("check"), checkPanel, "Conformance of a measured contour (Alt+5)");
-        work.addTab("Practice editor", Icons.get("practice"), new PendingPanel("practiceEditor", "Practice editor",
-                "The rules of the active practice packs in a form, validated as you type, with each pack's examples runnable in one click.",
-                "practice"), "Rules and templates of the practice packs (Alt+7)");
+        practiceTab = new LazyTab<>("practiceEditor", () -> new PracticeEditorPanel(services.json(), services.background()));
+        work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
         notesPanel = new NotesPanel(services.search(), services.background(), status::show);
         JSplitPane right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);
         right.setResizeWeight(1);
@@ -542,7 +543,9 @@ public final class MainWindow {
             status.done("Ready");
             stressTab.whenBuilt(p -> p.setMechanics(loaded.mechanics()));
             core = loaded;
-            useAdvisor(new Advisor(loaded.book(), loaded.checks(), NoteLinker.NONE));
+            Advisor plain = new Advisor(loaded.book(), loaded.checks(), NoteLinker.NONE);
+            useAdvisor(plain);
+            practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), plain));
             decidePanel.setFrames(r -> loaded.frames().image(r.callout(), decideForm.standard(), decideForm.units(), 110));
             actions.refresh();
             openNotesInBackground(packs);
@@ -617,6 +620,8 @@ public final class MainWindow {
     public NotesPanel notesPanel() { return notesPanel; }
 
     public StressViewPanel stressPanel() { return stressTab.panel(); }
+
+    public PracticeEditorPanel practicePanel() { return practiceTab.panel(); }
 
     public CheckPanel checkPanel() { return checkPanel; }
 

@@ -126,6 +126,28 @@ class CheckStressNotesGuiTest {
         assertThat(worst.get() / 1_000_000).isLessThan(250);
     }
 
+    @Test
+    @Order(4)
+    void aRuleEditedWrongShowsWhereAndTheFixClearsIt() {
+        GuiSupport.onEdt(() -> window.showTab(4));
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().isShowing()) && fixture.list("ruleList").contents().length > 0, 20);
+        fixture.list("ruleList").selectItem(0);
+        GuiSupport.settle(200);
+        String original = GuiSupport.onEdt(() -> window.practicePanel().editor().getText());
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().verdictText())).startsWith("The rule reads");
+        String broken = original.replaceFirst("\"weight\"\\s*:\\s*\\d+", "\"weight\" : \"heavy\"");
+        assertThat(broken).isNotEqualTo(original);
+        fixture.textBox("ruleText").setText(broken);
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().verdictText()).contains("weight"), 10);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().verdictText())).matches("(?s).*line \\d+.*|(?s).*:\\d+:\\d+.*");
+        GuiSupport.screenshot(window.frame(), "practice-error-light");
+        fixture.textBox("ruleText").setText(original);
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().verdictText()).startsWith("The rule reads"), 10);
+        fixture.button("runExamples").click();
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().resultRows()) > 0, 30);
+        GuiSupport.screenshot(window.frame(), "practice-light");
+    }
+
     /** The worst round trip of an empty event posted every 5 ms while {@code during} runs. */
     private static long worstDelay(Runnable during) {
         AtomicLong worst = new AtomicLong();

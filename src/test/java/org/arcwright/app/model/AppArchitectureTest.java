@@ -10,7 +10,7 @@ import org.junit.jupiter.api.Test;
 /** Keeps the window's view models free of Swing, so they are tested without a screen. */
 class AppArchitectureTest {
     private final JavaClasses classes = new ClassFileImporter()
-            .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS).importPackages("org.arcwright.app");
+            .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS).importPackages("org.arcwright.app.model");
 
     @Test
     void viewModelsDoNotUseSwingOrAwt() {

@@ -1,0 +1,180 @@
+package org.arcwright.app.practice;
+
+import java.util.List;
+import java.util.Objects;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.Executor;
+import javax.swing.DefaultListModel;
+import javax.swing.JButton;
+import javax.swing.JLabel;
+import javax.swing.JList;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
+import javax.swing.JTable;
+import javax.swing.JTextArea;
+import javax.swing.SwingUtilities;
+import javax.swing.Timer;
+import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
+import javax.swing.table.DefaultTableModel;
+import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.model.RuleDraft;
+import org.arcwright.app.shell.WrapLabel;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.rules.Advisor;
+import org.arcwright.rules.PackCheck;
+import org.arcwright.rules.RuleBook;
+
+/**
+ * The Practice editor: the rules of the packs in force, one opened as its JSON with the reader's
+ * verdict as you type (line, column and field of the first problem), and the examples of the
+ * selected rule's pack run with one click against the advisor.
+ */
+public final class PracticeEditorPanel extends JPanel {
+    private static final long serialVersionUID = 1L;
+    private final transient JsonFiles json;
+    private final transient Executor background;
+    private transient RuleBook book;
+    private transient org.arcwright.pack.PackStack stack;
+    private transient Advisor advisor;
+    private transient RuleDraft draft;
+    private final DefaultListModel<RuleBook.Entry> entries = new DefaultListModel<>();
+    private final JList<RuleBook.Entry> list = new JList<>(entries);
+    private final JTextArea editor = new JTextArea();
+    private final WrapLabel verdict = new WrapLabel("Select a rule to see it here.", "Label.font", "Arcwright.help.foreground");
+    private final JButton run = new JButton("Run the pack's examples");
+    private final DefaultTableModel results = new DefaultTableModel(new Object[] {"Rule", "Example", "Result", "First"}, 0) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        public boolean isCellEditable(int row, int column) { return false; }
+    };
+    private final Timer validateLater = new Timer(250, e -> validateNow());
+    private boolean loading;
+
+    public PracticeEditorPanel(JsonFiles json, Executor background) {
+        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow,fill][]"));
+        this.json = Objects.requireNonNull(json, "json");
+        this.background = Objects.requireNonNull(background, "background");
+        setName("practiceEditor");
+        list.setName("ruleList");
+        editor.setName("ruleText");
+        verdict.setName("ruleVerdict");
+        run.setName("runExamples");
+        run.setEnabled(false);
+        run.setToolTipText("Unavailable: select a rule first");
+        run.addActionListener(e -> runExamples());
+        list.setCellRenderer(new javax.swing.DefaultListCellRenderer() {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public java.awt.Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
+                RuleBook.Entry e = (RuleBook.Entry) v;
+                return super.getListCellRendererComponent(l, e.rule().id() + "   (" + e.pack() + ")", i, s, f);
+            }
+        });
+        list.addListSelectionListener(e -> selected(e.getValueIsAdjusting()));
+        editor.setFont(new java.awt.Font(java.awt.Font.MONOSPACED, java.awt.Font.PLAIN, editor.getFont().getSize()));
+        editor.setTabSize(2);
+        editor.getDocument().addDocumentListener(new DocumentListener() {
+            public void insertUpdate(DocumentEvent e) { typed(); }
+            public void removeUpdate(DocumentEvent e) { typed(); }
+            public void changedUpdate(DocumentEvent e) { typed(); }
+        });
+        validateLater.setRepeats(false);
+        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][]"));
+        right.add(new JScrollPane(editor), "wmin 10, hmin 10");
+        right.add(verdict, "wmin 10");
+        right.add(run, "left, growx 0");
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(list), right);
+        split.setResizeWeight(0.3);
+        split.setBorder(null);
+        add(split, "wmin 10, hmin 10");
+        JTable table = new JTable(results);
+        table.setName("exampleResults");
+        table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 6));
+        add(new JScrollPane(table), "wmin 10");
+        add(new WrapLabel("Edits here are checked, not saved: change rules in the pack's files (see DEVELOPERS.md).",
+                "Label.font", "Arcwright.help.foreground"), "wmin 10");
+    }
+
+    /** Called once the packs have loaded. */
+    public void setRules(org.arcwright.pack.PackStack packs, RuleBook b, Advisor a) {
+        stack = packs;
+        book = b;
+        advisor = a;
+        entries.clear();
+        for (RuleBook.Entry e : b.entries()) entries.addElement(e);
+    }
+
+    public JTextArea editor() { return editor; }
+
+    public String verdictText() { return verdict.getText(); }
+
+    public int resultRows() { return results.getRowCount(); }
+
+    private void selected(boolean adjusting) {
+        RuleBook.Entry e = list.getSelectedValue();
+        if (adjusting || e == null) return;
+        java.nio.file.Path file = null;
+        for (org.arcwright.pack.PackStack.PackFile f : stack.files("rules", ".json")) {
+            if (f.path().toString().equals(e.file())) file = f.path();
+        }
+        if (file == null) {
+            verdict.show("The file of rule " + e.rule().id() + " is not in the packs in force: " + e.file(), "Arcwright.error.foreground");
+            return;
+        }
+        draft = RuleDraft.fromFile(json, file, e.rule().id());
+        loading = true;
+        editor.setText(draft.text());
+        editor.setCaretPosition(0);
+        loading = false;
+        run.setEnabled(advisor != null);
+        run.setToolTipText("Run every example of pack '" + e.pack() + "' against the advisor");
+        showVerdict();
+    }
+
+    private void typed() {
+        if (!loading) validateLater.restart();
+    }
+
+    private void validateNow() {
+        if (draft == null) return;
+        draft.setText(editor.getText());
+        showVerdict();
+    }
+
+    private void showVerdict() {
+        if (draft.problem().isPresent()) {
+            verdict.show(draft.problem().get().getMessage(), "Arcwright.error.foreground");
+        } else {
+            verdict.show("The rule reads: " + draft.rule().get().summary(), "Arcwright.pass.foreground");
+        }
+    }
+
+    private void runExamples() {
+        RuleBook.Entry e = list.getSelectedValue();
+        if (e == null || advisor == null) return;
+        run.setEnabled(false);
+        Advisor a = advisor;
+        CompletableFuture.supplyAsync(() -> new PackCheck(a).run(e.pack()), background)
+                .whenComplete((r, err) -> SwingUtilities.invokeLater(() -> ran(r, err)));
+    }
+
+    private void ran(PackCheck.Report r, Throwable err) {
+        run.setEnabled(true);
+        results.setRowCount(0);
+        if (err != null) {
+            verdict.show("The examples could not run: " + err.getMessage(), "Arcwright.error.foreground");
+            return;
+        }
+        List<PackCheck.ExampleResult> ex = r.examples();
+        for (PackCheck.ExampleResult x : ex) {
+            results.addRow(new Object[] {x.ruleId(), x.name(), x.passed() ? "passes" : "FAILS", x.actual()});
+        }
+        long failed = ex.stream().filter(x -> !x.passed()).count();
+        verdict.show(ex.size() + " examples of pack '" + r.pack() + "' run: " + (failed == 0 ? "all pass" : failed + " fail"),
+                failed == 0 ? "Arcwright.pass.foreground" : "Arcwright.error.foreground");
+    }
+}
