@@ -223,6 +223,10 @@ public final class Advisor {
         }
         Callout callout = d.callout(datums);
         String text = d.text(callout);
+        if (callout instanceof Callout.CompositeProfile && c.standard() == DrawingStyle.ISO) {
+            cautions.add("On an ISO drawing write the tiers as two profile frames stacked on one leader (ISO 1101), the "
+                    + "upper with the datums, the lower without; the composite frame is ASME's form (common practice).");
+        }
         Map<String, Object> numbers = d.numbers();
         numbers.putAll(mech);
         trace.add("numbers: " + summary(numbers));
