@@ -119,7 +119,7 @@ final class InspectCommand implements Callable<Integer> {
         if (r.worst() != null) {
             out.printf("  worst point    #%d [%s, %s], %s %s%s%n", r.worst().index(), n(r.worst().x()), n(r.worst().y()),
                     r.worst().excess() > 0 ? "outside by" : "inside by", n(Math.abs(r.worst().excess())),
-                    "radius".equals(r.worst().measure()) ? " (radius)" : "");
+                    "distance".equals(r.worst().measure()) ? "" : " (" + r.worst().measure() + ")");
         }
         if (!r.comparisons().isEmpty()) {
             out.println();

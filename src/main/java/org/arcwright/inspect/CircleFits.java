@@ -64,6 +64,13 @@ public final class CircleFits {
         double mx = 0, my = 0;
         for (int i = from; i < to; i++) { mx += xs[i]; my += ys[i]; }
         mx /= n; my /= n;
+        Circle c = taubinCentred(xs, ys, from, to, mx, my);
+        return c != null ? c : new Circle(Double.NaN, Double.NaN, Double.POSITIVE_INFINITY);
+    }
+
+    /** Taubin's fit given the centroid; null when the points are collinear or coincide. */
+    private static Circle taubinCentred(double[] xs, double[] ys, int from, int to, double mx, double my) {
+        int n = to - from;
         double mxx = 0, myy = 0, mxy = 0, mxz = 0, myz = 0, mzz = 0;
         for (int i = from; i < to; i++) {
             double xi = xs[i] - mx, yi = ys[i] - my;
@@ -74,6 +81,9 @@ public final class CircleFits {
         mxx /= n; myy /= n; mxy /= n; mxz /= n; myz /= n; mzz /= n;
         double mz = mxx + myy;
         double covXY = mxx * myy - mxy * mxy;
+        // collinear (or all one point): the smaller eigenvalue of the scatter vanishes
+        double lmin = mz / 2 - Math.sqrt(Math.max(0, mz * mz / 4 - covXY));
+        if (!(lmin > 1e-24 * mz)) return null;
         double varZ = mzz - mz * mz;
         double a3 = 4 * mz;
         double a2 = -3 * mz * mz - mzz;
@@ -98,11 +108,15 @@ public final class CircleFits {
 
     /** The geometric least-squares circle (see the class comment). */
     public static LeastSquaresCircle leastSquares(double[] xs, double[] ys, int n) {
-        requireCircular(xs, ys, n, "points");
-        Circle start = taubin(xs, ys, n);
+        if (n < 3) throw InputProblem.ofField("points", "a circle needs at least 3 points, got " + n);
         double mx = 0, my = 0;
         for (int i = 0; i < n; i++) { mx += xs[i]; my += ys[i]; }
         mx /= n; my /= n;
+        Circle start = taubinCentred(xs, ys, 0, n, mx, my);
+        if (start == null) {
+            requireCircular(xs, ys, n, "points");
+            throw InputProblem.ofField("points", "the points are collinear; no circle fits them");
+        }
         double a = start.cx() - mx, b = start.cy() - my, r = start.r();
         double[] ne = new double[9];
         double cost = normal(xs, ys, n, mx, my, a, b, r, ne);
@@ -122,23 +136,20 @@ public final class CircleFits {
             } catch (IllegalStateException e) {
                 break;
             }
+            double stepSize = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]);
+            double scale = Math.abs(r) + Math.hypot(a, b);
+            if (stepSize <= 1e-14 * scale) break;
             double[] trial = new double[9];
             double tc = normal(xs, ys, n, mx, my, a + d[0], b + d[1], r + d[2], trial);
-            boolean tiny = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]) <= 1e-11 * (Math.abs(r) + Math.hypot(a, b));
-            if (tiny) {
-                // converged: the cost is flat to rounding here, a step this small changes nothing that matters
-                if (tc <= cost) { a += d[0]; b += d[1]; r += d[2]; cost = tc; }
-                it++;
-                break;
-            }
             // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
             if (tc <= cost * (1 + 1e-15)) {
-                boolean done = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]) <= 1e-11 * (Math.abs(r) + Math.hypot(a, b));
                 a += d[0]; b += d[1]; r += d[2];
                 cost = tc;
                 ne = trial;
                 lambda = Math.max(lambda / 10, 1e-12);
-                if (done) { it++; break; }
+                // convergence is at least linear with a small ratio (residual / radius): after a step
+                // of 1e-10 the remaining error is far below 1e-12
+                if (stepSize <= 1e-10 * scale) { it++; break; }
             } else {
                 lambda *= 10;
                 if (lambda > 1e12) break;
@@ -155,7 +166,8 @@ public final class CircleFits {
             double dx = xs[i] - mx - a, dy = ys[i] - my - b;
             double d = Math.sqrt(dx * dx + dy * dy);
             double e = d - r;
-            double j0 = d > 0 ? -dx / d : 0, j1 = d > 0 ? -dy / d : 0;
+            double inv = d > 0 ? -1 / d : 0;
+            double j0 = dx * inv, j1 = dy * inv;
             s00 += j0 * j0; s01 += j0 * j1; s02 -= j0; s11 += j1 * j1; s12 -= j1; s22 += 1;
             g0 += j0 * e; g1 += j1 * e; g2 -= e;
             cost += e * e;

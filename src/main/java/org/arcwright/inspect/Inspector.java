@@ -81,7 +81,7 @@ public final class Inspector {
                         req.window(), res);
                 pass = cr.pass();
                 if (cr.worstIndex() >= 0 && (worst == null || cr.worstExcess() > worst.excess())) {
-                    worst = worstOf(pts, cr.worstIndex(), cr.worstExcess(), "radius");
+                    worst = worstOf(pts, cr.worstIndex(), cr.worstExcess(), "local radius");
                 }
                 notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s-long windows along the blend, stepped by a quarter window (%d windows)",
                         fmt(cr.windowLength()), cr.windows()));

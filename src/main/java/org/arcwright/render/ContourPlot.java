@@ -44,6 +44,7 @@ public final class ContourPlot {
     /** Plot size in pixels (PNG) or user units (SVG). */
     public static final int WIDTH = 1000, HEIGHT = 760;
     private static final int MAX_DRAWN = 20_000;
+    private static final int TOP = 140;
     private static final Color NOMINAL = new Color(0x30, 0x30, 0x30), ZONE = new Color(0x1f, 0x5f, 0xbf),
             ZONE_FILL = new Color(0x1f, 0x5f, 0xbf, 0x22), OK = new Color(0x1a, 0x8f, 0x3c),
             NEAR = new Color(0xd9, 0x8a, 0x00), OUT = new Color(0xd0, 0x21, 0x21), IDLE = new Color(0x9a, 0x9a, 0x9a);
@@ -113,14 +114,12 @@ public final class ContourPlot {
             maxDev = Math.max(maxDev, Math.abs(m4[0]));
         }
         double mag = niceFactor(0.12 * span / Math.max(Math.max(visibleBand(q, po), maxDev), 1e-12 * span));
-        double sx = (WIDTH - 120) / (view[2] - view[0]), sy = (HEIGHT - 190) / (view[3] - view[1]);
+        double sx = (WIDTH - 120) / (view[2] - view[0]), sy = (HEIGHT - 200) / (view[3] - view[1]);
         double scale = Math.min(sx, sy);
         double ox = 60 + ((WIDTH - 120) - scale * (view[2] - view[0])) / 2 - scale * view[0];
-        double oy = 120 + ((HEIGHT - 190) + scale * (view[3] - view[1])) / 2 + scale * view[1];
+        double oy = TOP + 5 + ((HEIGHT - 200) + scale * (view[3] - view[1])) / 2 + scale * view[1];
         Mapper map = new Mapper(nominal, mag, scale, ox, oy);
 
-        java.awt.Shape oldClip = g.getClip();
-        g.clipRect(0, 100 + 18 * 2, WIDTH, HEIGHT - 100 - 36 - 40);
         // Zone.
         g.setStroke(new BasicStroke(1.6f));
         if (rz != null) {
@@ -156,7 +155,6 @@ public final class ContourPlot {
             g.setColor(colour(p[2], band));
             g.fill(new Ellipse2D.Double(s[0] - dot / 2, s[1] - dot / 2, dot, dot));
         }
-        g.setClip(oldClip);
         // Worst point.
         if (r.worst() != null) {
             double[] w = null;
@@ -170,7 +168,7 @@ public final class ContourPlot {
                 g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
                 String t = String.format(Locale.ROOT, "worst #%d: %s %s%s", r.worst().index(),
                         r.worst().excess() > 0 ? "outside by" : "inside by", fmt(Math.abs(r.worst().excess())),
-                        "radius".equals(r.worst().measure()) ? " (radius)" : "");
+                        "distance".equals(r.worst().measure()) ? "" : " (" + r.worst().measure() + ")");
                 g.drawString(t, (float) Math.min(s[0] + 32, WIDTH - 10 - g.getFontMetrics().stringWidth(t)), (float) Math.max(s[1] - 32, 110));
             }
         }
@@ -375,7 +373,8 @@ public final class ContourPlot {
                         y += offset * mm[2];
                     }
                     double[] sc = screen(x, y);
-                    if (sc[0] < -400 || sc[0] > 400 + WIDTH || sc[1] < -400 || sc[1] > 400 + HEIGHT) {
+                    // the plot area, below the labels and above the legend (no clip paths: not every SVG viewer has them)
+                    if (sc[0] < 8 || sc[0] > WIDTH - 8 || sc[1] < TOP || sc[1] > HEIGHT - 45) {
                         first = true;
                         continue;
                     }

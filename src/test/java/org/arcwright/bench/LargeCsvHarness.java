@@ -43,7 +43,7 @@ public final class LargeCsvHarness {
             long t0 = System.nanoTime();
             int code = Cli.run(new String[] {"inspect", dir.resolve(f).toString(), "--format", "json"});
             long ms = (System.nanoTime() - t0) / 1_000_000;
-            System.err.printf("%s: exit %d in %d ms, peak heap so far %d MB%n", f, code, ms, peakHeapMb());
+            System.err.printf("%s: exit %d in %d ms (sum of the heap pools' peaks so far %d MB)%n", f, code, ms, peakHeapMb());
         }
         Files.walk(dir).sorted(java.util.Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
     }

@@ -61,7 +61,7 @@ class ContourPlotTest {
         Path svg = dir.resolve("r.svg");
         new ContourPlot().write(inspect("bracket-round-r.json"), svg);
         String text = Files.readString(svg);
-        assertThat(text).doesNotContain("clip-0'/>").contains("arcwright-");
+        assertThat(text).as("no clip paths, which some SVG viewers ignore").doesNotContain("clip-path");
         assertGolden("plot-bracket-round-r.txt", content(text));
     }
 
