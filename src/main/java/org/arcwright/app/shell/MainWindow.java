@@ -141,13 +141,20 @@ public final class MainWindow {
 
     public DecidePanel decidePanel() { return decidePanel; }
 
-    /** Shows the window, then restores the last work and loads packs in the background. */
+    /**
+     * Shows the window, then restores the last work; the packs, fits, rules and notes index start
+     * loading in the background once the window has opened, so they do not compete with its first paint.
+     */
     public void show() {
+        frame.addWindowListener(new WindowAdapter() {
+            @Override
+            public void windowOpened(WindowEvent e) { javax.swing.SwingUtilities.invokeLater(MainWindow.this::loadPacksInBackground); }
+        });
         frame.setVisible(true);
         frame.toFront();
         partPanel.table().requestFocusInWindow();
         restoreWork();
-        loadPacksInBackground();
+        status.progress("Loading practice packs…", -1, null);
     }
 
     // ---- building ----
@@ -510,7 +517,6 @@ public final class MainWindow {
     }
 
     private void loadPacksInBackground() {
-        status.progress("Loading practice packs…", -1, null);
         List<Path> team = new ArrayList<>();
         for (String t : settings.teamPacks()) team.add(Path.of(t));
         Path personal = settings.personalPack() == null ? services.defaultPersonalPack() : Path.of(settings.personalPack());

@@ -148,6 +148,16 @@ class CheckStressNotesGuiTest {
         GuiSupport.screenshot(window.frame(), "practice-light");
     }
 
+    @Test
+    @Order(5)
+    void theSheetExportsInTheBackground() {
+        Path out = config.resolve("sheet.html");
+        GuiSupport.onEdt(() -> window.export(out));
+        waitFor(() -> GuiSupport.onEdt(() -> window.statusLine().message()).startsWith("Exported"), 60);
+        assertThat(out).exists();
+        assertThat(out.toFile().length()).isGreaterThan(100);
+    }
+
     /** The worst round trip of an empty event posted every 5 ms while {@code during} runs. */
     private static long worstDelay(Runnable during) {
         AtomicLong worst = new AtomicLong();
