@@ -51,7 +51,6 @@ import org.apache.lucene.search.BoostQuery;
 import org.apache.lucene.search.IndexSearcher;
 import org.apache.lucene.search.MatchAllDocsQuery;
 import org.apache.lucene.search.Query;
-import org.apache.lucene.search.QueryRescorer;
 import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TermQuery;
@@ -204,7 +203,7 @@ public final class NotesStore implements Closeable {
                 top = s.search(query, new TopScoreDocCollectorManager(window, null, TOTAL_HITS_THRESHOLD, false));
                 facets = Map.of();
             }
-            if (phrase != null) top = QueryRescorer.rescore(s, top, phrase, PHRASE_BOOST, limit);
+            if (phrase != null) top = rescoreByProximity(s, top, phrase, limit);
             String[] snippets = snippets(s, query, top);
             List<NoteHit> hits = new ArrayList<>();
             StoredFields stored = s.storedFields();
@@ -770,6 +769,31 @@ public final class NotesStore implements Closeable {
             }
         }
         return any ? b.build() : null;
+    }
+
+    /**
+     * Adds {@link #PHRASE_BOOST} times the phrase score to each hit whose body has the words near
+     * each other, and keeps the best {@code limit}. Checks each hit's own document only, where
+     * Lucene's {@code QueryRescorer} would walk the phrase's candidates between hits.
+     */
+    private static TopDocs rescoreByProximity(IndexSearcher s, TopDocs top, Query phrase, int limit) throws IOException {
+        org.apache.lucene.search.Weight w = s.createWeight(s.rewrite(phrase), org.apache.lucene.search.ScoreMode.COMPLETE, 1f);
+        List<LeafReaderContext> leaves = s.getIndexReader().leaves();
+        ScoreDoc[] docs = top.scoreDocs.clone();
+        for (int i = 0; i < docs.length; i++) {
+            ScoreDoc sd = docs[i];
+            LeafReaderContext leaf = leaves.get(org.apache.lucene.index.ReaderUtil.subIndex(sd.doc, leaves));
+            org.apache.lucene.search.Scorer sc = w.scorer(leaf);
+            if (sc == null) continue;
+            int target = sd.doc - leaf.docBase;
+            org.apache.lucene.search.TwoPhaseIterator two = sc.twoPhaseIterator();
+            org.apache.lucene.search.DocIdSetIterator approx = two != null ? two.approximation() : sc.iterator();
+            if (approx.advance(target) == target && (two == null || two.matches())) {
+                docs[i] = new ScoreDoc(sd.doc, sd.score + PHRASE_BOOST * sc.score());
+            }
+        }
+        java.util.Arrays.sort(docs, (a, b) -> a.score != b.score ? Float.compare(b.score, a.score) : Integer.compare(a.doc, b.doc));
+        return new TopDocs(top.totalHits, java.util.Arrays.copyOf(docs, Math.min(limit, docs.length)));
     }
 
     /**
