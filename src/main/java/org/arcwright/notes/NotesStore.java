@@ -128,7 +128,20 @@ public final class NotesStore implements Closeable {
      */
     public static NotesStore open(PackStack stack, Path indexFolder) {
         NotesStore s = new NotesStore(stack, indexFolder);
-        s.start();
+        s.start(true);
+        return s;
+    }
+
+    /**
+     * Opens a usable index without first checking the note files against it (one file-system look
+     * per note, seconds for a pack of 100,000 notes on a busy disk), so the first search can run at
+     * once; a missing, corrupt or other-version index is still rebuilt. The caller must then call
+     * {@link #refresh()}, typically on a worker thread, to pick up notes changed since the index
+     * was written. For the desktop app's start-up; the command line uses {@link #open}.
+     */
+    public static NotesStore openUnchecked(PackStack stack, Path indexFolder) {
+        NotesStore s = new NotesStore(stack, indexFolder);
+        s.start(false);
         return s;
     }
 
@@ -351,7 +364,7 @@ public final class NotesStore implements Closeable {
 
     // ---------------------------------------------------------------- opening and syncing
 
-    private synchronized void start() {
+    private synchronized void start(boolean checkSources) {
         long t0 = System.nanoTime();
         try {
             Files.createDirectories(indexFolder);
@@ -360,20 +373,19 @@ public final class NotesStore implements Closeable {
             buildInMemory("index folder unusable: " + e.getMessage(), t0);
             return;
         }
-        SourceScan scan = SourceScan.of(stack);
         Map<String, String> commit;
         try {
             if (!DirectoryReader.indexExists(directory)) {
-                rebuild("no index yet", t0, scan);
+                rebuild("no index yet", t0);
                 return;
             }
             commit = SegmentInfos.readLatestCommit(directory).getUserData();
         } catch (IOException | RuntimeException e) {
-            rebuild("index unreadable: " + e.getClass().getSimpleName(), t0, scan);
+            rebuild("index unreadable: " + e.getClass().getSimpleName(), t0);
             return;
         }
         if (!NoteDocuments.SCHEMA.equals(commit.get(NoteDocuments.COMMIT_SCHEMA))) {
-            rebuild("index from another version", t0, scan);
+            rebuild("index from another version", t0);
             return;
         }
         try {
@@ -381,10 +393,37 @@ public final class NotesStore implements Closeable {
             probe();
         } catch (IOException | RuntimeException e) {
             closeQuietly();
-            rebuild("index corrupt: " + e.getClass().getSimpleName(), t0, scan);
+            rebuild("index corrupt: " + e.getClass().getSimpleName(), t0);
             return;
         }
-        if (Long.toString(scan.stamp()).equals(commit.get(NoteDocuments.COMMIT_STAMP))) {
+        if (!checkSources) {
+            report = new IndexReport(IndexReport.Kind.OPENED, "note files not checked yet", size(), 0, 0, 0, millisSince(t0));
+            return;
+        }
+        refreshFrom(commit.get(NoteDocuments.COMMIT_STAMP), t0);
+    }
+
+    /**
+     * Checks the note files against the index now and brings it up to date, as {@link #open} does.
+     * For a store opened with {@link #openUnchecked}, call this once from a worker thread soon after
+     * the first search.
+     */
+    public synchronized IndexReport refresh() {
+        long t0 = System.nanoTime();
+        String recorded;
+        try {
+            recorded = SegmentInfos.readLatestCommit(directory).getUserData().get(NoteDocuments.COMMIT_STAMP);
+        } catch (IOException | RuntimeException e) {
+            rebuild("index unreadable: " + e.getClass().getSimpleName(), t0);
+            return report;
+        }
+        refreshFrom(recorded, t0);
+        return report;
+    }
+
+    private void refreshFrom(String recordedStamp, long t0) {
+        SourceScan scan = SourceScan.of(stack);
+        if (Long.toString(scan.stamp()).equals(recordedStamp)) {
             report = new IndexReport(IndexReport.Kind.OPENED, "", size(), 0, 0, 0, millisSince(t0));
             return;
         }
