@@ -35,20 +35,44 @@ final class LimitsCommand implements Callable<Integer> {
             description = "Units when the text names none (default: ${DEFAULT-VALUE}).")
     String units;
 
+    @Option(names = "--blend", paramLabel = "round|fillet",
+            description = "The blend's kind, to give the unequally disposed profile zone that holds the crescent exactly.")
+    String blend;
+
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
     @Override
     public Integer call() {
         RadiusCallout callout = CalloutParser.parse(text, Units.parse(units), "TEXT");
+        Boolean fillet = blend == null ? null : parseBlend(blend);
         LimitsReport r = LimitsReport.of(callout, angle);
         PrintWriter out = spec.commandLine().getOut();
         if (format == OutputFormat.json) {
-            out.println(new JsonFiles().write(toJson(r)));
+            Map<String, Object> m = toJson(r);
+            if (fillet != null && r.crescent() != null) m.put("unequalProfile", unequal(r.crescent(), fillet));
+            out.println(new JsonFiles().write(m));
         } else {
-            printText(out, r);
+            printText(out, r, fillet);
         }
         return Cli.OK;
+    }
+
+    private static boolean parseBlend(String text) {
+        if (text.equalsIgnoreCase("fillet")) return true;
+        if (text.equalsIgnoreCase("round")) return false;
+        throw org.arcwright.io.InputProblem.ofField("--blend", "use round or fillet, got '" + text + "'");
+    }
+
+    /** The unequally disposed profile zone that holds the crescent exactly, ASME and ISO forms. */
+    private static Map<String, Object> unequal(CrescentZone c, boolean fillet) {
+        Map<String, Object> m = new LinkedHashMap<>();
+        double outward = c.outwardPortion(fillet);
+        m.put("blend", fillet ? "fillet" : "round");
+        m.put("zone", c.width());
+        m.put("outward", outward);
+        m.put("isoOffset", outward - c.width() / 2);
+        return m;
     }
 
     static Map<String, Object> toJson(LimitsReport r) {
@@ -79,7 +103,7 @@ final class LimitsCommand implements Callable<Integer> {
         return m;
     }
 
-    private static void printText(PrintWriter out, LimitsReport r) {
+    private static void printText(PrintWriter out, LimitsReport r, Boolean fillet) {
         RadiusCallout c = r.callout();
         int p = Math.max(2, c.places());
         String u = c.units().symbol();
@@ -100,6 +124,13 @@ final class LimitsCommand implements Callable<Integer> {
                     Numbers.fixed(z.equalBilateralProfile(), 4));
             out.printf("                 %s  common shortcut (2 × the larger deviation): looser, allows that much along the whole blend%n",
                     Numbers.fixed(z.shortcutProfile(), 4));
+            if (fillet != null) {
+                double outward = z.outwardPortion(fillet);
+                out.printf("  unequal zone   %s total, %s outward (add-material side) for a %s: ASME unequally disposed %s, ISO offset UZ%s%s%n",
+                        Numbers.fixed(z.width(), 4), Numbers.fixed(outward, 4), fillet ? "fillet" : "round",
+                        Numbers.fixed(outward, 4), outward - z.width() / 2 >= 0 ? "+" : "",
+                        Numbers.fixed(outward - z.width() / 2, 4));
+            }
         }
         for (String remark : r.remarks()) out.println("  note: " + remark);
     }

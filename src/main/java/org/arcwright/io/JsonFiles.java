@@ -29,7 +29,6 @@ public final class JsonFiles {
     public JsonFiles() {
         this.mapper = JsonMapper.builder()
                 .enable(DeserializationFeature.FAIL_ON_UNKNOWN_PROPERTIES)
-                .enable(DeserializationFeature.FAIL_ON_NULL_FOR_PRIMITIVES)
                 .enable(DeserializationFeature.FAIL_ON_TRAILING_TOKENS)
                 .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
                 .enable(SerializationFeature.INDENT_OUTPUT)

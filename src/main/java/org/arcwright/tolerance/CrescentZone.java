@@ -17,6 +17,12 @@ import org.arcwright.io.InputProblem;
  * to V, so the nominal arc splits the width into {@code (rnom - rmin)·k} toward the vertex and
  * {@code (rmax - rnom)·k} away from it.
  *
+ * <p>The bisector governs while the foot of the normal from the largest arc's midpoint to a surface
+ * falls on the smallest arc rather than on the surface beyond it, that is while
+ * {@code sin(θ/2) >= 1 - rmin/rmax} (true for every usual tolerance at 60° and wider). At sharper
+ * corners with wide bands the two boundaries come closer through the adjacent surfaces, and the
+ * bisector value is an upper bound of the true gap: {@link #widestOnBisector()} says which holds.
+ *
  * <p>For {@code R0.55 ±0.05} at 90° that gives {@code 0.1 × (√2 - 1) = 0.0414}, not the 0.1 a reader
  * might guess from the tolerance. The common shortcut for the equivalent profile zone is twice the
  * ± value (0.1 here, common practice): it is easier to state but allows a contour up to 0.05 from
@@ -31,9 +37,12 @@ import org.arcwright.io.InputProblem;
  * @param equalBilateralProfile smallest equal-bilateral profile zone about the nominal arc holding
  *     the crescent: {@code 2·max(towardVertex, awayFromVertex)}
  * @param shortcutProfile the common shortcut: twice the larger deviation of the size tolerance
+ * @param widestOnBisector true when the bisector value is the true widest gap; false when it is an
+ *     upper bound (sharp corner, wide band)
  */
 public record CrescentZone(double includedAngleDeg, double factor, double width, double towardVertex,
-                           double awayFromVertex, double equalBilateralProfile, double shortcutProfile) {
+                           double awayFromVertex, double equalBilateralProfile, double shortcutProfile,
+                           boolean widestOnBisector) {
 
     /**
      * The crescent of a tolerance {@code rMin..rMax} about {@code rNominal} between surfaces at
@@ -57,8 +66,9 @@ public record CrescentZone(double includedAngleDeg, double factor, double width,
         double toward = (rNominal - rMin) * k;
         double away = (rMax - rNominal) * k;
         double shortcut = 2 * Math.max(rNominal - rMin, rMax - rNominal);
+        boolean onBisector = rMax == 0 || Math.sin(Math.toRadians(includedAngleDeg) / 2) >= 1 - rMin / rMax;
         return new CrescentZone(includedAngleDeg, k, (rMax - rMin) * k, toward, away, 2 * Math.max(toward, away),
-                shortcut);
+                shortcut, onBisector);
     }
 
     /** {@code k = 1/sin(θ/2) - 1}: bisector distance from the vertex to an arc, per unit radius. */

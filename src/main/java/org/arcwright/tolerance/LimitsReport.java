@@ -50,6 +50,9 @@ public record LimitsReport(RadiusCallout callout, double includedAngleDeg, Doubl
         if (max == null && min != null) {
             remarks.add("MIN only: there is no upper limit, so no crescent width can be given.");
         }
+        if (crescent != null && !crescent.widestOnBisector()) {
+            remarks.add("At this sharp corner the limit arcs come closest through the adjacent surfaces: the crescent width on the bisector is an upper bound of the true gap.");
+        }
         for (DrawingStyle s : DrawingStyle.values()) {
             for (String r : s.remarks(callout)) remarks.add(s.name() + ": " + r);
         }

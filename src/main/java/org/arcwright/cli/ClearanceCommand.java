@@ -1,0 +1,115 @@
+package org.arcwright.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Map;
+import java.util.concurrent.Callable;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.mechanics.ClearanceCase;
+import org.arcwright.mechanics.CornerClearance;
+import org.arcwright.mechanics.FilletMechanics;
+import org.arcwright.mechanics.MechanicsFiles;
+import org.arcwright.mechanics.PetersonFits;
+import org.arcwright.pack.PackStack;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code arcwright clearance FILE}: does the largest fillet let the mating part seat against the shoulder. */
+@Command(name = "clearance", mixinStandardHelpOptions = true,
+        description = {"Whether a shoulder fillet at its largest still lets the mating part seat flush, "
+                + "the margin, and the shoulder flat left to carry it.",
+                "FILE (JSON): units, fillet {r | rMin, rMax | callout}, mating {type: chamfer, leg, angle} | {type: radius, rMin} "
+                        + "| {type: bearing, chamferMin}, optional shoulderHeight, shoulderEdgeBreak, requiredSupport.",
+                "Exit 1 when the part does not seat or the shoulder gives less support than required."})
+final class ClearanceCommand implements Callable<Integer> {
+    @Spec
+    CommandSpec spec;
+
+    @Parameters(index = "0", paramLabel = "FILE", description = "The fillet and the mating corner (JSON).")
+    Path file;
+
+    @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE}).")
+    OutputFormat format;
+
+    @Option(names = "--pack", paramLabel = "DIR", description = "A practice pack to layer over the built-in one (repeatable).")
+    List<Path> packs = List.of();
+
+    @Override
+    public Integer call() {
+        ClearanceCase c = new MechanicsFiles(new JsonFiles(), PetersonFits.published()).readClearance(file);
+        PackStack stack = PackStack.load(packs, null);
+        if (!stack.problems().isEmpty()) throw stack.problems().get(0);
+        CornerClearance result = FilletMechanics.load(stack).clearance().check(c);
+        PrintWriter out = spec.commandLine().getOut();
+        if (format == OutputFormat.json) {
+            out.println(new JsonFiles().write(toJson(result)));
+        } else {
+            printText(out, result);
+        }
+        return result.passes() ? Cli.OK : Cli.FAIL;
+    }
+
+    static Map<String, Object> toJson(CornerClearance r) {
+        ClearanceCase c = r.input();
+        Map<String, Object> m = new LinkedHashMap<>();
+        m.put("units", c.units().symbol());
+        m.put("filletMin", c.filletMin());
+        m.put("filletMax", c.filletMax());
+        m.put("mating", c.corner().describe());
+        m.put("seats", r.seats());
+        m.put("margin", r.margin());
+        m.put("allowedFilletMax", r.allowedFilletMax());
+        m.put("governing", r.governing());
+        m.put("reliefAlongSeat", r.reliefAlongSeat());
+        m.put("reliefAlongShoulder", r.reliefAlongShoulder());
+        if (r.support() != null) {
+            Map<String, Object> s = new LinkedHashMap<>();
+            s.put("contactFrom", r.support().contactFrom());
+            s.put("contactTo", r.support().contactTo());
+            s.put("flat", r.support().flat());
+            s.put("required", r.support().required());
+            s.put("sufficient", r.support().sufficient());
+            m.put("support", s);
+        }
+        m.put("passes", r.passes());
+        m.put("notes", r.notes());
+        m.put("cautions", r.cautions());
+        return m;
+    }
+
+    private static void printText(PrintWriter out, CornerClearance r) {
+        ClearanceCase c = r.input();
+        String u = c.units().symbol();
+        int places = Math.max(1, Math.max(scale(c.filletMin()), scale(c.filletMax())));
+        String fillet = c.filletMin() == c.filletMax() ? "R " + Numbers.plain(c.filletMax())
+                : "R " + Numbers.fixed(c.filletMin(), places) + "–" + Numbers.fixed(c.filletMax(), places);
+        out.printf("Fillet %s %s against the mating part's %s%n", fillet, u, c.corner().describe());
+        out.printf("  relief     %s along the seat, %s up the shoulder%n", Numbers.fixed(r.reliefAlongSeat(), 3),
+                Numbers.fixed(r.reliefAlongShoulder(), 3));
+        out.printf("  admits     fillets up to %s %s (%s)%n", Numbers.fixed(r.allowedFilletMax(), 3), u, r.governing());
+        if (r.seats()) {
+            out.printf("  verdict    SEATS: margin %s %s at the largest fillet%n", Numbers.fixed(r.margin(), 3), u);
+        } else {
+            out.printf("  verdict    INTERFERES: the largest fillet exceeds what the corner admits by %s %s; the part will not seat flush%n",
+                    Numbers.fixed(-r.margin(), 3), u);
+        }
+        CornerClearance.ShoulderSupport s = r.support();
+        if (s != null) {
+            out.printf("  support    flat %s %s on the shoulder (from %s to %s)%s%n", Numbers.fixed(s.flat(), 3), u,
+                    Numbers.fixed(s.contactFrom(), 3), Numbers.fixed(s.contactTo(), 3),
+                    s.required() == null ? "" : (s.sufficient() ? ": meets" : ": LESS THAN") + " the required "
+                            + Numbers.plain(s.required()) + " " + u);
+        }
+        for (String n : r.notes()) out.println("  note: " + n);
+        for (String n : r.cautions()) out.println("  caution: " + n);
+    }
+
+    private static int scale(double v) {
+        return Math.max(0, new java.math.BigDecimal(Numbers.plain(v)).scale());
+    }
+}

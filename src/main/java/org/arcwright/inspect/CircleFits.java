@@ -1,0 +1,332 @@
+package org.arcwright.inspect;
+
+import org.arcwright.io.InputProblem;
+
+/**
+ * Circle fits to measured points.
+ *
+ * <ul>
+ *   <li>{@link #taubin}: algebraic fit of G. Taubin (IEEE PAMI 13, 1991), computed by Newton's
+ *       method on its characteristic polynomial as in N. Chernov, <i>Circular and Linear Regression</i>
+ *       (CRC, 2010), §5; one pass over centred moments. Nearly unbiased on short arcs, unlike Kåsa's.</li>
+ *   <li>{@link #leastSquares}: the geometric fit, minimising {@code Σ(|pᵢ - c| - r)²} by
+ *       Levenberg-Marquardt from the Taubin start (W. Gander, G. H. Golub, R. Strebel, BIT 34, 1994).</li>
+ *   <li>{@link #minimumZone}: the minimum-zone circle, by successive linear programmes: linearise the
+ *       distances about the current centre, solve {@code min (R - r)} subject to
+ *       {@code r <= dᵢ - uᵢ·δ <= R} with an active set ({@link ActiveSetLp}), move, repeat. The
+ *       linearisation is exact to first order, so the passes converge quadratically once the set of
+ *       extreme points settles (Chebyshev's alternation; see ADR 0301).</li>
+ * </ul>
+ *
+ * <p>All methods read the first {@code n} entries of {@code xs} and {@code ys}.
+ */
+public final class CircleFits {
+    private CircleFits() {}
+
+    /**
+     * Rejects point sets no circle can be fitted to: fewer than three distinct points, or all on a line.
+     *
+     * @throws InputProblem naming {@code field}
+     */
+    public static void requireCircular(double[] xs, double[] ys, int n, String field) {
+        if (n < 3) throw InputProblem.ofField(field, "a circle needs at least 3 points, got " + n);
+        int second = -1;
+        for (int i = 1; i < n && second < 0; i++) if (xs[i] != xs[0] || ys[i] != ys[0]) second = i;
+        if (second < 0) throw InputProblem.ofField(field, "all " + n + " points are the same point (duplicates); a circle needs 3 distinct points");
+        double mx = 0, my = 0;
+        for (int i = 0; i < n; i++) { mx += xs[i]; my += ys[i]; }
+        mx /= n; my /= n;
+        double sxx = 0, syy = 0, sxy = 0;
+        for (int i = 0; i < n; i++) {
+            double dx = xs[i] - mx, dy = ys[i] - my;
+            sxx += dx * dx; syy += dy * dy; sxy += dx * dy;
+        }
+        double tr = sxx + syy, det = sxx * syy - sxy * sxy;
+        double lmin = tr / 2 - Math.sqrt(Math.max(0, tr * tr / 4 - det));
+        if (lmin <= 1e-24 * tr) {
+            boolean dup = true;
+            for (int i = 0; i < n && dup; i++) {
+                if ((xs[i] != xs[0] || ys[i] != ys[0]) && (xs[i] != xs[second] || ys[i] != ys[second])) dup = false;
+            }
+            throw InputProblem.ofField(field, dup ? "only 2 distinct points (the rest are duplicates); a circle needs 3"
+                    : "the points are collinear; no circle fits them");
+        }
+    }
+
+    /** Taubin's algebraic circle (see the class comment). */
+    public static Circle taubin(double[] xs, double[] ys, int n) {
+        return taubin(xs, ys, 0, n);
+    }
+
+    /** Taubin's fit to the points {@code from..to-1}. */
+    public static Circle taubin(double[] xs, double[] ys, int from, int to) {
+        int n = to - from;
+        double mx = 0, my = 0;
+        for (int i = from; i < to; i++) { mx += xs[i]; my += ys[i]; }
+        mx /= n; my /= n;
+        Circle c = taubinCentred(xs, ys, from, to, mx, my);
+        return c != null ? c : new Circle(Double.NaN, Double.NaN, Double.POSITIVE_INFINITY);
+    }
+
+    /** Taubin's fit given the centroid; null when the points are collinear or coincide. */
+    private static Circle taubinCentred(double[] xs, double[] ys, int from, int to, double mx, double my) {
+        int n = to - from;
+        double mxx = 0, myy = 0, mxy = 0, mxz = 0, myz = 0, mzz = 0;
+        for (int i = from; i < to; i++) {
+            double xi = xs[i] - mx, yi = ys[i] - my;
+            double zi = xi * xi + yi * yi;
+            mxy += xi * yi; mxx += xi * xi; myy += yi * yi;
+            mxz += xi * zi; myz += yi * zi; mzz += zi * zi;
+        }
+        mxx /= n; myy /= n; mxy /= n; mxz /= n; myz /= n; mzz /= n;
+        double mz = mxx + myy;
+        double covXY = mxx * myy - mxy * mxy;
+        // collinear (or all one point): the smaller eigenvalue of the scatter vanishes
+        double lmin = mz / 2 - Math.sqrt(Math.max(0, mz * mz / 4 - covXY));
+        if (!(lmin > 1e-24 * mz)) return null;
+        double varZ = mzz - mz * mz;
+        double a3 = 4 * mz;
+        double a2 = -3 * mz * mz - mzz;
+        double a1 = varZ * mz + 4 * covXY * mz - mxz * mxz - myz * myz;
+        double a0 = mxz * (mxz * myy - myz * mxy) + myz * (myz * mxx - mxz * mxy) - varZ * covXY;
+        double a22 = a2 + a2, a33 = a3 + a3 + a3;
+        double x = 0, y = a0;
+        for (int iter = 0; iter < 99; iter++) {
+            double dy = a1 + x * (a22 + a33 * x);
+            double xnew = x - y / dy;
+            if (xnew == x || !Double.isFinite(xnew)) break;
+            double ynew = a0 + xnew * (a1 + xnew * (a2 + xnew * a3));
+            if (Math.abs(ynew) >= Math.abs(y)) break;
+            x = xnew;
+            y = ynew;
+        }
+        double det = x * x - x * mz + covXY;
+        double xc = (mxz * (myy - x) - myz * mxy) / det / 2;
+        double yc = (myz * (mxx - x) - mxz * mxy) / det / 2;
+        return new Circle(xc + mx, yc + my, Math.sqrt(xc * xc + yc * yc + mz));
+    }
+
+    /** The geometric least-squares circle (see the class comment). */
+    public static LeastSquaresCircle leastSquares(double[] xs, double[] ys, int n) {
+        if (n < 3) throw InputProblem.ofField("points", "a circle needs at least 3 points, got " + n);
+        double mx = 0, my = 0;
+        for (int i = 0; i < n; i++) { mx += xs[i]; my += ys[i]; }
+        mx /= n; my /= n;
+        Circle start = taubinCentred(xs, ys, 0, n, mx, my);
+        if (start == null) {
+            requireCircular(xs, ys, n, "points");
+            throw InputProblem.ofField("points", "the points are collinear; no circle fits them");
+        }
+        double a = start.cx() - mx, b = start.cy() - my, r = start.r();
+        double[] ne = new double[9];
+        double cost = normal(xs, ys, n, mx, my, a, b, r, ne);
+        double lambda = 1e-6; // the Taubin start is close: begin nearly Gauss-Newton
+        int it = 0;
+        for (; it < 200; it++) {
+            double[][] m = new double[3][4];
+            double[] jtj = {ne[0], ne[1], ne[2], ne[1], ne[3], ne[4], ne[2], ne[4], ne[5]};
+            for (int i = 0; i < 3; i++) {
+                for (int j = 0; j < 3; j++) m[i][j] = jtj[i * 3 + j];
+                m[i][i] += lambda * jtj[i * 3 + i];
+                m[i][3] = -ne[6 + i];
+            }
+            double[] d;
+            try {
+                d = Gauss.solve(m);
+            } catch (IllegalStateException e) {
+                break;
+            }
+            double stepSize = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]);
+            double scale = Math.abs(r) + Math.hypot(a, b);
+            if (stepSize <= 1e-14 * scale) break;
+            double[] trial = new double[9];
+            double tc = normal(xs, ys, n, mx, my, a + d[0], b + d[1], r + d[2], trial);
+            // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
+            if (tc <= cost * (1 + 1e-15)) {
+                a += d[0]; b += d[1]; r += d[2];
+                cost = tc;
+                ne = trial;
+                lambda = Math.max(lambda / 10, 1e-12);
+                // convergence is at least linear with a small ratio (residual / radius): after a step
+                // of 1e-10 the remaining error is far below 1e-12
+                if (stepSize <= 1e-10 * scale) { it++; break; }
+            } else {
+                lambda *= 10;
+                if (lambda > 1e12) break;
+            }
+        }
+        return new LeastSquaresCircle(new Circle(a + mx, b + my, Math.abs(r)), Math.sqrt(cost / n), it);
+    }
+
+    /** Sum of squared residuals; fills JᵀJ (upper: 0..5) and Jᵀe (6..8). */
+    private static double normal(double[] xs, double[] ys, int n, double mx, double my, double a, double b, double r,
+                                 double[] ne) {
+        double s00 = 0, s01 = 0, s02 = 0, s11 = 0, s12 = 0, s22 = 0, g0 = 0, g1 = 0, g2 = 0, cost = 0;
+        for (int i = 0; i < n; i++) {
+            double dx = xs[i] - mx - a, dy = ys[i] - my - b;
+            double d = Math.sqrt(dx * dx + dy * dy);
+            double e = d - r;
+            double inv = d > 0 ? -1 / d : 0;
+            double j0 = dx * inv, j1 = dy * inv;
+            s00 += j0 * j0; s01 += j0 * j1; s02 -= j0; s11 += j1 * j1; s12 -= j1; s22 += 1;
+            g0 += j0 * e; g1 += j1 * e; g2 -= e;
+            cost += e * e;
+        }
+        ne[0] = s00; ne[1] = s01; ne[2] = s02; ne[3] = s11; ne[4] = s12; ne[5] = s22;
+        ne[6] = g0; ne[7] = g1; ne[8] = g2;
+        return cost;
+    }
+
+    /** Above this many points, the minimum zone first converges on an evenly thinned subset. */
+    private static final int COARSE_LIMIT = 20_000;
+
+    /** The minimum-zone circle, started from the least-squares centre. */
+    public static MinimumZoneCircle minimumZone(double[] xs, double[] ys, int n) {
+        requireCircular(xs, ys, n, "points");
+        return minimumZone(xs, ys, n, leastSquares(xs, ys, n).circle());
+    }
+
+    /** The minimum-zone circle, started from {@code start}. */
+    public static MinimumZoneCircle minimumZone(double[] xs, double[] ys, int n, Circle start) {
+        requireCircular(xs, ys, n, "points");
+        if (n > COARSE_LIMIT) {
+            // converge on every k-th point first; the full set then needs a pass or two
+            int k = n / COARSE_LIMIT + 1, m = (n + k - 1) / k;
+            double[] sx = new double[m], sy = new double[m];
+            for (int i = 0, j = 0; i < n; i += k, j++) { sx[j] = xs[i]; sy[j] = ys[i]; }
+            MinimumZoneCircle coarse = minimumZone(sx, sy, m, start);
+            start = new Circle(coarse.cx(), coarse.cy(), (coarse.inner() + coarse.outer()) / 2);
+        }
+        double cx = start.cx(), cy = start.cy();
+        double scale = Math.max(start.r(), 1e-300);
+        double[] d = new double[n], ux = new double[n], uy = new double[n];
+        double trust = n > COARSE_LIMIT ? scale / 1000 : scale;
+        double width = distances(xs, ys, n, cx, cy, d, ux, uy);
+        int[] working = initialSectors(xs, ys, n, cx, cy, d);
+        int pass = 0;
+        while (pass < 100) {
+            pass++;
+            ZoneLp lp = new ZoneLp(n, d, ux, uy, trust);
+            int[] init = new int[working.length + 4];
+            for (int k = 0; k < 4; k++) init[k] = 2 * n + k;
+            System.arraycopy(working, 0, init, 4, working.length);
+            ActiveSetLp.Result res = ActiveSetLp.solve(lp, dedupe(init), 1e-14 * scale);
+            double dx = res.z()[0], dy = res.z()[1];
+            double[] nd = new double[n], nux = new double[n], nuy = new double[n];
+            double nw = distances(xs, ys, n, cx + dx, cy + dy, nd, nux, nuy);
+            working = pointConstraints(res.working(), n);
+            double step = Math.hypot(dx, dy);
+            if (nw <= width || step <= 1e-14 * scale) {
+                cx += dx; cy += dy;
+                boolean done = step <= 1e-9 * scale || width - nw <= 1e-15 * scale;
+                width = Math.min(width, nw);
+                d = nd; ux = nux; uy = nuy;
+                if (done) break;
+                trust = Math.max(trust, 4 * step);
+            } else {
+                trust = step / 4;
+            }
+        }
+        double lo = Double.POSITIVE_INFINITY, hi = 0;
+        for (int i = 0; i < n; i++) {
+            double r = Math.hypot(xs[i] - cx, ys[i] - cy);
+            lo = Math.min(lo, r);
+            hi = Math.max(hi, r);
+        }
+        return new MinimumZoneCircle(cx, cy, lo, hi, pass);
+    }
+
+    private static int[] dedupe(int[] v) {
+        return java.util.Arrays.stream(v).distinct().toArray();
+    }
+
+    /** Keeps the point constraints of a working set, dropping the box. */
+    private static int[] pointConstraints(int[] working, int n) {
+        return java.util.Arrays.stream(working).filter(j -> j < 2 * n).toArray();
+    }
+
+    private static double distances(double[] xs, double[] ys, int n, double cx, double cy, double[] d, double[] ux,
+                                     double[] uy) {
+        double lo = Double.POSITIVE_INFINITY, hi = 0;
+        for (int i = 0; i < n; i++) {
+            double dx = xs[i] - cx, dy = ys[i] - cy;
+            double r = Math.sqrt(dx * dx + dy * dy);
+            d[i] = r;
+            ux[i] = r > 0 ? dx / r : 0;
+            uy[i] = r > 0 ? dy / r : 0;
+            if (r < lo) lo = r;
+            if (r > hi) hi = r;
+        }
+        return hi - lo;
+    }
+
+    /** The nearest and farthest point in each of 16 angular sectors about the centre. */
+    private static int[] initialSectors(double[] xs, double[] ys, int n, double cx, double cy, double[] d) {
+        int sectors = 16;
+        int[] far = new int[sectors], near = new int[sectors];
+        java.util.Arrays.fill(far, -1);
+        java.util.Arrays.fill(near, -1);
+        for (int i = 0; i < n; i++) {
+            double ang = Math.atan2(ys[i] - cy, xs[i] - cx);
+            int s = (int) ((ang + Math.PI) / (2 * Math.PI) * sectors);
+            if (s >= sectors) s = sectors - 1;
+            if (far[s] < 0 || d[i] > d[far[s]]) far[s] = i;
+            if (near[s] < 0 || d[i] < d[near[s]]) near[s] = i;
+        }
+        int[] out = new int[2 * sectors];
+        int k = 0;
+        for (int s = 0; s < sectors; s++) {
+            if (far[s] >= 0) out[k++] = far[s];
+            if (near[s] >= 0) out[k++] = n + near[s];
+        }
+        return java.util.Arrays.copyOf(out, k);
+    }
+
+    /**
+     * The linearised minimum-zone problem: variables (δx, δy, r, R), minimise R - r, subject to
+     * {@code dᵢ - uᵢ·δ <= R} (constraints 0..n-1), {@code r <= dᵢ - uᵢ·δ} (n..2n-1), and a box
+     * {@code |δ| <= trust} (2n..2n+3).
+     */
+    private static final class ZoneLp implements ActiveSetLp.Problem {
+        private final int n;
+        private final double[] d, ux, uy;
+        private final double trust;
+        private static final double[] OBJECTIVE = {0, 0, -1, 1};
+
+        ZoneLp(int n, double[] d, double[] ux, double[] uy, double trust) {
+            this.n = n; this.d = d; this.ux = ux; this.uy = uy; this.trust = trust;
+        }
+
+        @Override public int variables() { return 4; }
+        @Override public int constraints() { return 2 * n + 4; }
+        @Override public double[] objective() { return OBJECTIVE; }
+
+        @Override
+        public double row(int j, double[] row) {
+            java.util.Arrays.fill(row, 0);
+            if (j < n) {
+                row[0] = -ux[j]; row[1] = -uy[j]; row[3] = -1;
+                return -d[j];
+            }
+            if (j < 2 * n) {
+                int i = j - n;
+                row[0] = ux[i]; row[1] = uy[i]; row[2] = 1;
+                return d[i];
+            }
+            int k = j - 2 * n;
+            row[k / 2] = (k % 2 == 0) ? 1 : -1;
+            return trust;
+        }
+
+        @Override
+        public double violation(int j, double[] z) {
+            if (j < n) return -ux[j] * z[0] - uy[j] * z[1] - z[3] + d[j];
+            if (j < 2 * n) {
+                int i = j - n;
+                return ux[i] * z[0] + uy[i] * z[1] + z[2] - d[i];
+            }
+            int k = j - 2 * n;
+            return ((k % 2 == 0) ? z[k / 2] : -z[k / 2]) - trust;
+        }
+    }
+}

@@ -1,0 +1,14 @@
+package org.arcwright.inspect;
+
+/**
+ * One row of the side-by-side comparison: the same points under another callout.
+ *
+ * @param name what kind of control (R, CR, profile located, ...)
+ * @param callout the callout judged, as text
+ * @param derived true when the callout was derived from the file's one rather than stated
+ * @param pass the verdict
+ * @param figure the deciding figure, as text (envelope, local radii, zone needed)
+ * @param required the smallest zone or tightest limits the points would meet, as a number where one
+ *     exists (NaN otherwise)
+ */
+public record Comparison(String name, String callout, boolean derived, boolean pass, String figure, double required) {}

@@ -1,0 +1,34 @@
+package org.arcwright.worksheet;
+
+import com.fasterxml.jackson.annotation.JsonCreator;
+import com.fasterxml.jackson.annotation.JsonInclude;
+import com.fasterxml.jackson.annotation.JsonProperty;
+import java.util.Map;
+
+/**
+ * The outcome of inspecting one measured contour of a feature, kept with the worksheet.
+ *
+ * @param verdict {@code pass} or {@code fail}
+ * @param source the points file or inspection file it came from
+ * @param measuredOn ISO date of the measurement, or null
+ * @param figures the key figures (envelope, required zone, fitted radius...)
+ */
+@JsonInclude(JsonInclude.Include.NON_NULL)
+public record InspectionRecord(String verdict, String source, String measuredOn, Map<String, Object> figures) {
+
+    @JsonCreator
+    public InspectionRecord(@JsonProperty(value = "verdict", required = true) String verdict,
+                            @JsonProperty("source") String source,
+                            @JsonProperty("measuredOn") String measuredOn,
+                            @JsonProperty("figures") Map<String, Object> figures) {
+        if (!"pass".equals(verdict) && !"fail".equals(verdict)) {
+            throw new IllegalArgumentException("verdict must be pass or fail, got '" + verdict + "'");
+        }
+        this.verdict = verdict;
+        this.source = source;
+        this.measuredOn = measuredOn;
+        this.figures = figures == null ? Map.of() : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(figures));
+    }
+
+    public boolean passed() { return "pass".equals(verdict); }
+}

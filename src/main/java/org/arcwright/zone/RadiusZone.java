@@ -1,0 +1,160 @@
+package org.arcwright.zone;
+
+import org.arcwright.io.InputProblem;
+
+/**
+ * The zone of a radius tolerance at a corner: bounded by the arcs of the smallest and the largest
+ * radius, each tangent to both adjacent surfaces (ASME Y14.5-2018, radius definition; clause number
+ * from memory). It extends between the tangent points of the largest arc; points beyond them belong
+ * to the adjacent surfaces and are not judged here.
+ *
+ * <h2>What a point allows</h2>
+ * Every point strictly inside the angle lies on exactly one blend tangent to both legs
+ * ({@link Corner#blendRadiusThrough}), and the blends are nested, so the point lies between the limit
+ * arcs exactly when {@code min <= ρ <= max}. A point on a leg (within the resolution) lies on every
+ * contour whose tangent point is beyond it, so it allows {@code 0 <= ρ <= x·tan α}, with {@code x}
+ * its distance from the vertex along the leg. A point outside a leg by more than the resolution lies
+ * beyond even the sharp corner: no radius allows it.
+ *
+ * <h2>Resolution</h2>
+ * The zone narrows to nothing at the tangent points, so points are classified against the leg lines
+ * with a stated resolution (default 1e-6 of the drawing unit): within it a point may be taken as on
+ * the leg or where it lies, whichever allows more. Limits are compared with the same slack.
+ *
+ * @param corner the adjacent surfaces
+ * @param min smallest radius allowed, >= 0
+ * @param max largest radius allowed, >= min
+ * @param resolution distance below which a point counts as on a leg, > 0
+ */
+public final class RadiusZone {
+    private final Corner corner;
+    private final double min, max, resolution;
+    private final double vx, vy, bisX, bisY, s1, s2, cot2;
+
+    public RadiusZone(Corner corner, double min, double max, double resolution) {
+        java.util.Objects.requireNonNull(corner, "corner");
+        if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + min);
+        if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + max);
+        if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + max + " < " + min + ")");
+        if (!(resolution > 0)) throw InputProblem.ofField("resolution", "must be above zero");
+        this.corner = corner;
+        this.min = min;
+        this.max = max;
+        this.resolution = resolution;
+        double a = corner.halfAngle();
+        this.vx = corner.vertex().x();
+        this.vy = corner.vertex().y();
+        this.bisX = corner.bisector().x();
+        this.bisY = corner.bisector().y();
+        this.s1 = 1 / Math.sin(a);
+        this.s2 = s1 * s1;
+        this.cot2 = 1 / (Math.tan(a) * Math.tan(a));
+    }
+
+    public Corner corner() { return corner; }
+
+    /** Smallest radius allowed. */
+    public double min() { return min; }
+
+    /** Largest radius allowed. */
+    public double max() { return max; }
+
+    /** Distance below which a point counts as on a leg. */
+    public double resolution() { return resolution; }
+
+    /**
+     * Evaluates points against the zone.
+     *
+     * @throws InputProblem when no point lies within the zone's extent
+     */
+    public RadiusEnvelope evaluate(double[] xs, double[] ys, int n) {
+        double alpha = corner.halfAngle();
+        double tanA = Math.tan(alpha);
+        double reach = max / tanA + resolution;
+        Point2 v = corner.vertex(), a = corner.legA(), b = corner.legB();
+        Point2 na = corner.inwardNormalA(), nb = corner.inwardNormalB();
+        double smallest = Double.POSITIVE_INFINITY, largest = 0;
+        int inside = 0, outside = 0, onLegs = 0, worst = -1;
+        double worstExcess = Double.NEGATIVE_INFINITY;
+        double[] lo = new double[1], hi = new double[1];
+        for (int i = 0; i < n; i++) {
+            double qx = xs[i] - v.x(), qy = ys[i] - v.y();
+            double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
+            if (xa > reach || xb > reach) continue;
+            inside++;
+            double ha = qx * na.x() + qy * na.y(), hb = qx * nb.x() + qy * nb.y();
+            double excess;
+            if (ha < -resolution || hb < -resolution) {
+                outside++;
+                // beyond the sharp corner: counted as a radius below zero by the depth outside
+                double depth = -Math.min(ha, hb);
+                excess = min + depth;
+                smallest = Double.NaN;
+            } else {
+                allowed(xs[i], ys[i], ha, hb, xa, xb, tanA, lo, hi);
+                if (lo[0] == 0 && hi[0] != lo[0]) onLegs++;
+                if (!Double.isNaN(smallest)) smallest = Math.min(smallest, hi[0]);
+                largest = Math.max(largest, lo[0]);
+                excess = Math.max(min - hi[0], lo[0] - max);
+            }
+            if (excess > worstExcess) {
+                worstExcess = excess;
+                worst = i;
+            }
+        }
+        if (inside == 0) {
+            throw InputProblem.ofField("points", "no point lies within the radius zone's extent (between the tangent points of the "
+                    + max + " arc, " + fmt(reach) + " from the vertex along each leg)");
+        }
+        boolean pass = outside == 0 && smallest >= min - resolution && largest <= max + resolution;
+        return new RadiusEnvelope(smallest, largest, inside, onLegs, outside, n - inside, pass, worst, worstExcess,
+                resolution);
+    }
+
+    /**
+     * How far one point's radius lies beyond the limits (radius units; negative: inside by that
+     * much); NaN for a point beyond the zone's extent.
+     */
+    public double excess(double x, double y) {
+        double tanA = Math.tan(corner.halfAngle());
+        double reach = max / tanA + resolution;
+        Point2 v = corner.vertex(), a = corner.legA(), b = corner.legB();
+        Point2 na = corner.inwardNormalA(), nb = corner.inwardNormalB();
+        double qx = x - v.x(), qy = y - v.y();
+        double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
+        if (xa > reach || xb > reach) return Double.NaN;
+        double ha = qx * na.x() + qy * na.y(), hb = qx * nb.x() + qy * nb.y();
+        if (ha < -resolution || hb < -resolution) return min - Math.min(ha, hb);
+        double[] lo = new double[1], hi = new double[1];
+        allowed(x, y, ha, hb, xa, xb, tanA, lo, hi);
+        return Math.max(min - hi[0], lo[0] - max);
+    }
+
+    private void allowed(double x, double y, double ha, double hb, double xa, double xb, double tanA,
+                         double[] lo, double[] hi) {
+        if (ha <= resolution || hb <= resolution) {
+            double h = Double.POSITIVE_INFINITY;
+            if (ha <= resolution) h = Math.min(h, Math.max(0, xa) * tanA);
+            if (hb <= resolution) h = Math.min(h, Math.max(0, xb) * tanA);
+            // within the resolution of a leg the point may be taken as on it, or as where it is
+            if (ha > 0 && hb > 0) h = Math.max(h, blend(x, y));
+            lo[0] = 0;
+            hi[0] = h;
+        } else {
+            double r = blend(x, y);
+            lo[0] = r;
+            hi[0] = r;
+        }
+    }
+
+    /** {@link Corner#blendRadiusThrough} with the corner's constants computed once. */
+    private double blend(double x, double y) {
+        double qx = x - vx, qy = y - vy;
+        double qu = qx * bisX + qy * bisY;
+        double q2 = qx * qx + qy * qy;
+        double disc = Math.max(0, s2 * qu * qu - cot2 * q2);
+        return (s1 * qu + Math.sqrt(disc)) / cot2;
+    }
+
+    private static String fmt(double v) { return String.format(java.util.Locale.ROOT, "%.6g", v); }
+}

@@ -1,0 +1,157 @@
+package org.arcwright.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+class InspectCommandTest {
+    @TempDir
+    Path dir;
+
+    private final StringWriter out = new StringWriter(), err = new StringWriter();
+
+    private int run(String... args) {
+        return Cli.commandLine(new PrintWriter(out, true), new PrintWriter(err, true)).execute(args);
+    }
+
+    private static final String CORNER = "\"units\": \"mm\", \"corner\": {\"vertex\": [0, 0], \"legA\": [1, 0], \"legB\": [0, 1], \"kind\": \"round\"}, \"nominalRadius\": 2";
+
+    /** An exact 2.05 blend, 31 points on the arc and 5 on each leg. */
+    private static String arcPoints(double r) {
+        StringBuilder sb = new StringBuilder("[");
+        for (int i = 0; i < 5; i++) sb.append("[").append(6 - i * (6 - r) / 5).append(", 0], ");
+        for (int i = 0; i <= 30; i++) {
+            double t = -Math.PI / 2 - Math.PI / 2 * i / 30;
+            sb.append("[").append(r + r * Math.cos(t)).append(", ").append(r + r * Math.sin(t)).append("], ");
+        }
+        for (int i = 1; i <= 5; i++) sb.append("[0, ").append(r + i * (6 - r) / 5).append("]").append(i < 5 ? ", " : "");
+        return sb.append("]").toString();
+    }
+
+    private Path file(String name, String json) throws IOException {
+        Path p = dir.resolve(name);
+        Files.writeString(p, json);
+        return p;
+    }
+
+    @Test
+    void passingControlledRadiusExitsZeroWithEnvelopeAndLocalRadii() throws IOException {
+        Path f = file("cr.json", "{" + CORNER + ", \"callout\": {\"type\": \"controlled-radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": "
+                + arcPoints(2.05) + "}");
+        assertThat(run("inspect", f.toString(), "--format", "json")).isEqualTo(0);
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertThat(j.get("verdict").asText()).isEqualTo("pass");
+        assertThat(j.at("/envelope/smallest").asDouble()).isBetween(2.05 - 1e-9, 2.05 + 1e-9);
+        assertThat(j.at("/envelope/largest").asDouble()).isBetween(2.05 - 1e-9, 2.05 + 1e-9);
+        assertThat(j.at("/local/min").asDouble()).isBetween(2.05 - 1e-9, 2.05 + 1e-9);
+        assertThat(j.get("reversals").size()).isZero();
+        assertThat(j.at("/fits/leastSquares/radius").asDouble()).isBetween(2.05 - 1e-9, 2.05 + 1e-9);
+        assertThat(j.at("/fits/minimumZone/inner").isNumber()).isTrue();
+        assertThat(j.at("/tangency/stepA").asDouble()).isLessThan(1e-9);
+        assertThat(j.at("/worst/index").isInt()).isTrue();
+    }
+
+    @Test
+    void failingRadiusExitsOne() throws IOException {
+        Path f = file("r.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 2.1, \"max\": 2.3}, \"points\": "
+                + arcPoints(2.05) + "}");
+        assertThat(run("inspect", f.toString())).isEqualTo(1);
+        assertThat(out.toString()).startsWith("FAIL").contains("smallest 2.05");
+    }
+
+    @Test
+    void profileJsonReportsRequiredZoneRegistrationAndDeviations() throws IOException {
+        Path f = file("p.json", "{" + CORNER + ", \"callout\": {\"type\": \"profile\", \"zone\": 0.2, \"outward\": 0.05, \"free\": [\"x\", \"y\"]}, \"points\": "
+                + arcPoints(2.05) + "}");
+        assertThat(run("inspect", f.toString(), "--format", "json")).isEqualTo(0);
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertThat(j.get("requiredZone").isNumber()).isTrue();
+        assertThat(j.at("/registration/x").isNumber()).isTrue();
+        assertThat(j.at("/registration/rotation").asDouble()).isZero();
+        assertThat(j.get("maxOutward").isNumber()).isTrue();
+        assertThat(j.get("maxInward").isNumber()).isTrue();
+        assertThat(j.get("isoOffset").asDouble()).isCloseTo(-0.05, org.assertj.core.api.Assertions.within(1e-12));
+    }
+
+    @Test
+    void compositeReportsEachTierAndCompareListsEveryControl() throws IOException {
+        Path f = file("c.json", "{" + CORNER + ", \"callout\": {\"type\": \"composite-profile\", \"tiers\": [{\"zone\": 0.2, \"free\": []},"
+                + " {\"zone\": 0.05, \"free\": [\"x\", \"y\", \"rotation\"]}]}, \"points\": " + arcPoints(2.05) + "}");
+        assertThat(run("inspect", f.toString(), "--format", "json", "--compare")).isEqualTo(0);
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertThat(j.get("tiers").size()).isEqualTo(2);
+        assertThat(j.at("/tiers/0/verdict").asText()).isEqualTo("pass");
+        assertThat(j.at("/tiers/1/requiredZone").isNumber()).isTrue();
+        assertThat(j.get("compare").size()).isEqualTo(5);
+    }
+
+    @Test
+    void pointsFileIsReadRelativeToTheInspectionFileAndPlotIsWritten() throws IOException {
+        Files.createDirectories(dir.resolve("data"));
+        StringBuilder csv = new StringBuilder("x,y\n");
+        for (JsonNode p : new ObjectMapper().readTree(arcPoints(2.05))) csv.append(p.get(0).asDouble()).append(',').append(p.get(1).asDouble()).append('\n');
+        Files.writeString(dir.resolve("data/section.csv"), csv);
+        Path f = file("data/run.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"pointsFile\": \"section.csv\"}");
+        Path png = dir.resolve("plot.png"), svg = dir.resolve("plot.svg");
+        assertThat(run("inspect", f.toString(), "--plot", png.toString())).isEqualTo(0);
+        assertThat(run("inspect", f.toString(), "--plot", svg.toString())).isEqualTo(0);
+        assertThat(Files.size(png)).isGreaterThan(1000);
+        assertThat(Files.readString(svg)).contains("<svg").contains("PASS");
+    }
+
+    @Test
+    void generalContourFileIsJudgedForProfile() throws IOException {
+        String contour = "\"units\": \"mm\", \"contour\": {\"air\": \"left\", \"segments\": ["
+                + "{\"type\": \"line\", \"from\": [6, 0], \"to\": [2, 0]},"
+                + "{\"type\": \"arc\", \"from\": [2, 0], \"to\": [0, 2], \"centre\": [2, 2], \"turn\": \"cw\"},"
+                + "{\"type\": \"line\", \"from\": [0, 2], \"to\": [0, 6]}]}";
+        Path f = file("g.json", "{" + contour + ", \"callout\": {\"type\": \"profile\", \"zone\": 0.2}, \"points\": " + arcPoints(2.05) + "}");
+        assertThat(run("inspect", f.toString(), "--format", "json")).isEqualTo(0);
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        // the 2.05 blend lies inside (toward the material) of the 2.0 nominal of a round: negative deviations
+        assertThat(j.get("maxInward").asDouble()).isPositive();
+        assertThat(j.has("fits")).isFalse();
+    }
+
+    @Test
+    void csvJunkLineIsBadInputNamingTheLine() throws IOException {
+        Files.writeString(dir.resolve("s.csv"), "x,y\n1,0\n0.5,0.1\nabc,2\n");
+        Path f = file("run.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"pointsFile\": \"s.csv\"}");
+        assertThat(run("inspect", f.toString())).isEqualTo(2);
+        assertThat(err.toString()).contains("s.csv:4:1: x: not a number: 'abc'");
+    }
+
+    @Test
+    void badInputExitsTwoWithALocatedMessage() throws IOException {
+        String[][] cases = {
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": []}", "no points"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": [[1, 0], [0, 1]]}", "too few"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": [[1, 0], [NaN, 1]]}", "NaN"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": [[1, 0], [\"a\", 1]]}", "points: [1]: x must be a number"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": -1, \"max\": 2.1}, \"points\": [[1, 0]]}", "min: must be zero or more"},
+                {"{\"units\": \"mm\", \"corner\": {\"vertex\": [0, 0], \"legA\": [1, 0], \"legB\": [-2, 0], \"kind\": \"round\"}, \"nominalRadius\": 2,"
+                        + " \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": [[1, 0], [2, 0], [3, 1]]}", "parallel"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": [[8, 0], [9, 0], [10, 0]]}", "extent"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": [[2, 0], [1.5, 0], [1, 0], [0.5, 0]]}", "blend"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"chamfer\"}, \"points\": [[1, 0]]}", "unknown callout type 'chamfer'"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": [[1, 0]], \"colour\": 1}", "unknown field 'colour'"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"profile\", \"zone\": 0.1, \"free\": [\"z\"]}, \"points\": [[1, 0]]}", "unknown freedom 'z'"},
+                {"{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": [[1, 0]", "bad.json:1:"},
+        };
+        for (String[] c : cases) {
+            out.getBuffer().setLength(0);
+            err.getBuffer().setLength(0);
+            Path f = file("bad.json", c[0]);
+            assertThat(run("inspect", f.toString())).as(c[1]).isEqualTo(2);
+            assertThat(err.toString()).as(c[0]).contains(c[1]).contains("bad.json");
+        }
+    }
+}

@@ -1,0 +1,77 @@
+package org.arcwright.inspect;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.Random;
+import org.arcwright.zone.Contour;
+import org.arcwright.zone.ProfileZone;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
+
+/**
+ * Arcwright's solvers against Apache Commons Math 3.6.1 (Maven Central) on the same problems:
+ * Levenberg-Marquardt for the geometric circle; SimplexSolver for the linear programmes of the
+ * minimum-zone circle and of Chebyshev registration. Issue 3 asks for agreement within 1e-9 relative.
+ */
+class ReferenceSolversTest {
+
+    private static double[][] noisyArc(long seed, int n) {
+        Random rnd = new Random(seed);
+        double cx = rnd.nextDouble() * 10 - 5, cy = rnd.nextDouble() * 10 - 5, r = 0.5 + rnd.nextDouble() * 20;
+        double start = rnd.nextDouble() * 2 * Math.PI, sweep = Math.toRadians(60 + rnd.nextDouble() * 300);
+        double[] xs = new double[n], ys = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = start + sweep * rnd.nextDouble();
+            double rr = r * (1 + 0.002 * rnd.nextGaussian());
+            xs[i] = cx + rr * Math.cos(t);
+            ys[i] = cy + rr * Math.sin(t);
+        }
+        return new double[][] {xs, ys};
+    }
+
+    @ParameterizedTest(name = "seed {0}")
+    @ValueSource(longs = {1, 2, 3, 4, 5, 6, 7, 8})
+    void leastSquaresCircleAgreesWithCommonsMathLevenbergMarquardt(long seed) {
+        int n = 20 + (int) (seed * 37 % 300);
+        double[][] p = noisyArc(seed, n);
+        LeastSquaresCircle ours = CircleFits.leastSquares(p[0], p[1], n);
+        Circle t = CircleFits.taubin(p[0], p[1], n);
+        double[] ref = ReferenceSolvers.leastSquaresCircle(p[0], p[1], n, new double[] {t.cx(), t.cy(), t.r()});
+        double r = ref[2];
+        assertThat(ours.circle().cx()).isCloseTo(ref[0], within(1e-9 * r));
+        assertThat(ours.circle().cy()).isCloseTo(ref[1], within(1e-9 * r));
+        assertThat(ours.circle().r()).isCloseTo(ref[2], within(1e-9 * r));
+    }
+
+    @ParameterizedTest(name = "seed {0}")
+    @ValueSource(longs = {11, 12, 13, 14, 15})
+    void minimumZoneCircleAgreesWithTheSameLinearProgrammesSolvedBySimplexSolver(long seed) {
+        int n = 100 + (int) (seed * 53 % 150);
+        double[][] p = noisyArc(seed, n);
+        LeastSquaresCircle ls = CircleFits.leastSquares(p[0], p[1], n);
+        MinimumZoneCircle ours = CircleFits.minimumZone(p[0], p[1], n, ls.circle());
+        double[] ref = ReferenceSolvers.minimumZoneCircle(p[0], p[1], n, ls.circle().cx(), ls.circle().cy(), 0.05 * ls.circle().r());
+        double r = ls.circle().r();
+        assertThat(ours.cx()).isCloseTo(ref[0], within(1e-9 * r));
+        assertThat(ours.cy()).isCloseTo(ref[1], within(1e-9 * r));
+        assertThat(ours.inner()).isCloseTo(ref[2], within(1e-9 * ref[2]));
+        assertThat(ours.outer()).isCloseTo(ref[3], within(1e-9 * ref[3]));
+        assertThat(ours.width()).isCloseTo(ref[3] - ref[2], within(1e-9 * (ref[3] - ref[2]) + 1e-12 * r));
+    }
+
+    @ParameterizedTest(name = "seed {0}")
+    @ValueSource(longs = {21, 22, 23})
+    void floatingRegistrationAgreesWithTheSameLinearProgrammesSolvedBySimplexSolver(long seed) {
+        Random rnd = new Random(seed);
+        PointSet pts = Sections.section(Sections.SQUARE, 2, 20, 120, 0.003, seed,
+                f -> 0.01 * Math.sin((2 + rnd.nextInt(3)) * Math.PI * f));
+        double[] xs = pts.x(), ys = pts.y();
+        for (int i = 0; i < xs.length; i++) { xs[i] += 0.02; ys[i] -= 0.01; }
+        PointSet moved = new PointSet(xs, ys, xs.length, "t");
+        Contour nominal = Sections.SQUARE.contour(2, 50);
+        ProfileOutcome ours = new ProfileCheck(nominal, 0, 0, 1e-6).evaluate(moved, ProfileZone.bilateral(0.1), Freedom.all(), false);
+        double ref = ReferenceSolvers.floatingZone(nominal, xs, ys, xs.length, 0.05);
+        assertThat(ours.requiredZone()).isCloseTo(ref, within(1e-9 * ref));
+    }
+}

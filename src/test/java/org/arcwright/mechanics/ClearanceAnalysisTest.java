@@ -1,0 +1,133 @@
+package org.arcwright.mechanics;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import net.jqwik.api.Assume;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.DoubleRange;
+import org.arcwright.io.InputProblem;
+import org.arcwright.pack.PackStack;
+import org.arcwright.tolerance.Units;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+/** Whether the largest fillet lets a mating part seat flush against the shoulder. */
+class ClearanceAnalysisTest {
+    private final ClearanceAnalysis analysis =
+            new ClearanceAnalysis(BearingSeatTable.load(PackStack.builtIn(), BearingSeatTable.BUILT_IN_ID));
+
+    private CornerClearance check(double rMin, double rMax, MatingCorner corner) {
+        return analysis.check(new ClearanceCase(Units.MM, rMin, rMax, corner, null, 0, null));
+    }
+
+    @Test
+    void equalLegChamferAdmitsAFilletUpToItsLeg() {
+        CornerClearance ok = check(0.8, 1.0, new MatingCorner.Chamfer(1.0, 45));
+        assertThat(ok.seats()).isTrue();
+        assertThat(ok.margin()).isCloseTo(0, within(1e-12));
+        CornerClearance bad = check(0.8, 1.1, new MatingCorner.Chamfer(1.0, 45));
+        assertThat(bad.seats()).isFalse();
+        assertThat(bad.margin()).isCloseTo(-0.1, within(1e-12));
+    }
+
+    @Test
+    void shallowChamferIsLimitedByItsShortLegUpTheShoulder() {
+        CornerClearance c = check(0.5, 0.8, new MatingCorner.Chamfer(1.5, 30));
+        // 1.5 × tan 30° = 0.866
+        assertThat(c.reliefAlongShoulder()).isCloseTo(0.8660, within(1e-4));
+        assertThat(c.allowedFilletMax()).isCloseTo(0.8660, within(1e-4));
+        assertThat(c.governing()).contains("up the shoulder");
+        assertThat(c.seats()).isTrue();
+    }
+
+    @Test
+    void mating_radius_must_be_at_least_the_fillet_maximum() {
+        assertThat(check(1.2, 1.5, new MatingCorner.Radius(1.5)).seats()).isTrue();
+        CornerClearance bad = check(1.2, 1.6, new MatingCorner.Radius(1.5));
+        assertThat(bad.seats()).isFalse();
+        assertThat(bad.margin()).isCloseTo(-0.1, within(1e-12));
+    }
+
+    /**
+     * Independent check of the derived condition: sample the fillet's material (the corner square
+     * outside the fillet circle) and test each point against the chamfer's relief triangle. The part
+     * seats exactly when no sample lies outside.
+     */
+    @Property(tries = 400, seed = "20261201")
+    void seatsExactlyWhenEveryPointOfTheFilletLiesInTheChamferRelief(
+            @ForAll @DoubleRange(min = 0.2, max = 3) double leg,
+            @ForAll @DoubleRange(min = 10, max = 80) double angle,
+            @ForAll @DoubleRange(min = 0.1, max = 3) double rMax) {
+        MatingCorner.Chamfer ch = new MatingCorner.Chamfer(leg, angle);
+        CornerClearance c = check(rMax, rMax, ch);
+        Assume.that(Math.abs(c.margin()) > 0.01 * rMax);
+        double a = ch.alongSeat();
+        double b = ch.alongShoulder();
+        boolean allInside = true;
+        int n = 120;
+        for (int i = 0; i <= n && allInside; i++) {
+            for (int j = 0; j <= n; j++) {
+                double x = -rMax + rMax * i / n; // along the seat, corner at 0
+                double y = rMax * j / n;         // up the shoulder
+                boolean material = (x + rMax) * (x + rMax) + (y - rMax) * (y - rMax) >= rMax * rMax;
+                if (material && -x / a + y / b > 1 + 1e-9) {
+                    allInside = false;
+                    break;
+                }
+            }
+        }
+        assertThat(c.seats()).isEqualTo(allInside);
+    }
+
+    /** Bearing seat table (makers' catalogues, consistent with ISO 582; from memory): 1.5 -> 1.5, 2.1 -> 2, 3 -> 2.5. */
+    @ParameterizedTest(name = "r_s min {0} -> fillet max {1}")
+    @CsvSource({"1.5, 1.5", "2.1, 2", "3, 2.5", "1.1, 1", "0.3, 0.3", "7.5, 6"})
+    void bearingSeatAdmitsTheTabulatedFillet(double chamferMin, double filletMax) {
+        CornerClearance c = check(0.5 * filletMax, filletMax, new MatingCorner.Bearing(chamferMin));
+        assertThat(c.allowedFilletMax()).isEqualTo(filletMax);
+        assertThat(c.seats()).isTrue();
+        assertThat(check(0.5 * filletMax, filletMax + 0.1, new MatingCorner.Bearing(chamferMin)).seats()).isFalse();
+    }
+
+    @Test
+    void bearingInInchUnitsConvertsTheTableFromMillimetres() {
+        CornerClearance c = analysis.check(new ClearanceCase(Units.INCH, 0.05, 0.075, new MatingCorner.Bearing(2.1), null, 0, null));
+        assertThat(c.allowedFilletMax()).isCloseTo(2.0 / 25.4, within(1e-12));
+        assertThat(c.seats()).isTrue();
+    }
+
+    @Test
+    void unlistedBearingChamferUsesTheNextSmallerRowAndSaysSo() {
+        CornerClearance c = check(0.5, 1.0, new MatingCorner.Bearing(1.8));
+        assertThat(c.allowedFilletMax()).isEqualTo(1.5);
+        assertThat(c.notes()).anyMatch(n -> n.contains("not a listed chamfer dimension"));
+    }
+
+    @Test
+    void shoulderSupportIsTheFaceAboveTheFilletAndTheRelief() {
+        CornerClearance c = analysis.check(new ClearanceCase(Units.MM, 0.6, 0.8, new MatingCorner.Chamfer(1.0, 45),
+                4.0, 0.5, 3.0));
+        assertThat(c.support().contactFrom()).isCloseTo(1.0, within(1e-12));
+        assertThat(c.support().contactTo()).isEqualTo(3.5);
+        assertThat(c.support().flat()).isCloseTo(2.5, within(1e-12));
+        assertThat(c.support().sufficient()).isFalse();
+        assertThat(c.seats()).isTrue();
+        assertThat(c.passes()).isFalse();
+    }
+
+    @Test
+    void rejectsBadCorners() {
+        assertThatThrownBy(() -> new MatingCorner.Chamfer(1, 90)).isInstanceOf(InputProblem.class)
+                .hasMessageContaining("mating.angle");
+        assertThatThrownBy(() -> new MatingCorner.Radius(-1)).isInstanceOf(InputProblem.class)
+                .hasMessageContaining("mating.rMin");
+        assertThatThrownBy(() -> check(1.2, 1.0, new MatingCorner.Radius(2))).isInstanceOf(InputProblem.class)
+                .hasMessageContaining("fillet.rMin");
+        assertThatThrownBy(() -> check(0.01, 0.02, new MatingCorner.Bearing(0.01))).isInstanceOf(InputProblem.class)
+                .hasMessageContaining("below the table's smallest");
+    }
+}

@@ -1,0 +1,82 @@
+package org.arcwright.render;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.awt.image.BufferedImage;
+import java.io.ByteArrayInputStream;
+import java.io.IOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import javax.imageio.ImageIO;
+import org.arcwright.inspect.InspectionFiles;
+import org.arcwright.inspect.InspectionResult;
+import org.arcwright.inspect.Inspector;
+import org.arcwright.io.JsonFiles;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * The plot's content against golden files: every label drawn and how many points got each colour.
+ * Positions depend on the fonts installed, so they are left out. Regenerate with
+ * {@code -Dgolden.update=true} and review the diff.
+ */
+class ContourPlotTest {
+    @TempDir
+    Path dir;
+
+    private InspectionResult inspect(String example) {
+        Path file = Path.of("examples/inspect", example);
+        return new Inspector().inspect(new InspectionFiles(new JsonFiles()).read(file).withCompare(false));
+    }
+
+    static String content(String svg) {
+        List<String> lines = new ArrayList<>();
+        Matcher t = Pattern.compile("<text[^>]*>([^<]*)</text>").matcher(svg);
+        while (t.find()) lines.add("text: " + t.group(1).replace("&gt;", ">").replace("&lt;", "<").replace("&amp;", "&"));
+        Map<String, Integer> fills = new TreeMap<>();
+        Matcher e = Pattern.compile("<ellipse [^>]*rx='(\\d+\\.?\\d*)'[^>]*style='fill:(rgb\\([^)]*\\))").matcher(svg);
+        while (e.find()) fills.merge("dots r=" + e.group(1) + " " + e.group(2), 1, Integer::sum);
+        fills.forEach((k, v) -> lines.add(k + ": " + v));
+        return String.join("\n", lines) + "\n";
+    }
+
+    private void assertGolden(String name, String actual) throws IOException {
+        Path golden = Path.of("src/test/resources/golden/inspect", name);
+        if (Boolean.getBoolean("golden.update") || !Files.exists(golden)) {
+            Files.createDirectories(golden.getParent());
+            Files.writeString(golden, actual, StandardCharsets.UTF_8);
+        }
+        assertThat(actual).isEqualTo(Files.readString(golden, StandardCharsets.UTF_8));
+    }
+
+    @Test
+    void radiusPlotShowsVerdictEnvelopeFitsWorstPointAndMagnification() throws IOException {
+        Path svg = dir.resolve("r.svg");
+        new ContourPlot().write(inspect("bracket-round-r.json"), svg);
+        String text = Files.readString(svg);
+        assertThat(text).as("no clip paths, which some SVG viewers ignore").doesNotContain("clip-path");
+        assertGolden("plot-bracket-round-r.txt", content(text));
+    }
+
+    @Test
+    void filletProfilePlotShowsZoneDispositionAndRequiredZone() throws IOException {
+        Path svg = dir.resolve("p.svg");
+        new ContourPlot().write(inspect("housing-fillet-profile.json"), svg);
+        assertGolden("plot-housing-fillet-profile.txt", content(Files.readString(svg)));
+    }
+
+    @Test
+    void pngIsTheStatedSize() throws IOException {
+        byte[] png = new ContourPlot().png(inspect("bracket-round-cr-flat.json"));
+        BufferedImage img = ImageIO.read(new ByteArrayInputStream(png));
+        assertThat(img.getWidth()).isEqualTo(ContourPlot.WIDTH);
+        assertThat(img.getHeight()).isEqualTo(ContourPlot.HEIGHT);
+    }
+}

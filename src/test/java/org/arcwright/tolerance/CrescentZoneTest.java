@@ -1,0 +1,141 @@
+package org.arcwright.tolerance;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.ArrayList;
+import java.util.List;
+import org.arcwright.io.InputProblem;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.CsvSource;
+
+class CrescentZoneTest {
+
+    @Test
+    void rightAngleCrescentOfPlusMinusFiveHundredthsIsFourHundredthsWide() {
+        // (rmax - rmin)(1/sin(θ/2) - 1) = 0.1 × (√2 - 1) = 0.041421 at 90° (geometry of tangent arcs).
+        CrescentZone z = CrescentZone.of(0.50, 0.55, 0.60, 90);
+        assertThat(z.width()).isCloseTo(0.1 * (Math.sqrt(2) - 1), within(1e-15));
+        assertThat(z.width()).isCloseTo(0.0414, within(5e-5));
+        assertThat(z.towardVertex()).isCloseTo(z.width() / 2, within(1e-15));
+        assertThat(z.equalBilateralProfile()).isCloseTo(0.0414, within(5e-5));
+        // common practice shortcut: twice the ± value.
+        assertThat(z.shortcutProfile()).isCloseTo(0.1, within(1e-15));
+    }
+
+    @ParameterizedTest(name = "θ = {0}°, R{2} between {1} and {3}")
+    @CsvSource({
+            "90, 0.50, 0.55, 0.60",
+            "60, 1.4, 1.5, 1.7",
+            "120, 2.9, 3.0, 3.2",
+            "150, 0.2, 0.25, 0.3",
+            "30, 4.8, 5.0, 5.2",
+    })
+    void widthMatchesAnIndependentConstructionOfTheTwoArcs(double angle, double rMin, double rNom, double rMax) {
+        CrescentZone z = CrescentZone.of(rMin, rNom, rMax, angle);
+        assertThat(z.widestOnBisector()).isTrue();
+        double legLength = 3 * rMax / Math.tan(Math.toRadians(angle) / 2) + 1;
+        Separation s = separation(contour(rMax, angle, legLength, 4001), contour(rMin, angle, legLength * 1.5, 40001));
+        assertThat(s.distance).isCloseTo(z.width(), within(z.width() * 2e-4 + 1e-9));
+        // The widest point lies on the bisector (y = 0 in this construction).
+        assertThat(Math.abs(s.where[1])).isLessThan(rMax * 0.01);
+        // Split about the nominal arc, measured on the bisector.
+        double vNom = rNom / Math.sin(Math.toRadians(angle) / 2) - rNom;
+        double vMin = rMin / Math.sin(Math.toRadians(angle) / 2) - rMin;
+        double vMax = rMax / Math.sin(Math.toRadians(angle) / 2) - rMax;
+        assertThat(z.towardVertex()).isCloseTo(vNom - vMin, within(1e-12));
+        assertThat(z.awayFromVertex()).isCloseTo(vMax - vNom, within(1e-12));
+    }
+
+    @Test
+    void atASharpCornerWithAWideBandTheBisectorValueIsAnUpperBound() {
+        // sin(15°) = 0.259 < 1 - 4.0/5.5 = 0.273: the boundaries meet closer through the surfaces.
+        CrescentZone z = CrescentZone.of(4.0, 5.0, 5.5, 30);
+        assertThat(z.widestOnBisector()).isFalse();
+        double legLength = 3 * 5.5 / Math.tan(Math.toRadians(15)) + 1;
+        Separation s = separation(contour(5.5, 30, legLength, 4001), contour(4.0, 30, legLength * 1.5, 40001));
+        assertThat(s.distance).isLessThan(z.width());
+    }
+
+    @Test
+    void outwardPortionFollowsTheMaterialSide() {
+        CrescentZone z = CrescentZone.of(1.0, 1.5, 1.7, 90);
+        // A round: smaller arcs lie toward the vertex and leave more material there.
+        assertThat(z.outwardPortion(false)).isEqualTo(z.towardVertex());
+        // A fillet: larger arcs fill more of the corner.
+        assertThat(z.outwardPortion(true)).isEqualTo(z.awayFromVertex());
+    }
+
+    @Test
+    void anglesOutsideTheOpenIntervalAreRejected() {
+        assertThatThrownBy(() -> CrescentZone.of(1, 1.5, 2, 180)).isInstanceOf(InputProblem.class)
+                .hasMessageContaining("between 0 and 180");
+        assertThatThrownBy(() -> CrescentZone.of(1, 1.5, 2, Double.NaN)).isInstanceOf(InputProblem.class);
+        assertThatThrownBy(() -> CrescentZone.of(2, 1.5, 1, 90)).isInstanceOf(InputProblem.class);
+    }
+
+    /**
+     * Points of the contour of a corner blended with radius r: legs along directions at ±θ/2 from the
+     * x axis, vertex at the origin, arc tangent to both. Built from first principles (tangent points
+     * at distance r/tan(θ/2) from the vertex), independently of {@link CrescentZone}.
+     */
+    private static List<double[]> contour(double r, double angleDeg, double legLength, int n) {
+        double half = Math.toRadians(angleDeg) / 2;
+        double t = r / Math.tan(half);
+        double[] dirA = {Math.cos(half), Math.sin(half)};
+        double[] dirB = {Math.cos(half), -Math.sin(half)};
+        double[] tanA = {dirA[0] * t, dirA[1] * t};
+        double[] tanB = {dirB[0] * t, dirB[1] * t};
+        double cx = r / Math.sin(half);
+        double a0 = Math.atan2(tanA[1], tanA[0] - cx);
+        double a1 = Math.atan2(tanB[1], tanB[0] - cx);
+        if (a1 < a0) a1 += 2 * Math.PI;
+        List<double[]> pts = new ArrayList<>();
+        int legN = n / 4;
+        for (int i = legN; i > 0; i--) {
+            double s = t + (legLength - t) * i / legN;
+            pts.add(new double[] {dirA[0] * s, dirA[1] * s});
+        }
+        int arcN = n - 2 * legN;
+        for (int i = 0; i <= arcN; i++) {
+            double a = a0 + (a1 - a0) * i / arcN;
+            pts.add(new double[] {cx + r * Math.cos(a), r * Math.sin(a)});
+        }
+        for (int i = 1; i <= legN; i++) {
+            double s = t + (legLength - t) * i / legN;
+            pts.add(new double[] {dirB[0] * s, dirB[1] * s});
+        }
+        return pts;
+    }
+
+    private record Separation(double distance, double[] where) {}
+
+    /** The largest distance from a point of {@code outer} to the polyline {@code inner} (directed Hausdorff). */
+    private static Separation separation(List<double[]> outer, List<double[]> inner) {
+        double best = -1;
+        double[] where = null;
+        for (double[] p : outer) {
+            double d = Double.POSITIVE_INFINITY;
+            for (int i = 1; i < inner.size(); i++) {
+                d = Math.min(d, segmentDistance(p, inner.get(i - 1), inner.get(i)));
+            }
+            if (d > best) {
+                best = d;
+                where = p;
+            }
+        }
+        return new Separation(best, where);
+    }
+
+    private static double segmentDistance(double[] p, double[] a, double[] b) {
+        double vx = b[0] - a[0];
+        double vy = b[1] - a[1];
+        double len2 = vx * vx + vy * vy;
+        double u = len2 == 0 ? 0 : Math.max(0, Math.min(1, ((p[0] - a[0]) * vx + (p[1] - a[1]) * vy) / len2));
+        double dx = a[0] + u * vx - p[0];
+        double dy = a[1] + u * vy - p[1];
+        return Math.sqrt(dx * dx + dy * dy);
+    }
+}

@@ -1,0 +1,131 @@
+package org.arcwright.zone;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
+
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.DoubleRange;
+import org.arcwright.io.InputProblem;
+import org.junit.jupiter.api.Test;
+
+class CornerAndZonesTest {
+
+    static Corner corner(double angleDeg, double turnDeg, CornerKind kind) {
+        double t = Math.toRadians(turnDeg), a = Math.toRadians(angleDeg);
+        return new Corner(new Point2(1.5, -2), new Point2(Math.cos(t), Math.sin(t)),
+                new Point2(Math.cos(t + a), Math.sin(t + a)), kind);
+    }
+
+    /** Points on the blend of radius r, from tangent point to tangent point. */
+    static double[][] arc(Corner c, double r, int n) {
+        Point2 ctr = c.centre(r), ta = c.tangentA(r), tb = c.tangentB(r);
+        double s = Math.atan2(ta.y() - ctr.y(), ta.x() - ctr.x()), e = Math.atan2(tb.y() - ctr.y(), tb.x() - ctr.x());
+        double sweep = Math.IEEEremainder(e - s, 2 * Math.PI);
+        double[] xs = new double[n], ys = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = s + sweep * i / (n - 1);
+            xs[i] = ctr.x() + r * Math.cos(t);
+            ys[i] = ctr.y() + r * Math.sin(t);
+        }
+        return new double[][] {xs, ys};
+    }
+
+    @Property(tries = 200, seed = "42")
+    void everyPointOfATangentArcLiesOnTheBlendOfThatRadius(@ForAll @DoubleRange(min = 20, max = 160) double angle,
+                                                           @ForAll @DoubleRange(min = 0, max = 360) double turn,
+                                                           @ForAll @DoubleRange(min = 0.01, max = 50) double r) {
+        // Analytic: a point on the arc of radius r tangent to both legs lies on the blend of radius r.
+        Corner c = corner(angle, turn, CornerKind.ROUND);
+        double[][] p = arc(c, r, 9);
+        for (int i = 1; i < 8; i++) assertThat(c.blendRadiusThrough(p[0][i], p[1][i])).isCloseTo(r, within(1e-9 * r));
+    }
+
+    @Property(tries = 100, seed = "7")
+    void exactTangentArcHasEnvelopeSmallestEqualLargestEqualItsRadius(@ForAll @DoubleRange(min = 30, max = 150) double angle,
+                                                                    @ForAll @DoubleRange(min = 0, max = 360) double turn,
+                                                                    @ForAll @DoubleRange(min = 0.1, max = 10) double r) {
+        // Analytic (issue 3 check): an exact arc of radius r tangent to both legs: smallest = largest = r.
+        for (CornerKind kind : CornerKind.values()) {
+            Corner c = corner(angle, turn, kind);
+            double[][] p = arc(c, r, 101);
+            RadiusEnvelope e = new RadiusZone(c, 0.8 * r, 1.2 * r, 1e-6).evaluate(p[0], p[1], 101);
+            assertThat(e.smallest()).isCloseTo(r, within(1e-9 * r));
+            assertThat(e.largest()).isCloseTo(r, within(1e-9 * r));
+            assertThat(e.pass()).isTrue();
+        }
+    }
+
+    @Test
+    void limitsOutsideTheEnvelopeFail() {
+        Corner c = corner(90, 0, CornerKind.ROUND);
+        double[][] p = arc(c, 2, 51);
+        assertThat(new RadiusZone(c, 2.05, 2.5, 1e-6).evaluate(p[0], p[1], 51).pass()).isFalse();
+        assertThat(new RadiusZone(c, 1.5, 1.95, 1e-6).evaluate(p[0], p[1], 51).pass()).isFalse();
+    }
+
+    @Test
+    void pointOnALegAllowsEveryRadiusWhoseTangentPointIsBeyondIt() {
+        // 90° corner: a point on leg A at 1.5 from the vertex lies on every contour with ρ·cot45° >= 1.5.
+        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+        RadiusEnvelope e = new RadiusZone(c, 1, 2, 1e-6).evaluate(new double[] {1.5}, new double[] {0}, 1);
+        assertThat(e.largest()).isEqualTo(0);
+        assertThat(e.smallest()).isCloseTo(1.5, within(1e-12));
+        assertThat(e.onLegs()).isEqualTo(1);
+    }
+
+    @Test
+    void pointBeyondTheSharpCornerFailsEveryRadius() {
+        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+        RadiusEnvelope e = new RadiusZone(c, 0, 2, 1e-6).evaluate(new double[] {1, 0.5}, new double[] {-0.01, 0.5}, 2);
+        assertThat(e.outside()).isEqualTo(1);
+        assertThat(Double.isNaN(e.smallest())).isTrue();
+        assertThat(e.pass()).isFalse();
+    }
+
+    @Test
+    void noPointWithinTheExtentIsBadInput() {
+        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+        assertThatThrownBy(() -> new RadiusZone(c, 1, 2, 1e-6).evaluate(new double[] {5, 6}, new double[] {0, 0}, 2))
+                .isInstanceOf(InputProblem.class).hasMessageContaining("extent");
+    }
+
+    @Test
+    void parallelLegsAreBadInput() {
+        assertThatThrownBy(() -> new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(-1, 0), CornerKind.ROUND))
+                .isInstanceOf(InputProblem.class).hasMessageContaining("parallel");
+        assertThatThrownBy(() -> new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(2, 0), CornerKind.FILLET))
+                .isInstanceOf(InputProblem.class).hasMessageContaining("parallel");
+    }
+
+    @Test
+    void deviationIsPositiveTowardAirForRoundsAndFillets() {
+        // A round's material is inside the angle, so the air is outside the arc; a fillet's the reverse.
+        Corner round = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+        Contour cr = round.contour(1, 10);
+        double[] out = new double[4], w = new double[5];
+        double k = 1 - Math.sqrt(0.5); // the arc crosses the bisector at (k, k)
+        cr.measure(k - 0.01, k - 0.01, out, w);
+        assertThat(out[0]).isCloseTo(0.01 * Math.sqrt(2), within(1e-12));
+        cr.measure(5, -0.2, out, w);
+        assertThat(out[0]).isCloseTo(0.2, within(1e-12));
+        Contour cf = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.FILLET).contour(1, 10);
+        cf.measure(k - 0.01, k - 0.01, out, w);
+        assertThat(out[0]).isCloseTo(-0.01 * Math.sqrt(2), within(1e-12));
+        cf.measure(5, 0.3, out, w);
+        assertThat(out[0]).isCloseTo(0.3, within(1e-12));
+    }
+
+    @Test
+    void isoOffsetAndAsmeOutwardDescribeTheSameZone() {
+        // ASME Y14.5-2018 unequally disposed (outward portion) and ISO 1101:2017 UZ offset (from memory):
+        // outward = offset + width/2.
+        ProfileZone asme = new ProfileZone(0.2, 0.15);
+        assertThat(asme.isoOffset()).isCloseTo(0.05, within(1e-15));
+        assertThat(ProfileZone.isoOffset(0.2, 0.05)).isEqualTo(new ProfileZone(0.2, 0.15000000000000002));
+        assertThat(ProfileZone.isoOffset(0.2, -0.1).outward()).isCloseTo(0, within(1e-15));
+        assertThat(ProfileZone.bilateral(0.1).isoOffset()).isZero();
+        assertThatThrownBy(() -> ProfileZone.isoOffset(0.2, 0.15)).isInstanceOf(InputProblem.class);
+    }
+}
