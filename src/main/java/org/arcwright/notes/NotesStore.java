@@ -99,6 +99,10 @@ public final class NotesStore implements Closeable {
     private static final int SUMMARY_CHARS = 220;
     private static final int TOTAL_HITS_THRESHOLD = 1000;
     private static final int RESCORE_WINDOW = 50;
+    /** Score a label earns in {@link #related} when it is one of a note's tags, functions or processes (the best one counts). */
+    private static final float TAG_MATCH = 4f;
+    private static final float FUNCTION_MATCH = 3f;
+    private static final float PROCESS_MATCH = 2f;
 
     private final PackStack stack;
     private final Path indexFolder;
@@ -229,9 +233,9 @@ public final class NotesStore implements Closeable {
     }
 
     /**
-     * Notes to recommend beside a decision: those sharing the given labels (matched against tags,
-     * functions and processes) and those whose words are most like {@code text} (more-like-this by
-     * tf-idf). For the advisor, which passes the function and tags of the case and its explanation.
+     * Notes to recommend beside a decision: those sharing the given labels (each label counts once,
+     * as a tag 4, a function 3 or a process 2, however rare it is) and those whose words are most
+     * like {@code text} (more-like-this by tf-idf). For the advisor, which passes the function and tags of the case and its explanation.
      *
      * @param tags labels such as {@code stress-relief}, {@code sealing}, {@code cast}; may be empty
      * @param text free text describing the case; may be empty
@@ -240,6 +244,11 @@ public final class NotesStore implements Closeable {
      */
     public List<NoteHit> related(Collection<String> tags, String text, int limit) {
         return related(tags, text, limit, Set.of());
+    }
+
+    private static Query labelQuery(NoteFacet facet, String label, float weight) {
+        return new BoostQuery(new org.apache.lucene.search.ConstantScoreQuery(
+                new TermQuery(new Term(NoteDocuments.filterField(facet), label))), weight);
     }
 
     /** Notes related to the note {@code id} by its tags and its text, the note itself left out. */
@@ -261,9 +270,10 @@ public final class NotesStore implements Closeable {
             for (String t : tags) {
                 if (t == null || t.isBlank()) continue;
                 String label = Note.label(t);
-                b.add(new BoostQuery(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.TAG), label)), 2.0f), Occur.SHOULD);
-                b.add(new BoostQuery(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.FUNCTION), label)), 1.5f), Occur.SHOULD);
-                b.add(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.PROCESS), label)), Occur.SHOULD);
+                b.add(new org.apache.lucene.search.DisjunctionMaxQuery(List.of(
+                        labelQuery(NoteFacet.TAG, label, TAG_MATCH),
+                        labelQuery(NoteFacet.FUNCTION, label, FUNCTION_MATCH),
+                        labelQuery(NoteFacet.PROCESS, label, PROCESS_MATCH)), 0f), Occur.SHOULD);
                 any = true;
             }
             if (text != null && !text.isBlank()) {
