@@ -108,6 +108,7 @@ public final class NotesStore implements Closeable {
     private final Path indexFolder;
     private final TradeAnalyzer indexAnalyzer = TradeAnalyzer.forIndexing();
     private final TradeAnalyzer queryAnalyzer = TradeAnalyzer.forQueries();
+    private final TradeAnalyzer highlightAnalyzer = TradeAnalyzer.forHighlighting();
     private final FacetsConfig facetsConfig = NoteDocuments.facetsConfig();
     private final Map<IndexReader, SortedSetDocValuesReaderState> facetStates =
             Collections.synchronizedMap(new WeakHashMap<>());
@@ -221,7 +222,8 @@ public final class NotesStore implements Closeable {
                 facets = Map.of();
             }
             if (phrase != null) top = rescoreByProximity(s, top, phrase, limit);
-            String[] snippets = snippets(s, query, top);
+            Query marks = q.isBlank() ? null : new QueryBuilder(highlightAnalyzer).createBooleanQuery(NoteDocuments.BODY, q, Occur.SHOULD);
+            String[] snippets = snippets(s, marks == null ? query : marks, top);
             List<NoteHit> hits = new ArrayList<>();
             StoredFields stored = s.storedFields();
             for (int i = 0; i < top.scoreDocs.length; i++) {
@@ -369,6 +371,7 @@ public final class NotesStore implements Closeable {
             directory = null;
             indexAnalyzer.close();
             queryAnalyzer.close();
+            highlightAnalyzer.close();
         }
     }
 
