@@ -89,6 +89,9 @@ final class PdfSheet {
         paragraph(f.caseLine(), BODY - 1, 0);
         if (!f.decided()) {
             paragraph("Undecided: no control is chosen for this feature yet.", BODY, 0);
+            if (!f.suggestion().isEmpty()) {
+                paragraph("The advisor suggests (not chosen, to be reviewed): " + f.suggestion(), BODY - 1, 10);
+            }
             if (!f.inspection().isEmpty()) paragraph("Last inspection: " + f.inspection(), BODY, 0);
             return;
         }

@@ -132,4 +132,18 @@ class SheetExporterTest {
             for (String line : text.split("\n")) assertThat(line.length()).as(line).isLessThan(140);
         }
     }
+
+    @Test
+    void undecidedFeaturesShowTheAdvisorsSuggestionMarkedAsNotChosen() {
+        PackStack stack = PackStack.builtIn();
+        org.arcwright.rules.Advisor advisor = new org.arcwright.rules.Advisor(org.arcwright.rules.RuleBook.load(stack),
+                org.arcwright.rules.MechanicsChecks.standard(stack), org.arcwright.rules.NoteLinker.NONE);
+        SheetContent content = SheetContent.of(demo, templates, "t", c -> advisor.advise(c).first());
+        SheetContent.FeatureSection f5 = content.features().get(4);
+        assertThat(f5.decided()).isFalse();
+        assertThat(f5.suggestion()).isNotEmpty().contains("(rule ");
+        assertThat(content.summary().get(4).status()).isEqualTo("undecided");
+        assertThat(content.features().get(0).suggestion()).as("decided features get no suggestion").isEmpty();
+        assertThat(exporter.markdown(content, "x")).contains("The advisor suggests (not chosen, to be reviewed): ");
+    }
 }
