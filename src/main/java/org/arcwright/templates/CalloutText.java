@@ -50,6 +50,9 @@ public final class CalloutText {
     /** A tolerance value as this style writes it. */
     public String value(double v) { return style.formatValue(v, units, 4); }
 
+    /** Two limits of one size with the same number of places. */
+    public String[] limits(double min, double max) { return style.formatLimitPair(min, max, units, 4); }
+
     /** The ISO offset value, signed: {@code +0.02}, {@code -0.03}, {@code 0}. */
     public String signed(double v) {
         String s = value(v);
@@ -163,7 +166,8 @@ public final class CalloutText {
             String kind = c instanceof Callout.Radius ? "radius" : "controlled radius (fair curve, no flats or reversals)";
             double min = c instanceof Callout.Radius r ? r.min() : ((Callout.ControlledRadius) c).min();
             double max = c instanceof Callout.Radius r ? r.max() : ((Callout.ControlledRadius) c).max();
-            return kind + " " + radius(c) + ", between " + value(min) + " and " + value(max) + " " + units.symbol();
+            String[] pair = limits(min, max);
+            return kind + " " + radius(c) + ", between " + pair[0] + " and " + pair[1] + " " + units.symbol();
         }
         if (c instanceof Callout.General g) return "general tolerance of the title block: " + general(g);
         if (c instanceof Callout.Profile p) {
