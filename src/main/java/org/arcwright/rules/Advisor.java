@@ -54,6 +54,15 @@ public final class Advisor {
         this.notes = Objects.requireNonNull(notes, "notes");
     }
 
+    /**
+     * The usual advisor for a pack stack: its rules and tables, the mechanics checks over the
+     * published fits and the stack's bearing-seat table, and the given notes. What failed to load
+     * is in {@code book().problems()}; the advisor works on the rest.
+     */
+    public static Advisor forStack(org.arcwright.pack.PackStack stack, NoteLinker notes) {
+        return new Advisor(RuleBook.load(stack), MechanicsChecks.standard(stack), notes);
+    }
+
     /** The rule book this advisor evaluates. */
     public RuleBook book() { return book; }
 
@@ -214,6 +223,10 @@ public final class Advisor {
         }
         Callout callout = d.callout(datums);
         String text = d.text(callout);
+        if (callout instanceof Callout.CompositeProfile && c.standard() == DrawingStyle.ISO) {
+            cautions.add("On an ISO drawing write the tiers as two profile frames stacked on one leader (ISO 1101), the "
+                    + "upper with the datums, the lower without; the composite frame is ASME's form (common practice).");
+        }
         Map<String, Object> numbers = d.numbers();
         numbers.putAll(mech);
         trace.add("numbers: " + summary(numbers));

@@ -117,13 +117,14 @@ public final class RuleBook {
                 Rule r = rf.rules().get(i);
                 String field = "rules[" + i + "].id";
                 if (!seenHere.add(r.id())) {
-                    problems.add(new InputProblem(file.toString(), 0, 0, field, "duplicate rule id '" + r.id()
-                            + "' in pack '" + pack.name() + "'; ids must be unique"));
+                    problems.add(new InputProblem(file.toString(), lineOfId(file, r.id(), true), 0, field,
+                            "duplicate rule id '" + r.id() + "' in pack '" + pack.name() + "'; ids must be unique"));
                     continue;
                 }
                 Entry lower = byId.get(r.id());
                 if (lower != null && !overrides.contains(r.id())) {
-                    problems.add(new InputProblem(file.toString(), 0, 0, field, "duplicate rule id '" + r.id()
+                    problems.add(new InputProblem(file.toString(), lineOfId(file, r.id(), false), 0, field,
+                            "duplicate rule id '" + r.id()
                             + "': pack '" + lower.pack() + "' already has it; list it under \"overrides\" in "
                             + "pack.json to replace it"));
                     continue;
@@ -139,6 +140,27 @@ public final class RuleBook {
                         + "', but no lower layer has a rule with that id"));
             }
         }
+    }
+
+    /**
+     * The line where {@code "id": "ID"} is written in {@code file} (its last occurrence when
+     * {@code last}, else its first), or 0 when it cannot be found; for pointing at duplicates.
+     */
+    private static int lineOfId(Path file, String id, boolean last) {
+        java.util.regex.Pattern p = java.util.regex.Pattern.compile("\"id\"\\s*:\\s*\"" + java.util.regex.Pattern.quote(id) + "\"");
+        int found = 0;
+        try {
+            List<String> lines = java.nio.file.Files.readAllLines(file);
+            for (int i = 0; i < lines.size(); i++) {
+                if (p.matcher(lines.get(i)).find()) {
+                    found = i + 1;
+                    if (!last) break;
+                }
+            }
+        } catch (java.io.IOException e) {
+            return 0;
+        }
+        return found;
     }
 
     /** The rules in force, highest weight first, then by id. */

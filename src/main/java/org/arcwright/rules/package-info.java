@@ -21,9 +21,9 @@
  * <h2>Typical use</h2>
  * <pre>
  *   PackStack stack = PackStack.load(teamPacks, personalPack);
- *   RuleBook book = RuleBook.load(stack);          // book.problems(): show them, keep going
- *   Advisor advisor = new Advisor(book, MechanicsChecks.standard(stack), noteLinker);
- *   Advice advice = advisor.advise(designCase);    // deterministic, thread-safe
+ *   Advisor advisor = Advisor.forStack(stack, noteLinker);   // or new Advisor(book, checks, notes)
+ *   advisor.book().problems();                               // show them; the rest loaded
+ *   Advice advice = advisor.advise(designCase);              // deterministic, thread-safe
  * </pre>
  *
  * <p>May import: the JDK, Jackson and the core packages ({@code io}, {@code tolerance},

@@ -78,6 +78,13 @@ class AdviseCommandTest {
     }
 
     @Test
+    void theReadmeExampleRaisesTheMinimumToMeetTheKfTarget() {
+        // golden for the README: R2 ±0.2 at a Ø42/Ø35 shoulder in bending, 900 MPa, Kf target 1.75
+        assertThat(run("advise", "examples/advisor/gear-seat-shoulder.json")).as(err.toString()).isZero();
+        assertThat(out.toString()).contains("1. CR2.16-2.56", "Limits adjusted", "smallest radius meeting the target 2.157");
+    }
+
+    @Test
     void teamPackOverrideChangesTheAnswer() throws Exception {
         assertThat(run("advise", caseFile(SHOULDER).toString(), "--pack", "shared")).isZero();
         assertThat(out.toString()).contains("1. CR2 +0.1/0", "Tarnbeck Drives practice");

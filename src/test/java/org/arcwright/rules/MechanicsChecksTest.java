@@ -84,6 +84,14 @@ class MechanicsChecksTest {
     }
 
     @Test
+    void forStackBuildsTheSameAdvisorFromAPackStack() {
+        Advisor a = Advisor.forStack(PackStack.builtIn(), NoteLinker.NONE);
+        assertThat(a.book().problems()).isEmpty();
+        assertThat(a.advise(feature("F2")).first().orElseThrow().text())
+                .isEqualTo(advisor.advise(feature("F2")).first().orElseThrow().text());
+    }
+
+    @Test
     void theWholeDemoPartIsAdvisedWithoutDemotionsOrConflicts() {
         for (var f : part.features()) {
             Advice a = advisor.advise(f.designCase());

@@ -102,8 +102,12 @@ class RuleBookTest {
     @Test
     void duplicateIdsInOnePackAreErrors() throws Exception {
         RuleBook book = load(pack("p", "", GOOD_RULE, GOOD_RULE));
-        assertThat(book.problems()).singleElement().satisfies(p ->
-                assertThat(p.problem()).contains("duplicate rule id 'team.sealing.tight'"));
+        assertThat(book.problems()).singleElement().satisfies(p -> {
+            assertThat(p.problem()).contains("duplicate rule id 'team.sealing.tight'");
+            assertThat(p.source()).endsWith("r1.json");
+            assertThat(p.line()).isEqualTo(1);
+            assertThat(p.field()).isEqualTo("rules[0].id");
+        });
     }
 
     @Test
