@@ -146,7 +146,8 @@ public final class CalloutText {
         List<String> lines = new ArrayList<>();
         for (int t = 0; t < cp.tiers().size(); t++) {
             ProfileTier tier = cp.tiers().get(t);
-            String sym = t == 0 ? symbol : " ".repeat(unicode ? 1 : symbol.length());
+            // ISO 1101 stacks whole frames, each with its symbol; ASME shares one symbol (common practice)
+            String sym = t == 0 || style == DrawingStyle.ISO ? symbol : " ".repeat(unicode ? 1 : symbol.length());
             StringBuilder sb = new StringBuilder("|").append(sym).append('|').append(value(tier.zone())).append('|');
             for (DatumReference d : tier.datums()) sb.append(datum(d, unicode)).append('|');
             lines.add(sb.toString());
