@@ -14,8 +14,13 @@ import picocli.CommandLine.Command;
                 GeneralToleranceCommand.class,
                 FilletStressCommand.class,
                 ClearanceCommand.class,
+                AdviseCommand.class,
+                PackCommand.class,
                 NotesCommand.class,
                 InspectCommand.class,
+                NoteCommand.class,
+                RenderCommand.class,
+                SheetCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
         footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",

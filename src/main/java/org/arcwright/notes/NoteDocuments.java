@@ -20,7 +20,7 @@ import org.arcwright.pack.PackLayer;
 /** How a note becomes a Lucene document, and the field names of the index. */
 final class NoteDocuments {
     /** Bump when fields or analysis change: an index with another schema is rebuilt. */
-    static final String SCHEMA = "arcwright-notes-5";
+    static final String SCHEMA = "arcwright-notes-7";
 
     static final String ID = "id";
     static final String TITLE = "title";
@@ -35,7 +35,8 @@ final class NoteDocuments {
     static final String COMMIT_SCHEMA = "schema";
     static final String COMMIT_STAMP = "sources";
 
-    private static final FieldType BODY_TYPE = new FieldType(TextField.TYPE_STORED);
+    /** Indexed with offsets for the highlighter, not stored: the text is kept once, in {@link #SOURCE}. */
+    private static final FieldType BODY_TYPE = new FieldType(TextField.TYPE_NOT_STORED);
 
     static {
         BODY_TYPE.setIndexOptions(IndexOptions.DOCS_AND_FREQS_AND_POSITIONS_AND_OFFSETS);

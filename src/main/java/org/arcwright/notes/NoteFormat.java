@@ -135,6 +135,10 @@ public final class NoteFormat {
     public static String plainText(String markdown) {
         StringBuilder sb = new StringBuilder(markdown.length());
         for (String line : markdown.split("\r?\n", -1)) {
+            if (!hasMarkdownMarks(line)) {
+                sb.append(line).append('\n');
+                continue;
+            }
             String l = line.replaceFirst("^\\s{0,3}#{1,6}\\s+", "")
                     .replaceFirst("^\\s*[-*+]\\s+", "")
                     .replaceFirst("^\\s*>\\s?", "")
@@ -144,6 +148,18 @@ public final class NoteFormat {
             sb.append(l).append('\n');
         }
         return sb.toString();
+    }
+
+    private static boolean hasMarkdownMarks(String line) {
+        for (int i = 0, n = line.length(); i < n; i++) {
+            switch (line.charAt(i)) {
+                case '#': case '*': case '-': case '+': case '>': case '[': case '`': case '_':
+                    return true;
+                default:
+                    break;
+            }
+        }
+        return false;
     }
 
     private static void appendList(StringBuilder sb, String key, List<String> values) {

@@ -51,10 +51,12 @@ import org.apache.lucene.search.BoostQuery;
 import org.apache.lucene.search.IndexSearcher;
 import org.apache.lucene.search.MatchAllDocsQuery;
 import org.apache.lucene.search.Query;
+import org.apache.lucene.search.QueryRescorer;
 import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TermQuery;
 import org.apache.lucene.search.TopDocs;
+import org.apache.lucene.search.TopScoreDocCollectorManager;
 import org.apache.lucene.search.uhighlight.DefaultPassageFormatter;
 import org.apache.lucene.search.uhighlight.UnifiedHighlighter;
 import org.apache.lucene.store.ByteBuffersDirectory;
@@ -96,6 +98,8 @@ public final class NotesStore implements Closeable {
     private static final float PHRASE_BOOST = 1.5f;
     private static final int FACET_VALUES = 20;
     private static final int SUMMARY_CHARS = 220;
+    private static final int TOTAL_HITS_THRESHOLD = 1000;
+    private static final int RESCORE_WINDOW = 50;
 
     private final PackStack stack;
     private final Path indexFolder;
@@ -162,7 +166,8 @@ public final class NotesStore implements Closeable {
     /**
      * Finds notes for a query typed by a user. The text is analysed, never parsed as a query
      * language: quotes, brackets, {@code *} and {@code AND} are words or nothing, never errors.
-     * Title and tags weigh more than the body; words found near each other in the body weigh more.
+     * Title and tags weigh more than the body; among the best 50, words found near each other in the
+     * body weigh more.
      * An empty query lists the notes the filters allow.
      *
      * @param text what the user typed
@@ -170,15 +175,36 @@ public final class NotesStore implements Closeable {
      * @param limit how many hits at most, 1 or more
      */
     public SearchResult search(String text, NoteFilters filters, int limit) {
+        return search(text, filters, limit, true);
+    }
+
+    /**
+     * As {@link #search(String, NoteFilters, int)}; with {@code countFacets} false the facets are
+     * left empty and {@link SearchResult#totalHits()} is exact only up to 1,000 (beyond that it is a
+     * lower bound), which lets Lucene skip notes that cannot reach the top: the fast path for
+     * search-as-you-type, with facet counts fetched separately when the user pauses.
+     */
+    public SearchResult search(String text, NoteFilters filters, int limit, boolean countFacets) {
         Objects.requireNonNull(filters, "filters");
         if (limit < 1) throw InputProblem.ofField("limit", "must be 1 or more, got " + limit);
         String q = text == null ? "" : text;
         Query textQuery = q.isBlank() ? new MatchAllDocsQuery() : textQuery(q);
         if (textQuery == null) return SearchResult.empty(q);
         Query query = withFilters(textQuery, filters);
+        Query phrase = q.isBlank() ? null : phraseQuery(q);
+        int window = phrase == null ? limit : Math.max(limit, RESCORE_WINDOW);
         return withSearcher(s -> {
-            FacetsCollectorManager.FacetsResult r = FacetsCollectorManager.search(s, query, limit, new FacetsCollectorManager());
-            TopDocs top = r.topDocs();
+            TopDocs top;
+            Map<NoteFacet, List<FacetCount>> facets;
+            if (countFacets) {
+                FacetsCollectorManager.FacetsResult r = FacetsCollectorManager.search(s, query, window, new FacetsCollectorManager());
+                top = r.topDocs();
+                facets = facetCounts(s.getIndexReader(), r);
+            } else {
+                top = s.search(query, new TopScoreDocCollectorManager(window, null, TOTAL_HITS_THRESHOLD, false));
+                facets = Map.of();
+            }
+            if (phrase != null) top = QueryRescorer.rescore(s, top, phrase, PHRASE_BOOST, limit);
             String[] snippets = snippets(s, query, top);
             List<NoteHit> hits = new ArrayList<>();
             StoredFields stored = s.storedFields();
@@ -186,7 +212,7 @@ public final class NotesStore implements Closeable {
                 ScoreDoc sd = top.scoreDocs[i];
                 hits.add(hit(stored.document(sd.doc), sd.score, snippets == null ? null : snippets[i]));
             }
-            return new SearchResult(q, top.totalHits.value, hits, facetCounts(s.getIndexReader(), r));
+            return new SearchResult(q, top.totalHits.value, hits, facets);
         });
     }
 
@@ -491,47 +517,57 @@ public final class NotesStore implements Closeable {
             }
             Collections.reverse(packRanges);
             for (int[] range : packRanges) {
-                for (int i = range[0]; i < range[1]; i++) {
-                    SourceScan.Entry e = entries.get(i);
-                    String location = e.path().toString();
-                    Note note;
-                    byte[] bytes;
-                    String text;
+                for (int from = range[0]; from < range[1]; from += CHUNK) {
+                    int to = Math.min(range[1], from + CHUNK);
+                    List<Loaded> loaded = java.util.stream.IntStream.range(from, to).parallel()
+                            .mapToObj(i -> load(entries.get(i))).toList();
+                    List<Loaded> toWrite = new ArrayList<>();
+                    for (Loaded l : loaded) {
+                        SourceScan.Entry e = l.entry();
+                        String location = e.path().toString();
+                        if (l.gone()) continue;
+                        if (l.problem() != null) {
+                            found.add(l.problem());
+                            String kept = idAtLocation.get(location);
+                            if (kept != null) {
+                                pinned.add(kept);
+                                seen.putIfAbsent(kept, e.packIndex());
+                            }
+                            continue;
+                        }
+                        Note note = l.note();
+                        Integer seenIn = seen.get(note.id());
+                        if (seenIn != null) {
+                            if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
+                                found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
+                                        + note.id() + "'; this one is ignored"));
+                            }
+                            continue;
+                        }
+                        seen.put(note.id(), e.packIndex());
+                        Indexed old = existing.get(note.id());
+                        if (old != null && old.hash().equals(l.hash()) && old.location().equals(location)) continue;
+                        toWrite.add(l);
+                    }
                     try {
-                        bytes = Files.readAllBytes(e.path());
-                        text = decode(bytes, e.path());
-                        note = NoteFormat.parse(text, location);
-                    } catch (InputProblem p) {
-                        found.add(p);
-                        String kept = idAtLocation.get(location);
-                        if (kept != null) {
-                            pinned.add(kept);
-                            seen.putIfAbsent(kept, e.packIndex());
-                        }
-                        continue;
-                    } catch (NoSuchFileException gone) {
-                        continue;
+                        toWrite.parallelStream().forEach(l -> {
+                            SourceScan.Entry e = l.entry();
+                            Document doc = NoteDocuments.toDocument(facetsConfig, l.note(), l.text(), e.pack().name(),
+                                    e.pack().layer(), e.path().toString(), l.hash());
+                            try {
+                                if (fresh) {
+                                    w.addDocument(doc);
+                                } else {
+                                    w.updateDocument(new Term(NoteDocuments.ID, l.note().id()), doc);
+                                }
+                            } catch (IOException x) {
+                                throw new UncheckedIOException(x);
+                            }
+                        });
+                    } catch (UncheckedIOException x) {
+                        throw x.getCause();
                     }
-                    Integer seenIn = seen.get(note.id());
-                    if (seenIn != null) {
-                        if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
-                            found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
-                                    + note.id() + "'; this one is ignored"));
-                        }
-                        continue;
-                    }
-                    seen.put(note.id(), e.packIndex());
-                    String hash = NoteDocuments.hash(bytes, e.pack().name(), e.pack().layer());
-                    Indexed old = existing.get(note.id());
-                    if (old != null && old.hash().equals(hash) && old.location().equals(location)) continue;
-                    Document doc = NoteDocuments.toDocument(facetsConfig, note, text, e.pack().name(), e.pack().layer(),
-                            location, hash);
-                    if (fresh) {
-                        w.addDocument(doc);
-                    } else {
-                        w.updateDocument(new Term(NoteDocuments.ID, note.id()), doc);
-                    }
-                    written++;
+                    written += toWrite.size();
                 }
             }
             for (String id : existing.keySet()) {
@@ -546,6 +582,28 @@ public final class NotesStore implements Closeable {
         }
         problems = List.copyOf(found);
         return new SyncCounts(written, removed);
+    }
+
+    /** Notes are read, parsed and indexed in chunks of this many, two threads at a time. */
+    private static final int CHUNK = 512;
+
+    /** A note file read and parsed (or the problem with it). */
+    private record Loaded(SourceScan.Entry entry, String text, Note note, String hash, InputProblem problem, boolean gone) {}
+
+    private static Loaded load(SourceScan.Entry e) {
+        try {
+            byte[] bytes = Files.readAllBytes(e.path());
+            String text = decode(bytes, e.path());
+            Note note = NoteFormat.parse(text, e.path().toString());
+            return new Loaded(e, text, note, NoteDocuments.hash(bytes, e.pack().name(), e.pack().layer()), null, false);
+        } catch (InputProblem p) {
+            return new Loaded(e, null, null, null, p, false);
+        } catch (NoSuchFileException gone) {
+            return new Loaded(e, null, null, null, null, true);
+        } catch (IOException x) {
+            return new Loaded(e, null, null, null, new InputProblem(e.path().toString(), 0, 0, null,
+                    "could not read the note: " + x.getMessage()), false);
+        }
     }
 
     private static Map<String, String> commitData(String stamp) {
@@ -711,10 +769,17 @@ public final class NotesStore implements Closeable {
                 any = true;
             }
         }
-        if (!any) return null;
-        Query phrase = qb.createPhraseQuery(NoteDocuments.BODY, text, 3);
-        if (phrase != null && !(phrase instanceof TermQuery)) b.add(new BoostQuery(phrase, PHRASE_BOOST), Occur.SHOULD);
-        return b.build();
+        return any ? b.build() : null;
+    }
+
+    /**
+     * Words of the query found near each other in the body: applied to the best
+     * {@link #RESCORE_WINDOW} notes only (rescoring), since a sloppy phrase over every match is the
+     * most expensive part of a search. Null for a one-word query.
+     */
+    private Query phraseQuery(String text) {
+        Query phrase = new QueryBuilder(queryAnalyzer).createPhraseQuery(NoteDocuments.BODY, text, 3);
+        return phrase == null || phrase instanceof TermQuery ? null : phrase;
     }
 
     private static Query withFilters(Query main, NoteFilters filters) {
@@ -730,10 +795,9 @@ public final class NotesStore implements Closeable {
 
     private String[] snippets(IndexSearcher s, Query query, TopDocs top) throws IOException {
         if (top.scoreDocs.length == 0) return new String[0];
-        UnifiedHighlighter h = UnifiedHighlighter.builder(s, indexAnalyzer)
+        UnifiedHighlighter h = new BodyFromSource(UnifiedHighlighter.builder(s, indexAnalyzer)
                 .withFormatter(new DefaultPassageFormatter("**", "**", " … ", false))
-                .withMaxLength(20_000)
-                .build();
+                .withMaxLength(20_000));
         String[] out = h.highlight(NoteDocuments.BODY, query, top, 2);
         for (int i = 0; i < out.length; i++) {
             if (out[i] != null) out[i] = trimSnippet(out[i].replaceAll("\\s+", " ").strip());
@@ -741,16 +805,54 @@ public final class NotesStore implements Closeable {
         return out;
     }
 
-    /** Keeps a snippet to about two lines, cutting at a word outside a highlight. */
-    private static String trimSnippet(String s) {
+    /**
+     * A highlighter that takes the body text from the stored note source instead of a stored copy of
+     * the body: the index keeps the text once (the offsets in the postings refer to the same
+     * {@link NoteFormat#plainText} of the body).
+     */
+    private static final class BodyFromSource extends UnifiedHighlighter {
+        BodyFromSource(UnifiedHighlighter.Builder builder) {
+            super(builder);
+        }
+
+        @Override
+        protected List<CharSequence[]> loadFieldValues(String[] fields, org.apache.lucene.search.DocIdSetIterator docIter,
+                                                       int cacheCharsThreshold) throws IOException {
+            List<CharSequence[]> out = new ArrayList<>();
+            StoredFields stored = searcher.storedFields();
+            java.util.Set<String> wanted = Set.of(NoteDocuments.SOURCE, NoteDocuments.LOCATION);
+            for (int doc = docIter.nextDoc(); doc != org.apache.lucene.search.DocIdSetIterator.NO_MORE_DOCS; doc = docIter.nextDoc()) {
+                Document d = stored.document(doc, wanted);
+                CharSequence[] values = new CharSequence[fields.length];
+                for (int i = 0; i < fields.length; i++) {
+                    values[i] = NoteDocuments.BODY.equals(fields[i])
+                            ? NoteFormat.plainText(NoteFormat.parse(d.get(NoteDocuments.SOURCE), d.get(NoteDocuments.LOCATION)).body())
+                            : "";
+                }
+                out.add(values);
+            }
+            return out;
+        }
+    }
+
+    /** Keeps a snippet to about two lines, starting shortly before the first highlight, cut at words. */
+    static String trimSnippet(String s) {
         int max = 320;
         if (s.length() <= max) return s;
+        int first = s.indexOf("**");
+        String head = "";
+        if (first > max - 100) {
+            int from = s.lastIndexOf(' ', first - 60);
+            s = s.substring(from < 0 ? first : from + 1);
+            head = "… ";
+        }
+        if (s.length() <= max) return head + s;
         int cut = s.lastIndexOf(' ', max);
         if (cut < max / 2) cut = max;
-        String head = s.substring(0, cut);
-        int marks = head.split("\\*\\*", -1).length - 1;
-        if (marks % 2 == 1) head = head + "**";
-        return head + " …";
+        String body = s.substring(0, cut);
+        int marks = body.split("\\*\\*", -1).length - 1;
+        if (marks % 2 == 1) body = body + "**";
+        return head + body + " …";
     }
 
     private Map<NoteFacet, List<FacetCount>> facetCounts(IndexReader reader, FacetsCollectorManager.FacetsResult r)

@@ -40,14 +40,37 @@ final class SourceScan {
         long sum = 0;
         List<PracticePack> packs = stack.packs();
         for (int i = 0; i < packs.size(); i++) {
-            PracticePack pack = packs.get(i);
-            for (Path p : pack.files("notes", ".md")) {
-                Entry e = entry(i, pack, p);
+            for (Entry e : list(i, packs.get(i))) {
                 out.add(e);
                 sum += e.stamp();
             }
         }
         return new SourceScan(List.copyOf(out), sum);
+    }
+
+    /**
+     * The {@code notes/*.md} files of a pack, by file name, as {@link PracticePack#files} lists them,
+     * but reading each file's attributes once while listing (one system call per file, not two).
+     */
+    private static List<Entry> list(int packIndex, PracticePack pack) {
+        Path dir = pack.root().resolve("notes");
+        if (!Files.isDirectory(dir)) return List.of();
+        List<Entry> out = new ArrayList<>();
+        try {
+            Files.walkFileTree(dir, java.util.Set.of(), 1, new java.nio.file.SimpleFileVisitor<>() {
+                @Override
+                public java.nio.file.FileVisitResult visitFile(Path file, BasicFileAttributes a) {
+                    if (a.isRegularFile() && file.getFileName().toString().endsWith(".md")) {
+                        out.add(new Entry(packIndex, pack, file, a.size(), a.lastModifiedTime().toMillis()));
+                    }
+                    return java.nio.file.FileVisitResult.CONTINUE;
+                }
+            });
+        } catch (IOException e) {
+            throw new UncheckedIOException("could not list " + dir, e);
+        }
+        out.sort(java.util.Comparator.comparing(e -> e.path().getFileName().toString()));
+        return out;
     }
 
     static Entry entry(int packIndex, PracticePack pack, Path p) {

@@ -4,7 +4,6 @@ import java.io.IOException;
 import java.io.StringReader;
 import java.io.UncheckedIOException;
 import java.text.ParseException;
-import java.util.regex.Pattern;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.analysis.LowerCaseFilter;
 import org.apache.lucene.analysis.TokenStream;
@@ -12,9 +11,7 @@ import org.apache.lucene.analysis.Tokenizer;
 import org.apache.lucene.analysis.en.EnglishPossessiveFilter;
 import org.apache.lucene.analysis.en.PorterStemFilter;
 import org.apache.lucene.analysis.miscellaneous.ASCIIFoldingFilter;
-import org.apache.lucene.analysis.miscellaneous.PatternKeywordMarkerFilter;
-import org.apache.lucene.analysis.pattern.PatternReplaceCharFilter;
-import org.apache.lucene.analysis.pattern.PatternTokenizer;
+import org.apache.lucene.analysis.miscellaneous.KeywordMarkerFilter;
 import org.apache.lucene.analysis.synonym.SolrSynonymParser;
 import org.apache.lucene.analysis.synonym.SynonymGraphFilter;
 import org.apache.lucene.analysis.synonym.SynonymMap;
@@ -23,12 +20,11 @@ import org.apache.lucene.analysis.synonym.SynonymMap;
  * The analysis chain for practice notes, fitted to how tolerancing is written.
  *
  * <ol>
- *   <li>Character filters join a radius symbol to its value ({@code R 0.5} to {@code R0.5},
- *       {@code CR 1.5} to {@code CR1.5}) and read {@code +/-} as {@code ±}, which is a token of
- *       its own.</li>
- *   <li>A pattern tokenizer keeps tokens that contain a digit whole with their inner dots, hyphens
- *       and slashes ({@code R0.5}, {@code 2768-m}, {@code Y14.5-2018}, {@code H7/g6}, {@code .060}),
- *       and splits plain words at hyphens ({@code title-block} is two words).</li>
+ *   <li>{@link TradeTokenizer} keeps tokens that contain a digit whole with their inner dots,
+ *       hyphens and slashes ({@code R0.5}, {@code 2768-m}, {@code Y14.5-2018}, {@code H7/g6},
+ *       {@code .060}), joins a radius symbol to its value ({@code R 0.5} to {@code R0.5}), reads
+ *       {@code +/-} as {@code ±}, and splits plain words at hyphens ({@code title-block} is two
+ *       words).</li>
  *   <li>Lower case; {@link TradeTokenFilter} splits numbers from units and, when indexing, stacks
  *       the parts of compounds; English possessives go; Porter stemming, except for tokens with a
  *       digit in them.</li>
@@ -45,15 +41,8 @@ public final class TradeAnalyzer extends Analyzer {
     /** The synonym list on the classpath, Solr format, applied at query time. */
     public static final String SYNONYMS_RESOURCE = "/org/arcwright/notes/trade-synonyms.txt";
 
-    static final Pattern TOKEN = Pattern.compile(
-            "\\p{L}{0,4}\\.?\\d[\\p{L}\\p{N}]*(?:[.\\-/][\\p{L}\\p{N}]+)*"
-                    + "|\\p{L}+(?:['’]\\p{L}+)*"
-                    + "|µm|±");
-    private static final Pattern PLUS_MINUS = Pattern.compile("\\+\\s*/\\s*-|\\+-(?=\\s*\\.?\\d)");
-    private static final Pattern RADIUS_GAP = Pattern.compile("\\b(R|CR|SR|CSR|r|cr)\\s+(?=\\.?\\d)");
     /** Weight of a synonym relative to the word the user typed. */
     static final float SYNONYM_WEIGHT = 0.5f;
-    private static final Pattern HAS_DIGIT = Pattern.compile(".*\\d.*");
 
     private final boolean querySide;
     private final SynonymMap synonyms;
@@ -74,13 +63,8 @@ public final class TradeAnalyzer extends Analyzer {
     }
 
     @Override
-    protected java.io.Reader initReader(String fieldName, java.io.Reader reader) {
-        return new PatternReplaceCharFilter(RADIUS_GAP, "$1", new PatternReplaceCharFilter(PLUS_MINUS, " ± ", reader));
-    }
-
-    @Override
     protected TokenStreamComponents createComponents(String fieldName) {
-        Tokenizer source = new PatternTokenizer(TOKEN, 0);
+        Tokenizer source = new TradeTokenizer();
         TokenStream s = baseChain(source, !querySide);
         if (querySide && synonyms != null) s = new SynonymWeightFilter(new SynonymGraphFilter(s, synonyms, true), SYNONYM_WEIGHT);
         return new TokenStreamComponents(source, s);
@@ -96,15 +80,34 @@ public final class TradeAnalyzer extends Analyzer {
         s = new ASCIIFoldingFilter(s);
         s = new TradeTokenFilter(s, indexSide);
         s = new EnglishPossessiveFilter(s);
-        s = new PatternKeywordMarkerFilter(s, HAS_DIGIT);
+        s = new DigitKeywordFilter(s);
         return new PorterStemFilter(s);
+    }
+
+    /** Marks tokens containing a digit as keywords, so the stemmer leaves {@code r0.5} and {@code 2768-m} alone. */
+    private static final class DigitKeywordFilter extends KeywordMarkerFilter {
+        private final org.apache.lucene.analysis.tokenattributes.CharTermAttribute term =
+                addAttribute(org.apache.lucene.analysis.tokenattributes.CharTermAttribute.class);
+
+        DigitKeywordFilter(TokenStream in) {
+            super(in);
+        }
+
+        @Override
+        protected boolean isKeyword() {
+            char[] b = term.buffer();
+            for (int i = 0, n = term.length(); i < n; i++) {
+                if (b[i] >= '0' && b[i] <= '9') return true;
+            }
+            return false;
+        }
     }
 
     private static SynonymMap loadSynonyms() {
         Analyzer ruleAnalyzer = new Analyzer() {
             @Override
             protected TokenStreamComponents createComponents(String fieldName) {
-                Tokenizer source = new PatternTokenizer(TOKEN, 0);
+                Tokenizer source = new TradeTokenizer();
                 return new TokenStreamComponents(source, baseChain(source, false));
             }
         };

@@ -50,6 +50,7 @@ final class TradeTokenFilter extends TokenFilter {
             return true;
         }
         if (!input.incrementToken()) return false;
+        if (!needsWork(term.buffer(), term.length())) return true;
         String t = term.toString();
         Matcher unit = WITH_UNIT.matcher(t);
         if (unit.matches() && unit.group(1).chars().anyMatch(Character::isDigit)) {
@@ -60,7 +61,7 @@ final class TradeTokenFilter extends TokenFilter {
             pending.addLast(new Pending(s, unit.group(2), 1));
             return true;
         }
-        stackParts(t, captureState());
+        if (indexSide) stackParts(t, captureState());
         return true;
     }
 
@@ -78,6 +79,15 @@ final class TradeTokenFilter extends TokenFilter {
                 if (!parts[i].isEmpty() && !parts[i].equals(t)) pending.addFirst(new Pending(s, parts[i], 0));
             }
         }
+    }
+
+    /** Only tokens with a digit, a hyphen or a slash can be split or stacked; most words skip the regexes. */
+    private static boolean needsWork(char[] b, int len) {
+        for (int i = 0; i < len; i++) {
+            char c = b[i];
+            if ((c >= '0' && c <= '9') || c == '-' || c == '/') return true;
+        }
+        return false;
     }
 
     @Override

@@ -80,6 +80,73 @@ public enum DrawingStyle {
         return asmeInch ? value(f.nominalValue(), f.nominalValue().scale(), true) : nominal(f.nominalValue(), inch);
     }
 
+    /**
+     * A tolerance value (a profile zone, an offset, a crescent width) as this style writes it.
+     * The value is rounded half-even to at most {@code maxPlaces} decimals. ASME mm and ISO drop
+     * trailing zeros and keep the zero before the point ({@code 0.1}, {@code 0.05}); ASME inch drops
+     * the zero before the point and shows at least three places ({@code .004}, {@code .0005})
+     * (ASME Y14.5-2018 decimal conventions for tolerances, from memory; three inch places is common
+     * practice). Signs are kept for negative values.
+     *
+     * @param value the value in {@code units}, finite
+     * @param maxPlaces decimals kept at most, 0 to 6
+     */
+    public String formatValue(double value, Units units, int maxPlaces) {
+        if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + value);
+        if (maxPlaces < 0 || maxPlaces > 6) throw new IllegalArgumentException("places must be 0 to 6, got " + maxPlaces);
+        BigDecimal v = BigDecimal.valueOf(value).setScale(maxPlaces, java.math.RoundingMode.HALF_EVEN).stripTrailingZeros();
+        if (v.signum() == 0) v = BigDecimal.ZERO;
+        if (v.scale() < 0) v = v.setScale(0);
+        boolean asmeInch = this == ASME && units == Units.INCH;
+        if (asmeInch && v.scale() < 3) v = v.setScale(Math.min(3, Math.max(maxPlaces, 0)));
+        String s = v.toPlainString();
+        if (asmeInch) {
+            if (s.startsWith("0.")) s = s.substring(1);
+            else if (s.startsWith("-0.")) s = "-" + s.substring(2);
+        }
+        return s;
+    }
+
+    /**
+     * A dimensionless figure (a stress concentration factor, a ratio) with exactly {@code places}
+     * decimals, rounded half-even: the same in both styles.
+     */
+    public static String formatFigure(double value, int places) {
+        if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + value);
+        return BigDecimal.valueOf(value).setScale(places, java.math.RoundingMode.HALF_EVEN).toPlainString();
+    }
+
+    /** The text of a radius with limits as this style draws it, e.g. {@code R1.8-2.2} or {@code CR 1.8-2.2}. */
+    public String formatLimits(RadiusKind kind, Units units, double min, double max, Double nominal) {
+        int places = placesFor(units, min, max, nominal == null ? min : nominal);
+        RadiusCallout c;
+        if (nominal == null) {
+            c = RadiusCallout.limits(kind, units, min, max, places);
+        } else {
+            BigDecimal n = RadiusCallout.decimal(nominal, places);
+            BigDecimal plus = RadiusCallout.decimal(max, places).subtract(n);
+            BigDecimal minus = RadiusCallout.decimal(min, places).subtract(n);
+            ToleranceForm form = plus.compareTo(minus.negate()) == 0
+                    ? new ToleranceForm.EqualBilateral(n, plus)
+                    : new ToleranceForm.Deviations(n, plus, minus);
+            c = new RadiusCallout(kind, units, form);
+        }
+        return format(c);
+    }
+
+    /** Fewest decimals (at least 1 in mm, 3 in inches, at most 4) that show all values exactly. */
+    private static int placesFor(Units units, double... values) {
+        int least = units == Units.INCH ? 3 : 1;
+        for (int p = least; p < 4; p++) {
+            boolean exact = true;
+            for (double v : values) {
+                if (Math.abs(v * Math.pow(10, p) - Math.rint(v * Math.pow(10, p))) > 1e-6) exact = false;
+            }
+            if (exact) return p;
+        }
+        return 4;
+    }
+
     /** What a reader of this style must be told beyond the callout text. */
     public List<String> remarks(RadiusCallout c) {
         List<String> out = new ArrayList<>();

@@ -153,4 +153,12 @@ class NotesStoreTest {
             assertThat(store.get("groove-corners")).isEmpty();
         }
     }
+
+    @Test
+    void aLongSnippetStartsNearItsFirstHighlight() {
+        String filler = "word ".repeat(120);
+        String snippet = NotesStore.trimSnippet(filler + "the **R0.5** fillet " + filler);
+        assertThat(snippet).startsWith("… ").contains("**R0.5**").hasSizeLessThan(330);
+        assertThat(NotesStore.trimSnippet("short **one**")).isEqualTo("short **one**");
+    }
 }

@@ -1,0 +1,125 @@
+package org.arcwright.cli;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.util.List;
+import java.util.Map;
+import org.arcwright.io.InputProblem;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.rules.Advice;
+import org.arcwright.rules.DesignCase;
+import org.arcwright.rules.NoteLink;
+import org.arcwright.rules.Recommendation;
+import org.arcwright.rules.RuleBook;
+
+/** Prints advice as text for a reader or as JSON for a program. */
+final class AdviceOutput {
+    private final JsonFiles json = new JsonFiles();
+
+    /** The advice as a JSON object: {@code feature}, {@code recommendations}, {@code conflicts}, {@code warnings}. */
+    ObjectNode toJson(String feature, Advice advice) {
+        ObjectNode root = json.mapper().createObjectNode();
+        if (feature != null) root.put("feature", feature);
+        ArrayNode recs = root.putArray("recommendations");
+        for (Recommendation r : advice.recommendations()) {
+            ObjectNode n = recs.addObject();
+            n.put("rule", r.ruleId());
+            ObjectNode callout = json.mapper().valueToTree(r.callout());
+            if (!callout.has("datums")) callout.set("datums", json.mapper().valueToTree(r.callout().allDatums()));
+            Map<String, Object> nums = r.numbers();
+            if (!callout.has("min") && nums.get("min") != null && !"general".equals(r.callout().typeName())) {
+                callout.set("admitsMin", json.mapper().valueToTree(nums.get("min")));
+                callout.set("admitsMax", json.mapper().valueToTree(nums.get("max")));
+            }
+            if ("general".equals(r.callout().typeName())) {
+                callout.set("min", json.mapper().valueToTree(nums.get("min")));
+                callout.set("max", json.mapper().valueToTree(nums.get("max")));
+            }
+            n.set("callout", callout);
+            n.put("text", r.text());
+            n.put("score", r.score());
+            n.put("demoted", r.demoted());
+            n.set("because", json.mapper().valueToTree(r.because()));
+            n.set("cautions", json.mapper().valueToTree(r.cautions()));
+            n.set("references", json.mapper().valueToTree(r.references()));
+            n.set("numbers", json.mapper().valueToTree(nums));
+            n.set("trace", json.mapper().valueToTree(r.trace()));
+            n.set("notes", json.mapper().valueToTree(r.notes()));
+        }
+        root.set("conflicts", json.mapper().valueToTree(advice.conflicts()));
+        root.set("warnings", json.mapper().valueToTree(advice.warnings()));
+        return root;
+    }
+
+    String write(JsonNode node) { return json.write(node); }
+
+    /** Packs and problems, for the top of a JSON answer. */
+    ObjectNode packs(RuleBook book, List<String> packNames) {
+        ObjectNode n = json.mapper().createObjectNode();
+        n.set("packs", json.mapper().valueToTree(packNames));
+        n.set("problems", json.mapper().valueToTree(book.problems().stream().map(InputProblem::getMessage).toList()));
+        return n;
+    }
+
+    void printText(PrintWriter out, Advice advice, int limit) {
+        DesignCase c = advice.designCase();
+        out.printf("%s%s R%s %s, %s, %s, %s, %s%s%s%n",
+                c.feature() == null ? "" : c.feature() + ": ", c.kind().key(),
+                Numbers.plain(c.nominalRadius()), c.units().symbol(), c.function().key(),
+                c.loading() == org.arcwright.rules.Loading.NONE ? "no load" : c.loading().key() + " load",
+                c.process().key(), c.standard().key().toUpperCase(java.util.Locale.ROOT),
+                c.hasDatums() ? ", datums " + String.join(" ", c.datums()) : ", no datums",
+                (c.formMatters() ? ", form matters" : "") + (c.locationMatters() ? ", location matters" : ""));
+        List<Recommendation> recs = advice.recommendations();
+        for (int i = 0; i < recs.size() && i < limit; i++) {
+            Recommendation r = recs.get(i);
+            out.println();
+            out.printf("%d. %s%n", i + 1, r.text());
+            out.printf("   %s, score %s%s, rule %s%n", r.callout().typeName(), Numbers.plain(r.score()),
+                    r.demoted() ? " (DEMOTED)" : "", r.ruleId());
+            for (String b : r.because()) out.println("   because   " + b);
+            out.println("   numbers   " + numbersLine(r.numbers()));
+            for (String t : r.cautions()) out.println("   caution   " + t);
+            for (String ref : r.references()) out.println("   reference " + ref);
+            for (NoteLink n : r.notes()) out.println("   note      " + n.title() + " [" + n.id() + ", " + n.pack() + "]");
+            for (String t : r.trace()) {
+                if (!t.startsWith("numbers: ") && !t.startsWith("tolerance from ")) out.println("   trace     " + t);
+            }
+        }
+        if (recs.size() > limit) {
+            out.println();
+            out.printf("(%d more; --all lists every recommendation, --format json gives everything)%n", recs.size() - limit);
+        }
+        for (String cf : advice.conflicts()) out.println("CONFLICT  " + cf);
+        for (String w : advice.warnings()) out.println("warning   " + w);
+    }
+
+    private static String numbersLine(Map<String, Object> m) {
+        StringBuilder sb = new StringBuilder();
+        String u = String.valueOf(m.get("units"));
+        int p = "in".equals(u) ? 4 : 3;
+        append(sb, m.containsKey("zone") ? "radius range the zone admits" : "limits", num(m, "min", p) + " to "
+                + num(m, "max", p) + " " + u);
+        if (m.containsKey("zone")) append(sb, "zone", m.get("zone") + (m.containsKey("tierZones") ? " (tiers " + m.get("tierZones") + ")" : ""));
+        append(sb, "crescent", num(m, "crescentWidth", p + 1));
+        append(sb, "equivalent profile zone", num(m, "equivalentProfileZone", p + 1));
+        if (m.containsKey("ktAtMin")) append(sb, "Kt at min/max", num(m, "ktAtMin", 2) + "/" + num(m, "ktAtMax", 2));
+        if (m.containsKey("kfAtMin")) append(sb, "Kf at min/max", num(m, "kfAtMin", 2) + "/" + num(m, "kfAtMax", 2));
+        if (m.containsKey("minRadiusForTarget")) append(sb, "smallest radius meeting the target", num(m, "minRadiusForTarget", p));
+        if (m.containsKey("seats")) append(sb, "seats", m.get("seats") + ", margin " + num(m, "seatingMargin", p) + " " + u);
+        sb.append("\n             tolerance from ").append(m.get("toleranceSource"));
+        return sb.toString();
+    }
+
+    private static String num(Map<String, Object> m, String key, int places) {
+        Object v = m.get(key);
+        return v instanceof Double d ? Numbers.fixed(d, places) : String.valueOf(v);
+    }
+
+    private static void append(StringBuilder sb, String k, String v) {
+        if (sb.length() > 0) sb.append("; ");
+        sb.append(k).append(' ').append(v);
+    }
+}

@@ -1,0 +1,54 @@
+package org.arcwright.cli;
+
+import java.io.Closeable;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.List;
+import org.arcwright.notes.NotesPaths;
+import org.arcwright.notes.NotesStore;
+import org.arcwright.pack.PackStack;
+import org.arcwright.rules.Advisor;
+import org.arcwright.rules.MechanicsChecks;
+import org.arcwright.rules.NoteLink;
+import org.arcwright.rules.NoteLinker;
+import org.arcwright.rules.RuleBook;
+
+/** Builds the advisor the commands use: the packs' rules, the mechanics checks and, when asked, the notes store. */
+final class Advisors {
+    private Advisors() {}
+
+    /** Rules of {@code stack} and the mechanics checks, no notes. */
+    static Advisor standard(PackStack stack, RuleBook book) {
+        return new Advisor(book, MechanicsChecks.standard(stack), NoteLinker.NONE);
+    }
+
+    /** The user's personal pack when it exists (the notes' default location), else null. */
+    static Path personalPack(Path given) {
+        Path p = given != null ? given : NotesPaths.ofSystem().personalPack();
+        return Files.isRegularFile(p.resolve("pack.json")) ? p : null;
+    }
+
+    /** An advisor with notes linked from the packs' notes, and the store to close when done. */
+    record WithNotes(Advisor advisor, Closeable store) {}
+
+    /**
+     * Opens the notes of {@code stack} (index under {@code indexRoot}, or the user's cache) and links
+     * them; when the store cannot open, the advisor works without notes and {@code warn} is told why.
+     */
+    static WithNotes withNotes(PackStack stack, RuleBook book, Path indexRoot, java.util.function.Consumer<String> warn) {
+        NotesStore store;
+        try {
+            Path root = indexRoot != null ? indexRoot : NotesPaths.ofSystem().indexRoot();
+            store = NotesStore.open(stack, NotesStore.indexFolderFor(root, stack));
+        } catch (RuntimeException e) {
+            warn.accept("notes not linked: " + e.getMessage());
+            return new WithNotes(standard(stack, book), () -> { });
+        }
+        NoteLinker linker = (tags, text, limit) -> {
+            List<NoteLink> out = store.related(tags, text, limit).stream()
+                    .map(h -> new NoteLink(h.id(), h.title(), h.pack())).toList();
+            return out;
+        };
+        return new WithNotes(new Advisor(book, MechanicsChecks.standard(stack), linker), store);
+    }
+}

@@ -1,0 +1,107 @@
+package org.arcwright.cli;
+
+import java.io.PrintWriter;
+import java.nio.file.Path;
+import java.util.List;
+import java.util.concurrent.Callable;
+import org.arcwright.io.InputProblem;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.PackLayer;
+import org.arcwright.pack.PackStack;
+import org.arcwright.pack.PracticePack;
+import org.arcwright.rules.PackCheck;
+import org.arcwright.rules.RuleBook;
+import org.arcwright.rules.RuleConflict;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Model.CommandSpec;
+import picocli.CommandLine.Option;
+import picocli.CommandLine.Parameters;
+import picocli.CommandLine.Spec;
+
+/** {@code arcwright pack}: work on practice packs. */
+@Command(name = "pack", mixinStandardHelpOptions = true, description = "Work on practice packs.",
+        subcommands = {PackCommand.Check.class})
+final class PackCommand implements Runnable {
+    @Spec
+    CommandSpec spec;
+
+    @Override
+    public void run() {
+        spec.commandLine().usage(spec.commandLine().getOut());
+    }
+
+    /** {@code arcwright pack check DIR}. */
+    @Command(name = "check", mixinStandardHelpOptions = true,
+            description = {"Validate a practice pack layered over the built-in one and run its rules' examples.",
+                    "Exit 0 when it loads cleanly, adds no conflicts and its examples pass; 1 otherwise."})
+    static final class Check implements Callable<Integer> {
+        @Spec
+        CommandSpec spec;
+
+        @Parameters(index = "0", paramLabel = "DIR", description = "The pack folder (with pack.json).")
+        Path dir;
+
+        @Option(names = "--pack", paramLabel = "DIR", description = "Packs to layer below the one checked (repeatable).")
+        List<Path> below = List.of();
+
+        @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE}).")
+        OutputFormat format;
+
+        @Override
+        public Integer call() {
+            PracticePack checked = PracticePack.open(dir, PackLayer.TEAM, new JsonFiles());
+            PackStack stack;
+            PracticePack builtIn = PracticePack.open(PackStack.builtInRoot(), PackLayer.BUILT_IN, new JsonFiles());
+            if (checked.name().equals(builtIn.name()) && below.isEmpty()) {
+                // the built-in pack itself, e.g. knowledge/ while editing it: check it alone
+                stack = new PackStack(List.of(PracticePack.open(dir, PackLayer.BUILT_IN, new JsonFiles())), List.of());
+            } else {
+                List<Path> layers = new java.util.ArrayList<>(below);
+                layers.add(dir);
+                stack = PackStack.load(layers, null);
+            }
+            RuleBook book = RuleBook.load(stack);
+            PackCheck.Report report = new PackCheck(Advisors.standard(stack, book)).run(checked.name());
+            PrintWriter out = spec.commandLine().getOut();
+            if (format == OutputFormat.json) {
+                java.util.Map<String, Object> m = new java.util.LinkedHashMap<>();
+                m.put("pack", report.pack());
+                m.put("passed", report.passed());
+                m.put("problems", report.problems().stream().map(InputProblem::getMessage).toList());
+                m.put("conflicts", report.conflicts().stream().map(RuleConflict::message).toList());
+                m.put("examples", report.examples());
+                out.println(new JsonFiles().write(m));
+            } else {
+                printText(out, report, book);
+            }
+            return report.passed() ? Cli.OK : Cli.FAIL;
+        }
+
+        private static void printText(PrintWriter out, PackCheck.Report r, RuleBook book) {
+            long own = r.examples().stream().filter(PackCheck.ExampleResult::own).count();
+            long ownRules = book.entries().stream().filter(e -> e.pack().equals(r.pack())).count();
+            out.printf("Pack '%s': %d rules in force (%d its own), %d examples of its own%n", r.pack(),
+                    book.entries().size(), ownRules, own);
+            for (InputProblem p : r.problems()) out.println("  PROBLEM   " + p.getMessage());
+            for (RuleConflict c : r.conflicts()) out.println("  CONFLICT  " + c.message());
+            for (PackCheck.ExampleResult e : r.examples()) {
+                if (!e.own()) continue;
+                out.printf("  %s  %s: %s%n", e.passed() ? "pass" : "FAIL", e.ruleId(), e.name());
+                if (!e.passed()) {
+                    out.println("        expected " + e.expected());
+                    out.println("        got      " + e.actual());
+                }
+            }
+            for (PackCheck.ExampleResult e : r.changed()) {
+                out.printf("  changed   %s (%s): %s now gives %s%n", e.ruleId(), e.pack(), e.name(), e.actual());
+            }
+            for (RuleBook.Entry e : book.entries()) {
+                if (e.pack().equals(r.pack()) && e.replaces() != null) {
+                    out.printf("  override  %s replaces the rule of the same id from %s%n", e.rule().id(), e.replaces());
+                }
+            }
+            out.println(r.passed() ? "PASS" : "FAIL: " + r.problems().size() + " problem(s), " + r.conflicts().size()
+                    + " conflict(s), " + r.failures().size() + " failed example(s)");
+        }
+    }
+}

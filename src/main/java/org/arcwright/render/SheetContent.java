@@ -1,0 +1,192 @@
+package org.arcwright.render;
+
+import java.util.ArrayList;
+import java.util.LinkedHashSet;
+import java.util.List;
+import java.util.Map;
+import java.util.Objects;
+import java.util.Set;
+import org.arcwright.callout.Callout;
+import org.arcwright.rules.DesignCase;
+import org.arcwright.rules.NoteLink;
+import org.arcwright.rules.Recommendation;
+import org.arcwright.templates.CalloutText;
+import org.arcwright.templates.Figures;
+import org.arcwright.templates.NoteContext;
+import org.arcwright.templates.NoteTemplate;
+import org.arcwright.templates.NoteTemplates;
+import org.arcwright.tolerance.DrawingStyle;
+import org.arcwright.tolerance.Units;
+import org.arcwright.worksheet.InspectionRecord;
+import org.arcwright.worksheet.PartWorksheet;
+import org.arcwright.worksheet.RadiusFeature;
+
+/**
+ * What the tolerancing sheet of a part says, independent of its file format: facts of the part, a
+ * summary table, the general notes, one section per feature, and the cautions with the deferral
+ * to the governing standard at the end. Markdown, HTML and PDF writers all render this.
+ *
+ * @param title the sheet's title
+ * @param partNumber the part number with its revision, for running footers
+ * @param partFacts label and value pairs about the part
+ * @param summary one row per feature
+ * @param generalNotes filled title-block and edge-break note templates, may be empty
+ * @param features one section per feature, in drawing order
+ * @param cautions the usual cautions, then every feature's prefixed with the ids of the features it
+ *     concerns, each text once
+ * @param deferral the closing deferral to the governing standard
+ * @param generatedBy program and version
+ * @param style the part's drawing style
+ * @param units the part's units
+ */
+public record SheetContent(String title, String partNumber, List<Fact> partFacts, List<SummaryRow> summary, List<String> generalNotes,
+                           List<FeatureSection> features, List<String> cautions, String deferral, String generatedBy,
+                           DrawingStyle style, Units units) {
+
+    /** The usual cautions, always on the sheet (common practice; README "Cautions"). */
+    public static final List<String> USUAL_CAUTIONS = List.of(
+            "A ± or limit radius bounds size only: flats, dips and a step at the tangent point can still pass. "
+                    + "Where form or location matters, use a controlled radius or a profile of a surface tolerance.",
+            "Stress concentration figures are handbook estimates from curve fits; fatigue-critical parts need "
+                    + "analysis or test to the governing code.",
+            "Arcwright's readings of ASME Y14.5 and ISO 1101 are summaries, not the standards' text.");
+
+    /** Closing words of every sheet. */
+    public static final String DEFERRAL = "This sheet is design guidance, not approval. Parts fail and people get hurt "
+            + "when a stress-relief fillet is wrong: the governing standard (ASME Y14.5-2018 or ISO 1101 as the drawing "
+            + "states), the company's own practice and licensed engineering judgement decide.";
+
+    public SheetContent {
+        partFacts = List.copyOf(partFacts);
+        summary = List.copyOf(summary);
+        generalNotes = List.copyOf(generalNotes);
+        features = List.copyOf(features);
+        cautions = List.copyOf(cautions);
+    }
+
+    /** A labelled fact. */
+    public record Fact(String label, String value) {}
+
+    /** One row of the summary table. */
+    public record SummaryRow(String id, String feature, String function, String control, String callout, String status) {}
+
+    /**
+     * One feature's section.
+     *
+     * @param id feature id
+     * @param heading the feature's name
+     * @param caseLine what the engineer said about it, in one line
+     * @param callout the chosen control, or null while undecided
+     * @param calloutPlain plain one-line text of the control, or empty
+     * @param calloutUnicode Unicode one-line text, or empty
+     * @param calloutWords the control in words, or empty
+     * @param because reasoning
+     * @param figures the numbers behind the choice
+     * @param cautions what to watch
+     * @param references standards and handbooks
+     * @param notes linked practice notes
+     * @param drawingNote the filled per-callout note template, or empty
+     * @param inspectionNote the filled inspection-plan template, or empty
+     * @param inspection the latest inspection, in words, or empty
+     * @param demoted true when the chosen recommendation failed one of its checks
+     */
+    public record FeatureSection(String id, String heading, String caseLine, Callout callout, String calloutPlain,
+                                 String calloutUnicode, String calloutWords, List<String> because,
+                                 List<Figures.Figure> figures, List<String> cautions, List<String> references,
+                                 List<NoteLink> notes, String drawingNote, String inspectionNote, String inspection,
+                                 boolean demoted) {
+        /** True when a control is chosen. */
+        public boolean decided() { return callout != null; }
+    }
+
+    /**
+     * Builds the content of {@code ws}'s sheet, filling the templates {@code title-block-notes},
+     * {@code edge-break-notes}, {@code callout-note} and {@code inspection-plan} where the packs
+     * have them.
+     */
+    public static SheetContent of(PartWorksheet ws, NoteTemplates templates, String generatedBy) {
+        Objects.requireNonNull(ws, "worksheet");
+        Objects.requireNonNull(templates, "templates");
+        CalloutText text = new CalloutText(ws.standard(), ws.units());
+        NoteContext ctx = new NoteContext(ws, generatedBy);
+        PartWorksheet.PartInfo p = ws.part();
+        String title = "Tolerancing sheet: " + p.number() + (p.name() == null ? "" : " " + p.name())
+                + (p.revision() == null ? "" : ", rev " + p.revision());
+        List<Fact> facts = new ArrayList<>();
+        facts.add(new Fact("Part", p.number() + (p.name() == null ? "" : " — " + p.name())));
+        if (p.company() != null) facts.add(new Fact("Company", p.company()));
+        if (p.material() != null) facts.add(new Fact("Material", p.material()));
+        if (p.revision() != null) facts.add(new Fact("Revision", p.revision()));
+        facts.add(new Fact("Standard", ws.standard() == DrawingStyle.ASME ? "ASME Y14.5-2018" : "ISO 1101 / ISO 129-1"));
+        facts.add(new Fact("Units", ws.units() == Units.MM ? "millimetres" : "inches"));
+        facts.add(new Fact("Title block", CalloutText.tableText(ws.titleBlock().table(), ws.titleBlock().toleranceClass())));
+        long decided = ws.features().stream().filter(f -> f.chosen() != null).count();
+        facts.add(new Fact("Features", ws.features().size() + " (" + decided + " decided, "
+                + (ws.features().size() - decided) + " undecided)"));
+
+        List<String> general = new ArrayList<>();
+        for (String name : List.of("title-block-notes", "edge-break-notes")) {
+            templates.find(name).filter(t -> !t.perFeature()).ifPresent(t -> general.add(t.fill(ctx.forPart()).strip()));
+        }
+
+        List<SummaryRow> rows = new ArrayList<>();
+        List<FeatureSection> sections = new ArrayList<>();
+        Map<String, List<String>> byCaution = new java.util.LinkedHashMap<>();
+        for (RadiusFeature f : ws.features()) {
+            DesignCase c = f.designCase();
+            String heading = c.feature() == null ? f.id() : c.feature();
+            Recommendation r = f.chosen();
+            String status = r == null ? "undecided" : f.status().label() + (r.demoted() ? " (demoted)" : "");
+            rows.add(new SummaryRow(f.id(), heading, c.function().key(),
+                    r == null ? "—" : CalloutText.controlName(r.callout()),
+                    r == null ? "undecided" : text.line(r.callout(), false).replace("\n", " / "), status));
+            String caseLine = c.kind().key() + ", " + c.function().key() + ", "
+                    + (c.loading() == org.arcwright.rules.Loading.NONE ? "no service load" : c.loading().key() + " loading")
+                    + ", "
+                    + c.process().key() + ", nominal R" + text.value(c.nominalRadius()) + " " + ws.units().symbol()
+                    + (c.datums().isEmpty() ? "" : ", datums " + String.join(", ", c.datums()))
+                    + (c.tolerance() == null ? "" : ", intent " + c.tolerance());
+            if (r == null) {
+                sections.add(new FeatureSection(f.id(), heading, caseLine, null, "", "", "", List.of(), List.of(),
+                        List.of(), List.of(), List.of(), "", "", inspection(f.inspection(), ctx), false));
+                continue;
+            }
+            List<String> featureCautions = new ArrayList<>(styleRemarks(r.callout(), ws));
+            featureCautions.addAll(r.cautions());
+            for (String fc : featureCautions) byCaution.computeIfAbsent(fc, k -> new ArrayList<>()).add(f.id());
+            sections.add(new FeatureSection(f.id(), heading, caseLine, r.callout(), text.line(r.callout(), false),
+                    text.line(r.callout(), true), text.words(r.callout()), r.because(), Figures.of(r.numbers(), text),
+                    featureCautions, r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
+                    fill(templates, "inspection-plan", ctx, f), inspection(f.inspection(), ctx), r.demoted()));
+        }
+        Set<String> cautions = new LinkedHashSet<>(USUAL_CAUTIONS);
+        for (Map.Entry<String, List<String>> e : byCaution.entrySet()) {
+            cautions.add(String.join(", ", e.getValue()) + ": " + e.getKey());
+        }
+        return new SheetContent(title, p.number() + (p.revision() == null ? "" : " rev " + p.revision()), facts, rows, general, sections, List.copyOf(cautions), DEFERRAL,
+                generatedBy == null ? "Arcwright" : generatedBy, ws.standard(), ws.units());
+    }
+
+    /** What the drawing style says beyond the text, e.g. that ISO has no controlled radius. */
+    private static List<String> styleRemarks(Callout c, PartWorksheet ws) {
+        if (c instanceof Callout.ControlledRadius cr) return ws.standard().remarks(cr.toRadiusCallout(ws.units(), 4));
+        if (c instanceof Callout.Radius r) return ws.standard().remarks(r.toRadiusCallout(ws.units(), 4));
+        return List.of();
+    }
+
+    private static String fill(NoteTemplates templates, String name, NoteContext ctx, RadiusFeature f) {
+        NoteTemplate t = templates.find(name).orElse(null);
+        if (t == null) return "";
+        return (t.perFeature() ? t.fill(ctx.forFeature(f)) : t.fill(ctx.forPart())).strip();
+    }
+
+    private static String inspection(InspectionRecord i, NoteContext ctx) {
+        if (i == null) return "";
+        StringBuilder sb = new StringBuilder(i.passed() ? "PASS" : "FAIL");
+        if (i.measuredOn() != null) sb.append(", measured ").append(i.measuredOn());
+        if (i.source() != null) sb.append(" (").append(i.source()).append(')');
+        List<Map<String, Object>> figs = ctx.figures(i.figures());
+        for (Map<String, Object> m : figs) sb.append("; ").append(m.get("label")).append(' ').append(m.get("value"));
+        return sb.toString();
+    }
+}

@@ -1,0 +1,201 @@
+package org.arcwright.rules;
+
+import com.fasterxml.jackson.databind.MappingIterator;
+import com.fasterxml.jackson.dataformat.csv.CsvMapper;
+import com.fasterxml.jackson.dataformat.csv.CsvParser;
+import com.fasterxml.jackson.dataformat.csv.CsvSchema;
+import java.io.IOException;
+import java.io.Reader;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.Arrays;
+import java.util.List;
+import java.util.Map;
+import org.arcwright.io.InputProblem;
+import org.arcwright.tolerance.DrawingStyle;
+import org.arcwright.tolerance.Units;
+
+/**
+ * A part's radii as a CSV table, one row per feature, for advising in one go. The header names the
+ * columns (any order; blank cells are absent values); see {@link #COLUMNS}. Bad rows are
+ * {@link InputProblem}s naming the file, the line and the column.
+ */
+public final class CaseTable {
+    /** The columns a table may have; those marked required must be present in the header. */
+    public static final List<String> COLUMNS = List.of("feature", "units", "standard", "kind", "nominalRadius",
+            "function", "loading", "formMatters", "locationMatters", "datums", "process", "tolerance", "stress.shape",
+            "stress.load", "stress.D", "stress.d", "stress.ultimateStrength", "stress.targetKt", "mating.corner",
+            "mating.size", "mating.angle");
+    /** Columns every table needs. */
+    public static final List<String> REQUIRED = List.of("feature", "units", "standard", "kind", "nominalRadius",
+            "function", "process");
+
+    private CaseTable() {}
+
+    /** One row: the line it came from and the case it describes. */
+    public record Row(int line, String feature, DesignCase designCase) {}
+
+    /** Reads every row of {@code file}. */
+    public static List<Row> read(Path file) {
+        String src = file.toString();
+        CsvMapper mapper = new CsvMapper();
+        mapper.enable(CsvParser.Feature.TRIM_SPACES);
+        mapper.enable(CsvParser.Feature.SKIP_EMPTY_LINES);
+        CsvSchema schema = CsvSchema.emptySchema().withHeader().withComments();
+        List<Row> rows = new ArrayList<>();
+        try (Reader reader = Files.newBufferedReader(file, StandardCharsets.UTF_8);
+             MappingIterator<Map<String, String>> it = mapper.readerFor(Map.class).with(schema).readValues(reader)) {
+            CsvSchema header = null;
+            while (true) {
+                boolean more;
+                try {
+                    more = it.hasNextValue();
+                } catch (IOException e) {
+                    throw new InputProblem(src, it.getCurrentLocation().getLineNr(), 0, null, e.getMessage());
+                }
+                if (!more) break;
+                int line = it.getCurrentLocation().getLineNr();
+                Map<String, String> values;
+                try {
+                    values = it.nextValue();
+                } catch (IOException | RuntimeException e) {
+                    throw new InputProblem(src, line, 0, null, "unreadable row: " + firstLine(e.getMessage()));
+                }
+                if (header == null) {
+                    header = (CsvSchema) it.getParserSchema();
+                    checkHeader(src, header);
+                }
+                rows.add(row(src, line, values));
+            }
+        } catch (NoSuchFileException e) {
+            throw new InputProblem(src, 0, 0, null, "file not found");
+        } catch (IOException e) {
+            throw new UncheckedIOException("could not read " + src + ": " + e.getMessage(), e);
+        }
+        if (rows.isEmpty()) throw new InputProblem(src, 1, 0, null, "no rows: expected a header and one row per feature");
+        return List.copyOf(rows);
+    }
+
+    private static void checkHeader(String src, CsvSchema header) {
+        List<String> names = new ArrayList<>();
+        header.forEach(c -> names.add(c.getName()));
+        for (String n : names) {
+            if (!COLUMNS.contains(n)) {
+                throw new InputProblem(src, 1, names.indexOf(n) + 1, n, "unknown column '" + n + "'; known columns: "
+                        + String.join(", ", COLUMNS));
+            }
+        }
+        for (String r : REQUIRED) {
+            if (!names.contains(r)) {
+                throw new InputProblem(src, 1, 0, r, "missing column '" + r + "'; required: " + String.join(", ", REQUIRED));
+            }
+        }
+    }
+
+    private static Row row(String src, int line, Map<String, String> v) {
+        String field = null;
+        try {
+            field = "feature";
+            String feature = text(v, "feature");
+            field = "units";
+            Units units = Units.parse(required(v, "units"));
+            field = "standard";
+            DrawingStyle standard = DrawingStyle.parse(required(v, "standard"));
+            field = "kind";
+            BlendKind kind = BlendKind.fromKey(required(v, "kind"));
+            field = "nominalRadius";
+            double r = number(required(v, "nominalRadius"));
+            field = "function";
+            BlendFunction function = BlendFunction.fromKey(required(v, "function"));
+            field = "loading";
+            Loading loading = text(v, "loading") == null ? Loading.NONE : Loading.fromKey(text(v, "loading"));
+            field = "formMatters";
+            boolean form = bool(text(v, "formMatters"));
+            field = "locationMatters";
+            boolean location = bool(text(v, "locationMatters"));
+            field = "datums";
+            List<String> datums = text(v, "datums") == null ? List.of()
+                    : Arrays.stream(text(v, "datums").split("[\\s,;]+")).filter(s -> !s.isEmpty()).toList();
+            field = "process";
+            Process process = Process.fromKey(required(v, "process"));
+            field = "stress.shape";
+            DesignCase.StressInputs stress = null;
+            if (text(v, "stress.shape") != null) {
+                String shape = text(v, "stress.shape");
+                field = "stress.load";
+                String load = required(v, "stress.load");
+                field = "stress.D";
+                double bigD = number(required(v, "stress.D"));
+                field = "stress.d";
+                double smallD = number(required(v, "stress.d"));
+                field = "stress.ultimateStrength";
+                String su = text(v, "stress.ultimateStrength");
+                DesignCase.Strength strength = su == null ? null : new DesignCase.Strength(number(su), "MPa");
+                field = "stress.targetKt";
+                String kt = text(v, "stress.targetKt");
+                field = "stress.shape";
+                stress = new DesignCase.StressInputs(shape, load, bigD, smallD, strength, kt == null ? null : number(kt));
+            }
+            field = "mating.corner";
+            DesignCase.MatingCorner mating = null;
+            if (text(v, "mating.corner") != null) {
+                String corner = text(v, "mating.corner");
+                field = "mating.size";
+                double size = number(required(v, "mating.size"));
+                field = "mating.angle";
+                String angle = text(v, "mating.angle");
+                field = "mating.corner";
+                mating = new DesignCase.MatingCorner(corner, size, angle == null ? null : number(angle));
+            }
+            field = "nominalRadius";
+            DesignCase c = new DesignCase(units, standard, feature, kind, r, function, loading, form, location, datums,
+                    process, stress, mating, text(v, "tolerance"));
+            return new Row(line, feature == null ? "line " + line : feature, c);
+        } catch (InputProblem p) {
+            throw new InputProblem(src, line, 0, field, p.problem());
+        } catch (IllegalArgumentException e) {
+            throw new InputProblem(src, line, 0, field, e.getMessage());
+        }
+    }
+
+    private static String text(Map<String, String> v, String key) {
+        String s = v.get(key);
+        return s == null || s.isBlank() ? null : s.trim();
+    }
+
+    private static String required(Map<String, String> v, String key) {
+        String s = text(v, key);
+        if (s == null) throw new IllegalArgumentException("missing value");
+        return s;
+    }
+
+    private static double number(String s) {
+        double d;
+        try {
+            d = Double.parseDouble(s);
+        } catch (NumberFormatException e) {
+            throw new IllegalArgumentException("not a number: '" + s + "'");
+        }
+        if (!Double.isFinite(d)) throw new IllegalArgumentException("not a finite number: '" + s + "'");
+        return d;
+    }
+
+    private static boolean bool(String s) {
+        if (s == null) return false;
+        return switch (s.toLowerCase(java.util.Locale.ROOT)) {
+            case "true", "yes", "y", "1" -> true;
+            case "false", "no", "n", "0" -> false;
+            default -> throw new IllegalArgumentException("expected true or false, got '" + s + "'");
+        };
+    }
+
+    private static String firstLine(String s) {
+        if (s == null) return "";
+        int nl = s.indexOf('\n');
+        return nl < 0 ? s : s.substring(0, nl);
+    }
+}

@@ -1,0 +1,135 @@
+package org.arcwright.render;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.pdmodel.PDDocument;
+import org.apache.pdfbox.text.PDFTextStripper;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.PackStack;
+import org.arcwright.templates.NoteTemplates;
+import org.arcwright.testing.Golden;
+import org.arcwright.worksheet.PartWorksheet;
+import org.arcwright.worksheet.RadiusFeature;
+import org.arcwright.worksheet.WorksheetFiles;
+import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** The tolerancing sheet of the demo part (an invented company and part) in all three formats. */
+class SheetExporterTest {
+    private static SheetExporter exporter;
+    private static NoteTemplates templates;
+    private static PartWorksheet demo;
+
+    @BeforeAll
+    static void setUp() {
+        exporter = SheetExporter.withBundledFont();
+        templates = NoteTemplates.load(PackStack.builtIn());
+        demo = new WorksheetFiles(new JsonFiles()).read(Path.of("examples/tarnbeck-output-shaft-decided.arcpart"));
+    }
+
+    @Test
+    void pdfParsedBackHoldsEveryFeaturesCalloutTheSummaryAndTheDeferral(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("td-2207-b.pdf");
+        exporter.export(demo, templates, "Arcwright test", out, null);
+        String text;
+        try (PDDocument doc = Loader.loadPDF(out.toFile())) {
+            assertThat(doc.getNumberOfPages()).isBetween(2, 8);
+            text = new PDFTextStripper().getText(doc);
+        }
+        SheetContent content = exporter.content(demo, templates, "t");
+        for (SheetContent.FeatureSection f : content.features()) {
+            assertThat(text).contains(f.id() + " " + f.heading());
+            if (f.decided()) assertThat(text).as(f.id()).contains(f.calloutPlain().replace("\n", " / "));
+        }
+        assertThat(text).contains("Summary", "undecided", "Kt at the smallest radius", "1.94", "seating margin", "0.1 mm",
+                "crescent width", "0.1657 mm", "governing standard", "licensed engineering judgement", "page 1 of");
+        // the frame's own text is real text in the PDF, not only outlines
+        assertThat(text).contains("0.06", "CR2 ±0.2");
+    }
+
+    @Test
+    void undecidedFeaturesAreSaidToBeUndecided() {
+        SheetContent content = exporter.content(demo, templates, "t");
+        SheetContent.FeatureSection f5 = content.features().get(4);
+        assertThat(f5.decided()).isFalse();
+        assertThat(content.summary().get(4).status()).isEqualTo("undecided");
+        assertThat(exporter.markdown(content, "x")).contains("**Undecided:** no control is chosen");
+    }
+
+    @Test
+    void markdownMatchesItsGoldenFileAndWritesOneSvgPerDecidedFeature(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("sheet.md");
+        exporter.export(demo, templates, "Arcwright test", out, null);
+        Golden.assertMatches("sheets/tarnbeck-output-shaft.md", Files.readString(out));
+        for (RadiusFeature f : demo.features()) {
+            assertThat(dir.resolve("sheet-frames/" + f.id() + ".svg")).matches(p -> Files.exists(p) == (f.chosen() != null));
+        }
+    }
+
+    @Test
+    void htmlIsOnePageWithTheFramesInlined(@TempDir Path dir) throws Exception {
+        Path out = dir.resolve("sheet.html");
+        exporter.export(demo, templates, "Arcwright test", out, null);
+        String html = Files.readString(out);
+        assertThat(html).startsWith("<!DOCTYPE html>").contains("<h2>Summary</h2>", "<h2>Cautions</h2>");
+        assertThat(html.split("<svg ", -1)).hasSize(1 + 4);
+        assertThat(html.indexOf("Summary")).isLessThan(html.indexOf("id=\"F1\""));
+        assertThat(html.lastIndexOf("governing standard")).isGreaterThan(html.indexOf("id=\"F5\""));
+        Golden.assertMatches("sheets/tarnbeck-output-shaft.html", html);
+    }
+
+    @Test
+    void progressIsReportedInOrderUpToTheTotal(@TempDir Path dir) {
+        List<int[]> steps = new ArrayList<>();
+        exporter.export(demo, templates, "t", dir.resolve("s.pdf"), (done, total, step) -> steps.add(new int[] {done, total}));
+        assertThat(steps).isNotEmpty();
+        int[] last = steps.get(steps.size() - 1);
+        assertThat(last[0]).isEqualTo(last[1]);
+        for (int i = 1; i < steps.size(); i++) {
+            assertThat((double) steps.get(i)[0] / steps.get(i)[1])
+                    .isGreaterThanOrEqualTo((double) steps.get(i - 1)[0] / steps.get(i - 1)[1]);
+        }
+    }
+
+    @Test
+    void theSheetOfAPartWithNoDecisionsStillRenders(@TempDir Path dir) throws Exception {
+        PartWorksheet open = new WorksheetFiles(new JsonFiles()).read(Path.of("examples/tarnbeck-output-shaft.arcpart"));
+        Path out = dir.resolve("open.pdf");
+        exporter.export(open, templates, "t", out, null);
+        try (PDDocument doc = Loader.loadPDF(out.toFile())) {
+            assertThat(new PDFTextStripper().getText(doc)).contains("0 decided, 5 undecided");
+        }
+    }
+
+    @Test
+    void anIsoSheetSaysThatIsoHasNoControlledRadius() {
+        PartWorksheet iso = new PartWorksheet(1, demo.part(), demo.units(), org.arcwright.tolerance.DrawingStyle.ISO,
+                demo.titleBlock(), demo.features());
+        SheetContent content = exporter.content(iso, templates, "t");
+        SheetContent.FeatureSection f1 = content.features().get(0);
+        assertThat(f1.calloutPlain()).isEqualTo("R2 ±0.2");
+        assertThat(f1.cautions().get(0)).contains("no ISO equivalent");
+    }
+
+    @Test
+    void aLongUnbrokenPathIsWrappedInsideThePage(@TempDir Path dir) throws Exception {
+        String path = "cmm/" + "very-long-inspection-folder-name-".repeat(8) + "f1.csv";
+        RadiusFeature f1 = demo.features().get(0);
+        PartWorksheet ws = demo.withFeature(f1.withInspection(
+                new org.arcwright.worksheet.InspectionRecord("pass", path, "2026-11-20", java.util.Map.of())));
+        Path out = dir.resolve("long.pdf");
+        exporter.export(ws, templates, "t", out, null);
+        try (PDDocument doc = Loader.loadPDF(out.toFile())) {
+            PDFTextStripper strip = new PDFTextStripper();
+            String text = strip.getText(doc);
+            assertThat(text.replace("\n", "").replace("\r", "")).contains(path);
+            for (String line : text.split("\n")) assertThat(line.length()).as(line).isLessThan(140);
+        }
+    }
+}
