@@ -25,9 +25,9 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code arcwright inspect FILE}: does a measured section pass its callout, and why. */
 @Command(name = "inspect", mixinStandardHelpOptions = true,
-        description = {"Judges a measured section of a fillet or round against its callout and shows why:",
-                "radius, controlled radius, profile (located, floating, dynamic, unequal), composite profile.",
-                "Exit 0 pass, 1 fail, 2 bad input."})
+        description = {"Judges a measured section of a fillet or round against its callout and says why.",
+                "Callouts: radius, controlled radius, profile (located, floating, dynamic,",
+                "unequal), composite profile. Exit 0 pass, 1 fail, 2 bad input."})
 final class InspectCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
