@@ -25,13 +25,14 @@ import picocli.CommandLine.Model.CommandSpec;
 
 /** {@code arcwright inspect FILE}: does a measured section pass its callout, and why. */
 @Command(name = "inspect", mixinStandardHelpOptions = true,
-        description = {"Judges a measured section of a fillet or round against its callout (radius, controlled radius,",
-                "profile located/floating/dynamic, composite profile) and shows why. Exit 0 pass, 1 fail, 2 bad input."})
+        description = {"Judges a measured section of a fillet or round against its callout and says why.",
+                "Callouts: radius, controlled radius, profile (located, floating, dynamic,",
+                "unequal), composite profile. Exit 0 pass, 1 fail, 2 bad input."})
 final class InspectCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
 
-    @Parameters(index = "0", paramLabel = "FILE", description = "Inspection file (JSON): units, corner, nominalRadius, callout, points or pointsFile.")
+    @Parameters(index = "0", paramLabel = "FILE", description = "Inspection file (JSON): units, corner (or contour), nominalRadius, callout, points or pointsFile (CSV).")
     Path file;
 
     @Option(names = "--compare", description = "Also judge the points under every applicable callout, side by side.")

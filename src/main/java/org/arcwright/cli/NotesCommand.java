@@ -212,7 +212,7 @@ final class NotesCommand implements Runnable {
     /** {@code notes add FILE} */
     @Command(name = "add", mixinStandardHelpOptions = true,
             description = {"Add a note file to your personal pack and index it.",
-                    "The file needs a header: see 'arcwright notes show note-format' or DEVELOPERS.md."})
+                    "The file needs a header: see 'arcwright notes show writing-a-practice-note'."})
     static final class Add implements Callable<Integer> {
         @Spec
         CommandSpec spec;

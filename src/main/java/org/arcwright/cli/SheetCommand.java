@@ -20,7 +20,8 @@ import picocli.CommandLine.Spec;
 @Command(name = "sheet", mixinStandardHelpOptions = true,
         description = {"Exports a part's tolerancing sheet as Markdown, HTML or PDF, chosen by the extension of OUT.",
                 "A summary table, then per feature the callout, its frame, the reasoning, the numbers, cautions and",
-                "notes; the cautions and the deferral to the governing standard at the end."})
+                "notes; the cautions and the deferral to the governing standard at the end. Undecided features",
+                "show the advisor's first recommendation, marked as not chosen (--no-suggest leaves it out)."})
 final class SheetCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -34,6 +35,9 @@ final class SheetCommand implements Callable<Integer> {
     @Option(names = "--pack", paramLabel = "DIR", description = "A practice pack to layer over the built-in one (repeatable).")
     List<Path> packs = List.of();
 
+    @Option(names = "--no-suggest", description = "Do not show the advisor's suggestion for undecided features.")
+    boolean noSuggest;
+
     @Override
     public Integer call() {
         SheetExporter.Format.of(out);
@@ -41,7 +45,12 @@ final class SheetCommand implements Callable<Integer> {
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         NoteTemplates templates = NoteTemplates.load(stack);
         PartWorksheet ws = new WorksheetFiles(new JsonFiles()).read(part);
-        SheetExporter.withBundledFont().export(ws, templates, new VersionProvider().getVersion()[0], out,
+        SheetExporter.Suggestions suggestions = SheetExporter.Suggestions.NONE;
+        if (!noSuggest) {
+            org.arcwright.rules.Advisor advisor = Advisors.standard(stack, org.arcwright.rules.RuleBook.load(stack));
+            suggestions = c -> advisor.advise(c).first();
+        }
+        SheetExporter.withBundledFont().export(ws, templates, new VersionProvider().getVersion()[0], suggestions, out,
                 SheetExporter.Progress.NONE);
         PrintWriter pw = spec.commandLine().getOut();
         long open = ws.features().stream().filter(f -> f.chosen() == null).count();

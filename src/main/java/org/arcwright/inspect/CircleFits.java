@@ -138,7 +138,7 @@ public final class CircleFits {
             }
             double stepSize = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]);
             double scale = Math.abs(r) + Math.hypot(a, b);
-            if (stepSize <= 1e-14 * scale) break;
+            if (stepSize <= 1e-10 * scale) break; // converged (see below); a trial would only meet rounding
             double[] trial = new double[9];
             double tc = normal(xs, ys, n, mx, my, a + d[0], b + d[1], r + d[2], trial);
             // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
@@ -204,6 +204,7 @@ public final class CircleFits {
         double width = distances(xs, ys, n, cx, cy, d, ux, uy);
         int[] working = initialSectors(xs, ys, n, cx, cy, d);
         int pass = 0;
+        double[] nd = null, nux = null, nuy = null;
         while (pass < 100) {
             pass++;
             ZoneLp lp = new ZoneLp(n, d, ux, uy, trust);
@@ -212,15 +213,18 @@ public final class CircleFits {
             System.arraycopy(working, 0, init, 4, working.length);
             ActiveSetLp.Result res = ActiveSetLp.solve(lp, dedupe(init), 1e-14 * scale);
             double dx = res.z()[0], dy = res.z()[1];
-            double[] nd = new double[n], nux = new double[n], nuy = new double[n];
+            if (nd == null) { nd = new double[n]; nux = new double[n]; nuy = new double[n]; }
             double nw = distances(xs, ys, n, cx + dx, cy + dy, nd, nux, nuy);
             working = pointConstraints(res.working(), n);
             double step = Math.hypot(dx, dy);
             if (nw <= width || step <= 1e-14 * scale) {
                 cx += dx; cy += dy;
-                boolean done = step <= 1e-9 * scale || width - nw <= 1e-15 * scale;
+                boolean done = step <= 1e-7 * scale || width - nw <= 1e-15 * scale;
                 width = Math.min(width, nw);
+                // swap buffers: the old distances become scratch for the next trial
+                double[] t1 = d, t2 = ux, t3 = uy;
                 d = nd; ux = nux; uy = nuy;
+                nd = t1; nux = t2; nuy = t3;
                 if (done) break;
                 trust = Math.max(trust, 4 * step);
             } else {
@@ -267,8 +271,12 @@ public final class CircleFits {
         java.util.Arrays.fill(far, -1);
         java.util.Arrays.fill(near, -1);
         for (int i = 0; i < n; i++) {
-            double ang = Math.atan2(ys[i] - cy, xs[i] - cx);
-            int s = (int) ((ang + Math.PI) / (2 * Math.PI) * sectors);
+            // pseudo-angle in [0, 4), monotonic in the true angle, without trigonometry
+            double dx = xs[i] - cx, dy = ys[i] - cy;
+            double sum = Math.abs(dx) + Math.abs(dy);
+            double t = sum == 0 ? 0 : dy / sum;
+            double ang = dx >= 0 ? (dy >= 0 ? t : 4 + t) : 2 - t;
+            int s = (int) (ang / 4 * sectors);
             if (s >= sectors) s = sectors - 1;
             if (far[s] < 0 || d[i] > d[far[s]]) far[s] = i;
             if (near[s] < 0 || d[i] < d[near[s]]) near[s] = i;

@@ -113,6 +113,7 @@ public final class ProfileCheck {
         s.theta = start[2];
         s.offset = start[3];
         s.measure(xs, ys, contour);
+        State spare = new State(n, ox, oy);
         double best = objective(s.dev, n, f);
         int pass = 0;
         int[] working = new int[0];
@@ -123,12 +124,14 @@ public final class ProfileCheck {
             if (res.z() == null) break;
             working = java.util.Arrays.stream(res.working()).filter(j -> j < 2 * n).toArray();
             double[] step = lp.moves(res.z());
-            State t = s.moved(step, xs, ys, contour);
+            State t = s.moved(step, xs, ys, contour, spare);
             double obj = objective(t.dev, n, f);
             double size = Math.abs(step[0]) + Math.abs(step[1]) + Math.abs(step[2]) * spread + Math.abs(step[3]);
             if (obj <= best) {
-                // quadratic convergence: after a step of 1e-9 the next would be ~1e-18 of the spread
-                boolean done = size <= 1e-9 * spread || (best - obj) <= 1e-15 * spread;
+                spare = s;
+                // quadratic convergence once the extreme points settle: after a step of 1e-7 of the
+                // spread the next would be ~1e-14 of it
+                boolean done = size <= 1e-7 * spread || (best - obj) <= 1e-15 * spread;
                 s = t;
                 best = obj;
                 if (done) break;
@@ -182,10 +185,12 @@ public final class ProfileCheck {
         }
 
         void measure(double[] xs, double[] ys, Contour contour) {
-            dev = new double[n];
-            nx = new double[n];
-            ny = new double[n];
-            lever = new double[n];
+            if (dev == null) {
+                dev = new double[n];
+                nx = new double[n];
+                ny = new double[n];
+                lever = new double[n];
+            }
             double c = Math.cos(theta), s = Math.sin(theta);
             double[] out = new double[4], work = new double[5];
             double px = ox + tx, py = oy + ty;
@@ -201,8 +206,8 @@ public final class ProfileCheck {
             }
         }
 
-        State moved(double[] step, double[] xs, double[] ys, Contour contour) {
-            State t = new State(n, ox, oy);
+        /** This placement moved by {@code step}, measured into {@code t} (whose arrays are reused). */
+        State moved(double[] step, double[] xs, double[] ys, Contour contour, State t) {
             t.theta = theta + step[2];
             t.tx = tx + step[0];
             t.ty = ty + step[1];

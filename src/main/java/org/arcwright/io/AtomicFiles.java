@@ -25,6 +25,21 @@ public final class AtomicFiles {
         void writeTo(OutputStream out) throws IOException;
     }
 
+    /**
+     * Gives the temporary file the permissions the target has, or {@code rw-r--r--} for a new file:
+     * the JDK creates temporary files readable by their owner only, which would make every saved
+     * worksheet and exported sheet private by accident.
+     */
+    private static void keepPermissions(Path target, Path tmp) throws IOException {
+        if (!Files.getFileStore(tmp).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
+            return;
+        }
+        java.util.Set<java.nio.file.attribute.PosixFilePermission> perms = Files.exists(target)
+                ? Files.getPosixFilePermissions(target)
+                : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+        Files.setPosixFilePermissions(tmp, perms);
+    }
+
     /** Replaces {@code target} with the given UTF-8 text. */
     public static void writeString(Path target, String text) {
         write(target, out -> out.write(text.getBytes(StandardCharsets.UTF_8)));
@@ -43,6 +58,7 @@ public final class AtomicFiles {
         try {
             Files.createDirectories(dir);
             tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
+            keepPermissions(abs, tmp);
             try (var ch = java.nio.channels.FileChannel.open(tmp, java.nio.file.StandardOpenOption.WRITE);
                  OutputStream out = java.nio.channels.Channels.newOutputStream(ch)) {
                 writer.writeTo(out);

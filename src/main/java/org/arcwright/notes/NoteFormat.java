@@ -38,6 +38,14 @@ public final class NoteFormat {
             List.of("id", "title", "tags", "functions", "standard", "process", "author", "updated");
 
     private static final String FENCE = "---";
+    private static final java.util.regex.Pattern LINE_BREAK = java.util.regex.Pattern.compile("\r?\n");
+    private static final java.util.regex.Pattern HEADING = java.util.regex.Pattern.compile("^\\s{0,3}#{1,6}\\s+");
+    private static final java.util.regex.Pattern BULLET = java.util.regex.Pattern.compile("^\\s*[-*+]\\s+");
+    private static final java.util.regex.Pattern QUOTE = java.util.regex.Pattern.compile("^\\s*>\\s?");
+    private static final java.util.regex.Pattern LINK = java.util.regex.Pattern.compile("\\[([^\\]]*)\\]\\([^)]*\\)");
+    private static final java.util.regex.Pattern STRONG_OR_CODE = java.util.regex.Pattern.compile("(\\*\\*|__|`)");
+    private static final java.util.regex.Pattern EMPHASIS =
+            java.util.regex.Pattern.compile("(?<![\\w*])\\*(?!\\s)([^*]+?)(?<!\\s)\\*(?![\\w*])");
 
     private NoteFormat() {}
 
@@ -51,7 +59,7 @@ public final class NoteFormat {
      */
     public static Note parse(String text, String source) {
         String t = text.startsWith("\uFEFF") ? text.substring(1) : text;
-        String[] lines = t.split("\r?\n", -1);
+        String[] lines = LINE_BREAK.split(t, -1);
         if (lines.length == 0 || !lines[0].strip().equals(FENCE)) {
             throw new InputProblem(source, 1, 1, null,
                     "a note starts with a header between two '---' lines (id, title, tags, ...)");
@@ -134,17 +142,17 @@ public final class NoteFormat {
      */
     public static String plainText(String markdown) {
         StringBuilder sb = new StringBuilder(markdown.length());
-        for (String line : markdown.split("\r?\n", -1)) {
+        for (String line : LINE_BREAK.split(markdown, -1)) {
             if (!hasMarkdownMarks(line)) {
                 sb.append(line).append('\n');
                 continue;
             }
-            String l = line.replaceFirst("^\\s{0,3}#{1,6}\\s+", "")
-                    .replaceFirst("^\\s*[-*+]\\s+", "")
-                    .replaceFirst("^\\s*>\\s?", "")
-                    .replaceAll("\\[([^\\]]*)\\]\\([^)]*\\)", "$1")
-                    .replaceAll("(\\*\\*|__|`)", "")
-                    .replaceAll("(?<![\\w*])\\*(?!\\s)([^*]+?)(?<!\\s)\\*(?![\\w*])", "$1");
+            String l = HEADING.matcher(line).replaceFirst("");
+            l = BULLET.matcher(l).replaceFirst("");
+            l = QUOTE.matcher(l).replaceFirst("");
+            l = LINK.matcher(l).replaceAll("$1");
+            l = STRONG_OR_CODE.matcher(l).replaceAll("");
+            l = EMPHASIS.matcher(l).replaceAll("$1");
             sb.append(l).append('\n');
         }
         return sb.toString();

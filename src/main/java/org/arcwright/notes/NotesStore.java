@@ -51,7 +51,6 @@ import org.apache.lucene.search.BoostQuery;
 import org.apache.lucene.search.IndexSearcher;
 import org.apache.lucene.search.MatchAllDocsQuery;
 import org.apache.lucene.search.Query;
-import org.apache.lucene.search.QueryRescorer;
 import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TermQuery;
@@ -100,11 +99,16 @@ public final class NotesStore implements Closeable {
     private static final int SUMMARY_CHARS = 220;
     private static final int TOTAL_HITS_THRESHOLD = 1000;
     private static final int RESCORE_WINDOW = 50;
+    /** Score a label earns in {@link #related} when it is one of a note's tags, functions or processes (the best one counts). */
+    private static final float TAG_MATCH = 4f;
+    private static final float FUNCTION_MATCH = 3f;
+    private static final float PROCESS_MATCH = 2f;
 
     private final PackStack stack;
     private final Path indexFolder;
     private final TradeAnalyzer indexAnalyzer = TradeAnalyzer.forIndexing();
     private final TradeAnalyzer queryAnalyzer = TradeAnalyzer.forQueries();
+    private final TradeAnalyzer highlightAnalyzer = TradeAnalyzer.forHighlighting();
     private final FacetsConfig facetsConfig = NoteDocuments.facetsConfig();
     private final Map<IndexReader, SortedSetDocValuesReaderState> facetStates =
             Collections.synchronizedMap(new WeakHashMap<>());
@@ -129,7 +133,20 @@ public final class NotesStore implements Closeable {
      */
     public static NotesStore open(PackStack stack, Path indexFolder) {
         NotesStore s = new NotesStore(stack, indexFolder);
-        s.start();
+        s.start(true);
+        return s;
+    }
+
+    /**
+     * Opens a usable index without first checking the note files against it (one file-system look
+     * per note, seconds for a pack of 100,000 notes on a busy disk), so the first search can run at
+     * once; a missing, corrupt or other-version index is still rebuilt. The caller must then call
+     * {@link #refresh()}, typically on a worker thread, to pick up notes changed since the index
+     * was written. For the desktop app's start-up; the command line uses {@link #open}.
+     */
+    public static NotesStore openUnchecked(PackStack stack, Path indexFolder) {
+        NotesStore s = new NotesStore(stack, indexFolder);
+        s.start(false);
         return s;
     }
 
@@ -204,8 +221,9 @@ public final class NotesStore implements Closeable {
                 top = s.search(query, new TopScoreDocCollectorManager(window, null, TOTAL_HITS_THRESHOLD, false));
                 facets = Map.of();
             }
-            if (phrase != null) top = QueryRescorer.rescore(s, top, phrase, PHRASE_BOOST, limit);
-            String[] snippets = snippets(s, query, top);
+            if (phrase != null) top = rescoreByProximity(s, top, phrase, limit);
+            Query marks = q.isBlank() ? null : new QueryBuilder(highlightAnalyzer).createBooleanQuery(NoteDocuments.BODY, q, Occur.SHOULD);
+            String[] snippets = snippets(s, marks == null ? query : marks, top);
             List<NoteHit> hits = new ArrayList<>();
             StoredFields stored = s.storedFields();
             for (int i = 0; i < top.scoreDocs.length; i++) {
@@ -217,9 +235,9 @@ public final class NotesStore implements Closeable {
     }
 
     /**
-     * Notes to recommend beside a decision: those sharing the given labels (matched against tags,
-     * functions and processes) and those whose words are most like {@code text} (more-like-this by
-     * tf-idf). For the advisor, which passes the function and tags of the case and its explanation.
+     * Notes to recommend beside a decision: those sharing the given labels (each label counts once,
+     * as a tag 4, a function 3 or a process 2, however rare it is) and those whose words are most
+     * like {@code text} (more-like-this by tf-idf). For the advisor, which passes the function and tags of the case and its explanation.
      *
      * @param tags labels such as {@code stress-relief}, {@code sealing}, {@code cast}; may be empty
      * @param text free text describing the case; may be empty
@@ -228,6 +246,11 @@ public final class NotesStore implements Closeable {
      */
     public List<NoteHit> related(Collection<String> tags, String text, int limit) {
         return related(tags, text, limit, Set.of());
+    }
+
+    private static Query labelQuery(NoteFacet facet, String label, float weight) {
+        return new BoostQuery(new org.apache.lucene.search.ConstantScoreQuery(
+                new TermQuery(new Term(NoteDocuments.filterField(facet), label))), weight);
     }
 
     /** Notes related to the note {@code id} by its tags and its text, the note itself left out. */
@@ -249,9 +272,10 @@ public final class NotesStore implements Closeable {
             for (String t : tags) {
                 if (t == null || t.isBlank()) continue;
                 String label = Note.label(t);
-                b.add(new BoostQuery(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.TAG), label)), 2.0f), Occur.SHOULD);
-                b.add(new BoostQuery(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.FUNCTION), label)), 1.5f), Occur.SHOULD);
-                b.add(new TermQuery(new Term(NoteDocuments.filterField(NoteFacet.PROCESS), label)), Occur.SHOULD);
+                b.add(new org.apache.lucene.search.DisjunctionMaxQuery(List.of(
+                        labelQuery(NoteFacet.TAG, label, TAG_MATCH),
+                        labelQuery(NoteFacet.FUNCTION, label, FUNCTION_MATCH),
+                        labelQuery(NoteFacet.PROCESS, label, PROCESS_MATCH)), 0f), Occur.SHOULD);
                 any = true;
             }
             if (text != null && !text.isBlank()) {
@@ -347,12 +371,13 @@ public final class NotesStore implements Closeable {
             directory = null;
             indexAnalyzer.close();
             queryAnalyzer.close();
+            highlightAnalyzer.close();
         }
     }
 
     // ---------------------------------------------------------------- opening and syncing
 
-    private synchronized void start() {
+    private synchronized void start(boolean checkSources) {
         long t0 = System.nanoTime();
         try {
             Files.createDirectories(indexFolder);
@@ -361,20 +386,19 @@ public final class NotesStore implements Closeable {
             buildInMemory("index folder unusable: " + e.getMessage(), t0);
             return;
         }
-        SourceScan scan = SourceScan.of(stack);
         Map<String, String> commit;
         try {
             if (!DirectoryReader.indexExists(directory)) {
-                rebuild("no index yet", t0, scan);
+                rebuild("no index yet", t0);
                 return;
             }
             commit = SegmentInfos.readLatestCommit(directory).getUserData();
         } catch (IOException | RuntimeException e) {
-            rebuild("index unreadable: " + e.getClass().getSimpleName(), t0, scan);
+            rebuild("index unreadable: " + e.getClass().getSimpleName(), t0);
             return;
         }
         if (!NoteDocuments.SCHEMA.equals(commit.get(NoteDocuments.COMMIT_SCHEMA))) {
-            rebuild("index from another version", t0, scan);
+            rebuild("index from another version", t0);
             return;
         }
         try {
@@ -382,10 +406,37 @@ public final class NotesStore implements Closeable {
             probe();
         } catch (IOException | RuntimeException e) {
             closeQuietly();
-            rebuild("index corrupt: " + e.getClass().getSimpleName(), t0, scan);
+            rebuild("index corrupt: " + e.getClass().getSimpleName(), t0);
             return;
         }
-        if (Long.toString(scan.stamp()).equals(commit.get(NoteDocuments.COMMIT_STAMP))) {
+        if (!checkSources) {
+            report = new IndexReport(IndexReport.Kind.OPENED, "note files not checked yet", size(), 0, 0, 0, millisSince(t0));
+            return;
+        }
+        refreshFrom(commit.get(NoteDocuments.COMMIT_STAMP), t0);
+    }
+
+    /**
+     * Checks the note files against the index now and brings it up to date, as {@link #open} does.
+     * For a store opened with {@link #openUnchecked}, call this once from a worker thread soon after
+     * the first search.
+     */
+    public synchronized IndexReport refresh() {
+        long t0 = System.nanoTime();
+        String recorded;
+        try {
+            recorded = SegmentInfos.readLatestCommit(directory).getUserData().get(NoteDocuments.COMMIT_STAMP);
+        } catch (IOException | RuntimeException e) {
+            rebuild("index unreadable: " + e.getClass().getSimpleName(), t0);
+            return report;
+        }
+        refreshFrom(recorded, t0);
+        return report;
+    }
+
+    private void refreshFrom(String recordedStamp, long t0) {
+        SourceScan scan = SourceScan.of(stack);
+        if (Long.toString(scan.stamp()).equals(recordedStamp)) {
             report = new IndexReport(IndexReport.Kind.OPENED, "", size(), 0, 0, 0, millisSince(t0));
             return;
         }
@@ -770,6 +821,31 @@ public final class NotesStore implements Closeable {
             }
         }
         return any ? b.build() : null;
+    }
+
+    /**
+     * Adds {@link #PHRASE_BOOST} times the phrase score to each hit whose body has the words near
+     * each other, and keeps the best {@code limit}. Checks each hit's own document only, where
+     * Lucene's {@code QueryRescorer} would walk the phrase's candidates between hits.
+     */
+    private static TopDocs rescoreByProximity(IndexSearcher s, TopDocs top, Query phrase, int limit) throws IOException {
+        org.apache.lucene.search.Weight w = s.createWeight(s.rewrite(phrase), org.apache.lucene.search.ScoreMode.COMPLETE, 1f);
+        List<LeafReaderContext> leaves = s.getIndexReader().leaves();
+        ScoreDoc[] docs = top.scoreDocs.clone();
+        for (int i = 0; i < docs.length; i++) {
+            ScoreDoc sd = docs[i];
+            LeafReaderContext leaf = leaves.get(org.apache.lucene.index.ReaderUtil.subIndex(sd.doc, leaves));
+            org.apache.lucene.search.Scorer sc = w.scorer(leaf);
+            if (sc == null) continue;
+            int target = sd.doc - leaf.docBase;
+            org.apache.lucene.search.TwoPhaseIterator two = sc.twoPhaseIterator();
+            org.apache.lucene.search.DocIdSetIterator approx = two != null ? two.approximation() : sc.iterator();
+            if (approx.advance(target) == target && (two == null || two.matches())) {
+                docs[i] = new ScoreDoc(sd.doc, sd.score + PHRASE_BOOST * sc.score());
+            }
+        }
+        java.util.Arrays.sort(docs, (a, b) -> a.score != b.score ? Float.compare(b.score, a.score) : Integer.compare(a.doc, b.doc));
+        return new TopDocs(top.totalHits, java.util.Arrays.copyOf(docs, Math.min(limit, docs.length)));
     }
 
     /**

@@ -58,7 +58,7 @@ public final class CalloutLayout {
             for (ProfileTier t : cp.tiers()) rows.add(row(List.of(new Run.Text(text.value(t.zone()))), t.datums()));
             extent = cp.extent();
         }
-        return frame(rows, extent);
+        return frame(rows, extent, callout instanceof Callout.CompositeProfile && style == DrawingStyle.ISO);
     }
 
     // ---- runs: the pieces of a cell's content -------------------------------------------------
@@ -146,7 +146,11 @@ public final class CalloutLayout {
 
     // ---- frames --------------------------------------------------------------------------------
 
-    private CalloutDrawing frame(List<List<List<Run>>> rows, Extent extent) {
+    /**
+     * @param stacked one symbol per row: ISO 1101 writes the tiers of a combined profile as frames
+     *     stacked on one leader, where ASME shares one symbol cell across the tiers (common practice)
+     */
+    private CalloutDrawing frame(List<List<List<Run>>> rows, Extent extent, boolean stacked) {
         double rowH = 2 * h;
         double pad = 0.5 * h;
         double margin = 0.5 * h;
@@ -164,10 +168,14 @@ public final class CalloutLayout {
         List<CalloutDrawing.Cell> cells = new ArrayList<>();
         List<CalloutDrawing.Mark> marks = new ArrayList<>();
 
-        Rectangle2D sym = new Rectangle2D.Double(x0, y0, symW, rowH * rows.size());
-        cells.add(new CalloutDrawing.Cell(sym, CalloutDrawing.Role.SYMBOL, "PROFILE", 0));
-        marks.add(new CalloutDrawing.Line(sym));
-        marks.add(new CalloutDrawing.Line(Symbols.profileOfSurface(sym.getCenterX(), sym.getCenterY(), h)));
+        int symbols = stacked ? rows.size() : 1;
+        double symH = stacked ? rowH : rowH * rows.size();
+        for (int t = 0; t < symbols; t++) {
+            Rectangle2D sym = new Rectangle2D.Double(x0, y0 + t * symH, symW, symH);
+            cells.add(new CalloutDrawing.Cell(sym, CalloutDrawing.Role.SYMBOL, "PROFILE", t));
+            marks.add(new CalloutDrawing.Line(sym));
+            marks.add(new CalloutDrawing.Line(Symbols.profileOfSurface(sym.getCenterX(), sym.getCenterY(), h)));
+        }
         double right = x0 + symW;
         for (int t = 0; t < rows.size(); t++) {
             double x = x0 + symW;

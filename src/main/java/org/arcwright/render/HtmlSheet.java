@@ -41,6 +41,9 @@ final class HtmlSheet {
                     .append("</h2>\n<p class=\"case\">").append(esc(f.caseLine())).append("</p>\n");
             if (!f.decided()) {
                 sb.append("<p class=\"undecided\"><strong>Undecided:</strong> no control is chosen for this feature yet.</p>\n");
+                if (!f.suggestion().isEmpty()) {
+                    sb.append("<p>The advisor suggests (not chosen, to be reviewed): ").append(esc(f.suggestion())).append("</p>\n");
+                }
                 if (!f.inspection().isEmpty()) sb.append("<p>Last inspection: ").append(esc(f.inspection())).append("</p>\n");
                 continue;
             }

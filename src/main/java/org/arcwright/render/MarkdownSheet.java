@@ -36,6 +36,9 @@ final class MarkdownSheet {
             sb.append("*").append(esc(f.caseLine())).append("*\n\n");
             if (!f.decided()) {
                 sb.append("**Undecided:** no control is chosen for this feature yet.\n");
+                if (!f.suggestion().isEmpty()) {
+                    sb.append("\nThe advisor suggests (not chosen, to be reviewed): ").append(esc(f.suggestion())).append('\n');
+                }
                 if (!f.inspection().isEmpty()) sb.append("\nLast inspection: ").append(esc(f.inspection())).append('\n');
                 continue;
             }

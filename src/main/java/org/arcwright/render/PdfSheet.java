@@ -89,6 +89,9 @@ final class PdfSheet {
         paragraph(f.caseLine(), BODY - 1, 0);
         if (!f.decided()) {
             paragraph("Undecided: no control is chosen for this feature yet.", BODY, 0);
+            if (!f.suggestion().isEmpty()) {
+                paragraph("The advisor suggests (not chosen, to be reviewed): " + f.suggestion(), BODY - 1, 10);
+            }
             if (!f.inspection().isEmpty()) paragraph("Last inspection: " + f.inspection(), BODY, 0);
             return;
         }
@@ -184,10 +187,16 @@ final class PdfSheet {
     }
 
     private void row2(String label, String value) throws IOException {
-        need(BODY * LEADING);
-        y -= BODY * LEADING;
-        text(label, MARGIN + 12, y, BODY);
-        text(value, MARGIN + 230, y, BODY);
+        float valueX = MARGIN + 230;
+        List<String> labels = wrap(label, BODY, valueX - MARGIN - 20);
+        List<String> values = wrap(value, BODY, MARGIN + width() - valueX);
+        int lines = Math.max(labels.size(), values.size());
+        need(lines * BODY * LEADING);
+        for (int i = 0; i < lines; i++) {
+            y -= BODY * LEADING;
+            if (i < labels.size()) text(labels.get(i), MARGIN + 12, y, BODY);
+            if (i < values.size()) text(values.get(i), valueX, y, BODY);
+        }
     }
 
     private void block(String text) throws IOException {

@@ -89,12 +89,14 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
      * @param inspectionNote the filled inspection-plan template, or empty
      * @param inspection the latest inspection, in words, or empty
      * @param demoted true when the chosen recommendation failed one of its checks
+     * @param suggestion for an undecided feature, the advisor's first recommendation in words
+     *     (plainly marked as not chosen), or empty
      */
     public record FeatureSection(String id, String heading, String caseLine, Callout callout, String calloutPlain,
                                  String calloutUnicode, String calloutWords, List<String> because,
                                  List<Figures.Figure> figures, List<String> cautions, List<String> references,
                                  List<NoteLink> notes, String drawingNote, String inspectionNote, String inspection,
-                                 boolean demoted) {
+                                 boolean demoted, String suggestion) {
         /** True when a control is chosen. */
         public boolean decided() { return callout != null; }
     }
@@ -105,6 +107,16 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
      * have them.
      */
     public static SheetContent of(PartWorksheet ws, NoteTemplates templates, String generatedBy) {
+        return of(ws, templates, generatedBy, null);
+    }
+
+    /**
+     * As {@link #of(PartWorksheet, NoteTemplates, String)}, and for each undecided feature the
+     * advisor's first recommendation from {@code suggest} (null for none), shown as a suggestion
+     * that nobody has chosen yet.
+     */
+    public static SheetContent of(PartWorksheet ws, NoteTemplates templates, String generatedBy,
+                                  java.util.function.Function<DesignCase, java.util.Optional<Recommendation>> suggest) {
         Objects.requireNonNull(ws, "worksheet");
         Objects.requireNonNull(templates, "templates");
         CalloutText text = new CalloutText(ws.standard(), ws.units());
@@ -147,8 +159,14 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
                     + (c.datums().isEmpty() ? "" : ", datums " + String.join(", ", c.datums()))
                     + (c.tolerance() == null ? "" : ", intent " + c.tolerance());
             if (r == null) {
+                String suggestion = "";
+                if (suggest != null) {
+                    suggestion = suggest.apply(c).map(s -> text.line(s.callout(), false).replace("\n", " / ") + " — "
+                            + text.words(s.callout()) + " (rule " + s.ruleId() + (s.demoted() ? ", demoted" : "")
+                            + ")").orElse("");
+                }
                 sections.add(new FeatureSection(f.id(), heading, caseLine, null, "", "", "", List.of(), List.of(),
-                        List.of(), List.of(), List.of(), "", "", inspection(f.inspection(), ctx), false));
+                        List.of(), List.of(), List.of(), "", "", inspection(f.inspection(), ctx), false, suggestion));
                 continue;
             }
             List<String> featureCautions = new ArrayList<>(styleRemarks(r.callout(), ws));
@@ -157,7 +175,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
             sections.add(new FeatureSection(f.id(), heading, caseLine, r.callout(), text.line(r.callout(), false),
                     text.line(r.callout(), true), text.words(r.callout()), r.because(), Figures.of(r.numbers(), text),
                     featureCautions, r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
-                    fill(templates, "inspection-plan", ctx, f), inspection(f.inspection(), ctx), r.demoted()));
+                    fill(templates, "inspection-plan", ctx, f), inspection(f.inspection(), ctx), r.demoted(), ""));
         }
         Set<String> cautions = new LinkedHashSet<>(USUAL_CAUTIONS);
         for (Map.Entry<String, List<String>> e : byCaution.entrySet()) {

@@ -69,15 +69,32 @@ public final class SheetExporter {
         return SheetContent.of(ws, templates, generatedBy);
     }
 
+    /** A suggestion for an undecided feature's case, e.g. {@code c -> advisor.advise(c).first()}. */
+    @FunctionalInterface
+    public interface Suggestions extends java.util.function.Function<org.arcwright.rules.DesignCase,
+            java.util.Optional<org.arcwright.rules.Recommendation>> {
+        /** Suggests nothing. */
+        Suggestions NONE = c -> java.util.Optional.empty();
+    }
+
     /**
      * Writes the sheet of {@code ws} to {@code out} in the format its extension names. Markdown
      * also writes one SVG per decided feature into a folder {@code NAME-frames} beside it.
      */
     public void export(PartWorksheet ws, NoteTemplates templates, String generatedBy, Path out, Progress progress) {
+        export(ws, templates, generatedBy, Suggestions.NONE, out, progress);
+    }
+
+    /**
+     * As {@link #export(PartWorksheet, NoteTemplates, String, Path, Progress)}, with each undecided
+     * feature showing what {@code suggestions} offers, marked as not chosen.
+     */
+    public void export(PartWorksheet ws, NoteTemplates templates, String generatedBy, Suggestions suggestions, Path out,
+                       Progress progress) {
         Progress p = progress == null ? Progress.NONE : progress;
         Format format = Format.of(out);
         p.update(0, 1, "reading the worksheet");
-        SheetContent content = content(ws, templates, generatedBy);
+        SheetContent content = SheetContent.of(ws, templates, generatedBy, suggestions == null ? Suggestions.NONE : suggestions);
         int total = content.features().size() + 1;
         switch (format) {
             case MARKDOWN: {

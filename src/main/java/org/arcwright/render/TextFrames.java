@@ -50,7 +50,16 @@ public final class TextFrames {
         int[] w = widths(rows);
         int symW = symbol.length() + 2;
         StringBuilder sb = new StringBuilder();
+        boolean stacked = c instanceof Callout.CompositeProfile && style == DrawingStyle.ISO;
         for (int r = 0; r < rows.size(); r++) {
+            if (stacked && r > 0) {
+                int cols = Math.max(rows.get(r - 1).size(), rows.get(r).size());
+                sb.append(border("+" + "-".repeat(symW) + "+", w, cols)).append('\n');
+                sb.append('|').append(pad(symbol, symW)).append('|');
+                for (int k = 0; k < rows.get(r).size(); k++) sb.append(pad(rows.get(r).get(k), w[k])).append('|');
+                sb.append('\n');
+                continue;
+            }
             int cols = r == 0 ? rows.get(0).size() : Math.max(rows.get(r - 1).size(), rows.get(r).size());
             sb.append(border(r == 0 ? "+" + "-".repeat(symW) + "+" : "|" + " ".repeat(symW) + "+", w, cols)).append('\n');
             sb.append('|').append(pad(r == 0 ? symbol : "", symW)).append('|');

@@ -50,6 +50,9 @@ public final class CalloutText {
     /** A tolerance value as this style writes it. */
     public String value(double v) { return style.formatValue(v, units, 4); }
 
+    /** Two limits of one size with the same number of places. */
+    public String[] limits(double min, double max) { return style.formatLimitPair(min, max, units, 4); }
+
     /** The ISO offset value, signed: {@code +0.02}, {@code -0.03}, {@code 0}. */
     public String signed(double v) {
         String s = value(v);
@@ -143,7 +146,8 @@ public final class CalloutText {
         List<String> lines = new ArrayList<>();
         for (int t = 0; t < cp.tiers().size(); t++) {
             ProfileTier tier = cp.tiers().get(t);
-            String sym = t == 0 ? symbol : " ".repeat(unicode ? 1 : symbol.length());
+            // ISO 1101 stacks whole frames, each with its symbol; ASME shares one symbol (common practice)
+            String sym = t == 0 || style == DrawingStyle.ISO ? symbol : " ".repeat(unicode ? 1 : symbol.length());
             StringBuilder sb = new StringBuilder("|").append(sym).append('|').append(value(tier.zone())).append('|');
             for (DatumReference d : tier.datums()) sb.append(datum(d, unicode)).append('|');
             lines.add(sb.toString());
@@ -163,7 +167,8 @@ public final class CalloutText {
             String kind = c instanceof Callout.Radius ? "radius" : "controlled radius (fair curve, no flats or reversals)";
             double min = c instanceof Callout.Radius r ? r.min() : ((Callout.ControlledRadius) c).min();
             double max = c instanceof Callout.Radius r ? r.max() : ((Callout.ControlledRadius) c).max();
-            return kind + " " + radius(c) + ", between " + value(min) + " and " + value(max) + " " + units.symbol();
+            String[] pair = limits(min, max);
+            return kind + " " + radius(c) + ", between " + pair[0] + " and " + pair[1] + " " + units.symbol();
         }
         if (c instanceof Callout.General g) return "general tolerance of the title block: " + general(g);
         if (c instanceof Callout.Profile p) {

@@ -144,11 +144,13 @@ public final class NoteContext {
         m.put("isComposite", co instanceof Callout.CompositeProfile);
         m.put("isGeneral", co instanceof Callout.General);
         if (co instanceof Callout.Radius r) {
-            m.put("min", text.value(r.min()));
-            m.put("max", text.value(r.max()));
+            String[] pair = text.limits(r.min(), r.max());
+            m.put("min", pair[0]);
+            m.put("max", pair[1]);
         } else if (co instanceof Callout.ControlledRadius r) {
-            m.put("min", text.value(r.min()));
-            m.put("max", text.value(r.max()));
+            String[] pair = text.limits(r.min(), r.max());
+            m.put("min", pair[0]);
+            m.put("max", pair[1]);
         } else if (co instanceof Callout.Profile p) {
             m.put("zone", text.value(p.zone()));
             m.put("unequal", p.isUnequal());

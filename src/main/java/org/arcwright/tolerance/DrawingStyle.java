@@ -108,6 +108,29 @@ public enum DrawingStyle {
     }
 
     /**
+     * Two limits of one size written with the same number of places, as limit dimensioning wants
+     * them ({@code 3.48} and {@code 3.50}, not {@code 3.5}; ASME Y14.5-2018 and ISO 129-1, from
+     * memory). Each is rounded to at most {@code maxPlaces}; the pair takes the larger place count.
+     */
+    public String[] formatLimitPair(double min, double max, Units units, int maxPlaces) {
+        String a = formatValue(min, units, maxPlaces);
+        String b = formatValue(max, units, maxPlaces);
+        int places = Math.max(placesOf(a), placesOf(b));
+        return new String[] {pad(a, places), pad(b, places)};
+    }
+
+    private static int placesOf(String s) {
+        int dot = s.indexOf('.');
+        return dot < 0 ? 0 : s.length() - dot - 1;
+    }
+
+    private static String pad(String s, int places) {
+        int have = placesOf(s);
+        if (have >= places) return s;
+        return (have == 0 ? s + "." : s) + "0".repeat(places - have);
+    }
+
+    /**
      * A dimensionless figure (a stress concentration factor, a ratio) with exactly {@code places}
      * decimals, rounded half-even: the same in both styles.
      */

@@ -97,4 +97,14 @@ class OutputCommandsTest {
         assertThat(r.out()).isEqualTo("R1.8-2.2\nR1.8-2.2\n");
         assertThat(r.err()).contains("note: Controlled radius (CR) is an ASME Y14.5 concept with no ISO equivalent");
     }
+
+    @Test
+    void sheetShowsTheAdvisorsSuggestionUnlessToldNotTo(@TempDir Path dir) throws Exception {
+        Path with = dir.resolve("with.md");
+        Path without = dir.resolve("without.md");
+        assertThat(run("sheet", DEMO, "--out", with.toString()).code()).isZero();
+        assertThat(run("sheet", DEMO, "--out", without.toString(), "--no-suggest").code()).isZero();
+        assertThat(Files.readString(with)).contains("The advisor suggests (not chosen");
+        assertThat(Files.readString(without)).doesNotContain("The advisor suggests");
+    }
 }

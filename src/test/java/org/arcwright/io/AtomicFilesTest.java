@@ -23,6 +23,22 @@ class AtomicFilesTest {
     }
 
     @Test
+    void newFilesAreReadableByOthersAndExistingFilesKeepTheirPermissions(@TempDir Path dir) throws Exception {
+        org.junit.jupiter.api.Assumptions.assumeTrue(
+                java.nio.file.FileSystems.getDefault().supportedFileAttributeViews().contains("posix"));
+        Path fresh = dir.resolve("sheet.pdf");
+        AtomicFiles.writeString(fresh, "x");
+        assertThat(java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(fresh)))
+                .isEqualTo("rw-r--r--");
+        Path kept = dir.resolve("part.arcpart");
+        Files.writeString(kept, "old");
+        Files.setPosixFilePermissions(kept, java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw----"));
+        AtomicFiles.writeString(kept, "new");
+        assertThat(java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(kept)))
+                .isEqualTo("rw-rw----");
+    }
+
+    @Test
     void aFailedWriteLeavesTheOldFileAndNoTemporary(@TempDir Path dir) throws Exception {
         Path f = dir.resolve("part.arcpart");
         Files.writeString(f, "saved work");

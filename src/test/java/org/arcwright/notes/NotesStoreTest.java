@@ -161,4 +161,21 @@ class NotesStoreTest {
         assertThat(snippet).startsWith("… ").contains("**R0.5**").hasSizeLessThan(330);
         assertThat(NotesStore.trimSnippet("short **one**")).isEqualTo("short **one**");
     }
+
+    @Test
+    void anUncheckedOpenSearchesAtOnceAndRefreshPicksUpChangedNotes() throws Exception {
+        Path base = base();
+        try (NotesStore store = open(TestPacks.stack(base))) {
+            assertThat(store.size()).isEqualTo(3);
+        }
+        TestPacks.note(base, "late.md", TestPacks.text("late-note", "Knurl runout", "knurl", "general", "Added while closed."));
+        try (NotesStore store = NotesStore.openUnchecked(TestPacks.stack(base), tmp.resolve("index"))) {
+            assertThat(store.report().reason()).contains("not checked");
+            assertThat(store.get("late-note")).isEmpty();
+            IndexReport r = store.refresh();
+            assertThat(r.kind()).isEqualTo(IndexReport.Kind.UPDATED);
+            assertThat(store.get("late-note")).isPresent();
+            assertThat(store.refresh().kind()).isEqualTo(IndexReport.Kind.OPENED);
+        }
+    }
 }

@@ -81,4 +81,19 @@ class RelevanceTest {
         List<String> top = store.search(query, NoteFilters.none(), 3).hits().stream().map(NoteHit::id).toList();
         assertThat(top).as("top 3 for '%s'", query).contains(expected);
     }
+
+    /** The advisor asks for notes with its rules' note tags and the rule's summary; the pertinent note must come first or second. */
+    @ParameterizedTest(name = "{0} -> {2}")
+    @CsvSource(delimiter = '|', value = {
+            "mating seating                 | shaft shoulder fillet where a bearing sits      | bearing-seat-shoulder-fillet",
+            "sealing profile                | sealing land edge of a face seal                | sealing-lands-and-edges",
+            "stress-relief fatigue          | smallest shoulder fillet sets the Kt            | fillet-fatigue-stress-concentration",
+            "stress-relief controlled-radius | fatigue fillet must not have flats or reversals | radius-vs-controlled-radius",
+            "cosmetic general-tolerance iso13715 | edges that only need breaking             | edge-breaks-iso-13715",
+            "datums profile                 | locate the blend to the datum reference frame   | profile-with-datums",
+    })
+    void relatedNotesForTheAdvisorsTagsAndSummaryArePertinent(String tags, String text, String expected) {
+        List<String> top = store.related(List.of(tags.split(" ")), text, 2).stream().map(NoteHit::id).toList();
+        assertThat(top).as("related to %s / %s", tags, text).contains(expected);
+    }
 }

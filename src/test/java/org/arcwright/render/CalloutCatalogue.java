@@ -50,6 +50,8 @@ final class CalloutCatalogue {
         add(m, "composite-three-tiers-all-around", new Callout.CompositeProfile(List.of(
                 new ProfileTier(0.8, d("A", "B(M)")), new ProfileTier(0.3, d("A")), new ProfileTier(0.1, List.of())),
                 Extent.ALL_AROUND), DrawingStyle.ASME, Units.MM);
+        add(m, "composite-iso-stacked", new Callout.CompositeProfile(List.of(new ProfileTier(0.5, d("A", "B")),
+                new ProfileTier(0.1, List.of())), null), DrawingStyle.ISO, Units.MM);
         add(m, "general-edge-note", new Callout.General("iso2768-1-radius-chamfer", "m", "ISO 13715 -0.3"),
                 DrawingStyle.ISO, Units.MM);
         return m;

@@ -132,4 +132,45 @@ class SheetExporterTest {
             for (String line : text.split("\n")) assertThat(line.length()).as(line).isLessThan(140);
         }
     }
+
+    @Test
+    void undecidedFeaturesShowTheAdvisorsSuggestionMarkedAsNotChosen() {
+        PackStack stack = PackStack.builtIn();
+        org.arcwright.rules.Advisor advisor = new org.arcwright.rules.Advisor(org.arcwright.rules.RuleBook.load(stack),
+                org.arcwright.rules.MechanicsChecks.standard(stack), org.arcwright.rules.NoteLinker.NONE);
+        SheetContent content = SheetContent.of(demo, templates, "t", c -> advisor.advise(c).first());
+        SheetContent.FeatureSection f5 = content.features().get(4);
+        assertThat(f5.decided()).isFalse();
+        assertThat(f5.suggestion()).isNotEmpty().contains("(rule ");
+        assertThat(content.summary().get(4).status()).isEqualTo("undecided");
+        assertThat(content.features().get(0).suggestion()).as("decided features get no suggestion").isEmpty();
+        assertThat(exporter.markdown(content, "x")).contains("The advisor suggests (not chosen, to be reviewed): ");
+    }
+
+    @Test
+    void aPartDecidedByTheAdvisorRendersEveryCalloutAndFigure(@TempDir Path dir) throws Exception {
+        PackStack stack = PackStack.builtIn();
+        org.arcwright.rules.Advisor advisor = new org.arcwright.rules.Advisor(org.arcwright.rules.RuleBook.load(stack),
+                org.arcwright.rules.MechanicsChecks.standard(stack), org.arcwright.rules.NoteLinker.NONE);
+        PartWorksheet open = new WorksheetFiles(new JsonFiles()).read(Path.of("examples/tarnbeck-output-shaft.arcpart"));
+        PartWorksheet decided = open;
+        for (RadiusFeature f : open.features()) {
+            decided = decided.withFeature(f.withChosen(advisor.advise(f.designCase()).first().orElseThrow()));
+        }
+        Path out = dir.resolve("advised.pdf");
+        exporter.export(decided, templates, "t", out, null);
+        SheetContent content = exporter.content(decided, templates, "t");
+        String text;
+        try (PDDocument doc = Loader.loadPDF(out.toFile())) {
+            text = new PDFTextStripper().getText(doc).replace("\r", "");
+        }
+        String flat = text.replaceAll("\\s+", " ");
+        for (SheetContent.FeatureSection f : content.features()) {
+            assertThat(f.decided()).isTrue();
+            assertThat(flat).as(f.id()).contains(f.calloutPlain().replace("\n", " / ").replaceAll("\\s+", " "));
+            assertThat(f.figures()).as(f.id() + " figures").isNotEmpty();
+            assertThat(f.figures()).allMatch(g -> !g.value().contains("E-") && !g.value().contains("NaN"));
+        }
+        assertThat(text).contains("5 decided, 0 undecided");
+    }
 }

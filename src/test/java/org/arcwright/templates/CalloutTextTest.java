@@ -44,6 +44,14 @@ class CalloutTextTest {
     }
 
     @Test
+    void isoWritesTheTiersAsStackedFramesEachWithItsSymbol() {
+        // ISO 1101 writes combined profile tiers as frames stacked on one leader (common practice)
+        Callout c = new Callout.CompositeProfile(List.of(new ProfileTier(0.5, datums("A", "B")),
+                new ProfileTier(0.1, List.of())), null);
+        assertThat(iso.line(c, true)).isEqualTo("|\u2313|0.5|A|B|\n|\u2313|0.1|");
+    }
+
+    @Test
     void betweenAndDynamicAreMarked() {
         Callout p = new Callout.Profile(0.2, null, List.of(), true, Extent.between("J", "K"));
         assertThat(asme.line(p, true)).isEqualTo("|\u2313|0.2 \u25B3| J \u2194 K");

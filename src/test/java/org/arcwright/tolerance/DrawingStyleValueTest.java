@@ -48,4 +48,12 @@ class DrawingStyleValueTest {
         // ISO has no controlled radius: written as R (ISO 129-1, from memory)
         assertThat(DrawingStyle.ISO.formatLimits(RadiusKind.CR, Units.MM, 1.8, 2.2, null)).isEqualTo("R1.8-2.2");
     }
+
+    @Test
+    void limitPairsShareTheirNumberOfPlaces() {
+        assertThat(DrawingStyle.ASME.formatLimitPair(3.48, 3.5, Units.MM, 4)).containsExactly("3.48", "3.50");
+        assertThat(DrawingStyle.ASME.formatLimitPair(0.6, 1.0, Units.MM, 4)).containsExactly("0.6", "1.0");
+        assertThat(DrawingStyle.ASME.formatLimitPair(2, 3, Units.MM, 4)).containsExactly("2", "3");
+        assertThat(DrawingStyle.ASME.formatLimitPair(0.06, 0.0625, Units.INCH, 4)).containsExactly(".0600", ".0625");
+    }
 }

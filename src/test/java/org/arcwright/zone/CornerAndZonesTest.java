@@ -57,6 +57,40 @@ class CornerAndZonesTest {
         }
     }
 
+    @Property(tries = 300, seed = "5")
+    void movingAPointOfTheNominalAlongItsAirNormalDeviatesByTheDistanceMoved(
+            @ForAll @DoubleRange(min = 30, max = 150) double angle, @ForAll @DoubleRange(min = 0, max = 360) double turn,
+            @ForAll @DoubleRange(min = 0.05, max = 0.95) double where, @ForAll @DoubleRange(min = -0.4, max = 0.4) double delta,
+            @ForAll boolean fillet) {
+        // Definition of the signed deviation (common practice): distance to the nominal, positive toward air.
+        Corner c = corner(angle, turn, fillet ? CornerKind.FILLET : CornerKind.ROUND);
+        Contour nominal = c.contour(1, 6);
+        double[] out = new double[4], w = new double[6];
+        // a point of the nominal at the given fraction of its length, and its normal toward air
+        double target = where * nominal.length();
+        double lo = 0;
+        Point2 p = null;
+        for (Segment s : nominal.segments()) {
+            if (target <= lo + s.length()) {
+                double t = (target - lo) / s.length();
+                if (s instanceof Segment.Arc a) {
+                    double ang = a.startAngle() + a.sweep() * t;
+                    p = new Point2(a.centre().x() + Math.cos(ang), a.centre().y() + Math.sin(ang));
+                } else {
+                    p = s.start().plus(s.end().minus(s.start()).times(t));
+                }
+                break;
+            }
+            lo += s.length();
+        }
+        nominal.measure(p.x(), p.y(), out, w);
+        assertThat(out[0]).isCloseTo(0, within(1e-9));
+        assertThat(out[3]).isCloseTo(target, within(1e-9));
+        double nx = out[1], ny = out[2];
+        nominal.measure(p.x() + delta * nx, p.y() + delta * ny, out, w);
+        assertThat(out[0]).isCloseTo(delta, within(1e-9));
+    }
+
     @Test
     void limitsOutsideTheEnvelopeFail() {
         Corner c = corner(90, 0, CornerKind.ROUND);
