@@ -54,7 +54,7 @@ public final class PracticeEditorPanel extends JPanel {
     private boolean loading;
 
     public PracticeEditorPanel(JsonFiles json, Executor background) {
-        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow,fill][]"));
+        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow 70,fill][grow 30,fill][]"));
         this.json = Objects.requireNonNull(json, "json");
         this.background = Objects.requireNonNull(background, "background");
         setName("practiceEditor");
@@ -90,11 +90,11 @@ public final class PracticeEditorPanel extends JPanel {
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(list), right);
         split.setResizeWeight(0.3);
         split.setBorder(null);
-        add(split, "wmin 10, hmin 10");
+        add(split, "wmin 10, hmin 10, h 60%");
         JTable table = new JTable(results);
         table.setName("exampleResults");
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 6));
-        add(new JScrollPane(table), "wmin 10");
+        add(new JScrollPane(table), "wmin 10, hmin 10, h 25%");
         add(new WrapLabel("Edits here are checked, not saved: change rules in the pack's files (see DEVELOPERS.md).",
                 "Label.font", "Arcwright.help.foreground"), "wmin 10");
     }
