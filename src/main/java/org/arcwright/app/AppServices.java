@@ -43,6 +43,8 @@ public record AppServices(Path configDir, JsonFiles json, WorksheetFiles files, 
         io.shutdown();
         try {
             io.awaitTermination(5, java.util.concurrent.TimeUnit.SECONDS);
+            background.awaitTermination(5, java.util.concurrent.TimeUnit.SECONDS);
+            search.awaitTermination(5, java.util.concurrent.TimeUnit.SECONDS);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
         }

@@ -408,9 +408,14 @@ public final class MainWindow {
     private void quit() {
         if (!confirmDiscard()) return;
         services.recovery().clear();
+        dispose();
+    }
+
+    /** Closes the window, the notes index and the worker threads (waiting for pending writes). */
+    public void dispose() {
         frame.dispose();
-        if (notesStore != null) notesStore.close();
         services.shutdown();
+        if (notesStore != null) notesStore.close();
     }
 
     private boolean confirmDiscard() {

@@ -47,7 +47,8 @@ class DecideFlowGuiTest {
     @AfterAll
     static void closeWindow() {
         if (fixture != null) fixture.cleanUp();
-        if (window != null) GuiSupport.onEdt(() -> window.frame().dispose());
+        // close the notes index and let background writes finish before the temporary folder goes
+        if (window != null) GuiSupport.onEdt(() -> window.dispose());
     }
 
     @Test
