@@ -64,6 +64,7 @@ public final class DecidePanel extends JPanel {
     private final JLabel featureTitle = new JLabel();
     private final JPanel cards = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 10", "[grow,fill]", ""));
     private final Timer adviseLater = new Timer(250, e -> adviseNow());
+    private final javax.swing.JButton keep = new javax.swing.JButton("Keep these answers");
     private transient List<Recommendation> shown = List.of();
     private String featureId;
     private DesignCase loadedCase;
@@ -128,7 +129,10 @@ public final class DecidePanel extends JPanel {
         JPanel p = new ScrollablePanel(new MigLayout("insets 4 4 12 12, wrap 1, gap 0 2", "[grow,fill]", ""));
         featureTitle.putClientProperty("FlatLaf.styleClass", "h3");
         featureTitle.setName("decideFeature");
-        p.add(featureTitle, "wmin 10, gapbottom 6");
+        p.add(featureTitle, "wmin 10, gapbottom 2");
+        keep.setName("keepAnswers");
+        keep.addActionListener(e -> keepAnswers());
+        p.add(keep, "left, growx 0, gapbottom 6");
         section(p, "The radius");
         text(p, Question.FEATURE);
         combo(p, Question.KIND, BlendKind.values(), form::setKind);
@@ -289,7 +293,27 @@ public final class DecidePanel extends JPanel {
             enable(q, m, "tick 'Check the mating corner' first");
         }
         showFigures();
+        refreshKeep();
         adviseLater.restart();
+    }
+
+    private void refreshKeep() {
+        Optional<DesignCase> c = form.toCase();
+        boolean changed = c.isPresent() && featureId != null && !c.get().equals(loadedCase);
+        keep.setEnabled(changed);
+        keep.setToolTipText(featureId == null ? "Unavailable: no feature is selected"
+                : c.isEmpty() ? "Unavailable: answer the questions marked in red first"
+                : !changed ? "Unavailable: the answers are the ones on the worksheet"
+                : "Save these answers to " + featureId + " without choosing a callout (clears its chosen callout; Ctrl+Z undoes)");
+    }
+
+    private void keepAnswers() {
+        Optional<DesignCase> c = form.toCase();
+        if (featureId == null || c.isEmpty()) return;
+        loadedCase = c.get();
+        session.updateCase(featureId, c.get());
+        status.accept("Kept the answers for " + featureId + " (Ctrl+Z to undo)");
+        refreshKeep();
     }
 
     private void enable(Question q, boolean on, String why) {
