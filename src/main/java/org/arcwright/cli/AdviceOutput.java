@@ -72,6 +72,7 @@ final class AdviceOutput {
                 c.process().key(), c.standard().key().toUpperCase(java.util.Locale.ROOT),
                 c.hasDatums() ? ", datums " + String.join(" ", c.datums()) : ", no datums",
                 (c.formMatters() ? ", form matters" : "") + (c.locationMatters() ? ", location matters" : ""));
+        for (String w : advice.warnings()) out.println("warning   " + w);
         List<Recommendation> recs = advice.recommendations();
         for (int i = 0; i < recs.size() && i < limit; i++) {
             Recommendation r = recs.get(i);
@@ -93,7 +94,6 @@ final class AdviceOutput {
             out.printf("(%d more; --all lists every recommendation, --format json gives everything)%n", recs.size() - limit);
         }
         for (String cf : advice.conflicts()) out.println("CONFLICT  " + cf);
-        for (String w : advice.warnings()) out.println("warning   " + w);
     }
 
     private static String numbersLine(Map<String, Object> m) {

@@ -108,6 +108,9 @@ public final class Advisor {
         }
         if (distinct.isEmpty()) {
             warnings.add("No rule fired for this case; the title block's general tolerance applies unless you state one.");
+        } else if (distinct.get(0).demoted()) {
+            warnings.add("No control passes its checks for this case as it stands: every recommendation is demoted. "
+                    + "Read the first one's cautions for what would work before putting any of them on the drawing.");
         }
         return new Advice(c, distinct, conflicts, warnings);
     }
@@ -159,12 +162,24 @@ public final class Advisor {
                 double bandBefore = d.hi() - d.lo();
                 if (d.raiseLowerEnd(m.radius(), ctx.stepHeight())) {
                     cautions.add("Limits adjusted: " + why + "; the lower end was raised to " + fmt(d.lo(), d.places) + ".");
-                    if (d.hi() - d.lo() < bandBefore - 1e-9) {
+                    trace.add("adjusted for the stress target: " + d.describeRange());
+                    Optional<String> tooTight = tooTight(d, ctx, bandBefore);
+                    if (tooTight.isPresent()) {
+                        demoted = true;
+                        cautions.add("Demoted: to meet the " + m.factor() + " target " + plain(m.target()) + " the "
+                                + d.describeRange() + (d.isProfile() ? " leaves" : " leave") + " a band of " + fmt(d.hi() - d.lo(), d.places)
+                                + " under the step height h = " + fmt(ctx.stepHeight(), d.places) + ", " + tooTight.get()
+                                + ". What would work: a larger step (a larger D or a smaller d, so a larger radius fits"
+                                + " under h), a relief groove or undercut with its own larger radius, relaxing the target"
+                                + " where the fatigue analysis allows it (a material or surface treatment with more fatigue"
+                                + " strength, e.g. rolled or shot-peened fillets), or a finishing process that holds the band"
+                                + " (e.g. form grinding; ask the shop).");
+                        trace.add("demoted: the adjusted band is narrower than the process holds");
+                    } else if (d.hi() - d.lo() < bandBefore - 1e-9) {
                         cautions.add("The band had to shrink to " + fmt(d.hi() - d.lo(), d.places) + " to stay under the step "
                                 + "height h = " + fmt(ctx.stepHeight(), d.places) + ": check the shop can hold it, or "
                                 + "consider a relief groove, an undercut or a larger step.");
                     }
-                    trace.add("adjusted for the stress target: " + d.describeRange());
                 } else {
                     demoted = true;
                     cautions.add("Demoted: " + why + "; this control cannot be tightened to suit. Give the radius its own "
@@ -180,10 +195,21 @@ public final class Advisor {
                         + ", fouls the mating corner (" + s.message() + ")";
                 double floor = minR.filter(FilletChecks.MinimumRadiusFigure::found)
                         .map(FilletChecks.MinimumRadiusFigure::radius).orElse(0.0);
+                double bandBefore = d.hi() - d.lo();
                 if (d.lowerUpperEnd(s.largestRadius(), floor)) {
                     cautions.add("Limits adjusted: " + why + "; the upper end was lowered to " + fmt(d.hi(), d.places) + ".");
                     trace.add("adjusted for seating: " + d.describeRange());
                     seat = checks.seating(c, d.hi());
+                    Optional<String> tooTight = tooTight(d, ctx, bandBefore);
+                    if (tooTight.isPresent()) {
+                        demoted = true;
+                        cautions.add("Demoted: to seat the mating part" + (floor > 0 ? " and meet the stress target" : "")
+                                + " the " + d.describeRange() + (d.isProfile() ? " leaves" : " leave") + " a band of " + fmt(d.hi() - d.lo(), d.places) + ", "
+                                + tooTight.get() + ". What would work: a larger chamfer on the mating part, a smaller"
+                                + " nominal" + (floor > 0 ? " with a relaxed stress target, a relief groove or undercut" : "")
+                                + ", or a finishing process that holds the band (ask the shop).");
+                        trace.add("demoted: the adjusted band is narrower than the process holds");
+                    }
                 } else {
                     demoted = true;
                     cautions.add("Demoted: " + why + "; no limits of this control both seat and meet the other checks. "
@@ -288,6 +314,26 @@ public final class Advisor {
             cautions.add("No process capability entry for " + c.process().key() + "; the tolerance is 10% of the nominal. "
                     + "Ask the shop what it holds.");
         }
+    }
+
+    /**
+     * Why the band left by an adjustment cannot be made, if it cannot: it shrank below both what the rule asked
+     * ({@code bandBefore}) and the band the process capability table says the process holds at that size. A band
+     * the rule itself set tighter than the table (a team's deliberate choice) is not second-guessed.
+     */
+    private Optional<String> tooTight(Draft d, Context ctx, double bandBefore) {
+        double band = d.hi() - d.lo();
+        if (!(band < bandBefore - 1e-9)) return Optional.empty();
+        CapabilityTable cap = book.capability();
+        DesignCase c = ctx.c;
+        double mmPer = c.units().millimetres();
+        double sizeMm = d.hi() * mmPer;
+        Optional<Double> t = cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), sizeMm);
+        if (t.isEmpty()) return Optional.empty();
+        double holds = 2 * t.get() / mmPer;
+        if (!(band < Math.min(holds, bandBefore) - 1e-9)) return Optional.empty();
+        return Optional.of("narrower than " + c.process().key() + " radii near R" + fmt(d.hi(), d.places) + " are held (±"
+                + plain(t.get()) + " mm, a band of " + fmt(holds, d.places) + "; " + cap.source() + ")");
     }
 
     private static String generalLabel(GeneralToleranceTable table, String cls) {
