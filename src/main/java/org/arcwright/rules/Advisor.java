@@ -38,8 +38,8 @@ public final class Advisor {
     /** Carried by every recommendation about stress, sealing or seating. */
     public static final String GUIDANCE_CAUTION = "Guidance only: defer to the governing standard, your company's "
             + "practice and licensed engineering judgement.";
-    /** The corner angle assumed when the case does not give one: square shoulders and edges. */
-    public static final double DEFAULT_ANGLE = 90.0;
+    /** The corner angle assumed when the case does not give one ({@link DesignCase#SQUARE_CORNER}). */
+    public static final double DEFAULT_ANGLE = DesignCase.SQUARE_CORNER;
 
     private static final double DEMOTED_SCORE_FACTOR = 0.25;
     private static final int NOTES_PER_RECOMMENDATION = 3;
@@ -381,7 +381,8 @@ public final class Advisor {
         final CalloutPlan plan;
         final DesignCase c;
         final int places;
-        final double k = CrescentZone.factor(DEFAULT_ANGLE);
+        final double angle;
+        final double k;
         double nominal;
         double min;
         double max;
@@ -400,6 +401,8 @@ public final class Advisor {
             this.c = c;
             this.places = places;
             this.nominal = c.nominalRadius();
+            this.angle = c.cornerAngleDegrees();
+            this.k = CrescentZone.factor(angle);
         }
 
         boolean isProfile() { return zones != null; }
@@ -433,7 +436,7 @@ public final class Advisor {
 
         /** Sizes the profile zone(s) to hold the same radius band at the corner: the crescent's equivalent zone. */
         void zoneFromBand() {
-            double base = CrescentZone.of(min, nominal, max, DEFAULT_ANGLE).equalBilateralProfile();
+            double base = CrescentZone.of(min, nominal, max, angle).equalBilateralProfile();
             List<Double> factors = plan.tiers() == null ? List.of(1.0) : plan.tiers();
             zones = new double[factors.size()];
             for (int i = 0; i < zones.length; i++) {
@@ -604,8 +607,8 @@ public final class Advisor {
             m.put("min", round(lo));
             m.put("max", round(hi));
             m.put("band", round(hi - lo));
-            m.put("angle", DEFAULT_ANGLE);
-            CrescentZone z = CrescentZone.of(lo, Math.min(Math.max(nominal, lo), hi), hi, DEFAULT_ANGLE);
+            m.put("angle", angle);
+            CrescentZone z = CrescentZone.of(lo, Math.min(Math.max(nominal, lo), hi), hi, angle);
             m.put("crescentWidth", round(z.width()));
             m.put("equivalentProfileZone", round(z.equalBilateralProfile()));
             if (isProfile()) {
