@@ -182,8 +182,13 @@ public final class Advisor {
                     }
                 } else {
                     demoted = true;
-                    cautions.add("Demoted: " + why + "; this control cannot be tightened to suit. Give the radius its own "
-                            + "limits with the minimum at or above " + fmt(m.radius(), d.places) + ".");
+                    Optional<Double> room = roomUnderStep(m.radius(), ctx);
+                    cautions.add("Demoted: " + why + "; this control cannot be tightened to suit. " + (room.isPresent()
+                            ? "Own limits would not help either: from " + fmt(m.radius(), d.places) + " up to the step "
+                            + "height h = " + fmt(ctx.stepHeight(), d.places) + " leaves a band of "
+                            + fmt(ctx.stepHeight() - m.radius(), d.places) + ", less than the " + fmt(room.get(), d.places)
+                            + " the process holds there; a larger step, a relief groove or a relaxed target is needed."
+                            : "Give the radius its own limits with the minimum at or above " + fmt(m.radius(), d.places) + "."));
                 }
             }
         }
@@ -334,6 +339,18 @@ public final class Advisor {
         if (!(band < Math.min(holds, bandBefore) - 1e-9)) return Optional.empty();
         return Optional.of("narrower than " + c.process().key() + " radii near R" + fmt(d.hi(), d.places) + " are held (±"
                 + plain(t.get()) + " mm, a band of " + fmt(holds, d.places) + "; " + cap.source() + ")");
+    }
+
+    /**
+     * The band the process holds near the step height, when it is wider than the room between {@code minRadius}
+     * and the step height (so no limits fit); empty when limits can fit or nothing says what the process holds.
+     */
+    private Optional<Double> roomUnderStep(double minRadius, Context ctx) {
+        double h = ctx.stepHeight();
+        CapabilityTable cap = book.capability();
+        if (!Double.isFinite(h) || cap == null) return Optional.empty();
+        double mmPer = ctx.c.units().millimetres();
+        return cap.plusMinusMm(ctx.c.process(), h * mmPer).map(t -> 2 * t / mmPer).filter(band -> band > h - minRadius + 1e-9);
     }
 
     private static String generalLabel(GeneralToleranceTable table, String cls) {

@@ -110,5 +110,10 @@ class MechanicsChecksTest {
         assertThat(r.demoted()).isTrue();
         assertThat(r.text()).isEqualTo("CR3.48-3.50");
         assertThat(r.cautions()).anySatisfy(c -> assertThat(c).startsWith("Demoted:").contains("band of 0.02", "larger step"));
+        // the title block cannot be tightened, and its caution must not send the engineer to limits that cannot be made
+        Recommendation titleBlock = advisor.advise(feature("F1")).recommendations().stream()
+                .filter(x -> x.ruleId().equals("fallback.title-block")).findFirst().orElseThrow();
+        assertThat(titleBlock.cautions()).anySatisfy(c -> assertThat(c).contains("Own limits would not help either")
+                .contains("band of 0.02", "0.40"));
     }
 }
