@@ -71,7 +71,9 @@ final class AdviceOutput {
                 c.loading() == org.arcwright.rules.Loading.NONE ? "no load" : c.loading().key() + " load",
                 c.process().key(), c.standard().key().toUpperCase(java.util.Locale.ROOT),
                 c.hasDatums() ? ", datums " + String.join(" ", c.datums()) : ", no datums",
-                (c.formMatters() ? ", form matters" : "") + (c.locationMatters() ? ", location matters" : ""));
+                (c.formMatters() ? ", form matters" : "") + (c.locationMatters() ? ", location matters" : "")
+                        + (c.cornerAngle() == null ? "" : ", " + Numbers.plain(c.cornerAngle()) + "° corner"));
+        for (String w : advice.warnings()) out.println("warning   " + w);
         List<Recommendation> recs = advice.recommendations();
         for (int i = 0; i < recs.size() && i < limit; i++) {
             Recommendation r = recs.get(i);
@@ -93,7 +95,6 @@ final class AdviceOutput {
             out.printf("(%d more; --all lists every recommendation, --format json gives everything)%n", recs.size() - limit);
         }
         for (String cf : advice.conflicts()) out.println("CONFLICT  " + cf);
-        for (String w : advice.warnings()) out.println("warning   " + w);
     }
 
     private static String numbersLine(Map<String, Object> m) {
@@ -103,7 +104,10 @@ final class AdviceOutput {
         append(sb, m.containsKey("zone") ? "radius range the zone admits" : "limits", num(m, "min", p) + " to "
                 + num(m, "max", p) + " " + u);
         if (m.containsKey("zone")) append(sb, "zone", m.get("zone") + (m.containsKey("tierZones") ? " (tiers " + m.get("tierZones") + ")" : ""));
-        append(sb, "crescent", num(m, "crescentWidth", p + 1));
+        Object angle = m.get("angle");
+        boolean square = angle instanceof Number n && n.doubleValue() == org.arcwright.rules.DesignCase.SQUARE_CORNER;
+        append(sb, "crescent", num(m, "crescentWidth", p + 1)
+                + (angle == null || square ? "" : " at a " + Numbers.plain(((Number) angle).doubleValue()) + "° corner"));
         append(sb, "equivalent profile zone", num(m, "equivalentProfileZone", p + 1));
         if (m.containsKey("ktAtMin")) append(sb, "Kt at min/max", num(m, "ktAtMin", 2) + "/" + num(m, "ktAtMax", 2));
         if (m.containsKey("kfAtMin")) append(sb, "Kf at min/max", num(m, "kfAtMin", 2) + "/" + num(m, "kfAtMax", 2));

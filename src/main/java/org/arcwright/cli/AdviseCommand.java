@@ -22,6 +22,7 @@ import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.RadiusFeature;
 import org.arcwright.worksheet.WorksheetFiles;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -42,8 +43,8 @@ final class AdviseCommand implements Callable<Integer> {
     @Option(names = "--batch", paramLabel = "PART.csv", description = "A CSV table of radii, one row per feature (columns in the README).")
     Path batch;
 
-    @Option(names = "--pack", paramLabel = "DIR", description = "A practice pack to layer over the built-in one (repeatable, lowest first).")
-    List<Path> packs = List.of();
+    @Mixin
+    PackOptions packs;
 
     @Option(names = "--format", defaultValue = "text", paramLabel = "text|json|csv",
             description = "text, json, or csv (one row per feature; part files and --batch only). Default: ${DEFAULT-VALUE}.")
@@ -51,10 +52,6 @@ final class AdviseCommand implements Callable<Integer> {
 
     @Option(names = "--all", description = "In text, list every recommendation, not only the first three.")
     boolean all;
-
-    @Option(names = "--personal", paramLabel = "DIR",
-            description = "Your personal pack, layered last (default: the personal pack of your settings, when it exists).")
-    Path personal;
 
     @Option(names = "--no-notes", description = "Do not link practice notes (skips opening the notes index).")
     boolean noNotes;
@@ -70,10 +67,10 @@ final class AdviseCommand implements Callable<Integer> {
         if (!List.of("text", "json", "csv").contains(format)) {
             throw InputProblem.ofField("--format", "use text, json or csv, got '" + format + "'");
         }
-        PackStack stack = PackStack.load(packs, Advisors.personalPack(personal));
-        RuleBook book = RuleBook.load(stack);
         PrintWriter out = spec.commandLine().getOut();
         PrintWriter err = spec.commandLine().getErr();
+        PackStack stack = packs.load("advise", err);
+        RuleBook book = RuleBook.load(stack);
         for (InputProblem p : book.problems()) err.println("arcwright advise: pack problem, skipped: " + p.getMessage());
         Advisors.WithNotes wn = noNotes ? new Advisors.WithNotes(Advisors.standard(stack, book), () -> { })
                 : Advisors.withNotes(stack, book, notesIndex, w -> err.println("arcwright advise: " + w));

@@ -1,7 +1,6 @@
 package org.arcwright.cli;
 
 import java.io.Closeable;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import org.arcwright.notes.NotesPaths;
@@ -20,12 +19,6 @@ final class Advisors {
     /** Rules of {@code stack} and the mechanics checks, no notes. */
     static Advisor standard(PackStack stack, RuleBook book) {
         return new Advisor(book, MechanicsChecks.standard(stack), NoteLinker.NONE);
-    }
-
-    /** The user's personal pack when it exists (the notes' default location), else null. */
-    static Path personalPack(Path given) {
-        Path p = given != null ? given : NotesPaths.ofSystem().personalPack();
-        return Files.isRegularFile(p.resolve("pack.json")) ? p : null;
     }
 
     /** An advisor with notes linked from the packs' notes, and the store to close when done. */

@@ -14,6 +14,7 @@ import org.arcwright.mechanics.MechanicsFiles;
 import org.arcwright.mechanics.PetersonFits;
 import org.arcwright.pack.PackStack;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -36,13 +37,13 @@ final class ClearanceCommand implements Callable<Integer> {
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
 
-    @Option(names = "--pack", paramLabel = "DIR", description = "A practice pack to layer over the built-in one (repeatable).")
-    List<Path> packs = List.of();
+    @Mixin
+    PackOptions packs;
 
     @Override
     public Integer call() {
         ClearanceCase c = new MechanicsFiles(new JsonFiles(), PetersonFits.published()).readClearance(file);
-        PackStack stack = PackStack.load(packs, null);
+        PackStack stack = packs.load("clearance", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         CornerClearance result = FilletMechanics.load(stack).clearance().check(c);
         PrintWriter out = spec.commandLine().getOut();

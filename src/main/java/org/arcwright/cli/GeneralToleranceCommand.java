@@ -14,6 +14,7 @@ import org.arcwright.tolerance.ToleranceQuantity;
 import org.arcwright.tolerance.Units;
 import picocli.CommandLine.ArgGroup;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Spec;
 import picocli.CommandLine.Model.CommandSpec;
@@ -47,8 +48,8 @@ final class GeneralToleranceCommand implements Callable<Integer> {
     @Option(names = "--table", paramLabel = "ID", description = "A table id other than ISO 2768-1 (from a practice pack).")
     String tableId;
 
-    @Option(names = "--pack", paramLabel = "DIR", description = "A practice pack to layer over the built-in one (repeatable).")
-    List<java.nio.file.Path> packs = List.of();
+    @Mixin
+    PackOptions packs;
 
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
@@ -62,7 +63,7 @@ final class GeneralToleranceCommand implements Callable<Integer> {
         String field = what.radius != null ? "--radius" : what.linear != null ? "--linear" : "--angle-side";
         if (!Double.isFinite(size)) throw org.arcwright.io.InputProblem.ofField(field, "not a finite number");
         if (size <= 0) throw org.arcwright.io.InputProblem.ofField(field, "must be greater than zero, got " + size);
-        PackStack stack = PackStack.load(packs, null);
+        PackStack stack = packs.load("general-tolerance", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         GeneralToleranceTables tables = GeneralToleranceTables.load(stack);
         GeneralToleranceTable table = tableId == null ? tables.iso(q) : tables.require(tableId);

@@ -12,6 +12,7 @@ import org.arcwright.templates.NoteTemplates;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.WorksheetFiles;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -35,12 +36,12 @@ final class NoteCommand implements Callable<Integer> {
     @Option(names = "--feature", paramLabel = "ID", description = "Fill a per-feature template for this feature only.")
     String feature;
 
-    @Option(names = "--pack", paramLabel = "DIR", description = "A practice pack to layer over the built-in one (repeatable).")
-    List<Path> packs = List.of();
+    @Mixin
+    PackOptions packs;
 
     @Override
     public Integer call() throws Exception {
-        PackStack stack = PackStack.load(packs, null);
+        PackStack stack = packs.load("note", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         NoteTemplates templates = NoteTemplates.load(stack);
         if (template.endsWith(NoteTemplates.EXTENSION)) {

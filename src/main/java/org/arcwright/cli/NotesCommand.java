@@ -82,7 +82,7 @@ final class NotesCommand implements Runnable {
                     .and(NoteFacet.FUNCTION, functions.toArray(String[]::new))
                     .and(NoteFacet.STANDARD, standards.toArray(String[]::new))
                     .and(NoteFacet.PROCESS, processes.toArray(String[]::new));
-            try (NotesStore store = options.open(false)) {
+            try (NotesStore store = options.open(false, spec.commandLine().getErr())) {
                 warnProblems(spec, store);
                 SearchResult r = store.search(query, filters, limit);
                 PrintWriter out = spec.commandLine().getOut();
@@ -163,7 +163,7 @@ final class NotesCommand implements Runnable {
 
         @Override
         public Integer call() {
-            try (NotesStore store = options.open(false)) {
+            try (NotesStore store = options.open(false, spec.commandLine().getErr())) {
                 warnProblems(spec, store);
                 FiledNote f = store.get(id).orElseThrow(() -> InputProblem.ofField("ID",
                         "no note '" + id + "'; search with 'arcwright notes search WORDS'"));
@@ -232,7 +232,7 @@ final class NotesCommand implements Runnable {
         @Override
         public Integer call() {
             NoteFormat.parse(readable(file), file.toString());
-            try (NotesStore store = options.open(true)) {
+            try (NotesStore store = options.open(true, spec.commandLine().getErr())) {
                 FiledNote f = store.add(file, replace);
                 PrintWriter out = spec.commandLine().getOut();
                 if (format == OutputFormat.json) {
@@ -277,7 +277,7 @@ final class NotesCommand implements Runnable {
 
         @Override
         public Integer call() {
-            try (NotesStore store = options.open(false)) {
+            try (NotesStore store = options.open(false, spec.commandLine().getErr())) {
                 IndexReport r = store.reindex();
                 PrintWriter out = spec.commandLine().getOut();
                 if (format == OutputFormat.json) {

@@ -6,7 +6,9 @@ import java.util.List;
 import java.util.concurrent.Callable;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.ConfigDirectory;
 import org.arcwright.pack.PackLayer;
+import org.arcwright.pack.PackSettings;
 import org.arcwright.pack.PackStack;
 import org.arcwright.pack.PracticePack;
 import org.arcwright.rules.PackCheck;
@@ -41,8 +43,15 @@ final class PackCommand implements Runnable {
         @Parameters(index = "0", paramLabel = "DIR", description = "The pack folder (with pack.json).")
         Path dir;
 
-        @Option(names = "--pack", paramLabel = "DIR", description = "Packs to layer below the one checked (repeatable).")
+        @Option(names = "--pack", paramLabel = "DIR",
+                description = "Packs to layer below the one checked (repeatable; default: the team packs of your settings listed below DIR, or all of them when DIR is not one).")
         List<Path> below = List.of();
+
+        @Option(names = "--no-settings", description = "Ignore the team packs chosen in your settings.")
+        boolean noSettings;
+
+        @Option(names = "--config-dir", paramLabel = "DIR", hidden = true, description = "The config folder holding settings.json.")
+        Path configDir;
 
         @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE}).")
         OutputFormat format;
@@ -56,7 +65,7 @@ final class PackCommand implements Runnable {
                 // the built-in pack itself, e.g. knowledge/ while editing it: check it alone
                 stack = new PackStack(List.of(PracticePack.open(dir, PackLayer.BUILT_IN, new JsonFiles())), List.of());
             } else {
-                List<Path> layers = new java.util.ArrayList<>(below);
+                List<Path> layers = new java.util.ArrayList<>(below.isEmpty() ? settingsBelow() : below);
                 layers.add(dir);
                 stack = PackStack.load(layers, null);
             }
@@ -75,6 +84,24 @@ final class PackCommand implements Runnable {
                 printText(out, report, book);
             }
             return report.passed() ? Cli.OK : Cli.FAIL;
+        }
+
+        /** The settings' team packs under the checked one: those listed before it, or all when it is not listed. */
+        private List<Path> settingsBelow() {
+            if (noSettings) return List.of();
+            PackSettings settings = PackSettings.read(configDir != null ? configDir : ConfigDirectory.ofSystem(), new JsonFiles());
+            settings.problem().ifPresent(p -> spec.commandLine().getErr().println("arcwright pack check: settings not used: " + p.getMessage()));
+            Path self = dir.toAbsolutePath().normalize();
+            List<Path> out = new java.util.ArrayList<>();
+            for (Path p : settings.teamPacks()) {
+                if (p.toAbsolutePath().normalize().equals(self)) return out;
+                if (java.nio.file.Files.isRegularFile(p.resolve("pack.json"))) {
+                    out.add(p);
+                } else {
+                    spec.commandLine().getErr().println("arcwright pack check: pack from your settings skipped: " + p + ": no pack.json");
+                }
+            }
+            return out;
         }
 
         private static void printText(PrintWriter out, PackCheck.Report r, RuleBook book) {

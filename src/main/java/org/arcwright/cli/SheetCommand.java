@@ -11,6 +11,7 @@ import org.arcwright.templates.NoteTemplates;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.WorksheetFiles;
 import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
@@ -32,8 +33,8 @@ final class SheetCommand implements Callable<Integer> {
     @Option(names = "--out", required = true, paramLabel = "OUT", description = "OUT.md, OUT.html or OUT.pdf.")
     Path out;
 
-    @Option(names = "--pack", paramLabel = "DIR", description = "A practice pack to layer over the built-in one (repeatable).")
-    List<Path> packs = List.of();
+    @Mixin
+    PackOptions packs;
 
     @Option(names = "--no-suggest", description = "Do not show the advisor's suggestion for undecided features.")
     boolean noSuggest;
@@ -41,7 +42,7 @@ final class SheetCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SheetExporter.Format.of(out);
-        PackStack stack = PackStack.load(packs, null);
+        PackStack stack = packs.load("sheet", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         NoteTemplates templates = NoteTemplates.load(stack);
         PartWorksheet ws = new WorksheetFiles(new JsonFiles()).read(part);

@@ -38,8 +38,8 @@ public final class Advisor {
     /** Carried by every recommendation about stress, sealing or seating. */
     public static final String GUIDANCE_CAUTION = "Guidance only: defer to the governing standard, your company's "
             + "practice and licensed engineering judgement.";
-    /** The corner angle assumed when the case does not give one: square shoulders and edges. */
-    public static final double DEFAULT_ANGLE = 90.0;
+    /** The corner angle assumed when the case does not give one ({@link DesignCase#SQUARE_CORNER}). */
+    public static final double DEFAULT_ANGLE = DesignCase.SQUARE_CORNER;
 
     private static final double DEMOTED_SCORE_FACTOR = 0.25;
     private static final int NOTES_PER_RECOMMENDATION = 3;
@@ -108,6 +108,9 @@ public final class Advisor {
         }
         if (distinct.isEmpty()) {
             warnings.add("No rule fired for this case; the title block's general tolerance applies unless you state one.");
+        } else if (distinct.get(0).demoted()) {
+            warnings.add("No control passes its checks for this case as it stands: every recommendation is demoted. "
+                    + "Read the first one's cautions for what would work before putting any of them on the drawing.");
         }
         return new Advice(c, distinct, conflicts, warnings);
     }
@@ -159,16 +162,33 @@ public final class Advisor {
                 double bandBefore = d.hi() - d.lo();
                 if (d.raiseLowerEnd(m.radius(), ctx.stepHeight())) {
                     cautions.add("Limits adjusted: " + why + "; the lower end was raised to " + fmt(d.lo(), d.places) + ".");
-                    if (d.hi() - d.lo() < bandBefore - 1e-9) {
+                    trace.add("adjusted for the stress target: " + d.describeRange());
+                    Optional<String> tooTight = tooTight(d, ctx, bandBefore);
+                    if (tooTight.isPresent()) {
+                        demoted = true;
+                        cautions.add("Demoted: to meet the " + m.factor() + " target " + plain(m.target()) + " the "
+                                + d.describeRange() + (d.isProfile() ? " leaves" : " leave") + " a band of " + fmt(d.hi() - d.lo(), d.places)
+                                + " under the step height h = " + fmt(ctx.stepHeight(), d.places) + ", " + tooTight.get()
+                                + ". What would work: a larger step (a larger D or a smaller d, so a larger radius fits"
+                                + " under h), a relief groove or undercut with its own larger radius, relaxing the target"
+                                + " where the fatigue analysis allows it (a material or surface treatment with more fatigue"
+                                + " strength, e.g. rolled or shot-peened fillets), or a finishing process that holds the band"
+                                + " (e.g. form grinding; ask the shop).");
+                        trace.add("demoted: the adjusted band is narrower than the process holds");
+                    } else if (d.hi() - d.lo() < bandBefore - 1e-9) {
                         cautions.add("The band had to shrink to " + fmt(d.hi() - d.lo(), d.places) + " to stay under the step "
                                 + "height h = " + fmt(ctx.stepHeight(), d.places) + ": check the shop can hold it, or "
                                 + "consider a relief groove, an undercut or a larger step.");
                     }
-                    trace.add("adjusted for the stress target: " + d.describeRange());
                 } else {
                     demoted = true;
-                    cautions.add("Demoted: " + why + "; this control cannot be tightened to suit. Give the radius its own "
-                            + "limits with the minimum at or above " + fmt(m.radius(), d.places) + ".");
+                    Optional<Double> room = roomUnderStep(m.radius(), ctx);
+                    cautions.add("Demoted: " + why + "; this control cannot be tightened to suit. " + (room.isPresent()
+                            ? "Own limits would not help either: from " + fmt(m.radius(), d.places) + " up to the step "
+                            + "height h = " + fmt(ctx.stepHeight(), d.places) + " leaves a band of "
+                            + fmt(ctx.stepHeight() - m.radius(), d.places) + ", less than the " + fmt(room.get(), d.places)
+                            + " the process holds there; a larger step, a relief groove or a relaxed target is needed."
+                            : "Give the radius its own limits with the minimum at or above " + fmt(m.radius(), d.places) + "."));
                 }
             }
         }
@@ -180,10 +200,21 @@ public final class Advisor {
                         + ", fouls the mating corner (" + s.message() + ")";
                 double floor = minR.filter(FilletChecks.MinimumRadiusFigure::found)
                         .map(FilletChecks.MinimumRadiusFigure::radius).orElse(0.0);
+                double bandBefore = d.hi() - d.lo();
                 if (d.lowerUpperEnd(s.largestRadius(), floor)) {
                     cautions.add("Limits adjusted: " + why + "; the upper end was lowered to " + fmt(d.hi(), d.places) + ".");
                     trace.add("adjusted for seating: " + d.describeRange());
                     seat = checks.seating(c, d.hi());
+                    Optional<String> tooTight = tooTight(d, ctx, bandBefore);
+                    if (tooTight.isPresent()) {
+                        demoted = true;
+                        cautions.add("Demoted: to seat the mating part" + (floor > 0 ? " and meet the stress target" : "")
+                                + " the " + d.describeRange() + (d.isProfile() ? " leaves" : " leave") + " a band of " + fmt(d.hi() - d.lo(), d.places) + ", "
+                                + tooTight.get() + ". What would work: a larger chamfer on the mating part, a smaller"
+                                + " nominal" + (floor > 0 ? " with a relaxed stress target, a relief groove or undercut" : "")
+                                + ", or a finishing process that holds the band (ask the shop).");
+                        trace.add("demoted: the adjusted band is narrower than the process holds");
+                    }
                 } else {
                     demoted = true;
                     cautions.add("Demoted: " + why + "; no limits of this control both seat and meet the other checks. "
@@ -290,6 +321,38 @@ public final class Advisor {
         }
     }
 
+    /**
+     * Why the band left by an adjustment cannot be made, if it cannot: it shrank below both what the rule asked
+     * ({@code bandBefore}) and the band the process capability table says the process holds at that size. A band
+     * the rule itself set tighter than the table (a team's deliberate choice) is not second-guessed.
+     */
+    private Optional<String> tooTight(Draft d, Context ctx, double bandBefore) {
+        double band = d.hi() - d.lo();
+        if (!(band < bandBefore - 1e-9)) return Optional.empty();
+        CapabilityTable cap = book.capability();
+        DesignCase c = ctx.c;
+        double mmPer = c.units().millimetres();
+        double sizeMm = d.hi() * mmPer;
+        Optional<Double> t = cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), sizeMm);
+        if (t.isEmpty()) return Optional.empty();
+        double holds = 2 * t.get() / mmPer;
+        if (!(band < Math.min(holds, bandBefore) - 1e-9)) return Optional.empty();
+        return Optional.of("narrower than " + c.process().key() + " radii near R" + fmt(d.hi(), d.places) + " are held (±"
+                + plain(t.get()) + " mm, a band of " + fmt(holds, d.places) + "; " + cap.source() + ")");
+    }
+
+    /**
+     * The band the process holds near the step height, when it is wider than the room between {@code minRadius}
+     * and the step height (so no limits fit); empty when limits can fit or nothing says what the process holds.
+     */
+    private Optional<Double> roomUnderStep(double minRadius, Context ctx) {
+        double h = ctx.stepHeight();
+        CapabilityTable cap = book.capability();
+        if (!Double.isFinite(h) || cap == null) return Optional.empty();
+        double mmPer = ctx.c.units().millimetres();
+        return cap.plusMinusMm(ctx.c.process(), h * mmPer).map(t -> 2 * t / mmPer).filter(band -> band > h - minRadius + 1e-9);
+    }
+
     private static String generalLabel(GeneralToleranceTable table, String cls) {
         if (table.id().startsWith("iso2768-1")) return "ISO 2768-" + cls;
         return table.title() + ", class " + cls;
@@ -335,7 +398,8 @@ public final class Advisor {
         final CalloutPlan plan;
         final DesignCase c;
         final int places;
-        final double k = CrescentZone.factor(DEFAULT_ANGLE);
+        final double angle;
+        final double k;
         double nominal;
         double min;
         double max;
@@ -354,6 +418,8 @@ public final class Advisor {
             this.c = c;
             this.places = places;
             this.nominal = c.nominalRadius();
+            this.angle = c.cornerAngleDegrees();
+            this.k = CrescentZone.factor(angle);
         }
 
         boolean isProfile() { return zones != null; }
@@ -387,7 +453,7 @@ public final class Advisor {
 
         /** Sizes the profile zone(s) to hold the same radius band at the corner: the crescent's equivalent zone. */
         void zoneFromBand() {
-            double base = CrescentZone.of(min, nominal, max, DEFAULT_ANGLE).equalBilateralProfile();
+            double base = CrescentZone.of(min, nominal, max, angle).equalBilateralProfile();
             List<Double> factors = plan.tiers() == null ? List.of(1.0) : plan.tiers();
             zones = new double[factors.size()];
             for (int i = 0; i < zones.length; i++) {
@@ -558,8 +624,8 @@ public final class Advisor {
             m.put("min", round(lo));
             m.put("max", round(hi));
             m.put("band", round(hi - lo));
-            m.put("angle", DEFAULT_ANGLE);
-            CrescentZone z = CrescentZone.of(lo, Math.min(Math.max(nominal, lo), hi), hi, DEFAULT_ANGLE);
+            m.put("angle", angle);
+            CrescentZone z = CrescentZone.of(lo, Math.min(Math.max(nominal, lo), hi), hi, angle);
             m.put("crescentWidth", round(z.width()));
             m.put("equivalentProfileZone", round(z.equalBilateralProfile()));
             if (isProfile()) {

@@ -29,7 +29,7 @@ public final class CaseTable {
     public static final List<String> COLUMNS = List.of("feature", "units", "standard", "kind", "nominalRadius",
             "function", "loading", "formMatters", "locationMatters", "datums", "process", "tolerance", "stress.shape",
             "stress.load", "stress.D", "stress.d", "stress.ultimateStrength", "stress.targetKt", "mating.corner",
-            "mating.size", "mating.angle");
+            "mating.size", "mating.angle", "cornerAngle");
     /** Columns every table needs. */
     public static final List<String> REQUIRED = List.of("feature", "units", "standard", "kind", "nominalRadius",
             "function", "process");
@@ -151,9 +151,12 @@ public final class CaseTable {
                 field = "mating.corner";
                 mating = new DesignCase.MatingCorner(corner, size, angle == null ? null : number(angle));
             }
+            field = "cornerAngle";
+            String corner = text(v, "cornerAngle");
+            Double cornerAngle = corner == null ? null : number(corner);
             field = "nominalRadius";
             DesignCase c = new DesignCase(units, standard, feature, kind, r, function, loading, form, location, datums,
-                    process, stress, mating, text(v, "tolerance"));
+                    process, stress, mating, text(v, "tolerance"), cornerAngle);
             return new Row(line, feature == null ? "line " + line : feature, c);
         } catch (InputProblem p) {
             throw new InputProblem(src, line, 0, field, p.problem());

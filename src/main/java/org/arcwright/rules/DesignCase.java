@@ -27,12 +27,25 @@ import org.arcwright.tolerance.Units;
  * @param stress section geometry and material for a stress-concentration check, or null
  * @param mating the mating part's corner for a seating check, or null
  * @param tolerance the engineer's tolerance intent as radius text (e.g. {@code R1.5 ±0.1}), or null
+ * @param cornerAngle the angle between the two faces the radius blends, degrees, in (0, 180), or null for a
+ *     square corner ({@value #SQUARE_CORNER}); it sets the crescent and the equivalent profile zone
  */
 @JsonInclude(JsonInclude.Include.NON_NULL)
 public record DesignCase(Units units, DrawingStyle standard, String feature, BlendKind kind, double nominalRadius,
                          BlendFunction function, Loading loading, boolean formMatters, boolean locationMatters,
                          List<String> datums, Process process, StressInputs stress, MatingCorner mating,
-                         String tolerance) {
+                         String tolerance, Double cornerAngle) {
+
+    /** The corner angle assumed when the case gives none, degrees. */
+    public static final double SQUARE_CORNER = 90.0;
+
+    /** A case at a square corner (no {@code cornerAngle}): the form every caller used before the angle existed. */
+    public DesignCase(Units units, DrawingStyle standard, String feature, BlendKind kind, double nominalRadius,
+                      BlendFunction function, Loading loading, boolean formMatters, boolean locationMatters,
+                      List<String> datums, Process process, StressInputs stress, MatingCorner mating, String tolerance) {
+        this(units, standard, feature, kind, nominalRadius, function, loading, formMatters, locationMatters, datums,
+                process, stress, mating, tolerance, null);
+    }
 
     @JsonCreator
     public DesignCase(@JsonProperty(value = "units", required = true) Units units,
@@ -48,7 +61,8 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
                       @JsonProperty(value = "process", required = true) Process process,
                       @JsonProperty("stress") StressInputs stress,
                       @JsonProperty("mating") MatingCorner mating,
-                      @JsonProperty("tolerance") String tolerance) {
+                      @JsonProperty("tolerance") String tolerance,
+                      @JsonProperty("cornerAngle") Double cornerAngle) {
         Objects.requireNonNull(units, "units");
         Objects.requireNonNull(standard, "standard");
         Objects.requireNonNull(kind, "kind");
@@ -76,6 +90,20 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
         this.stress = stress;
         this.mating = mating;
         this.tolerance = tolerance == null || tolerance.isBlank() ? null : tolerance.trim();
+        if (cornerAngle != null && !(Double.isFinite(cornerAngle) && cornerAngle > 0 && cornerAngle < 180)) {
+            throw new IllegalArgumentException("cornerAngle must be between 0 and 180 degrees (exclusive), got " + cornerAngle);
+        }
+        this.cornerAngle = cornerAngle;
+    }
+
+    /** The corner angle in degrees: the case's, else a square corner. */
+    @JsonIgnore
+    public double cornerAngleDegrees() { return cornerAngle == null ? SQUARE_CORNER : cornerAngle; }
+
+    /** The same case at another corner angle (null for a square corner). */
+    public DesignCase withCornerAngle(Double angle) {
+        return new DesignCase(units, standard, feature, kind, nominalRadius, function, loading, formMatters,
+                locationMatters, datums, process, stress, mating, tolerance, angle);
     }
 
     /** True when datum features are available for the adjacent surfaces. */

@@ -98,6 +98,31 @@ class AdvisorChecksTest {
     }
 
     @Test
+    void limitsSqueezedUnderTheStepBelowWhatTheProcessHoldsAreDemotedWithTheNumbersKept() {
+        // target Kt 1.27: r >= (0.5/0.27)^2 = 3.429 -> 3.43; the intent band 0.4 cannot fit under h = 3.5, so
+        // 3.43 to 3.50 is left, a band of 0.07 where machining near R3.5 holds ±0.2 (built-in capability table,
+        // common practice)
+        Advice a = advise(shoulder(2, 1.27, "R2 ±0.2", null, BlendFunction.STRESS_RELIEF));
+        Recommendation r = a.recommendations().stream().filter(x -> x.ruleId().equals("stress-relief.fatigue.asme-cr"))
+                .findFirst().orElseThrow();
+        assertThat(r.demoted()).isTrue();
+        assertThat(r.text()).isEqualTo("CR3.43-3.50");
+        assertThat(r.cautions()).anySatisfy(c -> assertThat(c).startsWith("Demoted:")
+                .contains("band of 0.07", "h = 3.50", "±0.2 mm", "larger step", "relief groove", "relaxing the target"));
+        assertThat(a.recommendations()).allSatisfy(x -> assertThat(x.demoted()).isTrue());
+        assertThat(a.warnings()).anySatisfy(w -> assertThat(w).startsWith("No control passes"));
+    }
+
+    @Test
+    void aRaisedBandKeptWholeIsNotSecondGuessedEvenWhenTighterThanTheTable() {
+        // target Kt 1.29: r >= 2.973 -> 2.98; the capability band of CR2 +0.2/0 (machined ±0.1 at R2, plus-only)
+        // moves whole to 2.98 to 3.18, under h = 3.5: the rule's own band, so it stands
+        Recommendation r = advise(shoulder(2, 1.29, null, null, BlendFunction.STRESS_RELIEF)).first().orElseThrow();
+        assertThat(r.text()).isEqualTo("CR2.98-3.18");
+        assertThat(r.demoted()).isFalse();
+    }
+
+    @Test
     void aTitleBlockToleranceUnderTheTargetIsDemotedNotAdjusted() {
         Advice a = advise(shoulder(2, 1.3, null, null, BlendFunction.STRESS_RELIEF));
         assertThat(a.recommendations()).filteredOn(r -> r.ruleId().equals("fallback.title-block"))
