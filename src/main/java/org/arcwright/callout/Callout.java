@@ -24,7 +24,7 @@ import org.arcwright.tolerance.Units;
         @JsonSubTypes.Type(value = Callout.ControlledRadius.class, name = "controlled-radius"),
         @JsonSubTypes.Type(value = Callout.Profile.class, name = "profile"),
         @JsonSubTypes.Type(value = Callout.CompositeProfile.class, name = "composite-profile")})
-public sealed interface Callout {
+public sealed interface Callout permits Callout.General, Callout.SizeLimits, Callout.Profile, Callout.CompositeProfile {
 
     /** The {@code type} name used in files. */
     @JsonIgnore
@@ -46,6 +46,27 @@ public sealed interface Callout {
         public String typeName() { return "general"; }
     }
 
+    /** A size control on the radius: limits, with CR adding a fair curve. */
+    sealed interface SizeLimits extends Callout permits Radius, ControlledRadius {
+        /** Smallest radius allowed. */
+        double min();
+
+        /** Largest radius allowed. */
+        double max();
+
+        /** The nominal as drawn, or null for limit dimensioning. */
+        Double nominal();
+
+        /** R or CR. */
+        @JsonIgnore
+        RadiusKind radiusKind();
+
+        /** As a radius callout in limit form, rounded to {@code places}. */
+        default RadiusCallout toRadiusCallout(Units units, int places) {
+            return RadiusCallout.limits(radiusKind(), units, min(), max(), places);
+        }
+    }
+
     /**
      * A radius (R) with limits: size only.
      *
@@ -54,23 +75,16 @@ public sealed interface Callout {
      * @param nominal the nominal as drawn, or null for limit dimensioning
      */
     @JsonInclude(JsonInclude.Include.NON_NULL)
-    record Radius(double min, double max, Double nominal) implements Callout {
-        @JsonCreator
-        public Radius(@JsonProperty(value = "min", required = true) double min,
-                      @JsonProperty(value = "max", required = true) double max,
-                      @JsonProperty("nominal") Double nominal) {
+    record Radius(@JsonProperty(value = "min", required = true) double min,
+                  @JsonProperty(value = "max", required = true) double max,
+                  @JsonProperty("nominal") Double nominal) implements SizeLimits {
+        public Radius {
             requireLimits(min, max, nominal);
-            this.min = min;
-            this.max = max;
-            this.nominal = nominal;
         }
 
         public String typeName() { return "radius"; }
 
-        /** As a radius callout in limit form, rounded to {@code places}. */
-        public RadiusCallout toRadiusCallout(Units units, int places) {
-            return RadiusCallout.limits(RadiusKind.R, units, min, max, places);
-        }
+        public RadiusKind radiusKind() { return RadiusKind.R; }
     }
 
     /**
@@ -81,23 +95,16 @@ public sealed interface Callout {
      * @param nominal the nominal as drawn, or null
      */
     @JsonInclude(JsonInclude.Include.NON_NULL)
-    record ControlledRadius(double min, double max, Double nominal) implements Callout {
-        @JsonCreator
-        public ControlledRadius(@JsonProperty(value = "min", required = true) double min,
-                                @JsonProperty(value = "max", required = true) double max,
-                                @JsonProperty("nominal") Double nominal) {
+    record ControlledRadius(@JsonProperty(value = "min", required = true) double min,
+                            @JsonProperty(value = "max", required = true) double max,
+                            @JsonProperty("nominal") Double nominal) implements SizeLimits {
+        public ControlledRadius {
             requireLimits(min, max, nominal);
-            this.min = min;
-            this.max = max;
-            this.nominal = nominal;
         }
 
         public String typeName() { return "controlled-radius"; }
 
-        /** As a radius callout in limit form, rounded to {@code places}. */
-        public RadiusCallout toRadiusCallout(Units units, int places) {
-            return RadiusCallout.limits(RadiusKind.CR, units, min, max, places);
-        }
+        public RadiusKind radiusKind() { return RadiusKind.CR; }
     }
 
     /**

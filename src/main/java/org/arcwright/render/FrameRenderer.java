@@ -64,8 +64,7 @@ public final class FrameRenderer {
      * controlled radius and the CR is drawn as R (from {@link DrawingStyle#remarks}).
      */
     public java.util.List<String> remarks(Callout c, DrawingStyle style, Units units) {
-        if (c instanceof Callout.ControlledRadius cr) return style.remarks(cr.toRadiusCallout(units, 4));
-        if (c instanceof Callout.Radius r) return style.remarks(r.toRadiusCallout(units, 4));
+        if (c instanceof Callout.SizeLimits s) return style.remarks(s.toRadiusCallout(units, 4));
         return java.util.List.of();
     }
 

@@ -187,8 +187,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
 
     /** What the drawing style says beyond the text, e.g. that ISO has no controlled radius. */
     private static List<String> styleRemarks(Callout c, PartWorksheet ws) {
-        if (c instanceof Callout.ControlledRadius cr) return ws.standard().remarks(cr.toRadiusCallout(ws.units(), 4));
-        if (c instanceof Callout.Radius r) return ws.standard().remarks(r.toRadiusCallout(ws.units(), 4));
+        if (c instanceof Callout.SizeLimits s) return ws.standard().remarks(s.toRadiusCallout(ws.units(), 4));
         return List.of();
     }
 
