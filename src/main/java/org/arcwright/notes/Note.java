@@ -37,20 +37,42 @@ public record Note(String id, String title, List<String> tags, List<String> func
                     + "' must be 1 to 80 lower-case letters, digits or hyphens, starting with a letter or digit");
         }
         Objects.requireNonNull(title, "title");
-        title = title.replaceAll("\\s+", " ").strip();
+        title = oneSpace(title).strip();
         if (title.isEmpty()) throw new IllegalArgumentException("title must not be blank");
         tags = labels(tags);
         functions = labels(functions);
         processes = labels(processes);
         standards = standards == null ? List.of()
                 : standards.stream().map(String::strip).filter(s -> !s.isEmpty()).distinct().toList();
-        author = author == null ? "" : author.replaceAll("\\s+", " ").strip();
+        author = author == null ? "" : oneSpace(author).strip();
         body = body == null ? "" : body;
     }
 
     /** Lower-cases a label and turns inner spaces into hyphens, as tags are stored. */
     public static String label(String raw) {
-        return raw.strip().toLowerCase(Locale.ROOT).replaceAll("\\s+", "-");
+        String l = raw.strip().toLowerCase(Locale.ROOT);
+        return plainSpaced(l) && l.indexOf(' ') < 0 ? l : l.replaceAll("\\s+", "-");
+    }
+
+    /** Runs of white space as one space; skips the regular expression for text that is already so (most text). */
+    private static String oneSpace(String s) {
+        return plainSpaced(s) ? s : s.replaceAll("\\s+", " ");
+    }
+
+    /** Whether every white space character in {@code s} is a single space. */
+    private static boolean plainSpaced(String s) {
+        boolean prevSpace = false;
+        for (int i = 0, n = s.length(); i < n; i++) {
+            char c = s.charAt(i);
+            if (c == ' ') {
+                if (prevSpace) return false;
+                prevSpace = true;
+            } else {
+                if (Character.isWhitespace(c) || Character.isSpaceChar(c)) return false;
+                prevSpace = false;
+            }
+        }
+        return true;
     }
 
     private static List<String> labels(List<String> raw) {
@@ -68,7 +90,7 @@ public record Note(String id, String title, List<String> tags, List<String> func
         String plain = NoteFormat.plainText(body).strip();
         int para = plain.indexOf("\n\n");
         String first = para < 0 ? plain : plain.substring(0, para);
-        first = first.replaceAll("\\s+", " ").strip();
+        first = oneSpace(first).strip();
         if (first.length() <= maxChars) return first;
         int cut = first.lastIndexOf(' ', maxChars - 1);
         return first.substring(0, cut > maxChars / 2 ? cut : maxChars - 1) + " …";

@@ -13,14 +13,13 @@ import org.apache.lucene.document.StringField;
 import org.apache.lucene.document.TextField;
 import org.apache.lucene.facet.FacetsConfig;
 import org.apache.lucene.facet.sortedset.SortedSetDocValuesFacetField;
-import org.apache.lucene.index.IndexOptions;
 import org.apache.lucene.util.BytesRef;
 import org.arcwright.pack.PackLayer;
 
 /** How a note becomes a Lucene document, and the field names of the index. */
 final class NoteDocuments {
     /** Bump when fields or analysis change: an index with another schema is rebuilt. */
-    static final String SCHEMA = "arcwright-notes-7";
+    static final String SCHEMA = "arcwright-notes-8";
 
     static final String ID = "id";
     static final String TITLE = "title";
@@ -35,13 +34,12 @@ final class NoteDocuments {
     static final String COMMIT_SCHEMA = "schema";
     static final String COMMIT_STAMP = "sources";
 
-    /** Indexed with offsets for the highlighter, not stored: the text is kept once, in {@link #SOURCE}. */
-    private static final FieldType BODY_TYPE = new FieldType(TextField.TYPE_NOT_STORED);
-
-    static {
-        BODY_TYPE.setIndexOptions(IndexOptions.DOCS_AND_FREQS_AND_POSITIONS_AND_OFFSETS);
-        BODY_TYPE.freeze();
-    }
+    /**
+     * Indexed with positions (for proximity) but without offsets, not stored: the text is kept once,
+     * in {@link #SOURCE}. Offsets add build time and index size (written for every word of every note) for the
+     * sake of 10 snippets per search; the highlighter re-analyses those few bodies instead.
+     */
+    private static final FieldType BODY_TYPE = TextField.TYPE_NOT_STORED;
 
     private NoteDocuments() {}
 

@@ -3,7 +3,6 @@ package org.arcwright.notes;
 import java.time.LocalDate;
 import java.time.format.DateTimeParseException;
 import java.util.ArrayList;
-import java.util.Arrays;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -59,38 +58,46 @@ public final class NoteFormat {
      */
     public static Note parse(String text, String source) {
         String t = text.startsWith("\uFEFF") ? text.substring(1) : text;
-        String[] lines = LINE_BREAK.split(t, -1);
-        if (lines.length == 0 || !lines[0].strip().equals(FENCE)) {
-            throw new InputProblem(source, 1, 1, null,
-                    "a note starts with a header between two '---' lines (id, title, tags, ...)");
-        }
+        int pos = 0;
+        int lineNo = 0;
+        int bodyStart = -1;
         Map<String, String> values = new LinkedHashMap<>();
         Map<String, Integer> lineOf = new LinkedHashMap<>();
-        int close = -1;
-        for (int i = 1; i < lines.length; i++) {
-            String line = lines[i];
+        while (pos <= t.length()) {
+            int nl = t.indexOf('\n', pos);
+            int end = nl < 0 ? t.length() : nl;
+            String line = t.substring(pos, end > pos && t.charAt(end - 1) == '\r' ? end - 1 : end);
+            pos = end + 1;
+            lineNo++;
+            if (lineNo == 1) {
+                if (!line.strip().equals(FENCE)) {
+                    throw new InputProblem(source, 1, 1, null,
+                            "a note starts with a header between two '---' lines (id, title, tags, ...)");
+                }
+                continue;
+            }
             if (line.strip().equals(FENCE)) {
-                close = i;
+                bodyStart = Math.min(pos, t.length());
                 break;
             }
             if (line.isBlank() || line.stripLeading().startsWith("#")) continue;
             int colon = line.indexOf(':');
             if (colon < 0) {
-                throw new InputProblem(source, i + 1, 1, null,
+                throw new InputProblem(source, lineNo, 1, null,
                         "header line must be 'key: value' (or the header is not closed with '---')");
             }
             String key = line.substring(0, colon).strip();
             if (!KEYS.contains(key)) {
-                throw new InputProblem(source, i + 1, 1, key, "unknown header key; known keys: " + String.join(", ", KEYS));
+                throw new InputProblem(source, lineNo, 1, key, "unknown header key; known keys: " + String.join(", ", KEYS));
             }
             if (values.containsKey(key)) {
-                throw new InputProblem(source, i + 1, 1, key, "repeated header key (first on line " + lineOf.get(key) + ")");
+                throw new InputProblem(source, lineNo, 1, key, "repeated header key (first on line " + lineOf.get(key) + ")");
             }
             values.put(key, line.substring(colon + 1).strip());
-            lineOf.put(key, i + 1);
+            lineOf.put(key, lineNo);
         }
-        if (close < 0) {
-            throw new InputProblem(source, lines.length, 1, null, "header not closed: add a line '---' after the last key");
+        if (bodyStart < 0) {
+            throw new InputProblem(source, lineNo, 1, null, "header not closed: add a line '---' after the last key");
         }
         for (String required : List.of("id", "title")) {
             if (values.getOrDefault(required, "").isEmpty()) {
@@ -103,11 +110,12 @@ public final class NoteFormat {
             try {
                 updated = LocalDate.parse(u);
             } catch (DateTimeParseException e) {
-                throw new InputProblem(source, lineOf.get("updated"), valueColumn(lines, lineOf.get("updated")), "updated",
+                throw new InputProblem(source, lineOf.get("updated"), valueColumn(t, lineOf.get("updated")), "updated",
                         "'" + u + "' is not a date of the form 2026-11-30");
             }
         }
-        String body = String.join("\n", Arrays.asList(lines).subList(close + 1, lines.length)).strip();
+        String rest = t.substring(bodyStart);
+        String body = (rest.indexOf('\r') < 0 ? rest : rest.replace("\r\n", "\n")).strip();
         try {
             return new Note(values.get("id"), values.get("title"), list(values.get("tags")),
                     list(values.get("functions")), list(values.get("standard")), list(values.get("process")),
@@ -115,7 +123,7 @@ public final class NoteFormat {
         } catch (IllegalArgumentException e) {
             String field = e.getMessage().startsWith("id") ? "id" : "title";
             int line = lineOf.getOrDefault(field, 1);
-            throw new InputProblem(source, line, valueColumn(lines, line), field, e.getMessage());
+            throw new InputProblem(source, line, valueColumn(t, line), field, e.getMessage());
         }
     }
 
@@ -141,31 +149,47 @@ public final class NoteFormat {
      * for indexing and snippets.
      */
     public static String plainText(String markdown) {
-        StringBuilder sb = new StringBuilder(markdown.length());
-        for (String line : LINE_BREAK.split(markdown, -1)) {
-            if (!hasMarkdownMarks(line)) {
-                sb.append(line).append('\n');
-                continue;
+        StringBuilder sb = new StringBuilder(markdown.length() + 1);
+        int n = markdown.length();
+        int start = 0;
+        while (true) {
+            int nl = markdown.indexOf('\n', start);
+            int end = nl < 0 ? n : nl;
+            int lineEnd = nl > start && markdown.charAt(nl - 1) == '\r' ? nl - 1 : end;
+            if (!hasMarkdownMarks(markdown, start, lineEnd)) {
+                sb.append(markdown, start, lineEnd).append('\n');
+            } else {
+                String l = markdown.substring(start, lineEnd);
+                l = HEADING.matcher(l).replaceFirst("");
+                l = BULLET.matcher(l).replaceFirst("");
+                l = QUOTE.matcher(l).replaceFirst("");
+                l = LINK.matcher(l).replaceAll("$1");
+                l = STRONG_OR_CODE.matcher(l).replaceAll("");
+                l = EMPHASIS.matcher(l).replaceAll("$1");
+                sb.append(l).append('\n');
             }
-            String l = HEADING.matcher(line).replaceFirst("");
-            l = BULLET.matcher(l).replaceFirst("");
-            l = QUOTE.matcher(l).replaceFirst("");
-            l = LINK.matcher(l).replaceAll("$1");
-            l = STRONG_OR_CODE.matcher(l).replaceAll("");
-            l = EMPHASIS.matcher(l).replaceAll("$1");
-            sb.append(l).append('\n');
+            if (nl < 0) break;
+            start = nl + 1;
         }
         return sb.toString();
     }
 
-    private static boolean hasMarkdownMarks(String line) {
-        for (int i = 0, n = line.length(); i < n; i++) {
-            switch (line.charAt(i)) {
-                case '#': case '*': case '-': case '+': case '>': case '[': case '`': case '_':
-                    return true;
-                default:
-                    break;
-            }
+    /**
+     * Whether a line may hold Markdown that {@link #plainText} strips: heading, bullet and quote marks
+     * count only as the first non-blank character, so hyphenated words such as {@code o-ring} do not
+     * send every line through the regular expressions.
+     */
+    private static boolean hasMarkdownMarks(String s, int from, int to) {
+        int i = from;
+        while (i < to && Character.isWhitespace(s.charAt(i))) i++;
+        if (i < to) {
+            char first = s.charAt(i);
+            if (first == '#' || first == '-' || first == '+' || first == '>') return true;
+        }
+        for (; i < to; i++) {
+            char c = s.charAt(i);
+            if (c == '*' || c == '[' || c == '`') return true;
+            if (c == '_' && i + 1 < to && s.charAt(i + 1) == '_') return true;
         }
         return false;
     }
@@ -188,8 +212,8 @@ public final class NoteFormat {
         return out;
     }
 
-    private static int valueColumn(String[] lines, int oneBasedLine) {
-        String line = lines[oneBasedLine - 1];
+    private static int valueColumn(String text, int oneBasedLine) {
+        String line = LINE_BREAK.split(text, -1)[oneBasedLine - 1];
         int colon = line.indexOf(':');
         int col = colon + 1;
         while (col < line.length() && Character.isWhitespace(line.charAt(col))) col++;

@@ -223,12 +223,14 @@ public final class NotesStore implements Closeable {
             }
             if (phrase != null) top = rescoreByProximity(s, top, phrase, limit);
             Query marks = q.isBlank() ? null : new QueryBuilder(highlightAnalyzer).createBooleanQuery(NoteDocuments.BODY, q, Occur.SHOULD);
-            String[] snippets = snippets(s, marks == null ? query : marks, top);
-            List<NoteHit> hits = new ArrayList<>();
             StoredFields stored = s.storedFields();
+            Map<Integer, FiledNote> notes = new HashMap<>();
+            for (ScoreDoc sd : top.scoreDocs) notes.put(sd.doc, filed(stored.document(sd.doc)));
+            String[] snippets = snippets(s, marks == null ? query : marks, top, notes);
+            List<NoteHit> hits = new ArrayList<>();
             for (int i = 0; i < top.scoreDocs.length; i++) {
                 ScoreDoc sd = top.scoreDocs[i];
-                hits.add(hit(stored.document(sd.doc), sd.score, snippets == null ? null : snippets[i]));
+                hits.add(hit(notes.get(sd.doc), sd.score, snippets == null ? null : snippets[i]));
             }
             return new SearchResult(q, top.totalHits.value, hits, facets);
         });
@@ -422,6 +424,7 @@ public final class NotesStore implements Closeable {
      * the first search.
      */
     public synchronized IndexReport refresh() {
+        if (directory == null) throw new IllegalStateException("the notes store is closed");
         long t0 = System.nanoTime();
         String recorded;
         try {
@@ -432,6 +435,26 @@ public final class NotesStore implements Closeable {
         }
         refreshFrom(recorded, t0);
         return report;
+    }
+
+    /**
+     * Runs {@link #refresh()} on a new daemon thread and returns its report when done: for a store
+     * from {@link #openUnchecked}, so that the check of every note file (one file-system look per
+     * note; contents read only where size or time changed) runs after the first search, not before.
+     * Searches keep working during the check and see its changes when it ends.
+     */
+    public java.util.concurrent.CompletableFuture<IndexReport> refreshInBackground() {
+        java.util.concurrent.CompletableFuture<IndexReport> done = new java.util.concurrent.CompletableFuture<>();
+        Thread t = new Thread(() -> {
+            try {
+                done.complete(refresh());
+            } catch (RuntimeException | Error e) {
+                done.completeExceptionally(e);
+            }
+        }, "notes-refresh");
+        t.setDaemon(true);
+        t.start();
+        return done;
     }
 
     private void refreshFrom(String recordedStamp, long t0) {
@@ -825,23 +848,34 @@ public final class NotesStore implements Closeable {
 
     /**
      * Adds {@link #PHRASE_BOOST} times the phrase score to each hit whose body has the words near
-     * each other, and keeps the best {@code limit}. Checks each hit's own document only, where
-     * Lucene's {@code QueryRescorer} would walk the phrase's candidates between hits.
+     * each other, and keeps the best {@code limit}. Visits the hits in document order with one
+     * phrase scorer per segment (setting up a scorer costs more than checking a document), and
+     * checks each hit's own document only.
      */
     private static TopDocs rescoreByProximity(IndexSearcher s, TopDocs top, Query phrase, int limit) throws IOException {
         org.apache.lucene.search.Weight w = s.createWeight(s.rewrite(phrase), org.apache.lucene.search.ScoreMode.COMPLETE, 1f);
         List<LeafReaderContext> leaves = s.getIndexReader().leaves();
         ScoreDoc[] docs = top.scoreDocs.clone();
-        for (int i = 0; i < docs.length; i++) {
-            ScoreDoc sd = docs[i];
-            LeafReaderContext leaf = leaves.get(org.apache.lucene.index.ReaderUtil.subIndex(sd.doc, leaves));
-            org.apache.lucene.search.Scorer sc = w.scorer(leaf);
+        Integer[] byDoc = new Integer[docs.length];
+        for (int i = 0; i < byDoc.length; i++) byDoc[i] = i;
+        java.util.Arrays.sort(byDoc, Comparator.comparingInt(i -> docs[i].doc));
+        LeafReaderContext leaf = null;
+        org.apache.lucene.search.Scorer sc = null;
+        org.apache.lucene.search.TwoPhaseIterator two = null;
+        org.apache.lucene.search.DocIdSetIterator approx = null;
+        for (int k : byDoc) {
+            ScoreDoc sd = docs[k];
+            if (leaf == null || sd.doc >= leaf.docBase + leaf.reader().maxDoc()) {
+                leaf = leaves.get(org.apache.lucene.index.ReaderUtil.subIndex(sd.doc, leaves));
+                sc = w.scorer(leaf);
+                two = sc == null ? null : sc.twoPhaseIterator();
+                approx = sc == null ? null : two != null ? two.approximation() : sc.iterator();
+            }
             if (sc == null) continue;
             int target = sd.doc - leaf.docBase;
-            org.apache.lucene.search.TwoPhaseIterator two = sc.twoPhaseIterator();
-            org.apache.lucene.search.DocIdSetIterator approx = two != null ? two.approximation() : sc.iterator();
-            if (approx.advance(target) == target && (two == null || two.matches())) {
-                docs[i] = new ScoreDoc(sd.doc, sd.score + PHRASE_BOOST * sc.score());
+            int at = approx.docID() >= target ? approx.docID() : approx.advance(target);
+            if (at == target && (two == null || two.matches())) {
+                docs[k] = new ScoreDoc(sd.doc, sd.score + PHRASE_BOOST * sc.score());
             }
         }
         java.util.Arrays.sort(docs, (a, b) -> a.score != b.score ? Float.compare(b.score, a.score) : Integer.compare(a.doc, b.doc));
@@ -869,9 +903,9 @@ public final class NotesStore implements Closeable {
         return b.build();
     }
 
-    private String[] snippets(IndexSearcher s, Query query, TopDocs top) throws IOException {
+    private String[] snippets(IndexSearcher s, Query query, TopDocs top, Map<Integer, FiledNote> notes) throws IOException {
         if (top.scoreDocs.length == 0) return new String[0];
-        UnifiedHighlighter h = new BodyFromSource(UnifiedHighlighter.builder(s, indexAnalyzer)
+        UnifiedHighlighter h = new BodyFromSource(notes, UnifiedHighlighter.builder(s, indexAnalyzer)
                 .withFormatter(new DefaultPassageFormatter("**", "**", " … ", false))
                 .withMaxLength(20_000));
         String[] out = h.highlight(NoteDocuments.BODY, query, top, 2);
@@ -882,28 +916,32 @@ public final class NotesStore implements Closeable {
     }
 
     /**
-     * A highlighter that takes the body text from the stored note source instead of a stored copy of
-     * the body: the index keeps the text once (the offsets in the postings refer to the same
-     * {@link NoteFormat#plainText} of the body).
+     * A highlighter that takes the body text from the notes already parsed for the hits (or the stored
+     * note source) instead of a stored copy of the body: the index keeps the text once, and the
+     * highlighter re-analyses the {@link NoteFormat#plainText} of the body of each hit shown.
      */
     private static final class BodyFromSource extends UnifiedHighlighter {
-        BodyFromSource(UnifiedHighlighter.Builder builder) {
+        private final Map<Integer, FiledNote> parsed;
+
+        BodyFromSource(Map<Integer, FiledNote> parsed, UnifiedHighlighter.Builder builder) {
             super(builder);
+            this.parsed = parsed;
         }
 
         @Override
         protected List<CharSequence[]> loadFieldValues(String[] fields, org.apache.lucene.search.DocIdSetIterator docIter,
                                                        int cacheCharsThreshold) throws IOException {
             List<CharSequence[]> out = new ArrayList<>();
-            StoredFields stored = searcher.storedFields();
-            java.util.Set<String> wanted = Set.of(NoteDocuments.SOURCE, NoteDocuments.LOCATION);
+            StoredFields stored = null;
             for (int doc = docIter.nextDoc(); doc != org.apache.lucene.search.DocIdSetIterator.NO_MORE_DOCS; doc = docIter.nextDoc()) {
-                Document d = stored.document(doc, wanted);
+                FiledNote f = parsed.get(doc);
+                if (f == null) {
+                    if (stored == null) stored = searcher.storedFields();
+                    f = filed(stored.document(doc));
+                }
                 CharSequence[] values = new CharSequence[fields.length];
                 for (int i = 0; i < fields.length; i++) {
-                    values[i] = NoteDocuments.BODY.equals(fields[i])
-                            ? NoteFormat.plainText(NoteFormat.parse(d.get(NoteDocuments.SOURCE), d.get(NoteDocuments.LOCATION)).body())
-                            : "";
+                    values[i] = NoteDocuments.BODY.equals(fields[i]) ? NoteFormat.plainText(f.note().body()) : "";
                 }
                 out.add(values);
             }
@@ -965,7 +1003,10 @@ public final class NotesStore implements Closeable {
     }
 
     private NoteHit hit(Document d, float score, String snippet) {
-        FiledNote f = filed(d);
+        return hit(filed(d), score, snippet);
+    }
+
+    private NoteHit hit(FiledNote f, float score, String snippet) {
         Note n = f.note();
         String sn = snippet == null || snippet.isBlank() ? n.summary(SUMMARY_CHARS) : snippet;
         return new NoteHit(n.id(), n.title(), score, sn, f.pack(), f.layer(), n.tags(), n.functions(), n.standards(),
