@@ -118,44 +118,56 @@ public final class CircleFits {
             throw InputProblem.ofField("points", "the points are collinear; no circle fits them");
         }
         double a = start.cx() - mx, b = start.cy() - my, r = start.r();
-        double[] ne = new double[9];
+        double[] ne = new double[9], trial = new double[9], d = new double[3];
         double cost = normal(xs, ys, n, mx, my, a, b, r, ne);
         double lambda = 1e-6; // the Taubin start is close: begin nearly Gauss-Newton
         int it = 0;
         for (; it < 200; it++) {
-            double[][] m = new double[3][4];
-            double[] jtj = {ne[0], ne[1], ne[2], ne[1], ne[3], ne[4], ne[2], ne[4], ne[5]};
-            for (int i = 0; i < 3; i++) {
-                for (int j = 0; j < 3; j++) m[i][j] = jtj[i * 3 + j];
-                m[i][i] += lambda * jtj[i * 3 + i];
-                m[i][3] = -ne[6 + i];
-            }
-            double[] d;
-            try {
-                d = Gauss.solve(m);
-            } catch (IllegalStateException e) {
-                break;
-            }
+            if (!solve3(ne, lambda, d)) break;
             double stepSize = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]);
             double scale = Math.abs(r) + Math.hypot(a, b);
             if (stepSize <= 1e-10 * scale) break; // converged (see below); a trial would only meet rounding
-            double[] trial = new double[9];
             double tc = normal(xs, ys, n, mx, my, a + d[0], b + d[1], r + d[2], trial);
             // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
             if (tc <= cost * (1 + 1e-15)) {
                 a += d[0]; b += d[1]; r += d[2];
                 cost = tc;
-                ne = trial;
+                double[] t = ne; ne = trial; trial = t;
                 lambda = Math.max(lambda / 10, 1e-12);
-                // convergence is at least linear with a small ratio (residual / radius): after a step
-                // of 1e-10 the remaining error is far below 1e-12
-                if (stepSize <= 1e-10 * scale) { it++; break; }
             } else {
                 lambda *= 10;
                 if (lambda > 1e12) break;
             }
         }
         return new LeastSquaresCircle(new Circle(a + mx, b + my, Math.abs(r)), Math.sqrt(cost / n), it);
+    }
+
+    /**
+     * The Levenberg-Marquardt step: solves {@code (JᵀJ + λ·diag(JᵀJ)) d = -Jᵀe} for the symmetric
+     * 3×3 system held in {@code ne} by Cholesky factorisation in closed form; false when the
+     * matrix is not positive definite (the points are degenerate).
+     */
+    private static boolean solve3(double[] ne, double lambda, double[] d) {
+        double a00 = ne[0] * (1 + lambda), a01 = ne[1], a02 = ne[2];
+        double a11 = ne[3] * (1 + lambda), a12 = ne[4], a22 = ne[5] * (1 + lambda);
+        if (!(a00 > 0)) return false;
+        double l00 = Math.sqrt(a00);
+        double l10 = a01 / l00, l20 = a02 / l00;
+        double q11 = a11 - l10 * l10;
+        if (!(q11 > 0)) return false;
+        double l11 = Math.sqrt(q11);
+        double l21 = (a12 - l20 * l10) / l11;
+        double q22 = a22 - l20 * l20 - l21 * l21;
+        if (!(q22 > 0)) return false;
+        double l22 = Math.sqrt(q22);
+        // forward: L y = -g; back: Lᵀ d = y
+        double y0 = -ne[6] / l00;
+        double y1 = (-ne[7] - l10 * y0) / l11;
+        double y2 = (-ne[8] - l20 * y0 - l21 * y1) / l22;
+        d[2] = y2 / l22;
+        d[1] = (y1 - l21 * d[2]) / l11;
+        d[0] = (y0 - l10 * d[1] - l20 * d[2]) / l00;
+        return Double.isFinite(d[0]) && Double.isFinite(d[1]) && Double.isFinite(d[2]);
     }
 
     /** Sum of squared residuals; fills JᵀJ (upper: 0..5) and Jᵀe (6..8). */

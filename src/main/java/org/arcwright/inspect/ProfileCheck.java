@@ -94,7 +94,8 @@ public final class ProfileCheck {
             State coarse = converge(sx, sy, m, ox, oy, spread, spread / 10, f, free, dynamic, start);
             start = new double[] {coarse.tx, coarse.ty, coarse.theta, coarse.offset};
         }
-        State s = converge(xs, ys, n, ox, oy, spread, n > COARSE_LIMIT ? spread / 1000 : spread / 10, f, free, dynamic, start);
+        State s = n > COARSE_LIMIT ? screened(xs, ys, n, ox, oy, spread, f, free, dynamic, start)
+                : converge(xs, ys, n, ox, oy, spread, spread / 10, f, free, dynamic, start);
         System.arraycopy(s.dev, 0, dev, 0, n);
         double c = Math.cos(s.theta), sn = Math.sin(s.theta);
         // report the move as a turn about the pivot: t_P = t + (I - R)(o - P)
@@ -102,6 +103,46 @@ public final class ProfileCheck {
         double rx = s.tx + qx - (c * qx - sn * qy), ry = s.ty + qy - (sn * qx + c * qy);
         return new Registration(rx, ry, Math.toDegrees(s.theta), s.offset, pivotX, pivotY);
     }
+
+    /**
+     * Polishes the thinned start on all points while measuring most of them only twice: at the
+     * start, only points whose deviation lies within a band of the extremes can become extreme
+     * after the small remaining move, so the successive LPs run on those; one full measurement at
+     * the answer then checks that no other point needs a wider zone. If one does, the full set is
+     * polished from there, so the answer is the full set's minimax either way (the optimum of a
+     * subset is never wider than the full set's, and here it is attained by the full set).
+     */
+    private State screened(double[] xs, double[] ys, int n, double ox, double oy, double spread, double f,
+                           Set<Freedom> free, boolean dynamic, double[] start) {
+        State full = new State(n, ox, oy);
+        full.tx = start[0];
+        full.ty = start[1];
+        full.theta = start[2];
+        full.offset = start[3];
+        full.measure(xs, ys, contour);
+        double hi = Double.NEGATIVE_INFINITY, lo = Double.POSITIVE_INFINITY;
+        for (int i = 0; i < n; i++) { hi = Math.max(hi, full.dev[i]); lo = Math.min(lo, full.dev[i]); }
+        double band = (hi - lo) / SCREEN_BAND;
+        int m = 0;
+        for (int i = 0; i < n; i++) if (full.dev[i] >= hi - band || full.dev[i] <= lo + band) m++;
+        double[] cx = new double[m], cy = new double[m];
+        for (int i = 0, j = 0; i < n; i++) {
+            if (full.dev[i] >= hi - band || full.dev[i] <= lo + band) { cx[j] = xs[i]; cy[j] = ys[i]; j++; }
+        }
+        State sub = converge(cx, cy, m, ox, oy, spread, spread / 1000, f, free, dynamic, start);
+        full.tx = sub.tx;
+        full.ty = sub.ty;
+        full.theta = sub.theta;
+        full.offset = sub.offset;
+        full.measure(xs, ys, contour);
+        double subObj = objective(sub.dev, m, f);
+        if (objective(full.dev, n, f) <= subObj + 1e-15 * spread) return full;
+        return converge(xs, ys, n, ox, oy, spread, spread / 1000, f, free, dynamic,
+                new double[] {sub.tx, sub.ty, sub.theta, sub.offset});
+    }
+
+    /** The band beside each extreme screened in is the spread of the deviations at the start divided by this. */
+    private static final double SCREEN_BAND = 8;
 
     /** Successive linear programmes from {@code start} (tx, ty, θ, offset) until the move vanishes. */
     private State converge(double[] xs, double[] ys, int n, double ox, double oy, double spread, double trust, double f,

@@ -26,6 +26,8 @@ public final class Contour {
     private final double[] ax, ay, bx, by, ux, uy, len, cx, cy, rad, start, sweep, station0;
     // pseudo-normal at the start joint of each segment (index i: joint between i-1 and i; n: end of chain)
     private final double[] jnx, jny;
+    // per arc: unit radii to its start and end, and the turn (+1 counter-clockwise), for the span test
+    private final double[] sxr, syr, exr, eyr, turn;
 
     /**
      * @param segments the chain, each starting where the previous ends (within 1e-9 of the scale)
@@ -52,6 +54,7 @@ public final class Contour {
         ux = new double[n]; uy = new double[n]; len = new double[n];
         cx = new double[n]; cy = new double[n]; rad = new double[n]; start = new double[n]; sweep = new double[n];
         station0 = new double[n];
+        sxr = new double[n]; syr = new double[n]; exr = new double[n]; eyr = new double[n]; turn = new double[n];
         double total = 0;
         for (int i = 0; i < n; i++) {
             Segment s = segments.get(i);
@@ -64,6 +67,9 @@ public final class Contour {
                 isArc[i] = true;
                 cx[i] = arc.centre().x(); cy[i] = arc.centre().y(); rad[i] = arc.radius();
                 start[i] = arc.startAngle(); sweep[i] = arc.sweep();
+                sxr[i] = (ax[i] - cx[i]) / rad[i]; syr[i] = (ay[i] - cy[i]) / rad[i];
+                exr[i] = (bx[i] - cx[i]) / rad[i]; eyr[i] = (by[i] - cy[i]) / rad[i];
+                turn[i] = sweep[i] > 0 ? 1 : -1;
             } else {
                 ux[i] = (bx[i] - ax[i]) / len[i];
                 uy[i] = (by[i] - ay[i]) / len[i];
@@ -201,8 +207,7 @@ public final class Contour {
         double sw = sweep[i], r = rad[i];
         double k = sw > 0 ? -1 : 1; // counter-clockwise travel has the centre on its left
         // within the arc's angular span? (cross products against the end radii; no trigonometry)
-        double sxr = (ax[i] - cx[i]) / r, syr = (ay[i] - cy[i]) / r, exr = (bx[i] - cx[i]) / r, eyr = (by[i] - cy[i]) / r;
-        double turn = sw > 0 ? 1 : -1;
+        double sxr = this.sxr[i], syr = this.syr[i], exr = this.exr[i], eyr = this.eyr[i], turn = this.turn[i];
         double c1 = turn * (sxr * dy - syr * dx), c2 = turn * (dx * eyr - dy * exr);
         boolean inside = Math.abs(sw) <= Math.PI ? c1 >= 0 && c2 >= 0 : c1 >= 0 || c2 >= 0;
         if (inside) {

@@ -71,31 +71,47 @@ public final class RadiusZone {
         double alpha = corner.halfAngle();
         double tanA = Math.tan(alpha);
         double reach = max / tanA + resolution;
-        Point2 v = corner.vertex(), a = corner.legA(), b = corner.legB();
+        Point2 a = corner.legA(), b = corner.legB();
         Point2 na = corner.inwardNormalA(), nb = corner.inwardNormalB();
+        // one loop over the primitive arrays, the corner's constants in locals (what allowed() does, inlined)
+        double ox = vx, oy = vy, axx = a.x(), axy = a.y(), bxx = b.x(), bxy = b.y();
+        double nax = na.x(), nay = na.y(), nbx = nb.x(), nby = nb.y();
+        double bx = bisX, by = bisY, k1 = s1, k2 = s2, kc = cot2, res = resolution, lowest = min, highest = max;
         double smallest = Double.POSITIVE_INFINITY, largest = 0;
         int inside = 0, outside = 0, onLegs = 0, worst = -1;
         double worstExcess = Double.NEGATIVE_INFINITY;
-        double[] lo = new double[1], hi = new double[1];
         for (int i = 0; i < n; i++) {
-            double qx = xs[i] - v.x(), qy = ys[i] - v.y();
-            double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
+            double qx = xs[i] - ox, qy = ys[i] - oy;
+            double xa = qx * axx + qy * axy, xb = qx * bxx + qy * bxy;
             if (xa > reach || xb > reach) continue;
             inside++;
-            double ha = qx * na.x() + qy * na.y(), hb = qx * nb.x() + qy * nb.y();
+            double ha = qx * nax + qy * nay, hb = qx * nbx + qy * nby;
             double excess;
-            if (ha < -resolution || hb < -resolution) {
+            if (ha < -res || hb < -res) {
                 outside++;
                 // beyond the sharp corner: counted as a radius below zero by the depth outside
-                double depth = -Math.min(ha, hb);
-                excess = min + depth;
+                excess = lowest - Math.min(ha, hb);
                 smallest = Double.NaN;
             } else {
-                allowed(xs[i], ys[i], ha, hb, xa, xb, tanA, lo, hi);
-                if (lo[0] == 0 && hi[0] != lo[0]) onLegs++;
-                if (!Double.isNaN(smallest)) smallest = Math.min(smallest, hi[0]);
-                largest = Math.max(largest, lo[0]);
-                excess = Math.max(min - hi[0], lo[0] - max);
+                double qu = qx * bx + qy * by;
+                double r = (k1 * qu + Math.sqrt(Math.max(0, k2 * qu * qu - kc * (qx * qx + qy * qy)))) / kc;
+                double lo, hi;
+                if (ha <= res || hb <= res) {
+                    double h = Double.POSITIVE_INFINITY;
+                    if (ha <= res) h = Math.min(h, Math.max(0, xa) * tanA);
+                    if (hb <= res) h = Math.min(h, Math.max(0, xb) * tanA);
+                    // within the resolution of a leg the point may be taken as on it, or as where it is
+                    if (ha > 0 && hb > 0) h = Math.max(h, r);
+                    lo = 0;
+                    hi = h;
+                } else {
+                    lo = r;
+                    hi = r;
+                }
+                if (lo == 0 && hi != lo) onLegs++;
+                if (!Double.isNaN(smallest)) smallest = Math.min(smallest, hi);
+                largest = Math.max(largest, lo);
+                excess = Math.max(lowest - hi, lo - highest);
             }
             if (excess > worstExcess) {
                 worstExcess = excess;

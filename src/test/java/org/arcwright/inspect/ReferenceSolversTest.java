@@ -74,4 +74,28 @@ class ReferenceSolversTest {
         double ref = ReferenceSolvers.floatingZone(nominal, xs, ys, xs.length, 0.05);
         assertThat(ours.requiredZone()).isCloseTo(ref, within(1e-9 * ref));
     }
+    /**
+     * Above 20,000 points the registration polishes on the points near the extremes only: 160
+     * measured points plus 30,000 on the equally moved nominal, which never bind, must need the
+     * zone SimplexSolver finds for the 160 alone.
+     */
+    @ParameterizedTest(name = "seed {0}")
+    @ValueSource(longs = {31, 32})
+    void screenedRegistrationOfManyPointsAgreesWithSimplexSolverOnTheBindingOnes(long seed) {
+        Random rnd = new Random(seed);
+        PointSet pts = Sections.section(Sections.SQUARE, 2, 20, 120, 0.003, seed,
+                f -> 0.01 * Math.sin((2 + rnd.nextInt(3)) * Math.PI * f));
+        PointSet fill = Sections.section(Sections.SQUARE, 2, 3000, 24_000, 0, seed, f -> 0);
+        int m = pts.size(), n = m + fill.size();
+        double[] xs = new double[n], ys = new double[n];
+        for (int i = 0; i < n; i++) {
+            xs[i] = (i < m ? pts.x()[i] : fill.x()[i - m]) + 0.02;
+            ys[i] = (i < m ? pts.y()[i] : fill.y()[i - m]) - 0.01;
+        }
+        Contour nominal = Sections.SQUARE.contour(2, 50);
+        ProfileOutcome ours = new ProfileCheck(nominal, 0, 0, 1e-6)
+                .evaluate(new PointSet(xs, ys, n, "t"), ProfileZone.bilateral(0.1), Freedom.all(), false);
+        double ref = ReferenceSolvers.floatingZone(nominal, xs, ys, m, 0.05);
+        assertThat(ours.requiredZone()).isCloseTo(ref, within(1e-9 * ref));
+    }
 }
