@@ -70,6 +70,9 @@ class CheckStressNotesGuiTest {
                 .startsWith(corePass ? "Conforms" : "Does not conform").contains("CR 1.9-2.1");
         assertThat(fixture.table("checkComparisons").rowCount()).isGreaterThan(0);
         GuiSupport.settle(200);
+        // the verdict wraps rather than being cut short, and the comparison table shows several rows
+        assertThat(GuiSupport.onEdt(() -> window.checkPanel().verdictFullyShown())).isTrue();
+        assertThat(GuiSupport.onEdt(() -> window.checkPanel().visibleComparisonRows())).isGreaterThanOrEqualTo(3);
         GuiSupport.screenshot(window.frame(), "check-light");
         fixture.button("checkKeep").click();
         RadiusFeature f4 = window.session().worksheet().feature("F4").orElseThrow();
@@ -93,6 +96,7 @@ class CheckStressNotesGuiTest {
         GuiSupport.onEdt(() -> window.showTab(3));
         GuiSupport.settle(200);
         GuiSupport.screenshot(window.frame(), "check-dark");
+        assertThat(GuiSupport.onEdt(() -> window.checkPanel().verdictFullyShown())).isTrue();
         GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
     }
 
