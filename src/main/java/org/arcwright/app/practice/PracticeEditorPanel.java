@@ -1,9 +1,11 @@
 package org.arcwright.app.practice;
 
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Objects;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
+import java.util.function.Supplier;
 import javax.swing.DefaultListModel;
 import javax.swing.JButton;
 import javax.swing.JLabel;
@@ -20,8 +22,10 @@ import javax.swing.event.DocumentListener;
 import javax.swing.table.DefaultTableModel;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.RuleDraft;
+import org.arcwright.app.model.RuleSaver;
 import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.PackLayer;
 import org.arcwright.rules.Advisor;
 import org.arcwright.rules.PackCheck;
 import org.arcwright.rules.RuleBook;
@@ -50,13 +54,24 @@ public final class PracticeEditorPanel extends JPanel {
         @Override
         public boolean isCellEditable(int row, int column) { return false; }
     };
+    private final JButton save = new JButton("Save");
+    private final transient Supplier<Path> personalPack;
+    private final transient Runnable reloadRules;
+    private final transient RuleSaver saver;
     private final Timer validateLater = new Timer(250, e -> validateNow());
     private boolean loading;
 
-    public PracticeEditorPanel(JsonFiles json, Executor background) {
+    public PracticeEditorPanel(JsonFiles json, Executor background, Supplier<Path> personalPack, Runnable reloadRules) {
         super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow 70,fill][grow 30,fill][]"));
         this.json = Objects.requireNonNull(json, "json");
         this.background = Objects.requireNonNull(background, "background");
+        this.personalPack = Objects.requireNonNull(personalPack, "personalPack");
+        this.reloadRules = Objects.requireNonNull(reloadRules, "reloadRules");
+        this.saver = new RuleSaver(json);
+        save.setName("ruleSave");
+        save.setEnabled(false);
+        save.setToolTipText("Unavailable: select a rule first");
+        save.addActionListener(e -> save());
         setName("practiceEditor");
         list.setName("ruleList");
         editor.setName("ruleText");
@@ -83,10 +98,11 @@ public final class PracticeEditorPanel extends JPanel {
             public void changedUpdate(DocumentEvent e) { typed(); }
         });
         validateLater.setRepeats(false);
-        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][]"));
+        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][][]"));
         right.add(new JScrollPane(editor), "wmin 10, hmin 10");
         right.add(verdict, "wmin 10");
-        right.add(run, "left, growx 0");
+        right.add(save, "left, growx 0, wmin 10");
+        right.add(run, "left, growx 0, wmin 10");
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(list), right);
         split.setResizeWeight(0.3);
         split.setBorder(null);
@@ -95,7 +111,8 @@ public final class PracticeEditorPanel extends JPanel {
         table.setName("exampleResults");
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 6));
         add(new JScrollPane(table), "wmin 10, hmin 10, h 25%");
-        add(new WrapLabel("Edits here are checked, not saved: change rules in the pack's files (see DEVELOPERS.md).",
+        add(new WrapLabel("Edits are checked as you type and saved only when they read. A built-in rule is saved as "
+                + "an override in your personal pack; the rules reload after each save.",
                 "Label.font", "Arcwright.help.foreground"), "wmin 10");
     }
 
@@ -104,8 +121,14 @@ public final class PracticeEditorPanel extends JPanel {
         stack = packs;
         book = b;
         advisor = a;
+        String keep = list.getSelectedValue() == null ? null : list.getSelectedValue().rule().id();
         entries.clear();
         for (RuleBook.Entry e : b.entries()) entries.addElement(e);
+        if (keep != null) {
+            for (int i = 0; i < entries.size(); i++) {
+                if (entries.get(i).rule().id().equals(keep)) list.setSelectedIndex(i);
+            }
+        }
     }
 
     public JTextArea editor() { return editor; }
@@ -132,6 +155,8 @@ public final class PracticeEditorPanel extends JPanel {
         loading = false;
         run.setEnabled(advisor != null);
         run.setToolTipText("Run every example of pack '" + e.pack() + "' against the advisor");
+        boolean builtIn = e.layer() == PackLayer.BUILT_IN;
+        save.setText(builtIn ? "Save as an override in my personal pack" : "Save");
         showVerdict();
     }
 
@@ -146,12 +171,48 @@ public final class PracticeEditorPanel extends JPanel {
     }
 
     private void showVerdict() {
+        boolean reads = draft.problem().isEmpty();
+        save.setEnabled(reads);
+        save.setToolTipText(reads ? (save.getText().equals("Save") ? "Write the rule back into its pack file"
+                : "The built-in pack cannot change: write the rule into your personal pack as an override")
+                : "Unavailable: the rule does not read; fix what the message under the text says");
         if (draft.problem().isPresent()) {
             verdict.show(draft.problem().get().getMessage(), "Arcwright.error.foreground");
         } else {
             verdict.show("The rule reads: " + draft.rule().get().summary(), "Arcwright.pass.foreground");
         }
     }
+
+    private void save() {
+        RuleBook.Entry e = list.getSelectedValue();
+        if (e == null || draft == null) return;
+        validateLater.stop();
+        draft.setText(editor.getText());
+        showVerdict();
+        if (draft.problem().isPresent()) return;
+        save.setEnabled(false);
+        RuleDraft d = draft;
+        String id = e.rule().id();
+        boolean builtIn = e.layer() == PackLayer.BUILT_IN;
+        Path file = Path.of(e.file());
+        Path personal = personalPack.get();
+        CompletableFuture.supplyAsync(() -> builtIn ? saver.saveOverride(d, id, personal) : saver.saveInPlace(d, id, file),
+                background).whenComplete((written, err) -> SwingUtilities.invokeLater(() -> saved(written, err)));
+    }
+
+    private void saved(Path written, Throwable err) {
+        save.setEnabled(true);
+        if (err != null) {
+            Throwable cause = err.getCause() != null ? err.getCause() : err;
+            verdict.show("Not saved: " + cause.getMessage(), "Arcwright.error.foreground");
+            return;
+        }
+        verdict.show("Saved to " + written + "; reloading the rules…", "Arcwright.pass.foreground");
+        reloadRules.run();
+    }
+
+    /** The save button's text: plain Save, or the override offer for a built-in rule (tests). */
+    public String saveLabel() { return save.getText(); }
 
     private void runExamples() {
         RuleBook.Entry e = list.getSelectedValue();

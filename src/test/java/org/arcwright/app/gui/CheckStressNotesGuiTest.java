@@ -151,6 +151,11 @@ class CheckStressNotesGuiTest {
         fixture.button("runExamples").click();
         waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().resultRows()) > 0, 30);
         GuiSupport.screenshot(window.frame(), "practice-light");
+        // the first rule is built in: it is saved as an override in the personal pack, and the rules reload
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().saveLabel())).contains("override");
+        fixture.button("ruleSave").click();
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().verdictText()).startsWith("Saved to"), 20);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().verdictText())).contains("override-");
     }
 
     @Test
