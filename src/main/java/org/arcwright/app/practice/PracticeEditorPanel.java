@@ -23,6 +23,8 @@ import javax.swing.table.DefaultTableModel;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.RuleDraft;
 import org.arcwright.app.model.RuleSaver;
+import org.arcwright.app.model.TemplatePreview;
+import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackLayer;
@@ -47,7 +49,7 @@ public final class PracticeEditorPanel extends JPanel {
     private final JList<RuleBook.Entry> list = new JList<>(entries);
     private final JTextArea editor = new JTextArea();
     private final WrapLabel verdict = new WrapLabel("Select a rule to see it here.", "Label.font", "Arcwright.help.foreground");
-    private final JButton run = new JButton("Run the pack's examples");
+    private final JButton run = new JButton("Run examples");
     private final DefaultTableModel results = new DefaultTableModel(new Object[] {"Rule", "Example", "Result", "First"}, 0) {
         private static final long serialVersionUID = 1L;
 
@@ -55,14 +57,26 @@ public final class PracticeEditorPanel extends JPanel {
         public boolean isCellEditable(int row, int column) { return false; }
     };
     private final JButton save = new JButton("Save");
+    private final transient WorksheetSession session;
+    private String saveMessage = "";
+    private final DefaultListModel<TemplatePreview.Entry> templates = new DefaultListModel<>();
+    private final JList<TemplatePreview.Entry> templateList = new JList<>(templates);
+    private final JTextArea templateText = new JTextArea();
+    private final JTextArea templatePreview = new JTextArea();
+    private final WrapLabel templateVerdict = new WrapLabel("Select a template to see the note it fills.", "Label.font",
+            "Arcwright.help.foreground");
+    private final Timer previewLater = new Timer(250, e -> refreshPreview());
     private final transient Supplier<Path> personalPack;
     private final transient Runnable reloadRules;
     private final transient RuleSaver saver;
     private final Timer validateLater = new Timer(250, e -> validateNow());
     private boolean loading;
 
-    public PracticeEditorPanel(JsonFiles json, Executor background, Supplier<Path> personalPack, Runnable reloadRules) {
-        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow 70,fill][grow 30,fill][]"));
+    public PracticeEditorPanel(JsonFiles json, Executor background, WorksheetSession session, Supplier<Path> personalPack,
+                               Runnable reloadRules) {
+        super(new MigLayout("insets 0, fill", "[grow,fill]", "[grow,fill]"));
+        this.session = Objects.requireNonNull(session, "session");
+        JPanel rulesPage = new JPanel(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow 70,fill][grow 30,fill][]"));
         this.json = Objects.requireNonNull(json, "json");
         this.background = Objects.requireNonNull(background, "background");
         this.personalPack = Objects.requireNonNull(personalPack, "personalPack");
@@ -98,27 +112,111 @@ public final class PracticeEditorPanel extends JPanel {
             public void changedUpdate(DocumentEvent e) { typed(); }
         });
         validateLater.setRepeats(false);
-        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][][]"));
+        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][]"));
         right.add(new JScrollPane(editor), "wmin 10, hmin 10");
         right.add(verdict, "wmin 10");
-        right.add(save, "left, growx 0, wmin 10");
-        right.add(run, "left, growx 0, wmin 10");
+        right.add(save, "left, growx 0, split 2");
+        right.add(run, "growx 0");
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(list), right);
         split.setResizeWeight(0.3);
         split.setBorder(null);
-        add(split, "wmin 10, hmin 10, h 60%");
+        rulesPage.add(split, "wmin 10, hmin 10, h 60%");
         JTable table = new JTable(results);
         table.setName("exampleResults");
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 6));
-        add(new JScrollPane(table), "wmin 10, hmin 10, h 25%");
-        add(new WrapLabel("Edits are checked as you type and saved only when they read. A built-in rule is saved as "
+        rulesPage.add(new JScrollPane(table), "wmin 10, hmin 10, h 25%");
+        rulesPage.add(new WrapLabel("Edits are checked as you type and saved only when they read. A built-in rule is saved as "
                 + "an override in your personal pack; the rules reload after each save.",
                 "Label.font", "Arcwright.help.foreground"), "wmin 10");
+        javax.swing.JTabbedPane pages = new javax.swing.JTabbedPane();
+        pages.setName("practicePages");
+        pages.addTab("Rules", rulesPage);
+        pages.addTab("Note templates", templatesPage());
+        add(pages, "wmin 10, hmin 10");
+        session.listeners().add(previewLater::restart);
     }
+
+    /** The templates page: the packs' templates, the text as written, and the note it fills for the selected feature. */
+    private JPanel templatesPage() {
+        templateList.setName("templateList");
+        templateText.setName("templateText");
+        templatePreview.setName("templatePreview");
+        templateVerdict.setName("templateVerdict");
+        templateText.setFont(editor.getFont());
+        templatePreview.setFont(editor.getFont());
+        templatePreview.setEditable(false);
+        templateList.addListSelectionListener(e -> templateSelected(e.getValueIsAdjusting()));
+        templateText.getDocument().addDocumentListener(new DocumentListener() {
+            public void insertUpdate(DocumentEvent e) { templateTyped(); }
+            public void removeUpdate(DocumentEvent e) { templateTyped(); }
+            public void changedUpdate(DocumentEvent e) { templateTyped(); }
+        });
+        previewLater.setRepeats(false);
+        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]",
+                "[grow 55,fill][][grow 45,fill]"));
+        right.add(new JScrollPane(templateText), "wmin 10, hmin 10");
+        right.add(templateVerdict, "wmin 10");
+        right.add(new JScrollPane(templatePreview), "wmin 10, hmin 10");
+        JScrollPane listScroll = new JScrollPane(templateList);
+        listScroll.setPreferredSize(new java.awt.Dimension(160, 10));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, listScroll, right);
+        split.setResizeWeight(0.25);
+        split.setBorder(null);
+        JPanel page = new JPanel(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow,fill][]"));
+        page.add(split, "wmin 10, hmin 10");
+        page.add(new WrapLabel("The note below is filled for the selected feature (or the whole part) as you type; "
+                + "edits to templates are not saved here.", "Label.font", "Arcwright.help.foreground"), "wmin 10");
+        return page;
+    }
+
+    private void templateSelected(boolean adjusting) {
+        TemplatePreview.Entry e = templateList.getSelectedValue();
+        if (adjusting || e == null) return;
+        try {
+            String text = TemplatePreview.text(e);
+            loading = true;
+            templateText.setText(text);
+            templateText.setCaretPosition(0);
+            loading = false;
+            refreshPreview();
+        } catch (RuntimeException ex) {
+            templateVerdict.show(ex.getMessage(), "Arcwright.error.foreground");
+        }
+    }
+
+    private void templateTyped() {
+        if (!loading) previewLater.restart();
+    }
+
+    private void refreshPreview() {
+        TemplatePreview.Entry e = templateList.getSelectedValue();
+        if (e == null) return;
+        TemplatePreview.Result r = TemplatePreview.fill(e, templateText.getText(), session.worksheet(),
+                session.selected().orElse(null));
+        if (r.ok()) {
+            templatePreview.setText(r.note());
+            templatePreview.setCaretPosition(0);
+            templateVerdict.show("The template reads; the note as it would be filled:", "Arcwright.pass.foreground");
+        } else {
+            templateVerdict.show(r.problem().getMessage(), "Arcwright.error.foreground");
+        }
+    }
+
+    public String templateVerdictText() { return templateVerdict.getText(); }
+
+    public String templatePreviewText() { return templatePreview.getText(); }
+
+    public JTextArea templateEditor() { return templateText; }
 
     /** Called once the packs have loaded. */
     public void setRules(org.arcwright.pack.PackStack packs, RuleBook b, Advisor a) {
         stack = packs;
+        String keepTemplate = templateList.getSelectedValue() == null ? null : templateList.getSelectedValue().name();
+        templates.clear();
+        for (TemplatePreview.Entry t : TemplatePreview.entries(packs)) {
+            templates.addElement(t);
+            if (t.name().equals(keepTemplate)) templateList.setSelectedValue(t, false);
+        }
         book = b;
         advisor = a;
         String keep = list.getSelectedValue() == null ? null : list.getSelectedValue().rule().id();
@@ -204,12 +302,17 @@ public final class PracticeEditorPanel extends JPanel {
         save.setEnabled(true);
         if (err != null) {
             Throwable cause = err.getCause() != null ? err.getCause() : err;
-            verdict.show("Not saved: " + cause.getMessage(), "Arcwright.error.foreground");
+            saveMessage = "Not saved: " + cause.getMessage();
+            verdict.show(saveMessage, "Arcwright.error.foreground");
             return;
         }
-        verdict.show("Saved to " + written + "; reloading the rules…", "Arcwright.pass.foreground");
+        saveMessage = "Saved to " + written + "; reloading the rules…";
+        verdict.show(saveMessage, "Arcwright.pass.foreground");
         reloadRules.run();
     }
+
+    /** What the last save said: where it wrote, or why it did not (tests). */
+    public String saveMessage() { return saveMessage; }
 
     /** The save button's text: plain Save, or the override offer for a built-in rule (tests). */
     public String saveLabel() { return save.getText(); }

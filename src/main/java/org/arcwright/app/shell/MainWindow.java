@@ -180,7 +180,7 @@ public final class MainWindow {
                 status::show);
         work.addTab("Check", Icons.get("check"), checkPanel, "Conformance of a measured contour (Alt+5)");
         practiceTab = new LazyTab<>("practiceEditor", () -> new PracticeEditorPanel(services.json(), services.background(),
-                this::personalPackPath, this::reloadRulesInBackground));
+                session, this::personalPackPath, this::reloadRulesInBackground));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
         notesPanel = new NotesPanel(services.search(), services.background(), status::show);
         JSplitPane right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);

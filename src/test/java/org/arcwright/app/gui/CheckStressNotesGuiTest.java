@@ -154,8 +154,27 @@ class CheckStressNotesGuiTest {
         // the first rule is built in: it is saved as an override in the personal pack, and the rules reload
         assertThat(GuiSupport.onEdt(() -> window.practicePanel().saveLabel())).contains("override");
         fixture.button("ruleSave").click();
-        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().verdictText()).startsWith("Saved to"), 20);
-        assertThat(GuiSupport.onEdt(() -> window.practicePanel().verdictText())).contains("override-");
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().saveMessage()).startsWith("Saved to"), 20);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().saveMessage())).contains("override-");
+    }
+
+    @Test
+    @Order(5)
+    void aTemplateIsPreviewedForTheSelectedFeatureAsItIsEdited() {
+        GuiSupport.onEdt(() -> window.session().select("F1"));
+        GuiSupport.onEdt(() -> window.showTab(4));
+        fixture.tabbedPane("practicePages").selectTab("Note templates");
+        waitFor(() -> fixture.list("templateList").contents().length > 0, 20);
+        fixture.list("templateList").selectItem(java.util.regex.Pattern.compile("callout-note.*"));
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templatePreviewText()).contains("F1"), 10);
+        GuiSupport.screenshot(window.frame(), "templates-light");
+        String original = GuiSupport.onEdt(() -> window.practicePanel().templateEditor().getText());
+        fixture.textBox("templateText").setText("PREVIEW OF {{feature.id}}\n{{feature.nonsense}}\n");
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templateVerdictText()).contains("nonsense"), 10);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().templateVerdictText())).contains("nonsense");
+        GuiSupport.screenshot(window.frame(), "templates-error-light");
+        fixture.textBox("templateText").setText(original.replaceFirst("\\{\\{feature.id}}", "NOTE {{feature.id}}"));
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templatePreviewText()).contains("NOTE F1"), 10);
     }
 
     @Test
