@@ -15,7 +15,6 @@ import java.util.function.Consumer;
 import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JFileChooser;
-import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
 import javax.swing.JScrollPane;
@@ -28,7 +27,6 @@ import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.shell.Icons;
-import org.arcwright.app.shell.Themes;
 import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.inspect.Comparison;
 import org.arcwright.inspect.InspectionRequest;
@@ -50,7 +48,7 @@ public final class CheckPanel extends JPanel {
     private final transient Executor background;
     private final transient Clock clock;
     private final transient Consumer<String> status;
-    private final JLabel verdict = new JLabel("No contour checked yet");
+    private final WrapLabel verdict = new WrapLabel("No contour checked yet", "h2.font", "Label.foreground");
     private final WrapLabel figures = new WrapLabel("Import measured points (CSV with x,y per line, corner vertex at the "
             + "origin and legs along +x and +y), or an inspection file (.json), or drop either here.", "Label.font",
             "Arcwright.help.foreground");
@@ -62,6 +60,7 @@ public final class CheckPanel extends JPanel {
         public boolean isCellEditable(int row, int column) { return false; }
     };
     private final Plot plot = new Plot();
+    private final JTable table = new JTable(comparisons);
     private final JProgressBar progress = new JProgressBar();
     private final JButton cancel = new JButton("Cancel");
     private final JButton keep = new JButton("Keep the verdict on the worksheet");
@@ -71,7 +70,7 @@ public final class CheckPanel extends JPanel {
 
     public CheckPanel(WorksheetSession session, CheckRequests requests, Executor background, Clock clock,
                       Consumer<String> status) {
-        super(new MigLayout("insets 8, wrap 2, gap 8, hidemode 3", "[38%,fill][62%,fill]", "[][][grow,fill][]"));
+        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][grow,fill]"));
         this.session = Objects.requireNonNull(session, "session");
         this.requests = Objects.requireNonNull(requests, "requests");
         this.background = Objects.requireNonNull(background, "background");
@@ -79,7 +78,6 @@ public final class CheckPanel extends JPanel {
         this.status = Objects.requireNonNull(status, "status");
         setName("checkPanel");
         verdict.setName("checkVerdict");
-        verdict.putClientProperty("FlatLaf.styleClass", "h2");
         figures.setName("checkFigures");
         JButton open = new JButton("Import measured points…", Icons.get("open"));
         open.setName("checkImport");
@@ -92,17 +90,18 @@ public final class CheckPanel extends JPanel {
         keep.setEnabled(false);
         keep.setToolTipText("Unavailable: check a contour first");
         keep.addActionListener(e -> keepVerdict());
-        add(open, "span 2, split 4");
-        add(keep);
-        add(progress, "w 120!");
-        add(cancel);
-        add(verdict, "span 2, wmin 10");
-        add(new JScrollPane(figures), "wmin 10, hmin 10, grow");
-        add(plot, "grow, wmin 10, hmin 10");
-        JTable table = new JTable(comparisons);
         table.setName("checkComparisons");
-        table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 6));
-        add(new JScrollPane(table), "span 2, wmin 10, hmin 10");
+        table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 5));
+        // Top: the actions, then the verdict wrapping to the panel's width; then the figures, the
+        // comparison table at a height that shows several rows, and the plot taking what is left.
+        add(open, "split 4, growx 0");
+        add(keep, "growx 0");
+        add(progress, "w 120!, growx 0");
+        add(cancel, "growx 0");
+        add(verdict, "growx, wmin 10");
+        add(figures, "growx, wmin 10");
+        add(new JScrollPane(table), "growx, wmin 10, hmin 110, h 150:150:");
+        add(plot, "grow, wmin 10, hmin 120");
         setTransferHandler(new FileDrop());
     }
 
@@ -113,7 +112,7 @@ public final class CheckPanel extends JPanel {
         try {
             req = requests.read(file, f);
         } catch (RuntimeException e) {
-            verdict.setText("Cannot check");
+            verdict.show("Cannot check", "Arcwright.error.foreground");
             figures.show(e.getMessage(), "Arcwright.error.foreground");
             return;
         }
@@ -127,6 +126,16 @@ public final class CheckPanel extends JPanel {
     }
 
     public String verdictText() { return verdict.getText(); }
+
+    /** Whether every wrapped line of the verdict fits in the space it was given (tests). */
+    public boolean verdictFullyShown() {
+        return verdict.getWidth() > 0 && verdict.getHeight() >= verdict.getPreferredSize().height;
+    }
+
+    /** How many comparison rows the table's viewport shows whole (tests). */
+    public int visibleComparisonRows() {
+        return table.getParent() == null ? 0 : table.getParent().getHeight() / table.getRowHeight();
+    }
 
     private void chooseFile() {
         JFileChooser c = new JFileChooser();
@@ -147,15 +156,15 @@ public final class CheckPanel extends JPanel {
         cancel.setVisible(false);
         if (e != null) {
             Throwable cause = e.getCause() != null ? e.getCause() : e;
-            verdict.setText("Cannot check");
+            verdict.show("Cannot check", "Arcwright.error.foreground");
             figures.show(cause.getMessage(), "Arcwright.error.foreground");
             status.accept("Check failed");
             return;
         }
         result = r;
         source = src;
-        verdict.setText((r.pass() ? "Conforms" : "Does not conform") + " · " + r.request().callout().describe());
-        verdict.setForeground(Themes.color(r.pass() ? "Arcwright.pass.foreground" : "Arcwright.fail.foreground"));
+        verdict.show((r.pass() ? "Conforms" : "Does not conform") + " · " + r.request().callout().describe(),
+                r.pass() ? "Arcwright.pass.foreground" : "Arcwright.fail.foreground");
         figures.show(describe(r), "Label.foreground");
         comparisons.setRowCount(0);
         for (Comparison c : r.comparisons()) {

@@ -468,7 +468,7 @@ public final class DecidePanel extends JPanel {
         int rank = 1;
         for (Recommendation r : shown) {
             boolean isChosen = chosen != null && chosen.callout().equals(r.callout()) && chosen.ruleId().equals(r.ruleId());
-            cards.add(new RecommendationCard(rank++, r, frameImages.get(r), this::choose, this::copy, this::copyFrame, isChosen),
+            cards.add(new RecommendationCard(rank++, r, form.standard(), frameImages.get(r), this::choose, this::copy, this::copyFrame, isChosen),
                     "wmin 10");
         }
         cards.revalidate();

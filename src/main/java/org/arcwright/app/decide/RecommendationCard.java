@@ -1,50 +1,54 @@
 package org.arcwright.app.decide;
 
-import java.util.Map;
+import java.util.List;
 import java.util.function.Consumer;
 import javax.swing.JButton;
 import javax.swing.JLabel;
+import javax.swing.JPanel;
 import net.miginfocom.swing.MigLayout;
-import org.arcwright.app.model.Numbers;
+import org.arcwright.app.model.CardFigures;
 import org.arcwright.app.shell.Card;
 import org.arcwright.app.shell.Icons;
-import org.arcwright.app.shell.Themes;
 import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.Recommendation;
+import org.arcwright.tolerance.DrawingStyle;
 
 /** One recommendation: the callout as drawn, its figures, the reasoning, cautions and notes. */
 final class RecommendationCard extends Card {
     private static final long serialVersionUID = 1L;
 
-    RecommendationCard(int rank, Recommendation r, java.awt.image.BufferedImage frame, Consumer<Recommendation> onChoose,
+    RecommendationCard(int rank, Recommendation r, DrawingStyle style, java.awt.image.BufferedImage frame,
+                       Consumer<Recommendation> onChoose,
                        Consumer<Recommendation> onCopy, Consumer<Recommendation> onCopyFrame, boolean chosen) {
         super(new MigLayout("insets 10 12 10 12, wrap 2, gap 6 3", "[][grow,fill]", ""), "card");
         setName("card" + rank);
         setSelected(chosen);
-        JLabel head = new JLabel(rank + ".  " + (r.text() == null ? r.callout().typeName() : r.text()));
+        WrapLabel head = new WrapLabel(rank + ".  " + (r.text() == null ? r.callout().typeName() : r.text()),
+                "Arcwright.callout.font", null);
         head.setName("cardCallout");
-        head.setFont(Themes.font("Arcwright.callout.font"));
-        add(head, "span 2, split 2");
-        JLabel tag = new JLabel(r.demoted() ? "demoted" : chosen ? "on the worksheet" : r.ruleId());
-        tag.putClientProperty("FlatLaf.styleClass", "small");
-        tag.setForeground(Themes.color(r.demoted() ? "Arcwright.error.foreground" : "Arcwright.help.foreground"));
-        add(tag, "gapleft push");
+        add(head, "span 2, growx, wmin 10");
+        WrapLabel tag = new WrapLabel(r.demoted() ? "demoted · " + r.ruleId()
+                : chosen ? "on the worksheet · " + r.ruleId() : r.ruleId(), "Arcwright.help.font",
+                r.demoted() ? "Arcwright.error.foreground" : "Arcwright.help.foreground");
+        tag.setName("cardRule");
+        add(tag, "span 2, growx, wmin 10");
         if (frame != null) {
             JLabel preview = new JLabel(new javax.swing.ImageIcon(frame));
             preview.setName("cardFrame");
             preview.setToolTipText("The feature control frame as drawn");
-            add(preview, "span 2, left, gaptop 2, gapbottom 2");
+            add(preview, "span 2, left, wmin 10, gaptop 2, gapbottom 2");
         }
-        if (!r.numbers().isEmpty()) {
-            StringBuilder sb = new StringBuilder();
-            for (Map.Entry<String, Object> e : r.numbers().entrySet()) {
-                if (sb.length() > 0) sb.append("  ·  ");
-                sb.append(label(e.getKey())).append(" ").append(value(e.getValue()));
+        List<CardFigures.Figure> figures = CardFigures.of(r.numbers(), style);
+        if (!figures.isEmpty()) {
+            JPanel grid = new JPanel(new MigLayout("insets 0, wrap 2, gap 10 2", "[45%,fill][55%,fill]", ""));
+            grid.setOpaque(false);
+            grid.setName("cardNumbers");
+            for (CardFigures.Figure f : figures) {
+                grid.add(new WrapLabel(f.label(), "Arcwright.help.font", "Arcwright.help.foreground"), "wmin 10, top");
+                grid.add(new WrapLabel(f.value(), "Label.font", null), "wmin 10, top");
             }
-            WrapLabel numbers = new WrapLabel(sb.toString(), "Arcwright.figure.font", null);
-            numbers.setName("cardNumbers");
-            add(numbers, "span 2, growx, wmin 10");
+            add(grid, "span 2, growx, wmin 10, gaptop 4, gapbottom 4");
         }
         for (String b : r.because()) add(wrap("• " + b, null), "span 2, growx, wmin 10");
         for (String c : r.cautions()) {
@@ -87,18 +91,5 @@ final class RecommendationCard extends Card {
 
     private static WrapLabel wrap(String text, String colourKey) {
         return new WrapLabel(text, "Label.font", colourKey);
-    }
-
-    private static String label(String key) {
-        StringBuilder sb = new StringBuilder();
-        for (char ch : key.toCharArray()) {
-            if (Character.isUpperCase(ch)) sb.append(' ').append(Character.toLowerCase(ch)); else sb.append(ch);
-        }
-        return sb.toString();
-    }
-
-    private static String value(Object v) {
-        if (v instanceof Double) return Numbers.trim(Math.round((Double) v * 1e4) / 1e4);
-        return String.valueOf(v);
     }
 }

@@ -1,9 +1,11 @@
 package org.arcwright.app.practice;
 
+import java.nio.file.Path;
 import java.util.List;
 import java.util.Objects;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
+import java.util.function.Supplier;
 import javax.swing.DefaultListModel;
 import javax.swing.JButton;
 import javax.swing.JLabel;
@@ -20,8 +22,12 @@ import javax.swing.event.DocumentListener;
 import javax.swing.table.DefaultTableModel;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.RuleDraft;
+import org.arcwright.app.model.RuleSaver;
+import org.arcwright.app.model.TemplatePreview;
+import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.PackLayer;
 import org.arcwright.rules.Advisor;
 import org.arcwright.rules.PackCheck;
 import org.arcwright.rules.RuleBook;
@@ -43,20 +49,43 @@ public final class PracticeEditorPanel extends JPanel {
     private final JList<RuleBook.Entry> list = new JList<>(entries);
     private final JTextArea editor = new JTextArea();
     private final WrapLabel verdict = new WrapLabel("Select a rule to see it here.", "Label.font", "Arcwright.help.foreground");
-    private final JButton run = new JButton("Run the pack's examples");
+    private final JButton run = new JButton("Run examples");
     private final DefaultTableModel results = new DefaultTableModel(new Object[] {"Rule", "Example", "Result", "First"}, 0) {
         private static final long serialVersionUID = 1L;
 
         @Override
         public boolean isCellEditable(int row, int column) { return false; }
     };
+    private final JButton save = new JButton("Save");
+    private final transient WorksheetSession session;
+    private String saveMessage = "";
+    private final DefaultListModel<TemplatePreview.Entry> templates = new DefaultListModel<>();
+    private final JList<TemplatePreview.Entry> templateList = new JList<>(templates);
+    private final JTextArea templateText = new JTextArea();
+    private final JTextArea templatePreview = new JTextArea();
+    private final WrapLabel templateVerdict = new WrapLabel("Select a template to see the note it fills.", "Label.font",
+            "Arcwright.help.foreground");
+    private final Timer previewLater = new Timer(250, e -> refreshPreview());
+    private final transient Supplier<Path> personalPack;
+    private final transient Runnable reloadRules;
+    private final transient RuleSaver saver;
     private final Timer validateLater = new Timer(250, e -> validateNow());
     private boolean loading;
 
-    public PracticeEditorPanel(JsonFiles json, Executor background) {
-        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow 70,fill][grow 30,fill][]"));
+    public PracticeEditorPanel(JsonFiles json, Executor background, WorksheetSession session, Supplier<Path> personalPack,
+                               Runnable reloadRules) {
+        super(new MigLayout("insets 0, fill", "[grow,fill]", "[grow,fill]"));
+        this.session = Objects.requireNonNull(session, "session");
+        JPanel rulesPage = new JPanel(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow 70,fill][grow 30,fill][]"));
         this.json = Objects.requireNonNull(json, "json");
         this.background = Objects.requireNonNull(background, "background");
+        this.personalPack = Objects.requireNonNull(personalPack, "personalPack");
+        this.reloadRules = Objects.requireNonNull(reloadRules, "reloadRules");
+        this.saver = new RuleSaver(json);
+        save.setName("ruleSave");
+        save.setEnabled(false);
+        save.setToolTipText("Unavailable: select a rule first");
+        save.addActionListener(e -> save());
         setName("practiceEditor");
         list.setName("ruleList");
         editor.setName("ruleText");
@@ -86,26 +115,118 @@ public final class PracticeEditorPanel extends JPanel {
         JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][]"));
         right.add(new JScrollPane(editor), "wmin 10, hmin 10");
         right.add(verdict, "wmin 10");
-        right.add(run, "left, growx 0");
+        right.add(save, "left, growx 0, split 2");
+        right.add(run, "growx 0");
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(list), right);
         split.setResizeWeight(0.3);
         split.setBorder(null);
-        add(split, "wmin 10, hmin 10, h 60%");
+        rulesPage.add(split, "wmin 10, hmin 10, h 60%");
         JTable table = new JTable(results);
         table.setName("exampleResults");
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 6));
-        add(new JScrollPane(table), "wmin 10, hmin 10, h 25%");
-        add(new WrapLabel("Edits here are checked, not saved: change rules in the pack's files (see DEVELOPERS.md).",
+        rulesPage.add(new JScrollPane(table), "wmin 10, hmin 10, h 25%");
+        rulesPage.add(new WrapLabel("Edits are checked as you type and saved only when they read. A built-in rule is saved as "
+                + "an override in your personal pack; the rules reload after each save.",
                 "Label.font", "Arcwright.help.foreground"), "wmin 10");
+        javax.swing.JTabbedPane pages = new javax.swing.JTabbedPane();
+        pages.setName("practicePages");
+        pages.addTab("Rules", rulesPage);
+        pages.addTab("Note templates", templatesPage());
+        add(pages, "wmin 10, hmin 10");
+        session.listeners().add(previewLater::restart);
     }
+
+    /** The templates page: the packs' templates, the text as written, and the note it fills for the selected feature. */
+    private JPanel templatesPage() {
+        templateList.setName("templateList");
+        templateText.setName("templateText");
+        templatePreview.setName("templatePreview");
+        templateVerdict.setName("templateVerdict");
+        templateText.setFont(editor.getFont());
+        templatePreview.setFont(editor.getFont());
+        templatePreview.setEditable(false);
+        templateList.addListSelectionListener(e -> templateSelected(e.getValueIsAdjusting()));
+        templateText.getDocument().addDocumentListener(new DocumentListener() {
+            public void insertUpdate(DocumentEvent e) { templateTyped(); }
+            public void removeUpdate(DocumentEvent e) { templateTyped(); }
+            public void changedUpdate(DocumentEvent e) { templateTyped(); }
+        });
+        previewLater.setRepeats(false);
+        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]",
+                "[grow 55,fill][][grow 45,fill]"));
+        right.add(new JScrollPane(templateText), "wmin 10, hmin 10");
+        right.add(templateVerdict, "wmin 10");
+        right.add(new JScrollPane(templatePreview), "wmin 10, hmin 10");
+        JScrollPane listScroll = new JScrollPane(templateList);
+        listScroll.setPreferredSize(new java.awt.Dimension(160, 10));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, listScroll, right);
+        split.setResizeWeight(0.25);
+        split.setBorder(null);
+        JPanel page = new JPanel(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow,fill][]"));
+        page.add(split, "wmin 10, hmin 10");
+        page.add(new WrapLabel("The note below is filled for the selected feature (or the whole part) as you type; "
+                + "edits to templates are not saved here.", "Label.font", "Arcwright.help.foreground"), "wmin 10");
+        return page;
+    }
+
+    private void templateSelected(boolean adjusting) {
+        TemplatePreview.Entry e = templateList.getSelectedValue();
+        if (adjusting || e == null) return;
+        try {
+            String text = TemplatePreview.text(e);
+            loading = true;
+            templateText.setText(text);
+            templateText.setCaretPosition(0);
+            loading = false;
+            refreshPreview();
+        } catch (RuntimeException ex) {
+            templateVerdict.show(ex.getMessage(), "Arcwright.error.foreground");
+        }
+    }
+
+    private void templateTyped() {
+        if (!loading) previewLater.restart();
+    }
+
+    private void refreshPreview() {
+        TemplatePreview.Entry e = templateList.getSelectedValue();
+        if (e == null) return;
+        TemplatePreview.Result r = TemplatePreview.fill(e, templateText.getText(), session.worksheet(),
+                session.selected().orElse(null));
+        if (r.ok()) {
+            templatePreview.setText(r.note());
+            templatePreview.setCaretPosition(0);
+            templateVerdict.show("The template reads; the note as it would be filled:", "Arcwright.pass.foreground");
+        } else {
+            templateVerdict.show(r.problem().getMessage(), "Arcwright.error.foreground");
+        }
+    }
+
+    public String templateVerdictText() { return templateVerdict.getText(); }
+
+    public String templatePreviewText() { return templatePreview.getText(); }
+
+    public JTextArea templateEditor() { return templateText; }
 
     /** Called once the packs have loaded. */
     public void setRules(org.arcwright.pack.PackStack packs, RuleBook b, Advisor a) {
         stack = packs;
+        String keepTemplate = templateList.getSelectedValue() == null ? null : templateList.getSelectedValue().name();
+        templates.clear();
+        for (TemplatePreview.Entry t : TemplatePreview.entries(packs)) {
+            templates.addElement(t);
+            if (t.name().equals(keepTemplate)) templateList.setSelectedValue(t, false);
+        }
         book = b;
         advisor = a;
+        String keep = list.getSelectedValue() == null ? null : list.getSelectedValue().rule().id();
         entries.clear();
         for (RuleBook.Entry e : b.entries()) entries.addElement(e);
+        if (keep != null) {
+            for (int i = 0; i < entries.size(); i++) {
+                if (entries.get(i).rule().id().equals(keep)) list.setSelectedIndex(i);
+            }
+        }
     }
 
     public JTextArea editor() { return editor; }
@@ -132,6 +253,8 @@ public final class PracticeEditorPanel extends JPanel {
         loading = false;
         run.setEnabled(advisor != null);
         run.setToolTipText("Run every example of pack '" + e.pack() + "' against the advisor");
+        boolean builtIn = e.layer() == PackLayer.BUILT_IN;
+        save.setText(builtIn ? "Save as an override in my personal pack" : "Save");
         showVerdict();
     }
 
@@ -146,12 +269,53 @@ public final class PracticeEditorPanel extends JPanel {
     }
 
     private void showVerdict() {
+        boolean reads = draft.problem().isEmpty();
+        save.setEnabled(reads);
+        save.setToolTipText(reads ? (save.getText().equals("Save") ? "Write the rule back into its pack file"
+                : "The built-in pack cannot change: write the rule into your personal pack as an override")
+                : "Unavailable: the rule does not read; fix what the message under the text says");
         if (draft.problem().isPresent()) {
             verdict.show(draft.problem().get().getMessage(), "Arcwright.error.foreground");
         } else {
             verdict.show("The rule reads: " + draft.rule().get().summary(), "Arcwright.pass.foreground");
         }
     }
+
+    private void save() {
+        RuleBook.Entry e = list.getSelectedValue();
+        if (e == null || draft == null) return;
+        validateLater.stop();
+        draft.setText(editor.getText());
+        showVerdict();
+        if (draft.problem().isPresent()) return;
+        save.setEnabled(false);
+        RuleDraft d = draft;
+        String id = e.rule().id();
+        boolean builtIn = e.layer() == PackLayer.BUILT_IN;
+        Path file = Path.of(e.file());
+        Path personal = personalPack.get();
+        CompletableFuture.supplyAsync(() -> builtIn ? saver.saveOverride(d, id, personal) : saver.saveInPlace(d, id, file),
+                background).whenComplete((written, err) -> SwingUtilities.invokeLater(() -> saved(written, err)));
+    }
+
+    private void saved(Path written, Throwable err) {
+        save.setEnabled(true);
+        if (err != null) {
+            Throwable cause = err.getCause() != null ? err.getCause() : err;
+            saveMessage = "Not saved: " + cause.getMessage();
+            verdict.show(saveMessage, "Arcwright.error.foreground");
+            return;
+        }
+        saveMessage = "Saved to " + written + "; reloading the rules…";
+        verdict.show(saveMessage, "Arcwright.pass.foreground");
+        reloadRules.run();
+    }
+
+    /** What the last save said: where it wrote, or why it did not (tests). */
+    public String saveMessage() { return saveMessage; }
+
+    /** The save button's text: plain Save, or the override offer for a built-in rule (tests). */
+    public String saveLabel() { return save.getText(); }
 
     private void runExamples() {
         RuleBook.Entry e = list.getSelectedValue();

@@ -179,7 +179,8 @@ public final class MainWindow {
         checkPanel = new CheckPanel(session, new CheckRequests(services.json()), services.background(), services.clock(),
                 status::show);
         work.addTab("Check", Icons.get("check"), checkPanel, "Conformance of a measured contour (Alt+5)");
-        practiceTab = new LazyTab<>("practiceEditor", () -> new PracticeEditorPanel(services.json(), services.background()));
+        practiceTab = new LazyTab<>("practiceEditor", () -> new PracticeEditorPanel(services.json(), services.background(),
+                session, this::personalPackPath, this::reloadRulesInBackground));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
         notesPanel = new NotesPanel(services.search(), services.background(), status::show);
         JSplitPane right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);
@@ -524,7 +525,7 @@ public final class MainWindow {
     private void loadPacksInBackground() {
         List<Path> team = new ArrayList<>();
         for (String t : settings.teamPacks()) team.add(Path.of(t));
-        Path personal = settings.personalPack() == null ? services.defaultPersonalPack() : Path.of(settings.personalPack());
+        Path personal = personalPackPath();
         new SwingWorker<Loaded, Void>() {
             @Override
             protected Loaded doInBackground() {
@@ -538,6 +539,41 @@ public final class MainWindow {
             @Override
             protected void done() { packsLoaded(this); }
         }.execute();
+    }
+
+    /** The personal pack folder: the one in the settings, else the default under the user's config. */
+    private Path personalPackPath() {
+        return settings.personalPack() == null ? services.defaultPersonalPack() : Path.of(settings.personalPack());
+    }
+
+    /**
+     * Reloads the packs and the rule book off the UI thread after a rule was saved, then gives the
+     * advisor (with the open notes, if any) and the Practice editor the new book.
+     */
+    private void reloadRulesInBackground() {
+        if (core == null) return;
+        List<Path> team = new ArrayList<>();
+        for (String t : settings.teamPacks()) team.add(Path.of(t));
+        Path personal = personalPackPath();
+        status.progress("Reloading the rules…", -1, null);
+        java.util.concurrent.CompletableFuture.supplyAsync(() -> {
+            PackStack stack = PackStack.load(team, personal);
+            return new Loaded(stack, core.mechanics(), RuleBook.load(stack), core.checks(), core.frames(), core.templates());
+        }, services.background()).whenComplete((loaded, e) -> javax.swing.SwingUtilities.invokeLater(() -> {
+            if (e != null) {
+                status.done("The rules could not reload: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));
+                return;
+            }
+            core = loaded;
+            packs = loaded.packs();
+            NotesStore store = notesStore;
+            NoteLinker linker = store == null ? NoteLinker.NONE : (tags, text, limit) -> store.related(tags, text, limit)
+                    .stream().map(h -> new NoteLink(h.id(), h.title(), h.pack())).toList();
+            Advisor advisor = new Advisor(loaded.book(), loaded.checks(), linker);
+            useAdvisor(advisor);
+            practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), advisor));
+            status.done("Rules reloaded: " + loaded.book().entries().size() + " rules in force");
+        }));
     }
 
     /** What loads in the background after the window shows. */

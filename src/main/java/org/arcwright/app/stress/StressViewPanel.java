@@ -115,6 +115,46 @@ public final class StressViewPanel extends JPanel {
         show(g, head, sb.toString().strip(), String.join("\n", r.notes()), c.chart());
     }
 
+    @Override
+    public void updateUI() {
+        super.updateUI();
+        // the chart is not a Swing component: give it the new look's colours when the look changes
+        if (chart != null) restyle(chart.getChart());
+    }
+
+    /** Gives the chart the look's background, grid and text colours (it is drawn light by the render core). */
+    private static void restyle(JFreeChart c) {
+        if (c == null) return;
+        java.awt.Color fg = Themes.color("Label.foreground");
+        c.setBackgroundPaint(Themes.color("Panel.background"));
+        if (c.getTitle() != null) c.getTitle().setPaint(fg);
+        for (int i = 0; i < c.getSubtitleCount(); i++) {
+            if (c.getSubtitle(i) instanceof org.jfree.chart.title.TextTitle) {
+                ((org.jfree.chart.title.TextTitle) c.getSubtitle(i)).setPaint(fg);
+            }
+        }
+        if (c.getLegend() != null) {
+            c.getLegend().setBackgroundPaint(Themes.color("Panel.background"));
+            c.getLegend().setItemPaint(fg);
+        }
+        if (c.getPlot() instanceof org.jfree.chart.plot.XYPlot) {
+            org.jfree.chart.plot.XYPlot plot = (org.jfree.chart.plot.XYPlot) c.getPlot();
+            plot.setBackgroundPaint(Themes.color("Arcwright.zone.background"));
+            plot.setDomainGridlinePaint(Themes.color("Arcwright.zone.grid"));
+            plot.setRangeGridlinePaint(Themes.color("Arcwright.zone.grid"));
+            for (int i = 0; i < plot.getDomainAxisCount(); i++) axis(plot.getDomainAxis(i), fg);
+            for (int i = 0; i < plot.getRangeAxisCount(); i++) axis(plot.getRangeAxis(i), fg);
+        }
+    }
+
+    private static void axis(org.jfree.chart.axis.Axis a, java.awt.Color fg) {
+        if (a == null) return;
+        a.setLabelPaint(fg);
+        a.setTickLabelPaint(fg);
+        a.setAxisLinePaint(fg);
+        a.setTickMarkPaint(fg);
+    }
+
     private static void line(StringBuilder sb, String where, StressPoint p) {
         sb.append("Kt ").append(Numbers.fixed(p.kt().kt(), 3));
         if (p.kf() != null) sb.append(", Kf ").append(Numbers.fixed(p.kf(), 3));
@@ -128,13 +168,7 @@ public final class StressViewPanel extends JPanel {
         summary.setText(text);
         notes.setText(remarks);
         notes.setVisible(!remarks.isEmpty());
-        if (c != null) {
-            c.setBackgroundPaint(Themes.color("Panel.background"));
-            if (c.getLegend() != null) {
-                c.getLegend().setBackgroundPaint(Themes.color("Panel.background"));
-                c.getLegend().setItemPaint(Themes.color("Label.foreground"));
-            }
-        }
+        restyle(c);
         chart.setChart(c);
         chart.setVisible(c != null);
         revalidate();

@@ -70,6 +70,9 @@ class CheckStressNotesGuiTest {
                 .startsWith(corePass ? "Conforms" : "Does not conform").contains("CR 1.9-2.1");
         assertThat(fixture.table("checkComparisons").rowCount()).isGreaterThan(0);
         GuiSupport.settle(200);
+        // the verdict wraps rather than being cut short, and the comparison table shows several rows
+        assertThat(GuiSupport.onEdt(() -> window.checkPanel().verdictFullyShown())).isTrue();
+        assertThat(GuiSupport.onEdt(() -> window.checkPanel().visibleComparisonRows())).isGreaterThanOrEqualTo(3);
         GuiSupport.screenshot(window.frame(), "check-light");
         fixture.button("checkKeep").click();
         RadiusFeature f4 = window.session().worksheet().feature("F4").orElseThrow();
@@ -93,6 +96,7 @@ class CheckStressNotesGuiTest {
         GuiSupport.onEdt(() -> window.showTab(3));
         GuiSupport.settle(200);
         GuiSupport.screenshot(window.frame(), "check-dark");
+        assertThat(GuiSupport.onEdt(() -> window.checkPanel().verdictFullyShown())).isTrue();
         GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
     }
 
@@ -147,6 +151,30 @@ class CheckStressNotesGuiTest {
         fixture.button("runExamples").click();
         waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().resultRows()) > 0, 30);
         GuiSupport.screenshot(window.frame(), "practice-light");
+        // the first rule is built in: it is saved as an override in the personal pack, and the rules reload
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().saveLabel())).contains("override");
+        fixture.button("ruleSave").click();
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().saveMessage()).startsWith("Saved to"), 20);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().saveMessage())).contains("override-");
+    }
+
+    @Test
+    @Order(5)
+    void aTemplateIsPreviewedForTheSelectedFeatureAsItIsEdited() {
+        GuiSupport.onEdt(() -> window.session().select("F1"));
+        GuiSupport.onEdt(() -> window.showTab(4));
+        fixture.tabbedPane("practicePages").selectTab("Note templates");
+        waitFor(() -> fixture.list("templateList").contents().length > 0, 20);
+        fixture.list("templateList").selectItem(java.util.regex.Pattern.compile("callout-note.*"));
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templatePreviewText()).contains("F1"), 10);
+        GuiSupport.screenshot(window.frame(), "templates-light");
+        String original = GuiSupport.onEdt(() -> window.practicePanel().templateEditor().getText());
+        fixture.textBox("templateText").setText("PREVIEW OF {{feature.id}}\n{{feature.nonsense}}\n");
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templateVerdictText()).contains("nonsense"), 10);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().templateVerdictText())).contains("nonsense");
+        GuiSupport.screenshot(window.frame(), "templates-error-light");
+        fixture.textBox("templateText").setText(original.replaceFirst("\\{\\{feature.id}}", "NOTE {{feature.id}}"));
+        waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templatePreviewText()).contains("NOTE F1"), 10);
     }
 
     @Test

@@ -1,0 +1,75 @@
+package org.arcwright.app.model;
+
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Map;
+import java.util.TreeMap;
+import org.arcwright.io.InputProblem;
+import org.arcwright.pack.PackStack;
+import org.arcwright.templates.NoteContext;
+import org.arcwright.templates.NoteTemplate;
+import org.arcwright.templates.NoteTemplates;
+import org.arcwright.worksheet.PartWorksheet;
+import org.arcwright.worksheet.RadiusFeature;
+
+/**
+ * The drawing-note templates of the packs in force, and a template's text filled for the worksheet
+ * as it is being edited: checked by the same compiler a pack load uses, so a problem here names the
+ * line and field a sheet export would.
+ */
+public final class TemplatePreview {
+    private TemplatePreview() {}
+
+    /** One template of the stack, after later layers replaced earlier ones of the same name. */
+    public record Entry(String name, String pack, Path file) {
+        @Override
+        public String toString() { return name + "   (" + pack + ")"; }
+    }
+
+    /** The outcome of a fill: the note, or what is wrong with the template text. */
+    public record Result(String note, InputProblem problem) {
+        public boolean ok() { return problem == null; }
+    }
+
+    /** The templates of {@code stack}, by name. */
+    public static List<Entry> entries(PackStack stack) {
+        Map<String, Entry> byName = new TreeMap<>();
+        for (PackStack.PackFile f : stack.files(NoteTemplates.FOLDER, NoteTemplates.EXTENSION)) {
+            String file = f.path().getFileName().toString();
+            String name = file.substring(0, file.length() - NoteTemplates.EXTENSION.length());
+            byName.put(name, new Entry(name, f.pack().name(), f.path()));
+        }
+        return new ArrayList<>(byName.values());
+    }
+
+    /** The text of {@code e} as written in its pack. */
+    public static String text(Entry e) {
+        try {
+            return Files.readString(e.file());
+        } catch (IOException ex) {
+            throw new UncheckedIOException("could not read " + e.file() + ": " + ex.getMessage(), ex);
+        }
+    }
+
+    /**
+     * Fills {@code text} as template {@code e} for {@code worksheet}: a per-feature template for
+     * {@code feature} (the selected one), a part template for the whole part.
+     */
+    public static Result fill(Entry e, String text, PartWorksheet worksheet, RadiusFeature feature) {
+        try {
+            NoteTemplate t = NoteTemplate.compile(e.name(), text, e.file().toString(), e.pack());
+            NoteContext ctx = new NoteContext(worksheet, "Arcwright preview");
+            if (!t.perFeature()) return new Result(t.fill(ctx.forPart()), null);
+            if (feature == null) return new Result("Select a feature to see this per-feature note filled.", null);
+            return new Result(t.fill(ctx.forFeature(feature)), null);
+        } catch (InputProblem p) {
+            return new Result(null, p);
+        } catch (RuntimeException ex) {
+            return new Result(null, new InputProblem(e.file().toString(), 0, 0, null, String.valueOf(ex.getMessage())));
+        }
+    }
+}
