@@ -65,6 +65,7 @@ public final class DecideForm {
         units = c.units();
         formMatters = c.formMatters();
         locationMatters = c.locationMatters();
+        text.put(Question.ANGLE, Numbers.trim(c.cornerAngleDegrees()));
         stress = c.stress() != null;
         DesignCase.StressInputs s = c.stress();
         text.put(Question.SHAPE, s == null ? "stepped-shaft" : s.shape());
@@ -245,7 +246,8 @@ public final class DecideForm {
         }
         String feature = text(Question.FEATURE).isBlank() ? null : text(Question.FEATURE).trim();
         return new DesignCase(units, standard, feature, kind, Numbers.parse(text(Question.NOMINAL)).orElseThrow(), function,
-                loading, formMatters, locationMatters, datums(), process, s, m, text(Question.TOLERANCE));
+                loading, formMatters, locationMatters, datums(), process, s, m, text(Question.TOLERANCE),
+                angle() == DesignCase.SQUARE_CORNER ? null : angle());
     }
 
     private static String firstLine(String s) {

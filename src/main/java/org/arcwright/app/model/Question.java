@@ -21,7 +21,7 @@ public enum Question {
     TOLERANCE("Tolerance intent", "The size tolerance you have in mind, as a radius callout: R2 ±0.2, R2 +0.3/-0.1, "
             + "CR 1.8-2.4, R.06 MAX. Leave empty to let the title block's general tolerance apply."),
     ANGLE("Corner angle", "Included angle between the surfaces the radius blends, in degrees (90 for a shoulder). "
-            + "Used for the crescent zone figures only."),
+            + "It sets the crescent width and the equivalent profile zone the advisor sizes."),
     STRESS("Check stress concentration", "Give the section so the stress view can estimate Kt (and Kf with a "
             + "strength) at the smallest radius the tolerance allows."),
     SHAPE("Section shape", "A stepped round shaft, or a flat stepped bar."),

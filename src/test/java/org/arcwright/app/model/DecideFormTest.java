@@ -25,6 +25,18 @@ class DecideFormTest {
     }
 
     @Test
+    void theCornerAngleReachesTheCaseAndComesBackFromIt() {
+        form.load(Fixtures.fillet(2, "R2 ±0.2"));
+        assertThat(form.toCase().orElseThrow().cornerAngle()).isNull();
+        form.setText(Question.ANGLE, "120");
+        DesignCase c = form.toCase().orElseThrow();
+        assertThat(c.cornerAngleDegrees()).isEqualTo(120);
+        DecideForm again = new DecideForm();
+        again.load(c);
+        assertThat(again.text(Question.ANGLE)).isEqualTo("120");
+    }
+
+    @Test
     void aBadToleranceIsReportedBesideItsField() {
         form.load(Fixtures.fillet(2, null));
         form.setText(Question.TOLERANCE, "R2 ±");
