@@ -112,12 +112,17 @@ public final class PracticeEditorPanel extends JPanel {
             public void changedUpdate(DocumentEvent e) { typed(); }
         });
         validateLater.setRepeats(false);
-        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][]"));
+        JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][][]"));
         right.add(new JScrollPane(editor), "wmin 10, hmin 10");
         right.add(verdict, "wmin 10");
-        right.add(save, "left, growx 0, split 2");
-        right.add(run, "growx 0");
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, new JScrollPane(list), right);
+        right.add(run, "left, growx 0");
+        right.add(save, "left, growx 0, wmin 10");
+        JScrollPane ruleScroll = new JScrollPane(list);
+        // Long rule ids must not push the editor and its buttons off the page: the list starts narrow.
+        ruleScroll.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(280),
+                ruleScroll.getPreferredSize().height));
+        ruleScroll.setMinimumSize(new java.awt.Dimension(0, 0));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, ruleScroll, right);
         split.setResizeWeight(0.3);
         split.setBorder(null);
         rulesPage.add(split, "wmin 10, hmin 10, h 60%");
