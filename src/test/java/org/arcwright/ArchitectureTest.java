@@ -14,7 +14,8 @@ class ArchitectureTest {
     private static final String[] CORE = {
             "org.arcwright.io..", "org.arcwright.tolerance..", "org.arcwright.pack..", "org.arcwright.zone..",
             "org.arcwright.inspect..", "org.arcwright.mechanics..", "org.arcwright.rules..",
-            "org.arcwright.notes..", "org.arcwright.templates.."};
+            "org.arcwright.notes..", "org.arcwright.templates..", "org.arcwright.callout..",
+            "org.arcwright.worksheet.."};
 
     private static JavaClasses classes;
 
