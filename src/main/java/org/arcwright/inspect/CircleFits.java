@@ -196,18 +196,18 @@ public final class CircleFits {
     /** Sum of squared residuals; fills JᵀJ (upper: 0..5) and Jᵀe (6..8). */
     private static double normal(double[] xs, double[] ys, int n, double mx, double my, double a, double b, double r,
                                  double[] ne) {
-        double s00 = 0, s01 = 0, s02 = 0, s11 = 0, s12 = 0, s22 = 0, g0 = 0, g1 = 0, g2 = 0, cost = 0;
+        double s00 = 0, s01 = 0, s02 = 0, s11 = 0, s12 = 0, g0 = 0, g1 = 0, g2 = 0, cost = 0;
         for (int i = 0; i < n; i++) {
             double dx = xs[i] - mx - a, dy = ys[i] - my - b;
             double d = Math.sqrt(dx * dx + dy * dy);
             double e = d - r;
             double inv = d > 0 ? -1 / d : 0;
             double j0 = dx * inv, j1 = dy * inv;
-            s00 += j0 * j0; s01 += j0 * j1; s02 -= j0; s11 += j1 * j1; s12 -= j1; s22 += 1;
+            s00 += j0 * j0; s01 += j0 * j1; s02 -= j0; s11 += j1 * j1; s12 -= j1;
             g0 += j0 * e; g1 += j1 * e; g2 -= e;
             cost += e * e;
         }
-        ne[0] = s00; ne[1] = s01; ne[2] = s02; ne[3] = s11; ne[4] = s12; ne[5] = s22;
+        ne[0] = s00; ne[1] = s01; ne[2] = s02; ne[3] = s11; ne[4] = s12; ne[5] = n;
         ne[6] = g0; ne[7] = g1; ne[8] = g2;
         return cost;
     }
