@@ -121,12 +121,23 @@ public final class CircleFits {
         double[] ne = new double[9], trial = new double[9], d = new double[3];
         double cost = normal(xs, ys, n, mx, my, a, b, r, ne);
         double lambda = 1e-6; // the Taubin start is close: begin nearly Gauss-Newton
+        double lastStep = Double.POSITIVE_INFINITY;
         int it = 0;
         for (; it < 200; it++) {
             if (!solve3(ne, lambda, d)) break;
             double stepSize = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]);
-            double scale = Math.abs(r) + Math.hypot(a, b);
-            if (stepSize <= 1e-10 * scale) break; // converged (see below); a trial would only meet rounding
+            double scale = Math.abs(r) + Math.sqrt(a * a + b * b);
+            if (stepSize <= 1e-15 * scale) break; // converged to rounding
+            // Gauss-Newton converges linearly at about rate = this step / the last one; when what
+            // remains after this step (rate × step) is below 1e-11 of the scale, a hundredth of the
+            // 1e-9 agreement issue 3 asks for, take the step untested: checking it costs a pass
+            double rate = stepSize / lastStep;
+            if (lastStep < Double.POSITIVE_INFINITY && rate < 0.1 && rate * stepSize <= 1e-11 * scale) {
+                cost = Math.max(0, predictedCost(ne, cost, d));
+                a += d[0]; b += d[1]; r += d[2];
+                it++;
+                break;
+            }
             double tc = normal(xs, ys, n, mx, my, a + d[0], b + d[1], r + d[2], trial);
             // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
             if (tc <= cost * (1 + 1e-15)) {
@@ -134,6 +145,7 @@ public final class CircleFits {
                 cost = tc;
                 double[] t = ne; ne = trial; trial = t;
                 lambda = Math.max(lambda / 10, 1e-12);
+                lastStep = stepSize;
             } else {
                 lambda *= 10;
                 if (lambda > 1e12) break;
@@ -170,21 +182,32 @@ public final class CircleFits {
         return Double.isFinite(d[0]) && Double.isFinite(d[1]) && Double.isFinite(d[2]);
     }
 
+    /**
+     * The linear model's cost after step {@code d}: {@code Σ(eᵢ + Jᵢd)² = cost + 2dᵀJᵀe + dᵀJᵀJd};
+     * exact to second order in the step.
+     */
+    private static double predictedCost(double[] ne, double cost, double[] d) {
+        double d0 = d[0], d1 = d[1], d2 = d[2];
+        double quad = ne[0] * d0 * d0 + ne[3] * d1 * d1 + ne[5] * d2 * d2
+                + 2 * (ne[1] * d0 * d1 + ne[2] * d0 * d2 + ne[4] * d1 * d2);
+        return cost + 2 * (ne[6] * d0 + ne[7] * d1 + ne[8] * d2) + quad;
+    }
+
     /** Sum of squared residuals; fills JᵀJ (upper: 0..5) and Jᵀe (6..8). */
     private static double normal(double[] xs, double[] ys, int n, double mx, double my, double a, double b, double r,
                                  double[] ne) {
-        double s00 = 0, s01 = 0, s02 = 0, s11 = 0, s12 = 0, s22 = 0, g0 = 0, g1 = 0, g2 = 0, cost = 0;
+        double s00 = 0, s01 = 0, s02 = 0, s11 = 0, s12 = 0, g0 = 0, g1 = 0, g2 = 0, cost = 0;
         for (int i = 0; i < n; i++) {
             double dx = xs[i] - mx - a, dy = ys[i] - my - b;
             double d = Math.sqrt(dx * dx + dy * dy);
             double e = d - r;
             double inv = d > 0 ? -1 / d : 0;
             double j0 = dx * inv, j1 = dy * inv;
-            s00 += j0 * j0; s01 += j0 * j1; s02 -= j0; s11 += j1 * j1; s12 -= j1; s22 += 1;
+            s00 += j0 * j0; s01 += j0 * j1; s02 -= j0; s11 += j1 * j1; s12 -= j1;
             g0 += j0 * e; g1 += j1 * e; g2 -= e;
             cost += e * e;
         }
-        ne[0] = s00; ne[1] = s01; ne[2] = s02; ne[3] = s11; ne[4] = s12; ne[5] = s22;
+        ne[0] = s00; ne[1] = s01; ne[2] = s02; ne[3] = s11; ne[4] = s12; ne[5] = n;
         ne[6] = g0; ne[7] = g1; ne[8] = g2;
         return cost;
     }
