@@ -593,7 +593,7 @@ public final class MainWindow {
             Advisor plain = new Advisor(loaded.book(), loaded.checks(), NoteLinker.NONE);
             useAdvisor(plain);
             practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), plain));
-            decidePanel.setFrames(r -> loaded.frames().image(r.callout(), decideForm.standard(), decideForm.units(), 110));
+            decidePanel.setFrames((r, ink) -> loaded.frames().image(r.callout(), decideForm.standard(), decideForm.units(), 110, ink));
             actions.refresh();
             openNotesInBackground(packs);
             if (!packs.problems().isEmpty()) {
