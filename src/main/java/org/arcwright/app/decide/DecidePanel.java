@@ -390,7 +390,7 @@ public final class DecidePanel extends JPanel {
             if (l.crescent() != null) {
                 figure("Crescent width (bisector)", Numbers.fixed(l.crescent().width(), 4));
                 figure("Equal-bilateral profile", Numbers.fixed(l.crescent().equalBilateralProfile(), 4));
-                figure("Shortcut profile (2 × dev.)", Numbers.fixed(l.crescent().shortcutProfile(), 4));
+                figure("Shortcut profile (2 × the ± value)", Numbers.fixed(l.crescent().shortcutProfile(), 4));
             }
             for (String remark : l.remarks()) figures.add(new WrapLabel(remark, "Label.font", null), "span 2, growx, wmin 10, gaptop 4");
         }
@@ -399,13 +399,13 @@ public final class DecidePanel extends JPanel {
     }
 
     private void figure(String label, String value) {
-        JLabel l = new JLabel(label);
-        l.setToolTipText(label);
-        figures.add(l, "wmin 10");
+        // wrapping text: the narrow box must not cut a label off mid-word
+        WrapLabel l = new WrapLabel(label, "Label.font", null);
+        figures.add(l, "wmin 10, top");
         JLabel v = new JLabel(value);
         v.setName("figure." + label);
         v.setFont(Themes.font("Arcwright.figure.font").deriveFont(java.awt.Font.BOLD));
-        figures.add(v);
+        figures.add(v, "top");
     }
 
     /** The recommendations shown now, best first. */
