@@ -45,9 +45,25 @@ public final class ContourPlot {
     public static final int WIDTH = 1000, HEIGHT = 760;
     private static final int MAX_DRAWN = 20_000;
     private static final int TOP = 140;
-    private static final Color NOMINAL = new Color(0x30, 0x30, 0x30), ZONE = new Color(0x1f, 0x5f, 0xbf),
-            ZONE_FILL = new Color(0x1f, 0x5f, 0xbf, 0x22), OK = new Color(0x1a, 0x8f, 0x3c),
+    /** The printed colours: files keep these whatever the window's look. */
+    private static final Palette PRINTED = new Palette(Color.WHITE, new Color(0x30, 0x30, 0x30), new Color(0x1f, 0x5f, 0xbf));
+    private static final Color OK = new Color(0x1a, 0x8f, 0x3c),
             NEAR = new Color(0xd9, 0x8a, 0x00), OUT = new Color(0xd0, 0x21, 0x21), IDLE = new Color(0x9a, 0x9a, 0x9a);
+
+    private final Color background, nominalInk, zoneInk, zoneFill;
+
+    /** The plot in its printed colours. */
+    public ContourPlot() {
+        this(PRINTED);
+    }
+
+    /** The plot on the palette's background, text and nominal in its foreground, the zone in its accent. */
+    public ContourPlot(Palette palette) {
+        background = palette.background();
+        nominalInk = palette.foreground();
+        zoneInk = palette.accent();
+        zoneFill = new Color(zoneInk.getRed(), zoneInk.getGreen(), zoneInk.getBlue(), 0x22);
+    }
 
     /** Writes the plot to {@code out}: SVG if the name ends in {@code .svg}, else PNG. */
     public void write(InspectionResult r, Path out) {
@@ -83,7 +99,7 @@ public final class ContourPlot {
     public void draw(InspectionResult r, Graphics2D g) {
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
-        g.setColor(Color.WHITE);
+        g.setColor(background);
         g.fillRect(0, 0, WIDTH, HEIGHT);
         InspectionRequest q = r.request();
         Contour nominal = Inspector.nominalContour(q);
@@ -126,24 +142,24 @@ public final class ContourPlot {
             Nominal.CornerBlend cb = (Nominal.CornerBlend) q.nominal();
             double reach = Math.hypot(view[2] - view[0], view[3] - view[1]) * 2;
             Path2D lo = map.path(cb.corner().contour(rz.min(), reach), 0), hi = map.path(cb.corner().contour(rz.max(), reach), 0);
-            g.setColor(ZONE);
+            g.setColor(zoneInk);
             g.draw(lo);
             g.draw(hi);
         } else if (po != null) {
             ProfileZone z = po.zone();
             double off = reg == null ? 0 : reg.offset();
             Path2D outer = map.path(nominal, z.outward() + off), inner = map.path(nominal, -z.inward() + off);
-            g.setColor(ZONE_FILL);
+            g.setColor(zoneFill);
             Path2D fill = new Path2D.Double(outer);
             fill.append(reverse(inner), true);
             fill.closePath();
             g.fill(fill);
-            g.setColor(ZONE);
+            g.setColor(zoneInk);
             g.draw(outer);
             g.draw(inner);
         }
         // Nominal.
-        g.setColor(NOMINAL);
+        g.setColor(nominalInk);
         g.setStroke(new BasicStroke(1.2f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER, 10, new float[] {8, 5}, 0));
         g.draw(map.path(nominal, 0));
 
@@ -161,7 +177,7 @@ public final class ContourPlot {
             for (double[] p : drawn) if ((int) p[3] == r.worst().index()) w = p;
             if (w != null) {
                 double[] s = map.screen(w[0], w[1]);
-                g.setColor(r.worst().excess() > 0 ? OUT : NOMINAL);
+                g.setColor(r.worst().excess() > 0 ? OUT : nominalInk);
                 g.setStroke(new BasicStroke(1.5f));
                 g.draw(new Ellipse2D.Double(s[0] - 9, s[1] - 9, 18, 18));
                 g.draw(new Line2D.Double(s[0] + 7, s[1] - 7, s[0] + 30, s[1] - 30));
@@ -259,7 +275,7 @@ public final class ContourPlot {
         g.setColor(r.pass() ? OK : OUT);
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 22));
         g.drawString(r.pass() ? "PASS" : "FAIL", 24, 38);
-        g.setColor(NOMINAL);
+        g.setColor(nominalInk);
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 16));
         g.drawString(q.callout().describe() + "   (" + units + ", " + q.points().size() + " points)", 100, 36);
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
@@ -297,14 +313,14 @@ public final class ContourPlot {
         // legend and scale
         int ly = HEIGHT - 22;
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
-        g.setColor(NOMINAL);
+        g.setColor(nominalInk);
         g.drawString("deviations from nominal magnified ×" + fmt(mag) + "   - - nominal", 24, ly);
         int x = 420;
-        Object[][] keys = {{OK, "within"}, {NEAR, "within 15% of a limit"}, {OUT, "outside"}, {IDLE, "not judged"}, {ZONE, "zone boundary"}};
+        Object[][] keys = {{OK, "within"}, {NEAR, "within 15% of a limit"}, {OUT, "outside"}, {IDLE, "not judged"}, {zoneInk, "zone boundary"}};
         for (Object[] k : keys) {
             g.setColor((Color) k[0]);
             g.fill(new Ellipse2D.Double(x, ly - 9, 9, 9));
-            g.setColor(NOMINAL);
+            g.setColor(nominalInk);
             g.drawString((String) k[1], x + 13, ly);
             x += 20 + g.getFontMetrics().stringWidth((String) k[1]) + 10;
         }

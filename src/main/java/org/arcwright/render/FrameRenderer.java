@@ -48,6 +48,11 @@ public final class FrameRenderer {
         return png.image(layout(c, style, units), dpi);
     }
 
+    /** As {@link #image(Callout, DrawingStyle, Units, int)}, in the window's colours rather than black on white. */
+    public BufferedImage image(Callout c, DrawingStyle style, Units units, int dpi, Palette palette) {
+        return png.image(layout(c, style, units), dpi, palette);
+    }
+
     /** PNG file bytes at {@code dpi}. */
     public byte[] png(Callout c, DrawingStyle style, Units units, int dpi) { return png.png(layout(c, style, units), dpi); }
 

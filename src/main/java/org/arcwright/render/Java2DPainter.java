@@ -23,12 +23,17 @@ public final class Java2DPainter {
      * units per millimetre. Leaves the graphics state as it found it.
      */
     public void paint(Graphics2D g, CalloutDrawing d, double scale) {
+        paint(g, d, scale, Color.BLACK);
+    }
+
+    /** As {@link #paint(Graphics2D, CalloutDrawing, double)}, in {@code ink} rather than black. */
+    public void paint(Graphics2D g, CalloutDrawing d, double scale, Color ink) {
         AffineTransform saved = g.getTransform();
         try {
             g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
             g.setRenderingHint(RenderingHints.KEY_STROKE_CONTROL, RenderingHints.VALUE_STROKE_PURE);
             g.scale(scale, scale);
-            g.setColor(Color.BLACK);
+            g.setColor(ink);
             g.setStroke(new BasicStroke((float) d.lineWidth(), BasicStroke.CAP_BUTT, BasicStroke.JOIN_MITER));
             for (CalloutDrawing.Mark m : d.marks()) {
                 if (m instanceof CalloutDrawing.Line l) {

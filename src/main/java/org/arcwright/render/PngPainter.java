@@ -29,6 +29,11 @@ public final class PngPainter {
 
     /** The drawing rendered at {@code dpi}. */
     public BufferedImage image(CalloutDrawing d, int dpi) {
+        return image(d, dpi, Palette.LIGHT);
+    }
+
+    /** The drawing rendered at {@code dpi} in the palette's foreground on its background (the app's dark look). */
+    public BufferedImage image(CalloutDrawing d, int dpi, Palette palette) {
         if (dpi < MIN_DPI || dpi > MAX_DPI) {
             throw org.arcwright.io.InputProblem.ofField("dpi", "must be between " + MIN_DPI + " and " + MAX_DPI + ", got " + dpi);
         }
@@ -38,9 +43,9 @@ public final class PngPainter {
         BufferedImage img = new BufferedImage(w, h, BufferedImage.TYPE_INT_RGB);
         Graphics2D g = img.createGraphics();
         try {
-            g.setColor(Color.WHITE);
+            g.setColor(palette.background());
             g.fillRect(0, 0, w, h);
-            painter.paint(g, d, scale);
+            painter.paint(g, d, scale, palette.foreground());
         } finally {
             g.dispose();
         }

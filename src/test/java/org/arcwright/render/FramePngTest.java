@@ -149,4 +149,26 @@ class FramePngTest {
         org.assertj.core.api.Assertions.assertThatThrownBy(() -> renderer.png(c, DrawingStyle.ASME, Units.MM, 5))
                 .isInstanceOf(org.arcwright.io.InputProblem.class).hasMessageContaining("dpi");
     }
+
+    @Test
+    void aPaletteDrawsTheSameMarksInItsColoursAndTheDefaultStaysBlackOnWhite() {
+        Callout c = CalloutCatalogue.all().get("profile-no-datums").callout();
+        BufferedImage light = renderer.image(c, DrawingStyle.ASME, Units.MM, 110);
+        java.awt.Color ground = new java.awt.Color(0x3a3d40), ink = new java.awt.Color(0xdfe1e5);
+        BufferedImage dark = renderer.image(c, DrawingStyle.ASME, Units.MM, 110, new Palette(ground, ink, ink));
+        assertThat(light.getRGB(0, 0) & 0xffffff).isEqualTo(0xffffff);
+        assertThat(dark.getRGB(0, 0) & 0xffffff).isEqualTo(0x3a3d40);
+        int inked = 0;
+        for (int y = 0; y < light.getHeight(); y++) {
+            for (int x = 0; x < light.getWidth(); x++) {
+                if ((light.getRGB(x, y) & 0xffffff) == 0) {
+                    inked++;
+                    // a fully inked pixel is the ink, give or take rounding in the compositing
+                    java.awt.Color got = new java.awt.Color(dark.getRGB(x, y));
+                    assertThat(Math.abs(got.getRed() - ink.getRed()) + Math.abs(got.getBlue() - ink.getBlue())).isLessThan(12);
+                }
+            }
+        }
+        assertThat(inked).isPositive();
+    }
 }

@@ -27,6 +27,7 @@ import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.shell.Icons;
+import org.arcwright.app.shell.Themes;
 import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.inspect.Comparison;
 import org.arcwright.inspect.InspectionRequest;
@@ -254,7 +255,7 @@ public final class CheckPanel extends JPanel {
                 g2.translate((getWidth() - ContourPlot.WIDTH * s) / 2, (getHeight() - ContourPlot.HEIGHT * s) / 2);
                 g2.scale(s, s);
                 g2.clipRect(0, 0, ContourPlot.WIDTH, ContourPlot.HEIGHT);
-                new ContourPlot().draw(result, g2);
+                new ContourPlot(Themes.drawingPalette("Arcwright.zone.background")).draw(result, g2);
             } finally {
                 g2.dispose();
             }

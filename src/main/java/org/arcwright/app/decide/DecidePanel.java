@@ -33,6 +33,7 @@ import org.arcwright.app.shell.Cautions;
 import org.arcwright.app.shell.ScrollablePanel;
 import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.app.shell.Themes;
+import org.arcwright.render.Palette;
 import org.arcwright.rules.BlendFunction;
 import org.arcwright.rules.BlendKind;
 import org.arcwright.rules.DesignCase;
@@ -56,7 +57,7 @@ public final class DecidePanel extends JPanel {
     private final transient Executor background;
     private final transient Consumer<String> status;
     private transient AdviceSource advice;
-    private transient java.util.function.Function<Recommendation, java.awt.image.BufferedImage> frames = r -> null;
+    private transient java.util.function.BiFunction<Recommendation, Palette, java.awt.image.BufferedImage> frames = (r, p) -> null;
     private transient Map<Recommendation, java.awt.image.BufferedImage> frameImages = Map.of();
     private final Map<Question, JComponent> fields = new EnumMap<>(Question.class);
     private final Map<Question, WrapLabel> notes = new EnumMap<>(Question.class);
@@ -95,10 +96,21 @@ public final class DecidePanel extends JPanel {
         sessionChanged();
     }
 
-    /** Sets how feature control frames are drawn for the cards (once the frame renderer is available). */
-    public void setFrames(java.util.function.Function<Recommendation, java.awt.image.BufferedImage> renderer) {
+    /**
+     * Sets how feature control frames are drawn for the cards (once the frame renderer is
+     * available), in the colours of the current look.
+     */
+    public void setFrames(java.util.function.BiFunction<Recommendation, Palette, java.awt.image.BufferedImage> renderer) {
         this.frames = Objects.requireNonNull(renderer, "renderer");
         adviseNow();
+    }
+
+    @Override
+    public void updateUI() {
+        super.updateUI();
+        // the frame previews are images in the old look's colours: draw them again
+        // (the fields are null while constructing, and a closed window's pool is shut)
+        if (form != null && advice != null && frames != null && isDisplayable()) adviseNow();
     }
 
     /** Puts the divider at 45% the first time the split has a size; the user moves it after that. */
@@ -378,7 +390,7 @@ public final class DecidePanel extends JPanel {
             if (l.crescent() != null) {
                 figure("Crescent width (bisector)", Numbers.fixed(l.crescent().width(), 4));
                 figure("Equal-bilateral profile", Numbers.fixed(l.crescent().equalBilateralProfile(), 4));
-                figure("Shortcut profile (2 × dev.)", Numbers.fixed(l.crescent().shortcutProfile(), 4));
+                figure("Shortcut profile (2 × the ± value)", Numbers.fixed(l.crescent().shortcutProfile(), 4));
             }
             for (String remark : l.remarks()) figures.add(new WrapLabel(remark, "Label.font", null), "span 2, growx, wmin 10, gaptop 4");
         }
@@ -387,13 +399,13 @@ public final class DecidePanel extends JPanel {
     }
 
     private void figure(String label, String value) {
-        JLabel l = new JLabel(label);
-        l.setToolTipText(label);
-        figures.add(l, "wmin 10");
+        // wrapping text: the narrow box must not cut a label off mid-word
+        WrapLabel l = new WrapLabel(label, "Label.font", null);
+        figures.add(l, "wmin 10, top");
         JLabel v = new JLabel(value);
         v.setName("figure." + label);
         v.setFont(Themes.font("Arcwright.figure.font").deriveFont(java.awt.Font.BOLD));
-        figures.add(v);
+        figures.add(v, "top");
     }
 
     /** The recommendations shown now, best first. */
@@ -417,7 +429,9 @@ public final class DecidePanel extends JPanel {
             return;
         }
         AdviceSource source = advice;
-        java.util.function.Function<Recommendation, java.awt.image.BufferedImage> draw = frames;
+        java.util.function.BiFunction<Recommendation, Palette, java.awt.image.BufferedImage> frameDrawer = frames;
+        Palette ink = Themes.drawingPalette("Arcwright.card.background");
+        java.util.function.Function<Recommendation, java.awt.image.BufferedImage> draw = r -> frameDrawer.apply(r, ink);
         CompletableFuture.supplyAsync(() -> withFrames(source.advise(c.get()), draw), background)
                 .whenComplete((list, error) -> SwingUtilities.invokeLater(() -> advised(g, list, error)));
     }

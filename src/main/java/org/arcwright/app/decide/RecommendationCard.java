@@ -34,10 +34,10 @@ final class RecommendationCard extends Card {
         tag.setName("cardRule");
         add(tag, "span 2, growx, wmin 10");
         if (frame != null) {
-            JLabel preview = new JLabel(new javax.swing.ImageIcon(frame));
+            FramePreview preview = new FramePreview(frame);
             preview.setName("cardFrame");
             preview.setToolTipText("The feature control frame as drawn");
-            add(preview, "span 2, left, wmin 10, gaptop 2, gapbottom 2");
+            add(preview, "span 2, left, growx, wmin 10, wmax " + frame.getWidth() + ", gaptop 2, gapbottom 2");
         }
         List<CardFigures.Figure> figures = CardFigures.of(r.numbers(), style);
         if (!figures.isEmpty()) {

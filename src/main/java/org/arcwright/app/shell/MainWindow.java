@@ -95,7 +95,7 @@ public final class MainWindow {
     private final JMenu recentMenu = new JMenu("Open recent");
     private Settings settings;
     private PartPanel partPanel;
-    private DecidePanel decidePanel;
+    private LazyTab<DecidePanel> decideTab;
     private NotesPanel notesPanel;
     private LazyTab<StressViewPanel> stressTab;
     private LazyTab<PracticeEditorPanel> practiceTab;
@@ -139,7 +139,8 @@ public final class MainWindow {
 
     public JTabbedPane workArea() { return work; }
 
-    public DecidePanel decidePanel() { return decidePanel; }
+    /** The Decide panel, built now if the window has not painted yet. */
+    public DecidePanel decidePanel() { return decideTab.panel(); }
 
     /**
      * Shows the window, then restores the last work; the packs, fits, rules and notes index start
@@ -170,9 +171,11 @@ public final class MainWindow {
         frame.setJMenuBar(menuBar());
         partPanel = new PartPanel(session, List.of(actions.get("part.add"), actions.get("part.duplicate"),
                 actions.get("part.delete")));
-        decidePanel = new DecidePanel(decideForm, session, AdviceSource.intentOnly(90), services.background(), status::show);
+        // the form's sixty-odd controls are built just after the first paint, not before it
+        decideTab = new LazyTab<>("decide", () -> new DecidePanel(decideForm, session, AdviceSource.intentOnly(90),
+                services.background(), status::show), true);
         work.setName("workArea");
-        work.addTab("Decide", Icons.get("decide"), decidePanel, "The guided form and its recommendations (Alt+2)");
+        work.addTab("Decide", Icons.get("decide"), decideTab, "The guided form and its recommendations (Alt+2)");
         work.addTab("Zone view", Icons.get("zone"), new ZoneViewPanel(session), "The zone of the chosen control (Alt+3)");
         stressTab = new LazyTab<>("stressView", () -> new StressViewPanel(session, services.background()));
         work.addTab("Stress view", Icons.get("stress"), stressTab, "Stress concentration across the tolerance (Alt+4)");
@@ -593,7 +596,8 @@ public final class MainWindow {
             Advisor plain = new Advisor(loaded.book(), loaded.checks(), NoteLinker.NONE);
             useAdvisor(plain);
             practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), plain));
-            decidePanel.setFrames(r -> loaded.frames().image(r.callout(), decideForm.standard(), decideForm.units(), 110));
+            decideTab.whenBuilt(p -> p.setFrames((r, ink) -> loaded.frames().image(r.callout(), decideForm.standard(),
+                    decideForm.units(), 110, ink)));
             actions.refresh();
             openNotesInBackground(packs);
             if (!packs.problems().isEmpty()) {
@@ -631,7 +635,7 @@ public final class MainWindow {
     }
 
     private void useAdvisor(Advisor a) {
-        decidePanel.setAdviceSource(AdviceSource.advisor(c -> a.advise(c).recommendations(), 90));
+        decideTab.whenBuilt(p -> p.setAdviceSource(AdviceSource.advisor(c -> a.advise(c).recommendations(), 90)));
     }
 
     private void exportSheet() {

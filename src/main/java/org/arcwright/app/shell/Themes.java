@@ -8,6 +8,7 @@ import java.awt.Font;
 import java.awt.Toolkit;
 import javax.swing.UIManager;
 import org.arcwright.app.model.ThemeChoice;
+import org.arcwright.render.Palette;
 
 /**
  * Applies the light (IntelliJ-style) or dark (Darcula) look with Arcwright's own theme properties
@@ -52,6 +53,14 @@ public final class Themes {
     public static Color color(String key) {
         Color c = UIManager.getColor(key);
         return c != null ? c : UIManager.getColor("Label.foreground");
+    }
+
+    /**
+     * The look's colours for a drawing made by the render core (which draws black on white for
+     * files), painted on the colour under {@code backgroundKey}. Call on the event thread.
+     */
+    public static Palette drawingPalette(String backgroundKey) {
+        return new Palette(color(backgroundKey), color("Arcwright.zone.nominal"), color("Arcwright.zone.limit"));
     }
 
     /** A theme font, with the default font as fallback. */
