@@ -66,6 +66,16 @@ final class GuiSupport {
         }
     }
 
+    /** Waits until {@code condition} holds, failing the test after {@code seconds}. */
+    static void waitFor(java.util.function.BooleanSupplier condition, int seconds) {
+        long end = System.nanoTime() + java.util.concurrent.TimeUnit.SECONDS.toNanos(seconds);
+        while (System.nanoTime() < end) {
+            if (condition.getAsBoolean()) return;
+            settle(100);
+        }
+        throw new AssertionError("condition not met within " + seconds + " s");
+    }
+
     /** Presses Ctrl with {@code key}, as a user would. */
     static void chord(org.assertj.swing.core.Robot robot, int key) {
         robot.pressKey(java.awt.event.KeyEvent.VK_CONTROL);
