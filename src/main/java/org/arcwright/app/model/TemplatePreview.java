@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
 import org.arcwright.io.InputProblem;
+import org.arcwright.pack.PackLayer;
 import org.arcwright.pack.PackStack;
 import org.arcwright.templates.NoteContext;
 import org.arcwright.templates.NoteTemplate;
@@ -24,8 +25,12 @@ import org.arcwright.worksheet.RadiusFeature;
 public final class TemplatePreview {
     private TemplatePreview() {}
 
-    /** One template of the stack, after later layers replaced earlier ones of the same name. */
-    public record Entry(String name, String pack, Path file) {
+    /**
+     * One template of the stack, after later layers replaced earlier ones of the same name.
+     *
+     * @param layer the layer of the pack that supplies it: a built-in one cannot be written back
+     */
+    public record Entry(String name, String pack, Path file, PackLayer layer) {
         @Override
         public String toString() { return name + "   (" + pack + ")"; }
     }
@@ -41,7 +46,7 @@ public final class TemplatePreview {
         for (PackStack.PackFile f : stack.files(NoteTemplates.FOLDER, NoteTemplates.EXTENSION)) {
             String file = f.path().getFileName().toString();
             String name = file.substring(0, file.length() - NoteTemplates.EXTENSION.length());
-            byName.put(name, new Entry(name, f.pack().name(), f.path()));
+            byName.put(name, new Entry(name, f.pack().name(), f.path(), f.pack().layer()));
         }
         return new ArrayList<>(byName.values());
     }

@@ -24,6 +24,7 @@ import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.RuleDraft;
 import org.arcwright.app.model.RuleSaver;
 import org.arcwright.app.model.TemplatePreview;
+import org.arcwright.app.model.TemplateSaver;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.shell.WrapLabel;
 import org.arcwright.io.JsonFiles;
@@ -66,6 +67,10 @@ public final class PracticeEditorPanel extends JPanel {
     private final WrapLabel templateVerdict = new WrapLabel("Select a template to see the note it fills.", "Label.font",
             "Arcwright.help.foreground");
     private final Timer previewLater = new Timer(250, e -> refreshPreview());
+    private final JButton templateSave = new JButton("Save");
+    /** The selected template's text as opened (or last saved), so a save never writes over a change on disk. */
+    private String templateOpened;
+    private String templateSaveMessage = "";
     private final transient Supplier<Path> personalPack;
     private final transient Runnable reloadRules;
     private final transient RuleSaver saver;
@@ -147,6 +152,10 @@ public final class PracticeEditorPanel extends JPanel {
         templateText.setName("templateText");
         templatePreview.setName("templatePreview");
         templateVerdict.setName("templateVerdict");
+        templateSave.setName("templateSave");
+        templateSave.setEnabled(false);
+        templateSave.setToolTipText("Unavailable: select a template first");
+        templateSave.addActionListener(e -> saveTemplate());
         templateText.setFont(editor.getFont());
         templatePreview.setFont(editor.getFont());
         templatePreview.setEditable(false);
@@ -158,10 +167,11 @@ public final class PracticeEditorPanel extends JPanel {
         });
         previewLater.setRepeats(false);
         JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]",
-                "[grow 55,fill][][grow 45,fill]"));
+                "[grow 55,fill][][grow 45,fill][]"));
         right.add(new JScrollPane(templateText), "wmin 10, hmin 10");
         right.add(templateVerdict, "wmin 10");
         right.add(new JScrollPane(templatePreview), "wmin 10, hmin 10");
+        right.add(templateSave, "left, growx 0, wmin 10");
         JScrollPane listScroll = new JScrollPane(templateList);
         listScroll.setPreferredSize(new java.awt.Dimension(160, 10));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, listScroll, right);
@@ -170,7 +180,8 @@ public final class PracticeEditorPanel extends JPanel {
         JPanel page = new JPanel(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[grow,fill][]"));
         page.add(split, "wmin 10, hmin 10");
         page.add(new WrapLabel("The note below is filled for the selected feature (or the whole part) as you type; "
-                + "edits to templates are not saved here.", "Label.font", "Arcwright.help.foreground"), "wmin 10");
+                + "a template is saved only when it checks. A built-in template is saved as an override of the same name in "
+                + "your personal pack; the packs reload after each save.", "Label.font", "Arcwright.help.foreground"), "wmin 10");
         return page;
     }
 
@@ -179,6 +190,9 @@ public final class PracticeEditorPanel extends JPanel {
         if (adjusting || e == null) return;
         try {
             String text = TemplatePreview.text(e);
+            templateOpened = text;
+            boolean builtIn = e.layer() == PackLayer.BUILT_IN;
+            templateSave.setText(builtIn ? "Save as an override in my personal pack" : "Save");
             loading = true;
             templateText.setText(text);
             templateText.setCaretPosition(0);
@@ -198,6 +212,11 @@ public final class PracticeEditorPanel extends JPanel {
         if (e == null) return;
         TemplatePreview.Result r = TemplatePreview.fill(e, templateText.getText(), session.worksheet(),
                 session.selected().orElse(null));
+        boolean builtIn = e.layer() == PackLayer.BUILT_IN;
+        templateSave.setEnabled(r.ok() && templateOpened != null);
+        templateSave.setToolTipText(!r.ok() ? "Unavailable: the template does not check; fix what the message under the text says"
+                : builtIn ? "The built-in pack cannot change: write the template into your personal pack, where it "
+                + "replaces the built-in one of the same name" : "Write the template back into its pack file");
         if (r.ok()) {
             templatePreview.setText(r.note());
             templatePreview.setCaretPosition(0);
@@ -206,6 +225,40 @@ public final class PracticeEditorPanel extends JPanel {
             templateVerdict.show(r.problem().getMessage(), "Arcwright.error.foreground");
         }
     }
+
+    private void saveTemplate() {
+        TemplatePreview.Entry e = templateList.getSelectedValue();
+        if (e == null || templateOpened == null) return;
+        previewLater.stop();
+        refreshPreview();
+        if (!templateSave.isEnabled()) return;
+        templateSave.setEnabled(false);
+        String text = templateText.getText();
+        String opened = templateOpened;
+        Path personal = personalPack.get();
+        CompletableFuture.supplyAsync(() -> TemplateSaver.save(e, text, opened, personal), background)
+                .whenComplete((written, err) -> SwingUtilities.invokeLater(() -> templateSaved(text, written, err)));
+    }
+
+    private void templateSaved(String text, Path written, Throwable err) {
+        templateSave.setEnabled(true);
+        if (err != null) {
+            Throwable cause = err.getCause() != null ? err.getCause() : err;
+            templateSaveMessage = "Not saved: " + cause.getMessage();
+            templateVerdict.show(templateSaveMessage, "Arcwright.error.foreground");
+            return;
+        }
+        templateOpened = text;
+        templateSaveMessage = "Saved to " + written + "; reloading the packs…";
+        templateVerdict.show(templateSaveMessage, "Arcwright.pass.foreground");
+        reloadRules.run();
+    }
+
+    /** What the last template save said: where it wrote, or why it did not (tests). */
+    public String templateSaveMessage() { return templateSaveMessage; }
+
+    /** The template save button's text: plain Save, or the override offer for a built-in template (tests). */
+    public String templateSaveLabel() { return templateSave.getText(); }
 
     public String templateVerdictText() { return templateVerdict.getText(); }
 
@@ -217,10 +270,19 @@ public final class PracticeEditorPanel extends JPanel {
     public void setRules(org.arcwright.pack.PackStack packs, RuleBook b, Advisor a) {
         stack = packs;
         String keepTemplate = templateList.getSelectedValue() == null ? null : templateList.getSelectedValue().name();
+        // edits typed while the packs reloaded stay in the editor; only the list and the file behind it change
+        String typed = templateText.getText();
+        boolean edited = templateOpened != null && !typed.equals(templateOpened);
         templates.clear();
         for (TemplatePreview.Entry t : TemplatePreview.entries(packs)) {
             templates.addElement(t);
             if (t.name().equals(keepTemplate)) templateList.setSelectedValue(t, false);
+        }
+        if (edited && templateList.getSelectedValue() != null) {
+            loading = true;
+            templateText.setText(typed);
+            loading = false;
+            refreshPreview();
         }
         book = b;
         advisor = a;

@@ -561,7 +561,7 @@ public final class MainWindow {
         status.progress("Reloading the rules…", -1, null);
         java.util.concurrent.CompletableFuture.supplyAsync(() -> {
             PackStack stack = PackStack.load(team, personal);
-            return new Loaded(stack, core.mechanics(), RuleBook.load(stack), core.checks(), core.frames(), core.templates());
+            return new Loaded(stack, core.mechanics(), RuleBook.load(stack), core.checks(), core.frames(), NoteTemplates.load(stack));
         }, services.background()).whenComplete((loaded, e) -> javax.swing.SwingUtilities.invokeLater(() -> {
             if (e != null) {
                 status.done("The rules could not reload: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));

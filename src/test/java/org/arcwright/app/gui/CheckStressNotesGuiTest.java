@@ -161,6 +161,14 @@ class CheckStressNotesGuiTest {
         GuiSupport.screenshot(window.frame(), "templates-error-light");
         fixture.textBox("templateText").setText(original.replaceFirst("\\{\\{feature.id}}", "NOTE {{feature.id}}"));
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templatePreviewText()).contains("NOTE F1"), 10);
+        // the built-in template is saved as an override of the same name in the personal pack, then the packs reload
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().templateSaveLabel())).contains("override");
+        fixture.button("templateSave").click();
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templateSaveMessage()).startsWith("Saved to"), 20);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().templateSaveMessage())).contains("callout-note.mustache");
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templateSaveLabel()).equals("Save"), 20);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().templateEditor().getText())).contains("NOTE {{feature.id}}");
+        GuiSupport.screenshot(window.frame(), "templates-saved-light");
     }
 
     @Test
