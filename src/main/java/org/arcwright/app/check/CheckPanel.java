@@ -9,6 +9,7 @@ import java.time.Clock;
 import java.time.LocalDate;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
 import java.util.function.Consumer;
@@ -25,6 +26,7 @@ import javax.swing.filechooser.FileNameExtensionFilter;
 import javax.swing.table.DefaultTableModel;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.CheckRequests;
+import org.arcwright.app.model.MeasuredPoints;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.shell.Icons;
 import org.arcwright.app.shell.Themes;
@@ -122,9 +124,15 @@ public final class CheckPanel extends JPanel {
         cancel.setVisible(true);
         status.accept("Checking " + file.getFileName() + "…");
         String src = file.toString();
-        CompletableFuture.supplyAsync(() -> new Inspector().inspect(req), background)
-                .whenComplete((r, e) -> SwingUtilities.invokeLater(() -> inspected(g, src, r, e)));
+        String featureId = f == null ? null : f.id();
+        CompletableFuture.supplyAsync(() -> {
+            InspectionResult r = new Inspector().inspect(req);
+            return new Checked(r, MeasuredPoints.of(r, src));
+        }, background).whenComplete((c, e) -> SwingUtilities.invokeLater(() -> inspected(g, src, featureId, c, e)));
     }
+
+    /** An inspection and its points as the Zone view plots them (when its nominal is a corner). */
+    private record Checked(InspectionResult result, Optional<MeasuredPoints> points) {}
 
     public String verdictText() { return verdict.getText(); }
 
@@ -151,7 +159,7 @@ public final class CheckPanel extends JPanel {
         status.accept("Check cancelled");
     }
 
-    private void inspected(long g, String src, InspectionResult r, Throwable e) {
+    private void inspected(long g, String src, String featureId, Checked c, Throwable e) {
         if (g != generation) return;
         progress.setVisible(false);
         cancel.setVisible(false);
@@ -162,14 +170,19 @@ public final class CheckPanel extends JPanel {
             status.accept("Check failed");
             return;
         }
+        InspectionResult r = c.result();
         result = r;
         source = src;
+        // the Zone view plots the points of the feature they were checked for
+        if (featureId != null && c.points().isPresent() && session.worksheet().feature(featureId).isPresent()) {
+            session.keepMeasured(featureId, c.points().get());
+        }
         verdict.show((r.pass() ? "Conforms" : "Does not conform") + " · " + r.request().callout().describe(),
                 r.pass() ? "Arcwright.pass.foreground" : "Arcwright.fail.foreground");
         figures.show(describe(r), "Label.foreground");
         comparisons.setRowCount(0);
-        for (Comparison c : r.comparisons()) {
-            comparisons.addRow(new Object[] {c.name(), c.callout(), c.pass() ? "conforms" : "does not", c.figure()});
+        for (Comparison k : r.comparisons()) {
+            comparisons.addRow(new Object[] {k.name(), k.callout(), k.pass() ? "conforms" : "does not", k.figure()});
         }
         plot.show(r);
         boolean canKeep = session.selected().isPresent();

@@ -28,6 +28,8 @@ public final class WorksheetSession {
     private Path file;
     private String selectedId;
     private long revision;
+    /** Points of the inspections run in this window, by feature id: the worksheet keeps only verdicts. */
+    private final java.util.Map<String, MeasuredPoints> measured = new java.util.HashMap<>();
 
     public WorksheetSession(WorksheetFiles files, PartWorksheet initial, Path file) {
         this.files = Objects.requireNonNull(files, "files");
@@ -128,6 +130,20 @@ public final class WorksheetSession {
         edit("Inspect " + id, worksheet.withFeature(f.withInspection(record)));
     }
 
+    /**
+     * Keeps the points of an inspection of feature {@code id} for the Zone view, for this session
+     * only (not an edit: the worksheet does not change and nothing is saved).
+     */
+    public void keepMeasured(String id, MeasuredPoints points) {
+        measured.put(Objects.requireNonNull(id, "id"), Objects.requireNonNull(points, "points"));
+        listeners.fire();
+    }
+
+    /** The points last checked for feature {@code id} in this session, if any. */
+    public Optional<MeasuredPoints> measured(String id) {
+        return Optional.ofNullable(id == null ? null : measured.get(id));
+    }
+
     /** Renames the part (number, name...) as one undoable edit. */
     public void updatePart(PartWorksheet.PartInfo info) {
         if (info.equals(worksheet.part())) return;
@@ -201,6 +217,7 @@ public final class WorksheetSession {
         file = path;
         saved = savedState;
         history.clear();
+        measured.clear();
         selectedId = ws.features().isEmpty() ? null : ws.features().get(0).id();
         changed();
     }

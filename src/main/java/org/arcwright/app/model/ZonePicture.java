@@ -19,9 +19,11 @@ import org.arcwright.tolerance.CrescentZone;
  * @param crescentWidth the true zone width on the bisector (not magnified), or NaN without a zone
  * @param magnification the factor applied to deviations from nominal
  * @param caption what is drawn, in words
+ * @param spec the zone drawn, which {@link #place} follows so that measured points and the zone are
+ *     magnified alike
  */
 public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, double crescentWidth,
-                          double magnification, String caption) {
+                          double magnification, String caption, ZoneSpec spec) {
 
     /** A point in drawing units. */
     public record Pt(double x, double y) {}
@@ -39,7 +41,7 @@ public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, doub
             double hi = r + magnification * (a.max() - r);
             double w = CrescentZone.of(a.min(), Math.min(Math.max(r, a.min()), a.max()), a.max(), spec.angleDeg()).width();
             String what = (a.controlled() ? "CR" : "R") + " limits " + Numbers.trim(a.min()) + " to " + Numbers.trim(a.max());
-            return new ZonePicture(nominal, contour(lo, th, reach), contour(hi, th, reach), w, magnification, what);
+            return new ZonePicture(nominal, contour(lo, th, reach), contour(hi, th, reach), w, magnification, what, spec);
         }
         if (spec instanceof ZoneSpec.Band b) {
             double addMaterial = b.outward();
@@ -52,9 +54,109 @@ public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, doub
             List<Pt> upper = offset(nominal, r, th, reach, -magnification * away);
             return new ZonePicture(nominal, lower, upper, b.zone(), magnification,
                     "profile zone " + Numbers.trim(b.zone()) + (Math.abs(b.outward() - b.zone() / 2) > 1e-12
-                            ? " (" + Numbers.trim(b.outward()) + " add-material side)" : " equally disposed"));
+                            ? " (" + Numbers.trim(b.outward()) + " add-material side)" : " equally disposed"), spec);
         }
-        return new ZonePicture(nominal, List.of(), List.of(), Double.NaN, magnification, "nominal only: no tolerance yet");
+        return new ZonePicture(nominal, List.of(), List.of(), Double.NaN, magnification, "nominal only: no tolerance yet", spec);
+    }
+
+    /**
+     * Where a measured point at true size {@code p} is drawn, magnified as the zone is. Under limit
+     * arcs a point on the blend of radius ρ is drawn at the same place along the blend of radius
+     * {@code r + M(ρ - r)}, so a point on a limit arc is drawn on that limit arc; about a profile
+     * band, and beside the legs, its distance from the nominal along the normal is multiplied by M,
+     * as the band's boundaries are (and so is a point whose magnified blend would have no radius left).
+     */
+    public Pt place(Pt p) {
+        double th = Math.toRadians(spec.angleDeg());
+        double r = spec.nominal();
+        double m = magnification;
+        if (spec instanceof ZoneSpec.LimitArcs && m != 1 && insideAngle(p, th)) {
+            double rho = blendRadiusThrough(p, th);
+            Pt c = centre(rho, th);
+            if (onArc(p, c, th)) {
+                // a blend magnified below radius 0 has no arc to lie on: such a point falls back on the
+                // normal below, which meets the arc mapping at the vertex on the bisector
+                double k = r + m * (rho - r);
+                double d = Math.hypot(p.x() - c.x(), p.y() - c.y());
+                if (k > 1e-9 && d > 0) {
+                    Pt c2 = centre(k, th);
+                    return new Pt(c2.x() + k * (p.x() - c.x()) / d, c2.y() + k * (p.y() - c.y()) / d);
+                }
+            }
+        }
+        Foot f = foot(p, r, th);
+        return new Pt(f.x() + m * f.toward() * f.nx(), f.y() + m * f.toward() * f.ny());
+    }
+
+    /**
+     * Signed distance of {@code p} (true size) from the nominal contour: positive on the air side,
+     * negative in the material (as the inspection core signs profile deviations). A round's air is
+     * on the vertex side of its blend, a fillet's on the far side.
+     */
+    public double deviationTowardAir(Pt p) {
+        double d = foot(p, spec.nominal(), Math.toRadians(spec.angleDeg())).toward();
+        return spec.kind() == org.arcwright.rules.BlendKind.ROUND ? d : -d;
+    }
+
+    /**
+     * The nearest point of the nominal contour, the unit normal there toward the vertex side, and the
+     * distance of {@code p} along it (negative on the far side).
+     */
+    private record Foot(double x, double y, double nx, double ny, double toward) {}
+
+    private static Foot foot(Pt p, double r, double th) {
+        double beta = Math.PI / 4;
+        Pt c = centre(r, th);
+        double l1x = Math.cos(beta - th / 2), l1y = Math.sin(beta - th / 2);
+        double l2x = Math.cos(beta + th / 2), l2y = Math.sin(beta + th / 2);
+        double along1 = (p.x() - c.x()) * l1x + (p.y() - c.y()) * l1y;
+        double along2 = (p.x() - c.x()) * l2x + (p.y() - c.y()) * l2y;
+        if (along1 > 0 || along2 > 0) {
+            // beside a leg: the normal toward the vertex side is the leg's outward normal
+            boolean first = along1 > 0 && (along2 <= 0 || legDistance(p, l1x, l1y) <= legDistance(p, l2x, l2y));
+            double lx = first ? l1x : l2x, ly = first ? l1y : l2y;
+            double nx = first ? ly : -ly, ny = first ? -lx : lx;
+            double t = p.x() * lx + p.y() * ly;
+            double h = p.x() * nx + p.y() * ny;
+            return new Foot(t * lx, t * ly, nx, ny, h);
+        }
+        double d = Math.hypot(p.x() - c.x(), p.y() - c.y());
+        if (d == 0) return new Foot(c.x() - r * Math.cos(beta), c.y() - r * Math.sin(beta), -Math.cos(beta), -Math.sin(beta), -r);
+        double nx = (p.x() - c.x()) / d, ny = (p.y() - c.y()) / d;
+        return new Foot(c.x() + r * nx, c.y() + r * ny, nx, ny, d - r);
+    }
+
+    private static double legDistance(Pt p, double lx, double ly) { return Math.abs(p.x() * ly - p.y() * lx); }
+
+    /** Centre of the blend of radius {@code r} tangent to both legs: on the bisector at r/sin(θ/2). */
+    private static Pt centre(double r, double th) {
+        double dc = r / Math.sin(th / 2);
+        return new Pt(dc * Math.cos(Math.PI / 4), dc * Math.sin(Math.PI / 4));
+    }
+
+    private static boolean insideAngle(Pt p, double th) {
+        double a = Math.atan2(p.y(), p.x());
+        return Math.abs(a - Math.PI / 4) < th / 2 && Math.hypot(p.x(), p.y()) > 0;
+    }
+
+    private static boolean onArc(Pt p, Pt c, double th) {
+        double beta = Math.PI / 4;
+        double along1 = (p.x() - c.x()) * Math.cos(beta - th / 2) + (p.y() - c.y()) * Math.sin(beta - th / 2);
+        double along2 = (p.x() - c.x()) * Math.cos(beta + th / 2) + (p.y() - c.y()) * Math.sin(beta + th / 2);
+        return along1 <= 0 && along2 <= 0;
+    }
+
+    /**
+     * Radius of the blend tangent to both legs through {@code p} inside the angle, the larger root of
+     * {@code |p - u ρ/sin α| = ρ} (as {@code org.arcwright.zone.Corner#blendRadiusThrough}).
+     */
+    private static double blendRadiusThrough(Pt p, double th) {
+        double a = th / 2;
+        double s = 1 / Math.sin(a);
+        double cot2 = 1 / (Math.tan(a) * Math.tan(a));
+        double qu = (p.x() + p.y()) * Math.cos(Math.PI / 4);
+        double q2 = p.x() * p.x() + p.y() * p.y();
+        return (s * qu + Math.sqrt(Math.max(0, s * s * qu * qu - cot2 * q2))) / cot2;
     }
 
     /** Shortest distance from {@code p} to the nominal contour, in drawing units. */

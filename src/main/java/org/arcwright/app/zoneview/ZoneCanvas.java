@@ -9,23 +9,29 @@ import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
 import java.awt.event.MouseWheelEvent;
 import java.awt.geom.AffineTransform;
+import java.awt.geom.Ellipse2D;
 import java.awt.geom.NoninvertibleTransformException;
 import java.awt.geom.Path2D;
 import java.awt.geom.Point2D;
 import java.util.List;
 import javax.swing.JComponent;
+import org.arcwright.app.model.MeasuredPoints;
 import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.ZonePicture;
+import org.arcwright.app.model.ZoneScene;
 import org.arcwright.app.shell.Themes;
 
 /**
- * Draws a {@link ZonePicture}: the zone between its boundaries filled, the boundaries, the nominal
- * contour on top. Wheel zooms about the cursor, drag pans, hovering shows the position and its
+ * Draws a {@link ZoneScene}: the zone between its boundaries filled, the boundaries, the nominal
+ * contour on top, and the measured points coloured by their grade. Wheel zooms about the cursor,
+ * drag pans; hovering a point shows its deviation and excess, elsewhere the position and its
  * distance from nominal.
  */
 final class ZoneCanvas extends JComponent {
     private static final long serialVersionUID = 1L;
+    private static final double HOVER_PIXELS = 6;
     private transient ZonePicture picture;
+    private transient ZoneScene scene;
     private double zoom = 1;
     private double panX;
     private double panY;
@@ -47,13 +53,16 @@ final class ZoneCanvas extends JComponent {
         addMouseWheelListener(m);
     }
 
-    void show(ZonePicture p, String unitSymbol, org.arcwright.rules.BlendKind blendKind, double angleDeg) {
-        this.picture = p;
+    void show(ZoneScene s, String unitSymbol, org.arcwright.rules.BlendKind blendKind) {
+        this.scene = s;
+        this.picture = s == null ? null : s.picture();
         this.kind = blendKind;
-        this.angle = angleDeg;
+        this.angle = s == null ? ZoneScene.DEFAULT_ANGLE : s.picture().spec().angleDeg();
         this.units = unitSymbol;
         repaint();
     }
+
+    int plottedPoints() { return scene == null ? 0 : scene.placed().size(); }
 
     void fit() {
         zoom = 1;
@@ -115,6 +124,8 @@ final class ZoneCanvas extends JComponent {
     @Override
     public String getToolTipText(MouseEvent e) {
         if (picture == null) return null;
+        int near = nearestPoint(e.getPoint());
+        if (near >= 0) return scene.describe(near, units);
         try {
             Point2D p = transform().inverseTransform(e.getPoint(), null);
             double d = picture.distanceToNominal(new ZonePicture.Pt(p.getX(), p.getY()));
@@ -124,6 +135,88 @@ final class ZoneCanvas extends JComponent {
                     : " · " + Numbers.fixed(d, 4) + " " + units + " from nominal");
         } catch (NoninvertibleTransformException ex) {
             return null;
+        }
+    }
+
+    /** The measured point drawn within a few pixels of {@code at}, or -1. */
+    private int nearestPoint(Point at) {
+        if (scene == null || scene.placed().isEmpty()) return -1;
+        AffineTransform t = transform();
+        double best = HOVER_PIXELS * HOVER_PIXELS;
+        int found = -1;
+        Point2D s = new Point2D.Double();
+        List<ZonePicture.Pt> placed = scene.placed();
+        for (int i = 0; i < placed.size(); i++) {
+            t.transform(new Point2D.Double(placed.get(i).x(), placed.get(i).y()), s);
+            double d = s.distanceSq(at);
+            if (d <= best) {
+                best = d;
+                found = i;
+            }
+        }
+        return found;
+    }
+
+    /** The theme colour of a grade of point. */
+    private static java.awt.Color gradeColour(MeasuredPoints.Grade g) {
+        switch (g) {
+            case WITHIN:
+                return Themes.color("Arcwright.zone.pointOk");
+            case NEAR_LIMIT:
+                return Themes.color("Arcwright.zone.pointNear");
+            case OUTSIDE:
+                return Themes.color("Arcwright.zone.pointBad");
+            case FAR_OUTSIDE:
+                return Themes.color("Arcwright.zone.pointFar");
+            default:
+                return Themes.color("Arcwright.zone.pointIdle");
+        }
+    }
+
+    private void paintPoints(Graphics2D g2, AffineTransform t) {
+        List<MeasuredPoints.Point> pts = scene.measured().points();
+        double dot = pts.size() > 2000 ? 3 : 6;
+        Point2D s = new Point2D.Double();
+        // the worse grades last, so that a point outside is never hidden under one inside
+        MeasuredPoints.Grade[] order = {MeasuredPoints.Grade.NOT_JUDGED, MeasuredPoints.Grade.WITHIN,
+            MeasuredPoints.Grade.NEAR_LIMIT, MeasuredPoints.Grade.OUTSIDE, MeasuredPoints.Grade.FAR_OUTSIDE};
+        for (MeasuredPoints.Grade grade : order) {
+            g2.setColor(gradeColour(grade));
+            for (int i = 0; i < pts.size(); i++) {
+                if (pts.get(i).grade() != grade) continue;
+                t.transform(new Point2D.Double(scene.placed().get(i).x(), scene.placed().get(i).y()), s);
+                g2.fill(new Ellipse2D.Double(s.getX() - dot / 2, s.getY() - dot / 2, dot, dot));
+            }
+        }
+    }
+
+    /** The colours of the grades present, bottom left, wrapping onto more rows when narrow. */
+    private void paintLegend(Graphics2D g2) {
+        java.awt.FontMetrics fm = g2.getFontMetrics();
+        int d = fm.getAscent() * 2 / 3;
+        List<MeasuredPoints.Grade> shown = new java.util.ArrayList<>();
+        for (MeasuredPoints.Grade grade : MeasuredPoints.Grade.values()) {
+            if (scene.measured().count(grade) > 0) shown.add(grade);
+        }
+        List<int[]> at = new java.util.ArrayList<>();
+        int x = 10;
+        int row = 0;
+        for (MeasuredPoints.Grade grade : shown) {
+            int w = d + 5 + fm.stringWidth(grade.words());
+            if (x > 10 && x + w > getWidth() - 10) {
+                x = 10;
+                row++;
+            }
+            at.add(new int[] {x, row});
+            x += w + 18;
+        }
+        int bottom = getHeight() - 10 - row * fm.getHeight();
+        for (int i = 0; i < shown.size(); i++) {
+            int y = bottom + at.get(i)[1] * fm.getHeight();
+            g2.setColor(gradeColour(shown.get(i)));
+            g2.fill(new Ellipse2D.Double(at.get(i)[0], y - d, d, d));
+            g2.setColor(Themes.color("Label.foreground"));
+            g2.drawString(shown.get(i).words(), at.get(i)[0] + d + 5, y);
         }
     }
 
@@ -154,9 +247,14 @@ final class ZoneCanvas extends JComponent {
             g2.setColor(Themes.color("Arcwright.zone.nominal"));
             g2.setStroke(new BasicStroke(1.8f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
             g2.draw(t.createTransformedShape(path(picture.nominal(), false)));
+            if (scene != null && scene.measured() != null) paintPoints(g2, t);
             g2.setFont(Themes.font("Arcwright.figure.font"));
             g2.setColor(Themes.color("Label.foreground"));
             int y = g2.getFontMetrics().getAscent() + 8;
+            if (scene != null && !scene.pointsCaption().isEmpty()) {
+                g2.drawString(scene.pointsCaption(), 10, y + 2 * g2.getFontMetrics().getHeight());
+                paintLegend(g2);
+            }
             g2.drawString(picture.caption() + " · material shaded", 10, y);
             if (!Double.isNaN(picture.crescentWidth())) {
                 g2.drawString("zone width on the bisector: " + Numbers.fixed(picture.crescentWidth(), 4) + " " + units

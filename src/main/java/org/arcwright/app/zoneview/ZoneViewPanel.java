@@ -8,17 +8,16 @@ import javax.swing.JPanel;
 import javax.swing.JSlider;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.WorksheetSession;
-import org.arcwright.app.model.ZonePicture;
-import org.arcwright.app.model.ZoneSpec;
+import org.arcwright.app.model.ZoneScene;
 import org.arcwright.worksheet.RadiusFeature;
 
 /**
  * The Zone view of the selected feature: its chosen control's zone (or, before a choice, the zone of
- * the tolerance intent) about the nominal blend, with a magnification for deviations.
+ * the tolerance intent) about the nominal blend, with a magnification for deviations, and the
+ * measured points of the feature's last check in this session, magnified alike and coloured by excess.
  */
 public final class ZoneViewPanel extends JPanel {
     private static final long serialVersionUID = 1L;
-    private static final double ANGLE = 90;
     private final transient WorksheetSession session;
     private final ZoneCanvas canvas = new ZoneCanvas();
     private final JSlider magnification = new JSlider(0, 100, 50);
@@ -74,15 +73,15 @@ public final class ZoneViewPanel extends JPanel {
         Optional<RadiusFeature> f = session.selected();
         if (f.isEmpty()) {
             what.setText("No feature selected");
-            canvas.show(null, "mm", null, ANGLE);
+            canvas.show(null, "mm", null);
             return;
         }
         RadiusFeature feature = f.get();
-        ZoneSpec spec = feature.chosen() != null ? ZoneSpec.of(feature.designCase(), feature.chosen().callout(), ANGLE)
-                : ZoneSpec.ofIntent(feature.designCase(), ANGLE);
-        what.setText(feature.id() + " · " + (feature.chosen() != null ? "chosen: " + feature.chosen().text()
-                : "not decided: showing the tolerance intent") + " · 90° corner");
-        canvas.show(ZonePicture.of(spec, magnification()), feature.designCase().units().symbol(), feature.designCase().kind(),
-                ANGLE);
+        ZoneScene scene = ZoneScene.of(feature, session.measured(feature.id()), magnification());
+        what.setText(scene.heading());
+        canvas.show(scene, feature.designCase().units().symbol(), feature.designCase().kind());
     }
+
+    /** How many measured points the view plots for the selected feature (tests). */
+    public int plottedPoints() { return canvas.plottedPoints(); }
 }

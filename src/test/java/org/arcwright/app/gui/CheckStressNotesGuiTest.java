@@ -82,6 +82,52 @@ class CheckStressNotesGuiTest {
 
     @Test
     @Order(2)
+    void pointsImportedInCheckArePlottedInTheZoneViewColouredByExcess() throws Exception {
+        // decide F1 (the invented shaft's R2 shoulder fillet) as CR 1.8-2.2, then import a section with a dip
+        GuiSupport.onEdt(() -> {
+            window.session().select("F1");
+            RadiusFeature f1 = window.session().selected().orElseThrow();
+            window.session().choose("F1", f1.designCase(), new org.arcwright.rules.Recommendation("demo",
+                    new org.arcwright.callout.Callout.ControlledRadius(1.8, 2.2, 2.0), "CR 1.8-2.2", 0, java.util.List.of(),
+                    java.util.List.of(), java.util.List.of(), java.util.Map.of(), java.util.List.of(), java.util.List.of(), false));
+        });
+        Path csv = config.resolve("shoulder-section.csv");
+        java.nio.file.Files.writeString(csv, dippedSection());
+        GuiSupport.onEdt(() -> window.showTab(3));
+        GuiSupport.onEdt(() -> window.checkPanel().check(csv));
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.checkPanel().verdictText().contains("·")), 30);
+        GuiSupport.onEdt(() -> window.showTab(1));
+        org.arcwright.app.zoneview.ZoneViewPanel zone =
+                (org.arcwright.app.zoneview.ZoneViewPanel) fixture.panel("zoneView").target();
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(zone::plottedPoints) > 0, 10);
+        assertThat(GuiSupport.onEdt(zone::plottedPoints)).isEqualTo(dippedSection().split("\n").length - 1);
+        GuiSupport.settle(200);
+        GuiSupport.screenshot(window.frame(), "zone-points-light");
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.DARK));
+        GuiSupport.settle(300);
+        GuiSupport.screenshot(window.frame(), "zone-points-dark");
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
+        GuiSupport.onEdt(() -> window.session().undo());
+    }
+
+    /**
+     * An invented section of an R2 fillet at a right angle (vertex at the origin, legs along +x and
+     * +y): the blend every 3°, with a dip to R1.72 around 55° that leaves CR 1.8-2.2, and the legs.
+     */
+    private static String dippedSection() {
+        StringBuilder sb = new StringBuilder("x,y\n");
+        for (double x = 4; x > 2.05; x -= 0.25) sb.append(String.format(java.util.Locale.ROOT, "%.5f,%.5f%n", x, 0.0));
+        for (int deg = 0; deg <= 90; deg += 3) {
+            double phi = Math.toRadians(deg);
+            double rho = 2.0 - 0.28 * Math.exp(-Math.pow((deg - 55) / 12.0, 2));
+            sb.append(String.format(java.util.Locale.ROOT, "%.5f,%.5f%n", rho - rho * Math.cos(phi), rho - rho * Math.sin(phi)));
+        }
+        for (double y = 2.25; y <= 4.01; y += 0.25) sb.append(String.format(java.util.Locale.ROOT, "%.5f,%.5f%n", 0.0, y));
+        return sb.toString();
+    }
+
+    @Test
+    @Order(2)
     void theStressViewShowsKtAcrossTheToleranceOfTheShoulderFillet() {
         GuiSupport.onEdt(() -> window.session().select("F1"));
         GuiSupport.onEdt(() -> window.showTab(2));
@@ -176,7 +222,11 @@ class CheckStressNotesGuiTest {
     void theSheetExportsInTheBackground() {
         Path out = config.resolve("sheet.html");
         GuiSupport.onEdt(() -> window.export(out));
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.statusLine().message()).startsWith("Exported"), 60);
+        try {
+            GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.statusLine().message()).startsWith("Exported"), 60);
+        } catch (AssertionError e) {
+            throw new AssertionError("status line says: " + GuiSupport.onEdt(() -> window.statusLine().message()), e);
+        }
         assertThat(out).exists();
         assertThat(out.toFile().length()).isGreaterThan(100);
     }

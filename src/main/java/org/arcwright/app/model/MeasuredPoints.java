@@ -1,0 +1,181 @@
+package org.arcwright.app.model;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.inspect.InspectionRequest;
+import org.arcwright.inspect.InspectionResult;
+import org.arcwright.inspect.Nominal;
+import org.arcwright.inspect.ProfileOutcome;
+import org.arcwright.inspect.Registration;
+import org.arcwright.rules.BlendKind;
+import org.arcwright.zone.Corner;
+import org.arcwright.zone.CornerKind;
+import org.arcwright.zone.Point2;
+import org.arcwright.zone.RadiusZone;
+
+/**
+ * The measured points of an inspection as the Zone view plots them: moved into the view's frame
+ * (vertex at the origin, bisector at 45°; a rigid move, so distances stay true), placed as the
+ * inspection placed them (after any registration of a profile zone), each with its excess over the
+ * limits the inspection judged (as {@code ContourPlot} colours them) and a grade for its colour.
+ *
+ * <p>The worksheet keeps only an inspection's verdict and figures, not its points, so these live in
+ * the window's session, per feature, for the inspections run since the worksheet was opened.
+ *
+ * @param points the points drawn (at most {@link #MAX_DRAWN}, the worst always among them)
+ * @param total how many points the inspection had
+ * @param angleDeg included angle of the measured corner; the view draws the zone at this angle
+ * @param kind fillet or round, as the inspection's corner says
+ * @param nominalRadius the nominal radius the inspection judged against
+ * @param callout the callout the inspection judged against
+ * @param band the width the grades are measured in: the radius band for R and CR, the zone for a profile
+ * @param source the file the points came from
+ */
+public record MeasuredPoints(List<Point> points, int total, double angleDeg, BlendKind kind, double nominalRadius,
+                             InspectionCallout callout, double band, String source) {
+    /** More points than this are thinned evenly for drawing. */
+    public static final int MAX_DRAWN = 20_000;
+    /** Inside, but closer than this share of the band to a limit: {@link Grade#NEAR_LIMIT} (as the contour plot). */
+    public static final double NEAR_SHARE = 0.15;
+    /** Outside by more than this share of the band: {@link Grade#FAR_OUTSIDE}. */
+    public static final double FAR_SHARE = 0.5;
+
+    public MeasuredPoints {
+        points = List.copyOf(points);
+    }
+
+    /** How a point stands against its limits, from comfortably inside to far outside. */
+    public enum Grade {
+        WITHIN("within"),
+        NEAR_LIMIT("near a limit (inside by under 15 % of the band)"),
+        OUTSIDE("outside"),
+        FAR_OUTSIDE("far outside (by over half the band)"),
+        NOT_JUDGED("not judged (beyond the zone's extent)");
+
+        private final String words;
+
+        Grade(String words) { this.words = words; }
+
+        /** For the legend. */
+        public String words() { return words; }
+    }
+
+    /**
+     * One measured point.
+     *
+     * @param index its place in the measured file, from 0
+     * @param x where it lies in the view's frame, true size
+     * @param y where it lies in the view's frame, true size
+     * @param excess how far beyond the limits (negative: inside by that much), NaN when not judged
+     * @param grade its grade
+     */
+    public record Point(int index, double x, double y, double excess, Grade grade) {
+        public ZonePicture.Pt at() { return new ZonePicture.Pt(x, y); }
+    }
+
+    /** The grade of a point {@code excess} beyond limits {@code band} apart. */
+    public static Grade grade(double excess, double band) {
+        if (Double.isNaN(excess)) return Grade.NOT_JUDGED;
+        if (excess > FAR_SHARE * band) return Grade.FAR_OUTSIDE;
+        if (excess > 0) return Grade.OUTSIDE;
+        if (excess > -NEAR_SHARE * band) return Grade.NEAR_LIMIT;
+        return Grade.WITHIN;
+    }
+
+    /** The points of {@code r}, or empty when its nominal is not a corner blend (the view draws only corners). */
+    public static Optional<MeasuredPoints> of(InspectionResult r, String source) {
+        InspectionRequest q = r.request();
+        if (!(q.nominal() instanceof Nominal.CornerBlend)) return Optional.empty();
+        Nominal.CornerBlend cb = (Nominal.CornerBlend) q.nominal();
+        Corner corner = cb.corner();
+        ProfileOutcome po = r.profile() != null ? r.profile() : r.tiers() != null && !r.tiers().isEmpty() ? r.tiers().get(0) : null;
+        Registration reg = po == null ? null : po.registration();
+        RadiusZone rz = q.callout() instanceof InspectionCallout.RadiusLimits
+                ? new RadiusZone(corner, ((InspectionCallout.RadiusLimits) q.callout()).min(),
+                        ((InspectionCallout.RadiusLimits) q.callout()).max(), q.resolution()) : null;
+        double band = rz != null ? Math.max(rz.max() - rz.min(), 1e-12) : po != null ? po.zone().width() : 1;
+        Frame frame = new Frame(corner);
+        int n = q.points().size();
+        int stride = Math.max(1, (n + MAX_DRAWN - 1) / MAX_DRAWN);
+        int worst = r.worst() == null ? -1 : r.worst().index();
+        double[] xs = q.points().xs(), ys = q.points().ys();
+        double[] moved = new double[2];
+        List<Point> out = new ArrayList<>();
+        for (int i = 0; i < n; i++) {
+            if (i % stride != 0 && i != worst) continue;
+            double x = xs[i], y = ys[i];
+            if (reg != null) {
+                reg.apply(x, y, moved);
+                x = moved[0];
+                y = moved[1];
+            }
+            double excess = rz != null ? rz.excess(xs[i], ys[i]) : po != null ? po.zone().excess(po.deviations()[i]) : Double.NaN;
+            ZonePicture.Pt p = frame.toView(x, y);
+            out.add(new Point(i, p.x(), p.y(), excess, grade(excess, band)));
+        }
+        BlendKind kind = corner.kind() == CornerKind.ROUND ? BlendKind.ROUND : BlendKind.FILLET;
+        return Optional.of(new MeasuredPoints(out, n, corner.includedAngleDeg(), kind, cb.radius(), q.callout(), band, source));
+    }
+
+    /** The points in each grade, for the caption. */
+    public int count(Grade g) {
+        int c = 0;
+        for (Point p : points) if (p.grade() == g) c++;
+        return c;
+    }
+
+    /**
+     * What the view must say about drawing these points over {@code spec}, the zone of the feature's
+     * chosen callout judged by {@code chosen}; empty when they agree. The grades are the
+     * inspection's, so a changed callout or nominal makes them stale.
+     */
+    public String mismatch(ZoneSpec spec, org.arcwright.worksheet.RadiusFeature feature) {
+        InspectionCallout chosen;
+        try {
+            chosen = CheckRequests.callout(feature);
+        } catch (org.arcwright.io.InputProblem e) {
+            chosen = null;
+        }
+        return mismatch(spec, chosen);
+    }
+
+    /** As {@link #mismatch(ZoneSpec, org.arcwright.worksheet.RadiusFeature)}, for the callout {@code chosen} (null: none). */
+    public String mismatch(ZoneSpec spec, InspectionCallout chosen) {
+        if (chosen == null || !chosen.equals(callout)) {
+            return "points judged against " + callout.describe() + ", not the chosen callout: check them again";
+        }
+        if (Math.abs(spec.nominal() - nominalRadius) > 1e-9 * Math.max(1, nominalRadius)) {
+            return "points measured about nominal R" + Numbers.trim(nominalRadius) + ", the view's nominal is R"
+                    + Numbers.trim(spec.nominal());
+        }
+        if (spec.kind() != kind) return "points measured on a " + kind.key() + ", the feature is a " + spec.kind().key();
+        return "";
+    }
+
+    /**
+     * The rigid move from the inspection's corner to the view's: the bisector onto 45°, leg A onto
+     * the leg at {@code 45° - θ/2} (a reflection when leg A lies counter-clockwise of leg B).
+     */
+    private static final class Frame {
+        private final Point2 vertex, u, w, bigU, bigW;
+
+        Frame(Corner c) {
+            vertex = c.vertex();
+            u = c.bisector();
+            Point2 a = c.legA();
+            w = a.minus(u.times(a.dot(u))).unit();
+            double half = c.halfAngle();
+            bigU = new Point2(Math.cos(Math.PI / 4), Math.sin(Math.PI / 4));
+            Point2 l1 = new Point2(Math.cos(Math.PI / 4 - half), Math.sin(Math.PI / 4 - half));
+            bigW = l1.minus(bigU.times(l1.dot(bigU))).unit();
+        }
+
+        ZonePicture.Pt toView(double x, double y) {
+            Point2 q = new Point2(x - vertex.x(), y - vertex.y());
+            double a = q.dot(u), b = q.dot(w);
+            return new ZonePicture.Pt(a * bigU.x() + b * bigW.x(), a * bigU.y() + b * bigW.y());
+        }
+    }
+}

@@ -1,0 +1,192 @@
+package org.arcwright.app.model;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.concurrent.atomic.AtomicInteger;
+import org.arcwright.callout.Callout;
+import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.inspect.InspectionRequest;
+import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.Nominal;
+import org.arcwright.inspect.PointSet;
+import org.arcwright.rules.Recommendation;
+import org.arcwright.tolerance.RadiusKind;
+import org.arcwright.tolerance.Units;
+import org.arcwright.worksheet.RadiusFeature;
+import org.arcwright.zone.Corner;
+import org.arcwright.zone.CornerKind;
+import org.arcwright.zone.Point2;
+import org.junit.jupiter.api.Test;
+
+/**
+ * The measured points the Zone view plots. Geometry checked against plane geometry of arcs tangent
+ * to both legs of a corner (centre on the bisector at r/sin(θ/2); for a right angle with legs along
+ * +x and +y, centre (r, r)), not against the code under test.
+ */
+class MeasuredPointsTest {
+    private static Recommendation chosen(Callout c) {
+        return new Recommendation("test", c, "text", 0, List.of(), List.of(), List.of(), java.util.Map.of(), List.of(),
+                List.of(), false);
+    }
+
+    private static RadiusFeature fillet(Callout c) {
+        return new RadiusFeature("F1", Fixtures.fillet(2, null), chosen(c), null);
+    }
+
+    /** A point on the vertex side of the blend of radius rho at a right angle, phi from leg +x's normal. */
+    private static double[] onBlend(double rho, double phiDeg) {
+        double phi = Math.toRadians(phiDeg);
+        return new double[] {rho - rho * Math.cos(phi), rho - rho * Math.sin(phi)};
+    }
+
+    /**
+     * The points of {@code pts} first, then a section of the nominal blend (R2, every 10°) and its legs
+     * so that the inspection core can fit the blend; the test looks only at the first points.
+     */
+    private static MeasuredPoints measured(RadiusFeature f, double[]... pts) {
+        List<double[]> all = new ArrayList<>(List.of(pts));
+        for (int phi = 5; phi < 90; phi += 10) all.add(onBlend(2.0, phi));
+        all.add(new double[] {2.5, 0});
+        all.add(new double[] {0, 2.5});
+        var r = new Inspector().inspect(CheckRequests.forFeature(f, PointSet.of(all.toArray(new double[0][]))));
+        return MeasuredPoints.of(r, "test.csv").orElseThrow();
+    }
+
+    @Test
+    void gradesRunFromWithinThroughNearALimitToFarOutside() {
+        assertThat(MeasuredPoints.grade(-0.2, 0.4)).isEqualTo(MeasuredPoints.Grade.WITHIN);
+        assertThat(MeasuredPoints.grade(-0.03, 0.4)).isEqualTo(MeasuredPoints.Grade.NEAR_LIMIT);
+        assertThat(MeasuredPoints.grade(0.05, 0.4)).isEqualTo(MeasuredPoints.Grade.OUTSIDE);
+        assertThat(MeasuredPoints.grade(0.3, 0.4)).isEqualTo(MeasuredPoints.Grade.FAR_OUTSIDE);
+        assertThat(MeasuredPoints.grade(Double.NaN, 0.4)).isEqualTo(MeasuredPoints.Grade.NOT_JUDGED);
+    }
+
+    @Test
+    void pointsOnKnownBlendsGetTheirRadiusExcessAndGrade() {
+        RadiusFeature f = fillet(new Callout.Radius(1.8, 2.2, 2.0));
+        MeasuredPoints m = measured(f, onBlend(2.0, 45), onBlend(2.17, 30), onBlend(1.75, 60), onBlend(1.5, 45),
+                new double[] {3.5, 0});
+        assertThat(m.total()).isEqualTo(5 + 11);
+        assertThat(m.angleDeg()).isEqualTo(90, within(1e-9));
+        assertThat(m.band()).isEqualTo(0.4, within(1e-12));
+        // excess of a point on the blend of radius rho: min - rho below the band, rho - max above it
+        assertThat(m.points().subList(0, 5)).extracting(MeasuredPoints.Point::grade).containsExactly(MeasuredPoints.Grade.WITHIN,
+                MeasuredPoints.Grade.NEAR_LIMIT, MeasuredPoints.Grade.OUTSIDE, MeasuredPoints.Grade.FAR_OUTSIDE,
+                MeasuredPoints.Grade.NOT_JUDGED);
+        assertThat(m.points().get(2).excess()).isEqualTo(0.05, within(1e-6));
+        assertThat(m.points().get(3).excess()).isEqualTo(0.3, within(1e-6));
+        // the CSV frame (vertex at the origin, legs along +x and +y) is the view's frame
+        assertThat(m.points().get(0).x()).isEqualTo(onBlend(2.0, 45)[0], within(1e-12));
+        assertThat(m.points().get(0).y()).isEqualTo(onBlend(2.0, 45)[1], within(1e-12));
+        assertThat(m.mismatch(ZoneSpec.of(f.designCase(), f.chosen().callout(), 90), f)).isEmpty();
+    }
+
+    @Test
+    void aPointOnALimitArcIsDrawnOnThatLimitArcAtAnyMagnification() {
+        RadiusFeature f = fillet(new Callout.Radius(1.8, 2.2, 2.0));
+        ZoneSpec spec = ZoneSpec.of(f.designCase(), f.chosen().callout(), 90);
+        for (double mag : new double[] {1, 2, 4}) {
+            ZonePicture pic = ZonePicture.of(spec, mag);
+            double lo = 2 + mag * (1.8 - 2);
+            double hi = 2 + mag * (2.2 - 2);
+            for (double phi : new double[] {10, 45, 80}) {
+                double[] a = onBlend(1.8, phi);
+                ZonePicture.Pt p = pic.place(new ZonePicture.Pt(a[0], a[1]));
+                assertThat(Math.hypot(p.x() - lo, p.y() - lo)).as("on the lower arc at ×%s", mag).isEqualTo(lo, within(1e-9));
+                assertThat(distance(p, pic.lower())).isLessThan(1e-3);
+                double[] b = onBlend(2.2, phi);
+                ZonePicture.Pt q = pic.place(new ZonePicture.Pt(b[0], b[1]));
+                assertThat(Math.hypot(q.x() - hi, q.y() - hi)).isEqualTo(hi, within(1e-9));
+            }
+        }
+    }
+
+    @Test
+    void aPointOnAProfileBoundaryIsDrawnOnTheMagnifiedBoundary() {
+        // a fillet's air is away from the vertex: 0.15 toward air is inside the circle, at r - 0.15
+        RadiusFeature f = fillet(new Callout.Profile(0.2, 0.15, List.of(), false, null));
+        ZoneSpec spec = ZoneSpec.of(f.designCase(), f.chosen().callout(), 90);
+        ZonePicture pic = ZonePicture.of(spec, 5);
+        double phi = Math.toRadians(30);
+        ZonePicture.Pt onBoundary = new ZonePicture.Pt(2 - 1.85 * Math.cos(phi), 2 - 1.85 * Math.sin(phi));
+        assertThat(pic.deviationTowardAir(onBoundary)).isEqualTo(0.15, within(1e-12));
+        ZonePicture.Pt drawn = pic.place(onBoundary);
+        assertThat(Math.hypot(drawn.x() - 2, drawn.y() - 2)).isEqualTo(2 - 5 * 0.15, within(1e-12));
+        assertThat(distance(drawn, pic.upper())).isLessThan(1e-3);
+        // beside a leg the distance from it is magnified alike
+        ZonePicture.Pt leg = pic.place(new ZonePicture.Pt(3, -0.01));
+        assertThat(leg.x()).isEqualTo(3, within(1e-12));
+        assertThat(leg.y()).isEqualTo(-0.05, within(1e-12));
+    }
+
+    @Test
+    void anInspectionCornerInAnyPlaceIsMovedRigidlyIntoTheView() {
+        Corner corner = new Corner(new Point2(5, 3), new Point2(0, 1), new Point2(-1, 0), CornerKind.ROUND);
+        InspectionRequest q = new InspectionRequest(Units.MM, new Nominal.CornerBlend(corner, 2),
+                new InspectionCallout.RadiusLimits(RadiusKind.R, 1.8, 2.2),
+                PointSet.of(new double[][] {{5, 5}, {4, 3}, {5 - 0.5, 3 + 0.5}}), 0.001, Double.NaN, false);
+        // only the request matters to the frame: a bare result stands in for the inspection
+        var result = new org.arcwright.inspect.InspectionResult(q, true, null, null, null, null, null, null, List.of(), List.of());
+        MeasuredPoints m = MeasuredPoints.of(result, "rotated.json").orElseThrow();
+        assertThat(m.kind()).isEqualTo(org.arcwright.rules.BlendKind.ROUND);
+        // leg A onto +x, leg B onto +y, the bisector onto 45°; distances from the vertex kept
+        assertThat(m.points().get(0).x()).isEqualTo(2, within(1e-12));
+        assertThat(m.points().get(0).y()).isEqualTo(0, within(1e-12));
+        assertThat(m.points().get(1).x()).isEqualTo(0, within(1e-12));
+        assertThat(m.points().get(1).y()).isEqualTo(1, within(1e-12));
+        assertThat(m.points().get(2).x()).isEqualTo(0.5, within(1e-12));
+        assertThat(m.points().get(2).y()).isEqualTo(0.5, within(1e-12));
+    }
+
+    @Test
+    void pointsJudgedAgainstAnotherCalloutAreMarkedStale() {
+        RadiusFeature f = fillet(new Callout.Radius(1.8, 2.2, 2.0));
+        MeasuredPoints m = measured(f, onBlend(2.0, 45));
+        RadiusFeature changed = fillet(new Callout.ControlledRadius(1.9, 2.1, 2.0));
+        String says = m.mismatch(ZoneSpec.of(changed.designCase(), changed.chosen().callout(), 90), changed);
+        assertThat(says).contains("R 1.8-2.2").contains("not the chosen callout");
+    }
+
+    @Test
+    void theSceneDescribesAPointByItsDeviationAndExcess() {
+        RadiusFeature f = fillet(new Callout.Radius(1.8, 2.2, 2.0));
+        MeasuredPoints m = measured(f, onBlend(1.75, 45));
+        ZoneScene scene = ZoneScene.of(f, java.util.Optional.of(m), 10);
+        assertThat(scene.placed()).hasSize(12);
+        assertThat(scene.pointsCaption()).startsWith("12 measured points").contains("1 outside");
+        // a fillet's blend of 1.75 lies on the material side of the nominal 2, by (2 - 1.75)(√2 - 1) on the bisector
+        String says = scene.describe(0, "mm");
+        assertThat(says).contains("deviation -" + Numbers.fixed(0.25 * (Math.sqrt(2) - 1), 4)).contains("material side")
+                .contains("outside by 0.0500");
+    }
+
+    @Test
+    void theSessionKeepsPointsPerFeatureUntilAnotherWorksheetIsShown() {
+        WorksheetSession s = new WorksheetSession(Fixtures.files(), Fixtures.twoFeatures(), null);
+        AtomicInteger fired = new AtomicInteger();
+        s.listeners().add(fired::incrementAndGet);
+        MeasuredPoints m = measured(fillet(new Callout.Radius(1.8, 2.2, 2.0)), onBlend(2.0, 45));
+        s.keepMeasured("F1", m);
+        assertThat(fired.get()).isEqualTo(1);
+        assertThat(s.measured("F1")).contains(m);
+        assertThat(s.measured("F2")).isEmpty();
+        assertThat(s.isDirty()).isFalse();
+        s.showFresh(Fixtures.twoFeatures());
+        assertThat(s.measured("F1")).isEmpty();
+    }
+
+    private static double distance(ZonePicture.Pt p, List<ZonePicture.Pt> line) {
+        double best = Double.POSITIVE_INFINITY;
+        List<ZonePicture.Pt> pts = new ArrayList<>(line);
+        for (int i = 1; i < pts.size(); i++) {
+            ZonePicture.Pt a = pts.get(i - 1), b = pts.get(i);
+            double dx = b.x() - a.x(), dy = b.y() - a.y();
+            double t = Math.max(0, Math.min(1, ((p.x() - a.x()) * dx + (p.y() - a.y()) * dy) / (dx * dx + dy * dy)));
+            best = Math.min(best, Math.hypot(p.x() - a.x() - t * dx, p.y() - a.y() - t * dy));
+        }
+        return best;
+    }
+}
