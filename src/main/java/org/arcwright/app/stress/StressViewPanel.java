@@ -79,16 +79,17 @@ public final class StressViewPanel extends JPanel {
             return;
         }
         FilletMechanics m = mechanics;
-        CompletableFuture.supplyAsync(() -> compute(m, a), background)
+        StressPlot.Inks ink = inks();
+        CompletableFuture.supplyAsync(() -> compute(m, a, ink), background)
                 .whenComplete((r, e) -> SwingUtilities.invokeLater(() -> computed(g, f.id(), r, e)));
     }
 
     private record Computed(FilletStressReport report, MinimumRadius minimum, JFreeChart chart) {}
 
-    private static Computed compute(FilletMechanics m, StressCases.Assessment a) {
+    private static Computed compute(FilletMechanics m, StressCases.Assessment a, StressPlot.Inks ink) {
         FilletStressReport report = m.stressAnalysis().report(a.stressCase());
         MinimumRadius minimum = a.target() == null ? null : m.stressAnalysis().minimumRadius(a.stressCase(), a.target());
-        JFreeChart chart = new StressPlot(m.stressAnalysis()).chart(a.stressCase(), a.target(), minimum);
+        JFreeChart chart = new StressPlot(m.stressAnalysis()).chart(a.stressCase(), a.target(), minimum, ink);
         return new Computed(report, minimum, chart);
     }
 
@@ -118,41 +119,23 @@ public final class StressViewPanel extends JPanel {
     @Override
     public void updateUI() {
         super.updateUI();
-        // the chart is not a Swing component: give it the new look's colours when the look changes
-        if (chart != null) restyle(chart.getChart());
+        // the chart is drawn by the render core in the look's inks: draw it again when the look changes
+        if (session != null) refresh();
     }
 
-    /** Gives the chart the look's background, grid and text colours (it is drawn light by the render core). */
-    private static void restyle(JFreeChart c) {
-        if (c == null) return;
-        java.awt.Color fg = Themes.color("Label.foreground");
-        c.setBackgroundPaint(Themes.color("Panel.background"));
-        if (c.getTitle() != null) c.getTitle().setPaint(fg);
-        for (int i = 0; i < c.getSubtitleCount(); i++) {
-            if (c.getSubtitle(i) instanceof org.jfree.chart.title.TextTitle) {
-                ((org.jfree.chart.title.TextTitle) c.getSubtitle(i)).setPaint(fg);
-            }
-        }
-        if (c.getLegend() != null) {
-            c.getLegend().setBackgroundPaint(Themes.color("Panel.background"));
-            c.getLegend().setItemPaint(fg);
-        }
-        if (c.getPlot() instanceof org.jfree.chart.plot.XYPlot) {
-            org.jfree.chart.plot.XYPlot plot = (org.jfree.chart.plot.XYPlot) c.getPlot();
-            plot.setBackgroundPaint(Themes.color("Arcwright.zone.background"));
-            plot.setDomainGridlinePaint(Themes.color("Arcwright.zone.grid"));
-            plot.setRangeGridlinePaint(Themes.color("Arcwright.zone.grid"));
-            for (int i = 0; i < plot.getDomainAxisCount(); i++) axis(plot.getDomainAxis(i), fg);
-            for (int i = 0; i < plot.getRangeAxisCount(); i++) axis(plot.getRangeAxis(i), fg);
-        }
-    }
-
-    private static void axis(org.jfree.chart.axis.Axis a, java.awt.Color fg) {
-        if (a == null) return;
-        a.setLabelPaint(fg);
-        a.setTickLabelPaint(fg);
-        a.setAxisLinePaint(fg);
-        a.setTickMarkPaint(fg);
+    /**
+     * The look's colours and label fonts for the chart, from the theme properties; read on the event
+     * thread, before the chart is made in the background.
+     */
+    private static StressPlot.Inks inks() {
+        java.awt.Font label = Themes.font("Arcwright.stress.label.font");
+        return new StressPlot.Inks(Themes.color("Panel.background"), Themes.color("Arcwright.zone.background"),
+                Themes.color("Label.foreground"), Themes.color("Arcwright.help.foreground"),
+                Themes.color("Arcwright.stress.axis"), Themes.color("Arcwright.zone.grid"), Themes.color("Arcwright.stress.outline"),
+                Themes.color("Arcwright.stress.kt"), Themes.color("Arcwright.stress.kf"), Themes.color("Arcwright.stress.band"),
+                Themes.color("Arcwright.stress.bandText"), Themes.color("Arcwright.stress.target"),
+                Themes.color("Arcwright.stress.marks"), Themes.color("Arcwright.stress.labelBackground"), label,
+                Themes.font("Arcwright.stress.marker.font"));
     }
 
     private static void line(StringBuilder sb, String where, StressPoint p) {
@@ -168,7 +151,6 @@ public final class StressViewPanel extends JPanel {
         summary.setText(text);
         notes.setText(remarks);
         notes.setVisible(!remarks.isEmpty());
-        restyle(c);
         chart.setChart(c);
         chart.setVisible(c != null);
         revalidate();

@@ -51,11 +51,45 @@ public final class StressPlot {
     public static final int WIDTH = 900;
     public static final int HEIGHT = 560;
     private static final int SAMPLES = 160;
-    private static final Color KT = new Color(0x1f4e9a);
-    private static final Color KF = new Color(0xc0571b);
-    private static final Color BAND = new Color(0x3c9d5d);
-    private static final Color TARGET = new Color(0xb0182b);
     private static final String FONT = "SansSerif";
+
+    /**
+     * The colours and label fonts a chart is drawn in, so that a window in a dark look can draw it
+     * dark and legible. Files (CLI output, golden files) always use {@link #PRINTED}.
+     *
+     * @param background around the plot
+     * @param plotBackground inside the axes
+     * @param text titles, axis labels, tick labels and the legend
+     * @param note the caution under the chart
+     * @param axisLine axis lines and tick marks
+     * @param grid grid lines
+     * @param outline the plot's outline
+     * @param kt the K<sub>t</sub> curve
+     * @param kf the K<sub>f</sub> curve
+     * @param band the tolerance band (shaded translucent)
+     * @param bandText the band's label
+     * @param target the target line, the smallest-radius line and their labels
+     * @param marks the dots at the smallest, nominal and largest radius
+     * @param labelBackground behind the labels that sit over curves and grid (translucent)
+     * @param labelFont the factor label at the smallest radius; the band label is its bold
+     * @param markerFont the labels of the target and smallest-radius lines
+     */
+    public record Inks(Color background, Color plotBackground, Color text, Color note, Color axisLine, Color grid,
+                       Color outline, Color kt, Color kf, Color band, Color bandText, Color target, Color marks,
+                       Color labelBackground, Font labelFont, Font markerFont) {
+        /** The printed look: dark ink on white. */
+        public static final Inks PRINTED = new Inks(Color.WHITE, Color.WHITE, Color.BLACK, new Color(0x555555), Color.GRAY,
+                new Color(0xdddddd), new Color(0x999999), new Color(0x1f4e9a), new Color(0xc0571b), new Color(0x3c9d5d),
+                new Color(0x3c9d5d).darker(), new Color(0xb0182b), Color.BLACK, new Color(255, 255, 255, 210),
+                new Font(FONT, Font.PLAIN, 13), new Font(FONT, Font.PLAIN, 12));
+
+        public Inks {
+            for (Object o : new Object[] {background, plotBackground, text, note, axisLine, grid, outline, kt, kf, band,
+                bandText, target, marks, labelBackground, labelFont, markerFont}) {
+                Objects.requireNonNull(o, "ink");
+            }
+        }
+    }
 
     private final FilletStressAnalysis analysis;
 
@@ -93,6 +127,11 @@ public final class StressPlot {
      * @param minimum the smallest radius for the target, or null
      */
     public JFreeChart chart(FilletStressCase c, StressTarget target, MinimumRadius minimum) {
+        return chart(c, target, minimum, Inks.PRINTED);
+    }
+
+    /** As {@link #chart(FilletStressCase, StressTarget, MinimumRadius)}, drawn in {@code ink}. */
+    public JFreeChart chart(FilletStressCase c, StressTarget target, MinimumRadius minimum, Inks ink) {
         Curves curves = curves(c, minimum != null && minimum.found() ? minimum.radius() : Double.NaN);
         boolean withKf = c.strength() != null;
         XYSeriesCollection data = new XYSeriesCollection();
@@ -131,50 +170,57 @@ public final class StressPlot {
         y.setLabelFont(axisFont);
         x.setTickLabelFont(new Font(FONT, Font.PLAIN, 12));
         y.setTickLabelFont(new Font(FONT, Font.PLAIN, 12));
+        for (NumberAxis a : new NumberAxis[] {x, y}) {
+            a.setLabelPaint(ink.text());
+            a.setTickLabelPaint(ink.text());
+            a.setAxisLinePaint(ink.axisLine());
+            a.setTickMarkPaint(ink.axisLine());
+        }
 
         XYLineAndShapeRenderer r = new XYLineAndShapeRenderer(true, false);
         r.setDrawSeriesLineAsPath(true);
         BasicStroke solid = new BasicStroke(2.4f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND);
         BasicStroke dashed = new BasicStroke(2.0f, BasicStroke.CAP_BUTT, BasicStroke.JOIN_ROUND, 10f, new float[] {7f, 5f}, 0f);
         int s = 0;
-        r.setSeriesPaint(s, KT);
+        r.setSeriesPaint(s, ink.kt());
         r.setSeriesStroke(s++, solid);
-        r.setSeriesPaint(s, KT);
+        r.setSeriesPaint(s, ink.kt());
         r.setSeriesStroke(s++, dashed);
         if (withKf) {
-            r.setSeriesPaint(s, KF);
+            r.setSeriesPaint(s, ink.kf());
             r.setSeriesStroke(s++, solid);
-            r.setSeriesPaint(s, KF);
+            r.setSeriesPaint(s, ink.kf());
             r.setSeriesStroke(s++, dashed);
         }
         r.setSeriesLinesVisible(s, false);
         r.setSeriesShapesVisible(s, true);
-        r.setSeriesPaint(s, Color.BLACK);
+        r.setSeriesPaint(s, ink.marks());
         r.setSeriesShape(s, new java.awt.geom.Ellipse2D.Double(-4.5, -4.5, 9, 9));
         for (int i = 0; i < data.getSeriesCount(); i++) {
             if (data.getSeries(i).getItemCount() == 0) r.setSeriesVisibleInLegend(i, false);
         }
 
         XYPlot plot = new XYPlot(data, x, y, r);
-        plot.setBackgroundPaint(Color.WHITE);
-        plot.setDomainGridlinePaint(new Color(0xdddddd));
-        plot.setRangeGridlinePaint(new Color(0xdddddd));
-        plot.setOutlinePaint(new Color(0x999999));
+        plot.setBackgroundPaint(ink.plotBackground());
+        plot.setDomainGridlinePaint(ink.grid());
+        plot.setRangeGridlinePaint(ink.grid());
+        plot.setOutlinePaint(ink.outline());
         plot.setAxisOffset(RectangleInsets.ZERO_INSETS);
 
-        IntervalMarker band = new IntervalMarker(c.rMin(), c.rMax(), new Color(BAND.getRed(), BAND.getGreen(), BAND.getBlue(), 60),
+        Color bandInk = ink.band();
+        IntervalMarker band = new IntervalMarker(c.rMin(), c.rMax(), alpha(bandInk, 60),
                 new BasicStroke(1f), null, null, 1f);
         if (c.rMax() - c.rMin() < (curves.rTo() - curves.rFrom()) / 300) {
             band = new IntervalMarker(c.rMin() - (curves.rTo() - curves.rFrom()) / 600,
-                    c.rMax() + (curves.rTo() - curves.rFrom()) / 600, new Color(BAND.getRed(), BAND.getGreen(), BAND.getBlue(), 90));
+                    c.rMax() + (curves.rTo() - curves.rFrom()) / 600, alpha(bandInk, 90));
         }
         band.setLabel(c.hasTolerance() ? "tolerance  R " + num(c.rMin()) + " – " + num(c.rMax()) : "R " + num(c.rNominal()));
-        band.setLabelFont(new Font(FONT, Font.BOLD, 13));
-        band.setLabelPaint(BAND.darker());
+        band.setLabelFont(ink.labelFont().deriveFont(Font.BOLD));
+        band.setLabelPaint(ink.bandText());
         band.setLabelAnchor(RectangleAnchor.TOP);
         band.setLabelTextAnchor(TextAnchor.TOP_CENTER);
         band.setLabelOffset(new RectangleInsets(6, 0, 0, 0));
-        band.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+        band.setLabelBackgroundColor(alpha(ink.labelBackground(), 0));
         plot.addDomainMarker(band, Layer.BACKGROUND);
 
         StressPoint atMin = three[0];
@@ -184,51 +230,60 @@ public final class StressPlot {
         double dx = (curves.rTo() - curves.rFrom()) / 120;
         boolean rightHalf = c.rMin() > (curves.rFrom() + curves.rTo()) / 2;
         XYTextAnnotation label = new XYTextAnnotation(minText, c.rMin() + (rightHalf ? -dx : dx), atMin.kt().kt());
-        label.setFont(new Font(FONT, Font.PLAIN, 13));
+        label.setFont(ink.labelFont());
+        label.setPaint(ink.text());
         label.setTextAnchor(rightHalf ? TextAnchor.BOTTOM_RIGHT : TextAnchor.BOTTOM_LEFT);
-        label.setBackgroundPaint(new Color(255, 255, 255, 210));
+        label.setBackgroundPaint(ink.labelBackground());
         label.setOutlineVisible(false);
         plot.addAnnotation(label);
 
         if (target != null) {
-            ValueMarker tm = new ValueMarker(target.value(), TARGET, dashed);
+            ValueMarker tm = new ValueMarker(target.value(), ink.target(), dashed);
             tm.setLabel("target " + target.factor().symbol() + " ≤ " + num(target.value()));
-            tm.setLabelFont(new Font(FONT, Font.PLAIN, 12));
-            tm.setLabelPaint(TARGET);
+            tm.setLabelFont(ink.markerFont());
+            tm.setLabelPaint(ink.target());
+            // above its line, on a background, so the dashes never run through the words
             tm.setLabelAnchor(RectangleAnchor.LEFT);
-            tm.setLabelTextAnchor(TextAnchor.TOP_LEFT);
-            tm.setLabelOffset(new RectangleInsets(4, 6, 0, 0));
-            tm.setLabelBackgroundColor(new Color(255, 255, 255, 0));
+            tm.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
+            tm.setLabelOffset(new RectangleInsets(0, 6, 3, 0));
+            tm.setLabelOffsetType(org.jfree.chart.ui.LengthAdjustmentType.EXPAND);
+            tm.setLabelBackgroundColor(ink.labelBackground());
             plot.addRangeMarker(tm);
         }
         if (minimum != null && minimum.found() && minimum.radius() >= curves.rFrom() && minimum.radius() <= curves.rTo()) {
-            ValueMarker mm = new ValueMarker(minimum.radius(), TARGET, new BasicStroke(1.2f));
+            ValueMarker mm = new ValueMarker(minimum.radius(), ink.target(), new BasicStroke(1.2f));
             mm.setLabel((minimum.limitedByFit() ? "sharpest r the fit covers: " : "smallest r for target: ")
                     + num(minimum.radius()));
-            mm.setLabelFont(new Font(FONT, Font.PLAIN, 12));
-            mm.setLabelPaint(TARGET);
+            mm.setLabelFont(ink.markerFont());
+            mm.setLabelPaint(ink.target());
             boolean right = minimum.radius() > (curves.rFrom() + curves.rTo()) / 2;
-            mm.setLabelAnchor(right ? RectangleAnchor.BOTTOM_LEFT : RectangleAnchor.BOTTOM_RIGHT);
-            mm.setLabelTextAnchor(right ? TextAnchor.BOTTOM_RIGHT : TextAnchor.BOTTOM_LEFT);
-            mm.setLabelBackgroundColor(new Color(255, 255, 255, 200));
+            // at the top, below the band's label, clear of the target line and its label near the foot
+            mm.setLabelAnchor(right ? RectangleAnchor.TOP_LEFT : RectangleAnchor.TOP_RIGHT);
+            mm.setLabelTextAnchor(right ? TextAnchor.TOP_RIGHT : TextAnchor.TOP_LEFT);
+            mm.setLabelOffset(new RectangleInsets(28, 4, 0, 4));
+            mm.setLabelBackgroundColor(alpha(ink.labelBackground(), 200));
             plot.addDomainMarker(mm);
         }
 
         JFreeChart chart = new JFreeChart(null, new Font(FONT, Font.BOLD, 17), plot, false);
-        chart.setBackgroundPaint(Color.WHITE);
+        chart.setBackgroundPaint(ink.background());
         chart.setPadding(new RectangleInsets(6, 8, 4, 22));
-        chart.setTitle(new TextTitle((withKf ? "Kt and Kf" : "Kt") + " across the fillet tolerance", new Font(FONT, Font.BOLD, 17)));
+        TextTitle title = new TextTitle((withKf ? "Kt and Kf" : "Kt") + " across the fillet tolerance", new Font(FONT, Font.BOLD, 17));
+        title.setPaint(ink.text());
+        chart.setTitle(title);
         TextTitle sub = new TextTitle(String.format(Locale.ROOT, "%s in %s,  D %s / d %s %s,  h = %s %s   (%s)",
                 c.shape().description(), c.load().key(), num(c.bigD()), num(c.smallD()), u, num(c.stepHeight()), u,
                 atMin.kt().fitName()), new Font(FONT, Font.PLAIN, 13));
+        sub.setPaint(ink.text());
         chart.addSubtitle(sub);
         LegendTitle legend = new LegendTitle(plot);
         legend.setItemFont(new Font(FONT, Font.PLAIN, 12));
         legend.setPosition(RectangleEdge.BOTTOM);
         legend.setFrame(org.jfree.chart.block.BlockBorder.NONE);
+        legend.setItemPaint(ink.text());
         TextTitle caution = new TextTitle(Cautions.STRESS.get(0) + " " + Cautions.STRESS.get(1), new Font(FONT, Font.ITALIC, 11));
         caution.setPosition(RectangleEdge.BOTTOM);
-        caution.setPaint(new Color(0x555555));
+        caution.setPaint(ink.note());
         caution.setMaximumLinesToDisplay(3);
         caution.setPadding(new RectangleInsets(6, 12, 4, 12));
         chart.addSubtitle(caution);
@@ -293,6 +348,11 @@ public final class StressPlot {
                 series.add(pts.get(i).r(), null);
             }
         }
+    }
+
+    /** {@code c} with alpha {@code a} (0-255). */
+    private static Color alpha(Color c, int a) {
+        return new Color(c.getRed(), c.getGreen(), c.getBlue(), a);
     }
 
     private static String strengthText(FilletStressCase c) {

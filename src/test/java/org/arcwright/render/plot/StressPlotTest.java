@@ -47,7 +47,11 @@ class StressPlotTest {
     @Test
     void pngShowsTheShadedToleranceBand() throws Exception {
         JFreeChart chart = plot.chart(shaft, StressTarget.kf(2.0), analysis.minimumRadius(shaft, StressTarget.kf(2.0)));
-        BufferedImage img = ImageIO.read(new ByteArrayInputStream(plot.png(chart)));
+        byte[] png = plot.png(chart);
+        // for a look by eye after a change (as FramePngTest does for frames)
+        Files.createDirectories(Path.of("target/rendered"));
+        Files.write(Path.of("target/rendered/stress-plot.png"), png);
+        BufferedImage img = ImageIO.read(new ByteArrayInputStream(png));
         assertThat(img.getWidth()).isEqualTo(StressPlot.WIDTH);
         assertThat(img.getHeight()).isEqualTo(StressPlot.HEIGHT);
         int greenish = 0;
