@@ -211,6 +211,12 @@ final class ZoneCanvas extends JComponent {
             x += w + 18;
         }
         int bottom = getHeight() - 10 - row * fm.getHeight();
+        // on the view's own background, so the shading under it never muddles the words
+        int right = 0;
+        for (int i = 0; i < shown.size(); i++) right = Math.max(right, at.get(i)[0] + d + 5 + fm.stringWidth(shown.get(i).words()));
+        java.awt.Color bg = Themes.color("Arcwright.zone.background");
+        g2.setColor(new java.awt.Color(bg.getRed(), bg.getGreen(), bg.getBlue(), 225));
+        g2.fillRoundRect(4, bottom - fm.getAscent() - 4, right + 2, (row + 1) * fm.getHeight() + 6, 8, 8);
         for (int i = 0; i < shown.size(); i++) {
             int y = bottom + at.get(i)[1] * fm.getHeight();
             g2.setColor(gradeColour(shown.get(i)));
