@@ -119,8 +119,9 @@ public final class StressViewPanel extends JPanel {
     @Override
     public void updateUI() {
         super.updateUI();
-        // the chart is drawn by the render core in the look's inks: draw it again when the look changes
-        if (session != null) refresh();
+        // the chart is drawn by the render core in the look's inks: draw it again when the look changes,
+        // but not for a disposed window (the look reaches every window; its executor may be shut down)
+        if (session != null && isDisplayable()) refresh();
     }
 
     /**
