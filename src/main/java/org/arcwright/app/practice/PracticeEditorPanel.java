@@ -173,7 +173,8 @@ public final class PracticeEditorPanel extends JPanel {
         right.add(new JScrollPane(templatePreview), "wmin 10, hmin 10");
         right.add(templateSave, "left, growx 0, wmin 10");
         JScrollPane listScroll = new JScrollPane(templateList);
-        listScroll.setPreferredSize(new java.awt.Dimension(160, 10));
+        // wide enough for a template name and the pack it comes from
+        listScroll.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(250), 10));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, listScroll, right);
         split.setResizeWeight(0.25);
         split.setBorder(null);

@@ -64,6 +64,13 @@ final class ZoneCanvas extends JComponent {
 
     int plottedPoints() { return scene == null ? 0 : scene.placed().size(); }
 
+    /** What hovering over plotted point {@code i} shows, through the same path as the mouse (tests). */
+    String tooltipOfPoint(int i) {
+        Point2D s = transform().transform(new Point2D.Double(scene.placed().get(i).x(), scene.placed().get(i).y()), null);
+        return getToolTipText(new MouseEvent(this, MouseEvent.MOUSE_MOVED, 0, 0, (int) Math.round(s.getX()),
+                (int) Math.round(s.getY()), 0, false));
+    }
+
     void fit() {
         zoom = 1;
         panX = 0;

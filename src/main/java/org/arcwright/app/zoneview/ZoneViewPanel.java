@@ -84,4 +84,7 @@ public final class ZoneViewPanel extends JPanel {
 
     /** How many measured points the view plots for the selected feature (tests). */
     public int plottedPoints() { return canvas.plottedPoints(); }
+
+    /** What hovering over plotted point {@code i} shows (tests). */
+    public String pointTooltip(int i) { return canvas.tooltipOfPoint(i); }
 }

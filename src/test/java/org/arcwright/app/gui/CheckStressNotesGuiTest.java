@@ -104,6 +104,14 @@ class CheckStressNotesGuiTest {
         // ×5: the dip shows inside the drawing (at ×10 this band's lower limit arc shrinks to the sharp corner)
         fixture.slider("magnification").slideTo(35);
         GuiSupport.settle(200);
+        // hovering a point gives its deviation and its excess; the dip's points are outside
+        java.util.List<String> tips = GuiSupport.onEdt(() -> {
+            java.util.List<String> t = new java.util.ArrayList<>();
+            for (int i = 0; i < zone.plottedPoints(); i++) t.add(zone.pointTooltip(i));
+            return t;
+        });
+        assertThat(tips).allSatisfy(t -> assertThat(t).startsWith("point #").contains("deviation"));
+        assertThat(tips).anySatisfy(t -> assertThat(t).contains("outside by"));
         GuiSupport.screenshot(window.frame(), "zone-points-light");
         GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.DARK));
         GuiSupport.settle(300);
@@ -217,6 +225,10 @@ class CheckStressNotesGuiTest {
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templateSaveLabel()).equals("Save"), 20);
         assertThat(GuiSupport.onEdt(() -> window.practicePanel().templateEditor().getText())).contains("NOTE {{feature.id}}");
         GuiSupport.screenshot(window.frame(), "templates-saved-light");
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.DARK));
+        GuiSupport.settle(300);
+        GuiSupport.screenshot(window.frame(), "templates-saved-dark");
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
     }
 
     @Test
