@@ -8,9 +8,11 @@ import org.arcwright.io.InputProblem;
  * <ul>
  *   <li>{@link #taubin}: algebraic fit of G. Taubin (IEEE PAMI 13, 1991), computed by Newton's
  *       method on its characteristic polynomial as in N. Chernov, <i>Circular and Linear Regression</i>
- *       (CRC, 2010), §5; one pass over centred moments. Nearly unbiased on short arcs, unlike Kåsa's.</li>
+ *       (CRC, 2010), §5; one pass of moments about a point of the set, turned into centred moments
+ *       algebraically. Nearly unbiased on short arcs, unlike Kåsa's.</li>
  *   <li>{@link #leastSquares}: the geometric fit, minimising {@code Σ(|pᵢ - c| - r)²} by
- *       Levenberg-Marquardt from the Taubin start (W. Gander, G. H. Golub, R. Strebel, BIT 34, 1994).</li>
+ *       Levenberg-Marquardt from the Taubin start (W. Gander, G. H. Golub, R. Strebel, BIT 34, 1994),
+ *       one pass over the points per step; usually two steps after the start.</li>
  *   <li>{@link #minimumZone}: the minimum-zone circle, by successive linear programmes: linearise the
  *       distances about the current centre, solve {@code min (R - r)} subject to
  *       {@code r <= dᵢ - uᵢ·δ <= R} with an active set ({@link ActiveSetLp}), move, repeat. The
@@ -160,19 +162,22 @@ public final class CircleFits {
         return new Circle(xc + mx, yc + my, Math.sqrt(xc * xc + yc * yc + mz));
     }
 
-    /** Points per block of a least-squares pass: the block's unit vectors and residuals stay in L1 cache. */
-    private static final int BLOCK = 256;
-
     /**
      * The geometric least-squares circle (see the class comment).
      *
-     * <p>Passes: one over the points for Taubin's start, then one per Levenberg-Marquardt step,
-     * each in blocks of {@link #BLOCK} points: an element-wise loop (square root, division) that
-     * the JIT compiles to SIMD instructions, then the sums of {@code JᵀJ}, {@code Jᵀe} and the cost.
-     * Stopping rule: stop when a step is below 1e-15 of the scale ({@code |r|} plus the centre's
-     * distance from the middle point of the set), or take the step without a trial pass when
-     * Gauss-Newton's observed linear rate (this step / the last one, below 0.1) times the step is
-     * below 1e-11 of the scale, a hundredth of the 1e-9 agreement issue 3 asks for.
+     * <p>Passes: one over the points for Taubin's start, then one per Levenberg-Marquardt step. Each
+     * step's pass is two loops: an element-wise loop writing the unit vector from the centre and the
+     * residual of every point into three scratch arrays (allocated once per fit), which HotSpot's C2
+     * compiles to SIMD square roots and divisions, then a loop summing {@code JᵀJ}, {@code Jᵀe} and
+     * the cost with fused multiply-adds in two interleaved chains (sums stop a loop from being
+     * vectorised, so they are kept out of the first loop).
+     *
+     * <p>Stopping rule: stop when a step is below 1e-15 of the scale ({@code |r|} plus the centre's
+     * distance from the middle point of the set), i.e. at rounding. Gauss-Newton converges linearly
+     * at about rate = this step / the last one; when that rate is below 0.1 and rate × step (what
+     * remains after this step) is below 1e-11 of the scale, a hundredth of the 1e-9 agreement with
+     * the reference solver that issue 3 asks for, the step is taken without a trial pass and the cost
+     * comes from the linear model (exact to second order in the step).
      */
     public static LeastSquaresCircle leastSquares(double[] xs, double[] ys, int n) {
         if (n < 3) throw InputProblem.ofField("points", "a circle needs at least 3 points, got " + n);
@@ -184,7 +189,7 @@ public final class CircleFits {
         // work about a point of the set: xᵢ - x0 is exact for nearby points, however far the origin
         double x0 = xs[n / 2], y0 = ys[n / 2];
         double a = start.cx() - x0, b = start.cy() - y0, r = start.r();
-                double[] ne = new double[9], trial = new double[9], d = new double[3];
+        double[] ne = new double[9], trial = new double[9], d = new double[3];
         double[] ux = new double[n], uy = new double[n], res = new double[n];
         double cost = normal(xs, ys, n, x0, y0, a, b, r, ne, ux, uy, res);
         double lambda = 1e-6; // the Taubin start is close: begin nearly Gauss-Newton
@@ -195,7 +200,7 @@ public final class CircleFits {
             double stepSize = Math.abs(d[0]) + Math.abs(d[1]) + Math.abs(d[2]);
             double scale = Math.abs(r) + Math.sqrt(a * a + b * b);
             if (stepSize <= 1e-15 * scale) break; // converged to rounding
-            double rate = stepSize / lastStep;
+            double rate = stepSize / lastStep; // see the stopping rule above
             if (lastStep < Double.POSITIVE_INFINITY && rate < 0.1 && rate * stepSize <= 1e-11 * scale) {
                 cost = Math.max(0, predictedCost(ne, cost, d));
                 a += d[0]; b += d[1]; r += d[2];
@@ -261,7 +266,9 @@ public final class CircleFits {
      * Sum of squared residuals; fills JᵀJ (upper: 0..5) and Jᵀe (6..8). Row i of J is
      * {@code (-uᵢ, -vᵢ, -1)} with {@code (uᵢ, vᵢ)} the unit vector from the centre to point i
      * (zero for a point at the centre), so the b-b entry {@code Σvᵢ² = n - Σuᵢ²} and r-r is n.
-     * {@code ux}, {@code uy}, {@code res} are scratch of at least {@code min(n, BLOCK)} entries.
+     * {@code ux}, {@code uy}, {@code res} are scratch of at least {@code n} entries, written first in
+     * an element-wise loop (SIMD), then summed. Their index must be the points' index: C2 in JDK 17
+     * does not vectorise a loop that reads {@code xs[from + k]} and writes {@code ux[k]}.
      */
     private static double normal(double[] xs, double[] ys, int n, double x0, double y0, double a, double b, double r,
                                  double[] ne, double[] ux, double[] uy, double[] res) {
