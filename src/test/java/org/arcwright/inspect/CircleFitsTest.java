@@ -58,6 +58,50 @@ class CircleFitsTest {
         assertThat(CircleFits.minimumZone(x, y, n).width()).isLessThan(1e-9);
     }
 
+    @ParameterizedTest(name = "offset {0}")
+    @CsvSource({"0", "1e4", "-3e5"})
+    void taubinDoesNotDependOnWhichPointItsSinglePassIsTakenAbout(double offset) {
+        // Taubin's circle is defined by moments about the centroid (Chernov 2010, §5), so it cannot
+        // depend on the order of the points, i.e. on which point the one pass is taken about; an
+        // outlier in the middle of the list sends the fit to the two-pass fallback
+        Random rnd = new Random(17);
+        int n = 201;
+        double[] x = new double[n], y = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = rnd.nextDouble() * 2.5, r = 3 * (1 + 0.003 * rnd.nextGaussian());
+            x[i] = offset + 1 + r * Math.cos(t);
+            y[i] = offset - 2 + r * Math.sin(t);
+        }
+        x[n / 2] = offset + 400;
+        y[n / 2] = offset - 300;
+        double[] x2 = x.clone(), y2 = y.clone();
+        x2[0] = x[n / 2]; y2[0] = y[n / 2];
+        x2[n / 2] = x[0]; y2[n / 2] = y[0];
+        Circle outlierInTheMiddle = CircleFits.taubin(x, y, n), outlierFirst = CircleFits.taubin(x2, y2, n);
+        double scale = outlierFirst.r();
+        assertThat(outlierInTheMiddle.cx()).isCloseTo(outlierFirst.cx(), within(1e-9 * scale));
+        assertThat(outlierInTheMiddle.cy()).isCloseTo(outlierFirst.cy(), within(1e-9 * scale));
+        assertThat(outlierInTheMiddle.r()).isCloseTo(outlierFirst.r(), within(1e-9 * scale));
+    }
+
+    @Test
+    void exactCircleFarFromTheOriginFitsToTheRoundingOfItsCoordinates() {
+        int n = 300;
+        double[] x = new double[n], y = new double[n];
+        for (int i = 0; i < n; i++) {
+            double t = 1.2 * i / n;
+            x[i] = 1e4 + 2 * Math.cos(t);
+            y[i] = 1e4 + 2 * Math.sin(t);
+        }
+        LeastSquaresCircle fit = CircleFits.leastSquares(x, y, n);
+        // coordinates near 1e4 carry a rounding of about 1e-12
+        assertThat(fit.circle().cx()).isCloseTo(1e4, within(1e-9));
+        assertThat(fit.circle().cy()).isCloseTo(1e4, within(1e-9));
+        assertThat(fit.circle().r()).isCloseTo(2, within(1e-9));
+        assertThat(fit.rms()).isLessThan(1e-11);
+        assertThat(CircleFits.taubin(x, y, n).r()).isCloseTo(2, within(1e-9));
+    }
+
     @Test
     void collinearPointsAreBadInput() {
         assertThatThrownBy(() -> CircleFits.leastSquares(new double[] {0, 1, 2, 3}, new double[] {0, 1, 2, 3}, 4))

@@ -44,6 +44,31 @@ class ReferenceSolversTest {
         assertThat(ours.circle().r()).isCloseTo(ref[2], within(1e-9 * r));
     }
 
+    /**
+     * Far from the origin: the least-squares pass works about a point of the set and Taubin's start
+     * converts moments about that point, so neither may lose the digits that the coordinates' size
+     * (1e4 against a radius of 2) would cost a fit about the origin.
+     */
+    @ParameterizedTest(name = "seed {0}")
+    @ValueSource(longs = {41, 42, 43})
+    void leastSquaresCircleFarFromTheOriginAgreesWithCommonsMathLevenbergMarquardt(long seed) {
+        int n = 400;
+        Random rnd = new Random(seed);
+        double[] xs = new double[n], ys = new double[n];
+        double sweep = Math.toRadians(30 + 300 * rnd.nextDouble());
+        for (int i = 0; i < n; i++) {
+            double t = sweep * i / n, rr = 2 * (1 + 0.002 * rnd.nextGaussian());
+            xs[i] = 1e4 + 0.3 + rr * Math.cos(t);
+            ys[i] = 1e4 - 0.7 + rr * Math.sin(t);
+        }
+        LeastSquaresCircle ours = CircleFits.leastSquares(xs, ys, n);
+        Circle t = CircleFits.taubin(xs, ys, n);
+        double[] ref = ReferenceSolvers.leastSquaresCircle(xs, ys, n, new double[] {t.cx(), t.cy(), t.r()});
+        assertThat(ours.circle().cx()).isCloseTo(ref[0], within(1e-9 * ref[2]));
+        assertThat(ours.circle().cy()).isCloseTo(ref[1], within(1e-9 * ref[2]));
+        assertThat(ours.circle().r()).isCloseTo(ref[2], within(1e-9 * ref[2]));
+    }
+
     @ParameterizedTest(name = "seed {0}")
     @ValueSource(longs = {11, 12, 13, 14, 15})
     void minimumZoneCircleAgreesWithTheSameLinearProgrammesSolvedBySimplexSolver(long seed) {
