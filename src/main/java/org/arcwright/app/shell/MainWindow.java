@@ -80,6 +80,8 @@ import org.arcwright.worksheet.WorksheetFiles;
 public final class MainWindow {
     /** Class-path location of the first-run demo worksheet. */
     public static final String DEMO_RESOURCE = "/arcwright/examples/tarnbeck-output-shaft.arcpart";
+    /** The packs start loading this long after the window opens even if it has not painted. */
+    private static final int PACKS_AT_THE_LATEST_MS = 1000;
 
     private final AppServices services;
     private final Themes themes;
@@ -103,6 +105,7 @@ public final class MainWindow {
     private PackStack packs;
     private NotesStore notesStore;
     private Loaded core;
+    private boolean packsRequested;
 
     /**
      * The worksheet the window opens with, read before the window is built (off the event thread).
@@ -144,18 +147,37 @@ public final class MainWindow {
 
     /**
      * Shows the window, then restores the last work; the packs, fits, rules and notes index start
-     * loading in the background once the window has opened, so they do not compete with its first paint.
+     * loading in the background once the first frame is painted and the Decide form built.
      */
     public void show() {
         frame.addWindowListener(new WindowAdapter() {
             @Override
-            public void windowOpened(WindowEvent e) { javax.swing.SwingUtilities.invokeLater(MainWindow.this::loadPacksInBackground); }
+            public void windowOpened(WindowEvent e) {
+                javax.swing.Timer fallback = new javax.swing.Timer(PACKS_AT_THE_LATEST_MS, t -> loadPacksOnce());
+                fallback.setRepeats(false);
+                fallback.start();
+            }
         });
+        decideTab.whenBuilt(p -> javax.swing.SwingUtilities.invokeLater(this::loadPacksOnce));
         frame.setVisible(true);
         frame.toFront();
         partPanel.table().requestFocusInWindow();
         restoreWork();
         status.progress("Loading practice packs…", -1, null);
+    }
+
+    /** Runs {@code then} on the event thread once the Decide form exists (at once if it does). */
+    public void whenDecideBuilt(Runnable then) { decideTab.whenBuilt(p -> then.run()); }
+
+    /**
+     * Starts loading the packs, once: after the Decide form is built (which follows the first paint),
+     * so that the loading thread does not compete with the first frame, or after a second if the
+     * window is never painted (minimised).
+     */
+    private void loadPacksOnce() {
+        if (packsRequested) return;
+        packsRequested = true;
+        loadPacksInBackground();
     }
 
     // ---- building ----
