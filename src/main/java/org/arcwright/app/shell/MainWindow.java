@@ -101,7 +101,7 @@ public final class MainWindow {
     private NotesPanel notesPanel;
     private LazyTab<StressViewPanel> stressTab;
     private LazyTab<PracticeEditorPanel> practiceTab;
-    private CheckPanel checkPanel;
+    private LazyTab<CheckPanel> checkTab;
     private PackStack packs;
     private NotesStore notesStore;
     private Loaded core;
@@ -198,12 +198,13 @@ public final class MainWindow {
                 services.background(), status::show), true);
         work.setName("workArea");
         work.addTab("Decide", Icons.get("decide"), decideTab, "The guided form and its recommendations (Alt+2)");
-        work.addTab("Zone view", Icons.get("zone"), new ZoneViewPanel(session), "The zone of the chosen control (Alt+3)");
+        work.addTab("Zone view", Icons.get("zone"), new LazyTab<>("zoneView", () -> new ZoneViewPanel(session)),
+                "The zone of the chosen control (Alt+3)");
         stressTab = new LazyTab<>("stressView", () -> new StressViewPanel(session, services.background()));
         work.addTab("Stress view", Icons.get("stress"), stressTab, "Stress concentration across the tolerance (Alt+4)");
-        checkPanel = new CheckPanel(session, new CheckRequests(services.json()), services.background(), services.clock(),
-                status::show);
-        work.addTab("Check", Icons.get("check"), checkPanel, "Conformance of a measured contour (Alt+5)");
+        checkTab = new LazyTab<>("check", () -> new CheckPanel(session, new CheckRequests(services.json()), services.background(),
+                services.clock(), status::show));
+        work.addTab("Check", Icons.get("check"), checkTab, "Conformance of a measured contour (Alt+5)");
         practiceTab = new LazyTab<>("practiceEditor", () -> new PracticeEditorPanel(services.json(), services.background(),
                 session, this::personalPackPath, this::reloadRulesInBackground));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
@@ -696,7 +697,7 @@ public final class MainWindow {
 
     public PracticeEditorPanel practicePanel() { return practiceTab.panel(); }
 
-    public CheckPanel checkPanel() { return checkPanel; }
+    public CheckPanel checkPanel() { return checkTab.panel(); }
 
     /** The Swing action of command {@code id}, for tests and toolbars. */
     public Action action(String id) { return actions.get(id); }
