@@ -1,5 +1,8 @@
 package org.arcwright.app;
 
+import java.util.concurrent.CompletableFuture;
+import javax.swing.JComponent;
+import javax.swing.JFrame;
 import javax.swing.SwingUtilities;
 import org.arcwright.app.model.ConfigLocation;
 import org.arcwright.app.model.Settings;
@@ -8,11 +11,12 @@ import org.arcwright.app.shell.Themes;
 
 /**
  * Starts the desktop window: reads settings, applies the look, and builds and shows the window on
- * the event thread. Packs and indexes load after the window shows, so it opens fast.
+ * the event thread. The settings and the first worksheet are read on a second thread while this one
+ * connects to the display; packs and indexes load after the first frame, so it opens fast.
  *
  * <p>The start-up harness sets the system property {@value #PROBE_PROPERTY}: {@code print} makes the
- * window print {@value #USABLE_MARKER} and the process's CPU time so far on standard output once it is
- * shown, painted and idle;
+ * window print {@value #USABLE_MARKER} and the process's CPU time so far on standard output when its
+ * first frame has been painted, and {@value #COMPLETE_MARKER} when the Decide form is in place;
  * {@code exit} also ends the process then (used to train the class-data-sharing archive).
  */
 public final class DesktopApp {
@@ -20,20 +24,45 @@ public final class DesktopApp {
     public static final String PROBE_PROPERTY = "arcwright.startupProbe";
     /** The line printed when the window is usable. */
     public static final String USABLE_MARKER = "arcwright-window-usable";
+    /** The line printed when the Decide form, built after the first frame, is in place. */
+    public static final String COMPLETE_MARKER = "arcwright-window-complete";
 
     private DesktopApp() {}
 
     public static void launch(String[] args) {
-        AppServices services = AppServices.over(ConfigLocation.current());
-        Settings settings = services.settings().load();
+        // A second thread reads the settings and then the first worksheet (Jackson's first use) while
+        // this thread connects to the display; the look needs the settings, the window both.
+        java.nio.file.Path config = ConfigLocation.current();
+        CompletableFuture<AppServices> services = new CompletableFuture<>();
+        CompletableFuture<Settings> settings = new CompletableFuture<>();
+        CompletableFuture<MainWindow.Opening> opening = new CompletableFuture<>();
+        Thread reader = new Thread(() -> readAhead(config, services, settings, opening), "arcwright-start");
+        reader.setDaemon(true);
+        reader.start();
+        java.awt.Toolkit.getDefaultToolkit();
+        Settings s = settings.join();
+        Themes themes = new Themes();
+        themes.install(s.theme());
         String probe = System.getProperty(PROBE_PROPERTY);
-        // Read the first worksheet while the event thread sets up the look.
-        java.util.concurrent.CompletableFuture<MainWindow.Opening> opening = java.util.concurrent.CompletableFuture
-                .supplyAsync(() -> MainWindow.opening(settings, services.files()), services.background());
         SwingUtilities.invokeLater(() -> {
-            MainWindow w = start(services, settings, opening::join);
-            if (probe != null) whenUsable(w.frame(), "exit".equals(probe));
+            MainWindow w = show(services.join(), themes, s, opening.join());
+            if (probe != null) whenUsable(w, "exit".equals(probe));
         });
+    }
+
+    private static void readAhead(java.nio.file.Path config, CompletableFuture<AppServices> services,
+                                  CompletableFuture<Settings> settings, CompletableFuture<MainWindow.Opening> opening) {
+        try {
+            AppServices sv = AppServices.over(config);
+            services.complete(sv);
+            Settings st = sv.settings().load();
+            settings.complete(st);
+            opening.complete(MainWindow.opening(st, sv.files()));
+        } catch (RuntimeException | Error e) {
+            services.completeExceptionally(e);
+            settings.completeExceptionally(e);
+            opening.completeExceptionally(e);
+        }
     }
 
     /** The start-up harness's breakdown of CPU time by thread, to see what start-up spends. */
@@ -46,35 +75,51 @@ public final class DesktopApp {
         }
     }
 
-    /** Prints the marker after the window has opened and the event queue has drained once more. */
-    private static void whenUsable(java.awt.Window window, boolean exit) {
-        Runnable report = () -> SwingUtilities.invokeLater(() -> {
-            System.out.println(USABLE_MARKER + " cpu=" + ProcessHandle.current().info().totalCpuDuration()
-                    .map(java.time.Duration::toMillis).orElse(-1L));
+    /**
+     * Prints the marker when the window's first frame has been painted (a one-pixel probe on the top
+     * layer paints last in that pass), then a second one once the Decide form, built by the next
+     * event after that paint, is in place.
+     */
+    private static void whenUsable(MainWindow window, boolean exit) {
+        JFrame frame = window.frame();
+        Runnable report = () -> {
+            System.out.println(USABLE_MARKER + " cpu=" + cpuMillis());
             if (Boolean.getBoolean("arcwright.startupThreads")) printThreadCpu();
             System.out.flush();
-            if (exit) System.exit(0);
-        });
-        if (window.isShowing()) {
-            SwingUtilities.invokeLater(report);
-            return;
-        }
-        window.addWindowListener(new java.awt.event.WindowAdapter() {
+            window.whenDecideBuilt(() -> SwingUtilities.invokeLater(() -> {
+                System.out.println(COMPLETE_MARKER + " cpu=" + cpuMillis());
+                System.out.flush();
+                if (exit) System.exit(0);
+            }));
+        };
+        JComponent probe = new JComponent() {
+            private static final long serialVersionUID = 1L;
+            private boolean painted;
+
             @Override
-            public void windowOpened(java.awt.event.WindowEvent e) { report.run(); }
-        });
+            protected void paintComponent(java.awt.Graphics g) {
+                if (painted || !frame.isShowing()) return;
+                painted = true;
+                report.run();
+            }
+        };
+        probe.setBounds(0, 0, 1, 1);
+        frame.getLayeredPane().add(probe, javax.swing.JLayeredPane.DRAG_LAYER);
+    }
+
+    private static long cpuMillis() {
+        return ProcessHandle.current().info().totalCpuDuration().map(java.time.Duration::toMillis).orElse(-1L);
     }
 
     /** Builds and shows the window; for tests, over their own services. */
     public static MainWindow start(AppServices services, Settings settings) {
-        return start(services, settings, () -> MainWindow.opening(settings, services.files()));
-    }
-
-    private static MainWindow start(AppServices services, Settings settings,
-                                    java.util.function.Supplier<MainWindow.Opening> opening) {
         Themes themes = new Themes();
         themes.install(settings.theme());
-        MainWindow window = new MainWindow(services, themes, settings, opening.get());
+        return show(services, themes, settings, MainWindow.opening(settings, services.files()));
+    }
+
+    private static MainWindow show(AppServices services, Themes themes, Settings settings, MainWindow.Opening opening) {
+        MainWindow window = new MainWindow(services, themes, settings, opening);
         window.show();
         return window;
     }

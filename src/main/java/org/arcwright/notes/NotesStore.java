@@ -885,10 +885,16 @@ public final class NotesStore implements Closeable {
     /**
      * Words of the query found near each other in the body: applied to the best
      * {@link #RESCORE_WINDOW} notes only (rescoring), since a sloppy phrase over every match is the
-     * most expensive part of a search. Null for a one-word query.
+     * most expensive part of a search. Null for a one-word query, and for a long query whose words'
+     * synonyms make more phrase variants than Lucene allows clauses (the words still find the notes).
      */
     private Query phraseQuery(String text) {
-        Query phrase = new QueryBuilder(queryAnalyzer).createPhraseQuery(NoteDocuments.BODY, text, 3);
+        Query phrase;
+        try {
+            phrase = new QueryBuilder(queryAnalyzer).createPhraseQuery(NoteDocuments.BODY, text, 3);
+        } catch (IndexSearcher.TooManyClauses e) {
+            return null;
+        }
         return phrase == null || phrase instanceof TermQuery ? null : phrase;
     }
 

@@ -1,13 +1,17 @@
 package org.arcwright.bench;
 
+import java.awt.Graphics;
+import javax.swing.JComponent;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
+import javax.swing.JLayeredPane;
 import javax.swing.SwingUtilities;
 import javax.swing.WindowConstants;
 
 /**
  * The baseline for the start-up harness: a bare Swing frame with one label, no look and feel of
- * its own, reporting when it is usable exactly as the Arcwright window does.
+ * its own, reporting when its first frame is painted exactly as the Arcwright window does (a
+ * one-pixel probe on the top layer), and ending the process then when asked.
  */
 public final class BareFrame {
     private BareFrame() {}
@@ -19,17 +23,24 @@ public final class BareFrame {
             f.setDefaultCloseOperation(WindowConstants.EXIT_ON_CLOSE);
             f.add(new JLabel("Bare frame", JLabel.CENTER));
             f.setSize(1400, 860);
-            f.addWindowListener(new java.awt.event.WindowAdapter() {
+            JComponent probe = new JComponent() {
+                private static final long serialVersionUID = 1L;
+                private boolean painted;
+
                 @Override
-                public void windowOpened(java.awt.event.WindowEvent e) {
-                    SwingUtilities.invokeLater(() -> {
-                        System.out.println("arcwright-window-usable cpu=" + ProcessHandle.current().info().totalCpuDuration()
-                                .map(java.time.Duration::toMillis).orElse(-1L));
-                        System.out.flush();
-                        if (exit) System.exit(0);
-                    });
+                protected void paintComponent(Graphics g) {
+                    if (painted || !f.isShowing()) return;
+                    painted = true;
+                    String cpu = " cpu=" + ProcessHandle.current().info().totalCpuDuration()
+                            .map(java.time.Duration::toMillis).orElse(-1L);
+                    System.out.println("arcwright-window-usable" + cpu);
+                    System.out.println("arcwright-window-complete" + cpu);
+                    System.out.flush();
+                    if (exit) SwingUtilities.invokeLater(() -> System.exit(0));
                 }
-            });
+            };
+            probe.setBounds(0, 0, 1, 1);
+            f.getLayeredPane().add(probe, JLayeredPane.DRAG_LAYER);
             f.setVisible(true);
         });
     }

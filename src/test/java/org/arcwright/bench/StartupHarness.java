@@ -18,11 +18,13 @@ import java.util.jar.JarOutputStream;
 import java.util.jar.Manifest;
 
 /**
- * Start-up harness: wall time from starting a JVM to the first usable window (shown, painted, event
- * queue drained), for the Arcwright window and for a bare Swing frame started the same way (the same
- * JVM options as {@code ./arcwright} uses for the window), with and without a class-data-sharing
- * archive made by a training run (as {@code ./arcwright} does). Each child also reports its own CPU
- * time at that moment, which depends far less than wall time on what else the machine is doing.
+ * Start-up harness: wall time from starting a JVM to the first usable window (its first frame painted,
+ * as seen by a one-pixel probe on the top layer), for the Arcwright window and for a bare Swing frame
+ * started the same way (the same JVM options as {@code ./arcwright} uses for the window), with and
+ * without a class-data-sharing archive made by a training run (as {@code ./arcwright} does); and, for
+ * Arcwright, to the Decide form built just after. Each child also reports its own CPU time at that
+ * moment, which depends far less than wall time on what else the machine is doing. The system property
+ * {@code startup.flags} replaces the JVM options for both, to try others side by side.
  *
  * <p>Run on a display (e.g. {@code xvfb-run -a}) after {@code mvn -B -o -q package -DskipTests}:
  * {@code xvfb-run -a mvn -B -o -q -Pharness test-compile exec:exec -Dharness=org.arcwright.bench.StartupHarness}.
@@ -31,7 +33,9 @@ import java.util.jar.Manifest;
  */
 public final class StartupHarness {
     /** The JVM options {@code ./arcwright} starts the window with; the bare frame gets the same. */
-    static final List<String> LAUNCH_FLAGS = List.of("-XX:+UseSerialGC", "-XX:TieredStopAtLevel=1", "-Xshare:auto");
+    static final List<String> LAUNCH_FLAGS = List.of("-XX:+UseSerialGC", "-XX:TieredStopAtLevel=1",
+            "-XX:Tier3InvocationThreshold=1000", "-XX:Tier3MinInvocationThreshold=500", "-XX:Tier3CompileThreshold=5000",
+            "-Xshare:auto");
 
     private StartupHarness() {}
 
@@ -46,6 +50,7 @@ public final class StartupHarness {
         Path bareCds = bench.resolve("bare.jsa");
         Files.deleteIfExists(appCds);
         Files.deleteIfExists(bareCds);
+        System.out.printf(Locale.ROOT, "load average at start: %s%n", Files.readString(Path.of("/proc/loadavg")).trim());
         time(List.of("-XX:ArchiveClassesAtExit=" + appCds), appJar, "exit", bench);
         time(List.of("-XX:ArchiveClassesAtExit=" + bareCds), bareJar, "exit", bench);
         List<Sample> app = new ArrayList<>();
@@ -58,9 +63,10 @@ public final class StartupHarness {
             bareCold.add(time(List.of(), bareJar, "exit", bench));
             appCold.add(time(List.of(), appJar, "exit", bench));
         }
-        System.out.printf(Locale.ROOT, "load average at start: %s%n", Files.readString(Path.of("/proc/loadavg")).trim());
-        System.out.println("| configuration | wall median ms | wall min ms | wall max ms | CPU median ms | CPU min ms |");
-        System.out.println("|---|---:|---:|---:|---:|---:|");
+        System.out.printf(Locale.ROOT, "load average at end: %s%n", Files.readString(Path.of("/proc/loadavg")).trim());
+        System.out.println("| configuration | wall median ms | wall min ms | wall max ms | CPU median ms | CPU min ms"
+                + " | Decide form built, wall median ms |");
+        System.out.println("|---|---:|---:|---:|---:|---:|---:|");
         row("bare JFrame, CDS archive", bare);
         row("Arcwright window, CDS archive (as ./arcwright)", app);
         row("bare JFrame, JDK default CDS only", bareCold);
@@ -76,11 +82,13 @@ public final class StartupHarness {
 
     private static List<Double> cpu(List<Sample> s) { return s.stream().map(Sample::cpu).toList(); }
 
+    private static List<Double> completeWall(List<Sample> s) { return s.stream().map(Sample::completeWall).toList(); }
+
     private static void row(String name, List<Sample> s) {
         List<Double> w = wall(s);
         List<Double> c = cpu(s);
-        System.out.printf(Locale.ROOT, "| %s | %.0f | %.0f | %.0f | %.0f | %.0f |%n", name, median(w), Collections.min(w),
-                Collections.max(w), median(c), Collections.min(c));
+        System.out.printf(Locale.ROOT, "| %s | %.0f | %.0f | %.0f | %.0f | %.0f | %.0f |%n", name, median(w), Collections.min(w),
+                Collections.max(w), median(c), Collections.min(c), median(completeWall(s)));
     }
 
     private static double median(List<Double> v) {
@@ -90,13 +98,17 @@ public final class StartupHarness {
         return n % 2 == 1 ? s.get(n / 2) : (s.get(n / 2 - 1) + s.get(n / 2)) / 2;
     }
 
-    /** Wall and CPU milliseconds from process start to the usable marker. */
-    record Sample(double wall, double cpu) {}
+    /**
+     * Wall and CPU milliseconds from process start to the first frame painted, and to the Decide form
+     * built after it (the same moment for the bare frame).
+     */
+    record Sample(double wall, double cpu, double completeWall, double completeCpu) {}
 
     private static Sample time(List<String> jvm, Path jar, String probe, Path bench) throws Exception {
         Path config = Files.createTempDirectory(bench, "config");
         List<String> cmd = new ArrayList<>(List.of("java"));
-        cmd.addAll(LAUNCH_FLAGS);
+        String flags = System.getProperty("startup.flags");
+        cmd.addAll(flags == null ? LAUNCH_FLAGS : List.of(flags.trim().split("\\s+")));
         cmd.addAll(jvm);
         cmd.add("-Darcwright.startupProbe=" + probe);
         cmd.add("-Darcwright.config=" + config.toAbsolutePath());
@@ -104,22 +116,28 @@ public final class StartupHarness {
         ProcessBuilder pb = new ProcessBuilder(cmd).redirectError(ProcessBuilder.Redirect.DISCARD);
         long start = System.nanoTime();
         Process p = pb.start();
-        double ms = -1;
-        double cpu = -1;
+        double[] usable = null;
+        double[] complete = null;
         try (BufferedReader r = new BufferedReader(new InputStreamReader(p.getInputStream(), StandardCharsets.UTF_8))) {
             String line;
             while ((line = r.readLine()) != null) {
-                if (line.contains("arcwright-window-usable")) {
-                    ms = (System.nanoTime() - start) / 1e6;
-                    int i = line.indexOf("cpu=");
-                    if (i >= 0) cpu = Double.parseDouble(line.substring(i + 4).trim());
+                if (line.startsWith("arcwright-window-usable")) usable = mark(line, start);
+                if (line.startsWith("arcwright-window-complete")) {
+                    complete = mark(line, start);
                     break;
                 }
             }
         }
         if (!p.waitFor(30, TimeUnit.SECONDS)) p.destroyForcibly();
-        if (ms < 0) throw new IllegalStateException("no usable marker from " + cmd);
-        return new Sample(ms, cpu);
+        if (usable == null || complete == null) throw new IllegalStateException("no usable and complete markers from " + cmd);
+        return new Sample(usable[0], usable[1], complete[0], complete[1]);
+    }
+
+    /** Wall ms since {@code start} and the CPU ms the child printed on a marker line. */
+    private static double[] mark(String line, long start) {
+        double wall = (System.nanoTime() - start) / 1e6;
+        int i = line.indexOf("cpu=");
+        return new double[] {wall, i >= 0 ? Double.parseDouble(line.substring(i + 4).trim()) : -1};
     }
 
     /** Packs {@link BareFrame} into its own jar, so it can use a class-data-sharing archive like the app. */

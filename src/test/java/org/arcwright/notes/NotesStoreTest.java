@@ -54,6 +54,15 @@ class NotesStoreTest {
     }
 
     @Test
+    void aLongQueryOfWordsWithSynonymsStillSearches() {
+        // six words, several with trade synonyms: the proximity phrase would expand past Lucene's
+        // 1,024-clause limit (found by the typing-stall harness); the search runs without that boost
+        try (NotesStore store = open(TestPacks.stack(base()))) {
+            assertThat(store.search("fatigue fillet shoulder radius stress kt", NoteFilters.none(), 5).hits()).isNotEmpty();
+        }
+    }
+
+    @Test
     void queryLanguageCharactersAreSearchedNotErrors() {
         try (NotesStore store = open(TestPacks.stack(base()))) {
             for (String q : List.of("R0.5 (", "\"", "*", "AND", "title:", "a OR b) [", "~2^3", "\\", "R0.2 max")) {

@@ -85,7 +85,6 @@ public final class CheckPanel extends JPanel {
         JButton open = new JButton("Import measured points…", Icons.get("open"));
         open.setName("checkImport");
         open.addActionListener(e -> chooseFile());
-        progress.setIndeterminate(true);
         progress.setVisible(false);
         cancel.setVisible(false);
         cancel.addActionListener(e -> cancelled());
@@ -120,6 +119,7 @@ public final class CheckPanel extends JPanel {
             return;
         }
         long g = ++generation;
+        progress.setIndeterminate(true);
         progress.setVisible(true);
         cancel.setVisible(true);
         status.accept("Checking " + file.getFileName() + "…");
@@ -152,16 +152,22 @@ public final class CheckPanel extends JPanel {
         if (c.showOpenDialog(this) == JFileChooser.APPROVE_OPTION) check(c.getSelectedFile().toPath());
     }
 
+    /** Hides the bar and stops its animation, which an invisible indeterminate bar keeps running. */
+    private void hideProgress() {
+        progress.setIndeterminate(false);
+        progress.setVisible(false);
+    }
+
     private void cancelled() {
         generation++;
-        progress.setVisible(false);
+        hideProgress();
         cancel.setVisible(false);
         status.accept("Check cancelled");
     }
 
     private void inspected(long g, String src, String featureId, Checked c, Throwable e) {
         if (g != generation) return;
-        progress.setVisible(false);
+        hideProgress();
         cancel.setVisible(false);
         if (e != null) {
             Throwable cause = e.getCause() != null ? e.getCause() : e;

@@ -34,6 +34,13 @@ final class HitCell extends JComponent implements ListCellRenderer<NoteHit> {
     private boolean selected;
     private Color background;
     private Color foreground;
+    /** Laid-out snippets of the hits listed lately; a few screens' worth is plenty. */
+    private final transient java.util.Map<LayoutKey, List<TextLayout>> layouts = new java.util.LinkedHashMap<>(64, 0.75f, true) {
+        private static final long serialVersionUID = 1L;
+
+        @Override
+        protected boolean removeEldestEntry(java.util.Map.Entry<LayoutKey, List<TextLayout>> eldest) { return size() > 200; }
+    };
 
     @Override
     public Component getListCellRendererComponent(JList<? extends NoteHit> list, NoteHit value, int index,
@@ -78,12 +85,38 @@ final class HitCell extends JComponent implements ListCellRenderer<NoteHit> {
     }
 
     private void paintSnippet(Graphics2D g2, Font font, int x, int top, int width) {
+        if (width < 20) return;
+        g2.setColor(selected ? foreground : UIManager.getColor("Label.foreground"));
+        float y = top;
+        for (TextLayout layout : lines(g2.getFontRenderContext(), font, width)) {
+            y += layout.getAscent();
+            layout.draw(g2, x, y);
+            y += layout.getDescent() + layout.getLeading();
+        }
+    }
+
+    /**
+     * The snippet's first lines at {@code width}, laid out once per hit and width: measuring the whole
+     * snippet on every paint held the event thread for over 100 ms when thirty hits arrived.
+     */
+    private List<TextLayout> lines(FontRenderContext frc, Font font, int width) {
+        LayoutKey key = new LayoutKey(hit.snippet(), width, font, frc);
+        List<TextLayout> cached = layouts.get(key);
+        if (cached != null) return cached;
+        List<TextLayout> out = layOut(frc, font, width);
+        layouts.put(key, out);
+        return out;
+    }
+
+    private List<TextLayout> layOut(FontRenderContext frc, Font font, int width) {
         String marked = hit.snippet() == null ? "" : hit.snippet().replaceAll("\\s+", " ").strip();
+        // only what can fill the lines shown is measured: a generous bound of characters per line
+        int budget = SNIPPET_LINES * (width / Math.max(1, getFontMetrics(font).charWidth('i')) + 1);
         StringBuilder plain = new StringBuilder();
         List<int[]> bold = new ArrayList<>();
         int i = 0;
         int start = -1;
-        while (i < marked.length()) {
+        while (i < marked.length() && plain.length() < budget) {
             if (marked.startsWith("**", i)) {
                 if (start < 0) start = plain.length(); else { bold.add(new int[] {start, plain.length()}); start = -1; }
                 i += 2;
@@ -91,19 +124,19 @@ final class HitCell extends JComponent implements ListCellRenderer<NoteHit> {
                 plain.append(marked.charAt(i++));
             }
         }
-        if (plain.length() == 0 || width < 20) return;
+        if (start >= 0) bold.add(new int[] {start, plain.length()});
+        List<TextLayout> out = new ArrayList<>();
+        if (plain.length() == 0) return out;
         AttributedString text = new AttributedString(plain.toString());
         text.addAttribute(TextAttribute.FONT, font);
-        for (int[] b : bold) text.addAttribute(TextAttribute.FONT, font.deriveFont(Font.BOLD), b[0], b[1]);
-        g2.setColor(selected ? foreground : UIManager.getColor("Label.foreground"));
-        FontRenderContext frc = g2.getFontRenderContext();
+        Font boldFont = font.deriveFont(Font.BOLD);
+        for (int[] b : bold) if (b[1] > b[0]) text.addAttribute(TextAttribute.FONT, boldFont, b[0], b[1]);
         LineBreakMeasurer m = new LineBreakMeasurer(text.getIterator(), frc);
-        float y = top;
-        for (int line = 0; line < SNIPPET_LINES && m.getPosition() < plain.length(); line++) {
-            TextLayout layout = m.nextLayout(width);
-            y += layout.getAscent();
-            layout.draw(g2, x, y);
-            y += layout.getDescent() + layout.getLeading();
-        }
+        for (int line = 0; line < SNIPPET_LINES && m.getPosition() < plain.length(); line++) out.add(m.nextLayout(width));
+        return out;
     }
+
+    /** What a snippet's layout depends on. */
+    private record LayoutKey(String snippet, int width, Font font, FontRenderContext frc) {}
+
 }

@@ -80,6 +80,8 @@ import org.arcwright.worksheet.WorksheetFiles;
 public final class MainWindow {
     /** Class-path location of the first-run demo worksheet. */
     public static final String DEMO_RESOURCE = "/arcwright/examples/tarnbeck-output-shaft.arcpart";
+    /** The packs start loading this long after the window opens even if it has not painted. */
+    private static final int PACKS_AT_THE_LATEST_MS = 1000;
 
     private final AppServices services;
     private final Themes themes;
@@ -99,10 +101,11 @@ public final class MainWindow {
     private NotesPanel notesPanel;
     private LazyTab<StressViewPanel> stressTab;
     private LazyTab<PracticeEditorPanel> practiceTab;
-    private CheckPanel checkPanel;
+    private LazyTab<CheckPanel> checkTab;
     private PackStack packs;
     private NotesStore notesStore;
     private Loaded core;
+    private boolean packsRequested;
 
     /**
      * The worksheet the window opens with, read before the window is built (off the event thread).
@@ -144,18 +147,37 @@ public final class MainWindow {
 
     /**
      * Shows the window, then restores the last work; the packs, fits, rules and notes index start
-     * loading in the background once the window has opened, so they do not compete with its first paint.
+     * loading in the background once the first frame is painted and the Decide form built.
      */
     public void show() {
         frame.addWindowListener(new WindowAdapter() {
             @Override
-            public void windowOpened(WindowEvent e) { javax.swing.SwingUtilities.invokeLater(MainWindow.this::loadPacksInBackground); }
+            public void windowOpened(WindowEvent e) {
+                javax.swing.Timer fallback = new javax.swing.Timer(PACKS_AT_THE_LATEST_MS, t -> loadPacksOnce());
+                fallback.setRepeats(false);
+                fallback.start();
+            }
         });
+        decideTab.whenBuilt(p -> javax.swing.SwingUtilities.invokeLater(this::loadPacksOnce));
         frame.setVisible(true);
         frame.toFront();
         partPanel.table().requestFocusInWindow();
         restoreWork();
         status.progress("Loading practice packs…", -1, null);
+    }
+
+    /** Runs {@code then} on the event thread once the Decide form exists (at once if it does). */
+    public void whenDecideBuilt(Runnable then) { decideTab.whenBuilt(p -> then.run()); }
+
+    /**
+     * Starts loading the packs, once: after the Decide form is built (which follows the first paint),
+     * so that the loading thread does not compete with the first frame, or after a second if the
+     * window is never painted (minimised).
+     */
+    private void loadPacksOnce() {
+        if (packsRequested) return;
+        packsRequested = true;
+        loadPacksInBackground();
     }
 
     // ---- building ----
@@ -176,12 +198,13 @@ public final class MainWindow {
                 services.background(), status::show), true);
         work.setName("workArea");
         work.addTab("Decide", Icons.get("decide"), decideTab, "The guided form and its recommendations (Alt+2)");
-        work.addTab("Zone view", Icons.get("zone"), new ZoneViewPanel(session), "The zone of the chosen control (Alt+3)");
+        work.addTab("Zone view", Icons.get("zone"), new LazyTab<>("zoneView", () -> new ZoneViewPanel(session)),
+                "The zone of the chosen control (Alt+3)");
         stressTab = new LazyTab<>("stressView", () -> new StressViewPanel(session, services.background()));
         work.addTab("Stress view", Icons.get("stress"), stressTab, "Stress concentration across the tolerance (Alt+4)");
-        checkPanel = new CheckPanel(session, new CheckRequests(services.json()), services.background(), services.clock(),
-                status::show);
-        work.addTab("Check", Icons.get("check"), checkPanel, "Conformance of a measured contour (Alt+5)");
+        checkTab = new LazyTab<>("check", () -> new CheckPanel(session, new CheckRequests(services.json()), services.background(),
+                services.clock(), status::show));
+        work.addTab("Check", Icons.get("check"), checkTab, "Conformance of a measured contour (Alt+5)");
         practiceTab = new LazyTab<>("practiceEditor", () -> new PracticeEditorPanel(services.json(), services.background(),
                 session, this::personalPackPath, this::reloadRulesInBackground));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
@@ -674,7 +697,7 @@ public final class MainWindow {
 
     public PracticeEditorPanel practicePanel() { return practiceTab.panel(); }
 
-    public CheckPanel checkPanel() { return checkPanel; }
+    public CheckPanel checkPanel() { return checkTab.panel(); }
 
     /** The Swing action of command {@code id}, for tests and toolbars. */
     public Action action(String id) { return actions.get(id); }

