@@ -573,7 +573,8 @@ public final class MainWindow {
     }
 
     /**
-     * Reloads the packs and the rule book off the UI thread after a rule was saved, then gives the
+     * Reloads the packs, the rule book and the note templates off the UI thread after a rule or a
+     * template was saved, then gives the
      * advisor (with the open notes, if any) and the Practice editor the new book.
      */
     private void reloadRulesInBackground() {
@@ -581,13 +582,13 @@ public final class MainWindow {
         List<Path> team = new ArrayList<>();
         for (String t : settings.teamPacks()) team.add(Path.of(t));
         Path personal = personalPackPath();
-        status.progress("Reloading the rules…", -1, null);
+        status.progress("Reloading the packs…", -1, null);
         java.util.concurrent.CompletableFuture.supplyAsync(() -> {
             PackStack stack = PackStack.load(team, personal);
             return new Loaded(stack, core.mechanics(), RuleBook.load(stack), core.checks(), core.frames(), NoteTemplates.load(stack));
         }, services.background()).whenComplete((loaded, e) -> javax.swing.SwingUtilities.invokeLater(() -> {
             if (e != null) {
-                status.done("The rules could not reload: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));
+                status.done("The packs could not reload: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));
                 return;
             }
             core = loaded;
@@ -598,7 +599,8 @@ public final class MainWindow {
             Advisor advisor = new Advisor(loaded.book(), loaded.checks(), linker);
             useAdvisor(advisor);
             practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), advisor));
-            status.done("Rules reloaded: " + loaded.book().entries().size() + " rules in force");
+            status.done("Packs reloaded: " + loaded.book().entries().size() + " rules and "
+                    + loaded.templates().names().size() + " note templates in force");
         }));
     }
 
