@@ -56,8 +56,6 @@ import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TermQuery;
 import org.apache.lucene.search.TopDocs;
 import org.apache.lucene.search.TopScoreDocCollectorManager;
-import org.apache.lucene.search.uhighlight.DefaultPassageFormatter;
-import org.apache.lucene.search.uhighlight.UnifiedHighlighter;
 import org.apache.lucene.store.ByteBuffersDirectory;
 import org.apache.lucene.store.Directory;
 import org.apache.lucene.store.FSDirectory;
@@ -108,7 +106,6 @@ public final class NotesStore implements Closeable {
     private final Path indexFolder;
     private final TradeAnalyzer indexAnalyzer = TradeAnalyzer.forIndexing();
     private final TradeAnalyzer queryAnalyzer = TradeAnalyzer.forQueries();
-    private final TradeAnalyzer highlightAnalyzer = TradeAnalyzer.forHighlighting();
     private final FacetsConfig facetsConfig = NoteDocuments.facetsConfig();
     private final Map<IndexReader, SortedSetDocValuesReaderState> facetStates =
             Collections.synchronizedMap(new WeakHashMap<>());
@@ -222,15 +219,12 @@ public final class NotesStore implements Closeable {
                 facets = Map.of();
             }
             if (phrase != null) top = rescoreByProximity(s, top, phrase, limit);
-            Query marks = q.isBlank() ? null : new QueryBuilder(highlightAnalyzer).createBooleanQuery(NoteDocuments.BODY, q, Occur.SHOULD);
+            Set<String> marks = q.isBlank() ? Set.of() : Snippets.markTerms(queryAnalyzer, NoteDocuments.BODY, q);
             StoredFields stored = s.storedFields();
-            Map<Integer, FiledNote> notes = new HashMap<>();
-            for (ScoreDoc sd : top.scoreDocs) notes.put(sd.doc, filed(stored.document(sd.doc)));
-            String[] snippets = snippets(s, marks == null ? query : marks, top, notes);
             List<NoteHit> hits = new ArrayList<>();
-            for (int i = 0; i < top.scoreDocs.length; i++) {
-                ScoreDoc sd = top.scoreDocs[i];
-                hits.add(hit(notes.get(sd.doc), sd.score, snippets == null ? null : snippets[i]));
+            for (ScoreDoc sd : top.scoreDocs) {
+                FiledNote f = filed(stored.document(sd.doc));
+                hits.add(hit(f, sd.score, snippet(f, marks)));
             }
             return new SearchResult(q, top.totalHits.value, hits, facets);
         });
@@ -373,7 +367,6 @@ public final class NotesStore implements Closeable {
             directory = null;
             indexAnalyzer.close();
             queryAnalyzer.close();
-            highlightAnalyzer.close();
         }
     }
 
@@ -885,11 +878,47 @@ public final class NotesStore implements Closeable {
     /**
      * Words of the query found near each other in the body: applied to the best
      * {@link #RESCORE_WINDOW} notes only (rescoring), since a sloppy phrase over every match is the
-     * most expensive part of a search. Null for a one-word query.
+     * most expensive part of a search. One sloppy {@link org.apache.lucene.search.MultiPhraseQuery}
+     * over the words typed, each position also accepting its one-word synonyms: the phrase query the
+     * analyser's synonym graph would give is one sloppy phrase per path through the graph (32 for
+     * {@code kt at the minimum radius}), each weighed and scored on its own. Multi-word synonyms
+     * still count in the main query, not here. Null for a one-word query.
      */
     private Query phraseQuery(String text) {
-        Query phrase = new QueryBuilder(queryAnalyzer).createPhraseQuery(NoteDocuments.BODY, text, 3);
-        return phrase == null || phrase instanceof TermQuery ? null : phrase;
+        List<int[]> spans = new ArrayList<>();
+        List<String> words = new ArrayList<>();
+        List<Boolean> typed = new ArrayList<>();
+        try (org.apache.lucene.analysis.TokenStream ts = queryAnalyzer.tokenStream(NoteDocuments.BODY, text)) {
+            var term = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.CharTermAttribute.class);
+            var inc = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute.class);
+            var len = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.PositionLengthAttribute.class);
+            var type = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.TypeAttribute.class);
+            ts.reset();
+            int pos = -1;
+            while (ts.incrementToken()) {
+                pos += inc.getPositionIncrement();
+                spans.add(new int[] {pos, pos + len.getPositionLength()});
+                words.add(term.toString());
+                typed.add(!org.apache.lucene.analysis.synonym.SynonymGraphFilter.TYPE_SYNONYM.equals(type.type()));
+            }
+            ts.end();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
+        }
+        org.apache.lucene.search.MultiPhraseQuery.Builder b = new org.apache.lucene.search.MultiPhraseQuery.Builder().setSlop(3);
+        int at = 0;
+        for (int i = 0; i < words.size(); i++) {
+            if (!typed.get(i)) continue;
+            List<Term> alternatives = new ArrayList<>();
+            alternatives.add(new Term(NoteDocuments.BODY, words.get(i)));
+            for (int j = 0; j < words.size(); j++) {
+                if (!typed.get(j) && spans.get(j)[0] == spans.get(i)[0] && spans.get(j)[1] == spans.get(i)[1]) {
+                    alternatives.add(new Term(NoteDocuments.BODY, words.get(j)));
+                }
+            }
+            b.add(alternatives.toArray(new Term[0]), at++);
+        }
+        return at < 2 ? null : b.build();
     }
 
     private static Query withFilters(Query main, NoteFilters filters) {
@@ -903,50 +932,14 @@ public final class NotesStore implements Closeable {
         return b.build();
     }
 
-    private String[] snippets(IndexSearcher s, Query query, TopDocs top, Map<Integer, FiledNote> notes) throws IOException {
-        if (top.scoreDocs.length == 0) return new String[0];
-        UnifiedHighlighter h = new BodyFromSource(notes, UnifiedHighlighter.builder(s, indexAnalyzer)
-                .withFormatter(new DefaultPassageFormatter("**", "**", " … ", false))
-                .withMaxLength(20_000));
-        String[] out = h.highlight(NoteDocuments.BODY, query, top, 2);
-        for (int i = 0; i < out.length; i++) {
-            if (out[i] != null) out[i] = trimSnippet(out[i].replaceAll("\\s+", " ").strip());
-        }
-        return out;
-    }
-
     /**
-     * A highlighter that takes the body text from the notes already parsed for the hits (or the stored
-     * note source) instead of a stored copy of the body: the index keeps the text once, and the
-     * highlighter re-analyses the {@link NoteFormat#plainText} of the body of each hit shown.
+     * The shown passage of a hit: its best two sentences with the query's words marked, cut to
+     * about two lines; null (the caller shows the summary) when none of the words is in the body.
      */
-    private static final class BodyFromSource extends UnifiedHighlighter {
-        private final Map<Integer, FiledNote> parsed;
-
-        BodyFromSource(Map<Integer, FiledNote> parsed, UnifiedHighlighter.Builder builder) {
-            super(builder);
-            this.parsed = parsed;
-        }
-
-        @Override
-        protected List<CharSequence[]> loadFieldValues(String[] fields, org.apache.lucene.search.DocIdSetIterator docIter,
-                                                       int cacheCharsThreshold) throws IOException {
-            List<CharSequence[]> out = new ArrayList<>();
-            StoredFields stored = null;
-            for (int doc = docIter.nextDoc(); doc != org.apache.lucene.search.DocIdSetIterator.NO_MORE_DOCS; doc = docIter.nextDoc()) {
-                FiledNote f = parsed.get(doc);
-                if (f == null) {
-                    if (stored == null) stored = searcher.storedFields();
-                    f = filed(stored.document(doc));
-                }
-                CharSequence[] values = new CharSequence[fields.length];
-                for (int i = 0; i < fields.length; i++) {
-                    values[i] = NoteDocuments.BODY.equals(fields[i]) ? NoteFormat.plainText(f.note().body()) : "";
-                }
-                out.add(values);
-            }
-            return out;
-        }
+    private String snippet(FiledNote f, Set<String> marks) {
+        if (marks.isEmpty()) return null;
+        String passages = Snippets.pick(indexAnalyzer, NoteDocuments.BODY, NoteFormat.plainText(f.note().body()), marks, 2);
+        return passages == null ? null : trimSnippet(passages.replaceAll("\\s+", " ").strip());
     }
 
     /** Keeps a snippet to about two lines, starting shortly before the first highlight, cut at words. */
