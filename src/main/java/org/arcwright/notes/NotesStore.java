@@ -824,7 +824,7 @@ public final class NotesStore implements Closeable {
     }
 
     private Query textQuery(String text) {
-        QueryBuilder qb = new QueryBuilder(queryAnalyzer);
+        QueryBuilder qb = new TradeQueryBuilder(queryAnalyzer);
         BooleanQuery.Builder b = new BooleanQuery.Builder();
         boolean any = false;
         String[] fields = {NoteDocuments.TITLE, NoteDocuments.TAGS, NoteDocuments.BODY};
@@ -938,7 +938,7 @@ public final class NotesStore implements Closeable {
      */
     private String snippet(FiledNote f, Set<String> marks) {
         if (marks.isEmpty()) return null;
-        String passages = Snippets.pick(indexAnalyzer, NoteDocuments.BODY, NoteFormat.plainText(f.note().body()), marks, 2);
+        String passages = Snippets.pick(NoteFormat.plainText(f.note().body()), marks, 2);
         return passages == null ? null : trimSnippet(passages.replaceAll("\\s+", " ").strip());
     }
 

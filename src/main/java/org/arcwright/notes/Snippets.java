@@ -6,7 +6,9 @@ import java.util.ArrayList;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import java.io.StringReader;
 import org.apache.lucene.analysis.Analyzer;
+import org.apache.lucene.analysis.FilteringTokenFilter;
 import org.apache.lucene.analysis.CharArraySet;
 import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.en.EnglishAnalyzer;
@@ -58,10 +60,11 @@ final class Snippets {
      * in the note's order, joined by {@link #GAP}; null when no term occurs (the caller shows the
      * note's summary instead). A sentence ends at {@code .}, {@code !} or {@code ?} followed by
      * white space, or at a line break.
-     *
-     * @param indexAnalyzer the chain the body was indexed with
+     * The body goes through the index chain, with one shortcut: a plain word (ASCII letters and
+     * apostrophes) whose first letter begins none of the terms is dropped before the lower-casing,
+     * stemming and the rest, since none of them changes a plain word's first letter.
      */
-    static String pick(Analyzer indexAnalyzer, String field, String plain, Set<String> terms, int maxPassages) {
+    static String pick(String plain, Set<String> terms, int maxPassages) {
         if (terms.isEmpty() || plain.isEmpty()) return null;
         int[] sentences = sentenceBounds(plain);
         int count = sentences.length / 2;
@@ -70,7 +73,9 @@ final class Snippets {
         for (int i = 0; i < count; i++) seen.add(null);
         List<int[]> marks = new ArrayList<>();
         int[] repeats = new int[count];
-        try (TokenStream ts = indexAnalyzer.tokenStream(field, plain)) {
+        TradeTokenizer tokens = new TradeTokenizer();
+        tokens.setReader(new StringReader(plain));
+        try (TokenStream ts = TradeAnalyzer.indexChainAfter(new FirstLetterFilter(tokens, firstLetters(terms)))) {
             CharTermAttribute term = ts.addAttribute(CharTermAttribute.class);
             OffsetAttribute offset = ts.addAttribute(OffsetAttribute.class);
             ts.reset();
@@ -120,6 +125,39 @@ final class Snippets {
             out.append(plain, at, to);
         }
         return out.toString();
+    }
+
+    private static boolean[] firstLetters(Set<String> terms) {
+        boolean[] out = new boolean[26];
+        for (String t : terms) {
+            char c = t.charAt(0);
+            if (c >= 'a' && c <= 'z') out[c - 'a'] = true;
+        }
+        return out;
+    }
+
+    /** Drops plain words that cannot become one of the terms (see {@link #pick}); keeps every other token. */
+    private static final class FirstLetterFilter extends FilteringTokenFilter {
+        private final CharTermAttribute term = addAttribute(CharTermAttribute.class);
+        private final boolean[] letters;
+
+        FirstLetterFilter(TokenStream in, boolean[] letters) {
+            super(in);
+            this.letters = letters;
+        }
+
+        @Override
+        protected boolean accept() {
+            char[] b = term.buffer();
+            int n = term.length();
+            if (n == 0) return true;
+            for (int i = 0; i < n; i++) {
+                char c = b[i];
+                if (!((c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || c == '\'')) return true;
+            }
+            char first = Character.toLowerCase(b[0]);
+            return letters[first - 'a'];
+        }
     }
 
     /** The {@code n} best-scoring sentences with a score above zero; the earlier one wins a tie. */

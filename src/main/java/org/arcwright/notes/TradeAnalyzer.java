@@ -86,7 +86,15 @@ public final class TradeAnalyzer extends Analyzer {
         return new LowerCaseFilter(in);
     }
 
-    private static TokenStream baseChain(Tokenizer source, boolean indexSide) {
+    /**
+     * The index chain after {@code in}, for {@link Snippets}, which puts a filter between the
+     * tokenizer and the rest (so it cannot use the analyzer's reusable chain).
+     */
+    static TokenStream indexChainAfter(TokenStream in) {
+        return baseChain(in, true);
+    }
+
+    private static TokenStream baseChain(TokenStream source, boolean indexSide) {
         TokenStream s = new LowerCaseFilter(source);
         s = new ASCIIFoldingFilter(s);
         s = new TradeTokenFilter(s, indexSide);

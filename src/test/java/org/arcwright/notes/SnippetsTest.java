@@ -7,12 +7,11 @@ import org.junit.jupiter.api.Test;
 
 /** The snippet under a hit: the sentences holding the query's words, with those words marked. */
 class SnippetsTest {
-    private static final TradeAnalyzer INDEX = TradeAnalyzer.forIndexing();
     private static final TradeAnalyzer QUERY = TradeAnalyzer.forQueries();
 
     private static String snippet(String query, String body) {
         Set<String> terms = Snippets.markTerms(QUERY, NoteDocuments.BODY, query);
-        return Snippets.pick(INDEX, NoteDocuments.BODY, body, terms, 2);
+        return Snippets.pick(body, terms, 2);
     }
 
     @Test
@@ -42,6 +41,12 @@ class SnippetsTest {
     void stopWordsOfAQuestionAreNotMarked() {
         assertThat(snippet("kt at the minimum radius", "Check Kt at the minimum radius."))
                 .isEqualTo("Check **Kt** at the **minimum** **radius**.");
+    }
+
+    @Test
+    void wordsWhoseStemChangesTheirEndAreStillMarked() {
+        assertThat(snippet("relational sensibility", "Relations matter. Sensible radii, happily."))
+                .isEqualTo("**Relations** matter." + Snippets.GAP + "**Sensible** radii, happily.");
     }
 
     @Test
