@@ -574,68 +574,59 @@ public final class NotesStore implements Closeable {
         int removed = 0;
         List<SourceScan.Entry> entries = scan.entries();
         try (IndexWriter w = new IndexWriter(directory, cfg)) {
-            int start = 0;
-            List<int[]> packRanges = new ArrayList<>();
-            for (int i = 1; i <= entries.size(); i++) {
-                if (i == entries.size() || entries.get(i).packIndex() != entries.get(start).packIndex()) {
-                    packRanges.add(new int[] {start, i});
-                    start = i;
-                }
-            }
-            Collections.reverse(packRanges);
-            for (int[] range : packRanges) {
-                for (int from = range[0]; from < range[1]; from += CHUNK) {
-                    int to = Math.min(range[1], from + CHUNK);
-                    List<Loaded> loaded = java.util.stream.IntStream.range(from, to).parallel()
-                            .mapToObj(i -> load(entries.get(i))).toList();
-                    List<Loaded> toWrite = new ArrayList<>();
-                    for (Loaded l : loaded) {
-                        SourceScan.Entry e = l.entry();
-                        String location = e.path().toString();
-                        if (l.gone()) continue;
-                        if (l.problem() != null) {
-                            found.add(l.problem());
-                            String kept = idAtLocation.get(location);
-                            if (kept != null) {
-                                pinned.add(kept);
-                                seen.putIfAbsent(kept, e.packIndex());
-                            }
-                            continue;
-                        }
-                        Note note = l.note();
-                        Integer seenIn = seen.get(note.id());
-                        if (seenIn != null) {
-                            if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
-                                found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
-                                        + note.id() + "'; this one is ignored"));
-                            }
-                            continue;
-                        }
-                        seen.put(note.id(), e.packIndex());
-                        Indexed old = existing.get(note.id());
-                        if (old != null && old.hash().equals(l.hash()) && old.location().equals(location)) continue;
-                        toWrite.add(l);
+            Indexer indexer = new Indexer(w, fresh);
+            boolean indexed = false;
+            try {
+                int start = 0;
+                List<int[]> packRanges = new ArrayList<>();
+                for (int i = 1; i <= entries.size(); i++) {
+                    if (i == entries.size() || entries.get(i).packIndex() != entries.get(start).packIndex()) {
+                        packRanges.add(new int[] {start, i});
+                        start = i;
                     }
-                    try {
-                        toWrite.parallelStream().forEach(l -> {
+                }
+                Collections.reverse(packRanges);
+                for (int[] range : packRanges) {
+                    for (int from = range[0]; from < range[1]; from += CHUNK) {
+                        int to = Math.min(range[1], from + CHUNK);
+                        List<Loaded> loaded = java.util.stream.IntStream.range(from, to).parallel()
+                                .mapToObj(i -> load(entries.get(i))).toList();
+                        List<Loaded> toWrite = new ArrayList<>();
+                        for (Loaded l : loaded) {
                             SourceScan.Entry e = l.entry();
-                            Document doc = NoteDocuments.toDocument(facetsConfig, l.note(), l.text(), e.pack().name(),
-                                    e.pack().layer(), e.path().toString(), l.hash());
-                            try {
-                                if (fresh) {
-                                    w.addDocument(doc);
-                                } else {
-                                    w.updateDocument(new Term(NoteDocuments.ID, l.note().id()), doc);
+                            String location = e.path().toString();
+                            if (l.gone()) continue;
+                            if (l.problem() != null) {
+                                found.add(l.problem());
+                                String kept = idAtLocation.get(location);
+                                if (kept != null) {
+                                    pinned.add(kept);
+                                    seen.putIfAbsent(kept, e.packIndex());
                                 }
-                            } catch (IOException x) {
-                                throw new UncheckedIOException(x);
+                                continue;
                             }
-                        });
-                    } catch (UncheckedIOException x) {
-                        throw x.getCause();
+                            Note note = l.note();
+                            Integer seenIn = seen.get(note.id());
+                            if (seenIn != null) {
+                                if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
+                                    found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
+                                            + note.id() + "'; this one is ignored"));
+                                }
+                                continue;
+                            }
+                            seen.put(note.id(), e.packIndex());
+                            Indexed old = existing.get(note.id());
+                            if (old != null && old.hash().equals(l.hash()) && old.location().equals(location)) continue;
+                            toWrite.add(l);
+                        }
+                        for (Loaded l : toWrite) indexer.submit(l);
+                        written += toWrite.size();
                     }
-                    written += toWrite.size();
                 }
+                indexer.finish();
+                indexed = true;
+            } finally {
+                if (!indexed) indexer.abandon();
             }
             for (String id : existing.keySet()) {
                 if (!seen.containsKey(id)) {
@@ -651,8 +642,117 @@ public final class NotesStore implements Closeable {
         return new SyncCounts(written, removed);
     }
 
-    /** Notes are read, parsed and indexed in chunks of this many, two threads at a time. */
+    /** Notes are read and parsed in chunks of this many (on the common pool), then queued for the indexing threads. */
     private static final int CHUNK = 512;
+
+    /**
+     * Turns queued notes into documents and adds them to the writer on its own threads, one per core
+     * (at most four), so that reading the next notes, and one thread's flush of a full segment,
+     * overlap with indexing on the others: with a parallel loop per chunk instead, both cores waited
+     * at the end of each chunk for whichever thread was flushing, and the build used little more
+     * than one core. At the end each thread flushes one buffered segment, so the last segments are
+     * written side by side rather than one after the other in the commit.
+     */
+    private final class Indexer {
+        private static final int QUEUE = 1024;
+        private final IndexWriter writer;
+        private final boolean fresh;
+        private final java.util.concurrent.BlockingQueue<Loaded> queue = new java.util.concurrent.ArrayBlockingQueue<>(QUEUE);
+        private final java.util.concurrent.atomic.AtomicReference<Throwable> failure = new java.util.concurrent.atomic.AtomicReference<>();
+        private final List<Thread> threads = new ArrayList<>();
+        private final Loaded end = new Loaded(null, null, null, null, null, true);
+        private final java.util.concurrent.CountDownLatch drained;
+
+        Indexer(IndexWriter writer, boolean fresh) {
+            this.writer = writer;
+            this.fresh = fresh;
+            int n = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
+            drained = new java.util.concurrent.CountDownLatch(n);
+            for (int i = 0; i < n; i++) {
+                Thread t = new Thread(this::run, "notes-indexing-" + i);
+                t.setDaemon(true);
+                threads.add(t);
+                t.start();
+            }
+        }
+
+        void submit(Loaded l) throws IOException {
+            try {
+                while (!queue.offer(l, 100, java.util.concurrent.TimeUnit.MILLISECONDS)) rethrow();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new java.io.InterruptedIOException("interrupted while indexing notes");
+            }
+            rethrow();
+        }
+
+        /** Waits for every queued note to be indexed and the buffered segments to be flushed. */
+        void finish() throws IOException {
+            try {
+                for (int i = 0; i < threads.size(); i++) {
+                    while (!queue.offer(end, 100, java.util.concurrent.TimeUnit.MILLISECONDS)) rethrow();
+                }
+                for (Thread t : threads) t.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new java.io.InterruptedIOException("interrupted while indexing notes");
+            }
+            rethrow();
+        }
+
+        private void run() {
+            try {
+                for (Loaded l = queue.take(); l != end; l = queue.take()) {
+                    if (failure.get() != null) continue;
+                    SourceScan.Entry e = l.entry();
+                    Document doc = NoteDocuments.toDocument(facetsConfig, l.note(), l.text(), e.pack().name(),
+                            e.pack().layer(), e.path().toString(), l.hash());
+                    if (fresh) {
+                        writer.addDocument(doc);
+                    } else {
+                        writer.updateDocument(new Term(NoteDocuments.ID, l.note().id()), doc);
+                    }
+                }
+                drained.countDown();
+                drained.await();
+                if (failure.get() == null) writer.flushNextBuffer();
+            } catch (InterruptedException e) {
+                failure.compareAndSet(null, e);
+            } catch (IOException | RuntimeException | Error e) {
+                failure.compareAndSet(null, e);
+                queue.clear();
+            } finally {
+                drained.countDown();
+            }
+        }
+
+        /**
+         * Stops the threads after their current note when the build ends early (an exception on the
+         * caller's side); no interrupt, which would close the index files under a writing thread.
+         */
+        void abandon() {
+            failure.compareAndSet(null, new java.util.concurrent.CancellationException("notes build abandoned"));
+            queue.clear();
+            for (int i = 0; i < threads.size(); i++) queue.offer(end);
+            for (Thread t : threads) {
+                try {
+                    t.join(10_000);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                }
+            }
+        }
+
+        private void rethrow() throws IOException {
+            Throwable t = failure.get();
+            if (t == null) return;
+            if (t instanceof IOException) throw (IOException) t;
+            if (t instanceof RuntimeException) throw (RuntimeException) t;
+            if (t instanceof Error) throw (Error) t;
+            throw new java.io.InterruptedIOException("indexing interrupted");
+        }
+    }
 
     /** A note file read and parsed (or the problem with it). */
     private record Loaded(SourceScan.Entry entry, String text, Note note, String hash, InputProblem problem, boolean gone) {}
