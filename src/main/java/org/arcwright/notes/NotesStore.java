@@ -105,7 +105,12 @@ public final class NotesStore implements Closeable {
     private final PackStack stack;
     private final Path indexFolder;
     private final TradeAnalyzer indexAnalyzer = TradeAnalyzer.forIndexing();
-    private final TradeAnalyzer queryAnalyzer = TradeAnalyzer.forQueries();
+    /**
+     * The query chain, whose synonym map (parsed and compiled from the synonym list, with the
+     * analysis classes it loads) takes about as long as opening the index in a fresh JVM: so it is
+     * made on a thread of its own while the index opens, and the first search waits for it.
+     */
+    private final java.util.concurrent.CompletableFuture<TradeAnalyzer> queryChain = startQueryChain();
     private final FacetsConfig facetsConfig = NoteDocuments.facetsConfig();
     private final Map<IndexReader, SortedSetDocValuesReaderState> facetStates =
             Collections.synchronizedMap(new WeakHashMap<>());
@@ -115,6 +120,24 @@ public final class NotesStore implements Closeable {
     private volatile List<InputProblem> problems = List.of();
     private volatile IndexReport report;
     private boolean inMemory;
+
+    private static java.util.concurrent.CompletableFuture<TradeAnalyzer> startQueryChain() {
+        return java.util.concurrent.CompletableFuture.supplyAsync(TradeAnalyzer::forQueries, task -> {
+            Thread t = new Thread(task, "notes-query-chain");
+            t.setDaemon(true);
+            t.start();
+        });
+    }
+
+    private TradeAnalyzer queryAnalyzer() {
+        try {
+            return queryChain.join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof RuntimeException) throw (RuntimeException) e.getCause();
+            if (e.getCause() instanceof Error) throw (Error) e.getCause();
+            throw e;
+        }
+    }
 
     private NotesStore(PackStack stack, Path indexFolder) {
         this.stack = Objects.requireNonNull(stack, "stack");
@@ -219,7 +242,7 @@ public final class NotesStore implements Closeable {
                 facets = Map.of();
             }
             if (phrase != null) top = rescoreByProximity(s, top, phrase, limit);
-            Set<String> marks = q.isBlank() ? Set.of() : Snippets.markTerms(queryAnalyzer, NoteDocuments.BODY, q);
+            Set<String> marks = q.isBlank() ? Set.of() : Snippets.markTerms(queryAnalyzer(), NoteDocuments.BODY, q);
             StoredFields stored = s.storedFields();
             List<NoteHit> hits = new ArrayList<>();
             for (ScoreDoc sd : top.scoreDocs) {
@@ -366,7 +389,7 @@ public final class NotesStore implements Closeable {
             manager = null;
             directory = null;
             indexAnalyzer.close();
-            queryAnalyzer.close();
+            queryChain.thenAccept(TradeAnalyzer::close);
         }
     }
 
@@ -924,7 +947,7 @@ public final class NotesStore implements Closeable {
     }
 
     private Query textQuery(String text) {
-        QueryBuilder qb = new TradeQueryBuilder(queryAnalyzer);
+        QueryBuilder qb = new TradeQueryBuilder(queryAnalyzer());
         BooleanQuery.Builder b = new BooleanQuery.Builder();
         boolean any = false;
         String[] fields = {NoteDocuments.TITLE, NoteDocuments.TAGS, NoteDocuments.BODY};
@@ -988,7 +1011,7 @@ public final class NotesStore implements Closeable {
         List<int[]> spans = new ArrayList<>();
         List<String> words = new ArrayList<>();
         List<Boolean> typed = new ArrayList<>();
-        try (org.apache.lucene.analysis.TokenStream ts = queryAnalyzer.tokenStream(NoteDocuments.BODY, text)) {
+        try (org.apache.lucene.analysis.TokenStream ts = queryAnalyzer().tokenStream(NoteDocuments.BODY, text)) {
             var term = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.CharTermAttribute.class);
             var inc = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute.class);
             var len = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.PositionLengthAttribute.class);
