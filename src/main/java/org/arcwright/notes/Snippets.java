@@ -176,30 +176,28 @@ final class Snippets {
 
     /** Start and end of each sentence, flattened, white space at either end left out; at least one sentence. */
     static int[] sentenceBounds(String text) {
-        List<Integer> bounds = new ArrayList<>();
+        int[] bounds = new int[32];
+        int count = 0;
         int n = text.length();
         int start = 0;
         for (int i = 0; i <= n; i++) {
-            boolean end = i == n || text.charAt(i) == '\n'
-                    || (i > 0 && Character.isWhitespace(text.charAt(i)) && isStop(text.charAt(i - 1)));
-            if (!end) continue;
+            if (i < n) {
+                char c = text.charAt(i);
+                if (c != '\n' && !(isStop(c) && (i + 1 == n || Character.isWhitespace(text.charAt(i + 1))))) continue;
+            }
             int a = start;
-            int b = i;
+            int b = i < n && text.charAt(i) != '\n' ? i + 1 : i;
             while (a < b && Character.isWhitespace(text.charAt(a))) a++;
             while (b > a && Character.isWhitespace(text.charAt(b - 1))) b--;
             if (b > a) {
-                bounds.add(a);
-                bounds.add(b);
+                if (count + 2 > bounds.length) bounds = java.util.Arrays.copyOf(bounds, bounds.length * 2);
+                bounds[count++] = a;
+                bounds[count++] = b;
             }
             start = i + 1;
         }
-        if (bounds.isEmpty()) {
-            bounds.add(0);
-            bounds.add(n);
-        }
-        int[] out = new int[bounds.size()];
-        for (int i = 0; i < out.length; i++) out[i] = bounds.get(i);
-        return out;
+        if (count == 0) return new int[] {0, n};
+        return java.util.Arrays.copyOf(bounds, count);
     }
 
     private static boolean isStop(char c) {
