@@ -19,7 +19,7 @@ import org.arcwright.pack.PackLayer;
 /** How a note becomes a Lucene document, and the field names of the index. */
 final class NoteDocuments {
     /** Bump when fields or analysis change: an index with another schema is rebuilt. */
-    static final String SCHEMA = "arcwright-notes-9";
+    static final String SCHEMA = "arcwright-notes-8";
 
     static final String ID = "id";
     static final String TITLE = "title";
@@ -37,12 +37,7 @@ final class NoteDocuments {
     /**
      * Indexed with positions (for proximity) but without offsets, not stored: the text is kept once,
      * in {@link #SOURCE}. Offsets add build time and index size (written for every word of every note) for the
-     * sake of 10 snippets per search; {@link Snippets} re-analyses those few bodies instead.
-     *
-     * <p>What a hit shows (the note source, pack, layer, location) is kept in binary doc values, not
-     * stored fields: reading one document's stored fields decompresses its whole block (many notes),
-     * about a sixth of a warm search for 10 hits, while a doc value is read where it lies. The index
-     * grows (the source is no longer compressed) and the build does no compressing.
+     * sake of 10 snippets per search; the highlighter re-analyses those few bodies instead.
      */
     private static final FieldType BODY_TYPE = TextField.TYPE_NOT_STORED;
 
@@ -69,9 +64,10 @@ final class NoteDocuments {
         d.add(new TextField(TITLE, note.title(), Field.Store.YES));
         d.add(new TextField(TAGS, String.join(" , ", note.tags()), Field.Store.NO));
         d.add(new Field(BODY, NoteFormat.plainText(note.body()), BODY_TYPE));
-        d.add(new BinaryDocValuesField(SOURCE, new BytesRef(source)));
-        d.add(new BinaryDocValuesField(PACK, new BytesRef(pack)));
-        d.add(new BinaryDocValuesField(LAYER, new BytesRef(layer.name())));
+        d.add(new StoredField(SOURCE, source));
+        d.add(new StoredField(PACK, pack));
+        d.add(new StoredField(LAYER, layer.name()));
+        d.add(new StoredField(LOCATION, location));
         d.add(new BinaryDocValuesField(LOCATION, new BytesRef(location)));
         d.add(new BinaryDocValuesField(HASH, new BytesRef(hash)));
         for (NoteFacet f : NoteFacet.values()) {

@@ -243,9 +243,10 @@ public final class NotesStore implements Closeable {
             }
             if (phrase != null) top = rescoreByProximity(s, top, phrase, limit);
             Set<String> marks = q.isBlank() ? Set.of() : Snippets.markTerms(queryAnalyzer(), NoteDocuments.BODY, q);
+            StoredFields stored = s.storedFields();
             List<NoteHit> hits = new ArrayList<>();
             for (ScoreDoc sd : top.scoreDocs) {
-                FiledNote f = filed(s.getIndexReader(), sd.doc);
+                FiledNote f = filed(stored.document(sd.doc));
                 hits.add(hit(f, sd.score, snippet(f, marks)));
             }
             return new SearchResult(q, top.totalHits.value, hits, facets);
@@ -314,8 +315,9 @@ public final class NotesStore implements Closeable {
             if (!any) return List.<NoteHit>of();
             for (String x : exclude) b.add(new TermQuery(new Term(NoteDocuments.ID, x)), Occur.MUST_NOT);
             TopDocs top = s.search(b.build(), limit);
+            StoredFields stored = s.storedFields();
             List<NoteHit> out = new ArrayList<>();
-            for (ScoreDoc sd : top.scoreDocs) out.add(hit(filed(s.getIndexReader(), sd.doc), sd.score, null));
+            for (ScoreDoc sd : top.scoreDocs) out.add(hit(stored.document(sd.doc), sd.score, null));
             return out;
         });
     }
@@ -326,7 +328,8 @@ public final class NotesStore implements Closeable {
         return withSearcher(s -> {
             TopDocs top = s.search(new TermQuery(new Term(NoteDocuments.ID, id)), 1);
             if (top.scoreDocs.length == 0) return Optional.<FiledNote>empty();
-            return Optional.of(filed(s.getIndexReader(), top.scoreDocs[0].doc));
+            Document d = s.storedFields().document(top.scoreDocs[0].doc);
+            return Optional.of(filed(d));
         });
     }
 
@@ -1115,6 +1118,10 @@ public final class NotesStore implements Closeable {
         return out;
     }
 
+    private NoteHit hit(Document d, float score, String snippet) {
+        return hit(filed(d), score, snippet);
+    }
+
     private NoteHit hit(FiledNote f, float score, String snippet) {
         Note n = f.note();
         String sn = snippet == null || snippet.isBlank() ? n.summary(SUMMARY_CHARS) : snippet;
@@ -1122,26 +1129,10 @@ public final class NotesStore implements Closeable {
                 n.processes());
     }
 
-    /**
-     * The note behind index document {@code doc}, read from the doc values of its source, pack, layer
-     * and location (see {@link NoteDocuments}); a document lacking one is a broken index.
-     */
-    private static FiledNote filed(IndexReader reader, int doc) throws IOException {
-        List<LeafReaderContext> leaves = reader.leaves();
-        LeafReaderContext leaf = leaves.get(org.apache.lucene.index.ReaderUtil.subIndex(doc, leaves));
-        int local = doc - leaf.docBase;
-        String location = binary(leaf, NoteDocuments.LOCATION, local);
-        Note n = NoteFormat.parse(binary(leaf, NoteDocuments.SOURCE, local), location);
-        return new FiledNote(n, binary(leaf, NoteDocuments.PACK, local), PackLayer.valueOf(binary(leaf, NoteDocuments.LAYER, local)),
-                location);
-    }
-
-    private static String binary(LeafReaderContext leaf, String field, int doc) throws IOException {
-        BinaryDocValues values = leaf.reader().getBinaryDocValues(field);
-        if (values == null || !values.advanceExact(doc)) {
-            throw new java.io.IOException("the notes index lacks the " + field + " of a note");
-        }
-        return values.binaryValue().utf8ToString();
+    private static FiledNote filed(Document d) {
+        String location = d.get(NoteDocuments.LOCATION);
+        Note n = NoteFormat.parse(d.get(NoteDocuments.SOURCE), location);
+        return new FiledNote(n, d.get(NoteDocuments.PACK), PackLayer.valueOf(d.get(NoteDocuments.LAYER)), location);
     }
 
     private static long millisSince(long t0) {
