@@ -723,17 +723,19 @@ public final class NotesStore implements Closeable {
             rethrow();
         }
 
+        /**
+         * Indexes queued notes until this thread's end mark. After a failure (kept for the caller) the
+         * thread still takes notes off the queue, without indexing them, until its end mark, so the
+         * caller never waits on a full queue and every thread gets its own end mark.
+         */
         private void run() {
             try {
                 for (Loaded l = queue.take(); l != end; l = queue.take()) {
                     if (failure.get() != null) continue;
-                    SourceScan.Entry e = l.entry();
-                    Document doc = NoteDocuments.toDocument(facetsConfig, l.note(), l.text(), e.pack().name(),
-                            e.pack().layer(), e.path().toString(), l.hash());
-                    if (fresh) {
-                        writer.addDocument(doc);
-                    } else {
-                        writer.updateDocument(new Term(NoteDocuments.ID, l.note().id()), doc);
+                    try {
+                        index(l);
+                    } catch (IOException | RuntimeException | Error e) {
+                        failure.compareAndSet(null, e);
                     }
                 }
                 drained.countDown();
@@ -743,9 +745,19 @@ public final class NotesStore implements Closeable {
                 failure.compareAndSet(null, e);
             } catch (IOException | RuntimeException | Error e) {
                 failure.compareAndSet(null, e);
-                queue.clear();
             } finally {
                 drained.countDown();
+            }
+        }
+
+        private void index(Loaded l) throws IOException {
+            SourceScan.Entry e = l.entry();
+            Document doc = NoteDocuments.toDocument(facetsConfig, l.note(), l.text(), e.pack().name(),
+                    e.pack().layer(), e.path().toString(), l.hash());
+            if (fresh) {
+                writer.addDocument(doc);
+            } else {
+                writer.updateDocument(new Term(NoteDocuments.ID, l.note().id()), doc);
             }
         }
 
