@@ -37,7 +37,7 @@ final class NoteDocuments {
     /**
      * Indexed with positions (for proximity) but without offsets, not stored: the text is kept once,
      * in {@link #SOURCE}. Offsets add build time and index size (written for every word of every note) for the
-     * sake of 10 snippets per search; the highlighter re-analyses those few bodies instead.
+     * sake of 10 snippets per search; {@link Snippets} re-analyses those few bodies instead.
      */
     private static final FieldType BODY_TYPE = TextField.TYPE_NOT_STORED;
 

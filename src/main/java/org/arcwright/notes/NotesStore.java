@@ -56,8 +56,6 @@ import org.apache.lucene.search.SearcherManager;
 import org.apache.lucene.search.TermQuery;
 import org.apache.lucene.search.TopDocs;
 import org.apache.lucene.search.TopScoreDocCollectorManager;
-import org.apache.lucene.search.uhighlight.DefaultPassageFormatter;
-import org.apache.lucene.search.uhighlight.UnifiedHighlighter;
 import org.apache.lucene.store.ByteBuffersDirectory;
 import org.apache.lucene.store.Directory;
 import org.apache.lucene.store.FSDirectory;
@@ -107,8 +105,12 @@ public final class NotesStore implements Closeable {
     private final PackStack stack;
     private final Path indexFolder;
     private final TradeAnalyzer indexAnalyzer = TradeAnalyzer.forIndexing();
-    private final TradeAnalyzer queryAnalyzer = TradeAnalyzer.forQueries();
-    private final TradeAnalyzer highlightAnalyzer = TradeAnalyzer.forHighlighting();
+    /**
+     * The query chain, whose synonym map (parsed and compiled from the synonym list, with the
+     * analysis classes it loads) takes about as long as opening the index in a fresh JVM: so it is
+     * made on a thread of its own while the index opens, and the first search waits for it.
+     */
+    private final java.util.concurrent.CompletableFuture<TradeAnalyzer> queryChain = startQueryChain();
     private final FacetsConfig facetsConfig = NoteDocuments.facetsConfig();
     private final Map<IndexReader, SortedSetDocValuesReaderState> facetStates =
             Collections.synchronizedMap(new WeakHashMap<>());
@@ -118,6 +120,24 @@ public final class NotesStore implements Closeable {
     private volatile List<InputProblem> problems = List.of();
     private volatile IndexReport report;
     private boolean inMemory;
+
+    private static java.util.concurrent.CompletableFuture<TradeAnalyzer> startQueryChain() {
+        return java.util.concurrent.CompletableFuture.supplyAsync(TradeAnalyzer::forQueries, task -> {
+            Thread t = new Thread(task, "notes-query-chain");
+            t.setDaemon(true);
+            t.start();
+        });
+    }
+
+    private TradeAnalyzer queryAnalyzer() {
+        try {
+            return queryChain.join();
+        } catch (java.util.concurrent.CompletionException e) {
+            if (e.getCause() instanceof RuntimeException) throw (RuntimeException) e.getCause();
+            if (e.getCause() instanceof Error) throw (Error) e.getCause();
+            throw e;
+        }
+    }
 
     private NotesStore(PackStack stack, Path indexFolder) {
         this.stack = Objects.requireNonNull(stack, "stack");
@@ -222,15 +242,12 @@ public final class NotesStore implements Closeable {
                 facets = Map.of();
             }
             if (phrase != null) top = rescoreByProximity(s, top, phrase, limit);
-            Query marks = q.isBlank() ? null : new QueryBuilder(highlightAnalyzer).createBooleanQuery(NoteDocuments.BODY, q, Occur.SHOULD);
+            Set<String> marks = q.isBlank() ? Set.of() : Snippets.markTerms(queryAnalyzer(), NoteDocuments.BODY, q);
             StoredFields stored = s.storedFields();
-            Map<Integer, FiledNote> notes = new HashMap<>();
-            for (ScoreDoc sd : top.scoreDocs) notes.put(sd.doc, filed(stored.document(sd.doc)));
-            String[] snippets = snippets(s, marks == null ? query : marks, top, notes);
             List<NoteHit> hits = new ArrayList<>();
-            for (int i = 0; i < top.scoreDocs.length; i++) {
-                ScoreDoc sd = top.scoreDocs[i];
-                hits.add(hit(notes.get(sd.doc), sd.score, snippets == null ? null : snippets[i]));
+            for (ScoreDoc sd : top.scoreDocs) {
+                FiledNote f = filed(stored.document(sd.doc));
+                hits.add(hit(f, sd.score, snippet(f, marks)));
             }
             return new SearchResult(q, top.totalHits.value, hits, facets);
         });
@@ -372,8 +389,7 @@ public final class NotesStore implements Closeable {
             manager = null;
             directory = null;
             indexAnalyzer.close();
-            queryAnalyzer.close();
-            highlightAnalyzer.close();
+            queryChain.thenAccept(TradeAnalyzer::close);
         }
     }
 
@@ -581,68 +597,59 @@ public final class NotesStore implements Closeable {
         int removed = 0;
         List<SourceScan.Entry> entries = scan.entries();
         try (IndexWriter w = new IndexWriter(directory, cfg)) {
-            int start = 0;
-            List<int[]> packRanges = new ArrayList<>();
-            for (int i = 1; i <= entries.size(); i++) {
-                if (i == entries.size() || entries.get(i).packIndex() != entries.get(start).packIndex()) {
-                    packRanges.add(new int[] {start, i});
-                    start = i;
-                }
-            }
-            Collections.reverse(packRanges);
-            for (int[] range : packRanges) {
-                for (int from = range[0]; from < range[1]; from += CHUNK) {
-                    int to = Math.min(range[1], from + CHUNK);
-                    List<Loaded> loaded = java.util.stream.IntStream.range(from, to).parallel()
-                            .mapToObj(i -> load(entries.get(i))).toList();
-                    List<Loaded> toWrite = new ArrayList<>();
-                    for (Loaded l : loaded) {
-                        SourceScan.Entry e = l.entry();
-                        String location = e.path().toString();
-                        if (l.gone()) continue;
-                        if (l.problem() != null) {
-                            found.add(l.problem());
-                            String kept = idAtLocation.get(location);
-                            if (kept != null) {
-                                pinned.add(kept);
-                                seen.putIfAbsent(kept, e.packIndex());
-                            }
-                            continue;
-                        }
-                        Note note = l.note();
-                        Integer seenIn = seen.get(note.id());
-                        if (seenIn != null) {
-                            if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
-                                found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
-                                        + note.id() + "'; this one is ignored"));
-                            }
-                            continue;
-                        }
-                        seen.put(note.id(), e.packIndex());
-                        Indexed old = existing.get(note.id());
-                        if (old != null && old.hash().equals(l.hash()) && old.location().equals(location)) continue;
-                        toWrite.add(l);
+            Indexer indexer = new Indexer(w, fresh);
+            boolean indexed = false;
+            try {
+                int start = 0;
+                List<int[]> packRanges = new ArrayList<>();
+                for (int i = 1; i <= entries.size(); i++) {
+                    if (i == entries.size() || entries.get(i).packIndex() != entries.get(start).packIndex()) {
+                        packRanges.add(new int[] {start, i});
+                        start = i;
                     }
-                    try {
-                        toWrite.parallelStream().forEach(l -> {
+                }
+                Collections.reverse(packRanges);
+                for (int[] range : packRanges) {
+                    for (int from = range[0]; from < range[1]; from += CHUNK) {
+                        int to = Math.min(range[1], from + CHUNK);
+                        List<Loaded> loaded = java.util.stream.IntStream.range(from, to).parallel()
+                                .mapToObj(i -> load(entries.get(i))).toList();
+                        List<Loaded> toWrite = new ArrayList<>();
+                        for (Loaded l : loaded) {
                             SourceScan.Entry e = l.entry();
-                            Document doc = NoteDocuments.toDocument(facetsConfig, l.note(), l.text(), e.pack().name(),
-                                    e.pack().layer(), e.path().toString(), l.hash());
-                            try {
-                                if (fresh) {
-                                    w.addDocument(doc);
-                                } else {
-                                    w.updateDocument(new Term(NoteDocuments.ID, l.note().id()), doc);
+                            String location = e.path().toString();
+                            if (l.gone()) continue;
+                            if (l.problem() != null) {
+                                found.add(l.problem());
+                                String kept = idAtLocation.get(location);
+                                if (kept != null) {
+                                    pinned.add(kept);
+                                    seen.putIfAbsent(kept, e.packIndex());
                                 }
-                            } catch (IOException x) {
-                                throw new UncheckedIOException(x);
+                                continue;
                             }
-                        });
-                    } catch (UncheckedIOException x) {
-                        throw x.getCause();
+                            Note note = l.note();
+                            Integer seenIn = seen.get(note.id());
+                            if (seenIn != null) {
+                                if (seenIn == e.packIndex() && !pinned.contains(note.id())) {
+                                    found.add(new InputProblem(location, 2, 1, "id", "another note in the same pack already has the id '"
+                                            + note.id() + "'; this one is ignored"));
+                                }
+                                continue;
+                            }
+                            seen.put(note.id(), e.packIndex());
+                            Indexed old = existing.get(note.id());
+                            if (old != null && old.hash().equals(l.hash()) && old.location().equals(location)) continue;
+                            toWrite.add(l);
+                        }
+                        for (Loaded l : toWrite) indexer.submit(l);
+                        written += toWrite.size();
                     }
-                    written += toWrite.size();
                 }
+                indexer.finish();
+                indexed = true;
+            } finally {
+                if (!indexed) indexer.abandon();
             }
             for (String id : existing.keySet()) {
                 if (!seen.containsKey(id)) {
@@ -658,8 +665,129 @@ public final class NotesStore implements Closeable {
         return new SyncCounts(written, removed);
     }
 
-    /** Notes are read, parsed and indexed in chunks of this many, two threads at a time. */
+    /** Notes are read and parsed in chunks of this many (on the common pool), then queued for the indexing threads. */
     private static final int CHUNK = 512;
+
+    /**
+     * Turns queued notes into documents and adds them to the writer on its own threads, one per core
+     * (at most four), so that reading the next notes, and one thread's flush of a full segment,
+     * overlap with indexing on the others: with a parallel loop per chunk instead, both cores waited
+     * at the end of each chunk for whichever thread was flushing, and the build used little more
+     * than one core. At the end each thread flushes one buffered segment, so the last segments are
+     * written side by side rather than one after the other in the commit.
+     */
+    private final class Indexer {
+        private static final int QUEUE = 1024;
+        private final IndexWriter writer;
+        private final boolean fresh;
+        private final java.util.concurrent.BlockingQueue<Loaded> queue = new java.util.concurrent.ArrayBlockingQueue<>(QUEUE);
+        private final java.util.concurrent.atomic.AtomicReference<Throwable> failure = new java.util.concurrent.atomic.AtomicReference<>();
+        private final List<Thread> threads = new ArrayList<>();
+        private final Loaded end = new Loaded(null, null, null, null, null, true);
+        private final java.util.concurrent.CountDownLatch drained;
+
+        Indexer(IndexWriter writer, boolean fresh) {
+            this.writer = writer;
+            this.fresh = fresh;
+            int n = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
+            drained = new java.util.concurrent.CountDownLatch(n);
+            for (int i = 0; i < n; i++) {
+                Thread t = new Thread(this::run, "notes-indexing-" + i);
+                t.setDaemon(true);
+                threads.add(t);
+                t.start();
+            }
+        }
+
+        void submit(Loaded l) throws IOException {
+            try {
+                while (!queue.offer(l, 100, java.util.concurrent.TimeUnit.MILLISECONDS)) rethrow();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new java.io.InterruptedIOException("interrupted while indexing notes");
+            }
+            rethrow();
+        }
+
+        /** Waits for every queued note to be indexed and the buffered segments to be flushed. */
+        void finish() throws IOException {
+            try {
+                for (int i = 0; i < threads.size(); i++) {
+                    while (!queue.offer(end, 100, java.util.concurrent.TimeUnit.MILLISECONDS)) rethrow();
+                }
+                for (Thread t : threads) t.join();
+            } catch (InterruptedException e) {
+                Thread.currentThread().interrupt();
+                throw new java.io.InterruptedIOException("interrupted while indexing notes");
+            }
+            rethrow();
+        }
+
+        /**
+         * Indexes queued notes until this thread's end mark. After a failure (kept for the caller) the
+         * thread still takes notes off the queue, without indexing them, until its end mark, so the
+         * caller never waits on a full queue and every thread gets its own end mark.
+         */
+        private void run() {
+            try {
+                for (Loaded l = queue.take(); l != end; l = queue.take()) {
+                    if (failure.get() != null) continue;
+                    try {
+                        index(l);
+                    } catch (IOException | RuntimeException | Error e) {
+                        failure.compareAndSet(null, e);
+                    }
+                }
+                drained.countDown();
+                drained.await();
+                if (failure.get() == null) writer.flushNextBuffer();
+            } catch (InterruptedException e) {
+                failure.compareAndSet(null, e);
+            } catch (IOException | RuntimeException | Error e) {
+                failure.compareAndSet(null, e);
+            } finally {
+                drained.countDown();
+            }
+        }
+
+        private void index(Loaded l) throws IOException {
+            SourceScan.Entry e = l.entry();
+            Document doc = NoteDocuments.toDocument(facetsConfig, l.note(), l.text(), e.pack().name(),
+                    e.pack().layer(), e.path().toString(), l.hash());
+            if (fresh) {
+                writer.addDocument(doc);
+            } else {
+                writer.updateDocument(new Term(NoteDocuments.ID, l.note().id()), doc);
+            }
+        }
+
+        /**
+         * Stops the threads after their current note when the build ends early (an exception on the
+         * caller's side); no interrupt, which would close the index files under a writing thread.
+         */
+        void abandon() {
+            failure.compareAndSet(null, new java.util.concurrent.CancellationException("notes build abandoned"));
+            queue.clear();
+            for (int i = 0; i < threads.size(); i++) queue.offer(end);
+            for (Thread t : threads) {
+                try {
+                    t.join(10_000);
+                } catch (InterruptedException e) {
+                    Thread.currentThread().interrupt();
+                    return;
+                }
+            }
+        }
+
+        private void rethrow() throws IOException {
+            Throwable t = failure.get();
+            if (t == null) return;
+            if (t instanceof IOException) throw (IOException) t;
+            if (t instanceof RuntimeException) throw (RuntimeException) t;
+            if (t instanceof Error) throw (Error) t;
+            throw new java.io.InterruptedIOException("indexing interrupted");
+        }
+    }
 
     /** A note file read and parsed (or the problem with it). */
     private record Loaded(SourceScan.Entry entry, String text, Note note, String hash, InputProblem problem, boolean gone) {}
@@ -831,7 +959,7 @@ public final class NotesStore implements Closeable {
     }
 
     private Query textQuery(String text) {
-        QueryBuilder qb = new QueryBuilder(queryAnalyzer);
+        QueryBuilder qb = new TradeQueryBuilder(queryAnalyzer());
         BooleanQuery.Builder b = new BooleanQuery.Builder();
         boolean any = false;
         String[] fields = {NoteDocuments.TITLE, NoteDocuments.TAGS, NoteDocuments.BODY};
@@ -885,17 +1013,47 @@ public final class NotesStore implements Closeable {
     /**
      * Words of the query found near each other in the body: applied to the best
      * {@link #RESCORE_WINDOW} notes only (rescoring), since a sloppy phrase over every match is the
-     * most expensive part of a search. Null for a one-word query, and for a long query whose words'
-     * synonyms make more phrase variants than Lucene allows clauses (the words still find the notes).
+     * most expensive part of a search. One sloppy {@link org.apache.lucene.search.MultiPhraseQuery}
+     * over the words typed, each position also accepting its one-word synonyms: the phrase query the
+     * analyser's synonym graph would give is one sloppy phrase per path through the graph (32 for
+     * {@code kt at the minimum radius}), each weighed and scored on its own. Multi-word synonyms
+     * still count in the main query, not here. Null for a one-word query.
      */
     private Query phraseQuery(String text) {
-        Query phrase;
-        try {
-            phrase = new QueryBuilder(queryAnalyzer).createPhraseQuery(NoteDocuments.BODY, text, 3);
-        } catch (IndexSearcher.TooManyClauses e) {
-            return null;
+        List<int[]> spans = new ArrayList<>();
+        List<String> words = new ArrayList<>();
+        List<Boolean> typed = new ArrayList<>();
+        try (org.apache.lucene.analysis.TokenStream ts = queryAnalyzer().tokenStream(NoteDocuments.BODY, text)) {
+            var term = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.CharTermAttribute.class);
+            var inc = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute.class);
+            var len = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.PositionLengthAttribute.class);
+            var type = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.TypeAttribute.class);
+            ts.reset();
+            int pos = -1;
+            while (ts.incrementToken()) {
+                pos += inc.getPositionIncrement();
+                spans.add(new int[] {pos, pos + len.getPositionLength()});
+                words.add(term.toString());
+                typed.add(!org.apache.lucene.analysis.synonym.SynonymGraphFilter.TYPE_SYNONYM.equals(type.type()));
+            }
+            ts.end();
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
         }
-        return phrase == null || phrase instanceof TermQuery ? null : phrase;
+        org.apache.lucene.search.MultiPhraseQuery.Builder b = new org.apache.lucene.search.MultiPhraseQuery.Builder().setSlop(3);
+        int at = 0;
+        for (int i = 0; i < words.size(); i++) {
+            if (!typed.get(i)) continue;
+            List<Term> alternatives = new ArrayList<>();
+            alternatives.add(new Term(NoteDocuments.BODY, words.get(i)));
+            for (int j = 0; j < words.size(); j++) {
+                if (!typed.get(j) && spans.get(j)[0] == spans.get(i)[0] && spans.get(j)[1] == spans.get(i)[1]) {
+                    alternatives.add(new Term(NoteDocuments.BODY, words.get(j)));
+                }
+            }
+            b.add(alternatives.toArray(new Term[0]), at++);
+        }
+        return at < 2 ? null : b.build();
     }
 
     private static Query withFilters(Query main, NoteFilters filters) {
@@ -909,50 +1067,14 @@ public final class NotesStore implements Closeable {
         return b.build();
     }
 
-    private String[] snippets(IndexSearcher s, Query query, TopDocs top, Map<Integer, FiledNote> notes) throws IOException {
-        if (top.scoreDocs.length == 0) return new String[0];
-        UnifiedHighlighter h = new BodyFromSource(notes, UnifiedHighlighter.builder(s, indexAnalyzer)
-                .withFormatter(new DefaultPassageFormatter("**", "**", " … ", false))
-                .withMaxLength(20_000));
-        String[] out = h.highlight(NoteDocuments.BODY, query, top, 2);
-        for (int i = 0; i < out.length; i++) {
-            if (out[i] != null) out[i] = trimSnippet(out[i].replaceAll("\\s+", " ").strip());
-        }
-        return out;
-    }
-
     /**
-     * A highlighter that takes the body text from the notes already parsed for the hits (or the stored
-     * note source) instead of a stored copy of the body: the index keeps the text once, and the
-     * highlighter re-analyses the {@link NoteFormat#plainText} of the body of each hit shown.
+     * The shown passage of a hit: its best two sentences with the query's words marked, cut to
+     * about two lines; null (the caller shows the summary) when none of the words is in the body.
      */
-    private static final class BodyFromSource extends UnifiedHighlighter {
-        private final Map<Integer, FiledNote> parsed;
-
-        BodyFromSource(Map<Integer, FiledNote> parsed, UnifiedHighlighter.Builder builder) {
-            super(builder);
-            this.parsed = parsed;
-        }
-
-        @Override
-        protected List<CharSequence[]> loadFieldValues(String[] fields, org.apache.lucene.search.DocIdSetIterator docIter,
-                                                       int cacheCharsThreshold) throws IOException {
-            List<CharSequence[]> out = new ArrayList<>();
-            StoredFields stored = null;
-            for (int doc = docIter.nextDoc(); doc != org.apache.lucene.search.DocIdSetIterator.NO_MORE_DOCS; doc = docIter.nextDoc()) {
-                FiledNote f = parsed.get(doc);
-                if (f == null) {
-                    if (stored == null) stored = searcher.storedFields();
-                    f = filed(stored.document(doc));
-                }
-                CharSequence[] values = new CharSequence[fields.length];
-                for (int i = 0; i < fields.length; i++) {
-                    values[i] = NoteDocuments.BODY.equals(fields[i]) ? NoteFormat.plainText(f.note().body()) : "";
-                }
-                out.add(values);
-            }
-            return out;
-        }
+    private String snippet(FiledNote f, Set<String> marks) {
+        if (marks.isEmpty()) return null;
+        String passages = Snippets.pick(NoteFormat.plainText(f.note().body()), marks, 2);
+        return passages == null ? null : trimSnippet(passages.replaceAll("\\s+", " ").strip());
     }
 
     /** Keeps a snippet to about two lines, starting shortly before the first highlight, cut at words. */

@@ -46,30 +46,20 @@ public final class TradeAnalyzer extends Analyzer {
 
     private final boolean querySide;
     private final SynonymMap synonyms;
-    private final boolean dropStopWords;
 
-    private TradeAnalyzer(boolean querySide, SynonymMap synonyms, boolean dropStopWords) {
+    private TradeAnalyzer(boolean querySide, SynonymMap synonyms) {
         this.querySide = querySide;
         this.synonyms = synonyms;
-        this.dropStopWords = dropStopWords;
     }
 
     /** The chain used to index notes: no synonyms, compound parts stacked. */
     public static TradeAnalyzer forIndexing() {
-        return new TradeAnalyzer(false, null, false);
+        return new TradeAnalyzer(false, null);
     }
 
     /** The chain used for user queries: compounds kept exact, synonyms expanded. */
     public static TradeAnalyzer forQueries() {
-        return new TradeAnalyzer(true, loadSynonyms(), false);
-    }
-
-    /**
-     * The query chain without English stop words at its end: for choosing which words to mark in a
-     * snippet, so that "a" and "the" of a typed question are searched but not highlighted.
-     */
-    public static TradeAnalyzer forHighlighting() {
-        return new TradeAnalyzer(true, loadSynonyms(), true);
+        return new TradeAnalyzer(true, loadSynonyms());
     }
 
     @Override
@@ -77,7 +67,6 @@ public final class TradeAnalyzer extends Analyzer {
         Tokenizer source = new TradeTokenizer();
         TokenStream s = baseChain(source, !querySide);
         if (querySide && synonyms != null) s = new SynonymWeightFilter(new SynonymGraphFilter(s, synonyms, true), SYNONYM_WEIGHT);
-        if (dropStopWords) s = new org.apache.lucene.analysis.StopFilter(s, org.apache.lucene.analysis.en.EnglishAnalyzer.ENGLISH_STOP_WORDS_SET);
         return new TokenStreamComponents(source, s);
     }
 
@@ -86,7 +75,15 @@ public final class TradeAnalyzer extends Analyzer {
         return new LowerCaseFilter(in);
     }
 
-    private static TokenStream baseChain(Tokenizer source, boolean indexSide) {
+    /**
+     * The index chain after {@code in}, for {@link Snippets}, which puts a filter between the
+     * tokenizer and the rest (so it cannot use the analyzer's reusable chain).
+     */
+    static TokenStream indexChainAfter(TokenStream in) {
+        return baseChain(in, true);
+    }
+
+    private static TokenStream baseChain(TokenStream source, boolean indexSide) {
         TokenStream s = new LowerCaseFilter(source);
         s = new ASCIIFoldingFilter(s);
         s = new TradeTokenFilter(s, indexSide);

@@ -131,11 +131,16 @@ final class TradeTokenizer extends Tokenizer {
         return isDigit(c) || (c == '.' && i + 1 < n && isDigit(text.charAt(i + 1)));
     }
 
+    /** {@code r}, {@code cr}, {@code sr} or {@code csr} in any case; compared char by char, as most words of three letters or fewer pass here. */
     private boolean isRadiusSymbol(int start, int end) {
         int len = end - start;
         if (len < 1 || len > 3) return false;
-        String s = text.substring(start, end).toLowerCase(java.util.Locale.ROOT);
-        return s.equals("r") || s.equals("cr") || s.equals("sr") || s.equals("csr");
+        char last = Character.toLowerCase(text.charAt(end - 1));
+        if (last != 'r') return false;
+        if (len == 1) return true;
+        char first = Character.toLowerCase(text.charAt(start));
+        if (len == 2) return first == 'c' || first == 's';
+        return first == 'c' && Character.toLowerCase(text.charAt(start + 1)) == 's';
     }
 
     private static boolean isDigit(char c) {

@@ -43,6 +43,7 @@ public final class NotesHarness {
     private NotesHarness() {}
 
     public static void main(String[] args) throws Exception {
+        long mainEntered = System.nanoTime();
         if (args.length < 2) {
             System.err.println("usage: NotesHarness build|cold|warm FOLDER [COUNT]");
             System.exit(2);
@@ -57,6 +58,8 @@ public final class NotesHarness {
             case "warm": warm(pack, index); break;
             default: throw new IllegalArgumentException(args[0]);
         }
+        long jvmUpAtMain = ManagementFactory.getRuntimeMXBean().getUptime() - (System.nanoTime() - mainEntered) / 1_000_000;
+        System.out.printf("JVM start until main() (not part of the figures above): about %d ms%n", jvmUpAtMain);
         System.out.printf("ran within a %d MB heap; peak heap used %.1f MB (sum of the pools' peaks, an upper bound)%n",
                 Runtime.getRuntime().maxMemory() / (1024 * 1024), peakHeapMb());
     }
@@ -104,6 +107,9 @@ public final class NotesHarness {
     }
 
     private static void coldUnchecked(Path pack, Path index) {
+        java.lang.management.ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        long cpuMain0 = threads.getCurrentThreadCpuTime();
+        long cpuAll0 = processCpuNanos();
         long p0 = System.nanoTime();
         PackStack stack = stack(pack);
         long t0 = System.nanoTime();
@@ -111,6 +117,8 @@ public final class NotesHarness {
             long opened = System.nanoTime();
             SearchResult r = store.search("fillet fatigue shaft", NoteFilters.none(), 10, false);
             long searched = System.nanoTime();
+            long cpuMain1 = threads.getCurrentThreadCpuTime();
+            long cpuAll1 = processCpuNanos();
             IndexReport refreshed = store.refreshInBackground().join();
             long checked = System.nanoTime();
             System.out.printf("opening the pack (pack.json, first use of the JSON library; not the notes store): %.0f ms%n",
@@ -119,6 +127,8 @@ public final class NotesHarness {
                     + " then refreshInBackground() until done: %.0f ms (%s)%n",
                     (opened - t0) / 1e6, (searched - opened) / 1e6, (searched - t0) / 1e6, r.hits().size(),
                     (checked - searched) / 1e6, refreshed.kind());
+            System.out.printf("CPU time from opening the pack to the end of the first search: process %.0f ms (all threads, JIT"
+                    + " and GC included), main thread %.0f ms%n", (cpuAll1 - cpuAll0) / 1e6, (cpuMain1 - cpuMain0) / 1e6);
         }
         for (int round = 1; round <= 3; round++) {
             long t1 = System.nanoTime();

@@ -1,0 +1,62 @@
+package org.arcwright.notes;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.util.Set;
+import org.junit.jupiter.api.Test;
+
+/** The snippet under a hit: the sentences holding the query's words, with those words marked. */
+class SnippetsTest {
+    private static final TradeAnalyzer QUERY = TradeAnalyzer.forQueries();
+
+    private static String snippet(String query, String body) {
+        Set<String> terms = Snippets.markTerms(QUERY, NoteDocuments.BODY, query);
+        return Snippets.pick(body, terms, 2);
+    }
+
+    @Test
+    void theSentenceWithMostQueryWordsIsShownWithTheWordsMarked() {
+        String body = "Drawings vary. The shaft shoulder needs a generous fillet for fatigue. Paint is grey.";
+        assertThat(snippet("fillet fatigue shaft", body))
+                .isEqualTo("The **shaft** shoulder needs a generous **fillet** for **fatigue**.");
+    }
+
+    @Test
+    void twoPassagesKeepTheNotesOrderAndAreJoinedByAGap() {
+        String body = "A fillet here.\nNothing relevant.\nThe shaft there.\nMore filler.";
+        assertThat(snippet("fillet shaft", body)).isEqualTo("A **fillet** here." + Snippets.GAP + "The **shaft** there.");
+    }
+
+    @Test
+    void aRadiusCalloutIsMarkedWhole() {
+        assertThat(snippet("R0.5", "Break the edge. Use R0.5 on the lip.")).isEqualTo("Use **R0.5** on the lip.");
+    }
+
+    @Test
+    void stemmingAndSynonymsFindTheWordsAsTheSearchDoes() {
+        assertThat(snippet("fillets", "Blend the lip. Nothing else.")).isEqualTo("**Blend** the lip.");
+    }
+
+    @Test
+    void stopWordsOfAQuestionAreNotMarked() {
+        assertThat(snippet("kt at the minimum radius", "Check Kt at the minimum radius."))
+                .isEqualTo("Check **Kt** at the **minimum** **radius**.");
+    }
+
+    @Test
+    void wordsWhoseStemChangesTheirEndAreStillMarked() {
+        assertThat(snippet("relational sensibility", "Relations matter. Sensible radii, happily."))
+                .isEqualTo("**Relations** matter." + Snippets.GAP + "**Sensible** radii, happily.");
+    }
+
+    @Test
+    void aBodyWithoutTheWordsGivesNoSnippet() {
+        assertThat(snippet("gasket", "Nothing about it here.")).isNull();
+    }
+
+    @Test
+    void sentencesEndAtStopsFollowedBySpaceNotInsideNumbers() {
+        int[] b = Snippets.sentenceBounds("Use R0.5 here. Then 2.5 there.");
+        assertThat(b).containsExactly(0, 14, 15, 30);
+    }
+}
