@@ -6,7 +6,6 @@ import javax.swing.JFrame;
 import javax.swing.SwingUtilities;
 import org.arcwright.app.model.ConfigLocation;
 import org.arcwright.app.model.Settings;
-import org.arcwright.app.shell.Icons;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.app.shell.Themes;
 
@@ -45,13 +44,10 @@ public final class DesktopApp {
         Themes themes = new Themes();
         themes.install(s.theme());
         String probe = System.getProperty(PROBE_PROPERTY);
-        Icons.prepare();
         SwingUtilities.invokeLater(() -> {
             MainWindow w = show(services.join(), themes, s, opening.join());
             if (probe != null) whenUsable(w, "exit".equals(probe));
         });
-        // this thread is idle from here on: it parses the icons while the event thread builds the window
-        Icons.preload();
     }
 
     private static void readAhead(java.nio.file.Path config, CompletableFuture<AppServices> services,
