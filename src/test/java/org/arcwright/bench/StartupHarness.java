@@ -145,8 +145,16 @@ public final class StartupHarness {
             }
         }
         if (!p.waitFor(30, TimeUnit.SECONDS)) p.destroyForcibly();
+        deleteTree(config);
         if (usable == null || complete == null) throw new IllegalStateException("no usable and complete markers from " + cmd);
         return new Sample(usable[0], usable[1], complete[0], complete[1]);
+    }
+
+    /** Removes a run's config directory, so that repeated harness runs do not pile them up under target/bench. */
+    private static void deleteTree(Path dir) throws IOException {
+        try (java.util.stream.Stream<Path> files = Files.walk(dir)) {
+            for (Path f : files.sorted(java.util.Comparator.reverseOrder()).toList()) Files.deleteIfExists(f);
+        }
     }
 
     /** Wall ms since {@code start} and the CPU ms the child printed on a marker line. */
