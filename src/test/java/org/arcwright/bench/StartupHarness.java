@@ -24,7 +24,9 @@ import java.util.jar.Manifest;
  * without a class-data-sharing archive made by a training run (as {@code ./arcwright} does); and, for
  * Arcwright, to the Decide form built just after. Each child also reports its own CPU time at that
  * moment, which depends far less than wall time on what else the machine is doing. The system property
- * {@code startup.flags} replaces the JVM options for both, to try others side by side.
+ * {@code startup.flags} replaces the JVM options for both, to try others side by side; {@code startup.before}
+ * names another build's jar (e.g. a copy of the previous commit's), timed in the same rounds with its
+ * own archive, for a before/after comparison at the same load.
  *
  * <p>Run on a display (e.g. {@code xvfb-run -a}) after {@code mvn -B -o -q package -DskipTests}:
  * {@code xvfb-run -a mvn -B -o -q -Pharness test-compile exec:exec -Dharness=org.arcwright.bench.StartupHarness}.
@@ -53,6 +55,14 @@ public final class StartupHarness {
         System.out.printf(Locale.ROOT, "load average at start: %s%n", Files.readString(Path.of("/proc/loadavg")).trim());
         time(List.of("-XX:ArchiveClassesAtExit=" + appCds), appJar, "exit", bench);
         time(List.of("-XX:ArchiveClassesAtExit=" + bareCds), bareJar, "exit", bench);
+        String beforeJar = System.getProperty("startup.before");
+        Path before = beforeJar == null ? null : Path.of(beforeJar);
+        Path beforeCds = bench.resolve("before.jsa");
+        if (before != null) {
+            Files.deleteIfExists(beforeCds);
+            time(List.of("-XX:ArchiveClassesAtExit=" + beforeCds), before, "exit", bench);
+        }
+        List<Sample> previous = new ArrayList<>();
         List<Sample> app = new ArrayList<>();
         List<Sample> bare = new ArrayList<>();
         List<Sample> appCold = new ArrayList<>();
@@ -60,6 +70,7 @@ public final class StartupHarness {
         for (int i = 0; i < runs; i++) {
             bare.add(time(List.of("-XX:SharedArchiveFile=" + bareCds), bareJar, "exit", bench));
             app.add(time(List.of("-XX:SharedArchiveFile=" + appCds), appJar, "exit", bench));
+            if (before != null) previous.add(time(List.of("-XX:SharedArchiveFile=" + beforeCds), before, "exit", bench));
             bareCold.add(time(List.of(), bareJar, "exit", bench));
             appCold.add(time(List.of(), appJar, "exit", bench));
         }
@@ -69,11 +80,16 @@ public final class StartupHarness {
         System.out.println("|---|---:|---:|---:|---:|---:|---:|");
         row("bare JFrame, CDS archive", bare);
         row("Arcwright window, CDS archive (as ./arcwright)", app);
+        if (before != null) row("Arcwright before (" + before.getFileName() + "), CDS archive", previous);
         row("bare JFrame, JDK default CDS only", bareCold);
         row("Arcwright window, JDK default CDS only", appCold);
         System.out.printf(Locale.ROOT, "ratio Arcwright/bare with CDS, wall medians: %.2f, wall minima: %.2f, CPU medians: %.2f%n",
                 median(wall(app)) / median(wall(bare)), Collections.min(wall(app)) / Collections.min(wall(bare)),
                 median(cpu(app)) / median(cpu(bare)));
+        if (before != null) {
+            System.out.printf(Locale.ROOT, "ratio before/bare with CDS, wall medians: %.2f, CPU medians: %.2f%n",
+                    median(wall(previous)) / median(wall(bare)), median(cpu(previous)) / median(cpu(bare)));
+        }
         System.out.printf(Locale.ROOT, "ratio Arcwright/bare without archive, wall medians: %.2f, CPU medians: %.2f%n",
                 median(wall(appCold)) / median(wall(bareCold)), median(cpu(appCold)) / median(cpu(bareCold)));
     }
@@ -129,8 +145,16 @@ public final class StartupHarness {
             }
         }
         if (!p.waitFor(30, TimeUnit.SECONDS)) p.destroyForcibly();
+        deleteTree(config);
         if (usable == null || complete == null) throw new IllegalStateException("no usable and complete markers from " + cmd);
         return new Sample(usable[0], usable[1], complete[0], complete[1]);
+    }
+
+    /** Removes a run's config directory, so that repeated harness runs do not pile them up under target/bench. */
+    private static void deleteTree(Path dir) throws IOException {
+        try (java.util.stream.Stream<Path> files = Files.walk(dir)) {
+            for (Path f : files.sorted(java.util.Comparator.reverseOrder()).toList()) Files.deleteIfExists(f);
+        }
     }
 
     /** Wall ms since {@code start} and the CPU ms the child printed on a marker line. */

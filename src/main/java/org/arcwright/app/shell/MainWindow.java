@@ -158,12 +158,22 @@ public final class MainWindow {
                 fallback.start();
             }
         });
-        decideTab.whenBuilt(p -> javax.swing.SwingUtilities.invokeLater(this::loadPacksOnce));
+        decideTab.whenBuilt(p -> javax.swing.SwingUtilities.invokeLater(() -> {
+            setWindowIcon();
+            loadPacksOnce();
+        }));
         frame.setVisible(true);
         frame.toFront();
         partPanel.table().requestFocusInWindow();
         restoreWork();
         status.progress("Loading practice packs…", -1, null);
+    }
+
+    /** The taskbar icon, drawn from its SVG after the first frame rather than before it. */
+    private void setWindowIcon() {
+        if (frame.getIconImages().isEmpty()) {
+            frame.setIconImages(List.of(((com.formdev.flatlaf.extras.FlatSVGIcon) Icons.get("zone", 32)).getImage()));
+        }
     }
 
     /** Runs {@code then} on the event thread once the Decide form exists (at once if it does). */
@@ -189,8 +199,8 @@ public final class MainWindow {
             @Override
             public void windowClosing(WindowEvent e) { quit(); }
         });
-        frame.setIconImages(List.of(((com.formdev.flatlaf.extras.FlatSVGIcon) Icons.get("zone", 32)).getImage()));
         frame.setJMenuBar(menuBar());
+        bindShortcuts();
         partPanel = new PartPanel(session, List.of(actions.get("part.add"), actions.get("part.duplicate"),
                 actions.get("part.delete")));
         // the form's sixty-odd controls are built just after the first paint, not before it
@@ -250,25 +260,50 @@ public final class MainWindow {
         return bar;
     }
 
+    /**
+     * The menus, each filled with its items when first opened, so the first frame builds five menus
+     * rather than thirty items; the shortcuts work from the first frame all the same, bound on the
+     * root pane from the command list (see {@link #bindShortcuts}).
+     */
     private JMenuBar menuBar() {
         JMenuBar bar = new JMenuBar();
         Map<String, Character> mnemonics = Map.of("File", 'F', "Edit", 'E', "Part", 'P', "View", 'V', "Help", 'H');
         for (String group : catalog.groups()) {
             JMenu menu = new JMenu(group);
+            menu.setName("menu." + group);
             Character m = mnemonics.get(group);
             if (m != null) menu.setMnemonic(m);
-            for (Command c : catalog.group(group)) {
-                menu.add(new JMenuItem(actions.get(c.id())));
-                if (c.id().equals("file.open")) menu.add(recentMenu);
-            }
             menu.addMenuListener(new javax.swing.event.MenuListener() {
-                public void menuSelected(javax.swing.event.MenuEvent e) { actions.refresh(); }
+                public void menuSelected(javax.swing.event.MenuEvent e) {
+                    if (menu.getMenuComponentCount() == 0) fillMenu(menu, group);
+                    actions.refresh();
+                }
                 public void menuDeselected(javax.swing.event.MenuEvent e) { }
                 public void menuCanceled(javax.swing.event.MenuEvent e) { }
             });
             bar.add(menu);
         }
         return bar;
+    }
+
+    private void fillMenu(JMenu menu, String group) {
+        for (Command c : catalog.group(group)) {
+            JMenuItem item = new JMenuItem(actions.get(c.id()));
+            item.setName("item." + c.id());
+            menu.add(item);
+            if (c.id().equals("file.open")) menu.add(recentMenu);
+        }
+    }
+
+    /** Every command's shortcut, bound on the root pane so it works before any menu was opened. */
+    private void bindShortcuts() {
+        javax.swing.InputMap keys = frame.getRootPane().getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW);
+        javax.swing.ActionMap map = frame.getRootPane().getActionMap();
+        for (Command c : catalog.all()) {
+            if (c.shortcut() == null) continue;
+            keys.put(javax.swing.KeyStroke.getKeyStroke(c.shortcut()), c.id());
+            map.put(c.id(), actions.get(c.id()));
+        }
     }
 
     private Map<String, Icon> icons() {

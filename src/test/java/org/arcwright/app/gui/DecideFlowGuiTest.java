@@ -90,4 +90,17 @@ class DecideFlowGuiTest {
         GuiSupport.screenshot(window.frame(), "zone-dark");
         GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
     }
+
+    /** Menus are filled when first opened; their items show the shortcuts bound since the first frame. */
+    @Test
+    void aMenuShowsItsCommandsAndShortcutsWhenOpened() {
+        fixture.menuItem("menu.Edit").click();
+        javax.swing.JMenuItem undo = (javax.swing.JMenuItem) fixture.menuItem("item.edit.undo").target();
+        assertThat(undo.getAccelerator()).isEqualTo(javax.swing.KeyStroke.getKeyStroke("ctrl Z"));
+        assertThat(GuiSupport.onEdt(() -> window.frame().getJMenuBar().getMenu(1).getItemCount()))
+                .isEqualTo(GuiSupport.onEdt(() -> window.catalog().group("Edit").size()));
+        robot.pressAndReleaseKey(java.awt.event.KeyEvent.VK_ESCAPE);
+        robot.pressAndReleaseKey(java.awt.event.KeyEvent.VK_ESCAPE);
+        robot.waitForIdle();
+    }
 }
