@@ -18,8 +18,8 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 import picocli.CommandLine.Spec;
 
-/** {@code arcwright note TEMPLATE PART}: fills one drawing-note template from a part worksheet. */
-@Command(name = "note", mixinStandardHelpOptions = true,
+/** {@code arcwright drawing-note TEMPLATE PART}: fills one drawing-note template from a part worksheet. */
+@Command(name = "drawing-note", mixinStandardHelpOptions = true,
         description = {"Fills one drawing-note template from a part worksheet and prints the drawing note.",
                 "TEMPLATE is a template name from the packs (e.g. title-block-notes, callout-note, edge-break-notes,",
                 "inspection-plan) or the path of a .mustache file being written."})
@@ -41,7 +41,7 @@ final class NoteCommand implements Callable<Integer> {
 
     @Override
     public Integer call() throws Exception {
-        PackStack stack = packs.load("note", spec.commandLine().getErr());
+        PackStack stack = packs.load("drawing-note", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         NoteTemplates templates = NoteTemplates.load(stack);
         if (template.endsWith(NoteTemplates.EXTENSION)) {

@@ -72,10 +72,10 @@ class OutputCommandsTest {
 
     @Test
     void noteFillsABuiltInTemplate() {
-        Run r = run("note", "edge-break-notes", DEMO);
+        Run r = run("drawing-note", "edge-break-notes", DEMO);
         assertThat(r.code()).isZero();
         assertThat(r.out()).isEqualTo("EDGES:\n- F4 Shaft end edge round: BREAK EDGE R1 ±0.2 (ISO 2768-m).\n");
-        Run one = run("note", "callout-note", DEMO, "--feature", "F2");
+        Run one = run("drawing-note", "callout-note", DEMO, "--feature", "F2");
         assertThat(one.out()).startsWith("F2 Bearing seat fillet").doesNotContain("F1 ");
     }
 
@@ -83,7 +83,7 @@ class OutputCommandsTest {
     void noteRejectsATemplateFileNamingAnUnknownField(@TempDir Path dir) throws Exception {
         Path t = dir.resolve("mine.mustache");
         Files.writeString(t, "PART {{part.number}}\nCLASS {{titleBlock.klass}}\n");
-        Run r = run("note", t.toString(), DEMO);
+        Run r = run("drawing-note", t.toString(), DEMO);
         assertThat(r.code()).isEqualTo(Cli.BAD_INPUT);
         assertThat(r.err()).contains("mine.mustache:2:7", "titleBlock.klass", "toleranceClass");
     }
