@@ -18,6 +18,28 @@ public sealed interface ZoneSpec {
 
     BlendKind kind();
 
+    /**
+     * A starting magnification for this zone: the largest of 1, 2, 3, 5, 10, 20, 30, 50, 100 at which
+     * the magnified zone is no wider than 60 % of the nominal radius, so the limit arcs keep their
+     * shape (a CR 1.8-2.2 on R2 drawn ×10 would shrink its smaller arc to the sharp corner) while a
+     * narrow profile zone is still visible.
+     */
+    default double suggestedMagnification() {
+        double width;
+        if (this instanceof LimitArcs) {
+            LimitArcs a = (LimitArcs) this;
+            width = Math.max(a.max() - nominal(), 0) + Math.max(nominal() - a.min(), 0);
+        } else if (this instanceof Band) {
+            width = ((Band) this).zone();
+        } else {
+            return 1;
+        }
+        if (!(width > 0) || !(nominal() > 0)) return 1;
+        double best = 1;
+        for (double m : new double[] {2, 3, 5, 10, 20, 30, 50, 100}) if (m * width <= 0.6 * nominal() * (1 + 1e-9)) best = m;
+        return best;
+    }
+
     /** Limit arcs of a radius tolerance. {@code min} may be 0 for a MAX-only radius. */
     record LimitArcs(double nominal, double min, double max, double angleDeg, BlendKind kind, boolean controlled)
             implements ZoneSpec {}

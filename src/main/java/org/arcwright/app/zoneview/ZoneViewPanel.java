@@ -22,6 +22,8 @@ public final class ZoneViewPanel extends JPanel {
     private final ZoneCanvas canvas = new ZoneCanvas();
     private final JSlider magnification = new JSlider(0, 100, 50);
     private final JLabel magnificationText = new JLabel();
+    /** The feature and zone the slider was last set for. */
+    private String framed = "";
     private final JLabel what = new JLabel();
 
     public ZoneViewPanel(WorksheetSession session) {
@@ -63,6 +65,13 @@ public final class ZoneViewPanel extends JPanel {
         redraw();
     }
 
+    /** Moves the slider to {@code factor} (1 to 100), which redraws the view. */
+    public void setMagnification(double factor) {
+        int value = (int) Math.round(50 * Math.log10(Math.max(1, Math.min(100, factor))));
+        if (magnification.getValue() == value) redraw();
+        else magnification.setValue(value);
+    }
+
     /** The magnification the slider stands at: 1 to 100 on a logarithmic scale. */
     public double magnification() {
         return Math.round(Math.pow(10, magnification.getValue() / 50.0));
@@ -78,6 +87,13 @@ public final class ZoneViewPanel extends JPanel {
         }
         RadiusFeature feature = f.get();
         ZoneScene scene = ZoneScene.of(feature, session.measured(feature.id()), magnification());
+        String shown = feature.id() + "|" + scene.picture().spec();
+        if (!shown.equals(framed)) {
+            // a new feature or zone starts at the magnification that suits it; the slider then stays where the user puts it
+            framed = shown;
+            setMagnification(scene.picture().spec().suggestedMagnification());
+            return;
+        }
         what.setText(scene.heading());
         canvas.show(scene, feature.designCase().units().symbol(), feature.designCase().kind());
     }

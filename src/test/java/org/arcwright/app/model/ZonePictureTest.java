@@ -47,4 +47,17 @@ class ZonePictureTest {
         assertThat(p.lower()).isEmpty();
         assertThat(p.crescentWidth()).isNaN();
     }
+
+    @Test
+    void startingMagnificationKeepsTheMagnifiedZoneWithinSixtyPercentOfTheRadius() {
+        // CR 1.8-2.2 on R2: band 0.4, so x3 (at x10 the smaller limit arc would shrink to the corner)
+        assertThat(new ZoneSpec.LimitArcs(2, 1.8, 2.2, 90, BlendKind.FILLET, true).suggestedMagnification()).isEqualTo(3);
+        // profile 0.05 on R2: x20 draws a 1.0 band, x30 would draw 1.5 > 1.2
+        assertThat(new ZoneSpec.Band(2, 0.05, 0.025, 90, BlendKind.ROUND).suggestedMagnification()).isEqualTo(20);
+        // a wide band on a small radius stays at true scale; the nominal alone needs none
+        assertThat(new ZoneSpec.LimitArcs(0.4, 0.2, 0.6, 90, BlendKind.ROUND, false).suggestedMagnification()).isEqualTo(1);
+        assertThat(new ZoneSpec.NominalOnly(2, 90, BlendKind.FILLET).suggestedMagnification()).isEqualTo(1);
+        // a MAX-only radius counts only the side it limits
+        assertThat(new ZoneSpec.LimitArcs(1, 0, 1.02, 90, BlendKind.FILLET, false).suggestedMagnification()).isEqualTo(1);
+    }
 }
