@@ -3,14 +3,9 @@ package org.arcwright.app.gui;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
-import org.arcwright.app.AppServices;
-import org.arcwright.app.DesktopApp;
-import org.arcwright.app.model.Settings;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
-import org.assertj.swing.core.BasicRobot;
-import org.assertj.swing.core.Robot;
 import org.assertj.swing.fixture.FrameFixture;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
@@ -29,25 +24,22 @@ class CheckStressNotesGuiTest {
     @TempDir
     static Path config;
 
+    private static GuiSupport.OpenWindow opened;
     private static MainWindow window;
     private static FrameFixture fixture;
-    private static Robot robot;
 
     @BeforeAll
     static void openWindow() {
-        GuiSupport.requireDisplay();
-        AppServices services = AppServices.over(config);
-        window = GuiSupport.onEdt(() -> DesktopApp.start(services, Settings.DEFAULTS.withTheme(ThemeChoice.LIGHT)));
-        robot = BasicRobot.robotWithCurrentAwtHierarchy();
-        fixture = new FrameFixture(robot, window.frame());
+        opened = GuiSupport.openWindow(config);
+        window = opened.window();
+        fixture = opened.fixture();
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.notesPanel().queryField().isEnabled()), 60);
     }
 
     @AfterAll
     static void closeWindow() {
-        if (fixture != null) fixture.cleanUp();
-        // close the notes index and let background writes finish before the temporary folder goes
-        if (window != null) GuiSupport.onEdt(() -> window.dispose());
+        // before the temporary folder goes
+        if (opened != null) opened.close();
     }
 
     @Test

@@ -5,13 +5,9 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.nio.file.Path;
 import javax.swing.JFrame;
 import javax.swing.JTable;
-import org.arcwright.app.AppServices;
-import org.arcwright.app.DesktopApp;
-import org.arcwright.app.model.Settings;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
-import org.assertj.swing.core.BasicRobot;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.fixture.FrameFixture;
 import org.junit.jupiter.api.AfterAll;
@@ -27,28 +23,24 @@ class DecideFlowGuiTest {
     @TempDir
     static Path config;
 
+    private static GuiSupport.OpenWindow opened;
     private static MainWindow window;
     private static FrameFixture fixture;
     private static Robot robot;
 
     @BeforeAll
     static void openWindow() {
-        GuiSupport.requireDisplay();
-        AppServices services = AppServices.over(config);
-        window = GuiSupport.onEdt(() -> DesktopApp.start(services, Settings.DEFAULTS.withTheme(ThemeChoice.LIGHT)));
-        robot = BasicRobot.robotWithCurrentAwtHierarchy();
-        fixture = new FrameFixture(robot, window.frame());
-        long end = System.nanoTime() + 60_000_000_000L;
-        while (System.nanoTime() < end && !GuiSupport.onEdt(() -> window.statusLine().message().startsWith("Ready"))) {
-            GuiSupport.settle(100);
-        }
+        opened = GuiSupport.openWindow(config);
+        window = opened.window();
+        robot = opened.robot();
+        fixture = opened.fixture();
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.statusLine().message().startsWith("Ready")), 60);
     }
 
     @AfterAll
     static void closeWindow() {
-        if (fixture != null) fixture.cleanUp();
-        // close the notes index and let background writes finish before the temporary folder goes
-        if (window != null) GuiSupport.onEdt(() -> window.dispose());
+        // before the temporary folder goes
+        if (opened != null) opened.close();
     }
 
     @Test

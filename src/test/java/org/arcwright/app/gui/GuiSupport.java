@@ -13,14 +13,40 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 import javax.imageio.ImageIO;
 import javax.swing.SwingUtilities;
+import org.arcwright.app.AppServices;
+import org.arcwright.app.DesktopApp;
+import org.arcwright.app.model.Settings;
+import org.arcwright.app.model.ThemeChoice;
+import org.arcwright.app.shell.MainWindow;
+import org.assertj.swing.core.BasicRobot;
+import org.assertj.swing.core.Robot;
+import org.assertj.swing.fixture.FrameFixture;
 import org.junit.jupiter.api.Assumptions;
 
 /**
- * What every GUI test needs: a display (failing, not skipping, when CI expects one), work on the
- * event thread, and screenshots under {@code target/screenshots}.
+ * What every GUI test needs: a display (failing, not skipping, when CI expects one), the real window
+ * over a test config folder, work on the event thread, and screenshots under {@code target/screenshots}.
  */
 final class GuiSupport {
     private GuiSupport() {}
+
+    /** The window under test, the robot that drives it and the fixture that finds its parts. */
+    record OpenWindow(MainWindow window, Robot robot, FrameFixture fixture) {
+        /** Releases the robot, then closes the notes index and lets background writes finish. */
+        void close() {
+            fixture.cleanUp();
+            onEdt(() -> window.dispose());
+        }
+    }
+
+    /** Starts the real window, in the light look, over the config folder {@code config}. */
+    static OpenWindow openWindow(Path config) {
+        requireDisplay();
+        AppServices services = AppServices.over(config);
+        MainWindow window = onEdt(() -> DesktopApp.start(services, Settings.DEFAULTS.withTheme(ThemeChoice.LIGHT)));
+        Robot robot = BasicRobot.robotWithCurrentAwtHierarchy();
+        return new OpenWindow(window, robot, new FrameFixture(robot, window.frame()));
+    }
 
     /** Fails under CI without a display; skips on a developer machine without one. */
     static void requireDisplay() {
