@@ -63,6 +63,7 @@ public final class DecidePanel extends JPanel {
     private final Map<Question, WrapLabel> notes = new EnumMap<>(Question.class);
     private final JPanel figures = new JPanel(new MigLayout("insets 0, wrap 2, gap 12 2", "[][grow,fill]", ""));
     private final JLabel featureTitle = new JLabel();
+    private JScrollPane formScroll;
     private final JPanel cards = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 10", "[grow,fill]", ""));
     private final Timer adviseLater = new Timer(250, e -> adviseNow());
     private final javax.swing.JButton keep = new javax.swing.JButton("Keep these answers");
@@ -83,7 +84,8 @@ public final class DecidePanel extends JPanel {
         setName("decidePanel");
         adviseLater.setRepeats(false);
         add(Cautions.box(Cautions.ADVICE));
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, scroll(buildForm()), scroll(buildResults()));
+        formScroll = scroll(buildForm());
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, formScroll, scroll(buildResults()));
         split.setResizeWeight(0.45);
         split.addComponentListener(new java.awt.event.ComponentAdapter() {
             @Override
@@ -280,6 +282,9 @@ public final class DecidePanel extends JPanel {
             featureId = f.id();
             loadedCase = f.designCase();
             form.load(f.designCase());
+            // a feature's form opens at its first question; filling the text fields moved their carets,
+            // and a caret scrolls its field into view after the event that moved it
+            SwingUtilities.invokeLater(() -> formScroll.getViewport().setViewPosition(new java.awt.Point(0, 0)));
         } else {
             renderCards();
         }
