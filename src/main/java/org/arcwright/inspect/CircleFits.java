@@ -62,7 +62,7 @@ public final class CircleFits {
 
     /** Taubin's fit to the points {@code from..to-1}. */
     public static Circle taubin(double[] xs, double[] ys, int from, int to) {
-        Circle c = taubinOnePass(xs, ys, from, to);
+        Circle c = taubinOnePass(xs, ys, from, to, null);
         return c != null ? c : new Circle(Double.NaN, Double.NaN, Double.POSITIVE_INFINITY);
     }
 
@@ -72,9 +72,10 @@ public final class CircleFits {
      * subtracts terms of the size of the origin's offset from the centroid, so when that offset
      * exceeds twice the spread of the points, or the points are nearly collinear, the fit is redone
      * in two passes from the centroid, which also decides collinearity exactly as before. Null when
-     * the points are collinear or coincide.
+     * the points are collinear or coincide. When {@code offsets} is given, it receives
+     * {@code Σ(xᵢ - x0)} and {@code Σ(yᵢ - y0)} about that middle point.
      */
-    private static Circle taubinOnePass(double[] xs, double[] ys, int from, int to) {
+    private static Circle taubinOnePass(double[] xs, double[] ys, int from, int to, double[] offsets) {
         int n = to - from;
         double x0 = xs[from + n / 2], y0 = ys[from + n / 2];
         // two interleaved chains of sums so the additions overlap
@@ -99,6 +100,7 @@ public final class CircleFits {
             svz0 = Math.fma(v0, z0, svz0); szz0 = Math.fma(z0, z0, szz0);
         }
         // (u, v) = (X + ū, Y + v̄) with (X, Y) about the centroid; expand E[u z] and E[z²] and solve
+        if (offsets != null) { offsets[0] = su0 + su1; offsets[1] = sv0 + sv1; }
         double mu = (su0 + su1) / n, mv = (sv0 + sv1) / n, m2 = mu * mu + mv * mv;
         double mxx = (suu0 + suu1) / n - mu * mu, myy = (svv0 + svv1) / n - mv * mv;
         double mxy = (suv0 + suv1) / n - mu * mv, mz = mxx + myy;
@@ -111,6 +113,11 @@ public final class CircleFits {
         if (!(m2 <= 4 * mz) || !(lmin > 1e-12 * mz)) {
             double mx = 0, my = 0;
             for (int k = from; k < to; k++) { mx += xs[k]; my += ys[k]; }
+            if (offsets != null) {
+                double ox = 0, oy = 0;
+                for (int k = from; k < to; k++) { ox += xs[k] - x0; oy += ys[k] - y0; }
+                offsets[0] = ox; offsets[1] = oy;
+            }
             return taubinCentred(xs, ys, from, to, mx / n, my / n);
         }
         return taubinSolve(mxx, myy, mxy, mxz, myz, mzz, x0 + mu, y0 + mv);
@@ -168,9 +175,11 @@ public final class CircleFits {
      * <p>Passes: one over the points for Taubin's start, then one per Levenberg-Marquardt step. Each
      * step's pass is two loops: an element-wise loop writing the unit vector from the centre and the
      * residual of every point into three scratch arrays (allocated once per fit), which HotSpot's C2
-     * compiles to SIMD square roots and divisions, then a loop summing {@code JᵀJ}, {@code Jᵀe} and
+     * compiles to SIMD square roots and divisions, then a loop summing {@code JᵀJ}, {@code Σeᵢ} and
      * the cost with fused multiply-adds in two interleaved chains (sums stop a loop from being
-     * vectorised, so they are kept out of the first loop).
+     * vectorised, so they are kept out of the first loop). The other entries of {@code Jᵀe} need no
+     * sum of their own: {@code Σuᵢeᵢ = Σ(xᵢ - x0) - n·a - r·Σuᵢ}, the first sum kept from Taubin's
+     * pass.
      *
      * <p>Stopping rule: stop when a step is below 1e-15 of the scale ({@code |r|} plus the centre's
      * distance from the middle point of the set), i.e. at rounding. Gauss-Newton converges linearly
@@ -181,7 +190,8 @@ public final class CircleFits {
      */
     public static LeastSquaresCircle leastSquares(double[] xs, double[] ys, int n) {
         if (n < 3) throw InputProblem.ofField("points", "a circle needs at least 3 points, got " + n);
-        Circle start = taubinOnePass(xs, ys, 0, n);
+        double[] offsets = new double[2];
+        Circle start = taubinOnePass(xs, ys, 0, n, offsets);
         if (start == null) {
             requireCircular(xs, ys, n, "points");
             throw InputProblem.ofField("points", "the points are collinear; no circle fits them");
@@ -191,7 +201,7 @@ public final class CircleFits {
         double a = start.cx() - x0, b = start.cy() - y0, r = start.r();
         double[] ne = new double[9], trial = new double[9], d = new double[3];
         double[] ux = new double[n], uy = new double[n], res = new double[n];
-        double cost = normal(xs, ys, n, x0, y0, a, b, r, ne, ux, uy, res);
+        double cost = normal(xs, ys, n, x0, y0, a, b, r, offsets[0], offsets[1], ne, ux, uy, res);
         double lambda = 1e-6; // the Taubin start is close: begin nearly Gauss-Newton
         double lastStep = Double.POSITIVE_INFINITY;
         int it = 0;
@@ -207,7 +217,7 @@ public final class CircleFits {
                 it++;
                 break;
             }
-            double tc = normal(xs, ys, n, x0, y0, a + d[0], b + d[1], r + d[2], trial, ux, uy, res);
+            double tc = normal(xs, ys, n, x0, y0, a + d[0], b + d[1], r + d[2], offsets[0], offsets[1], trial, ux, uy, res);
             // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
             if (tc <= cost * (1 + 1e-15)) {
                 a += d[0]; b += d[1]; r += d[2];
@@ -263,7 +273,8 @@ public final class CircleFits {
     }
 
     /**
-     * Sum of squared residuals; fills JᵀJ (upper: 0..5) and Jᵀe (6..8). Row i of J is
+     * Sum of squared residuals; fills JᵀJ (upper: 0..5) and Jᵀe (6..8), given {@code sx}, {@code sy},
+     * the sums of {@code xᵢ - x0} and {@code yᵢ - y0}. Row i of J is
      * {@code (-uᵢ, -vᵢ, -1)} with {@code (uᵢ, vᵢ)} the unit vector from the centre to point i
      * (zero for a point at the centre), so the b-b entry {@code Σvᵢ² = n - Σuᵢ²} and r-r is n.
      * {@code ux}, {@code uy}, {@code res} are scratch of at least {@code n} entries, written first in
@@ -271,7 +282,7 @@ public final class CircleFits {
      * does not vectorise a loop that reads {@code xs[from + k]} and writes {@code ux[k]}.
      */
     private static double normal(double[] xs, double[] ys, int n, double x0, double y0, double a, double b, double r,
-                                 double[] ne, double[] ux, double[] uy, double[] res) {
+                                 double sx, double sy, double[] ne, double[] ux, double[] uy, double[] res) {
         for (int k = 0; k < n; k++) {
             double dx = xs[k] - x0 - a, dy = ys[k] - y0 - b;
             double dist = Math.sqrt(dx * dx + dy * dy);
@@ -281,15 +292,13 @@ public final class CircleFits {
             res[k] = dist - r;
         }
         double su0 = 0, su1 = 0, sv0 = 0, sv1 = 0, suu0 = 0, suu1 = 0, suv0 = 0, suv1 = 0;
-        double sue0 = 0, sue1 = 0, sve0 = 0, sve1 = 0, se0 = 0, se1 = 0, see0 = 0, see1 = 0;
+        double se0 = 0, se1 = 0, see0 = 0, see1 = 0;
         int k = 0;
         for (; k + 1 < n; k += 2) {
             double u0 = ux[k], v0 = uy[k], e0 = res[k], u1 = ux[k + 1], v1 = uy[k + 1], e1 = res[k + 1];
             su0 += u0; su1 += u1; sv0 += v0; sv1 += v1;
             suu0 = Math.fma(u0, u0, suu0); suu1 = Math.fma(u1, u1, suu1);
             suv0 = Math.fma(u0, v0, suv0); suv1 = Math.fma(u1, v1, suv1);
-            sue0 = Math.fma(u0, e0, sue0); sue1 = Math.fma(u1, e1, sue1);
-            sve0 = Math.fma(v0, e0, sve0); sve1 = Math.fma(v1, e1, sve1);
             se0 += e0; se1 += e1;
             see0 = Math.fma(e0, e0, see0); see1 = Math.fma(e1, e1, see1);
         }
@@ -297,12 +306,12 @@ public final class CircleFits {
             double u0 = ux[k], v0 = uy[k], e0 = res[k];
             su0 += u0; sv0 += v0;
             suu0 = Math.fma(u0, u0, suu0); suv0 = Math.fma(u0, v0, suv0);
-            sue0 = Math.fma(u0, e0, sue0); sve0 = Math.fma(v0, e0, sve0);
             se0 += e0; see0 = Math.fma(e0, e0, see0);
         }
-        double suu = suu0 + suu1;
-        ne[0] = suu; ne[1] = suv0 + suv1; ne[2] = su0 + su1; ne[3] = n - suu; ne[4] = sv0 + sv1; ne[5] = n;
-        ne[6] = -(sue0 + sue1); ne[7] = -(sve0 + sve1); ne[8] = -(se0 + se1);
+        double suu = suu0 + suu1, su = su0 + su1, sv = sv0 + sv1;
+        ne[0] = suu; ne[1] = suv0 + suv1; ne[2] = su; ne[3] = n - suu; ne[4] = sv; ne[5] = n;
+        // Σuᵢeᵢ = Σuᵢ(distᵢ - r) = Σdxᵢ - rΣuᵢ, and Σdxᵢ = Σ(xᵢ - x0) - n·a needs no pass
+        ne[6] = -((sx - n * a) - r * su); ne[7] = -((sy - n * b) - r * sv); ne[8] = -(se0 + se1);
         return see0 + see1;
     }
 

@@ -78,6 +78,9 @@ public class InspectBench {
     public Object leastSquares1k() { return CircleFits.leastSquares(blend1k.xs(), blend1k.ys(), blend1k.size()); }
 
     @Benchmark
+    public Object taubin1k() { return CircleFits.taubin(blend1k.xs(), blend1k.ys(), blend1k.size()); }
+
+    @Benchmark
     public Object leastSquares1kCommonsMathLM() {
         return ReferenceSolvers.leastSquaresCircle(blend1k.xs(), blend1k.ys(), blend1k.size(), taubin1k);
     }
