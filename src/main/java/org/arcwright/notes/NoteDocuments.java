@@ -8,18 +8,19 @@ import org.apache.lucene.document.BinaryDocValuesField;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.document.Field;
 import org.apache.lucene.document.FieldType;
+import org.apache.lucene.document.SortedSetDocValuesField;
 import org.apache.lucene.document.StoredField;
 import org.apache.lucene.document.StringField;
 import org.apache.lucene.document.TextField;
+import org.apache.lucene.facet.FacetField;
 import org.apache.lucene.facet.FacetsConfig;
-import org.apache.lucene.facet.sortedset.SortedSetDocValuesFacetField;
 import org.apache.lucene.util.BytesRef;
 import org.arcwright.pack.PackLayer;
 
 /** How a note becomes a Lucene document, and the field names of the index. */
 final class NoteDocuments {
     /** Bump when fields or analysis change: an index with another schema is rebuilt. */
-    static final String SCHEMA = "arcwright-notes-8";
+    static final String SCHEMA = "arcwright-notes-9";
 
     static final String ID = "id";
     static final String TITLE = "title";
@@ -56,6 +57,12 @@ final class NoteDocuments {
         return "f_" + f.key();
     }
 
+    /**
+     * The note's document. Facet values go straight into the sorted-set doc values that facet
+     * counting reads, as {@link FacetsConfig#build} would write them, without its drill-down terms:
+     * filters use the exact-value fields ({@link #filterField}), so those terms were written for
+     * every value of every note and never read, and {@code build} copied the document to do it.
+     */
     static Document toDocument(FacetsConfig config, Note note, String source, String pack, PackLayer layer,
                                String location, String hash) {
         Document d = new Document();
@@ -71,16 +78,14 @@ final class NoteDocuments {
         d.add(new BinaryDocValuesField(LOCATION, new BytesRef(location)));
         d.add(new BinaryDocValuesField(HASH, new BytesRef(hash)));
         for (NoteFacet f : NoteFacet.values()) {
+            String facetField = config.getDimConfig(f.key()).indexFieldName;
             for (String v : f.valuesOf(note, pack)) {
+                FacetField.verifyLabel(v);
                 d.add(new StringField(filterField(f), v, Field.Store.NO));
-                d.add(new SortedSetDocValuesFacetField(f.key(), v));
+                d.add(new SortedSetDocValuesField(facetField, new BytesRef(FacetsConfig.pathToString(f.key(), new String[] {v}))));
             }
         }
-        try {
-            return config.build(d);
-        } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException(e);
-        }
+        return d;
     }
 
     /** The content hash of a note file as supplied by a pack: pack, layer and bytes. */
