@@ -8,11 +8,13 @@ import java.util.regex.Pattern;
 import org.apache.lucene.analysis.TokenFilter;
 import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
+import org.apache.lucene.analysis.tokenattributes.KeywordAttribute;
 import org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute;
 import org.apache.lucene.util.AttributeSource;
 
 /**
- * Splits and stacks the trade's compound tokens (input already lower-cased).
+ * Splits and stacks the trade's compound tokens (input already lower-cased), and marks every token
+ * with a digit in it as a keyword, so the stemmer leaves {@code r0.5} and {@code 2768-m} alone.
  *
  * <ul>
  *   <li>A number glued to a unit ({@code 0.5mm}, {@code r3mm}, {@code 90deg}) becomes the number
@@ -31,6 +33,7 @@ final class TradeTokenFilter extends TokenFilter {
     private final boolean indexSide;
     private final CharTermAttribute term = addAttribute(CharTermAttribute.class);
     private final PositionIncrementAttribute posInc = addAttribute(PositionIncrementAttribute.class);
+    private final KeywordAttribute keyword = addAttribute(KeywordAttribute.class);
     private final Deque<Pending> pending = new ArrayDeque<>();
 
     private record Pending(AttributeSource.State state, String text, int increment) {}
@@ -47,16 +50,19 @@ final class TradeTokenFilter extends TokenFilter {
             restoreState(p.state());
             term.setEmpty().append(p.text());
             posInc.setPositionIncrement(p.increment());
+            keyword.setKeyword(hasDigit(term.buffer(), term.length()));
             return true;
         }
         if (!input.incrementToken()) return false;
         if (!needsWork(term.buffer(), term.length())) return true;
+        keyword.setKeyword(hasDigit(term.buffer(), term.length()));
         String t = term.toString();
         Matcher unit = WITH_UNIT.matcher(t);
         if (unit.matches() && unit.group(1).chars().anyMatch(Character::isDigit)) {
             String number = unit.group(1);
             State s = captureState();
             term.setEmpty().append(number);
+            keyword.setKeyword(true);
             stackParts(number, s);
             pending.addLast(new Pending(s, unit.group(2), 1));
             return true;
@@ -86,6 +92,13 @@ final class TradeTokenFilter extends TokenFilter {
         for (int i = 0; i < len; i++) {
             char c = b[i];
             if ((c >= '0' && c <= '9') || c == '-' || c == '/') return true;
+        }
+        return false;
+    }
+
+    private static boolean hasDigit(char[] b, int len) {
+        for (int i = 0; i < len; i++) {
+            if (b[i] >= '0' && b[i] <= '9') return true;
         }
         return false;
     }

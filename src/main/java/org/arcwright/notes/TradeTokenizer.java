@@ -2,11 +2,13 @@ package org.arcwright.notes;
 
 import java.io.IOException;
 import org.apache.lucene.analysis.Tokenizer;
+import org.apache.lucene.analysis.miscellaneous.ASCIIFoldingFilter;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
 import org.apache.lucene.analysis.tokenattributes.OffsetAttribute;
+import org.apache.lucene.util.ArrayUtil;
 
 /**
- * Splits note text into the trade's tokens in one pass (a hand-written loop: a regular expression
+ * Splits note text into the trade's tokens, lower-cased and folded to ASCII, in one pass (a hand-written loop: a regular expression
  * here cost most of the indexing time).
  *
  * <ul>
@@ -24,6 +26,7 @@ final class TradeTokenizer extends Tokenizer {
     private final CharTermAttribute term = addAttribute(CharTermAttribute.class);
     private final OffsetAttribute offset = addAttribute(OffsetAttribute.class);
     private final StringBuilder text = new StringBuilder();
+    private char[] folded = new char[64];
     private int pos;
     private boolean read;
 
@@ -75,6 +78,8 @@ final class TradeTokenizer extends Tokenizer {
             while (i < n && Character.isLetter(text.charAt(i))) i++;
         }
         term.setEmpty().append(text, start, i);
+        normalise();
+        stripPossessive();
         setOffsets(start, i);
         pos = i;
         return true;
@@ -96,6 +101,7 @@ final class TradeTokenizer extends Tokenizer {
             term.append(text.charAt(i++));
             while (i < n && Character.isLetterOrDigit(text.charAt(i))) term.append(text.charAt(i++));
         }
+        normalise();
         setOffsets(start, i);
         pos = i;
         return true;
@@ -103,8 +109,44 @@ final class TradeTokenizer extends Tokenizer {
 
     private void emitSign(int start, int end) {
         term.setEmpty().append('±');
+        normalise();
         setOffsets(start, end);
         pos = end;
+    }
+
+    /**
+     * Lower case, then ASCII folding, as Lucene's {@code LowerCaseFilter} and
+     * {@code ASCIIFoldingFilter} would do after this tokenizer: tokens never hold surrogates
+     * (they are not letters or digits here), so lower-casing char by char is the same as by code
+     * point. Done here, not by two more filters, because every token of every note passes.
+     */
+    private void normalise() {
+        char[] b = term.buffer();
+        int len = term.length();
+        boolean ascii = true;
+        for (int k = 0; k < len; k++) {
+            char c = b[k];
+            if (c < 0x80) {
+                if (c >= 'A' && c <= 'Z') b[k] = (char) (c + ('a' - 'A'));
+            } else {
+                b[k] = Character.toLowerCase(c);
+                ascii = false;
+            }
+        }
+        if (ascii) return;
+        int max = 4 * len;
+        if (folded.length < max) folded = new char[ArrayUtil.oversize(max, Character.BYTES)];
+        int out = ASCIIFoldingFilter.foldToASCII(b, 0, folded, 0, len);
+        term.copyBuffer(folded, 0, out);
+    }
+
+    /** Drops a trailing {@code 's} as Lucene's {@code EnglishPossessiveFilter} does (after folding, the apostrophe is ASCII). */
+    private void stripPossessive() {
+        char[] b = term.buffer();
+        int len = term.length();
+        if (len >= 2 && (b[len - 2] == '\'' || b[len - 2] == '\u2019' || b[len - 2] == '\uFF07') && b[len - 1] == 's') {
+            term.setLength(len - 2);
+        }
     }
 
     /** End of {@code +/-} or {@code +-} (the latter only before a value), or -1. */

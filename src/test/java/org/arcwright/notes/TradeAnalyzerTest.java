@@ -98,4 +98,18 @@ class TradeAnalyzerTest {
         assertThat(tokens(QUERY, "\" * ( ) [ ] { } ~ ^ : \\ / !")).isEmpty();
         assertThat(tokens(QUERY, "AND")).containsExactly("and");
     }
+
+    @Test
+    void accentsAndTypographicApostrophesFoldAsLucenesFiltersWouldFoldThem() {
+        // Lucene's ASCIIFoldingFilter and EnglishPossessiveFilter define the expected tokens (Lucene 9.12 documentation)
+        assertThat(tokens(INDEX, "Peterson’s façade")).containsExactly("peterson", "facad");
+        assertThat(tokens(QUERY, "Größe NAÏVE")).containsExactly("gross", "naiv");
+        assertThat(tokens(INDEX, "5µm")).containsExactly("5", "µm"); // the micro sign is not folded
+    }
+
+    @Test
+    void onlyTokensWithADigitEscapeTheStemmer() {
+        assertThat(tokens(INDEX, "2768-fillets")).containsExactly("2768-fillets", "+2768", "+fillet");
+        assertThat(tokens(INDEX, "R2 fillets")).containsExactly("r2", "+r", "+2", "fillet");
+    }
 }
