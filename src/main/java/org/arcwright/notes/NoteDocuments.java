@@ -20,7 +20,7 @@ import org.arcwright.pack.PackLayer;
 /** How a note becomes a Lucene document, and the field names of the index. */
 final class NoteDocuments {
     /** Bump when fields or analysis change: an index with another schema is rebuilt. */
-    static final String SCHEMA = "arcwright-notes-9";
+    static final String SCHEMA = "arcwright-notes-10";
 
     static final String ID = "id";
     static final String TITLE = "title";

@@ -24,15 +24,17 @@ import org.apache.lucene.analysis.synonym.SynonymMap;
  *       words); it also lower-cases, folds to ASCII and drops English possessives, as Lucene's
  *       filters of those names would, without three more filters on every token.</li>
  *   <li>{@link TradeTokenFilter} splits numbers from units and, when indexing, stacks the parts of
- *       compounds; Porter stemming, except for tokens with a digit in them.</li>
+ *       compounds; function words go ({@link FunctionWordFilter}); Porter stemming, except for
+ *       tokens with a digit in them.</li>
  *   <li>When querying only: the trade's synonyms ({@code fillet}, {@code round}, {@code blend},
  *       {@code radius}; {@code edge break}, {@code broken edge}; {@code CR}, {@code controlled radius};
  *       British and American spellings) from {@code trade-synonyms.txt}, each weighted half as much
  *       as the word typed, so a note using the user's own word ranks first.</li>
  * </ol>
  *
- * <p>No stop words are removed (multi-word synonyms need unbroken positions, and BM25 already gives
- * common words little weight). See decision record 0501.
+ * <p>English function words are dropped with no gap left behind ({@link FunctionWordFilter}), on
+ * both sides and in the synonym rules, so phrases and multi-word synonyms still line up. See
+ * decision records 0501 and 0505.
  */
 public final class TradeAnalyzer extends Analyzer {
     /** The synonym list on the classpath, Solr format, applied at query time. */
@@ -81,7 +83,7 @@ public final class TradeAnalyzer extends Analyzer {
     }
 
     private static TokenStream baseChain(TokenStream source, boolean indexSide) {
-        return new PorterStemFilter(new TradeTokenFilter(source, indexSide));
+        return new PorterStemFilter(new FunctionWordFilter(new TradeTokenFilter(source, indexSide)));
     }
 
     private static SynonymMap loadSynonyms() {

@@ -14,7 +14,8 @@ import org.apache.lucene.util.AttributeSource;
 
 /**
  * Splits and stacks the trade's compound tokens (input already lower-cased), and marks every token
- * with a digit in it as a keyword, so the stemmer leaves {@code r0.5} and {@code 2768-m} alone.
+ * with a digit in it, and every unit split from a number, as a keyword, so the stemmer leaves
+ * {@code r0.5} and {@code 2768-m} alone and the unit {@code in} is not taken for a function word.
  *
  * <ul>
  *   <li>A number glued to a unit ({@code 0.5mm}, {@code r3mm}, {@code 90deg}) becomes the number
@@ -36,7 +37,7 @@ final class TradeTokenFilter extends TokenFilter {
     private final KeywordAttribute keyword = addAttribute(KeywordAttribute.class);
     private final Deque<Pending> pending = new ArrayDeque<>();
 
-    private record Pending(AttributeSource.State state, String text, int increment) {}
+    private record Pending(AttributeSource.State state, String text, int increment, boolean unit) {}
 
     TradeTokenFilter(TokenStream in, boolean indexSide) {
         super(in);
@@ -50,7 +51,7 @@ final class TradeTokenFilter extends TokenFilter {
             restoreState(p.state());
             term.setEmpty().append(p.text());
             posInc.setPositionIncrement(p.increment());
-            keyword.setKeyword(hasDigit(term.buffer(), term.length()));
+            keyword.setKeyword(p.unit() || hasDigit(term.buffer(), term.length()));
             return true;
         }
         if (!input.incrementToken()) return false;
@@ -64,7 +65,7 @@ final class TradeTokenFilter extends TokenFilter {
             term.setEmpty().append(number);
             keyword.setKeyword(true);
             stackParts(number, s);
-            pending.addLast(new Pending(s, unit.group(2), 1));
+            pending.addLast(new Pending(s, unit.group(2), 1, true));
             return true;
         }
         if (indexSide) stackParts(t, captureState());
@@ -75,14 +76,14 @@ final class TradeTokenFilter extends TokenFilter {
         if (!indexSide) return;
         Matcher r = RADIUS.matcher(t);
         if (r.matches()) {
-            pending.addFirst(new Pending(s, r.group(2), 0));
-            pending.addFirst(new Pending(s, r.group(1), 0));
+            pending.addFirst(new Pending(s, r.group(2), 0, false));
+            pending.addFirst(new Pending(s, r.group(1), 0, false));
             return;
         }
         if (t.indexOf('-') >= 0 || t.indexOf('/') >= 0) {
             String[] parts = t.split("[-/]");
             for (int i = parts.length - 1; i >= 0; i--) {
-                if (!parts[i].isEmpty() && !parts[i].equals(t)) pending.addFirst(new Pending(s, parts[i], 0));
+                if (!parts[i].isEmpty() && !parts[i].equals(t)) pending.addFirst(new Pending(s, parts[i], 0, false));
             }
         }
     }

@@ -38,6 +38,21 @@ class TradeAnalyzerTest {
         return out;
     }
 
+    /** Position of each token, counting from 0. */
+    static List<Integer> positions(Analyzer a, String text) {
+        List<Integer> out = new ArrayList<>();
+        try (TokenStream ts = a.tokenStream("body", text)) {
+            PositionIncrementAttribute inc = ts.addAttribute(PositionIncrementAttribute.class);
+            ts.reset();
+            int pos = -1;
+            while (ts.incrementToken()) out.add(pos += inc.getPositionIncrement());
+            ts.end();
+        } catch (IOException e) {
+            throw new AssertionError(e);
+        }
+        return out;
+    }
+
     static List<String> terms(Analyzer a, String text) {
         return tokens(a, text).stream().map(t -> t.startsWith("+") ? t.substring(1) : t).toList();
     }
@@ -96,7 +111,21 @@ class TradeAnalyzerTest {
     @Test
     void queryLanguageSymbolsProduceNoTokens() {
         assertThat(tokens(QUERY, "\" * ( ) [ ] { } ~ ^ : \\ / !")).isEmpty();
-        assertThat(tokens(QUERY, "AND")).containsExactly("and");
+        assertThat(tokens(QUERY, "AND")).isEmpty(); // a function word, dropped like any other
+        assertThat(tokens(QUERY, "NOT")).containsExactly("not");
+    }
+
+    @Test
+    void functionWordsGoWithoutLeavingGaps() {
+        // Lucene's English stop set (EnglishAnalyzer.ENGLISH_STOP_WORDS_SET), less "no" and "not"
+        assertThat(tokens(INDEX, "profile of a surface")).containsExactly("profil", "surfac");
+        assertThat(positions(INDEX, "profile of a surface")).containsExactly(0, 1);
+        assertThat(tokens(QUERY, "does not control the form")).containsExactly("doe", "not", "control", "form");
+    }
+
+    @Test
+    void theInchUnitIsNotTakenForAFunctionWord() {
+        assertThat(tokens(INDEX, "0.5in wall")).containsExactly("0.5", "in", "wall");
     }
 
     @Test
