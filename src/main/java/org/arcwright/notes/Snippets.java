@@ -61,8 +61,8 @@ final class Snippets {
      * note's summary instead). A sentence ends at {@code .}, {@code !} or {@code ?} followed by
      * white space, or at a line break.
      * The body goes through the index chain, with one shortcut: a plain word (ASCII letters and
-     * apostrophes) whose first letter begins none of the terms is dropped before the lower-casing,
-     * stemming and the rest, since none of them changes a plain word's first letter.
+     * apostrophes) that does not begin with the leading letters of some term is dropped before
+     * stemming, the only step after the tokenizer that changes a plain word ({@link StemPrefixes}).
      */
     static String pick(String plain, Set<String> terms, int maxPassages) {
         if (terms.isEmpty() || plain.isEmpty()) return null;
@@ -75,7 +75,7 @@ final class Snippets {
         int[] repeats = new int[count];
         TradeTokenizer tokens = new TradeTokenizer();
         tokens.setReader(new StringReader(plain));
-        try (TokenStream ts = TradeAnalyzer.indexChainAfter(new FirstLetterFilter(tokens, firstLetters(terms)))) {
+        try (TokenStream ts = TradeAnalyzer.indexChainAfter(new StemPrefixFilter(tokens, new StemPrefixes(terms)))) {
             CharTermAttribute term = ts.addAttribute(CharTermAttribute.class);
             OffsetAttribute offset = ts.addAttribute(OffsetAttribute.class);
             ts.reset();
@@ -127,23 +127,68 @@ final class Snippets {
         return out.toString();
     }
 
-    private static boolean[] firstLetters(Set<String> terms) {
-        boolean[] out = new boolean[26];
-        for (String t : terms) {
-            char c = t.charAt(0);
-            if (c >= 'a' && c <= 'z') out[c - 'a'] = true;
+    /**
+     * The leading letters a plain word must have to stem to one of the terms. Porter's stemmer only
+     * rewrites the end of a word: of the 74,585 all-letter words of a standard English word list
+     * (Debian's wamerican), every stem differs from its word in at most its last letter. So a word
+     * stemming to {@code t} begins with {@code t}'s first {@code len(t) - 2} letters, one more than
+     * that list needs; at most three are compared, at least one.
+     */
+    static final class StemPrefixes {
+        private final boolean[] one = new boolean[26];
+        private final boolean[] two = new boolean[26 * 26];
+        private final boolean[] three = new boolean[26 * 26 * 26];
+
+        StemPrefixes(Set<String> terms) {
+            for (String t : terms) {
+                int letters = 0;
+                while (letters < t.length() && letters < 3 && isLower(t.charAt(letters))) letters++;
+                if (letters == 0) continue;
+                int len = Math.min(letters, Math.max(1, t.length() - 2));
+                int code = code(t, len);
+                if (len == 1) one[code] = true;
+                else if (len == 2) two[code] = true;
+                else three[code] = true;
+            }
         }
-        return out;
+
+        /** Whether the plain word in {@code b[0..n)} (lower case) may stem to one of the terms. */
+        boolean mayMatch(char[] b, int n) {
+            for (int len = 1; len <= Math.min(3, n); len++) {
+                for (int i = 0; i < len; i++) {
+                    if (!isLower(b[i])) return true;
+                }
+                int code = code(b, len);
+                if (len == 1 ? one[code] : len == 2 ? two[code] : three[code]) return true;
+            }
+            return false;
+        }
+
+        private static boolean isLower(char c) {
+            return c >= 'a' && c <= 'z';
+        }
+
+        private static int code(CharSequence s, int len) {
+            int code = 0;
+            for (int i = 0; i < len; i++) code = code * 26 + (s.charAt(i) - 'a');
+            return code;
+        }
+
+        private static int code(char[] b, int len) {
+            int code = 0;
+            for (int i = 0; i < len; i++) code = code * 26 + (b[i] - 'a');
+            return code;
+        }
     }
 
     /** Drops plain words that cannot become one of the terms (see {@link #pick}); keeps every other token. */
-    private static final class FirstLetterFilter extends FilteringTokenFilter {
+    private static final class StemPrefixFilter extends FilteringTokenFilter {
         private final CharTermAttribute term = addAttribute(CharTermAttribute.class);
-        private final boolean[] letters;
+        private final StemPrefixes prefixes;
 
-        FirstLetterFilter(TokenStream in, boolean[] letters) {
+        StemPrefixFilter(TokenStream in, StemPrefixes prefixes) {
             super(in);
-            this.letters = letters;
+            this.prefixes = prefixes;
         }
 
         @Override
@@ -153,10 +198,9 @@ final class Snippets {
             if (n == 0) return true;
             for (int i = 0; i < n; i++) {
                 char c = b[i];
-                if (!((c >= 'a' && c <= 'z') || (c >= 'A' && c <= 'Z') || c == '\'')) return true;
+                if (!((c >= 'a' && c <= 'z') || c == '\'')) return true;
             }
-            char first = Character.toLowerCase(b[0]);
-            return letters[first - 'a'];
+            return prefixes.mayMatch(b, n);
         }
     }
 

@@ -177,6 +177,7 @@ public final class NotesHarness {
                 long[] nanos = new long[n];
                 long[] cpu = new long[n];
                 java.lang.management.ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+                java.util.Map<String, List<Long>> byQuery = new java.util.TreeMap<>();
                 for (int i = 0; i < n; i++) {
                     String q = QUERIES[random.nextInt(QUERIES.length)];
                     long c = threads.getCurrentThreadCpuTime();
@@ -184,6 +185,7 @@ public final class NotesHarness {
                     SearchResult r = store.search(q, NoteFilters.none(), 10, facets);
                     nanos[i] = System.nanoTime() - t;
                     cpu[i] = threads.getCurrentThreadCpuTime() - c;
+                    byQuery.computeIfAbsent(q, k -> new ArrayList<>()).add(nanos[i]);
                     if (i < 3 && facets) sample.add(q + " -> " + r.totalHits() + " hits");
                 }
                 Arrays.sort(nanos);
@@ -193,6 +195,11 @@ public final class NotesHarness {
                         facets ? " and facet counts over all matches" : ", no facets", n, nanos[n / 2] / 1e6,
                         nanos[(int) (n * 0.95)] / 1e6, nanos[(int) (n * 0.99)] / 1e6, nanos[n - 1] / 1e6,
                         cpu[n / 2] / 1e6, cpu[(int) (n * 0.95)] / 1e6);
+                System.out.println("  slowest queries by median: " + byQuery.entrySet().stream()
+                        .map(e -> java.util.Map.entry(e.getKey(), e.getValue().stream().sorted().toList().get(e.getValue().size() / 2)))
+                        .sorted(java.util.Map.Entry.<String, Long>comparingByValue().reversed()).limit(5)
+                        .map(e -> String.format("\"%s\" %.2f ms", e.getKey(), e.getValue() / 1e6))
+                        .collect(java.util.stream.Collectors.joining(", ")));
             }
             long t = System.nanoTime();
             for (int i = 0; i < 200; i++) store.related(List.of("sealing", "o-ring"), "groove corner radius on a housing", 5);

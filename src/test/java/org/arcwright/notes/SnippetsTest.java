@@ -2,8 +2,16 @@ package org.arcwright.notes;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.io.IOException;
+import java.io.StringReader;
 import java.util.Set;
+import org.apache.lucene.analysis.TokenStream;
+import org.apache.lucene.analysis.core.KeywordTokenizer;
+import org.apache.lucene.analysis.en.PorterStemFilter;
+import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.params.ParameterizedTest;
+import org.junit.jupiter.params.provider.ValueSource;
 
 /** The snippet under a hit: the sentences holding the query's words, with those words marked. */
 class SnippetsTest {
@@ -58,5 +66,32 @@ class SnippetsTest {
     void sentencesEndAtStopsFollowedBySpaceNotInsideNumbers() {
         int[] b = Snippets.sentenceBounds("Use R0.5 here. Then 2.5 there.");
         assertThat(b).containsExactly(0, 14, 15, 30);
+    }
+
+    /** Reference: Lucene's PorterStemFilter (M. F. Porter, "An algorithm for suffix stripping", Program 14, 1980). */
+    private static String porter(String word) {
+        KeywordTokenizer whole = new KeywordTokenizer();
+        whole.setReader(new StringReader(word));
+        try (TokenStream ts = new PorterStemFilter(whole)) {
+            CharTermAttribute term = ts.addAttribute(CharTermAttribute.class);
+            ts.reset();
+            ts.incrementToken();
+            String stem = term.toString();
+            ts.end();
+            return stem;
+        } catch (IOException e) {
+            throw new AssertionError(e);
+        }
+    }
+
+    @ParameterizedTest
+    @ValueSource(strings = {"sky", "ties", "relational", "possibly", "sensibility", "organization", "valency", "conflated",
+            "hopefulness", "electrical", "generalizations", "oscillators", "filleting", "radii", "radius", "bled", "ays",
+            "dying", "controlling", "callouts", "tangency", "gauging", "mouldings", "deburring", "concentrations"})
+    void aWordIsNeverDroppedBeforeStemmingWhenItStemsToATerm(String word) {
+        String stem = porter(word);
+        Snippets.StemPrefixes prefixes = new Snippets.StemPrefixes(Set.of(stem));
+        assertThat(prefixes.mayMatch(word.toCharArray(), word.length())).as(word + " -> " + stem).isTrue();
+        assertThat(Snippets.pick("A " + word + " here.", Set.of(stem), 1)).contains("**" + word + "**");
     }
 }
