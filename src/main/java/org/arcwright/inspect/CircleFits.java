@@ -218,7 +218,10 @@ public final class CircleFits {
                 it++;
                 break;
             }
-            double tc = normal(xs, ys, n, x0, y0, a + d[0], b + d[1], r + d[2], offsets[0], offsets[1], trial, ux, uy, res);
+            // a step this small changes JᵀJ by about step / r: keep it and sum only what the gradient and cost need
+            double tc = stepSize <= 1e-4 * scale
+                    ? gradient(xs, ys, n, x0, y0, a + d[0], b + d[1], r + d[2], offsets[0], offsets[1], ne, trial, ux, uy, res)
+                    : normal(xs, ys, n, x0, y0, a + d[0], b + d[1], r + d[2], offsets[0], offsets[1], trial, ux, uy, res);
             // accept within the rounding of the sum (near the optimum the cost is flat to 1e-15)
             if (tc <= cost * (1 + 1e-15)) {
                 a += d[0]; b += d[1]; r += d[2];
@@ -284,14 +287,7 @@ public final class CircleFits {
      */
     private static double normal(double[] xs, double[] ys, int n, double x0, double y0, double a, double b, double r,
                                  double sx, double sy, double[] ne, double[] ux, double[] uy, double[] res) {
-        for (int k = 0; k < n; k++) {
-            double dx = xs[k] - x0 - a, dy = ys[k] - y0 - b;
-            double dist = Math.sqrt(dx * dx + dy * dy);
-            double inv = 1 / Math.max(dist, Double.MIN_NORMAL);
-            ux[k] = dx * inv;
-            uy[k] = dy * inv;
-            res[k] = dist - r;
-        }
+        directions(xs, ys, n, x0, y0, a, b, r, ux, uy, res);
         double su0 = 0, su1 = 0, su2 = 0, sv0 = 0, sv1 = 0, sv2 = 0, suu0 = 0, suu1 = 0, suu2 = 0;
         double suv0 = 0, suv1 = 0, suv2 = 0, se0 = 0, se1 = 0, se2 = 0, see0 = 0, see1 = 0, see2 = 0;
         int k = 0;
@@ -318,6 +314,53 @@ public final class CircleFits {
         // Σuᵢeᵢ = Σuᵢ(distᵢ - r) = Σdxᵢ - rΣuᵢ, and Σdxᵢ = Σ(xᵢ - x0) - n·a needs no pass
         ne[6] = -((sx - n * a) - r * su); ne[7] = -((sy - n * b) - r * sv); ne[8] = -(se0 + se1);
         return see0 + see1;
+    }
+
+    /**
+     * As {@link #normal}, but keeps {@code JᵀJ} from {@code last} (copied into {@code ne}) and sums
+     * only {@code Σuᵢ}, {@code Σvᵢ}, {@code Σeᵢ} and the cost: for a step small against the radius,
+     * where {@code JᵀJ} moves by about step / r, so that the next step is off by that fraction of
+     * itself (the gradient, which decides where the fit ends, stays exact).
+     */
+    private static double gradient(double[] xs, double[] ys, int n, double x0, double y0, double a, double b, double r,
+                                   double sx, double sy, double[] last, double[] ne, double[] ux, double[] uy, double[] res) {
+        directions(xs, ys, n, x0, y0, a, b, r, ux, uy, res);
+        double su0 = 0, su1 = 0, su2 = 0, sv0 = 0, sv1 = 0, sv2 = 0;
+        double se0 = 0, se1 = 0, se2 = 0, see0 = 0, see1 = 0, see2 = 0;
+        int k = 0;
+        for (; k + 2 < n; k += 3) {
+            double e0 = res[k], e1 = res[k + 1], e2 = res[k + 2];
+            su0 += ux[k]; su1 += ux[k + 1]; su2 += ux[k + 2];
+            sv0 += uy[k]; sv1 += uy[k + 1]; sv2 += uy[k + 2];
+            se0 += e0; se1 += e1; se2 += e2;
+            see0 = Math.fma(e0, e0, see0); see1 = Math.fma(e1, e1, see1); see2 = Math.fma(e2, e2, see2);
+        }
+        for (; k < n; k++) {
+            double e0 = res[k];
+            su0 += ux[k]; sv0 += uy[k]; se0 += e0; see0 = Math.fma(e0, e0, see0);
+        }
+        double su = su0 + su1 + su2, sv = sv0 + sv1 + sv2;
+        System.arraycopy(last, 0, ne, 0, 6);
+        ne[6] = -((sx - n * a) - r * su); ne[7] = -((sy - n * b) - r * sv); ne[8] = -(se0 + se1 + se2);
+        return see0 + see1 + see2;
+    }
+
+    /**
+     * The element-wise half of a pass: unit vector from the centre {@code (x0 + a, y0 + b)} to each
+     * point (zero for a point at the centre) and its residual. {@code xᵢ - x0} first, exact for
+     * points near {@code x0} however far the origin. No sums here, so C2 compiles it to SIMD square
+     * roots and divisions.
+     */
+    private static void directions(double[] xs, double[] ys, int n, double x0, double y0, double a, double b, double r,
+                                   double[] ux, double[] uy, double[] res) {
+        for (int k = 0; k < n; k++) {
+            double dx = xs[k] - x0 - a, dy = ys[k] - y0 - b;
+            double dist = Math.sqrt(dx * dx + dy * dy);
+            double inv = 1 / Math.max(dist, Double.MIN_NORMAL);
+            ux[k] = dx * inv;
+            uy[k] = dy * inv;
+            res[k] = dist - r;
+        }
     }
 
     /** Above this many points, the minimum zone first converges on an evenly thinned subset. */
