@@ -28,7 +28,8 @@ import org.arcwright.pack.PracticePack;
  *   mvn -B -o -Pharness test-compile exec:exec -Dharness=org.arcwright.bench.NotesHarness -Dharness.jvm=-Xmx256m -Dharness.args="cold /tmp/notes-bench"
  *   mvn -B -o -Pharness test-compile exec:exec -Dharness=org.arcwright.bench.NotesHarness -Dharness.jvm=-Xmx256m -Dharness.args="warm /tmp/notes-bench"
  * </pre>
- * ({@code cold-unchecked} times {@link NotesStore#openUnchecked} the same way.)
+ * ({@code cold-unchecked} times {@link NotesStore#openUnchecked} the same way; {@code build-warm}
+ * times the build after a warm-up build of other notes in the same JVM.)
  * {@code build} writes the notes (not timed) and times a full index build; {@code cold} times
  * opening the store over an up-to-date index plus the first search, in a fresh JVM; {@code warm}
  * times 1,000 searches without and 1,000 with facet counts after 1,800 warm-up searches and prints percentiles. Each phase prints the
