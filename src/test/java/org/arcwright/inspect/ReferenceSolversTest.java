@@ -45,6 +45,43 @@ class ReferenceSolversTest {
     }
 
     /**
+     * Rough, short arcs (3 % radial noise on 40 to 90 degrees): Taubin's start is far enough off that
+     * the first steps rebuild JᵀJ and the later, small ones keep it. Here Commons Math stops with a
+     * gradient of about 1e-8 (its own tolerances, 1e-15, end on the cost), so agreement is asked to
+     * 1e-8 and the fit's own gradient, which vanishes at the least-squares circle by definition, to
+     * below 1e-9.
+     */
+    @ParameterizedTest(name = "seed {0}")
+    @ValueSource(longs = {61, 62, 63, 64})
+    void leastSquaresCircleOnRoughShortArcsAgreesWithCommonsMathLevenbergMarquardt(long seed) {
+        int n = 300;
+        Random rnd = new Random(seed);
+        double[] xs = new double[n], ys = new double[n];
+        double sweep = Math.toRadians(40 + 50 * rnd.nextDouble());
+        for (int i = 0; i < n; i++) {
+            double t = sweep * rnd.nextDouble(), rr = 5 * (1 + 0.03 * rnd.nextGaussian());
+            xs[i] = -3 + rr * Math.cos(t);
+            ys[i] = 8 + rr * Math.sin(t);
+        }
+        LeastSquaresCircle ours = CircleFits.leastSquares(xs, ys, n);
+        Circle t = CircleFits.taubin(xs, ys, n);
+        double[] ref = ReferenceSolvers.leastSquaresCircle(xs, ys, n, new double[] {t.cx(), t.cy(), t.r()});
+        assertThat(ours.iterations()).isGreaterThan(2);
+        assertThat(ours.circle().cx()).isCloseTo(ref[0], within(1e-8 * ref[2]));
+        assertThat(ours.circle().cy()).isCloseTo(ref[1], within(1e-8 * ref[2]));
+        assertThat(ours.circle().r()).isCloseTo(ref[2], within(1e-8 * ref[2]));
+        double ga = 0, gb = 0, gr = 0;
+        Circle c = ours.circle();
+        for (int i = 0; i < n; i++) {
+            double dx = xs[i] - c.cx(), dy = ys[i] - c.cy(), d = Math.hypot(dx, dy), e = d - c.r();
+            ga += e * dx / d;
+            gb += e * dy / d;
+            gr += e;
+        }
+        assertThat(Math.sqrt(ga * ga + gb * gb + gr * gr)).isLessThan(1e-9);
+    }
+
+    /**
      * Far from the origin: the least-squares pass works about a point of the set and Taubin's start
      * converts moments about that point, so neither may lose the digits that the coordinates' size
      * (1e4 against a radius of 2) would cost a fit about the origin.
