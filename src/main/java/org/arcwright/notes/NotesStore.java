@@ -2,6 +2,7 @@ package org.arcwright.notes;
 
 import java.io.Closeable;
 import java.io.IOException;
+import java.io.InterruptedIOException;
 import java.io.StringReader;
 import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
@@ -25,7 +26,21 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import java.util.WeakHashMap;
+import java.util.concurrent.ArrayBlockingQueue;
+import java.util.concurrent.BlockingQueue;
+import java.util.concurrent.CancellationException;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.CompletionException;
+import java.util.concurrent.CountDownLatch;
+import java.util.concurrent.TimeUnit;
+import java.util.concurrent.atomic.AtomicReference;
 import java.util.stream.Stream;
+import org.apache.lucene.analysis.TokenStream;
+import org.apache.lucene.analysis.synonym.SynonymGraphFilter;
+import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
+import org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute;
+import org.apache.lucene.analysis.tokenattributes.PositionLengthAttribute;
+import org.apache.lucene.analysis.tokenattributes.TypeAttribute;
 import org.apache.lucene.document.Document;
 import org.apache.lucene.facet.FacetResult;
 import org.apache.lucene.facet.Facets;
@@ -50,6 +65,7 @@ import org.apache.lucene.search.BooleanQuery;
 import org.apache.lucene.search.BoostQuery;
 import org.apache.lucene.search.IndexSearcher;
 import org.apache.lucene.search.MatchAllDocsQuery;
+import org.apache.lucene.search.MultiPhraseQuery;
 import org.apache.lucene.search.Query;
 import org.apache.lucene.search.ScoreDoc;
 import org.apache.lucene.search.SearcherManager;
@@ -110,7 +126,7 @@ public final class NotesStore implements Closeable {
      * analysis classes it loads) takes about as long as opening the index in a fresh JVM: so it is
      * made on a thread of its own while the index opens, and the first search waits for it.
      */
-    private final java.util.concurrent.CompletableFuture<TradeAnalyzer> queryChain = startQueryChain();
+    private final CompletableFuture<TradeAnalyzer> queryChain = startQueryChain();
     private final FacetsConfig facetsConfig = NoteDocuments.facetsConfig();
     private final Map<IndexReader, SortedSetDocValuesReaderState> facetStates =
             Collections.synchronizedMap(new WeakHashMap<>());
@@ -121,8 +137,8 @@ public final class NotesStore implements Closeable {
     private volatile IndexReport report;
     private boolean inMemory;
 
-    private static java.util.concurrent.CompletableFuture<TradeAnalyzer> startQueryChain() {
-        return java.util.concurrent.CompletableFuture.supplyAsync(TradeAnalyzer::forQueries, task -> {
+    private static CompletableFuture<TradeAnalyzer> startQueryChain() {
+        return CompletableFuture.supplyAsync(TradeAnalyzer::forQueries, task -> {
             Thread t = new Thread(task, "notes-query-chain");
             t.setDaemon(true);
             t.start();
@@ -132,7 +148,7 @@ public final class NotesStore implements Closeable {
     private TradeAnalyzer queryAnalyzer() {
         try {
             return queryChain.join();
-        } catch (java.util.concurrent.CompletionException e) {
+        } catch (CompletionException e) {
             if (e.getCause() instanceof RuntimeException) throw (RuntimeException) e.getCause();
             if (e.getCause() instanceof Error) throw (Error) e.getCause();
             throw e;
@@ -459,8 +475,8 @@ public final class NotesStore implements Closeable {
      * note; contents read only where size or time changed) runs after the first search, not before.
      * Searches keep working during the check and see its changes when it ends.
      */
-    public java.util.concurrent.CompletableFuture<IndexReport> refreshInBackground() {
-        java.util.concurrent.CompletableFuture<IndexReport> done = new java.util.concurrent.CompletableFuture<>();
+    public CompletableFuture<IndexReport> refreshInBackground() {
+        CompletableFuture<IndexReport> done = new CompletableFuture<>();
         Thread t = new Thread(() -> {
             try {
                 done.complete(refresh());
@@ -573,11 +589,6 @@ public final class NotesStore implements Closeable {
     private record Indexed(String id, String hash, String location) {}
 
     /**
-     * Brings the index in {@link #directory} in line with the notes. Packs are read from the top
-     * layer down, so the first note seen under an id is the one in force, and only the set of seen
-     * ids is kept in memory (not the notes).
-     */
-    /**
      * Half the heap, between 16 and 128 MB, for the documents buffered before a segment is written:
      * a 100,000-note build in a 256 MB heap then writes two segments instead of four or five and
      * merges less (48 MB: 3,400 to 4,700 notes/s; 128 MB: 4,850 to 5,180 on the same machine, see
@@ -588,6 +599,11 @@ public final class NotesStore implements Closeable {
         return Math.max(16, Math.min(128, half));
     }
 
+    /**
+     * Brings the index in {@link #directory} in line with the notes. Packs are read from the top
+     * layer down, so the first note seen under an id is the one in force, and only the set of seen
+     * ids is kept in memory (not the notes).
+     */
     private SyncCounts sync(SourceScan scan, boolean fresh) throws IOException {
         Map<String, Indexed> existing = new HashMap<>();
         Map<String, String> idAtLocation = new HashMap<>();
@@ -691,17 +707,17 @@ public final class NotesStore implements Closeable {
         private static final int QUEUE = 1024;
         private final IndexWriter writer;
         private final boolean fresh;
-        private final java.util.concurrent.BlockingQueue<Loaded> queue = new java.util.concurrent.ArrayBlockingQueue<>(QUEUE);
-        private final java.util.concurrent.atomic.AtomicReference<Throwable> failure = new java.util.concurrent.atomic.AtomicReference<>();
+        private final BlockingQueue<Loaded> queue = new ArrayBlockingQueue<>(QUEUE);
+        private final AtomicReference<Throwable> failure = new AtomicReference<>();
         private final List<Thread> threads = new ArrayList<>();
         private final Loaded end = new Loaded(null, null, null, null, null, true);
-        private final java.util.concurrent.CountDownLatch drained;
+        private final CountDownLatch drained;
 
         Indexer(IndexWriter writer, boolean fresh) {
             this.writer = writer;
             this.fresh = fresh;
             int n = Math.max(1, Math.min(4, Runtime.getRuntime().availableProcessors()));
-            drained = new java.util.concurrent.CountDownLatch(n);
+            drained = new CountDownLatch(n);
             for (int i = 0; i < n; i++) {
                 Thread t = new Thread(this::run, "notes-indexing-" + i);
                 t.setDaemon(true);
@@ -712,10 +728,10 @@ public final class NotesStore implements Closeable {
 
         void submit(Loaded l) throws IOException {
             try {
-                while (!queue.offer(l, 100, java.util.concurrent.TimeUnit.MILLISECONDS)) rethrow();
+                while (!queue.offer(l, 100, TimeUnit.MILLISECONDS)) rethrow();
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
-                throw new java.io.InterruptedIOException("interrupted while indexing notes");
+                throw new InterruptedIOException("interrupted while indexing notes");
             }
             rethrow();
         }
@@ -724,12 +740,12 @@ public final class NotesStore implements Closeable {
         void finish() throws IOException {
             try {
                 for (int i = 0; i < threads.size(); i++) {
-                    while (!queue.offer(end, 100, java.util.concurrent.TimeUnit.MILLISECONDS)) rethrow();
+                    while (!queue.offer(end, 100, TimeUnit.MILLISECONDS)) rethrow();
                 }
                 for (Thread t : threads) t.join();
             } catch (InterruptedException e) {
                 Thread.currentThread().interrupt();
-                throw new java.io.InterruptedIOException("interrupted while indexing notes");
+                throw new InterruptedIOException("interrupted while indexing notes");
             }
             rethrow();
         }
@@ -777,7 +793,7 @@ public final class NotesStore implements Closeable {
          * caller's side); no interrupt, which would close the index files under a writing thread.
          */
         void abandon() {
-            failure.compareAndSet(null, new java.util.concurrent.CancellationException("notes build abandoned"));
+            failure.compareAndSet(null, new CancellationException("notes build abandoned"));
             queue.clear();
             for (int i = 0; i < threads.size(); i++) queue.offer(end);
             for (Thread t : threads) {
@@ -796,7 +812,7 @@ public final class NotesStore implements Closeable {
             if (t instanceof IOException) throw (IOException) t;
             if (t instanceof RuntimeException) throw (RuntimeException) t;
             if (t instanceof Error) throw (Error) t;
-            throw new java.io.InterruptedIOException("indexing interrupted");
+            throw new InterruptedIOException("indexing interrupted");
         }
     }
 
@@ -1024,7 +1040,7 @@ public final class NotesStore implements Closeable {
     /**
      * Words of the query found near each other in the body: applied to the best
      * {@link #RESCORE_WINDOW} notes only (rescoring), since a sloppy phrase over every match is the
-     * most expensive part of a search. One sloppy {@link org.apache.lucene.search.MultiPhraseQuery}
+     * most expensive part of a search. One sloppy {@link MultiPhraseQuery}
      * over the words typed, each position also accepting its one-word synonyms: the phrase query the
      * analyser's synonym graph would give is one sloppy phrase per path through the graph (32 for
      * {@code kt at the minimum radius}), each weighed and scored on its own. Multi-word synonyms
@@ -1034,24 +1050,24 @@ public final class NotesStore implements Closeable {
         List<int[]> spans = new ArrayList<>();
         List<String> words = new ArrayList<>();
         List<Boolean> typed = new ArrayList<>();
-        try (org.apache.lucene.analysis.TokenStream ts = queryAnalyzer().tokenStream(NoteDocuments.BODY, text)) {
-            var term = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.CharTermAttribute.class);
-            var inc = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.PositionIncrementAttribute.class);
-            var len = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.PositionLengthAttribute.class);
-            var type = ts.addAttribute(org.apache.lucene.analysis.tokenattributes.TypeAttribute.class);
+        try (TokenStream ts = queryAnalyzer().tokenStream(NoteDocuments.BODY, text)) {
+            var term = ts.addAttribute(CharTermAttribute.class);
+            var inc = ts.addAttribute(PositionIncrementAttribute.class);
+            var len = ts.addAttribute(PositionLengthAttribute.class);
+            var type = ts.addAttribute(TypeAttribute.class);
             ts.reset();
             int pos = -1;
             while (ts.incrementToken()) {
                 pos += inc.getPositionIncrement();
                 spans.add(new int[] {pos, pos + len.getPositionLength()});
                 words.add(term.toString());
-                typed.add(!org.apache.lucene.analysis.synonym.SynonymGraphFilter.TYPE_SYNONYM.equals(type.type()));
+                typed.add(!SynonymGraphFilter.TYPE_SYNONYM.equals(type.type()));
             }
             ts.end();
         } catch (IOException e) {
             throw new UncheckedIOException(e);
         }
-        org.apache.lucene.search.MultiPhraseQuery.Builder b = new org.apache.lucene.search.MultiPhraseQuery.Builder().setSlop(3);
+        MultiPhraseQuery.Builder b = new MultiPhraseQuery.Builder().setSlop(3);
         int at = 0;
         for (int i = 0; i < words.size(); i++) {
             if (!typed.get(i)) continue;

@@ -1,15 +1,16 @@
 package org.arcwright.notes;
 
 import java.io.IOException;
+import java.io.StringReader;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
-import java.io.StringReader;
 import org.apache.lucene.analysis.Analyzer;
-import org.apache.lucene.analysis.FilteringTokenFilter;
 import org.apache.lucene.analysis.CharArraySet;
+import org.apache.lucene.analysis.FilteringTokenFilter;
 import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.en.EnglishAnalyzer;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
@@ -36,8 +37,8 @@ final class Snippets {
     private Snippets() {}
 
     /**
-     * The analysed terms of {@code query} (synonyms included) worth marking: English stop words, which
-     * the query searches but a reader does not need pointed out, are left out.
+     * The analysed terms of {@code query} (synonyms included) worth marking: {@code no} and
+     * {@code not}, the only English stop words the query chain keeps, are searched but left unmarked.
      */
     static Set<String> markTerms(Analyzer queryAnalyzer, String field, String query) {
         Set<String> out = new HashSet<>();
@@ -145,7 +146,7 @@ final class Snippets {
                 while (letters < t.length() && letters < 3 && isLower(t.charAt(letters))) letters++;
                 if (letters == 0) continue;
                 int len = Math.min(letters, Math.max(1, t.length() - 2));
-                int code = code(t, len);
+                int code = code(t.toCharArray(), len);
                 if (len == 1) one[code] = true;
                 else if (len == 2) two[code] = true;
                 else three[code] = true;
@@ -166,12 +167,6 @@ final class Snippets {
 
         private static boolean isLower(char c) {
             return c >= 'a' && c <= 'z';
-        }
-
-        private static int code(CharSequence s, int len) {
-            int code = 0;
-            for (int i = 0; i < len; i++) code = code * 26 + (s.charAt(i) - 'a');
-            return code;
         }
 
         private static int code(char[] b, int len) {
@@ -234,14 +229,14 @@ final class Snippets {
             while (a < b && Character.isWhitespace(text.charAt(a))) a++;
             while (b > a && Character.isWhitespace(text.charAt(b - 1))) b--;
             if (b > a) {
-                if (count + 2 > bounds.length) bounds = java.util.Arrays.copyOf(bounds, bounds.length * 2);
+                if (count + 2 > bounds.length) bounds = Arrays.copyOf(bounds, bounds.length * 2);
                 bounds[count++] = a;
                 bounds[count++] = b;
             }
             start = i + 1;
         }
         if (count == 0) return new int[] {0, n};
-        return java.util.Arrays.copyOf(bounds, count);
+        return Arrays.copyOf(bounds, count);
     }
 
     private static boolean isStop(char c) {

@@ -38,10 +38,7 @@ class ReferenceSolversTest {
         LeastSquaresCircle ours = CircleFits.leastSquares(p[0], p[1], n);
         Circle t = CircleFits.taubin(p[0], p[1], n);
         double[] ref = ReferenceSolvers.leastSquaresCircle(p[0], p[1], n, new double[] {t.cx(), t.cy(), t.r()});
-        double r = ref[2];
-        assertThat(ours.circle().cx()).isCloseTo(ref[0], within(1e-9 * r));
-        assertThat(ours.circle().cy()).isCloseTo(ref[1], within(1e-9 * r));
-        assertThat(ours.circle().r()).isCloseTo(ref[2], within(1e-9 * r));
+        assertSameCircle(ours.circle(), ref, 1e-9);
     }
 
     /**
@@ -67,9 +64,7 @@ class ReferenceSolversTest {
         Circle t = CircleFits.taubin(xs, ys, n);
         double[] ref = ReferenceSolvers.leastSquaresCircle(xs, ys, n, new double[] {t.cx(), t.cy(), t.r()});
         assertThat(ours.iterations()).isGreaterThan(2);
-        assertThat(ours.circle().cx()).isCloseTo(ref[0], within(1e-8 * ref[2]));
-        assertThat(ours.circle().cy()).isCloseTo(ref[1], within(1e-8 * ref[2]));
-        assertThat(ours.circle().r()).isCloseTo(ref[2], within(1e-8 * ref[2]));
+        assertSameCircle(ours.circle(), ref, 1e-8);
         double ga = 0, gb = 0, gr = 0;
         Circle c = ours.circle();
         for (int i = 0; i < n; i++) {
@@ -101,9 +96,7 @@ class ReferenceSolversTest {
         LeastSquaresCircle ours = CircleFits.leastSquares(xs, ys, n);
         Circle t = CircleFits.taubin(xs, ys, n);
         double[] ref = ReferenceSolvers.leastSquaresCircle(xs, ys, n, new double[] {t.cx(), t.cy(), t.r()});
-        assertThat(ours.circle().cx()).isCloseTo(ref[0], within(1e-9 * ref[2]));
-        assertThat(ours.circle().cy()).isCloseTo(ref[1], within(1e-9 * ref[2]));
-        assertThat(ours.circle().r()).isCloseTo(ref[2], within(1e-9 * ref[2]));
+        assertSameCircle(ours.circle(), ref, 1e-9);
     }
 
     @ParameterizedTest(name = "seed {0}")
@@ -159,5 +152,13 @@ class ReferenceSolversTest {
                 .evaluate(new PointSet(xs, ys, n, "t"), ProfileZone.bilateral(0.1), Freedom.all(), false);
         double ref = ReferenceSolvers.floatingZone(nominal, xs, ys, m, 0.05);
         assertThat(ours.requiredZone()).isCloseTo(ref, within(1e-9 * ref));
+    }
+
+    /** Centre and radius of {@code ours} within {@code relative} × the reference radius of {@code ref} = {cx, cy, r}. */
+    private static void assertSameCircle(Circle ours, double[] ref, double relative) {
+        double tolerance = relative * ref[2];
+        assertThat(ours.cx()).isCloseTo(ref[0], within(tolerance));
+        assertThat(ours.cy()).isCloseTo(ref[1], within(tolerance));
+        assertThat(ours.r()).isCloseTo(ref[2], within(tolerance));
     }
 }

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.io.IOException;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.function.BiConsumer;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.analysis.TokenStream;
 import org.apache.lucene.analysis.tokenattributes.CharTermAttribute;
@@ -26,31 +27,28 @@ class TradeAnalyzerTest {
     /** Tokens, with a leading {@code +} for a token stacked on the previous position. */
     static List<String> tokens(Analyzer a, String text) {
         List<String> out = new ArrayList<>();
-        try (TokenStream ts = a.tokenStream("body", text)) {
-            CharTermAttribute term = ts.addAttribute(CharTermAttribute.class);
-            PositionIncrementAttribute inc = ts.addAttribute(PositionIncrementAttribute.class);
-            ts.reset();
-            while (ts.incrementToken()) out.add((inc.getPositionIncrement() == 0 ? "+" : "") + term);
-            ts.end();
-        } catch (IOException e) {
-            throw new AssertionError(e);
-        }
+        eachToken(a, text, (term, increment) -> out.add((increment == 0 ? "+" : "") + term));
         return out;
     }
 
     /** Position of each token, counting from 0. */
     static List<Integer> positions(Analyzer a, String text) {
         List<Integer> out = new ArrayList<>();
+        int[] pos = {-1};
+        eachToken(a, text, (term, increment) -> out.add(pos[0] += increment));
+        return out;
+    }
+
+    private static void eachToken(Analyzer a, String text, BiConsumer<String, Integer> sink) {
         try (TokenStream ts = a.tokenStream("body", text)) {
+            CharTermAttribute term = ts.addAttribute(CharTermAttribute.class);
             PositionIncrementAttribute inc = ts.addAttribute(PositionIncrementAttribute.class);
             ts.reset();
-            int pos = -1;
-            while (ts.incrementToken()) out.add(pos += inc.getPositionIncrement());
+            while (ts.incrementToken()) sink.accept(term.toString(), inc.getPositionIncrement());
             ts.end();
         } catch (IOException e) {
             throw new AssertionError(e);
         }
-        return out;
     }
 
     static List<String> terms(Analyzer a, String text) {
