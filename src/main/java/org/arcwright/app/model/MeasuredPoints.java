@@ -4,12 +4,14 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.ProfileOutcome;
 import org.arcwright.inspect.Registration;
 import org.arcwright.rules.BlendKind;
+import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.CornerKind;
 import org.arcwright.zone.Point2;
@@ -102,6 +104,11 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
         int worst = r.worst() == null ? -1 : r.worst().index();
         double[] xs = q.points().xs(), ys = q.points().ys();
         double[] moved = new double[2];
+        // a dynamic profile also moves the nominal toward air by the offset; the view draws the zone
+        // about the unmoved nominal, so each point goes back along its normal by the same amount
+        double offset = reg == null ? 0 : reg.offset();
+        Contour nominal = offset != 0 ? Inspector.nominalContour(q) : null;
+        double[] measured = new double[4], work = new double[5];
         List<Point> out = new ArrayList<>();
         for (int i = 0; i < n; i++) {
             if (i % stride != 0 && i != worst) continue;
@@ -110,6 +117,11 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
                 reg.apply(x, y, moved);
                 x = moved[0];
                 y = moved[1];
+            }
+            if (nominal != null) {
+                nominal.measure(x, y, measured, work);
+                x -= offset * measured[1];
+                y -= offset * measured[2];
             }
             double excess = rz != null ? rz.excess(xs[i], ys[i]) : po != null ? po.zone().excess(po.deviations()[i]) : Double.NaN;
             ZonePicture.Pt p = frame.toView(x, y);

@@ -123,6 +123,30 @@ class MeasuredPointsTest {
     }
 
     @Test
+    void aDynamicProfileDrawsItsPointsAboutTheNominalItsOffsetMoved() {
+        // the whole contour 0.3 toward air (legs at 0.3, the blend concentric at R1.7): a dynamic
+        // profile frees a uniform offset, so the part conforms, and the view, which draws the zone
+        // about the nominal, must show the points on the nominal, not 0.3 beyond it
+        RadiusFeature f = fillet(new Callout.Profile(0.1, null, List.of(), true, null));
+        List<double[]> pts = new ArrayList<>();
+        for (int phi = 5; phi < 90; phi += 10) {
+            double a = Math.toRadians(phi);
+            pts.add(new double[] {2 - 1.7 * Math.cos(a), 2 - 1.7 * Math.sin(a)});
+        }
+        for (double t = 2.5; t <= 4; t += 0.5) {
+            pts.add(new double[] {t, 0.3});
+            pts.add(new double[] {0.3, t});
+        }
+        var r = new Inspector().inspect(CheckRequests.forFeature(f, PointSet.of(pts.toArray(new double[0][]))));
+        assertThat(r.pass()).isTrue();
+        MeasuredPoints m = MeasuredPoints.of(r, "test.csv").orElseThrow();
+        ZonePicture pic = ZonePicture.of(ZoneSpec.of(f.designCase(), f.chosen().callout(), 90), 1);
+        for (MeasuredPoints.Point p : m.points()) {
+            assertThat(Math.abs(pic.deviationTowardAir(p.at()))).as("point %d", p.index()).isLessThan(0.05);
+        }
+    }
+
+    @Test
     void anInspectionCornerInAnyPlaceIsMovedRigidlyIntoTheView() {
         Corner corner = new Corner(new Point2(5, 3), new Point2(0, 1), new Point2(-1, 0), CornerKind.ROUND);
         InspectionRequest q = new InspectionRequest(Units.MM, new Nominal.CornerBlend(corner, 2),
