@@ -63,7 +63,7 @@ public final class DecidePanel extends JPanel {
     private final Map<Question, WrapLabel> notes = new EnumMap<>(Question.class);
     private final JPanel figures = new JPanel(new MigLayout("insets 0, wrap 2, gap 12 2", "[][grow,fill]", ""));
     private final JLabel featureTitle = new JLabel();
-    private JScrollPane formScroll;
+    private final JScrollPane formScroll;
     private final JPanel cards = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 10", "[grow,fill]", ""));
     private final Timer adviseLater = new Timer(250, e -> adviseNow());
     private final javax.swing.JButton keep = new javax.swing.JButton("Keep these answers");

@@ -45,6 +45,9 @@ public final class TemplateSaver {
                 throw new InputProblem(target.toString(), 0, 0, null, "your personal pack already has a template '" + e.name()
                         + "' that the list does not show yet; nothing was written: reload the packs and edit that one");
             }
+        } else if (!Files.isRegularFile(target)) {
+            throw new InputProblem(target.toString(), 0, 0, null,
+                    "the file was moved or deleted since it was opened; nothing was written: reload the packs");
         } else if (!read(target).equals(asOpened)) {
             throw new InputProblem(target.toString(), 0, 0, null,
                     "the file changed on disk since it was opened; nothing was written: select the template again to see it");

@@ -106,8 +106,17 @@ public final class WorksheetSession {
         edit("Delete " + sel.get().id(), next);
         List<RadiusFeature> fs = next.features();
         selectedId = fs.isEmpty() ? null : fs.get(Math.min(i, fs.size() - 1)).id();
+        forgetMeasuredOfGoneFeatures();
         changed();
         return true;
+    }
+
+    /**
+     * Drops the measured points of features no longer in the worksheet, so that a feature added
+     * later under a freed id never shows another feature's points.
+     */
+    private void forgetMeasuredOfGoneFeatures() {
+        measured.keySet().removeIf(id -> worksheet.features().stream().noneMatch(f -> f.id().equals(id)));
     }
 
     /** Replaces the case of feature {@code id}; a changed case clears the chosen callout. */
@@ -162,6 +171,7 @@ public final class WorksheetSession {
         if (!history.canUndo()) return;
         worksheet = history.undo(worksheet);
         keepSelectionValid();
+        forgetMeasuredOfGoneFeatures();
         changed();
     }
 
@@ -169,6 +179,7 @@ public final class WorksheetSession {
         if (!history.canRedo()) return;
         worksheet = history.redo(worksheet);
         keepSelectionValid();
+        forgetMeasuredOfGoneFeatures();
         changed();
     }
 

@@ -208,9 +208,10 @@ public final class PracticeEditorPanel extends JPanel {
         if (!loading) previewLater.restart();
     }
 
-    private void refreshPreview() {
+    /** Checks and fills the template being edited, shows the result; true when it checks. */
+    private boolean refreshPreview() {
         TemplatePreview.Entry e = templateList.getSelectedValue();
-        if (e == null) return;
+        if (e == null) return false;
         TemplatePreview.Result r = TemplatePreview.fill(e, templateText.getText(), session.worksheet(),
                 session.selected().orElse(null));
         boolean builtIn = e.layer() == PackLayer.BUILT_IN;
@@ -225,14 +226,14 @@ public final class PracticeEditorPanel extends JPanel {
         } else {
             templateVerdict.show(r.problem().getMessage(), "Arcwright.error.foreground");
         }
+        return r.ok();
     }
 
     private void saveTemplate() {
         TemplatePreview.Entry e = templateList.getSelectedValue();
         if (e == null || templateOpened == null) return;
         previewLater.stop();
-        refreshPreview();
-        if (!templateSave.isEnabled()) return;
+        if (!refreshPreview()) return;
         templateSave.setEnabled(false);
         String text = templateText.getText();
         String opened = templateOpened;

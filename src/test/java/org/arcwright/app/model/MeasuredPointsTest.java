@@ -202,6 +202,20 @@ class MeasuredPointsTest {
         assertThat(s.measured("F1")).isEmpty();
     }
 
+    @Test
+    void aDeletedFeaturesPointsNeverReachAFeatureAddedUnderItsId() {
+        WorksheetSession s = new WorksheetSession(Fixtures.files(), Fixtures.twoFeatures(), null);
+        String last = s.worksheet().features().get(s.worksheet().features().size() - 1).id();
+        s.keepMeasured(last, measured(fillet(new Callout.Radius(1.8, 2.2, 2.0)), onBlend(2.0, 45)));
+        s.select(last);
+        assertThat(s.deleteSelected()).isTrue();
+        assertThat(s.measured(last)).isEmpty();
+        s.undo();
+        RadiusFeature again = s.worksheet().features().get(s.worksheet().features().size() - 1);
+        assertThat(again.id()).isEqualTo(last);
+        assertThat(s.measured(last)).isEmpty();
+    }
+
     private static double distance(ZonePicture.Pt p, List<ZonePicture.Pt> line) {
         double best = Double.POSITIVE_INFINITY;
         List<ZonePicture.Pt> pts = new ArrayList<>(line);

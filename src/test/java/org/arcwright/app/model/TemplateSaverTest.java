@@ -65,8 +65,8 @@ class TemplateSaverTest {
         PartWorksheet ws = Fixtures.twoFeatures();
         String id = ws.features().get(0).id();
         assertThat(NoteTemplates.load(reloaded).fill("callout-note", ws, id, "test")).startsWith("OVERRIDDEN " + id);
-        // the built-in template itself is untouched
-        assertThat(TemplatePreview.text(builtIn)).doesNotContain("OVERRIDDEN");
+        // the built-in template itself is untouched, read afresh
+        assertThat(TemplatePreview.text(named(PackStack.builtIn(), "callout-note"))).doesNotContain("OVERRIDDEN");
         // the pack still loads its rules: no rule override was declared for a template
         assertThat(org.arcwright.rules.RuleBook.load(reloaded).problems()).isEmpty();
     }
@@ -94,6 +94,17 @@ class TemplateSaverTest {
         assertThatThrownBy(() -> TemplateSaver.save(e, "MINE {{part.number}}\n", original, dir))
                 .isInstanceOf(InputProblem.class).hasMessageContaining("changed on disk");
         assertThat(Files.readString(e.file())).isEqualTo(savedElsewhere);
+    }
+
+    @Test
+    void aFileDeletedSinceItWasOpenedIsAClearProblemAndNothingIsWritten(@TempDir Path dir) throws Exception {
+        String original = "BENCH NOTE FOR {{part.number}}\n";
+        Path team = teamPack(dir, original);
+        TemplatePreview.Entry e = named(PackStack.load(List.of(team), null), "bench-note");
+        Files.delete(e.file());
+        assertThatThrownBy(() -> TemplateSaver.save(e, "MINE {{part.number}}\n", original, dir))
+                .isInstanceOf(InputProblem.class).hasMessageContaining("moved or deleted");
+        assertThat(e.file()).doesNotExist();
     }
 
     @Test
