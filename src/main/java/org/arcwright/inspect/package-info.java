@@ -15,7 +15,9 @@
  *   <li>{@link org.arcwright.inspect.ProfileCheck}: Chebyshev registration of a profile zone over the
  *       free degrees of freedom; {@link org.arcwright.inspect.ControlledRadiusCheck}: local radius,
  *       flats and reversals; {@link org.arcwright.inspect.Blend}: separating the blend from the legs.</li>
- *   <li>{@link org.arcwright.inspect.InspectionJson}: the JSON form of a result.</li>
+ *   <li>{@link org.arcwright.inspect.InspectionJson}: the JSON form of a result;
+ *       {@link org.arcwright.inspect.PointExcesses}: each point's excess and the allowance it is
+ *       read against, for the plot and the window alike.</li>
  * </ul>
  *
  * <h2>Method</h2>

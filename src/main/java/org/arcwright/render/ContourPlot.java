@@ -22,6 +22,7 @@ import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.Nominal;
+import org.arcwright.inspect.PointExcesses;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.inspect.ProfileOutcome;
 import org.arcwright.inspect.Registration;
@@ -107,18 +108,16 @@ public final class ContourPlot {
         int n = pts.size();
 
         // Points as drawn (after any registration) and their excess.
-        ProfileOutcome po = r.profile() != null ? r.profile() : r.tiers() != null ? r.tiers().get(0) : null;
-        Registration reg = po == null ? null : po.registration();
+        PointExcesses excesses = PointExcesses.of(r);
+        ProfileOutcome po = excesses.profile();
+        Registration reg = excesses.registration();
         int stride = Math.max(1, n / MAX_DRAWN);
         List<double[]> drawn = new ArrayList<>();
         double[] moved = new double[2];
-        RadiusZone rz = null;
-        if (q.callout() instanceof InspectionCallout.RadiusLimits rl && q.nominal() instanceof Nominal.CornerBlend cb) {
-            rz = new RadiusZone(cb.corner(), rl.min(), rl.max(), q.resolution());
-        }
-        double band = band(q, po);
-        for (int i = 0; i < n; i += stride) addPoint(i, pts, reg, rz, po, drawn, moved);
-        if (r.worst() != null && r.worst().index() % stride != 0) addPoint(r.worst().index(), pts, reg, rz, po, drawn, moved);
+        RadiusZone rz = excesses.radiusZone();
+        double band = excesses.allowance();
+        for (int i = 0; i < n; i += stride) addPoint(i, pts, reg, excesses, drawn, moved);
+        if (r.worst() != null && r.worst().index() % stride != 0) addPoint(r.worst().index(), pts, reg, excesses, drawn, moved);
 
         // Magnification: the larger of the zone and the deviations shows as ~7% of the view.
         double[] view = view(q, drawn);
@@ -191,22 +190,15 @@ public final class ContourPlot {
         labels(g, r, mag, q.units().symbol());
     }
 
-    private static void addPoint(int i, PointSet pts, Registration reg, RadiusZone rz, ProfileOutcome po,
-                                 List<double[]> drawn, double[] moved) {
+    private static void addPoint(int i, PointSet pts, Registration reg, PointExcesses excesses, List<double[]> drawn,
+                                 double[] moved) {
         double x = pts.xs()[i], y = pts.ys()[i];
         if (reg != null) {
             reg.apply(x, y, moved);
             x = moved[0];
             y = moved[1];
         }
-        double excess = rz != null ? rz.excess(pts.xs()[i], pts.ys()[i]) : po != null ? po.zone().excess(po.deviations()[i]) : Double.NaN;
-        drawn.add(new double[] {x, y, excess, i});
-    }
-
-    /** Width of the allowance, for colouring: the radius band for R/CR, the zone for profile. */
-    private static double band(InspectionRequest q, ProfileOutcome po) {
-        if (q.callout() instanceof InspectionCallout.RadiusLimits rl) return Math.max(rl.max() - rl.min(), 1e-12);
-        return po == null ? 1 : po.zone().width();
+        drawn.add(new double[] {x, y, excesses.excess(i), i});
     }
 
     /** Width of the zone as drawn: the crescent on the bisector for R/CR, the zone for profile. */
@@ -220,7 +212,7 @@ public final class ContourPlot {
     private static Color colour(double excess, double band) {
         if (Double.isNaN(excess)) return IDLE;
         if (excess > 0) return OUT;
-        if (excess > -0.15 * band) return NEAR;
+        if (excess > -PointExcesses.NEAR_SHARE * band) return NEAR;
         return OK;
     }
 

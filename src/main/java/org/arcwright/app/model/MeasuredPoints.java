@@ -8,14 +8,13 @@ import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Nominal;
-import org.arcwright.inspect.ProfileOutcome;
+import org.arcwright.inspect.PointExcesses;
 import org.arcwright.inspect.Registration;
 import org.arcwright.rules.BlendKind;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.CornerKind;
 import org.arcwright.zone.Point2;
-import org.arcwright.zone.RadiusZone;
 
 /**
  * The measured points of an inspection as the Zone view plots them: moved into the view's frame
@@ -40,7 +39,7 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
     /** More points than this are thinned evenly for drawing. */
     public static final int MAX_DRAWN = 20_000;
     /** Inside, but closer than this share of the band to a limit: {@link Grade#NEAR_LIMIT} (as the contour plot). */
-    public static final double NEAR_SHARE = 0.15;
+    public static final double NEAR_SHARE = PointExcesses.NEAR_SHARE;
     /** Outside by more than this share of the band: {@link Grade#FAR_OUTSIDE}. */
     public static final double FAR_SHARE = 0.5;
 
@@ -92,12 +91,9 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
         if (!(q.nominal() instanceof Nominal.CornerBlend)) return Optional.empty();
         Nominal.CornerBlend cb = (Nominal.CornerBlend) q.nominal();
         Corner corner = cb.corner();
-        ProfileOutcome po = r.profile() != null ? r.profile() : r.tiers() != null && !r.tiers().isEmpty() ? r.tiers().get(0) : null;
-        Registration reg = po == null ? null : po.registration();
-        RadiusZone rz = q.callout() instanceof InspectionCallout.RadiusLimits
-                ? new RadiusZone(corner, ((InspectionCallout.RadiusLimits) q.callout()).min(),
-                        ((InspectionCallout.RadiusLimits) q.callout()).max(), q.resolution()) : null;
-        double band = rz != null ? Math.max(rz.max() - rz.min(), 1e-12) : po != null ? po.zone().width() : 1;
+        PointExcesses excesses = PointExcesses.of(r);
+        Registration reg = excesses.registration();
+        double band = excesses.allowance();
         Frame frame = new Frame(corner);
         int n = q.points().size();
         int stride = Math.max(1, (n + MAX_DRAWN - 1) / MAX_DRAWN);
@@ -123,7 +119,7 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
                 x -= offset * measured[1];
                 y -= offset * measured[2];
             }
-            double excess = rz != null ? rz.excess(xs[i], ys[i]) : po != null ? po.zone().excess(po.deviations()[i]) : Double.NaN;
+            double excess = excesses.excess(i);
             ZonePicture.Pt p = frame.toView(x, y);
             out.add(new Point(i, p.x(), p.y(), excess, grade(excess, band)));
         }
