@@ -9,7 +9,7 @@ import java.util.Map;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.rules.Advice;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.rules.RuleBook;
@@ -68,7 +68,7 @@ final class AdviceOutput {
         out.printf("%s%s R%s %s, %s, %s, %s, %s%s%s%n",
                 c.feature() == null ? "" : c.feature() + ": ", c.kind().key(),
                 Numbers.plain(c.nominalRadius()), c.units().symbol(), c.function().key(),
-                c.loading() == org.arcwright.rules.Loading.NONE ? "no load" : c.loading().key() + " load",
+                c.loading() == org.arcwright.model.Loading.NONE ? "no load" : c.loading().key() + " load",
                 c.process().key(), c.standard().key().toUpperCase(java.util.Locale.ROOT),
                 c.hasDatums() ? ", datums " + String.join(" ", c.datums()) : ", no datums",
                 (c.formMatters() ? ", form matters" : "") + (c.locationMatters() ? ", location matters" : "")
@@ -105,7 +105,7 @@ final class AdviceOutput {
                 + num(m, "max", p) + " " + u);
         if (m.containsKey("zone")) append(sb, "zone", m.get("zone") + (m.containsKey("tierZones") ? " (tiers " + m.get("tierZones") + ")" : ""));
         Object angle = m.get("angle");
-        boolean square = angle instanceof Number n && n.doubleValue() == org.arcwright.rules.DesignCase.SQUARE_CORNER;
+        boolean square = angle instanceof Number n && n.doubleValue() == org.arcwright.model.DesignCase.SQUARE_CORNER;
         append(sb, "crescent", num(m, "crescentWidth", p + 1)
                 + (angle == null || square ? "" : " at a " + Numbers.plain(((Number) angle).doubleValue()) + "° corner"));
         append(sb, "equivalent profile zone", num(m, "equivalentProfileZone", p + 1));

@@ -15,7 +15,7 @@ import org.arcwright.pack.PracticePack;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.Advisor;
 import org.arcwright.rules.CaseTable;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.rules.RuleBook;
 import org.arcwright.worksheet.PartWorksheet;

@@ -7,7 +7,7 @@ import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
 import org.arcwright.callout.Callout;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.templates.CalloutText;
@@ -153,7 +153,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
                     r == null ? "—" : CalloutText.controlName(r.callout()),
                     r == null ? "undecided" : text.line(r.callout(), false).replace("\n", " / "), status));
             String caseLine = c.kind().key() + ", " + c.function().key() + ", "
-                    + (c.loading() == org.arcwright.rules.Loading.NONE ? "no service load" : c.loading().key() + " loading")
+                    + (c.loading() == org.arcwright.model.Loading.NONE ? "no service load" : c.loading().key() + " loading")
                     + ", "
                     + c.process().key() + ", nominal R" + text.value(c.nominalRadius()) + " " + ws.units().symbol()
                     + (c.datums().isEmpty() ? "" : ", datums " + String.join(", ", c.datums()))

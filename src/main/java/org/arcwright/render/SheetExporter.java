@@ -71,7 +71,7 @@ public final class SheetExporter {
 
     /** A suggestion for an undecided feature's case, e.g. {@code c -> advisor.advise(c).first()}. */
     @FunctionalInterface
-    public interface Suggestions extends java.util.function.Function<org.arcwright.rules.DesignCase,
+    public interface Suggestions extends java.util.function.Function<org.arcwright.model.DesignCase,
             java.util.Optional<org.arcwright.rules.Recommendation>> {
         /** Suggests nothing. */
         Suggestions NONE = c -> java.util.Optional.empty();

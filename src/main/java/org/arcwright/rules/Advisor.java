@@ -1,5 +1,9 @@
 package org.arcwright.rules;
 
+import org.arcwright.model.DesignCase;
+import org.arcwright.model.BlendKind;
+import org.arcwright.model.Loading;
+import org.arcwright.model.BlendFunction;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.ArrayList;

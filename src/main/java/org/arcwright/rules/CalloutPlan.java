@@ -1,5 +1,6 @@
 package org.arcwright.rules;
 
+import org.arcwright.model.Keys;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;

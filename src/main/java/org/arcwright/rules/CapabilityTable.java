@@ -1,5 +1,6 @@
 package org.arcwright.rules;
 
+import org.arcwright.model.Process;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.LinkedHashMap;

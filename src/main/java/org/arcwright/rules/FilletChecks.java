@@ -1,5 +1,6 @@
 package org.arcwright.rules;
 
+import org.arcwright.model.DesignCase;
 import java.util.List;
 import java.util.Optional;
 

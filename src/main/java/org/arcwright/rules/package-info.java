@@ -4,7 +4,7 @@
  *
  * <h2>Main abstractions</h2>
  * <ul>
- *   <li>{@link org.arcwright.rules.DesignCase}: what the radius does, how it is loaded and made.</li>
+ *   <li>the case it reads ({@link org.arcwright.model.DesignCase}, in the central model package).</li>
  *   <li>{@link org.arcwright.rules.Rule}: {@code when} ({@link org.arcwright.rules.When}, conditions on
  *       {@link org.arcwright.rules.Fact}s), {@code recommend} ({@link org.arcwright.rules.CalloutPlan}),
  *       weight, reasoning, cautions, references and self-test examples.</li>
@@ -26,7 +26,7 @@
  *   Advice advice = advisor.advise(designCase);              // deterministic, thread-safe
  * </pre>
  *
- * <p>May import: the JDK, Jackson and the core packages ({@code io}, {@code tolerance},
+ * <p>May import: the JDK, Jackson and the core packages ({@code model}, {@code io}, {@code tolerance},
  * {@code pack}, {@code callout}, {@code mechanics}). Linked notes come in through the
  * {@link org.arcwright.rules.NoteLinker} seam, so this package does not depend on Lucene. Must not
  * import Swing/AWT or print.

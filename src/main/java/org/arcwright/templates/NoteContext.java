@@ -9,7 +9,7 @@ import java.util.Objects;
 import org.arcwright.callout.Callout;
 import org.arcwright.callout.Extent;
 import org.arcwright.callout.ProfileTier;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.DrawingStyle;

@@ -1,5 +1,10 @@
 package org.arcwright.rules;
 
+import org.arcwright.model.DesignCase;
+import org.arcwright.model.BlendKind;
+import org.arcwright.model.Process;
+import org.arcwright.model.Loading;
+import org.arcwright.model.BlendFunction;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;

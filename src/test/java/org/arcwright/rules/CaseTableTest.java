@@ -1,5 +1,6 @@
 package org.arcwright.rules;
 
+import org.arcwright.model.DesignCase;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 

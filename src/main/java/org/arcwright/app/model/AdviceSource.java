@@ -1,7 +1,7 @@
 package org.arcwright.app.model;
 
 import java.util.List;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 
 /**

@@ -16,7 +16,7 @@ import org.arcwright.inspect.PointSet;
 import org.arcwright.inspect.PointsCsv;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
-import org.arcwright.rules.BlendKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.worksheet.InspectionRecord;
 import org.arcwright.worksheet.RadiusFeature;

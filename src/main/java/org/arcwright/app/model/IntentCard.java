@@ -5,7 +5,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.arcwright.callout.Callout;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.CalloutParser;
 import org.arcwright.tolerance.LimitsReport;

@@ -10,7 +10,7 @@ import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointExcesses;
 import org.arcwright.inspect.Registration;
-import org.arcwright.rules.BlendKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.CornerKind;

@@ -7,7 +7,7 @@ import org.arcwright.mechanics.LoadCase;
 import org.arcwright.mechanics.ShoulderShape;
 import org.arcwright.mechanics.StressTarget;
 import org.arcwright.mechanics.UltimateStrength;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.tolerance.CalloutParser;
 import org.arcwright.tolerance.RadiusCallout;
 import org.arcwright.worksheet.RadiusFeature;

@@ -5,7 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import java.util.Optional;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
@@ -74,9 +74,9 @@ public final class WorksheetSession {
     /** Adds a new open feature after the selection (or at the end) and selects it. */
     public RadiusFeature addFeature() {
         String id = worksheet.nextFeatureId();
-        DesignCase c = new DesignCase(worksheet.units(), worksheet.standard(), "New fillet", org.arcwright.rules.BlendKind.FILLET,
-                worksheet.units() == Units.INCH ? 0.06 : 1.0, org.arcwright.rules.BlendFunction.COSMETIC,
-                org.arcwright.rules.Loading.NONE, false, false, List.of(), org.arcwright.rules.Process.MACHINED,
+        DesignCase c = new DesignCase(worksheet.units(), worksheet.standard(), "New fillet", org.arcwright.model.BlendKind.FILLET,
+                worksheet.units() == Units.INCH ? 0.06 : 1.0, org.arcwright.model.BlendFunction.COSMETIC,
+                org.arcwright.model.Loading.NONE, false, false, List.of(), org.arcwright.model.Process.MACHINED,
                 null, null, null);
         RadiusFeature f = new RadiusFeature(id, c, null, null);
         edit("Add " + id, worksheet.withFeatureAt(insertionIndex(), f));

@@ -47,7 +47,7 @@ public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, doub
             double addMaterial = b.outward();
             double removeMaterial = b.zone() - b.outward();
             // Vertex side is the add-material side of a round, the remove-material side of a fillet.
-            boolean round = b.kind() == org.arcwright.rules.BlendKind.ROUND;
+            boolean round = b.kind() == org.arcwright.model.BlendKind.ROUND;
             double towardVertex = round ? addMaterial : removeMaterial;
             double away = round ? removeMaterial : addMaterial;
             List<Pt> lower = offset(nominal, r, th, reach, magnification * towardVertex);
@@ -95,7 +95,7 @@ public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, doub
      */
     public double deviationTowardAir(Pt p) {
         double d = foot(p, spec.nominal(), Math.toRadians(spec.angleDeg())).toward();
-        return spec.kind() == org.arcwright.rules.BlendKind.ROUND ? d : -d;
+        return spec.kind() == org.arcwright.model.BlendKind.ROUND ? d : -d;
     }
 
     /**
@@ -170,11 +170,11 @@ public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, doub
      * The part's material near the corner as a closed outline, for shading: inside the corner for a
      * round, outside it (with the fillet's added material) for a fillet.
      */
-    public List<Pt> material(org.arcwright.rules.BlendKind kind, double angleDeg) {
+    public List<Pt> material(org.arcwright.model.BlendKind kind, double angleDeg) {
         List<Pt> out = new ArrayList<>(nominal);
         Pt first = nominal.get(0);
         Pt last = nominal.get(nominal.size() - 1);
-        if (kind == org.arcwright.rules.BlendKind.ROUND) {
+        if (kind == org.arcwright.model.BlendKind.ROUND) {
             out.add(new Pt(last.x() + first.x(), last.y() + first.y()));
             return out;
         }

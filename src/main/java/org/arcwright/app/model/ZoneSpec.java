@@ -2,8 +2,8 @@ package org.arcwright.app.model;
 
 import java.util.Optional;
 import org.arcwright.callout.Callout;
-import org.arcwright.rules.BlendKind;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.BlendKind;
+import org.arcwright.model.DesignCase;
 import org.arcwright.tolerance.CalloutParser;
 import org.arcwright.tolerance.RadiusCallout;
 

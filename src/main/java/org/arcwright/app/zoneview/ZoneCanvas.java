@@ -37,7 +37,7 @@ final class ZoneCanvas extends JComponent {
     private double panY;
     private Point dragFrom;
     private String units = "mm";
-    private org.arcwright.rules.BlendKind kind = org.arcwright.rules.BlendKind.FILLET;
+    private org.arcwright.model.BlendKind kind = org.arcwright.model.BlendKind.FILLET;
     private double angle = 90;
 
     ZoneCanvas() {
@@ -53,7 +53,7 @@ final class ZoneCanvas extends JComponent {
         addMouseWheelListener(m);
     }
 
-    void show(ZoneScene s, String unitSymbol, org.arcwright.rules.BlendKind blendKind) {
+    void show(ZoneScene s, String unitSymbol, org.arcwright.model.BlendKind blendKind) {
         this.scene = s;
         this.picture = s == null ? null : s.picture();
         this.kind = blendKind;

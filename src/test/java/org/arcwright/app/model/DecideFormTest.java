@@ -3,7 +3,7 @@ package org.arcwright.app.model;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.tolerance.LimitsReport;
 import org.junit.jupiter.api.Test;
 

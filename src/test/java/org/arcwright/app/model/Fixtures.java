@@ -2,11 +2,11 @@ package org.arcwright.app.model;
 
 import java.util.List;
 import org.arcwright.io.JsonFiles;
-import org.arcwright.rules.BlendFunction;
-import org.arcwright.rules.BlendKind;
-import org.arcwright.rules.DesignCase;
-import org.arcwright.rules.Loading;
-import org.arcwright.rules.Process;
+import org.arcwright.model.BlendFunction;
+import org.arcwright.model.BlendKind;
+import org.arcwright.model.DesignCase;
+import org.arcwright.model.Loading;
+import org.arcwright.model.Process;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.PartWorksheet;

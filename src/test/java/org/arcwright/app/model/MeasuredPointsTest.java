@@ -155,7 +155,7 @@ class MeasuredPointsTest {
         // only the request matters to the frame: a bare result stands in for the inspection
         var result = new org.arcwright.inspect.InspectionResult(q, true, null, null, null, null, null, null, List.of(), List.of());
         MeasuredPoints m = MeasuredPoints.of(result, "rotated.json").orElseThrow();
-        assertThat(m.kind()).isEqualTo(org.arcwright.rules.BlendKind.ROUND);
+        assertThat(m.kind()).isEqualTo(org.arcwright.model.BlendKind.ROUND);
         // leg A onto +x, leg B onto +y, the bisector onto 45°; distances from the vertex kept
         assertThat(m.points().get(0).x()).isEqualTo(2, within(1e-12));
         assertThat(m.points().get(0).y()).isEqualTo(0, within(1e-12));

@@ -4,7 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
 import org.arcwright.callout.Callout;
-import org.arcwright.rules.BlendKind;
+import org.arcwright.model.BlendKind;
 import org.junit.jupiter.api.Test;
 
 class ZonePictureTest {

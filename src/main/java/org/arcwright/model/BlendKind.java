@@ -1,4 +1,4 @@
-package org.arcwright.rules;
+package org.arcwright.model;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonValue;
