@@ -8,12 +8,13 @@ import com.fasterxml.jackson.databind.JsonMappingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
+import com.fasterxml.jackson.databind.cfg.CoercionAction;
+import com.fasterxml.jackson.databind.cfg.CoercionInputShape;
 import com.fasterxml.jackson.databind.json.JsonMapper;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
+import java.util.Locale;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import java.util.stream.Collectors;
 
 /**
@@ -34,6 +35,11 @@ public final class JsonFiles {
                 .enable(SerializationFeature.INDENT_OUTPUT)
                 .disable(SerializationFeature.FAIL_ON_EMPTY_BEANS)
                 .build();
+        // "" for a number, a list or an object is a mistake, not "absent": absent would quietly
+        // switch an optional check off
+        mapper.coercionConfigDefaults()
+                .setCoercion(CoercionInputShape.EmptyString, CoercionAction.Fail)
+                .setAcceptBlankAsEmpty(Boolean.FALSE);
     }
 
     public ObjectMapper mapper() { return mapper; }
@@ -43,31 +49,34 @@ public final class JsonFiles {
         return read(file, JsonNode.class);
     }
 
-    /** Reads a file as the given type; errors name the file, position and field. */
+    /**
+     * Reads a file as the given type through {@link InputFiles} (regular files only, size cap, BOM
+     * accepted); errors name the file, position and field.
+     */
     public <T> T read(Path file, Class<T> type) {
-        String text;
-        try {
-            text = Files.readString(file);
-        } catch (NoSuchFileException e) {
-            throw new InputProblem(file.toString(), 0, 0, null, "file not found");
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw new InputProblem(file.toString(), 0, 0, null, "not UTF-8 text");
-        } catch (IOException e) {
-            throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
-        }
-        return parse(text, file.toString(), type);
+        return parse(InputFiles.readText(file), file.toString(), type);
     }
 
-    /** Parses text as the given type, attributing errors to {@code source}. */
+    /** Reads a file a practice pack supplies: as {@link #read}, and only from inside {@code packFolder}. */
+    public <T> T readPackFile(Path file, Path packFolder, Class<T> type) {
+        return parse(InputFiles.readPackText(file, packFolder), file.toString(), type);
+    }
+
+    /** Parses text as the given type, attributing errors to {@code source}; a bare {@code null} is refused. */
     public <T> T parse(String text, String source, Class<T> type) {
         if (text.isBlank()) {
             throw new InputProblem(source, 1, 1, null, "empty file, expected JSON");
         }
+        T value;
         try {
-            return mapper.readValue(text, type);
+            value = mapper.readValue(text, type);
         } catch (JsonProcessingException e) {
             throw located(e, source);
         }
+        if (value == null || value instanceof com.fasterxml.jackson.databind.node.NullNode) {
+            throw new InputProblem(source, 1, 1, null, "the file holds only null; expected " + expected(type));
+        }
+        return value;
     }
 
     /** Converts a tree node to a type, attributing errors to {@code source}. */
@@ -110,11 +119,16 @@ public final class JsonFiles {
         return new InputProblem(source, line, col, field, cleanMessage(e), e);
     }
 
+    private static final Pattern FROM_VALUE = Pattern.compile("from (\\w+) value");
+    private static final Pattern TYPE = Pattern.compile("`([\\w.$\\[\\]]+)`");
+
+    /** What went wrong, in the user's terms: no Java or Jackson class or option names. */
     private static String cleanMessage(JsonProcessingException e) {
         Throwable root = e;
         while (root.getCause() != null && root.getCause() != root) {
             if (root.getCause() instanceof InputProblem ip) return ip.problem();
-            if (root.getCause() instanceof IllegalArgumentException iae) return iae.getMessage();
+            if (root.getCause() instanceof IllegalArgumentException iae && iae.getMessage() != null) return iae.getMessage();
+            if (root.getCause() instanceof NullPointerException) return "missing a required value";
             root = root.getCause();
         }
         if (e instanceof com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException upe) {
@@ -122,14 +136,104 @@ public final class JsonFiles {
                     + upe.getKnownPropertyIds().stream().map(Object::toString).sorted()
                             .collect(Collectors.joining(", "));
         }
-        if (e instanceof com.fasterxml.jackson.databind.exc.MismatchedInputException mie && mie.getTargetType() != null
-                && mie.getOriginalMessage().startsWith("Missing required creator property")) {
-            return "missing required field";
-        }
-        String msg = e.getOriginalMessage();
+        String msg = e.getOriginalMessage() == null ? "" : e.getOriginalMessage();
         int cut = msg.indexOf("\n at [Source");
         if (cut >= 0) msg = msg.substring(0, cut);
-        return msg;
+        if (e instanceof com.fasterxml.jackson.databind.exc.MismatchedInputException mie) {
+            if (msg.startsWith("Missing required creator property")) return "missing required field";
+            String want = mie.getTargetType() == null ? null : expected(mie.getTargetType());
+            if (msg.startsWith("Cannot coerce empty String")) {
+                return "empty text \"\" where " + (want == null ? "a value" : want) + " is expected";
+            }
+            if (mie instanceof com.fasterxml.jackson.databind.exc.InvalidFormatException ife && want != null) {
+                return "expected " + want + ", got " + shown(ife.getValue());
+            }
+            Matcher m = FROM_VALUE.matcher(msg);
+            if (want != null && m.find()) return "expected " + want + ", got " + kind(m.group(1));
+            if (msg.startsWith("No content to map")) return "empty file, expected JSON";
+            if (want != null) return "expected " + want;
+        }
+        return parseMessage(msg);
+    }
+
+    private static String parseMessage(String msg) {
+        String m = msg;
+        if (m.contains("'NaN'") || m.contains("Infinity") || m.contains("ALLOW_NON_NUMERIC_NUMBERS")) {
+            return "NaN and Infinity are not numbers here; give a finite number";
+        }
+        if (m.startsWith("Unexpected end-of-input")) return "the JSON ends too early (a missing } or ]?)";
+        if (m.startsWith("Duplicate field")) {
+            int q = m.indexOf('\'');
+            int q2 = q < 0 ? -1 : m.indexOf('\'', q + 1);
+            return "field " + (q2 > q ? m.substring(q, q2 + 1) : "") + " given twice";
+        }
+        if (m.contains("ALLOW_SINGLE_QUOTES")) return "text must be in double quotes";
+        if (m.contains("ALLOW_COMMENTS")) return "comments are not allowed in JSON";
+        if (m.contains("ALLOW_TRAILING_COMMA") || m.contains("was expecting double-quote to start field name")) {
+            return "expected a field name in double quotes (a trailing comma?)";
+        }
+        if (m.contains("ALLOW_LEADING_") || m.contains("Leading zeroes")) return "not a valid JSON number";
+        return scrub(m);
+    }
+
+    /** Drops option hints and code numbers, and names types in the user's terms. */
+    private static String scrub(String msg) {
+        String m = msg.replaceAll(" \\(code \\d+\\)", "")
+                .replaceAll(":? *[Ee]nable `[^`]*` to allow", "")
+                .replaceAll("\\(for Object starting at [^)]*\\)", "")
+                .replaceAll("\\s*\\(through reference chain:[^)]*\\)", "");
+        Matcher t = TYPE.matcher(m);
+        StringBuilder sb = new StringBuilder();
+        while (t.find()) t.appendReplacement(sb, Matcher.quoteReplacement(typeWord(t.group(1))));
+        t.appendTail(sb);
+        return sb.toString().replace("JsonToken.", "").strip();
+    }
+
+    private static String shown(Object v) {
+        if (v == null) return "null";
+        String s = v.toString();
+        if (s.length() > 40) s = s.substring(0, 40) + "...";
+        return v instanceof String ? "the text \"" + s + "\"" : s;
+    }
+
+    private static String kind(String jacksonShape) {
+        switch (jacksonShape.toLowerCase(Locale.ROOT)) {
+            case "string": return "text";
+            case "object": return "an object {...}";
+            case "array": return "a list [...]";
+            case "integer": case "floating": case "double": case "number": return "a number";
+            case "boolean": return "true or false";
+            case "null": return "null";
+            default: return "a " + jacksonShape.toLowerCase(Locale.ROOT) + " value";
+        }
+    }
+
+    /** The user's word for what a Java type expects in JSON. */
+    static String expected(Class<?> type) {
+        if (type == Double.class || type == double.class || type == Float.class || type == float.class
+                || type == java.math.BigDecimal.class) {
+            return "a number";
+        }
+        if (type == Integer.class || type == int.class || type == Long.class || type == long.class) return "a whole number";
+        if (type == Boolean.class || type == boolean.class) return "true or false";
+        if (type == String.class || type.isEnum()) return "text";
+        if (type.isArray() || java.util.Collection.class.isAssignableFrom(type)
+                || type == com.fasterxml.jackson.databind.node.ArrayNode.class) {
+            return "a list [...]";
+        }
+        return "an object {...}";
+    }
+
+    private static String typeWord(String javaName) {
+        String n = javaName;
+        if (n.endsWith("[]")) return "a list";
+        switch (n) {
+            case "double": case "java.lang.Double": case "float": case "java.lang.Float": return "a number";
+            case "int": case "java.lang.Integer": case "long": case "java.lang.Long": return "a whole number";
+            case "boolean": case "java.lang.Boolean": return "true or false";
+            case "java.lang.String": return "text";
+            default: return n.startsWith("java.util.") && (n.contains("List") || n.contains("Set")) ? "a list" : "an object";
+        }
     }
 
     private static String rootMessage(Throwable e) {

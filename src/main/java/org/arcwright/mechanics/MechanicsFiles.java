@@ -1,10 +1,6 @@
 package org.arcwright.mechanics;
 
 import com.fasterxml.jackson.annotation.JsonProperty;
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -201,14 +197,6 @@ public final class MechanicsFiles {
     }
 
     private static String text(Path file) {
-        try {
-            return Files.readString(file);
-        } catch (NoSuchFileException e) {
-            throw new InputProblem(file.toString(), 0, 0, null, "file not found");
-        } catch (java.nio.charset.MalformedInputException e) {
-            throw new InputProblem(file.toString(), 0, 0, null, "not UTF-8 text");
-        } catch (IOException e) {
-            throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
-        }
+        return org.arcwright.io.InputFiles.readText(file);
     }
 }
