@@ -50,7 +50,7 @@ final class LimitsCommand implements Callable<Integer> {
         PrintWriter out = spec.commandLine().getOut();
         if (format == OutputFormat.json) {
             Map<String, Object> m = toJson(r);
-            if (fillet != null && r.crescent() != null) m.put("unequalProfile", unequal(r.crescent(), fillet));
+            if (fillet != null && r.crescent() != null && r.nominal() != null) m.put("unequalProfile", unequal(r, fillet));
             out.println(new JsonFiles().write(m));
         } else {
             printText(out, r, fillet);
@@ -64,20 +64,37 @@ final class LimitsCommand implements Callable<Integer> {
         throw org.arcwright.io.InputProblem.ofField("--blend", "use round or fillet, got '" + text + "'");
     }
 
+    /** Why a figure is omitted for this form, or null when it is given. */
+    private static String omitted(LimitsReport r) {
+        if (r.crescent() == null || r.nominal() != null) return null;
+        return "a MAX-only radius has no nominal arc and no deviation";
+    }
+
+    /** The limit arc nearest the nominal: where the true profile is drawn when the zone does not reach the nominal. */
+    private static double nearestLimit(LimitsReport r) {
+        return Math.abs(r.min() - r.nominal()) <= Math.abs(r.max() - r.nominal()) ? r.min() : r.max();
+    }
+
     /** The unequally disposed profile zone that holds the crescent exactly, ASME and ISO forms. */
-    private static Map<String, Object> unequal(CrescentZone c, boolean fillet) {
+    private static Map<String, Object> unequal(LimitsReport r, boolean fillet) {
+        CrescentZone c = r.crescent();
         Map<String, Object> m = new LinkedHashMap<>();
-        double outward = c.outwardPortion(fillet);
         m.put("blend", fillet ? "fillet" : "round");
         m.put("zone", c.width());
-        m.put("outward", outward);
-        m.put("isoOffset", outward - c.width() / 2);
+        m.put("isoOffset", c.isoOffset(fillet));
+        if (c.holdsNominal()) {
+            m.put("outward", c.outwardPortion(fillet).getAsDouble());
+            m.put("asmeBasicRadius", r.nominal());
+        } else {
+            double at = nearestLimit(r);
+            m.put("outward", CrescentZone.of(r.min(), at, r.max(), r.includedAngleDeg()).outwardPortion(fillet).getAsDouble());
+            m.put("asmeBasicRadius", at);
+        }
         return m;
     }
 
     static Map<String, Object> toJson(LimitsReport r) {
         Map<String, Object> m = new LinkedHashMap<>();
-        m.put("input", r.callout().kind().symbol());
         m.put("kind", r.callout().kind().symbol());
         m.put("units", r.callout().units().symbol());
         m.put("form", r.callout().form().formName());
@@ -85,53 +102,104 @@ final class LimitsCommand implements Callable<Integer> {
         m.put("min", r.min());
         m.put("max", r.max());
         m.put("nominal", r.nominal());
+        m.put("nominalDrawn", r.callout().nominal().isPresent());
         m.put("mean", r.callout().mean().isPresent() ? r.callout().mean().getAsDouble() : null);
         m.put("band", r.band());
         CrescentZone c = r.crescent();
         m.put("crescentWidth", c == null ? null : c.width());
-        m.put("crescent", c == null ? null : Map.of(
-                "width", c.width(), "towardVertex", c.towardVertex(), "awayFromVertex", c.awayFromVertex(),
-                "bisectorFactor", c.factor()));
-        m.put("profileZone", c == null ? null : c.equalBilateralProfile());
-        m.put("profileZoneShortcut", c == null ? null : c.shortcutProfile());
+        if (c == null) {
+            m.put("crescent", null);
+        } else {
+            Map<String, Object> cm = new LinkedHashMap<>();
+            cm.put("width", c.width());
+            cm.put("minArcOffset", c.minArcOffset());
+            cm.put("maxArcOffset", c.maxArcOffset());
+            cm.put("towardVertex", c.towardVertex());
+            cm.put("awayFromVertex", c.awayFromVertex());
+            cm.put("bisectorFactor", c.factor());
+            cm.put("measuredFrom", r.nominal() == null ? "largest arc" : "nominal arc");
+            m.put("crescent", cm);
+        }
+        m.put("profileZone", r.profileZone());
+        m.put("profileZoneShortcut", r.shortcutProfile());
+        if (omitted(r) != null) m.put("profileZoneOmitted", omitted(r));
         Map<String, Object> text = new LinkedHashMap<>();
         text.put("asme", r.asme());
         text.put("iso", r.iso());
         m.put("callout", text);
         m.put("remarks", r.remarks());
-        m.remove("input");
         return m;
+    }
+
+    /** Where the crescent lies about the nominal arc, in words. */
+    private static String span(CrescentZone z) {
+        String lo = Numbers.fixed(Math.abs(z.minArcOffset()), 4);
+        String hi = Numbers.fixed(Math.abs(z.maxArcOffset()), 4);
+        if (z.minArcOffset() >= 0) {
+            return (lo.equals("0.0000") ? "from the nominal arc" : "from " + lo) + " to " + hi + " away from the vertex";
+        }
+        if (z.maxArcOffset() <= 0) {
+            return (hi.equals("0.0000") ? "from the nominal arc" : "from " + hi) + " to " + lo + " toward the vertex";
+        }
+        return lo + " toward the vertex and " + hi + " away from it";
     }
 
     private static void printText(PrintWriter out, LimitsReport r, Boolean fillet) {
         RadiusCallout c = r.callout();
         int p = Math.max(2, c.places());
         String u = c.units().symbol();
-        out.printf("%s   (%s, surfaces at %s°)%n", r.asme(), u, Numbers.plain(r.includedAngleDeg()));
+        out.printf("%s   (%s, surfaces at %s°)%n", r.asme(), u, CrescentZone.degrees(r.includedAngleDeg()));
         String min = r.min() == null ? "—" : Numbers.fixed(r.min(), p);
         String max = r.max() == null ? "—" : Numbers.fixed(r.max(), p);
         out.printf("  limits         min %s   max %s%n", min, max);
-        out.printf("  nominal        %s%s%n", Numbers.fixed(r.nominal(), p),
-                c.nominal().isPresent() ? "" : " (mean of the limits)");
+        if (r.nominal() == null) {
+            out.printf("  nominal        — (none drawn: a %s-only radius)%n", r.max() == null ? "MIN" : "MAX");
+        } else {
+            out.printf("  nominal        %s%s%n", Numbers.fixed(r.nominal(), p),
+                    c.nominal().isPresent() ? "" : " (mean of the limits)");
+        }
         if (r.band() != null) out.printf("  band           %s%n", Numbers.fixed(r.band(), p));
         out.printf("  ASME Y14.5     %s%n", r.asme());
         out.printf("  ISO 129-1      %s%n", r.iso());
         CrescentZone z = r.crescent();
         if (z != null) {
-            out.printf("  crescent       %s wide on the bisector: %s toward the vertex, %s away from it%n",
-                    Numbers.fixed(z.width(), 4), Numbers.fixed(z.towardVertex(), 4), Numbers.fixed(z.awayFromVertex(), 4));
-            out.printf("  profile zone   %s  geometric: the equal-bilateral zone about the nominal arc that holds the crescent%n",
-                    Numbers.fixed(z.equalBilateralProfile(), 4));
-            out.printf("                 %s  common shortcut (2 × the larger deviation): looser, allows that much along the whole blend%n",
-                    Numbers.fixed(z.shortcutProfile(), 4));
-            if (fillet != null) {
-                double outward = z.outwardPortion(fillet);
-                out.printf("  unequal zone   %s total, %s outward (add-material side) for a %s: ASME unequally disposed %s, ISO offset UZ%s%s%n",
-                        Numbers.fixed(z.width(), 4), Numbers.fixed(outward, 4), fillet ? "fillet" : "round",
-                        Numbers.fixed(outward, 4), outward - z.width() / 2 >= 0 ? "+" : "",
-                        Numbers.fixed(outward - z.width() / 2, 4));
+            if (r.nominal() == null) {
+                out.printf("  crescent       %s wide on the bisector, between the sharp corner and the R%s arc%n",
+                        Numbers.fixed(z.width(), 4), Numbers.fixed(r.max(), p));
+                out.printf("  profile zone   —  omitted: %s, so there is no zone about a nominal and no shortcut%n", omitted(r));
+            } else {
+                out.printf("  crescent       %s wide on the bisector, %s (measured from the nominal arc)%n",
+                        Numbers.fixed(z.width(), 4), span(z));
+                out.printf("  profile zone   %s  geometric: the equal-bilateral zone about the nominal arc that holds the crescent%n",
+                        Numbers.fixed(r.profileZone(), 4));
+                out.printf("                 %s  common shortcut (2 × the larger deviation): looser, allows that much along the whole blend%n",
+                        Numbers.fixed(r.shortcutProfile(), 4));
             }
+            if (fillet != null && r.nominal() != null) printUnequal(out, r, fillet, p);
         }
         for (String remark : r.remarks()) out.println("  note: " + remark);
+    }
+
+    private static void printUnequal(PrintWriter out, LimitsReport r, boolean fillet, int p) {
+        CrescentZone z = r.crescent();
+        String uz = Numbers.fixed(z.isoOffset(fillet), 4);
+        String iso = uz.equals("0.0000") || uz.equals("-0.0000")
+                ? "ISO: equal-bilateral about the nominal, no UZ offset"
+                : "ISO offset UZ" + (z.isoOffset(fillet) > 0 ? "+" : "") + uz;
+        String asme;
+        if (z.holdsNominal()) {
+            asme = "ASME unequally disposed " + Numbers.fixed(z.outwardPortion(fillet).getAsDouble(), 4) + " outward";
+        } else {
+            double at = nearestLimit(r);
+            double outward = CrescentZone.of(r.min(), at, r.max(), r.includedAngleDeg()).outwardPortion(fillet).getAsDouble();
+            asme = "ASME unequally disposed: not about R" + Numbers.fixed(r.nominal(), p)
+                    + " (the zone does not reach the nominal arc); with the true profile drawn at R" + Numbers.fixed(at, p)
+                    + ", " + Numbers.fixed(outward, 4) + " outward";
+        }
+        String centre = uz.equals("0.0000") || uz.equals("-0.0000") ? "centred on the nominal arc"
+                : "its centre " + Numbers.fixed(Math.abs(z.isoOffset(fillet)), 4) + " from the nominal arc toward the "
+                + (z.isoOffset(fillet) > 0 ? "add-material" : "remove-material") + " side";
+        out.printf("  unequal zone   %s total for a %s, %s: %s; %s%n",
+                Numbers.fixed(z.width(), 4), fillet ? "fillet" : "round", centre, iso, asme);
     }
 }

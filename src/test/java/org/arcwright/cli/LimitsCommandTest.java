@@ -53,6 +53,78 @@ class LimitsCommandTest {
     }
 
     @Test
+    void sameSignDeviationsGiveTheCrescentBeyondTheNominalArc() throws Exception {
+        // R3 +0.3/+0.1 fillet at 90°, worked by hand with k = √2 − 1 (geometry of tangent arcs, common practice):
+        // crescent 0.0414 to 0.1243 away, zone 2 × 0.3k = 0.2485, shortcut 2 × 0.3 = 0.6, UZ +0.0828.
+        CliRun text = CliRun.of("limits", "R3 +0.3/+0.1", "--blend", "fillet");
+        assertThat(text.exitCode()).isZero();
+        assertThat(text.out()).contains("from 0.0414 to 0.1243 away from the vertex")
+                .contains("0.2485  geometric").contains("0.6000  common shortcut").contains("UZ+0.0828")
+                .doesNotContain("0.0000 toward");
+        JsonNode n = json.readTree(CliRun.of("limits", "R3 +0.3/+0.1", "--blend", "fillet", "--format", "json").out());
+        assertThat(n.at("/crescent/minArcOffset").asDouble()).isCloseTo(0.0414, within(5e-5));
+        assertThat(n.at("/crescent/maxArcOffset").asDouble()).isCloseTo(0.1243, within(5e-5));
+        assertThat(n.get("profileZone").asDouble()).isCloseTo(0.2485, within(5e-5));
+        assertThat(n.get("profileZoneShortcut").asDouble()).isCloseTo(0.6, within(1e-12));
+        assertThat(n.at("/unequalProfile/isoOffset").asDouble()).isCloseTo(0.0828, within(5e-5));
+        // ASME: the zone cannot be disposed about R3; the true profile goes to the nearer limit arc R3.1.
+        assertThat(n.at("/unequalProfile/asmeBasicRadius").asDouble()).isEqualTo(3.1);
+    }
+
+    @Test
+    void bothNegativeDeviationsAreTheMirror() throws Exception {
+        // R3 -0.1/-0.3 fillet: crescent 0.0414 to 0.1243 toward the vertex; UZ −0.0828 (remove-material side).
+        CliRun text = CliRun.of("limits", "R3 -0.1/-0.3", "--blend", "fillet");
+        assertThat(text.out()).contains("from 0.0414 to 0.1243 toward the vertex").contains("0.2485  geometric")
+                .contains("0.6000  common shortcut").contains("UZ-0.0828");
+        JsonNode n = json.readTree(CliRun.of("limits", "R3 -0.1/-0.3", "--blend", "fillet", "--format", "json").out());
+        assertThat(n.at("/unequalProfile/isoOffset").asDouble()).isCloseTo(-0.0828, within(5e-5));
+        assertThat(n.at("/unequalProfile/asmeBasicRadius").asDouble()).isEqualTo(2.9);
+    }
+
+    @Test
+    void unilateralDeviationsKeepTheNominalOnTheCrescentsEdge() throws Exception {
+        // R3 +0.2/0 fillet: crescent from the nominal arc to 0.2k = 0.0828, UZ = centre 0.0414 (worked by hand).
+        JsonNode n = json.readTree(CliRun.of("limits", "R3 +0.2/0", "--blend", "fillet", "--format", "json").out());
+        assertThat(n.at("/crescent/minArcOffset").asDouble()).isZero();
+        assertThat(n.get("profileZone").asDouble()).isCloseTo(0.1657, within(5e-5));
+        assertThat(n.get("profileZoneShortcut").asDouble()).isCloseTo(0.4, within(1e-12));
+        assertThat(n.at("/unequalProfile/isoOffset").asDouble()).isCloseTo(0.0414, within(5e-5));
+        assertThat(n.at("/unequalProfile/outward").asDouble()).isCloseTo(0.0828, within(5e-5));
+    }
+
+    @Test
+    void maxOnlyHasNoNominalAndNoShortcutAndSaysWhy() throws Exception {
+        CliRun text = CliRun.of("limits", "R .060 MAX", "--units", "in", "--blend", "fillet");
+        assertThat(text.out()).doesNotContain("mean of the limits").contains("none drawn")
+                .contains("omitted").doesNotContain("common shortcut").doesNotContain("UZ");
+        JsonNode n = json.readTree(CliRun.of("limits", "R .060 MAX", "--units", "in", "--format", "json").out());
+        assertThat(n.get("nominal").isNull()).isTrue();
+        assertThat(n.get("mean").isNull()).isTrue();
+        assertThat(n.get("profileZoneShortcut").isNull()).isTrue();
+        assertThat(n.get("profileZoneOmitted").asText()).contains("no nominal");
+        // The crescent is still given, from a sharp corner: 0.060 × (√2 − 1) = 0.0249.
+        assertThat(n.get("crescentWidth").asDouble()).isCloseTo(0.0249, within(5e-5));
+    }
+
+    @Test
+    void aZoneCentredOnTheNominalNeverPrintsAZeroUzOffset() {
+        CliRun run = CliRun.of("limits", "R0.55 ±0.05", "--blend", "round");
+        assertThat(run.out()).doesNotContain("UZ0.0000").doesNotContain("UZ+0.0000").doesNotContain("UZ-0.0000")
+                .contains("no UZ offset");
+    }
+
+    @Test
+    void aTinyAngleIsRefusedAndANearlyStraightOneKeepsItsDigits() {
+        CliRun tiny = CliRun.of("limits", "R1 ±0.1", "--angle", "1e-300");
+        assertThat(tiny.exitCode()).isEqualTo(2);
+        assertThat(tiny.err()).contains("below 1°");
+        CliRun flat = CliRun.of("limits", "R1 ±0.1", "--angle", "179.9999999");
+        assertThat(flat.exitCode()).isZero();
+        assertThat(flat.out()).contains("179.9999999°").doesNotContain("180°");
+    }
+
+    @Test
     void textOutputNamesBothProfileValuesAndWhichIsWhich() {
         CliRun run = CliRun.of("limits", "R0.55 +/-0.05");
         assertThat(run.exitCode()).isZero();

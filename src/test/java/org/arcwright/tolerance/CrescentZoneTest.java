@@ -63,9 +63,81 @@ class CrescentZoneTest {
     void outwardPortionFollowsTheMaterialSide() {
         CrescentZone z = CrescentZone.of(1.0, 1.5, 1.7, 90);
         // A round: smaller arcs lie toward the vertex and leave more material there.
-        assertThat(z.outwardPortion(false)).isEqualTo(z.towardVertex());
+        assertThat(z.outwardPortion(false)).hasValue(z.towardVertex());
         // A fillet: larger arcs fill more of the corner.
-        assertThat(z.outwardPortion(true)).isEqualTo(z.awayFromVertex());
+        assertThat(z.outwardPortion(true)).hasValue(z.awayFromVertex());
+    }
+
+    @Test
+    void bothDeviationsPositiveLeaveTheCrescentWhollyBeyondTheNominalArc() {
+        // R3 +0.3/+0.1 at 90°: limit arcs R3.1 and R3.3; k = √2 − 1 (geometry of tangent arcs, common practice).
+        // Worked by hand: 0.1k = 0.0414, 0.3k = 0.1243, zone 2 × 0.3k = 0.2485, shortcut 2 × 0.3 = 0.6,
+        // centre (0.0414 + 0.1243)/2 = 0.0828 (ISO 1101:2017 UZ offset is the zone centre's offset, from memory).
+        CrescentZone z = CrescentZone.of(3.1, 3.0, 3.3, 90);
+        double k = Math.sqrt(2) - 1;
+        assertThat(z.minArcOffset()).isCloseTo(0.1 * k, within(1e-12)).isCloseTo(0.0414, within(5e-5));
+        assertThat(z.maxArcOffset()).isCloseTo(0.3 * k, within(1e-12)).isCloseTo(0.1243, within(5e-5));
+        assertThat(z.width()).isCloseTo(0.0828, within(5e-5));
+        assertThat(z.towardVertex()).isZero();
+        assertThat(z.awayFromVertex()).isCloseTo(z.width(), within(1e-15));
+        assertThat(z.equalBilateralProfile()).isCloseTo(0.2485, within(5e-5));
+        assertThat(z.shortcutProfile()).isCloseTo(0.6, within(1e-12));
+        assertThat(z.holdsNominal()).isFalse();
+        assertThat(z.isoOffset(true)).isCloseTo(0.0828, within(5e-5));
+        assertThat(z.outwardPortion(true)).isEmpty();
+    }
+
+    @Test
+    void bothDeviationsNegativeMirrorThePositiveCase() {
+        // R3 -0.1/-0.3: limit arcs R2.7 and R2.9, the crescent 0.0414 to 0.1243 toward the vertex (worked by hand).
+        CrescentZone z = CrescentZone.of(2.7, 3.0, 2.9, 90);
+        assertThat(z.minArcOffset()).isCloseTo(-0.1243, within(5e-5));
+        assertThat(z.maxArcOffset()).isCloseTo(-0.0414, within(5e-5));
+        assertThat(z.awayFromVertex()).isZero();
+        assertThat(z.towardVertex()).isCloseTo(z.width(), within(1e-15));
+        assertThat(z.equalBilateralProfile()).isCloseTo(0.2485, within(5e-5));
+        assertThat(z.shortcutProfile()).isCloseTo(0.6, within(1e-12));
+        assertThat(z.isoOffset(true)).isCloseTo(-0.0828, within(5e-5));
+        assertThat(z.isoOffset(false)).isCloseTo(0.0828, within(5e-5));
+    }
+
+    @ParameterizedTest(name = "R{1} with limits {0}..{2} at {3}°")
+    @CsvSource({
+            "3.1, 3.0, 3.3, 90",
+            "2.7, 3.0, 2.9, 90",
+            "3.0, 3.0, 3.2, 120",
+            "1.8, 2.0, 2.0, 60",
+    })
+    void signedOffsetsMatchAnIndependentConstructionForEveryDisposition(double rMin, double rNom, double rMax, double angle) {
+        // Directed separation between independently built contours (tangent points at r/tan(θ/2)), no use of k.
+        CrescentZone z = CrescentZone.of(rMin, rNom, rMax, angle);
+        double leg = 3 * Math.max(rMax, rNom) / Math.tan(Math.toRadians(angle) / 2) + 1;
+        assertThat(Math.abs(z.minArcOffset())).isCloseTo(gap(rMin, rNom, angle, leg), within(2e-4 * z.width() + 1e-9));
+        assertThat(Math.abs(z.maxArcOffset())).isCloseTo(gap(rMax, rNom, angle, leg), within(2e-4 * z.width() + 1e-9));
+        assertThat(z.width()).isCloseTo(gap(rMax, rMin, angle, leg), within(2e-4 * z.width() + 1e-9));
+    }
+
+    /** Widest distance between the contours of radii a and b (zero when equal), from the larger to the smaller. */
+    private static double gap(double a, double b, double angle, double leg) {
+        if (a == b) return 0;
+        double big = Math.max(a, b);
+        double small = Math.min(a, b);
+        return separation(contour(big, angle, leg, 4001), contour(small, angle, leg * 1.5, 40001)).distance;
+    }
+
+    @Test
+    void anglesBelowOneDegreeAreRefusedWithTheReason() {
+        // --angle 1e-300 once gave a crescent of 2.29e301: 1/sin(θ/2) has no bound as θ → 0.
+        assertThatThrownBy(() -> CrescentZone.of(1, 1.5, 2, 1e-300)).isInstanceOf(InputProblem.class)
+                .hasMessageContaining("below 1°").hasMessageContaining("nearly parallel");
+        assertThat(CrescentZone.of(1, 1.5, 2, 1.0).width()).isFinite();
+    }
+
+    @Test
+    void anAngleJustShortOf180IsWrittenWithAllItsDigits() {
+        assertThat(CrescentZone.degrees(179.9999999)).isEqualTo("179.9999999");
+        assertThat(CrescentZone.degrees(90)).isEqualTo("90");
+        assertThat(CrescentZone.degrees(1e-300)).doesNotContain("0000000000");
     }
 
     @Test

@@ -394,8 +394,8 @@ public final class DecidePanel extends JPanel {
             figure("Largest radius", l.max() == null ? "open (MIN only)" : Numbers.fixed(l.max(), 4));
             if (l.crescent() != null) {
                 figure("Crescent width (bisector)", Numbers.fixed(l.crescent().width(), 4));
-                figure("Equal-bilateral profile", Numbers.fixed(l.crescent().equalBilateralProfile(), 4));
-                figure("Shortcut profile (2 × the ± value)", Numbers.fixed(l.crescent().shortcutProfile(), 4));
+                figure("Equal-bilateral profile", l.profileZone() == null ? "none (no nominal arc)" : Numbers.fixed(l.profileZone(), 4));
+                figure("Shortcut profile (2 × the larger deviation)", l.shortcutProfile() == null ? "none (no deviation)" : Numbers.fixed(l.shortcutProfile(), 4));
             }
             for (String remark : l.remarks()) figures.add(new WrapLabel(remark, "Label.font", null), "span 2, growx, wmin 10, gaptop 4");
         }
