@@ -25,7 +25,7 @@ import picocli.CommandLine.Spec;
         description = {"Whether a shoulder fillet at its largest still lets the mating part seat flush, "
                 + "the margin, and the shoulder flat left to carry it.",
                 "FILE (JSON): units, fillet {r | rMin, rMax | callout}, mating {type: chamfer, leg, angle} | {type: radius, rMin} "
-                        + "| {type: bearing, chamferMin}, optional shoulderHeight, shoulderEdgeBreak, requiredSupport.",
+                        + "| {type: bearing, chamferMin, bore}, optional shoulderHeight, shoulderEdgeBreak, requiredSupport.",
                 "Exit 1 when the part does not seat or the shoulder gives less support than required."})
 final class ClearanceCommand implements Callable<Integer> {
     @Spec
@@ -86,23 +86,24 @@ final class ClearanceCommand implements Callable<Integer> {
     private static void printText(PrintWriter out, CornerClearance r) {
         ClearanceCase c = r.input();
         String u = c.units().symbol();
+        int d = c.units() == org.arcwright.tolerance.Units.INCH ? 4 : 3;
         int places = Math.max(1, Math.max(scale(c.filletMin()), scale(c.filletMax())));
         String fillet = c.filletMin() == c.filletMax() ? "R " + Numbers.plain(c.filletMax())
                 : "R " + Numbers.fixed(c.filletMin(), places) + "–" + Numbers.fixed(c.filletMax(), places);
         out.printf("Fillet %s %s against the mating part's %s%n", fillet, u, c.corner().describe());
-        out.printf("  relief     %s along the seat, %s up the shoulder%n", Numbers.fixed(r.reliefAlongSeat(), 3),
-                Numbers.fixed(r.reliefAlongShoulder(), 3));
-        out.printf("  admits     fillets up to %s %s (%s)%n", Numbers.fixed(r.allowedFilletMax(), 3), u, r.governing());
+        out.printf("  relief     %s along the seat, %s up the shoulder%n", Numbers.fixed(r.reliefAlongSeat(), d),
+                Numbers.fixed(r.reliefAlongShoulder(), d));
+        out.printf("  admits     fillets up to %s %s (%s)%n", Numbers.fixed(r.allowedFilletMax(), d), u, r.governing());
         if (r.seats()) {
-            out.printf("  verdict    SEATS: margin %s %s at the largest fillet%n", Numbers.fixed(r.margin(), 3), u);
+            out.printf("  verdict    SEATS: margin %s %s at the largest fillet%n", Numbers.fixed(r.margin(), d), u);
         } else {
             out.printf("  verdict    INTERFERES: the largest fillet exceeds what the corner admits by %s %s; the part will not seat flush%n",
-                    Numbers.fixed(-r.margin(), 3), u);
+                    Numbers.fixed(-r.margin(), d), u);
         }
         CornerClearance.ShoulderSupport s = r.support();
         if (s != null) {
-            out.printf("  support    flat %s %s on the shoulder (from %s to %s)%s%n", Numbers.fixed(s.flat(), 3), u,
-                    Numbers.fixed(s.contactFrom(), 3), Numbers.fixed(s.contactTo(), 3),
+            out.printf("  support    flat %s %s on the shoulder (from %s to %s)%s%n", Numbers.fixed(s.flat(), d), u,
+                    Numbers.fixed(s.contactFrom(), d), Numbers.fixed(s.contactTo(), d),
                     s.required() == null ? "" : (s.sufficient() ? ": meets" : ": LESS THAN") + " the required "
                             + Numbers.plain(s.required()) + " " + u);
         }

@@ -17,12 +17,23 @@ public final class Cli {
 
     private Cli() {}
 
+    /** A number option in the one decimal syntax ({@link org.arcwright.io.DecimalText}): no 1.5f, 0x1p1 or NaN. */
+    private static Double decimal(String text) {
+        try {
+            return org.arcwright.io.DecimalText.parseFinite(text);
+        } catch (NumberFormatException e) {
+            throw new CommandLine.TypeConversionException(e.getMessage());
+        }
+    }
+
     /** A configured command line writing to the given streams. */
     public static CommandLine commandLine(PrintWriter out, PrintWriter err) {
         CommandLine cl = new CommandLine(new ArcwrightCommand());
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
+        cl.registerConverter(Double.class, Cli::decimal);
+        cl.registerConverter(double.class, Cli::decimal);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
             Throwable t = ex;
             while (!(t instanceof InputProblem) && t.getCause() != null && t.getCause() != t) t = t.getCause();

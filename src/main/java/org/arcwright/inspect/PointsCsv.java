@@ -8,13 +8,16 @@ import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Arrays;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
  * Reads measured points from a CSV file of {@code x,y} lines, streaming, into primitive arrays (a
- * million points need 16 MB plus the growth copy). An optional header line is recognised by a first
- * field that is not a number; blank lines and lines starting with {@code #} are skipped. Any other
- * line that is not two finite numbers is an error naming the line, column and field.
+ * million points need 16 MB plus the growth copy). An optional header line is recognised as one
+ * whose fields are all words without a digit ({@code x,y}); a first line such as {@code 2.O3,0.0004}
+ * is a mistyped point, not a header. Blank lines and lines starting with {@code #} are skipped. Any
+ * other line that is not two finite numbers ({@link DecimalText}) is an error naming the line, column
+ * and field.
  */
 public final class PointsCsv {
     private PointsCsv() {}
@@ -41,7 +44,7 @@ public final class PointsCsv {
                     throw new InputProblem(src, lineNo, comma2 + 1, null, "expected two values x,y, found more: '" + clip(t) + "'");
                 }
                 String fx = t.substring(0, comma).strip(), fy = t.substring(comma + 1).strip();
-                if (!seenData && n == 0 && !isNumber(fx)) {
+                if (!seenData && n == 0 && isWord(fx) && isWord(fy)) {
                     seenData = true; // a header: any text, once, before the first point
                     continue;
                 }
@@ -67,24 +70,22 @@ public final class PointsCsv {
         return new PointSet(xs, ys, n, src);
     }
 
-    private static boolean isNumber(String s) {
-        try {
-            Double.parseDouble(s);
-            return true;
-        } catch (NumberFormatException e) {
-            return false;
-        }
+    /**
+     * A header field: a name that starts with a letter or a bracket, so that a number with a typo in it
+     * ({@code 2.O3}) is never taken for a column name.
+     */
+    private static boolean isWord(String s) {
+        if (s.isEmpty() || DecimalText.isDecimal(s)) return false;
+        char c = s.charAt(0);
+        return !(Character.isDigit(c) || c == '+' || c == '-' || c == '.' || c == ',');
     }
 
     private static double number(String s, String src, int line, int col, String field) {
-        double v;
         try {
-            v = Double.parseDouble(s);
+            return DecimalText.parseFinite(s);
         } catch (NumberFormatException e) {
-            throw new InputProblem(src, line, col, field, "not a number: '" + clip(s) + "'");
+            throw new InputProblem(src, line, col, field, e.getMessage());
         }
-        if (!Double.isFinite(v)) throw new InputProblem(src, line, col, field, "not a finite number: '" + clip(s) + "'");
-        return v;
     }
 
     private static String clip(String s) { return s.length() > 40 ? s.substring(0, 40) + "..." : s; }

@@ -22,15 +22,23 @@ import org.arcwright.pack.PackStack;
  *
  * @param id table id
  * @param title what the table is
- * @param source where the values come from
+ * @param source where the values come from, as shown to users (a file's {@code provenance} says how
+ *     they were checked and is not read)
  * @param units always mm
  * @param rows by ascending r<sub>s min</sub>
  */
+@com.fasterxml.jackson.annotation.JsonIgnoreProperties({"provenance"})
 public record BearingSeatTable(String id, String title, String source, String units, List<Row> rows) {
     /** The kind of pack table this class reads. */
     public static final String KIND = "bearing-fillet";
     /** Id of the built-in table. */
     public static final String BUILT_IN_ID = "rolling-bearing-fillet";
+    /**
+     * How near a listed r<sub>s min</sub> a value may lie and still be that value, mm: half of
+     * 0.0001 in and more, so that 1.1 mm written as 0.0433 in is read as 1.1 mm; far below the
+     * smallest step of the series (0.03 mm).
+     */
+    public static final double ROUNDING = 0.002;
 
     @JsonCreator
     public BearingSeatTable(@JsonProperty(value = "id", required = true) String id,
@@ -83,13 +91,13 @@ public record BearingSeatTable(String id, String title, String source, String un
         StressConcentration.positive("mating.chamferMin", chamferMin);
         Row use = null;
         for (Row r : rows) {
-            if (r.chamferMin() <= chamferMin * (1 + 1e-9)) use = r;
+            if (r.chamferMin() <= chamferMin + ROUNDING) use = r;
         }
         if (use == null) {
             throw InputProblem.ofField("mating.chamferMin", "r_s min " + chamferMin + " mm is below the table's smallest, "
                     + rows.get(0).chamferMin() + " mm");
         }
-        boolean exact = Math.abs(use.chamferMin() - chamferMin) <= 1e-9 * chamferMin;
+        boolean exact = Math.abs(use.chamferMin() - chamferMin) <= ROUNDING;
         String note = exact ? "" : String.format(Locale.ROOT,
                 "r_s min %s mm is not a listed chamfer dimension; using the row for %s mm (the next smaller)",
                 chamferMin, use.chamferMin());

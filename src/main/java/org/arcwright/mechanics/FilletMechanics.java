@@ -13,16 +13,17 @@ public final class FilletMechanics {
     private final FilletStressAnalysis stressAnalysis;
     private final ClearanceAnalysis clearance;
 
-    public FilletMechanics(PetersonFits fits, BearingSeatTable bearingTable) {
+    public FilletMechanics(PetersonFits fits, BearingSeatTable bearingTable, BearingChamferLimits chamferLimits) {
         this.stressConcentration = new StressConcentration(Objects.requireNonNull(fits, "fits"));
         this.notchSensitivity = new NotchSensitivity();
         this.stressAnalysis = new FilletStressAnalysis(stressConcentration, notchSensitivity);
-        this.clearance = new ClearanceAnalysis(Objects.requireNonNull(bearingTable, "bearingTable"));
+        this.clearance = new ClearanceAnalysis(bearingTable, chamferLimits);
     }
 
-    /** The published fits and the bearing-seat table of the packs in force. */
+    /** The published fits and the bearing tables (seat fillet, ring chamfer limits) of the packs in force. */
     public static FilletMechanics load(PackStack stack) {
-        return new FilletMechanics(PetersonFits.published(), BearingSeatTable.load(stack, BearingSeatTable.BUILT_IN_ID));
+        return new FilletMechanics(PetersonFits.published(), BearingSeatTable.load(stack, BearingSeatTable.BUILT_IN_ID),
+                BearingChamferLimits.load(stack, BearingChamferLimits.BUILT_IN_ID));
     }
 
     public StressConcentration stressConcentration() { return stressConcentration; }

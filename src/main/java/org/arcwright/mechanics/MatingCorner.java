@@ -62,17 +62,28 @@ public sealed interface MatingCorner permits MatingCorner.Chamfer, MatingCorner.
 
     /**
      * A rolling bearing's ring, known by its smallest chamfer dimension r<sub>s min</sub> (ISO 582);
-     * the largest fillet comes from a {@link BearingSeatTable}.
+     * the largest fillet comes from a {@link BearingSeatTable}, the largest chamfer r<sub>s max</sub>
+     * from {@link BearingChamferLimits}. Both in mm whatever the file's units: bearing tables are
+     * metric, so a file's inch values are converted where it is read.
      *
      * @param chamferMin r<sub>s min</sub> in mm
+     * @param bore the ring's bore d in mm, or null when not given (the worst bore range is then used)
      */
-    record Bearing(double chamferMin) implements MatingCorner {
+    record Bearing(double chamferMin, Double bore) implements MatingCorner {
         public Bearing {
             StressConcentration.positive("mating.chamferMin", chamferMin);
+            if (bore != null) StressConcentration.positive("mating.bore", bore);
+        }
+
+        /** A ring of unknown bore. */
+        public Bearing(double chamferMin) {
+            this(chamferMin, null);
         }
 
         @Override
-        public String describe() { return "rolling-bearing ring, r_s min " + num(chamferMin); }
+        public String describe() {
+            return "rolling-bearing ring, r_s min " + num(chamferMin) + " mm" + (bore == null ? "" : ", bore " + num(bore) + " mm");
+        }
     }
 
     private static String num(double v) {

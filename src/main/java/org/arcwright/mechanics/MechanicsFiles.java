@@ -57,7 +57,8 @@ public final class MechanicsFiles {
                      @JsonProperty("callout") String callout) {}
 
     record MatingDto(@JsonProperty("type") String type, @JsonProperty("leg") Double leg, @JsonProperty("angle") Double angle,
-                     @JsonProperty("rMin") Double rMin, @JsonProperty("chamferMin") Double chamferMin) {}
+                     @JsonProperty("rMin") Double rMin, @JsonProperty("chamferMin") Double chamferMin,
+                     @JsonProperty("bore") Double bore) {}
 
     record ClearanceDto(@JsonProperty("units") String units, @JsonProperty("fillet") FilletDto fillet,
                         @JsonProperty("mating") MatingDto mating, @JsonProperty("shoulderHeight") Double shoulderHeight,
@@ -136,7 +137,7 @@ public final class MechanicsFiles {
                 lo = required(f.r(), "fillet.r", "missing: give r, or rMin and rMax");
                 hi = lo;
             }
-            MatingCorner corner = corner(dto.mating());
+            MatingCorner corner = corner(dto.mating(), units);
             double edge = dto.shoulderEdgeBreak() == null ? 0 : dto.shoulderEdgeBreak();
             return new ClearanceCase(units, lo, hi, corner, dto.shoulderHeight(), edge, dto.requiredSupport());
         } catch (InputProblem p) {
@@ -144,20 +145,23 @@ public final class MechanicsFiles {
         }
     }
 
-    private static MatingCorner corner(MatingDto m) {
+    /** The mating corner; a bearing's sizes go to mm here, at the file boundary, since its tables are metric. */
+    private static MatingCorner corner(MatingDto m, Units units) {
         if (m == null) throw InputProblem.ofField("mating", "missing: the mating part's corner, e.g. {\"type\": \"chamfer\", \"leg\": 1.5, \"angle\": 45}");
         String type = m.type() == null ? null : m.type().trim().toLowerCase(java.util.Locale.ROOT);
         if (type == null) throw InputProblem.ofField("mating.type", "missing; use chamfer, radius or bearing");
         switch (type) {
             case "chamfer":
-                only(m.rMin() == null && m.chamferMin() == null, "a chamfer takes leg and angle");
+                only(m.rMin() == null && m.chamferMin() == null && m.bore() == null, "a chamfer takes leg and angle");
                 return new MatingCorner.Chamfer(required(m.leg(), "mating.leg"), m.angle() == null ? 45 : m.angle());
             case "radius":
-                only(m.leg() == null && m.angle() == null && m.chamferMin() == null, "a radius takes rMin");
+                only(m.leg() == null && m.angle() == null && m.chamferMin() == null && m.bore() == null, "a radius takes rMin");
                 return new MatingCorner.Radius(required(m.rMin(), "mating.rMin"));
             case "bearing":
-                only(m.leg() == null && m.angle() == null && m.rMin() == null, "a bearing takes chamferMin (r_s min, mm)");
-                return new MatingCorner.Bearing(required(m.chamferMin(), "mating.chamferMin"));
+                only(m.leg() == null && m.angle() == null && m.rMin() == null, "a bearing takes chamferMin (r_s min) and an optional bore");
+                double mm = units.millimetres();
+                return new MatingCorner.Bearing(required(m.chamferMin(), "mating.chamferMin") * mm,
+                        m.bore() == null ? null : m.bore() * mm);
             default:
                 throw InputProblem.ofField("mating.type", "unknown type '" + m.type() + "'; use chamfer, radius or bearing");
         }

@@ -75,7 +75,7 @@ public final class PetersonFits {
     /** Stepped round shaft in tension (Chart 3.4, from memory). */
     static PetersonFit shaftTension() {
         return new PetersonFit(ShoulderShape.STEPPED_SHAFT, LoadCase.TENSION, "Peterson stepped shaft, tension",
-                BOOK + ", chart 3.4 (from memory)", List.of(
+                BOOK + ", chapter 3 (shoulder fillets)", List.of(
                 new Branch(0.1, 2.0,
                         c(0.926, 1.157, -0.099), c(0.012, -3.036, 0.961),
                         c(-0.302, 3.977, -1.744), c(0.365, -2.098, 0.878)),
@@ -87,7 +87,7 @@ public final class PetersonFits {
     /** Stepped round shaft in bending (Chart 3.10, from memory). */
     static PetersonFit shaftBending() {
         return new PetersonFit(ShoulderShape.STEPPED_SHAFT, LoadCase.BENDING, "Peterson stepped shaft, bending",
-                BOOK + ", chart 3.10 (from memory)", List.of(
+                BOOK + ", chapter 3 (shoulder fillets)", List.of(
                 new Branch(0.1, 2.0,
                         c(0.947, 1.206, -0.131), c(0.022, -3.405, 0.915),
                         c(0.869, 1.777, -0.555), c(-0.810, 0.422, -0.260)),
@@ -99,7 +99,7 @@ public final class PetersonFits {
     /** Stepped round shaft in torsion (Chart 3.12, from memory): one range, 0.25 &le; h/r &le; 4. */
     static PetersonFit shaftTorsion() {
         return new PetersonFit(ShoulderShape.STEPPED_SHAFT, LoadCase.TORSION, "Peterson stepped shaft, torsion",
-                BOOK + ", chart 3.12 (from memory)", List.of(
+                BOOK + ", chapter 3 (shoulder fillets)", List.of(
                 new Branch(0.25, 4.0,
                         c(0.905, 0.783, -0.075), c(-0.437, -1.969, 0.553),
                         c(1.557, 1.073, -0.578), c(-1.061, 0.171, 0.086))));
@@ -108,7 +108,7 @@ public final class PetersonFits {
     /** Stepped flat bar in tension (Chart 3.1, from memory). */
     static PetersonFit barTension() {
         return new PetersonFit(ShoulderShape.STEPPED_BAR, LoadCase.TENSION, "Peterson stepped flat bar, tension",
-                BOOK + ", chart 3.1 (from memory)", List.of(
+                BOOK + ", chapter 3 (shoulder fillets)", List.of(
                 new Branch(0.1, 2.0,
                         c(1.007, 1.000, -0.031), c(-0.114, -0.585, 0.314),
                         c(0.241, -0.992, -0.271), c(-0.134, 0.577, -0.012)),
@@ -120,7 +120,7 @@ public final class PetersonFits {
     /** Stepped flat bar in bending (Chart 3.8, from memory). */
     static PetersonFit barBending() {
         return new PetersonFit(ShoulderShape.STEPPED_BAR, LoadCase.BENDING, "Peterson stepped flat bar, bending",
-                BOOK + ", chart 3.8 (from memory)", List.of(
+                BOOK + ", chapter 3 (shoulder fillets)", List.of(
                 new Branch(0.1, 2.0,
                         c(1.006, 0.967, 0.013), c(-0.270, -2.372, 0.708),
                         c(0.662, 1.157, -0.908), c(-0.405, 0.249, 0.200)),

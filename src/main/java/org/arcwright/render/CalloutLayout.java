@@ -70,6 +70,7 @@ public final class CalloutLayout {
     }
 
     private List<Run> toleranceRuns(Callout.Profile p, DrawingStyle style, CalloutText text) {
+        CalloutText.checkMarks(p, style);
         List<Run> runs = new ArrayList<>();
         runs.add(new Run.Text(text.value(p.zone())));
         if (p.isUnequal()) {
@@ -80,7 +81,7 @@ public final class CalloutLayout {
                 runs.add(new Run.Text(text.value(p.outward())));
             }
         }
-        if (p.dynamic()) runs.add(new Run.Triangle());
+        if (p.dynamic()) runs.add(style == DrawingStyle.ISO ? new Run.Text(CalloutText.ISO_UNSPECIFIED_OFFSET) : new Run.Triangle());
         return runs;
     }
 

@@ -22,6 +22,7 @@ public record RenderRequest(Units units, DrawingStyle standard, Callout callout)
         this.units = units;
         this.standard = standard;
         this.callout = callout;
+        if (callout instanceof Callout.Profile p && standard != null) org.arcwright.templates.CalloutText.checkMarks(p, standard);
     }
 
     /** Reads a request file; errors name file, line, column and field. */

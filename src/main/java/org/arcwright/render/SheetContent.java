@@ -138,7 +138,8 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
 
         List<String> general = new ArrayList<>();
         for (String name : List.of("title-block-notes", "edge-break-notes")) {
-            templates.find(name).filter(t -> !t.perFeature()).ifPresent(t -> general.add(t.fill(ctx.forPart()).strip()));
+            templates.find(name).filter(t -> !t.perFeature()).map(t -> t.fill(ctx.forPart()).strip())
+                    .filter(t -> !t.isEmpty()).ifPresent(general::add);
         }
 
         List<SummaryRow> rows = new ArrayList<>();

@@ -88,6 +88,13 @@ public final class CaseTable {
     private static void checkHeader(String src, CsvSchema header) {
         List<String> names = new ArrayList<>();
         header.forEach(c -> names.add(c.getName()));
+        for (int i = 0; i < names.size(); i++) {
+            String n = names.get(i);
+            if (names.indexOf(n) != i) {
+                throw new InputProblem(src, 1, i + 1, n, "column '" + n + "' appears twice (columns " + (names.indexOf(n) + 1)
+                        + " and " + (i + 1) + "); a table gives each column once, so that no value is silently replaced");
+            }
+        }
         for (String n : names) {
             if (!COLUMNS.contains(n)) {
                 throw new InputProblem(src, 1, names.indexOf(n) + 1, n, "unknown column '" + n + "'; known columns: "
@@ -182,14 +189,11 @@ public final class CaseTable {
     }
 
     private static double number(String s) {
-        double d;
         try {
-            d = Double.parseDouble(s);
+            return org.arcwright.io.DecimalText.parseFinite(s);
         } catch (NumberFormatException e) {
-            throw new IllegalArgumentException("not a number: '" + s + "'");
+            throw new IllegalArgumentException(e.getMessage());
         }
-        if (!Double.isFinite(d)) throw new IllegalArgumentException("not a finite number: '" + s + "'");
-        return d;
     }
 
     private static boolean bool(String s) {

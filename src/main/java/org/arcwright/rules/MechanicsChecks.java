@@ -44,7 +44,8 @@ public final class MechanicsChecks implements FilletChecks {
     public static MechanicsChecks standard(PackStack stack) {
         return new MechanicsChecks(
                 new FilletStressAnalysis(new StressConcentration(PetersonFits.published()), new NotchSensitivity()),
-                new ClearanceAnalysis(BearingSeatTable.load(stack, BearingSeatTable.BUILT_IN_ID)));
+                new ClearanceAnalysis(BearingSeatTable.load(stack, BearingSeatTable.BUILT_IN_ID),
+                        org.arcwright.mechanics.BearingChamferLimits.load(stack, org.arcwright.mechanics.BearingChamferLimits.BUILT_IN_ID)));
     }
 
     @Override

@@ -92,8 +92,14 @@ public final class CalloutText {
         return (table == null ? "" : table) + (cls.isEmpty() ? "" : " class " + cls);
     }
 
-    /** The zone cell of a profile frame without its symbol: {@code 0.1}, {@code 0.1 (U) 0.07}... */
+    /**
+     * The zone cell of a profile frame without its symbol: {@code 0.1}, {@code 0.1 (U) 0.07}... Each
+     * standard's own marks: ASME's circled U and dynamic triangle, ISO 1101:2017's UZ (stated offset)
+     * and OZ (offset not specified, the ISO way to let a zone float in size as ASME's dynamic profile
+     * does; from memory of the 2017 edition).
+     */
     public String zoneCell(Callout.Profile p, boolean unicode) {
+        checkMarks(p, style);
         StringBuilder sb = new StringBuilder(value(p.zone()));
         if (p.isUnequal()) {
             if (style == DrawingStyle.ISO) {
@@ -102,8 +108,25 @@ public final class CalloutText {
                 sb.append(unicode ? " " + CIRCLED_U + " " : " (U) ").append(value(p.outward()));
             }
         }
-        if (p.dynamic()) sb.append(unicode ? " " + DYNAMIC : " (DYN)");
+        if (p.dynamic()) sb.append(style == DrawingStyle.ISO ? " " + ISO_UNSPECIFIED_OFFSET : unicode ? " " + DYNAMIC : " (DYN)");
         return sb.toString();
+    }
+
+    /** ISO 1101:2017's modifier for a zone offset by an unspecified amount. */
+    public static final String ISO_UNSPECIFIED_OFFSET = "OZ";
+
+    /**
+     * Refuses a profile the style cannot write: under ISO a zone's offset is either stated (UZ) or
+     * unspecified (OZ), not both.
+     *
+     * @throws org.arcwright.io.InputProblem on field {@code callout.dynamic}
+     */
+    public static void checkMarks(Callout.Profile p, DrawingStyle style) {
+        if (style == DrawingStyle.ISO && p.isUnequal() && p.dynamic()) {
+            throw org.arcwright.io.InputProblem.ofField("callout.dynamic", "under ISO 1101 a profile zone has either a stated "
+                    + "offset (UZ) or an unspecified one (OZ, the ISO form of a dynamic profile), not both: drop the unequal "
+                    + "disposition or the dynamic modifier, or draw to ASME Y14.5");
+        }
     }
 
     /** A datum reference cell: {@code A}, {@code B(M)} or {@code BⓂ}. */
@@ -175,10 +198,14 @@ public final class CalloutText {
             StringBuilder sb = new StringBuilder("profile of a surface, zone ").append(value(p.zone())).append(' ')
                     .append(units.symbol());
             if (p.isUnequal()) {
-                sb.append(", unequally disposed with ").append(value(p.outward()))
-                        .append(" outside the material (ISO offset UZ").append(signed(p.isoOffset())).append(')');
+                sb.append(style == DrawingStyle.ISO ? ", offset zone with " : ", unequally disposed with ")
+                        .append(value(p.outward())).append(" outside the material")
+                        .append(style == DrawingStyle.ISO ? " (UZ" + signed(p.isoOffset()) + ")" : "");
             }
-            if (p.dynamic()) sb.append(", dynamic (form only, size left to the radius tolerance)");
+            if (p.dynamic()) {
+                sb.append(style == DrawingStyle.ISO ? ", offset not specified (OZ: form only, size left to the radius tolerance)"
+                        : ", dynamic (form only, size left to the radius tolerance)");
+            }
             sb.append(datumWords(p.datums()));
             String extent = extentWords(p.extent());
             if (!extent.isEmpty()) sb.append(", ").append(extent);

@@ -69,6 +69,7 @@ public final class NoteContext {
         m.put("decidedFeatures", decided);
         m.put("edgeFeatures", edges);
         m.put("hasEdgeFeatures", !edges.isEmpty());
+        m.put("allDecided", decided.size() == all.size());
         m.put("generatedBy", generatedBy);
         return m;
     }

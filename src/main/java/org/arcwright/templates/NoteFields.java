@@ -103,6 +103,7 @@ public final class NoteFields {
             "decidedFeatures", list("features with a chosen control", FEATURE),
             "edgeFeatures", list("features the title block or an edge note governs", FEATURE),
             "hasEdgeFeatures", flag("true when some feature is governed by the title block or an edge note"),
+            "allDecided", flag("true when every feature has a chosen control (no radius is left undecided)"),
             "feature", FEATURE,
             "generatedBy", text("Arcwright and its version"));
 }

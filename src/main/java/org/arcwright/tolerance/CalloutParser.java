@@ -10,12 +10,15 @@ import org.arcwright.io.InputProblem;
  * <pre>
  *   R0.55 ±0.05     R0.55 +/-0.05    R0.55 +-0.05     equal bilateral
  *   R3 +0.2/-0.1    R3 +0.2 -0.1     R3 +0.2/0        unequal bilateral / unilateral
+ *   R3 +0.3/+0.1    R3 -0.1/-0.3                      deviations of the same sign
  *   CR 1.5-2.0                                        limits, written min-max
  *   R .060 MAX      CR .25 MIN                        single limit
  *   R 2.5                                             untoleranced (general tolerance applies)
  * </pre>
  *
  * A trailing {@code mm} or {@code in} sets the units, otherwise the caller's default holds. A comma
+ * A deviation other than zero carries its sign ({@code R3 +0.2/31} is refused as a likely typo).
+ * A comma
  * is read as a decimal sign ({@code R0,55}, as ISO drawings in many countries write it). Errors are
  * {@link InputProblem}s whose column points at the character where reading stopped.
  */
@@ -95,7 +98,15 @@ public final class CalloutParser {
             }
             throw fail("expected the second deviation, e.g. +0.2/-0.1");
         }
+        boolean signed = peek("+") || peek("-") || peek("−");
+        int second = pos;
         BigDecimal b = signedDeviation("lower deviation");
+        if (!signed && b.signum() != 0) {
+            // "R3 +0.2/31" is a typo far more often than a deviation of +31: only zero may go without a sign.
+            pos = second;
+            throw fail("the second deviation " + b.toPlainString() + " has no sign: write +" + b.toPlainString()
+                    + " or -" + b.toPlainString() + " (only a zero deviation may be written without one)");
+        }
         BigDecimal plus = a.max(b);
         BigDecimal minus = a.min(b);
         return new ToleranceForm.Deviations(nominal, plus, minus);

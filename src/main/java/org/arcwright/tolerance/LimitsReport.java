@@ -60,6 +60,13 @@ public record LimitsReport(RadiusCallout callout, double includedAngleDeg, Doubl
         if (max == null && min != null) {
             remarks.add("MIN only: there is no upper limit, so no crescent width can be given.");
         }
+        if (callout.form() instanceof ToleranceForm.Deviations d) {
+            java.math.BigDecimal larger = d.plus().abs().max(d.minus().abs());
+            if (larger.compareTo(d.nominalValue()) > 0) {
+                remarks.add("Check the callout: a deviation of " + larger.toPlainString() + " is larger than the radius "
+                        + d.nominalValue().toPlainString() + " itself, which is most often a typo.");
+            }
+        }
         if (crescent != null && nominal != null && !crescent.holdsNominal()) {
             remarks.add("Both deviations have the same sign: the crescent lies wholly "
                     + (crescent.minArcOffset() > 0 ? "beyond the nominal arc, away from the vertex" : "between the nominal arc and the vertex")

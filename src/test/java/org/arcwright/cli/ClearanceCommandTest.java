@@ -53,6 +53,48 @@ class ClearanceCommandTest {
         assertThat(j.get("margin").asDouble()).isCloseTo(-0.5, within(1e-12));
     }
 
+    /**
+     * The shipped example: r_s min 1.1, bore 32, so r_s max 2.0 radial (ISO 582, from memory); the flat is
+     * 2.7 − 2.0 = 0.7 mm (worked by hand), short of the 1.5 mm asked for.
+     */
+    @Test
+    void revisedBearingSeatExampleIsShortOfSupport() throws Exception {
+        int code = Cli.commandLine(new PrintWriter(out, true), new PrintWriter(err, true))
+                .execute("clearance", "examples/mechanics/bearing-seat-clearance-revised.json");
+        assertThat(code).isEqualTo(Cli.FAIL);
+        assertThat(out.toString()).contains("flat 0.700 mm on the shoulder (from 2.000 to 2.700): LESS THAN the required 1.5 mm")
+                .contains("row used: r_s min 1.1 mm, bore up to 120 mm").doesNotContain("memory");
+    }
+
+    @Test
+    void inchBearingFileIsConvertedAtTheBoundaryAndReportedInInches() throws Exception {
+        // Inch twin of the example: 0.0433 in = 1.1 mm r_s min (once read as 0.0433 mm and refused), bore 1.26 in.
+        int code = run("""
+                {"units": "in", "fillet": {"rMin": 0.035, "rMax": 0.039},
+                 "mating": {"type": "bearing", "chamferMin": 0.0433, "bore": 1.26},
+                 "shoulderHeight": 0.1181, "shoulderEdgeBreak": 0.0118, "requiredSupport": 0.059}
+                """, "--format", "json");
+        assertThat(code).isEqualTo(Cli.FAIL);
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertThat(j.get("units").asText()).isEqualTo("in");
+        assertThat(j.get("seats").asBoolean()).isTrue();
+        assertThat(j.get("allowedFilletMax").asDouble()).isCloseTo(1.0 / 25.4, within(1e-9));
+        // 0.1181 − 0.0118 − 2.0/25.4 = 0.02756 in ≈ 0.7 mm.
+        assertThat(j.at("/support/flat").asDouble()).isCloseTo(0.1181 - 0.0118 - 2.0 / 25.4, within(1e-9));
+        assertThat(j.at("/support/sufficient").asBoolean()).isFalse();
+    }
+
+    @Test
+    void inchBearingChamferIsNotReadAsMillimetres() throws Exception {
+        // 0.06 in = 1.524 mm: admits the 1.5 mm row's fillet (1.5 mm = 0.059 in), so R 0.04–0.05 in seats.
+        int code = run("""
+                {"units": "in", "fillet": {"rMin": 0.04, "rMax": 0.05}, "mating": {"type": "bearing", "chamferMin": 0.06}}
+                """, "--format", "json");
+        assertThat(code).isZero();
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertThat(j.get("allowedFilletMax").asDouble()).isCloseTo(1.5 / 25.4, within(1e-9));
+    }
+
     @Test
     void textSaysWhatGovernsAndCarriesTheCaution() throws Exception {
         int code = run("""

@@ -146,13 +146,29 @@ class LimitsCommandTest {
             "R0 ±0.05   | --angle=90 | greater than zero",
             "CR 2.0-1.5 | --angle=90 | min 2.0 is greater than max 1.5",
             "R NaN      | --angle=90 | NaN",
-            "R0.5 ±0.1  | --angle=NaN | between 0 and 180",
+            "R0.5 ±0.1  | --angle=NaN | not a number",
             "R0.5 ±0.1  | --angle=180 | between 0 and 180",
     })
     void badInputExitsWithTwoAndAClearMessage(String text, String angle, String message) {
         CliRun run = CliRun.of("limits", text, angle);
         assertThat(run.exitCode()).isEqualTo(2);
         assertThat(run.err()).contains(message);
+        assertThat(run.out()).isEmpty();
+    }
+
+    @ParameterizedTest(name = "--angle {0}")
+    @CsvSource({"1.5f", "0x1p6", "90d", "NaN", "Infinity"})
+    void javaLiteralFormsAreNotNumbersOnTheCommandLine(String angle) {
+        CliRun run = CliRun.of("limits", "R1 ±0.1", "--angle", angle);
+        assertThat(run.exitCode()).isEqualTo(2);
+        assertThat(run.err()).contains("not a number");
+    }
+
+    @Test
+    void anUnsignedDeviationIsBadInput() {
+        CliRun run = CliRun.of("limits", "R3 +0.2/31");
+        assertThat(run.exitCode()).isEqualTo(2);
+        assertThat(run.err()).contains("has no sign");
         assertThat(run.out()).isEmpty();
     }
 

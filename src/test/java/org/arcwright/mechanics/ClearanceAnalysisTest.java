@@ -18,7 +18,8 @@ import org.junit.jupiter.params.provider.CsvSource;
 /** Whether the largest fillet lets a mating part seat flush against the shoulder. */
 class ClearanceAnalysisTest {
     private final ClearanceAnalysis analysis =
-            new ClearanceAnalysis(BearingSeatTable.load(PackStack.builtIn(), BearingSeatTable.BUILT_IN_ID));
+            new ClearanceAnalysis(BearingSeatTable.load(PackStack.builtIn(), BearingSeatTable.BUILT_IN_ID),
+                    BearingChamferLimits.load(PackStack.builtIn(), BearingChamferLimits.BUILT_IN_ID));
 
     private CornerClearance check(double rMin, double rMax, MatingCorner corner) {
         return analysis.check(new ClearanceCase(Units.MM, rMin, rMax, corner, null, 0, null));
@@ -129,5 +130,51 @@ class ClearanceAnalysisTest {
                 .hasMessageContaining("fillet.rMin");
         assertThatThrownBy(() -> check(0.01, 0.02, new MatingCorner.Bearing(0.01))).isInstanceOf(InputProblem.class)
                 .hasMessageContaining("below the table's smallest");
+    }
+
+    /**
+     * ISO 582 r_s max for r_s min 1.1 (from memory, as reprinted in makers' catalogues): 2.0 radial for
+     * bores up to 120 mm, 2.5 above. The ring's face starts beyond r_s max, so with a 3.0 shoulder less a
+     * 0.3 edge break the flat is 2.7 − 2.0 = 0.7 mm (worked by hand), not the 1.6 measured from r_s min.
+     */
+    @Test
+    void bearingSupportStartsBeyondTheRingsLargestChamfer() {
+        CornerClearance c = analysis.check(new ClearanceCase(Units.MM, 0.9, 1.0, new MatingCorner.Bearing(1.1, 32.0), 3.0, 0.3, 1.5));
+        assertThat(c.seats()).isTrue();
+        assertThat(c.support().contactFrom()).isEqualTo(2.0);
+        assertThat(c.support().flat()).isCloseTo(0.7, within(1e-12));
+        assertThat(c.support().sufficient()).isFalse();
+        assertThat(c.passes()).isFalse();
+        assertThat(c.notes()).anySatisfy(n -> assertThat(n).contains("row used: r_s min 1.1 mm, bore up to 120 mm: r_s max 2 mm radial"));
+    }
+
+    @Test
+    void inchBearingSupportIsTheSameSeatInInches() {
+        // Inch twin: every length / 25.4; 0.0433 in is 1.1 mm written to four places.
+        CornerClearance c = analysis.check(new ClearanceCase(Units.INCH, 0.9 / 25.4, 1.0 / 25.4,
+                new MatingCorner.Bearing(0.0433 * 25.4, 32.0), 3.0 / 25.4, 0.3 / 25.4, 1.5 / 25.4));
+        assertThat(c.allowedFilletMax()).isCloseTo(1.0 / 25.4, within(1e-12));
+        assertThat(c.support().flat()).isCloseTo(0.7 / 25.4, within(1e-12));
+        assertThat(c.passes()).isFalse();
+    }
+
+    @ParameterizedTest(name = "r_s min {0}, bore {1} -> r_s max {2} radial, {3} axial")
+    @CsvSource({"1.1, 32, 2, 3.5", "1.1, 120, 2, 3.5", "1.1, 150, 2.5, 4", "0.6, 40, 1, 2", "0.6, 45, 1.3, 2",
+            "2, 100, 3.5, 5", "0.3, 10, 0.6, 1"})
+    void chamferLimitRowFollowsTheBore(double chamferMin, double bore, double radial, double axial) {
+        // ISO 582 chamfer limits for radial bearings (from memory, as reprinted in makers' catalogues).
+        BearingChamferLimits t = BearingChamferLimits.load(PackStack.builtIn(), BearingChamferLimits.BUILT_IN_ID);
+        BearingChamferLimits.Row r = t.lookup(chamferMin, bore).row();
+        assertThat(r.radialMax()).isEqualTo(radial);
+        assertThat(r.axialMax()).isEqualTo(axial);
+    }
+
+    @Test
+    void withoutABoreTheWorstRowIsUsedAndSaidSo() {
+        BearingChamferLimits t = BearingChamferLimits.load(PackStack.builtIn(), BearingChamferLimits.BUILT_IN_ID);
+        BearingChamferLimits.Lookup l = t.lookup(1.1, null);
+        assertThat(l.row().radialMax()).isEqualTo(2.5);
+        assertThat(l.note()).contains("No bore given");
+        assertThat(t.source()).doesNotContain("memory");
     }
 }

@@ -61,6 +61,28 @@ class CaseTableTest {
     void notANumberIsRejected() throws Exception {
         Path f = csv("feature,units,standard,kind,nominalRadius,function,process\nF1,mm,asme,fillet,NaN,cosmetic,cast\n");
         assertThatThrownBy(() -> CaseTable.read(f)).isInstanceOf(InputProblem.class)
-                .hasMessageContaining("nominalRadius").hasMessageContaining("not a finite number");
+                .hasMessageContaining("nominalRadius").hasMessageContaining("not a number: 'NaN'");
+    }
+
+    @Test
+    void sourceCodeNumberFormsAreTyposNotSizes() throws Exception {
+        // Double.parseDouble takes 1.5f and 0x1p1 (the Java Language Specification's literals); a drawing's numbers do not.
+        for (String typo : List.of("1.5f", "0x1p1", "2d", "Infinity")) {
+            Path f = csv("feature,units,standard,kind,nominalRadius,function,process\nF1,mm,asme,fillet," + typo + ",cosmetic,cast\n");
+            assertThatThrownBy(() -> CaseTable.read(f)).as(typo).isInstanceOf(InputProblem.class)
+                    .hasMessageContaining("nominalRadius").hasMessageContaining("not a number");
+        }
+    }
+
+    @Test
+    void aDuplicatedColumnIsRefusedRatherThanTheLastValueKept() throws Exception {
+        Path f = csv("feature,units,standard,kind,nominalRadius,function,process,units\nF1,mm,asme,fillet,2,cosmetic,cast,in\n");
+        assertThatThrownBy(() -> CaseTable.read(f)).isInstanceOf(InputProblem.class)
+                .satisfies(e -> {
+                    InputProblem p = (InputProblem) e;
+                    assertThat(p.line()).isEqualTo(1);
+                    assertThat(p.field()).isEqualTo("units");
+                    assertThat(p.problem()).contains("appears twice");
+                });
     }
 }

@@ -88,4 +88,41 @@ class CalloutParserTest {
         assertThatThrownBy(() -> CalloutParser.parse("  ", Units.MM)).isInstanceOf(InputProblem.class)
                 .hasMessageContaining("empty radius callout");
     }
+
+    @ParameterizedTest(name = "{0}")
+    @CsvSource(delimiter = '|', value = {
+            "R3 +0.2/31      | 9  | the second deviation 31 has no sign",
+            "R3 +0.2/.1      | 9  | the second deviation 0.1 has no sign",
+            "R1.5f           | 5  | unexpected 'f'",
+            "R0x1p1          | 3  | unexpected 'x1p1'",
+    })
+    void typosAreRefusedRatherThanReadAsTolerances(String text, int column, String message) {
+        // A deviation other than zero is written with its sign (ISO 129-1 and ASME Y14.5 examples, common practice).
+        assertThatThrownBy(() -> CalloutParser.parse(text, Units.MM)).isInstanceOf(InputProblem.class)
+                .satisfies(e -> assertThat(((InputProblem) e).column()).isEqualTo(column))
+                .hasMessageContaining(message);
+    }
+
+    @Test
+    void anUnsignedZeroDeviationStaysValid() {
+        RadiusCallout c = CalloutParser.parse("R3 +0.2/0", Units.MM);
+        assertThat(c.min()).hasValue(3.0);
+        assertThat(c.max()).hasValue(3.2);
+    }
+
+    @Test
+    void sameSignDeviationsAreRead() {
+        RadiusCallout c = CalloutParser.parse("R3 +0.3/+0.1", Units.MM);
+        assertThat(c.min()).hasValue(3.1);
+        assertThat(c.max()).hasValue(3.3);
+        RadiusCallout d = CalloutParser.parse("R3 -0.1/-0.3", Units.MM);
+        assertThat(d.min()).hasValue(2.7);
+        assertThat(d.max()).hasValue(2.9);
+    }
+
+    @Test
+    void aDeviationLargerThanTheRadiusIsFlagged() {
+        LimitsReport r = LimitsReport.of(CalloutParser.parse("R3 +31/-0.2", Units.MM), 90);
+        assertThat(r.remarks()).anySatisfy(m -> assertThat(m).contains("larger than the radius 3 itself"));
+    }
 }
