@@ -61,8 +61,8 @@ class InspectCommandTest {
 
     @Test
     void failingRadiusExitsOne() throws IOException {
-        Path f = file("r.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 2.1, \"max\": 2.3}, \"points\": "
-                + arcPoints(2.05) + "}");
+        Path f = file("r.json", "{" + CORNER.replace("\"nominalRadius\": 2", "\"nominalRadius\": 2.2")
+                + ", \"callout\": {\"type\": \"radius\", \"min\": 2.1, \"max\": 2.3}, \"points\": " + arcPoints(2.05) + "}");
         assertThat(run("inspect", f.toString())).isEqualTo(1);
         assertThat(out.toString()).startsWith("FAIL").contains("smallest 2.05");
     }
