@@ -78,15 +78,13 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
      *     taken as the legs'
      */
     public static AdjacentSurfaces fit(Corner nominal, double largestRadius, double[] xs, double[] ys, int n) {
-        double[] scratch = new double[Math.max(16, n / 4)];
+        Workspace ws = new Workspace(Math.max(16, Math.min(n, 1024)));
         Corner work = nominal;
         LineFit fa = null, fb = null;
         for (int pass = 0; pass < 2; pass++) {
             double t = work.tangentDistance(largestRadius);
-            fa = LineFit.of(work, true, t, xs, ys, n, pass == 1, scratch);
-            scratch = fa.scratch;
-            fb = LineFit.of(work, false, t, xs, ys, n, pass == 1, scratch);
-            scratch = fb.scratch;
+            fa = LineFit.of(work, true, t, xs, ys, n, pass == 1, ws);
+            fb = LineFit.of(work, false, t, xs, ys, n, pass == 1, ws);
             Corner next = cornerOf(nominal, fa, fb);
             if (next == null) break;
             work = next;
@@ -160,11 +158,29 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
         }
     }
 
+    /** Scratch arrays shared by the two legs' fits of one call: the selected points and their residuals. */
+    private static final class Workspace {
+        double[] x, y, r;
+
+        Workspace(int size) {
+            x = new double[size];
+            y = new double[size];
+            r = new double[size];
+        }
+
+        void ensure(int size) {
+            if (x.length >= size) return;
+            int grown = Math.max(size, 2 * x.length);
+            x = java.util.Arrays.copyOf(x, grown);
+            y = java.util.Arrays.copyOf(y, grown);
+            r = new double[grown];
+        }
+    }
+
     /** A robust orthogonal line fit to one leg's points; fields, not a record, to keep it cheap. */
     private static final class LineFit {
         int count, weighted;
         double cx, cy, dx, dy, rms, spanLo = Double.POSITIVE_INFINITY, spanHi = Double.NEGATIVE_INFINITY;
-        double[] scratch;
 
         boolean usable(double t) {
             return count >= MIN_POINTS && weighted >= MIN_POINTS && spanHi - spanLo >= MIN_SPAN * t;
@@ -172,71 +188,66 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
 
         /**
          * Points of leg A (or B) of {@code work}: beyond the tangent distance {@code t} (plus the
-         * margin) along it, and nearer its line than the other leg's.
+         * margin) along it, and nearer its line than the other leg's. They are gathered once into
+         * the workspace; the fit and its reweighting then run over them alone.
          */
-        static LineFit of(Corner work, boolean legA, double t, double[] xs, double[] ys, int n, boolean robust,
-                          double[] scratch) {
+        static LineFit of(Corner work, boolean legA, double t, double[] xs, double[] ys, int n, boolean robust, Workspace ws) {
             Point2 v = work.vertex();
             Point2 d = legA ? work.legA() : work.legB(), nn = legA ? work.inwardNormalA() : work.inwardNormalB();
             Point2 on = legA ? work.inwardNormalB() : work.inwardNormalA();
             double vx = v.x(), vy = v.y(), dx = d.x(), dy = d.y(), nx = nn.x(), ny = nn.y(), ox = on.x(), oy = on.y();
             double from = t * (1 + MARGIN);
             LineFit f = new LineFit();
-            // pass 1: plain total least squares over the selected points
-            double sx = 0, sy = 0;
             int k = 0;
+            double sx = 0, sy = 0, lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
             for (int i = 0; i < n; i++) {
                 double qx = xs[i] - vx, qy = ys[i] - vy;
                 double along = qx * dx + qy * dy;
-                if (along <= from) continue;
-                if (Math.abs(qx * nx + qy * ny) >= Math.abs(qx * ox + qy * oy)) continue;
+                if (along <= from || Math.abs(qx * nx + qy * ny) >= Math.abs(qx * ox + qy * oy)) continue;
+                if (k == ws.x.length) ws.ensure(k + 1);
+                ws.x[k] = xs[i];
+                ws.y[k] = ys[i];
                 sx += xs[i];
                 sy += ys[i];
                 k++;
-                f.spanLo = Math.min(f.spanLo, along);
-                f.spanHi = Math.max(f.spanHi, along);
+                lo = Math.min(lo, along);
+                hi = Math.max(hi, along);
             }
             f.count = k;
             f.weighted = k;
-            f.scratch = scratch;
+            f.spanLo = lo;
+            f.spanHi = hi;
             if (k < 2) return f;
+            double[] px = ws.x, py = ws.y;
+            // plain total least squares: centroid and the major axis of the scatter matrix
             f.cx = sx / k;
             f.cy = sy / k;
             double sxx = 0, syy = 0, sxy = 0;
-            for (int i = 0; i < n; i++) {
-                if (!selected(xs[i] - vx, ys[i] - vy, dx, dy, nx, ny, ox, oy, from)) continue;
-                double ex = xs[i] - f.cx, ey = ys[i] - f.cy;
+            for (int i = 0; i < k; i++) {
+                double ex = px[i] - f.cx, ey = py[i] - f.cy;
                 sxx += ex * ex;
                 syy += ey * ey;
                 sxy += ex * ey;
             }
             f.direction(sxx, syy, sxy, dx, dy);
-            f.rms = Math.sqrt(Math.max(0, f.residualSquares(xs, ys, n, vx, vy, dx, dy, nx, ny, ox, oy, from) / k));
+            f.rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, f.dx, f.dy) / k));
             if (!robust || k < MIN_POINTS) return f;
-            if (f.scratch.length < k) f.scratch = new double[k];
-            double[] r = f.scratch;
+            double[] r = ws.r;
+            double floor = 1e-12 * Math.max(1, Math.abs(f.cx) + Math.abs(f.cy) + (hi - lo));
             for (int round = 0; round < ROBUST_ROUNDS; round++) {
-                // residuals of the selected points about the current line, for the MAD scale
-                int m = 0;
-                double px = -f.dy, py = f.dx;
-                for (int i = 0; i < n; i++) {
-                    if (!selected(xs[i] - vx, ys[i] - vy, dx, dy, nx, ny, ox, oy, from)) continue;
-                    r[m++] = Math.abs((xs[i] - f.cx) * px + (ys[i] - f.cy) * py);
-                }
-                double mad = Select.median(r, m);
-                double scale = 1.4826 * mad;
-                double floor = 1e-12 * Math.max(1, Math.abs(f.cx) + Math.abs(f.cy) + (f.spanHi - f.spanLo));
-                double cut = TUKEY_C * Math.max(scale, floor);
+                double nxl = -f.dy, nyl = f.dx;
+                for (int i = 0; i < k; i++) r[i] = Math.abs((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl);
+                double cut = TUKEY_C * Math.max(1.4826 * Select.median(r, k), floor);
+                // Select reorders r: the weights are computed afresh from the points
                 double sw = 0, wx = 0, wy = 0;
                 int w = 0;
-                for (int i = 0; i < n; i++) {
-                    if (!selected(xs[i] - vx, ys[i] - vy, dx, dy, nx, ny, ox, oy, from)) continue;
-                    double e = ((xs[i] - f.cx) * px + (ys[i] - f.cy) * py) / cut;
+                for (int i = 0; i < k; i++) {
+                    double e = ((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl) / cut;
                     if (Math.abs(e) >= 1) continue;
                     double wt = (1 - e * e) * (1 - e * e);
                     sw += wt;
-                    wx += wt * xs[i];
-                    wy += wt * ys[i];
+                    wx += wt * px[i];
+                    wy += wt * py[i];
                     w++;
                 }
                 if (w < 2 || !(sw > 0)) break;
@@ -244,12 +255,11 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
                 sxx = 0;
                 syy = 0;
                 sxy = 0;
-                for (int i = 0; i < n; i++) {
-                    if (!selected(xs[i] - vx, ys[i] - vy, dx, dy, nx, ny, ox, oy, from)) continue;
-                    double e = ((xs[i] - f.cx) * px + (ys[i] - f.cy) * py) / cut;
+                for (int i = 0; i < k; i++) {
+                    double e = ((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl) / cut;
                     if (Math.abs(e) >= 1) continue;
                     double wt = (1 - e * e) * (1 - e * e);
-                    double ex = xs[i] - ncx, ey = ys[i] - ncy;
+                    double ex = px[i] - ncx, ey = py[i] - ncy;
                     sxx += wt * ex * ex;
                     syy += wt * ey * ey;
                     sxy += wt * ex * ey;
@@ -259,16 +269,11 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
                 f.cy = ncy;
                 f.direction(sxx, syy, sxy, dx, dy);
                 f.weighted = w;
-                f.rms = Math.sqrt(sxx + syy > 0 ? Math.max(0, weightedOrthogonal(sxx, syy, sxy, f.dx, f.dy) / sw) : 0);
-                double moved = Math.abs((f.cx - ocx) * px + (f.cy - ocy) * py) + Math.abs(odx * f.dy - ody * f.dx);
-                if (moved <= 1e-13 * Math.max(1, f.spanHi)) break;
+                f.rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, f.dx, f.dy) / sw));
+                double moved = Math.abs((f.cx - ocx) * nxl + (f.cy - ocy) * nyl) + Math.abs(odx * f.dy - ody * f.dx) * (hi - lo);
+                if (moved <= 1e-13 * Math.max(1, hi)) break;
             }
             return f;
-        }
-
-        private static boolean selected(double qx, double qy, double dx, double dy, double nx, double ny, double ox,
-                                        double oy, double from) {
-            return qx * dx + qy * dy > from && Math.abs(qx * nx + qy * ny) < Math.abs(qx * ox + qy * oy);
         }
 
         /** Major eigenvector of {@code [[sxx, sxy], [sxy, syy]]}, turned to point along {@code (hx, hy)}. */
@@ -284,20 +289,9 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
             dy = uy;
         }
 
-        private static double weightedOrthogonal(double sxx, double syy, double sxy, double dx, double dy) {
-            // Σ w ((p - c)·n)² with n = (-dy, dx)
+        /** {@code Σ w ((p - c)·n)²} with {@code n = (-dy, dx)}, from the (weighted) scatter sums. */
+        private static double orthogonal(double sxx, double syy, double sxy, double dx, double dy) {
             return dy * dy * sxx - 2 * dx * dy * sxy + dx * dx * syy;
-        }
-
-        private double residualSquares(double[] xs, double[] ys, int n, double vx, double vy, double ldx, double ldy,
-                                       double nx, double ny, double ox, double oy, double from) {
-            double px = -dy, py = dx, s = 0;
-            for (int i = 0; i < n; i++) {
-                if (!selected(xs[i] - vx, ys[i] - vy, ldx, ldy, nx, ny, ox, oy, from)) continue;
-                double e = (xs[i] - cx) * px + (ys[i] - cy) * py;
-                s += e * e;
-            }
-            return s;
         }
     }
 
