@@ -14,6 +14,8 @@ public final class Cli {
     public static final int FAIL = 1;
     /** Bad input or usage. */
     public static final int BAD_INPUT = 2;
+    /** An inspection verdict neither pass nor fail can be proven (measurement uncertainty straddles a limit). */
+    public static final int INDETERMINATE = 3;
 
     private Cli() {}
 

@@ -13,6 +13,8 @@ import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.ProfileOutcome;
+import org.arcwright.inspect.AdjacentSurfaces;
+import org.arcwright.inspect.Verdict;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.render.ContourPlot;
@@ -27,7 +29,8 @@ import picocli.CommandLine.Model.CommandSpec;
 @Command(name = "inspect", mixinStandardHelpOptions = true,
         description = {"Judges a measured section of a fillet or round against its callout and says why.",
                 "Callouts: radius, controlled radius, profile (located, floating, dynamic,",
-                "unequal), composite profile. Exit 0 pass, 1 fail, 2 bad input."})
+                "unequal), composite profile. Exit 0 pass, 1 fail, 2 bad input,",
+                "3 indeterminate (the measurement cannot prove either)."})
 final class InspectCommand implements Callable<Integer> {
     @Spec
     CommandSpec spec;
@@ -41,8 +44,11 @@ final class InspectCommand implements Callable<Integer> {
     @Option(names = "--plot", paramLabel = "OUT.png|OUT.svg", description = "Draw the contour, zone and points to a PNG or SVG file.")
     Path plot;
 
-    @Option(names = "--window", paramLabel = "L", description = "CR window length along the contour (default: a fifth of the nominal blend).")
+    @Option(names = "--window", paramLabel = "L", description = "CR window length along the contour (default: a fifth of the nominal blend; at least the blend / 250).")
     Double window;
+
+    @Option(names = "--uncertainty", paramLabel = "U", description = "Expanded measurement uncertainty U in the file's units; verdicts then follow the ISO 14253-1 default rule (overrides the file's).")
+    Double uncertainty;
 
     @Option(names = "--format", defaultValue = "text", description = "text or json (default: ${DEFAULT-VALUE}).")
     OutputFormat format;
@@ -53,8 +59,15 @@ final class InspectCommand implements Callable<Integer> {
             String name = plot.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
             if (!name.endsWith(".png") && !name.endsWith(".svg")) throw InputProblem.ofField("--plot", "give a .png or .svg file name");
         }
+        if (window != null && !Double.isFinite(window)) throw InputProblem.ofField("--window", "must be a finite length, got " + window);
+        if (uncertainty != null && !Double.isFinite(uncertainty)) throw InputProblem.ofField("--uncertainty", "must be a finite length, got " + uncertainty);
         InspectionRequest req = new InspectionFiles(new JsonFiles()).read(file).withCompare(compare);
-        if (window != null) req = req.withWindow(window);
+        try {
+            if (window != null) req = req.withWindow(window);
+            if (uncertainty != null) req = req.withUncertainty(uncertainty);
+        } catch (InputProblem p) {
+            throw InputProblem.ofField("--" + p.field(), p.problem());
+        }
         InspectionResult r;
         try {
             r = new Inspector().inspect(req);
@@ -71,7 +84,7 @@ final class InspectCommand implements Callable<Integer> {
             new ContourPlot().write(r, plot);
             if (format == OutputFormat.text) out.println("plot written to " + plot);
         }
-        return r.pass() ? Cli.OK : Cli.FAIL;
+        return r.verdict() == Verdict.PASS ? Cli.OK : r.verdict() == Verdict.FAIL ? Cli.FAIL : Cli.INDETERMINATE;
     }
 
     private static String n(double v) {
@@ -83,56 +96,77 @@ final class InspectCommand implements Callable<Integer> {
     private static void printText(PrintWriter out, InspectionResult r) {
         InspectionRequest q = r.request();
         String u = q.units().symbol();
-        out.printf("%s   %s, %d points (%s)%n", r.pass() ? "PASS" : "FAIL", q.callout().describe(), q.points().size(), u);
+        out.printf("%s   %s, %d points (%s)%s%n", r.verdict().key().toUpperCase(java.util.Locale.ROOT), q.callout().describe(),
+                q.points().size(), u, q.uncertainty() > 0 ? ", U = " + n(q.uncertainty()) + " " + u : "");
+        AdjacentSurfaces sf = r.surfaces();
+        if (sf != null) {
+            out.printf("  surfaces       a %s, b %s; angle %s°%n", surface(sf.a(), u), surface(sf.b(), u), n(sf.includedAngleDeg()));
+        }
         RadiusEnvelope e = r.radius();
         if (e != null) {
-            out.printf("  envelope       smallest %s   largest %s   (the tightest limits these points meet)%n",
-                    n(e.smallest()), n(e.largest()));
+            out.printf("  envelope       radius smallest %s   largest %s %s   (the tightest limits these points meet, rounded outward)%n",
+                    Inspector.down(e.smallest(), q.resolution()), Inspector.up(e.largest(), q.resolution()), u);
             out.printf("  judged         %d points between the tangent points of the largest arc, %d on the legs, %d beyond%n",
                     e.judged(), e.onLegs(), e.beyond());
             if (e.outside() > 0) out.printf("  outside        %d points beyond the adjacent surfaces: no radius allows them%n", e.outside());
         }
         ControlledRadiusOutcome c = r.controlled();
         if (c != null) {
-            out.printf("  local radius   %s to %s over %d windows of %s%n", n(c.localMin()), n(c.localMax()), c.windows(),
-                    Numbers.plain(c.windowLength()));
+            out.printf("  local radius   %s to %s %s (expanded uncertainty up to %s %s, k = 2) over %d windows of %s %s%n", n(c.localMin()),
+                    n(c.localMax()), u, n(c.uncertainty()), u, c.windows(), Numbers.plain(c.windowLength()), u);
+            int shown = 0;
+            for (ControlledRadiusOutcome.LocalWindow w : c.indeterminate()) {
+                if (++shown > 4) {
+                    out.printf("                 and %d more window(s) undecided (all in --format json)%n", c.indeterminate().size() - 4);
+                    break;
+                }
+                out.printf("  undecided      window %d (s = %s to %s %s): local radius %s ± %s %s straddles a limit%n", w.number(),
+                        n(w.fromStation()), n(w.toStation()), u, n(w.radius()), n(w.uncertainty()), u);
+            }
             out.printf("  reversals      %d%s%n", c.reversals().size(), c.flats() > 0 ? "   flat windows " + c.flats() : "");
             for (ControlledRadiusOutcome.Reversal v : c.reversals()) {
-                out.printf("                 stations %s to %s, near [%s, %s]%n", n(v.fromStation()), n(v.toStation()), n(v.x()), n(v.y()));
+                out.printf("                 s = %s to %s, near [%s, %s]%n", n(v.fromStation()), n(v.toStation()), n(v.x()), n(v.y()));
             }
         }
         if (r.profile() != null) printProfile(out, "", r.profile(), u);
         if (r.tiers() != null) {
             for (int i = 0; i < r.tiers().size(); i++) {
                 ProfileOutcome t = r.tiers().get(i);
-                out.printf("  tier %d         %s   zone %s%s%n", i + 1, t.pass() ? "pass" : "FAIL", n(t.zone().width()), freeText(t));
+                out.printf("  tier %d         %s   zone %s %s%s%n", i + 1, Inspector.profileVerdict(t, q.uncertainty()).key(), n(t.zone().width()), u, freeText(t));
                 printProfile(out, "  ", t, u);
             }
         }
         Fits f = r.fits();
         if (f != null) {
-            out.printf("  least squares  R %s at [%s, %s], rms %s  (%d blend points)%n", n(f.leastSquares().circle().r()),
+            out.printf("  least squares  R %s at [%s, %s], rms %s " + u + "  (%d blend points)%n", n(f.leastSquares().circle().r()),
                     n(f.leastSquares().circle().cx()), n(f.leastSquares().circle().cy()), n(f.leastSquares().rms()), f.blendPoints());
             out.printf("  minimum zone   R %s to %s (width %s) at [%s, %s]%n", n(f.minimumZone().inner()), n(f.minimumZone().outer()),
                     n(f.minimumZone().width()), n(f.minimumZone().cx()), n(f.minimumZone().cy()));
-            out.printf("  tangency       step at leg A %s, at leg B %s  (a radius gauge does not see these)%n", n(f.stepA()), n(f.stepB()));
+            out.printf("  tangency       step at surface a %s %s, at surface b %s %s  (gap between each fitted surface and the arc; a radius gauge does not see these)%n",
+                    n(f.stepA()), u, n(f.stepB()), u);
         }
         if (r.worst() != null) {
-            out.printf("  worst point    #%d [%s, %s], %s %s%s%n", r.worst().index(), n(r.worst().x()), n(r.worst().y()),
-                    r.worst().excess() > 0 ? "outside by" : "inside by", n(Math.abs(r.worst().excess())),
-                    "distance".equals(r.worst().measure()) ? "" : " (" + r.worst().measure() + ")");
+            out.printf("  worst          %s, at [%s, %s]%n", r.worst().text(), n(r.worst().x()), n(r.worst().y()));
         }
         if (!r.comparisons().isEmpty()) {
             out.println();
             out.println("  compare (same points; * = limits derived from the file's callout)");
             for (Comparison cmp : r.comparisons()) {
-                out.printf("    %-5s %-19s %-44s %s%n", cmp.pass() ? "pass" : "FAIL", cmp.name(), cmp.callout() + (cmp.derived() ? " *" : ""),
+                out.printf("    %-5s %-19s %-44s %s%n", cmp.verdict() == Verdict.FAIL ? "FAIL" : cmp.verdict() == Verdict.PASS ? "pass" : "undec",
+                        cmp.name(), cmp.callout() + (cmp.derived() ? " *" : ""),
                         cmp.figure());
             }
         }
         List<String> notes = r.notes();
         for (String s : notes) out.println("  note: " + s);
-        out.println("  Check the verdict against the governing standard and your company's inspection practice.");
+        out.println("  The verdict reads the standard's zone definitions; it is not an acceptance. Check it against the governing");
+        out.println("  standard, your company's inspection practice and the responsible engineer's judgement.");
+    }
+
+    private static String surface(AdjacentSurfaces.Surface s, String u) {
+        if (!s.fitted()) return "nominal (not fitted)";
+        return String.format(java.util.Locale.ROOT, "through [%s, %s] along [%.6f, %.6f] (%d points, rms %s %s)", n(s.point().x()), n(s.point().y()),
+                s.direction().x() + 0.0, s.direction().y() + 0.0, s.points(), Numbers.plain(Double.parseDouble(String.format(java.util.Locale.ROOT, "%.3g", s.rms()))), u);
     }
 
     private static String freeText(ProfileOutcome t) {
@@ -144,8 +178,8 @@ final class InspectCommand implements Callable<Integer> {
     }
 
     private static void printProfile(PrintWriter out, String indent, ProfileOutcome p, String u) {
-        out.printf("%s  needs zone     %s (same disposition and freedom)%n", indent, n(p.requiredZone()));
-        out.printf("%s  deviation      %s outward, %s inward (after registration)%n", indent, n(p.maxOutward()), n(p.maxInward()));
+        out.printf("%s  needs zone     %s %s (same disposition and freedom)%n", indent, Inspector.up(p.requiredZone(), Inspector.PROFILE_SLACK), u);
+        out.printf("%s  deviation      %s %s outward, %s %s inward (after registration)%n", indent, n(p.maxOutward()), u, n(p.maxInward()), u);
         if (!p.free().isEmpty() || p.dynamic()) {
             out.printf("%s  registration   x %s, y %s, rotation %s° about [%s, %s], offset %s%n", indent, n(p.registration().x()),
                     n(p.registration().y()), n(p.registration().rotationDeg()), n(p.registration().pivotX()),

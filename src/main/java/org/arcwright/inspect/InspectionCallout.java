@@ -19,7 +19,7 @@ public sealed interface InspectionCallout {
      *
      * @param kind R or CR
      * @param min smallest radius, >= 0
-     * @param max largest radius, >= min
+     * @param max largest radius, > min
      */
     record RadiusLimits(RadiusKind kind, double min, double max) implements InspectionCallout {
         public RadiusLimits {
@@ -27,6 +27,7 @@ public sealed interface InspectionCallout {
             if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + min);
             if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + max);
             if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + max + " < " + min + ")");
+            if (max == min) throw InputProblem.ofField("callout.max", "equals min (" + max + "); a radius tolerance needs max above min");
         }
 
         @Override
@@ -62,6 +63,13 @@ public sealed interface InspectionCallout {
         public CompositeProfile {
             tiers = List.copyOf(tiers);
             if (tiers.size() < 2) throw InputProblem.ofField("callout.tiers", "a composite profile needs at least 2 tiers, got " + tiers.size());
+            for (int i = 1; i < tiers.size(); i++) {
+                if (tiers.get(i).zone() > tiers.get(i - 1).zone()) {
+                    throw InputProblem.ofField("callout.tiers[" + i + "].zone", "tier " + (i + 1) + "'s zone " + tiers.get(i).zone()
+                            + " is larger than tier " + i + "'s " + tiers.get(i - 1).zone()
+                            + "; each lower tier refines the one above it (ASME Y14.5-2018 composite profile, from memory)");
+                }
+            }
         }
 
         @Override

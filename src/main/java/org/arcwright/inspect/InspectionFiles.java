@@ -46,7 +46,9 @@ import org.arcwright.zone.Side;
  * {"type": "arc", "from": [..], "to": [..], "centre": [..], "turn": "ccw"}]}}. The profile zone's
  * disposition may be stated as ASME's {@code outward} (the part on the add-material side) or as
  * ISO's {@code offset} (zone centre offset, positive out of the material), not both. Optional:
- * {@code resolution} (default 1e-6 of the unit) and {@code window} (CR window length).
+ * {@code resolution} (default 1e-6 of the unit; the slack at the tangent points, at most a tenth of the
+ * tolerance), {@code window} (CR window length) and {@code uncertainty} (the expanded measurement
+ * uncertainty U in the file's units; verdicts then follow the ISO 14253-1 default rule).
  */
 public final class InspectionFiles {
     private final JsonFiles json;
@@ -94,7 +96,8 @@ public final class InspectionFiles {
             }
             double res = d.resolution() == null ? units.resolution() : d.resolution();
             double window = d.window() == null ? Double.NaN : d.window();
-            return new InspectionRequest(units, nominal, d.callout().callout, pts, res, window, false);
+            double u = d.uncertainty() == null ? 0 : d.uncertainty();
+            return new InspectionRequest(units, nominal, d.callout().callout, pts, res, window, false, u);
         } catch (InputProblem p) {
             throw p.source() == null ? p.in(source) : p;
         }
@@ -119,7 +122,7 @@ public final class InspectionFiles {
     /** The file as written. */
     public record FileDto(String units, CornerDto corner, ContourDto contour, Double nominalRadius, CalloutDto callout,
                           @JsonDeserialize(using = PointsDeserializer.class) PointSet points, String pointsFile,
-                          Double resolution, Double window) {}
+                          Double resolution, Double window, Double uncertainty) {}
 
     /** {@code corner}: vertex, legs and kind. */
     public static final class CornerDto {

@@ -21,16 +21,18 @@ public final class InspectionJson {
     public static Map<String, Object> tree(InspectionResult r) {
         Map<String, Object> m = new LinkedHashMap<>();
         InspectionRequest q = r.request();
-        m.put("verdict", r.pass() ? "pass" : "fail");
+        m.put("verdict", r.verdict().key());
         m.put("callout", q.callout().describe());
         m.put("units", q.units().symbol());
         m.put("points", q.points().size());
         m.put("resolution", q.resolution());
+        if (q.uncertainty() > 0) m.put("uncertainty", q.uncertainty());
         if (r.radius() != null) {
             RadiusEnvelope e = r.radius();
             Map<String, Object> env = new LinkedHashMap<>();
             env.put("smallest", num(e.smallest()));
             env.put("largest", num(e.largest()));
+            env.put("measures", "radius of the blends tangent to the fitted surfaces");
             m.put("envelope", env);
             RadiusLimits rl = (RadiusLimits) q.callout();
             m.put("limits", Map.of("min", rl.min(), "max", rl.max()));
@@ -46,6 +48,8 @@ public final class InspectionJson {
             Map<String, Object> local = new LinkedHashMap<>();
             local.put("min", num(c.localMin()));
             local.put("max", num(c.localMax()));
+            local.put("uncertainty", num(c.uncertainty()));
+            local.put("coverage", ControlledRadiusCheck.COVERAGE);
             local.put("window", c.windowLength());
             local.put("windows", c.windows());
             local.put("flatWindows", c.flats());
@@ -59,6 +63,9 @@ public final class InspectionJson {
                 rev.add(x);
             }
             m.put("reversals", rev);
+            List<Object> open = new ArrayList<>();
+            for (ControlledRadiusOutcome.LocalWindow w : c.indeterminate()) open.add(window(w));
+            m.put("indeterminate", open);
         }
         if (r.profile() != null) {
             ProfileTolerance pt = (ProfileTolerance) q.callout();
@@ -73,7 +80,7 @@ public final class InspectionJson {
             for (int i = 0; i < r.tiers().size(); i++) {
                 Map<String, Object> t = new LinkedHashMap<>();
                 ProfileOutcome o = r.tiers().get(i);
-                t.put("verdict", o.pass() ? "pass" : "fail");
+                t.put("verdict", Inspector.profileVerdict(o, q.uncertainty()).key());
                 t.put("zone", cp.tiers().get(i).zone());
                 t.put("free", freeList(o));
                 putProfile(t, o);
@@ -100,7 +107,17 @@ public final class InspectionJson {
             Map<String, Object> tg = new LinkedHashMap<>();
             tg.put("stepA", f.stepA());
             tg.put("stepB", f.stepB());
+            tg.put("measures", "gap between each fitted surface and the blend's least-squares arc at its tangent point");
             m.put("tangency", tg);
+        }
+        if (r.surfaces() != null) {
+            AdjacentSurfaces s = r.surfaces();
+            Map<String, Object> sf = new LinkedHashMap<>();
+            sf.put("a", surface(s.a()));
+            sf.put("b", surface(s.b()));
+            sf.put("angle", s.includedAngleDeg());
+            sf.put("vertex", List.of(s.corner().vertex().x(), s.corner().vertex().y()));
+            m.put("surfaces", sf);
         }
         if (r.worst() != null) {
             Map<String, Object> w = new LinkedHashMap<>();
@@ -108,6 +125,8 @@ public final class InspectionJson {
             w.put("at", List.of(r.worst().x(), r.worst().y()));
             w.put("excess", r.worst().excess());
             w.put("measure", r.worst().measure());
+            w.put("unit", r.worst().unit());
+            w.put("text", r.worst().text());
             m.put("worst", w);
         }
         if (!r.comparisons().isEmpty()) {
@@ -117,7 +136,7 @@ public final class InspectionJson {
                 x.put("control", c.name());
                 x.put("callout", c.callout());
                 x.put("derived", c.derived());
-                x.put("verdict", c.pass() ? "pass" : "fail");
+                x.put("verdict", c.verdict().key());
                 x.put("figure", c.figure());
                 rows.add(x);
             }
@@ -125,6 +144,26 @@ public final class InspectionJson {
         }
         m.put("notes", r.notes());
         return m;
+    }
+
+    private static Map<String, Object> window(ControlledRadiusOutcome.LocalWindow w) {
+        Map<String, Object> x = new LinkedHashMap<>();
+        x.put("window", w.number());
+        x.put("fromStation", w.fromStation());
+        x.put("toStation", w.toStation());
+        x.put("radius", num(w.radius()));
+        x.put("uncertainty", num(w.uncertainty()));
+        return x;
+    }
+
+    private static Map<String, Object> surface(AdjacentSurfaces.Surface s) {
+        Map<String, Object> x = new LinkedHashMap<>();
+        x.put("point", List.of(s.point().x(), s.point().y()));
+        x.put("direction", List.of(s.direction().x(), s.direction().y()));
+        x.put("fitted", s.fitted());
+        x.put("points", s.points());
+        x.put("rms", s.rms());
+        return x;
     }
 
     private static void putProfile(Map<String, Object> m, ProfileOutcome o) {

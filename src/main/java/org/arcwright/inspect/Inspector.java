@@ -26,14 +26,12 @@ public final class Inspector {
         if (pts.size() == 0) throw InputProblem.ofField("points", "no points given");
         if (pts.size() < 3) throw InputProblem.ofField("points", "too few points: " + pts.size() + "; need at least 3");
         Contour contour = contourOf(req.nominal(), pts);
-        double[] stations = new double[pts.size()];
-        contour.measureAll(pts.xs(), pts.ys(), pts.size(), null, null, null, stations);
         List<String> notes = new ArrayList<>();
-        InspectionResult main = judge(req, req.callout(), contour, stations, notes, true);
+        InspectionResult main = judge(req, req.callout(), contour, notes, true);
         if (!req.compare()) return main;
-        List<Comparison> rows = compare(req, contour, stations);
-        return new InspectionResult(req, main.pass(), main.radius(), main.controlled(), main.profile(), main.tiers(),
-                main.fits(), main.worst(), main.notes(), rows);
+        List<Comparison> rows = compare(req, contour);
+        return new InspectionResult(req, main.verdict(), main.radius(), main.controlled(), main.profile(), main.tiers(),
+                main.fits(), main.surfaces(), main.worst(), main.notes(), rows);
     }
 
     /** The nominal contour the request's points are measured against (legs long enough for every point). */
@@ -42,93 +40,231 @@ public final class Inspector {
     }
 
     private static Contour contourOf(Nominal nominal, PointSet pts) {
-        if (nominal instanceof Nominal.CornerBlend cb) {
-            Point2 v = cb.corner().vertex();
-            double reach = 0;
-            for (int i = 0; i < pts.size(); i++) reach = Math.max(reach, Math.hypot(pts.xs()[i] - v.x(), pts.ys()[i] - v.y()));
-            return cb.corner().contour(cb.radius(), 2 * reach + 2 * cb.corner().tangentDistance(cb.radius()) + 1);
-        }
+        if (nominal instanceof Nominal.CornerBlend cb) return cornerContour(cb.corner(), cb.radius(), pts);
         return ((Nominal.Chain) nominal).contour();
     }
 
-    private InspectionResult judge(InspectionRequest req, InspectionCallout callout, Contour contour, double[] stations,
-                                   List<String> notes, boolean withFits) {
+    private static Contour cornerContour(Corner corner, double radius, PointSet pts) {
+        Point2 v = corner.vertex();
+        double reach = 0;
+        for (int i = 0; i < pts.size(); i++) reach = Math.max(reach, Math.hypot(pts.xs()[i] - v.x(), pts.ys()[i] - v.y()));
+        return corner.contour(radius, 2 * reach + 2 * corner.tangentDistance(radius) + 1);
+    }
+
+    /**
+     * The largest radius whose tangent points bound the blend for this callout: the largest limit of
+     * R and CR; for a profile, the radius whose crescent reaches the zone's edge on the bisector.
+     */
+    private static double largestRadius(InspectionCallout c, Nominal.CornerBlend cb) {
+        if (c instanceof InspectionCallout.RadiusLimits rl) return rl.max();
+        double zone = c instanceof InspectionCallout.ProfileTolerance pt ? pt.zone().width()
+                : ((InspectionCallout.CompositeProfile) c).tiers().get(0).zone();
+        return cb.radius() + zone / 2 / CrescentZone.factor(cb.corner().includedAngleDeg());
+    }
+
+    private InspectionResult judge(InspectionRequest req, InspectionCallout callout, Contour contour, List<String> notes,
+                                   boolean withFits) {
         PointSet pts = req.points();
-        double res = req.resolution();
+        double res = req.resolution(), u = req.uncertainty();
+        String unit = req.units().symbol();
         Nominal.CornerBlend cb = req.nominal() instanceof Nominal.CornerBlend c ? c : null;
         RadiusEnvelope env = null;
         ControlledRadiusOutcome cr = null;
         ProfileOutcome profile = null;
         List<ProfileOutcome> tiers = null;
+        AdjacentSurfaces surfaces = null;
+        double[] stations = null;
         Worst worst;
-        boolean pass;
+        Verdict verdict;
         Blend blend = null;
         if (callout instanceof InspectionCallout.RadiusLimits rl) {
             if (cb == null) throw InputProblem.ofField("callout.type", "a radius callout needs a corner, not a general contour");
-            env = new RadiusZone(cb.corner(), rl.min(), rl.max(), res).evaluate(pts.xs(), pts.ys(), pts.size());
-            pass = env.pass();
-            worst = worstOf(pts, env.worst(), env.worstExcess(), "radius");
-            notes.add(String.format(Locale.ROOT, "points within %s %s of a leg may be taken as on it (the zone narrows to nothing at the tangent points); limits compared with the same slack",
-                    fmt(res), req.units().symbol()));
+            surfaces = AdjacentSurfaces.fit(cb.corner(), rl.max(), pts.xs(), pts.ys(), pts.size());
+            notes.addAll(surfaces.notes());
+            Corner corner = surfaces.corner();
+            RadiusZone zone = new RadiusZone(corner, rl.min(), rl.max(), res);
+            env = zone.evaluate(pts.xs(), pts.ys(), pts.size());
+            verdict = env.pass() ? Verdict.PASS : Verdict.FAIL;
+            if (u > 0) {
+                int[] counts = new int[3];
+                Boolean proven = zone.decide(pts.xs(), pts.ys(), pts.size(), u, counts);
+                Verdict byU = proven == null ? Verdict.INDETERMINATE : proven ? Verdict.PASS : Verdict.FAIL;
+                verdict = byU == verdict ? verdict : Verdict.INDETERMINATE;
+                if (counts[1] > 0) {
+                    notes.add(counts[1] + " point(s) lie within U = " + fmt(u) + " " + unit
+                            + " of a limit arc (or of a surface, beyond the resolution): neither in nor out is proven there (ISO 14253-1)");
+                }
+            }
+            stations = stationsAlong(corner, cb.radius(), pts);
+            worst = radiusWorst(pts, zone, env, stations, unit);
+            notes.add("the radius zone is two arcs tangent to the adjacent surfaces fitted to the points (ASME Y14.5-2018 radius; a ± radius locates nothing); "
+                    + "the nominal corner only seeds the fit");
+            notes.add(String.format(Locale.ROOT, "points within %s %s of a surface may be taken as on it (the zone narrows to nothing at the tangent points); limits compared with the same slack",
+                    fmt(res), unit));
             if (env.beyond() > 0) {
-                notes.add(env.beyond() + " point(s) beyond the tangent points of the " + fmt(rl.max())
+                notes.add(env.beyond() + " point(s) beyond the tangent points of the " + fmt(rl.max()) + " " + unit
                         + " arc belong to the adjacent surfaces and are not judged by the radius zone");
             }
             if (env.outside() > 0) notes.add(env.outside() + " point(s) lie outside the adjacent surfaces (beyond the sharp corner): no radius allows them");
             if (rl.kind() == RadiusKind.CR) {
-                blend = blendOf(cb, pts, stations, rl.max());
-                cr = ControlledRadiusCheck.evaluate(cb.corner(), cb.radius(), rl.min(), rl.max(), env, blend,
-                        req.window(), res);
-                pass = cr.pass();
-                if (cr.worstIndex() >= 0 && (worst == null || cr.worstExcess() > worst.excess())) {
-                    worst = worstOf(pts, cr.worstIndex(), cr.worstExcess(), "local radius");
+                blend = blendOf(corner, cb, pts, stations, rl.max());
+                cr = ControlledRadiusCheck.evaluate(corner, cb.radius(), rl.min(), rl.max(), env, blend, req.window(), res, u);
+                verdict = verdict.and(cr.verdict());
+                if (cr.worst() != null && (worst == null || cr.worstExcess() > worst.excess())) {
+                    worst = windowWorst(pts, cr, unit);
                 }
-                notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s-long windows along the blend, stepped by a quarter window (%d windows)",
-                        fmt(cr.windowLength()), cr.windows()));
+                notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s %s windows along the blend, stepped by a quarter window (75 %% overlap, %d windows); "
+                        + "each with its expanded uncertainty (k = 2) from the fit's residuals and the window's arc",
+                        fmt(cr.windowLength()), unit, cr.windows()));
+                if (!cr.indeterminate().isEmpty()) {
+                    notes.add(cr.indeterminate().size() + " window(s) straddle a limit within their uncertainty: neither pass nor fail is proven there. "
+                            + "A longer window (--window, now " + fmt(cr.windowLength()) + " " + unit + "), a denser scan or a lower-noise probe would decide");
+                }
             }
         } else if (callout instanceof InspectionCallout.ProfileTolerance pt) {
             profile = profileCheck(req, contour).evaluate(pts, pt.zone(), pt.free(), pt.dynamic());
-            pass = profile.pass();
-            worst = worstOf(pts, profile.worst(), profile.worstExcess(), "distance");
+            verdict = profileVerdict(profile, u);
+            worst = profileWorst(pts, profile, unit);
             notes.add("deviation is positive toward air (the side where added material would put the surface)");
+            if (pt.free().isEmpty() && !pt.dynamic()) notes.add("located profile: judged in the nominal (datum) frame, where the points were measured");
         } else {
             InspectionCallout.CompositeProfile comp = (InspectionCallout.CompositeProfile) callout;
             tiers = new ArrayList<>();
-            pass = true;
+            verdict = Verdict.PASS;
             worst = null;
             ProfileCheck check = profileCheck(req, contour);
             for (InspectionCallout.Tier t : comp.tiers()) {
                 ProfileOutcome o = check.evaluate(pts, ProfileZone.bilateral(t.zone()), t.free(), false);
                 tiers.add(o);
-                pass &= o.pass();
-                Worst w = worstOf(pts, o.worst(), o.worstExcess(), "distance");
+                verdict = verdict.and(profileVerdict(o, u));
+                Worst w = profileWorst(pts, o, unit);
                 if (worst == null || w.excess() > worst.excess()) worst = w;
             }
             tiers = List.copyOf(tiers);
             notes.add("each tier's zone is placed on its own within the freedom it leaves; the surface must lie in every tier's zone");
         }
+        if (u > 0) {
+            notes.add("verdict by the ISO 14253-1 default rule with U = " + fmt(u) + " " + unit
+                    + ": conformance only inside the zone reduced by U, non-conformance only outside it enlarged by U");
+        }
         Fits fits = null;
         if (withFits && cb != null) {
-            if (blend == null) {
-                double limit = callout instanceof InspectionCallout.RadiusLimits rl ? rl.max() : cb.radius();
-                blend = blendOf(cb, pts, stations, limit);
+            if (surfaces == null) {
+                surfaces = AdjacentSurfaces.fit(cb.corner(), largestRadius(callout, cb), pts.xs(), pts.ys(), pts.size());
+                notes.addAll(surfaces.notes());
             }
-            fits = fitsOf(cb.corner(), blend);
+            if (blend == null) {
+                if (stations == null) stations = stationsAlong(surfaces.corner(), cb.radius(), pts);
+                blend = blendOf(surfaces.corner(), cb, pts, stations, largestRadius(callout, cb));
+            }
+            fits = fitsOf(surfaces.corner(), blend);
         }
-        return new InspectionResult(req, pass, env, cr, profile, tiers, fits, worst, List.copyOf(notes), List.of());
+        return new InspectionResult(req, verdict, env, cr, profile, tiers, fits, surfaces, worst, List.copyOf(notes), List.of());
+    }
+
+    /**
+     * A profile's verdict: within the zone (no stated uncertainty), or by the ISO 14253-1 default
+     * rule: the worst excess at the minimax placement is exactly the worst excess against a zone
+     * reduced (or enlarged) by {@code u} on each side, less (plus) {@code u}, since shrinking both
+     * sides alike moves every excess by the same amount and leaves the minimax placement unchanged.
+     */
+    public static Verdict profileVerdict(ProfileOutcome o, double u) {
+        if (u <= 0) return o.pass() ? Verdict.PASS : Verdict.FAIL;
+        double slack = PROFILE_SLACK;
+        if (o.worstExcess() <= -u + slack) return Verdict.PASS;
+        if (o.worstExcess() > u + slack) return Verdict.FAIL;
+        return Verdict.INDETERMINATE;
+    }
+
+    /** Rounding slack of a profile verdict, drawing units: the solver's, not a tolerance. */
+    public static final double PROFILE_SLACK = 1e-9;
+
+    /**
+     * Each point's station along the contour of the nominal radius on {@code corner}, measured from
+     * that arc's tangent point on surface a (negative along surface a): what {@code s} means in
+     * messages and what CR windows are laid along.
+     */
+    private static double[] stationsAlong(Corner corner, double radius, PointSet pts) {
+        Contour c = cornerContour(corner, radius, pts);
+        double[] st = new double[pts.size()];
+        c.measureAll(pts.xs(), pts.ys(), pts.size(), null, null, null, st);
+        double offset = c.segments().get(0).length();
+        for (int i = 0; i < st.length; i++) st[i] -= offset;
+        return st;
+    }
+
+    private static Worst radiusWorst(PointSet pts, RadiusZone zone, RadiusEnvelope env, double[] stations, String unit) {
+        int i = env.worst();
+        if (i < 0) return null;
+        double x = pts.xs()[i], y = pts.ys()[i];
+        Corner c = zone.corner();
+        Point2 v = c.vertex();
+        double qx = x - v.x(), qy = y - v.y();
+        double ha = qx * c.inwardNormalA().x() + qy * c.inwardNormalA().y();
+        double hb = qx * c.inwardNormalB().x() + qy * c.inwardNormalB().y();
+        String where = String.format(Locale.ROOT, "point #%d (s = %s %s along the contour from the tangent point on surface a)", i,
+                fmt(stations[i]), unit);
+        if (Math.min(ha, hb) < -zone.resolution()) {
+            double depth = -Math.min(ha, hb);
+            String text = String.format(Locale.ROOT, "%s %s beyond surface %s (outside the sharp corner: no radius allows it) at %s",
+                    fmt(depth), unit, ha < hb ? "a" : "b", where);
+            return new Worst(i, x, y, env.worstExcess(), "distance beyond surface", unit, text);
+        }
+        double e = env.worstExcess();
+        double r = c.blendRadiusThrough(x, y);
+        String limit = e >= 0 || r > zone.max() ? "largest" : "smallest";
+        boolean high = r - zone.max() >= zone.min() - r;
+        String text = String.format(Locale.ROOT, "%s: the blend through it has radius %s %s; %s limit %s %s, %s by %s %s of radius",
+                where, fmt(r), unit, high ? "largest" : "smallest", fmt(high ? zone.max() : zone.min()), unit,
+                e > 0 ? "beyond it" : "within it", fmt(Math.abs(e)), unit);
+        if (Math.min(ha, hb) <= zone.resolution()) {
+            text = String.format(Locale.ROOT, "%s lies on surface %s within the resolution and allows radii up to %s %s; %s limit %s %s, %s by %s %s of radius",
+                    where, ha < hb ? "a" : "b", fmt(zone.min() - e), unit, limit, fmt(zone.min()), unit,
+                    e > 0 ? "short of it" : "within it", fmt(Math.abs(e)), unit);
+        }
+        return new Worst(i, x, y, e, "radius", unit, text);
+    }
+
+    private static Worst windowWorst(PointSet pts, ControlledRadiusOutcome cr, String unit) {
+        ControlledRadiusOutcome.LocalWindow w = cr.worst();
+        int i = cr.worstIndex();
+        String span = String.format(Locale.ROOT, "window %d (s = %s to %s %s from the tangent point on surface a)", w.number(), fmt(w.fromStation()), fmt(w.toStation()), unit);
+        String text;
+        if (w.reversed()) {
+            text = span + " curves against the blend (a reversal, local radius " + fmt(Math.abs(w.radius())) + " " + unit + " the wrong way)";
+        } else if (Double.isInfinite(w.radius()) || w.radius() < 0) {
+            text = span + " is flat: no measurable curvature; largest limit " + fmt(cr.worstLimit()) + " " + unit;
+        } else {
+            text = String.format(Locale.ROOT, "local radius %s %s ± %s %s over %s; limit %s %s", fmt(w.radius()), unit, fmt(w.uncertainty()),
+                    unit, span, fmt(cr.worstLimit()), unit);
+        }
+        return new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, text);
+    }
+
+    private static Worst profileWorst(PointSet pts, ProfileOutcome o, String unit) {
+        int i = o.worst();
+        if (i < 0) return null;
+        double d = o.deviations()[i], e = o.worstExcess();
+        String text = String.format(Locale.ROOT, "point #%d lies %s %s %s the zone (deviation %s %s %s after registration)", i, fmt(Math.abs(e)),
+                unit, e > 0 ? "outside" : "inside", fmt(Math.abs(d)), unit, d >= 0 ? "toward air" : "into the material");
+        return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, text);
     }
 
     private static ProfileCheck profileCheck(InspectionRequest req, Contour contour) {
         Point2 pivot = req.nominal() instanceof Nominal.CornerBlend cb ? cb.corner().vertex() : contour.segments().get(0).start();
-        return new ProfileCheck(contour, pivot.x(), pivot.y(), req.resolution());
+        return new ProfileCheck(contour, pivot.x(), pivot.y(), Math.min(req.resolution(), PROFILE_SLACK));
     }
 
-    private static Blend blendOf(Nominal.CornerBlend cb, PointSet pts, double[] stations, double limit) {
-        double reach = cb.corner().tangentDistance(Math.max(limit, 3 * cb.radius()));
-        return Blend.of(cb.corner(), cb.radius(), pts, stations, reach);
+    private static Blend blendOf(Corner corner, Nominal.CornerBlend cb, PointSet pts, double[] stations, double limit) {
+        double reach = corner.tangentDistance(Math.max(limit, 3 * cb.radius()));
+        return Blend.of(corner, cb.radius(), pts, stations, reach);
     }
 
-    /** Least-squares and minimum-zone circles of the blend, and the step at each leg. */
+    /**
+     * Least-squares and minimum-zone circles of the blend, and the step at each tangent point: the
+     * gap between the least-squares arc and the (fitted) adjacent surface, {@code |distance(centre,
+     * surface) - r|}.
+     */
     static Fits fitsOf(Corner corner, Blend blend) {
         PointSet b = blend.points();
         LeastSquaresCircle ls = CircleFits.leastSquares(b.xs(), b.ys(), b.size());
@@ -146,7 +282,7 @@ public final class Inspector {
     }
 
     /** The same points under every applicable callout; limits not stated are derived and marked so. */
-    private List<Comparison> compare(InspectionRequest req, Contour contour, double[] stations) {
+    private List<Comparison> compare(InspectionRequest req, Contour contour) {
         InspectionCallout c = req.callout();
         List<Comparison> rows = new ArrayList<>();
         Nominal.CornerBlend cb = req.nominal() instanceof Nominal.CornerBlend x ? x : null;
@@ -193,7 +329,7 @@ public final class Inspector {
         for (InspectionCallout k : list) {
             boolean derived = !sameCallout(k, c);
             try {
-                InspectionResult r = judge(req.withCallout(k), k, contour, stations, new ArrayList<>(), false);
+                InspectionResult r = judge(req.withCallout(k), k, contour, new ArrayList<>(), false);
                 rows.add(row(k, derived, r));
             } catch (InputProblem p) {
                 rows.add(new Comparison(name(k), k.describe(), derived, false, "cannot judge: " + p.problem(), Double.NaN));
@@ -219,21 +355,46 @@ public final class Inspector {
     private static Comparison row(InspectionCallout k, boolean derived, InspectionResult r) {
         String figure;
         double required = Double.NaN;
+        String u = " " + r.request().units().symbol();
         if (r.controlled() != null) {
             ControlledRadiusOutcome cr = r.controlled();
-            figure = "local radius " + fmt(cr.localMin()) + " to " + fmt(cr.localMax()) + ", " + cr.reversals().size()
-                    + " reversal(s), " + cr.flats() + " flat window(s)";
+            figure = "local radius " + fmt(cr.localMin()) + " to " + fmt(cr.localMax()) + u + " (± up to " + fmt(cr.uncertainty()) + u + "), "
+                    + cr.reversals().size() + " reversal(s), " + cr.flats() + " flat window(s)"
+                    + (cr.indeterminate().isEmpty() ? "" : ", " + cr.indeterminate().size() + " window(s) undecided");
         } else if (r.radius() != null) {
-            figure = "envelope " + fmt(r.radius().smallest()) + " to " + fmt(r.radius().largest());
+            double res = r.request().resolution();
+            figure = "envelope " + down(r.radius().smallest(), res) + " to " + up(r.radius().largest(), res) + u;
         } else if (r.profile() != null) {
             required = r.profile().requiredZone();
-            figure = "needs zone " + fmt(required);
+            figure = "needs zone " + up(required, PROFILE_SLACK) + u;
         } else {
             StringBuilder sb = new StringBuilder("needs zones");
-            for (ProfileOutcome t : r.tiers()) sb.append(' ').append(fmt(t.requiredZone()));
-            figure = sb.toString();
+            for (ProfileOutcome t : r.tiers()) sb.append(' ').append(up(t.requiredZone(), PROFILE_SLACK));
+            figure = sb.append(u).toString();
         }
-        return new Comparison(name(k), k.describe(), derived, r.pass(), figure, required);
+        return new Comparison(name(k), k.describe(), derived, r.verdict(), figure, required);
+    }
+
+    /**
+     * {@code v} to 5 significant digits for the smallest radius of an envelope, rounded down unless
+     * the nearest figure lies within {@code slack} above it: a callout at the figure shown then still
+     * passes, since the verdict allows the same slack.
+     */
+    public static String down(double v, double slack) {
+        String near = rounded(v, java.math.RoundingMode.HALF_EVEN);
+        return Double.isFinite(v) && Double.parseDouble(near) - v <= slack ? near : rounded(v, java.math.RoundingMode.FLOOR);
+    }
+
+    /** {@code v} to 5 significant digits for the largest radius or a zone needed: up, unless the nearest is within {@code slack} below. */
+    public static String up(double v, double slack) {
+        String near = rounded(v, java.math.RoundingMode.HALF_EVEN);
+        return Double.isFinite(v) && v - Double.parseDouble(near) <= slack ? near : rounded(v, java.math.RoundingMode.CEILING);
+    }
+
+    private static String rounded(double v, java.math.RoundingMode mode) {
+        if (Double.isNaN(v)) return "none";
+        if (Double.isInfinite(v)) return "infinite (flat)";
+        return new java.math.BigDecimal(v).round(new java.math.MathContext(5, mode)).stripTrailingZeros().toPlainString();
     }
 
     /** Derived limits are shown and judged to 4 significant digits, as a drawing would state them. */

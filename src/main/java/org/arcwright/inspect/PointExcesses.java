@@ -7,8 +7,8 @@ import org.arcwright.zone.RadiusZone;
  * that distance is read against: what a plot or a view colours the points by. One place for it, so
  * the command line's plot and the window's Zone view grade a point alike.
  *
- * <p>For R and CR the excess is the radius zone's ({@link RadiusZone#excess}) and the allowance the
- * radius band; for a profile, the deviation beyond the (first tier's) zone after its registration,
+ * <p>For R and CR the excess is the radius zone's ({@link RadiusZone#excess}), on the adjacent
+ * surfaces fitted to the points, and the allowance the radius band; for a profile, the deviation beyond the (first tier's) zone after its registration,
  * and the allowance the zone's width.
  */
 public final class PointExcesses {
@@ -33,7 +33,9 @@ public final class PointExcesses {
         RadiusZone rz = null;
         if (q.callout() instanceof InspectionCallout.RadiusLimits && q.nominal() instanceof Nominal.CornerBlend) {
             InspectionCallout.RadiusLimits rl = (InspectionCallout.RadiusLimits) q.callout();
-            rz = new RadiusZone(((Nominal.CornerBlend) q.nominal()).corner(), rl.min(), rl.max(), q.resolution());
+            // the zone the verdict read: tangent to the fitted adjacent surfaces
+            org.arcwright.zone.Corner corner = r.surfaces() != null ? r.surfaces().corner() : ((Nominal.CornerBlend) q.nominal()).corner();
+            rz = new RadiusZone(corner, rl.min(), rl.max(), q.resolution());
         }
         return new PointExcesses(q, rz, po);
     }

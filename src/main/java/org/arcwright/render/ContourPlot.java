@@ -21,6 +21,7 @@ import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.Verdict;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointExcesses;
 import org.arcwright.inspect.PointSet;
@@ -138,9 +139,9 @@ public final class ContourPlot {
         // Zone.
         g.setStroke(new BasicStroke(1.6f));
         if (rz != null) {
-            Nominal.CornerBlend cb = (Nominal.CornerBlend) q.nominal();
+            // the limit arcs tangent to the fitted adjacent surfaces, which the verdict read
             double reach = Math.hypot(view[2] - view[0], view[3] - view[1]) * 2;
-            Path2D lo = map.path(cb.corner().contour(rz.min(), reach), 0), hi = map.path(cb.corner().contour(rz.max(), reach), 0);
+            Path2D lo = map.path(rz.corner().contour(rz.min(), reach), 0), hi = map.path(rz.corner().contour(rz.max(), reach), 0);
             g.setColor(zoneInk);
             g.draw(lo);
             g.draw(hi);
@@ -181,9 +182,9 @@ public final class ContourPlot {
                 g.draw(new Ellipse2D.Double(s[0] - 9, s[1] - 9, 18, 18));
                 g.draw(new Line2D.Double(s[0] + 7, s[1] - 7, s[0] + 30, s[1] - 30));
                 g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
-                String t = String.format(Locale.ROOT, "worst #%d: %s %s%s", r.worst().index(),
-                        r.worst().excess() > 0 ? "outside by" : "inside by", fmt(Math.abs(r.worst().excess())),
-                        "distance".equals(r.worst().measure()) ? "" : " (" + r.worst().measure() + ")");
+                String t = String.format(Locale.ROOT, "worst #%d: %s by %s %s (%s)", r.worst().index(),
+                        r.worst().excess() > 0 ? "outside" : "inside", fmt(Math.abs(r.worst().excess())), r.worst().unit(),
+                        r.worst().measure());
                 g.drawString(t, (float) Math.min(s[0] + 32, WIDTH - 10 - g.getFontMetrics().stringWidth(t)), (float) Math.max(s[1] - 32, 110));
             }
         }
@@ -264,38 +265,45 @@ public final class ContourPlot {
 
     private void labels(Graphics2D g, InspectionResult r, double mag, String units) {
         InspectionRequest q = r.request();
-        g.setColor(r.pass() ? OK : OUT);
+        g.setColor(r.verdict() == Verdict.PASS ? OK : r.verdict() == Verdict.FAIL ? OUT : NEAR);
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 22));
-        g.drawString(r.pass() ? "PASS" : "FAIL", 24, 38);
+        String word = r.verdict() == Verdict.INDETERMINATE ? "UNDECIDED" : r.verdict().key().toUpperCase(Locale.ROOT);
+        g.drawString(word, 24, 38);
+        int titleX = r.verdict() == Verdict.INDETERMINATE ? 170 : 100;
         g.setColor(nominalInk);
         g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 16));
-        g.drawString(q.callout().describe() + "   (" + units + ", " + q.points().size() + " points)", 100, 36);
+        g.drawString(q.callout().describe() + "   (" + units + ", " + q.points().size() + " points"
+                + (q.uncertainty() > 0 ? ", U = " + fmt(q.uncertainty()) + " " + units : "") + ")", titleX, 36);
         g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
         List<String> lines = new ArrayList<>();
         if (r.radius() != null) {
-            lines.add("envelope: smallest " + fmt(r.radius().smallest()) + ", largest " + fmt(r.radius().largest())
-                    + "   (limit arcs drawn in blue)");
+            lines.add("envelope: radius smallest " + Inspector.down(r.radius().smallest(), q.resolution()) + ", largest "
+                    + Inspector.up(r.radius().largest(), q.resolution()) + " " + units
+                    + "   (limit arcs tangent to the fitted surfaces, in blue)");
         }
         if (r.controlled() != null) {
-            lines.add("local radius " + fmt(r.controlled().localMin()) + " to " + fmt(r.controlled().localMax()) + ", reversals "
-                    + r.controlled().reversals().size() + ", flat windows " + r.controlled().flats());
+            lines.add("local radius " + fmt(r.controlled().localMin()) + " to " + fmt(r.controlled().localMax()) + " " + units + " (± up to "
+                    + fmt(r.controlled().uncertainty()) + "), reversals " + r.controlled().reversals().size() + ", flat windows "
+                    + r.controlled().flats() + ", undecided windows " + r.controlled().indeterminate().size());
         }
         if (r.profile() != null) {
-            lines.add("needs zone " + fmt(r.profile().requiredZone()) + "; deviation " + fmt(r.profile().maxOutward()) + " outward, "
-                    + fmt(r.profile().maxInward()) + " inward (after registration)");
+            lines.add("needs zone " + Inspector.up(r.profile().requiredZone(), Inspector.PROFILE_SLACK) + " " + units + "; deviation "
+                    + fmt(r.profile().maxOutward()) + " outward, " + fmt(r.profile().maxInward()) + " inward (after registration)");
         }
         if (r.tiers() != null) {
             StringBuilder sb = new StringBuilder("tiers:");
             for (int i = 0; i < r.tiers().size(); i++) {
                 ProfileOutcome t = r.tiers().get(i);
-                sb.append(String.format(Locale.ROOT, "  %d) %s zone %s needs %s", i + 1, t.pass() ? "pass" : "FAIL", fmt(t.zone().width()),
-                        fmt(t.requiredZone())));
+                Verdict tv = Inspector.profileVerdict(t, q.uncertainty());
+                sb.append(String.format(Locale.ROOT, "  %d) %s zone %s needs %s", i + 1, tv == Verdict.FAIL ? "FAIL" : tv.key(),
+                        fmt(t.zone().width()), Inspector.up(t.requiredZone(), Inspector.PROFILE_SLACK)));
             }
-            lines.add(sb + "   (tier 1 zone drawn)");
+            lines.add(sb + " " + units + "   (tier 1 zone drawn)");
         }
         if (r.fits() != null) {
             lines.add("least-squares R " + fmt(r.fits().leastSquares().circle().r()) + ", minimum zone " + fmt(r.fits().minimumZone().inner())
-                    + " to " + fmt(r.fits().minimumZone().outer()) + ", steps at the legs " + fmt(r.fits().stepA()) + " / " + fmt(r.fits().stepB()));
+                    + " to " + fmt(r.fits().minimumZone().outer()) + ", steps at the fitted surfaces " + fmt(r.fits().stepA()) + " / "
+                    + fmt(r.fits().stepB()) + " " + units);
         }
         float y = 62;
         for (String s : lines) {

@@ -128,6 +128,86 @@ public final class RadiusZone {
     }
 
     /**
+     * The ISO 14253-1 default decision rule on the zone (from memory): conformance is proven only
+     * when every judged point lies inside the zone reduced by the expanded measurement uncertainty
+     * {@code u}, non-conformance only when a point lies outside the zone enlarged by it.
+     *
+     * <p>The reduction applies to the limit arcs, measured as distances: a point between the arcs
+     * must lie at least {@code u} from each arc whose span it is in. The adjacent surfaces are not a
+     * boundary here: they are the datum the zone is built on (fitted from these very points), and
+     * within the resolution a point counts as on them, where it allows every radius whose tangent
+     * point lies beyond it, read with its position along the surface uncertain by {@code u}. A point
+     * beyond a surface by more than the resolution fails only when beyond it by more than
+     * {@code resolution + u}.
+     *
+     * @param u expanded uncertainty U of a measured point, drawing units, >= 0
+     * @param counts if not null, receives [0] points proven inside, [1] indeterminate, [2] proven outside
+     * @return true, false or null: conformance proven, non-conformance proven, neither
+     */
+    public Boolean decide(double[] xs, double[] ys, int n, double u, int[] counts) {
+        double tanA = Math.tan(corner.halfAngle());
+        double reach = max / tanA + resolution, tMin = min / tanA;
+        Point2 a = corner.legA(), b = corner.legB();
+        Point2 na = corner.inwardNormalA(), nb = corner.inwardNormalB();
+        Point2 cMax = corner.centre(max), cMin = corner.centre(min);
+        int in = 0, open = 0, out = 0;
+        for (int i = 0; i < n; i++) {
+            double qx = xs[i] - vx, qy = ys[i] - vy;
+            double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
+            if (xa > reach || xb > reach) continue;
+            double ha = qx * na.x() + qy * na.y(), hb = qx * nb.x() + qy * nb.y();
+            int state; // 1 in, 0 open, -1 out
+            if (ha < -resolution || hb < -resolution) {
+                state = -Math.min(ha, hb) > resolution + u ? -1 : 0;
+            } else if (ha <= resolution || hb <= resolution) {
+                double hiLow = Double.POSITIVE_INFINITY, hiHigh = Double.POSITIVE_INFINITY;
+                if (ha <= resolution) {
+                    hiLow = Math.min(hiLow, Math.max(0, xa - u) * tanA);
+                    hiHigh = Math.min(hiHigh, Math.max(0, xa + u) * tanA);
+                }
+                if (hb <= resolution) {
+                    hiLow = Math.min(hiLow, Math.max(0, xb - u) * tanA);
+                    hiHigh = Math.min(hiHigh, Math.max(0, xb + u) * tanA);
+                }
+                if (ha > 0 && hb > 0) {
+                    // or where it lies: the blend through it, read within u of it
+                    double r = blend(xs[i], ys[i]);
+                    double g = gradient(xs[i], ys[i], r);
+                    hiLow = Math.max(hiLow, r - u * g);
+                    hiHigh = Math.max(hiHigh, r + u * g);
+                }
+                state = min <= hiLow ? 1 : min > hiHigh ? -1 : 0;
+            } else {
+                double d = Math.hypot(xs[i] - cMax.x(), ys[i] - cMax.y()) - max;
+                if (xa <= tMin && xb <= tMin && min > 0) d = Math.min(d, min - Math.hypot(xs[i] - cMin.x(), ys[i] - cMin.y()));
+                state = d >= u ? 1 : d < -u ? -1 : 0;
+            }
+            if (state > 0) in++;
+            else if (state == 0) open++;
+            else out++;
+        }
+        if (counts != null) {
+            counts[0] = in;
+            counts[1] = open;
+            counts[2] = out;
+        }
+        return out > 0 ? Boolean.FALSE : open > 0 ? null : Boolean.TRUE;
+    }
+
+    /**
+     * How fast the radius of the blend through a point changes as the point moves:
+     * {@code |∇ρ| = 1 / |1 + s·cos β|}, with {@code s = 1/sin α} and {@code β} the angle between the
+     * bisector and the direction from the blend's centre to the point (implicit differentiation of
+     * {@code |q - u ρ s| = ρ}; infinite at the tangent points, where the zone narrows to nothing).
+     */
+    private double gradient(double x, double y, double r) {
+        double cx = vx + bisX * r * s1, cy = vy + bisY * r * s1;
+        double cosB = ((x - cx) * bisX + (y - cy) * bisY) / r;
+        double den = Math.abs(1 + s1 * cosB);
+        return den > 0 ? 1 / den : Double.POSITIVE_INFINITY;
+    }
+
+    /**
      * How far one point's radius lies beyond the limits (radius units; negative: inside by that
      * much); NaN for a point beyond the zone's extent.
      */

@@ -60,9 +60,72 @@ class InspectCommandTest {
     }
 
     @Test
-    void failingRadiusExitsOne() throws IOException {
-        Path f = file("r.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 2.1, \"max\": 2.3}, \"points\": "
+    void undecidedControlledRadiusExitsThreeAndListsTheWindows() throws IOException {
+        // 31 points on the arc with a 0.004 ripple: each window's local radius is known only to
+        // about ± 0.2, which straddles the limits (ISO 14253-1 default rule: neither proven)
+        String pts = arcPoints(2.05);
+        StringBuilder noisy = new StringBuilder();
+        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\[([-0-9.E]+), ([-0-9.E]+)\\]").matcher(pts);
+        int i = 0;
+        while (m.find()) {
+            double x = Double.parseDouble(m.group(1)), y = Double.parseDouble(m.group(2)) + 0.004 * Math.sin(i++ * 2.1);
+            noisy.append(noisy.length() == 0 ? "[" : ", ").append("[").append(x).append(", ").append(y).append("]");
+        }
+        Path f = file("cr.json", "{" + CORNER + ", \"resolution\": 0.01, \"callout\": {\"type\": \"controlled-radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": "
+                + noisy + "]}");
+        assertThat(run("inspect", f.toString(), "--format", "json")).as(err.toString()).isEqualTo(Cli.INDETERMINATE);
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertThat(j.get("verdict").asText()).isEqualTo("indeterminate");
+        assertThat(j.at("/local/uncertainty").isNumber()).isTrue();
+        assertThat(j.get("indeterminate").size()).isPositive();
+        assertThat(j.at("/surfaces/a/fitted").asBoolean()).isTrue();
+        assertThat(j.at("/surfaces/angle").asDouble()).isBetween(89.0, 91.0);
+    }
+
+    @Test
+    void statedUncertaintyIsAppliedAndReported() throws IOException {
+        Path f = file("r.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": "
                 + arcPoints(2.05) + "}");
+        assertThat(run("inspect", f.toString(), "--uncertainty", "0.0001", "--format", "json")).isEqualTo(0);
+        assertThat(new ObjectMapper().readTree(out.toString()).get("uncertainty").asDouble()).isEqualTo(0.0001);
+        assertThat(run("inspect", f.toString(), "--uncertainty", "0.05")).isEqualTo(Cli.INDETERMINATE);
+        assertThat(out.toString()).contains("INDETERMINATE", "U = 0.05 mm", "ISO 14253-1");
+    }
+
+    @Test
+    void windowBelowItsLeastLengthOrNotANumberExitsTwo() throws IOException {
+        // before: --window 1e-9 never ended and --window NaN silently used the default
+        Path f = file("cr.json", "{" + CORNER + ", \"callout\": {\"type\": \"controlled-radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": "
+                + arcPoints(2.05) + "}");
+        assertThat(run("inspect", f.toString(), "--window", "1e-9")).isEqualTo(2);
+        assertThat(err.toString()).contains("--window").contains("at least 0.012566");
+        assertThat(run("inspect", f.toString(), "--window", "NaN")).isEqualTo(2);
+        assertThat(err.toString()).contains("--window").contains("finite");
+    }
+
+    @Test
+    void inconsistentCalloutsInAFileAreBadInput() throws IOException {
+        Path same = file("s.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 2, \"max\": 2}, \"points\": " + arcPoints(2.05) + "}");
+        assertThat(run("inspect", same.toString())).isEqualTo(2);
+        assertThat(err.toString()).contains("max").contains("equals min");
+        Path nominal = file("n.json", "{" + CORNER.replace("\"nominalRadius\": 2", "\"nominalRadius\": 5")
+                + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": " + arcPoints(2.05) + "}");
+        assertThat(run("inspect", nominal.toString())).isEqualTo(2);
+        assertThat(err.toString()).contains("nominalRadius");
+        Path tiers = file("t.json", "{" + CORNER + ", \"callout\": {\"type\": \"composite-profile\", \"tiers\": [{\"zone\": 0.02, \"free\": []}, "
+                + "{\"zone\": 0.05, \"free\": [\"x\", \"y\", \"rotation\"]}]}, \"points\": " + arcPoints(2.05) + "}");
+        assertThat(run("inspect", tiers.toString())).isEqualTo(2);
+        assertThat(err.toString()).contains("larger than tier 1");
+        Path res = file("res.json", "{" + CORNER + ", \"resolution\": 0.05, \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": "
+                + arcPoints(2.05) + "}");
+        assertThat(run("inspect", res.toString())).isEqualTo(2);
+        assertThat(err.toString()).contains("resolution").contains("tenth of the tolerance");
+    }
+
+    @Test
+    void failingRadiusExitsOne() throws IOException {
+        Path f = file("r.json", "{" + CORNER.replace("\"nominalRadius\": 2", "\"nominalRadius\": 2.2")
+                + ", \"callout\": {\"type\": \"radius\", \"min\": 2.1, \"max\": 2.3}, \"points\": " + arcPoints(2.05) + "}");
         assertThat(run("inspect", f.toString())).isEqualTo(1);
         assertThat(out.toString()).startsWith("FAIL").contains("smallest 2.05");
     }

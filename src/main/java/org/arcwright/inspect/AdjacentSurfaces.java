@@ -1,0 +1,334 @@
+package org.arcwright.inspect;
+
+import java.util.List;
+import java.util.Locale;
+import org.arcwright.io.InputProblem;
+import org.arcwright.zone.Corner;
+import org.arcwright.zone.Point2;
+
+/**
+ * The two surfaces adjacent to a blend, established from the measured points on them: what a
+ * radius zone is built on. A ± radius locates nothing; its zone is two arcs tangent to the part's
+ * actual adjacent surfaces (ASME Y14.5-2018 radius and controlled radius definitions, clause
+ * numbers from memory), so a corner moved as a whole still meets its radius. The nominal corner
+ * only seeds the fit and decides which points belong to which surface (ADR 0302).
+ *
+ * <h2>Method</h2>
+ * For each leg, the points beyond the tangent point of the largest arc (with a margin of
+ * {@value #MARGIN} of that distance) and nearer to that leg's line than to the other's are fitted
+ * with a straight line by total least squares (orthogonal regression: the line through the
+ * weighted centroid along the major eigenvector of the 2 × 2 scatter matrix; Pearson 1901, and the
+ * least-squares associated line of ISO 14405-1 / ISO 12780-1 terminology). The fit is made robust
+ * to the blend's own points, burrs and steps by iteratively reweighted least squares with Tukey's
+ * biweight, {@code w = (1 - (e / (c·s))²)²} for {@code |e| < c·s}, else 0, with
+ * {@code c = }{@value #TUKEY_C} and the scale {@code s = 1.4826 · median |e|} (Beaton and Tukey
+ * 1974; Huber, Robust Statistics, 1981, for the MAD scale). The selection is made twice: once
+ * from the nominal corner, once from the corner the first fits define.
+ *
+ * <p>A leg with fewer than {@value #MIN_POINTS} points beyond the tangent point, or whose points
+ * span less than {@value #MIN_SPAN} of the tangent distance along it, keeps its nominal line and
+ * the result says so ({@link Surface#fitted()} false, and a note).
+ *
+ * @param a the surface along leg A
+ * @param b the surface along leg B
+ * @param corner the corner the two surfaces make (the nominal's kind), on which the radius zone is
+ *     built
+ * @param notes what the fit could not do (a leg left at its nominal), empty when both were fitted
+ */
+public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String> notes) {
+    /** Fewest points a leg's line is fitted to. */
+    public static final int MIN_POINTS = 5;
+    /** Least span of a leg's points along it, as a share of the largest arc's tangent distance. */
+    public static final double MIN_SPAN = 0.1;
+    /** Margin beyond the largest arc's tangent point, as a share of its tangent distance. */
+    public static final double MARGIN = 0.05;
+    /** Tukey's biweight tuning constant (95 % efficiency at the normal distribution). */
+    public static final double TUKEY_C = 4.685;
+    private static final int ROBUST_ROUNDS = 6;
+
+    public AdjacentSurfaces {
+        notes = List.copyOf(notes);
+    }
+
+    /**
+     * One adjacent surface in the section: a line.
+     *
+     * @param point a point on the line (the weighted centroid of the points fitted)
+     * @param direction unit direction, away from the vertex
+     * @param points how many points carried weight in the fit (0 when not fitted)
+     * @param rms root mean square of the orthogonal residuals of the weighted points (0 when not fitted)
+     * @param fitted true when fitted to the points; false when the nominal line was kept
+     */
+    public record Surface(Point2 point, Point2 direction, int points, double rms, boolean fitted) {}
+
+    /** Included angle between the surfaces, degrees. */
+    public double includedAngleDeg() { return corner.includedAngleDeg(); }
+
+    /** The nominal surfaces, unfitted (for a section with no leg points at all). */
+    public static AdjacentSurfaces nominal(Corner nominal) {
+        return new AdjacentSurfaces(new Surface(nominal.vertex(), nominal.legA(), 0, 0, false),
+                new Surface(nominal.vertex(), nominal.legB(), 0, 0, false), nominal, List.of());
+    }
+
+    /**
+     * Fits both surfaces.
+     *
+     * @param nominal the nominal corner: seeds the fit and sorts the points between the legs
+     * @param largestRadius the largest radius the callout allows; points beyond its tangent point are
+     *     taken as the legs'
+     */
+    public static AdjacentSurfaces fit(Corner nominal, double largestRadius, double[] xs, double[] ys, int n) {
+        Workspace ws = new Workspace(Math.max(16, Math.min(n, 1024)));
+        Corner work = nominal;
+        LineFit fa = null, fb = null;
+        for (int pass = 0; pass < 2; pass++) {
+            double t = work.tangentDistance(largestRadius);
+            fa = LineFit.of(work, true, t, xs, ys, n, pass == 1, ws);
+            fb = LineFit.of(work, false, t, xs, ys, n, pass == 1, ws);
+            Corner next = cornerOf(nominal, fa, fb);
+            if (next == null) break;
+            work = next;
+        }
+        double t = nominal.tangentDistance(largestRadius);
+        java.util.ArrayList<String> notes = new java.util.ArrayList<>();
+        Surface sa = surface(fa, nominal.vertex(), nominal.legA(), nominal.legA(), t, "a", largestRadius, notes);
+        Surface sb = surface(fb, nominal.vertex(), nominal.legB(), nominal.legB(), t, "b", largestRadius, notes);
+        Corner c = cornerOf(nominal, sa, sb);
+        if (c == null) {
+            notes.add("the fitted surfaces make an angle outside " + Corner.MIN_ANGLE_DEG + "° to " + Corner.MAX_ANGLE_DEG
+                    + "°: the nominal surfaces are used instead");
+            return new AdjacentSurfaces(new Surface(nominal.vertex(), nominal.legA(), 0, 0, false),
+                    new Surface(nominal.vertex(), nominal.legB(), 0, 0, false), nominal, notes);
+        }
+        return new AdjacentSurfaces(sa, sb, c, notes);
+    }
+
+    private static Surface surface(LineFit f, Point2 vertex, Point2 nominalDir, Point2 orient, double t, String name,
+                                   double largest, List<String> notes) {
+        if (f == null || !f.usable(t)) {
+            int k = f == null ? 0 : f.count;
+            notes.add(String.format(Locale.ROOT, "surface %s: %d point(s) beyond the tangent point of the %s arc (need %d spanning at least %s of %s): judged against the nominal surface %s",
+                    name, k, Inspector.fmt(largest), MIN_POINTS, Inspector.fmt(MIN_SPAN * t), Inspector.fmt(t), name));
+            return new Surface(vertex, nominalDir, 0, 0, false);
+        }
+        Point2 d = new Point2(f.dx, f.dy);
+        if (d.dot(orient) < 0) d = d.times(-1);
+        return new Surface(new Point2(f.cx, f.cy), d, f.weighted, f.rms, true);
+    }
+
+    /** The corner two lines make, oriented as the nominal; null when they are (nearly) parallel. */
+    private static Corner cornerOf(Corner nominal, Surface a, Surface b) {
+        return corner(nominal, a.point().x(), a.point().y(), a.direction().x(), a.direction().y(),
+                b.point().x(), b.point().y(), b.direction().x(), b.direction().y());
+    }
+
+    private static Corner cornerOf(Corner nominal, LineFit a, LineFit b) {
+        Point2 v = nominal.vertex();
+        double ax = v.x(), ay = v.y(), adx = nominal.legA().x(), ady = nominal.legA().y();
+        double bx = v.x(), by = v.y(), bdx = nominal.legB().x(), bdy = nominal.legB().y();
+        if (a.count >= MIN_POINTS) {
+            ax = a.cx; ay = a.cy; adx = a.dx; ady = a.dy;
+        }
+        if (b.count >= MIN_POINTS) {
+            bx = b.cx; by = b.cy; bdx = b.dx; bdy = b.dy;
+        }
+        return corner(nominal, ax, ay, adx, ady, bx, by, bdx, bdy);
+    }
+
+    private static Corner corner(Corner nominal, double ax, double ay, double adx, double ady,
+                                 double bx, double by, double bdx, double bdy) {
+        if (adx * nominal.legA().x() + ady * nominal.legA().y() < 0) {
+            adx = -adx;
+            ady = -ady;
+        }
+        if (bdx * nominal.legB().x() + bdy * nominal.legB().y() < 0) {
+            bdx = -bdx;
+            bdy = -bdy;
+        }
+        double den = adx * bdy - ady * bdx;
+        if (!(Math.abs(den) > 1e-12)) return null;
+        // a + s·da = b + u·db, solved for s by Cramer's rule
+        double s = ((bx - ax) * bdy - (by - ay) * bdx) / den;
+        double vx = ax + s * adx, vy = ay + s * ady;
+        if (!Double.isFinite(vx) || !Double.isFinite(vy)) return null;
+        try {
+            return new Corner(new Point2(vx, vy), new Point2(adx, ady), new Point2(bdx, bdy), nominal.kind());
+        } catch (InputProblem p) {
+            return null;
+        }
+    }
+
+    /** Scratch arrays shared by the two legs' fits of one call: the selected points and their residuals. */
+    private static final class Workspace {
+        double[] x, y, r;
+
+        Workspace(int size) {
+            x = new double[size];
+            y = new double[size];
+            r = new double[size];
+        }
+
+        void ensure(int size) {
+            if (x.length >= size) return;
+            int grown = Math.max(size, 2 * x.length);
+            x = java.util.Arrays.copyOf(x, grown);
+            y = java.util.Arrays.copyOf(y, grown);
+            r = new double[grown];
+        }
+    }
+
+    /** A robust orthogonal line fit to one leg's points; fields, not a record, to keep it cheap. */
+    private static final class LineFit {
+        int count, weighted;
+        double cx, cy, dx, dy, rms, spanLo = Double.POSITIVE_INFINITY, spanHi = Double.NEGATIVE_INFINITY;
+
+        boolean usable(double t) {
+            return count >= MIN_POINTS && weighted >= MIN_POINTS && spanHi - spanLo >= MIN_SPAN * t;
+        }
+
+        /**
+         * Points of leg A (or B) of {@code work}: beyond the tangent distance {@code t} (plus the
+         * margin) along it, and nearer its line than the other leg's. They are gathered once into
+         * the workspace; the fit and its reweighting then run over them alone.
+         */
+        static LineFit of(Corner work, boolean legA, double t, double[] xs, double[] ys, int n, boolean robust, Workspace ws) {
+            Point2 v = work.vertex();
+            Point2 d = legA ? work.legA() : work.legB(), nn = legA ? work.inwardNormalA() : work.inwardNormalB();
+            Point2 on = legA ? work.inwardNormalB() : work.inwardNormalA();
+            double vx = v.x(), vy = v.y(), dx = d.x(), dy = d.y(), nx = nn.x(), ny = nn.y(), ox = on.x(), oy = on.y();
+            double from = t * (1 + MARGIN);
+            LineFit f = new LineFit();
+            int k = 0;
+            double sx = 0, sy = 0, lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
+            for (int i = 0; i < n; i++) {
+                double qx = xs[i] - vx, qy = ys[i] - vy;
+                double along = qx * dx + qy * dy;
+                if (along <= from || Math.abs(qx * nx + qy * ny) >= Math.abs(qx * ox + qy * oy)) continue;
+                if (k == ws.x.length) ws.ensure(k + 1);
+                ws.x[k] = xs[i];
+                ws.y[k] = ys[i];
+                sx += xs[i];
+                sy += ys[i];
+                k++;
+                lo = Math.min(lo, along);
+                hi = Math.max(hi, along);
+            }
+            f.count = k;
+            f.weighted = k;
+            f.spanLo = lo;
+            f.spanHi = hi;
+            if (k < 2) return f;
+            double[] px = ws.x, py = ws.y;
+            // plain total least squares: centroid and the major axis of the scatter matrix
+            f.cx = sx / k;
+            f.cy = sy / k;
+            double sxx = 0, syy = 0, sxy = 0;
+            for (int i = 0; i < k; i++) {
+                double ex = px[i] - f.cx, ey = py[i] - f.cy;
+                sxx += ex * ex;
+                syy += ey * ey;
+                sxy += ex * ey;
+            }
+            f.direction(sxx, syy, sxy, dx, dy);
+            f.rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, f.dx, f.dy) / k));
+            if (!robust || k < MIN_POINTS) return f;
+            double[] r = ws.r;
+            double floor = 1e-12 * Math.max(1, Math.abs(f.cx) + Math.abs(f.cy) + (hi - lo));
+            for (int round = 0; round < ROBUST_ROUNDS; round++) {
+                double nxl = -f.dy, nyl = f.dx;
+                for (int i = 0; i < k; i++) r[i] = Math.abs((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl);
+                double cut = TUKEY_C * Math.max(1.4826 * Select.median(r, k), floor);
+                // Select reorders r: the weights are computed afresh from the points
+                double sw = 0, wx = 0, wy = 0;
+                int w = 0;
+                for (int i = 0; i < k; i++) {
+                    double e = ((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl) / cut;
+                    if (Math.abs(e) >= 1) continue;
+                    double wt = (1 - e * e) * (1 - e * e);
+                    sw += wt;
+                    wx += wt * px[i];
+                    wy += wt * py[i];
+                    w++;
+                }
+                if (w < 2 || !(sw > 0)) break;
+                double ncx = wx / sw, ncy = wy / sw;
+                sxx = 0;
+                syy = 0;
+                sxy = 0;
+                for (int i = 0; i < k; i++) {
+                    double e = ((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl) / cut;
+                    if (Math.abs(e) >= 1) continue;
+                    double wt = (1 - e * e) * (1 - e * e);
+                    double ex = px[i] - ncx, ey = py[i] - ncy;
+                    sxx += wt * ex * ex;
+                    syy += wt * ey * ey;
+                    sxy += wt * ex * ey;
+                }
+                double odx = f.dx, ody = f.dy, ocx = f.cx, ocy = f.cy;
+                f.cx = ncx;
+                f.cy = ncy;
+                f.direction(sxx, syy, sxy, dx, dy);
+                f.weighted = w;
+                f.rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, f.dx, f.dy) / sw));
+                double moved = Math.abs((f.cx - ocx) * nxl + (f.cy - ocy) * nyl) + Math.abs(odx * f.dy - ody * f.dx) * (hi - lo);
+                if (moved <= 1e-13 * Math.max(1, hi)) break;
+            }
+            return f;
+        }
+
+        /** Major eigenvector of {@code [[sxx, sxy], [sxy, syy]]}, turned to point along {@code (hx, hy)}. */
+        private void direction(double sxx, double syy, double sxy, double hx, double hy) {
+            // the angle of the major axis: tan 2θ = 2 sxy / (sxx - syy) (principal axes of a 2 × 2 tensor)
+            double th = 0.5 * Math.atan2(2 * sxy, sxx - syy);
+            double ux = Math.cos(th), uy = Math.sin(th);
+            if (ux * hx + uy * hy < 0) {
+                ux = -ux;
+                uy = -uy;
+            }
+            dx = ux;
+            dy = uy;
+        }
+
+        /** {@code Σ w ((p - c)·n)²} with {@code n = (-dy, dx)}, from the (weighted) scatter sums. */
+        private static double orthogonal(double sxx, double syy, double sxy, double dx, double dy) {
+            return dy * dy * sxx - 2 * dx * dy * sxy + dx * dx * syy;
+        }
+    }
+
+    /** Median by quickselect (Hoare's FIND, Comm. ACM 4(7), 1961), in place on the first {@code m} entries. */
+    static final class Select {
+        private Select() {}
+
+        static double median(double[] a, int m) {
+            if (m == 0) return 0;
+            int k = m / 2;
+            double hi = select(a, 0, m - 1, k);
+            if ((m & 1) == 1) return hi;
+            double lo = Double.NEGATIVE_INFINITY;
+            for (int i = 0; i < k; i++) lo = Math.max(lo, a[i]);
+            return 0.5 * (lo + hi);
+        }
+
+        private static double select(double[] a, int lo, int hi, int k) {
+            while (lo < hi) {
+                double pivot = a[(lo + hi) >>> 1];
+                int i = lo, j = hi;
+                while (i <= j) {
+                    while (a[i] < pivot) i++;
+                    while (a[j] > pivot) j--;
+                    if (i <= j) {
+                        double tmp = a[i];
+                        a[i] = a[j];
+                        a[j] = tmp;
+                        i++;
+                        j--;
+                    }
+                }
+                if (k <= j) hi = j;
+                else if (k >= i) lo = i;
+                else return a[k];
+            }
+            return a[k];
+        }
+    }
+}
