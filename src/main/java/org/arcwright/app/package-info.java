@@ -2,7 +2,8 @@
  * The desktop window: FlatLaf and MigLayout views over view models, each a thin shell that binds
  * controls to a model and dispatches actions to the core.
  *
- * <p>May import: Swing/AWT, FlatLaf, MigLayout, JFreeChart and every core package. Core packages
- * must never import this one.
+ * <p>May import: the JDK, Swing/AWT, FlatLaf, MigLayout, JFreeChart, every core package,
+ * {@code org.arcwright.app.model} and {@code org.arcwright.app.shell} (the window it starts). Core
+ * packages must never import this one.
  */
 package org.arcwright.app;

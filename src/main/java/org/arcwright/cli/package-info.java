@@ -7,6 +7,8 @@
  * goes to the {@link java.io.PrintWriter}s picocli hands in, never to {@code System.out} directly,
  * so commands are testable in-process.
  *
- * <p>May import: every core package, picocli, Jackson. Must not import Swing.
+ * <p>May import: the JDK, every core package, {@code org.arcwright.render},
+ * {@code org.arcwright.render.plot}, picocli and Jackson. Must not
+ * import Swing.
  */
 package org.arcwright.cli;

@@ -20,6 +20,7 @@
  * </ul>
  *
  * <p>May import: the JDK including {@code java.awt} and {@code javax.imageio}, JFreeSVG, JFreeChart,
- * PDFBox and the core packages. Must not import Swing or the app, and opens no window.
+ * PDFBox, Jackson (annotations of request records) and the core packages. Must not import Swing or the
+ * app, and opens no window.
  */
 package org.arcwright.render;

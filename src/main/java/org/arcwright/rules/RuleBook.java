@@ -87,7 +87,7 @@ public final class RuleBook {
         CapabilityTable capability = capabilityTables.get(CapabilityTable.DEFAULT_ID);
         GeneralToleranceTables general;
         try {
-            general = GeneralToleranceTables.load(stack);
+            general = GeneralToleranceTables.load(stack.files("tables", ".json").stream().map(PackStack.PackFile::path).toList());
         } catch (InputProblem p) {
             problems.add(p);
             general = new GeneralToleranceTables(List.<GeneralToleranceTable>of());

@@ -1,5 +1,6 @@
 package org.arcwright.tolerance;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -7,7 +8,6 @@ import java.util.Map;
 import java.util.Optional;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
-import org.arcwright.pack.PackStack;
 
 /**
  * The general-tolerance tables in force: every {@code tables/*.json} of every pack whose
@@ -27,20 +27,20 @@ public final class GeneralToleranceTables {
         this.byId = java.util.Collections.unmodifiableMap(m);
     }
 
-    /** Loads the tables of every pack in {@code stack}; a malformed table file is an error naming it. */
-    public static GeneralToleranceTables load(PackStack stack) {
+    /**
+     * Loads the general-tolerance tables among {@code tableFiles} (a pack stack's {@code tables/*.json},
+     * lowest layer first, so a later table replaces an earlier one with the same id); files of another
+     * {@code kind} are skipped, a malformed table is an error naming its file.
+     */
+    public static GeneralToleranceTables load(List<Path> tableFiles) {
         JsonFiles json = new JsonFiles();
         List<GeneralToleranceTable> tables = new ArrayList<>();
-        for (PackStack.PackFile f : stack.files("tables", ".json")) {
-            var tree = json.readTree(f.path());
+        for (Path file : tableFiles) {
+            var tree = json.readTree(file);
             if (!"general-tolerance".equals(tree.path("kind").asText())) continue;
             var obj = ((com.fasterxml.jackson.databind.node.ObjectNode) tree.deepCopy());
             obj.remove("kind");
-            try {
-                tables.add(json.convert(obj, f.path().toString(), GeneralToleranceTable.class));
-            } catch (InputProblem p) {
-                throw p;
-            }
+            tables.add(json.convert(obj, file.toString(), GeneralToleranceTable.class));
         }
         return new GeneralToleranceTables(tables);
     }

@@ -3,6 +3,7 @@
  * recommendation and, once measured, the inspection result. Saved as JSON with the {@code .arcpart}
  * extension (see {@code docs/decisions/0002-part-worksheet-file.md}).
  *
- * <p>May import: the JDK, Jackson and the core packages. Must not import Swing/AWT or print.
+ * <p>May import: the JDK, Jackson, {@code org.arcwright.io}, {@code org.arcwright.tolerance} and
+ * {@code org.arcwright.model} (the case vocabulary). Must not import Swing/AWT or print.
  */
 package org.arcwright.worksheet;

@@ -3,14 +3,12 @@ package org.arcwright.app.model;
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
-import com.tngtech.archunit.core.importer.ClassFileImporter;
-import com.tngtech.archunit.core.importer.ImportOption;
+import org.arcwright.testing.ProductionClasses;
 import org.junit.jupiter.api.Test;
 
 /** Keeps the window's view models free of Swing, so they are tested without a screen. */
 class AppArchitectureTest {
-    private final JavaClasses classes = new ClassFileImporter()
-            .withImportOption(ImportOption.Predefined.DO_NOT_INCLUDE_TESTS).importPackages("org.arcwright.app.model");
+    private final JavaClasses classes = ProductionClasses.get();
 
     @Test
     void viewModelsDoNotUseSwingOrAwt() {
