@@ -18,6 +18,7 @@ import picocli.CommandLine.Command;
                 PackCommand.class,
                 NotesCommand.class,
                 InspectCommand.class,
+                SimulateCommand.class,
                 NoteCommand.class,
                 RenderCommand.class,
                 SheetCommand.class,

@@ -43,8 +43,8 @@ final class ActiveSetLp {
         int total = p.constraints();
         int[] work = Arrays.copyOf(initial, Math.max(16, initial.length * 2));
         int size = initial.length;
-        java.util.Set<Integer> inWork = new java.util.HashSet<>();
-        for (int j : initial) inWork.add(j);
+        boolean[] inWork = new boolean[total];
+        for (int j : initial) inWork[j] = true;
         double[] row = new double[n];
         int[] topIdx = new int[ADD_PER_PASS];
         double[] topVal = new double[ADD_PER_PASS];
@@ -62,7 +62,7 @@ final class ActiveSetLp {
             int minSlot = 0;
             for (int j = 0; j < total; j++) {
                 double v = p.violation(j, z);
-                if (v <= tol || (v <= 1e3 * tol && inWork.contains(j))) continue;
+                if (v <= tol || (v <= 1e3 * tol && inWork[j])) continue;
                 if (found < ADD_PER_PASS) {
                     topIdx[found] = j;
                     topVal[found] = v;
@@ -77,7 +77,8 @@ final class ActiveSetLp {
             int added = 0;
             if (size + found > work.length) work = Arrays.copyOf(work, (size + found) * 2);
             for (int k = 0; k < found; k++) {
-                if (inWork.add(topIdx[k])) {
+                if (!inWork[topIdx[k]]) {
+                    inWork[topIdx[k]] = true;
                     work[size++] = topIdx[k];
                     added++;
                 }

@@ -139,6 +139,9 @@ public final class InspectionFiles {
             if (k == null) throw new IllegalArgumentException("kind: unknown kind '" + kind + "'; use round or fillet");
             this.corner = wrap(null, () -> new Corner(v, a, b, k));
         }
+
+        /** The corner as read (also used by other files that share the corner shape). */
+        public Corner corner() { return corner; }
     }
 
     /** {@code contour}: air side and segments. */
@@ -239,6 +242,9 @@ public final class InspectionFiles {
                         + "'; use radius, controlled-radius, profile or composite-profile");
             }
         }
+
+        /** The callout as read (also used by other files that share the callout shape). */
+        public InspectionCallout callout() { return callout; }
 
         private static void only(String type, boolean ok, String takes) {
             if (!ok) throw new IllegalArgumentException("a " + type + " callout takes only " + takes);

@@ -34,6 +34,20 @@ public final class Inspector {
                 main.fits(), main.surfaces(), main.worst(), main.notes(), rows);
     }
 
+    /**
+     * The verdict alone: the same judgement as {@link #inspect}, without the circle fits and the
+     * comparison, for callers that judge many sections and read only the verdict (the simulation).
+     * @throws InputProblem for input no verdict can be given on
+     */
+    public InspectionResult verdict(InspectionRequest req) {
+        PointSet pts = req.points();
+        if (pts.size() < 3) throw InputProblem.ofField("points", "too few points: " + pts.size() + "; need at least 3");
+        Contour contour = contourOf(req.nominal(), pts);
+        double[] stations = new double[pts.size()];
+        contour.measureAll(pts.xs(), pts.ys(), pts.size(), null, null, null, stations);
+        return judge(req, req.callout(), contour, stations, new ArrayList<>(), false);
+    }
+
     /** The nominal contour the request's points are measured against (legs long enough for every point). */
     public static Contour nominalContour(InspectionRequest req) {
         return contourOf(req.nominal(), req.points());

@@ -209,7 +209,16 @@ public final class ProfileCheck {
             out[m++] = hi;
             out[m++] = n + lo;
         }
-        return java.util.Arrays.stream(out, 0, m).distinct().toArray();
+        // first occurrences in order, as Stream.distinct() would give, without boxing every index
+        boolean[] seen = new boolean[2 * n + 2 * free];
+        int k = 0;
+        for (int i = 0; i < m; i++) {
+            if (!seen[out[i]]) {
+                seen[out[i]] = true;
+                out[k++] = out[i];
+            }
+        }
+        return java.util.Arrays.copyOf(out, k);
     }
 
     /** Current registration and the measured deviations under it. */

@@ -1,0 +1,16 @@
+package org.arcwright.simulate;
+
+import org.arcwright.inspect.InspectionResult;
+
+/** What an inspection said of one simulated section. */
+public enum Verdict {
+    ACCEPTED,
+    REJECTED,
+    /** No verdict could be given (the engine said so, or the section could not be judged): not accepted. */
+    INDETERMINATE;
+
+    /** The verdict of an inspection result. */
+    static Verdict of(InspectionResult r) {
+        return r.pass() ? ACCEPTED : REJECTED;
+    }
+}

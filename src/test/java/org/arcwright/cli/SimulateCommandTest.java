@@ -1,0 +1,82 @@
+package org.arcwright.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/** {@code arcwright simulate}: the issue's JSON contract, the caution, and located bad input. Invented process figures. */
+class SimulateCommandTest {
+    private static final String FILE = """
+            {
+              "units": "mm",
+              "corner": {"vertex": [0, 0], "legA": [1, 0], "legB": [0, 1], "kind": "fillet"},
+              "nominalRadius": 2.0,
+              "process": {
+                "radius": {"mean": 2.02, "sd": 0.05},
+                "flat": {"rate": 0.1, "width": [0.1, 0.2], "centre": [0.4, 0.6]},
+                "points": 60
+              },
+              "needs": {"minRadius": 1.95, "maxRadius": 2.2},
+              "callouts": [{"type": "radius", "min": 1.9, "max": 2.1}, {"type": "controlled-radius", "min": 1.95, "max": 2.15}],
+              "parts": 20000,
+              "seed": 11
+            }
+            """;
+
+    @TempDir
+    Path dir;
+
+    private Path write(String text) throws IOException {
+        Path f = dir.resolve("bracket.json");
+        Files.writeString(f, text);
+        return f;
+    }
+
+    @Test
+    void jsonCarriesSharesAndIntervalsOfAllParts() throws IOException {
+        CliRun r = CliRun.of("simulate", write(FILE).toString(), "--parts", "300", "--format", "json");
+        assertThat(r.exitCode()).isEqualTo(Cli.OK);
+        JsonNode j = new ObjectMapper().readTree(r.out());
+        assertThat(j.get("parts").asInt()).isEqualTo(300);
+        assertThat(j.get("good").asInt()).isBetween(1, 300);
+        JsonNode c = j.get("callouts").get(0);
+        assertThat(c.get("callout").get("type").asText()).isEqualTo("radius");
+        assertThat(c.get("text").asText()).isEqualTo("R 1.9-2.1");
+        for (String f : new String[] {"accepted", "escapes", "falseRejects"}) {
+            double v = c.get(f).asDouble();
+            JsonNode iv = c.get(f.equals("escapes") ? "escapesInterval" : f + "Interval");
+            assertThat(iv.get(0).asDouble()).isLessThanOrEqualTo(v);
+            assertThat(iv.get(1).asDouble()).isGreaterThanOrEqualTo(v);
+        }
+        assertThat(j.get("caution").asText()).contains("model, not the shop's capability data");
+    }
+
+    @Test
+    void textShowsEveryCalloutAndTheCaution() throws IOException {
+        CliRun r = CliRun.of("simulate", write(FILE).toString(), "--parts", "200", "--seed", "3");
+        assertThat(r.exitCode()).isEqualTo(Cli.OK);
+        assertThat(r.out()).contains("simulated 200 parts, seed 3").contains("R 1.9-2.1").contains("CR 1.95-2.15")
+                .contains("escapes").contains("false rejects").contains("licensed engineering judgement");
+    }
+
+    @Test
+    void badInputExitsTwoNamingFileLineAndField() throws IOException {
+        Path f = write(FILE.replace("\"points\": 60", "\"points\": 2"));
+        CliRun r = CliRun.of("simulate", f.toString());
+        assertThat(r.exitCode()).isEqualTo(Cli.BAD_INPUT);
+        assertThat(r.err()).contains(f.toString() + ":").contains("process.points").contains("at least 3");
+    }
+
+    @Test
+    void badPartsArgumentExitsTwo() throws IOException {
+        CliRun r = CliRun.of("simulate", write(FILE).toString(), "--parts", "0");
+        assertThat(r.exitCode()).isEqualTo(Cli.BAD_INPUT);
+        assertThat(r.err()).contains("--parts");
+    }
+}
