@@ -6,8 +6,9 @@ import javax.swing.JFrame;
 import javax.swing.SwingUtilities;
 import org.arcwright.app.model.ConfigLocation;
 import org.arcwright.app.model.Settings;
+import org.arcwright.app.shell.AppServices;
 import org.arcwright.app.shell.MainWindow;
-import org.arcwright.app.shell.Themes;
+import org.arcwright.app.widgets.Themes;
 
 /**
  * Starts the desktop window: reads settings, applies the look, and builds and shows the window on

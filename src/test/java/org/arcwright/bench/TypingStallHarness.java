@@ -17,7 +17,7 @@ import java.util.Map;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
 import javax.swing.SwingUtilities;
-import org.arcwright.app.AppServices;
+import org.arcwright.app.shell.AppServices;
 import org.arcwright.app.DesktopApp;
 import org.arcwright.app.model.Settings;
 import org.arcwright.app.model.ThemeChoice;

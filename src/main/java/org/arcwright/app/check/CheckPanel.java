@@ -20,6 +20,7 @@ import javax.swing.JPanel;
 import javax.swing.JProgressBar;
 import javax.swing.JScrollPane;
 import javax.swing.JTable;
+import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 import javax.swing.TransferHandler;
 import javax.swing.filechooser.FileNameExtensionFilter;
@@ -27,22 +28,29 @@ import javax.swing.table.DefaultTableModel;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.model.MeasuredPoints;
+import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.WorksheetSession;
-import org.arcwright.app.shell.Icons;
-import org.arcwright.app.shell.Themes;
-import org.arcwright.app.shell.WrapLabel;
+import org.arcwright.app.widgets.Icons;
+import org.arcwright.app.widgets.Themes;
+import org.arcwright.app.widgets.WrapLabel;
 import org.arcwright.inspect.Comparison;
+import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.render.ContourPlot;
+import org.arcwright.worksheet.InspectionRecord;
 import org.arcwright.worksheet.RadiusFeature;
 
 /**
- * The Check panel: import measured points (an inspection file, or a CSV judged against the selected
- * feature; by the button or by dropping the file here), run the inspection in the background with
- * progress and cancel, and see the verdict, the figures, the same points under every callout, and
- * the contour with its points coloured by excess.
+ * The Check panel: import measured points (an inspection file, or a CSV in a frame the user states;
+ * by the button or by dropping the file here) and judge them against the selected feature's chosen
+ * callout, in the background with progress and cancel; see the verdict as a sentence naming the
+ * feature, the callout and the units, what the file itself states, the figures, the same points
+ * under other callouts, and the contour with its points coloured by excess.
+ *
+ * <p>Everything shown belongs to the selected feature as it stands: selecting another feature,
+ * choosing another callout or opening another worksheet clears the result and disables Keep.
  */
 public final class CheckPanel extends JPanel {
     private static final long serialVersionUID = 1L;
@@ -51,10 +59,10 @@ public final class CheckPanel extends JPanel {
     private final transient Executor background;
     private final transient Clock clock;
     private final transient Consumer<String> status;
-    private final WrapLabel verdict = new WrapLabel("No contour checked yet", "h2.font", "Label.foreground");
-    private final WrapLabel figures = new WrapLabel("Import measured points (CSV with x,y per line, corner vertex at the "
-            + "origin and legs along +x and +y), or an inspection file (.json), or drop either here.", "Label.font",
-            "Arcwright.help.foreground");
+    private final WrapLabel target = new WrapLabel("", "Label.font", "Label.foreground");
+    private final WrapLabel verdict = new WrapLabel("", "h2.font", "Label.foreground");
+    private final WrapLabel fileSays = new WrapLabel("", "Label.font", "Arcwright.help.foreground");
+    private final WrapLabel figures = new WrapLabel("", "Label.font", "Arcwright.help.foreground");
     private final DefaultTableModel comparisons = new DefaultTableModel(new Object[] {"Control", "Callout", "Verdict",
         "Deciding figure"}, 0) {
         private static final long serialVersionUID = 1L;
@@ -63,24 +71,45 @@ public final class CheckPanel extends JPanel {
         public boolean isCellEditable(int row, int column) { return false; }
     };
     private final Plot plot = new Plot();
-    private final JTable table = new JTable(comparisons);
+    private final JTable table = new TipTable(comparisons);
     private final JProgressBar progress = new JProgressBar();
     private final JButton cancel = new JButton("Cancel");
     private final JButton keep = new JButton("Keep the verdict on the worksheet");
-    private transient InspectionResult result;
-    private transient String source;
+    private final JButton confirm = new JButton();
+    private final JTextField vertexX = frameField("0", "frameVertexX");
+    private final JTextField vertexY = frameField("0", "frameVertexY");
+    private final JTextField legA = frameField("0", "frameLegA");
+    private final JTextField legB = frameField("90", "frameLegB");
+    private transient Judged judged;
+    private transient CheckRequests.NeedsConfirmation pending;
+    private transient String pendingSource;
+    private transient Subject subject;
     private long generation;
+
+    /** What the panel's content belongs to: the worksheet shown, the feature and what was decided for it. */
+    private record Subject(long document, String featureId, Object chosen, Object designCase) {
+        static Subject of(WorksheetSession s) {
+            RadiusFeature f = s.selected().orElse(null);
+            return new Subject(s.document(), f == null ? null : f.id(), f == null ? null : f.chosen(),
+                    f == null ? null : f.designCase());
+        }
+    }
+
+    /** A verdict on the screen: what it judged, and the record Keep puts on the worksheet. */
+    private record Judged(Subject subject, InspectionResult result, InspectionRecord record) {}
 
     public CheckPanel(WorksheetSession session, CheckRequests requests, Executor background, Clock clock,
                       Consumer<String> status) {
-        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][grow,fill]"));
+        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][][][][grow,fill]"));
         this.session = Objects.requireNonNull(session, "session");
         this.requests = Objects.requireNonNull(requests, "requests");
         this.background = Objects.requireNonNull(background, "background");
         this.clock = Objects.requireNonNull(clock, "clock");
         this.status = Objects.requireNonNull(status, "status");
         setName("checkPanel");
+        target.setName("checkTarget");
         verdict.setName("checkVerdict");
+        fileSays.setName("checkFileSays");
         figures.setName("checkFigures");
         JButton open = new JButton("Import measured points…", Icons.get("open"));
         open.setName("checkImport");
@@ -89,52 +118,151 @@ public final class CheckPanel extends JPanel {
         cancel.setVisible(false);
         cancel.addActionListener(e -> cancelled());
         keep.setName("checkKeep");
-        keep.setEnabled(false);
-        keep.setToolTipText("Unavailable: check a contour first");
         keep.addActionListener(e -> keepVerdict());
+        confirm.setName("checkConfirm");
+        confirm.setVisible(false);
+        confirm.addActionListener(e -> confirmed());
         table.setName("checkComparisons");
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 5));
-        // Top: the actions, then the verdict wrapping to the panel's width; then the figures, the
-        // comparison table at a height that shows several rows, and the plot taking what is left.
+        add(target, "growx, wmin 10");
         add(open, "split 4, growx 0");
         add(keep, "growx 0");
         add(progress, "w 120!, growx 0");
         add(cancel, "growx 0");
+        add(frameRow(), "growx, wmin 10");
         add(verdict, "growx, wmin 10");
+        add(confirm, "growx 0");
+        add(fileSays, "growx, wmin 10");
         add(figures, "growx, wmin 10");
         add(new JScrollPane(table), "growx, wmin 10, hmin 110, h 150:150:");
         add(plot, "grow, wmin 10, hmin 120");
         setTransferHandler(new FileDrop());
+        session.listeners().add(this::sessionChanged);
+        subject = Subject.of(session);
+        showIdle();
     }
 
-    /** Checks the contour in {@code file} in the background (also used by drag and drop and tests). */
+    private static JTextField frameField(String value, String name) {
+        JTextField f = new JTextField(value, 4);
+        f.setName(name);
+        return f;
+    }
+
+    /** The CSV frame: where the corner's vertex is and which way its legs run, in the CSV's coordinates. */
+    private JPanel frameRow() {
+        JPanel p = new JPanel(new MigLayout("insets 0, gap 4", "[][][][][][][][][]", ""));
+        p.setOpaque(false);
+        javax.swing.JLabel l = new javax.swing.JLabel("CSV frame: vertex x");
+        l.setToolTipText("A CSV holds points only: say where the corner's vertex is and which way its two legs run, "
+                + "in the CSV's own coordinates and in the feature's units");
+        p.add(l);
+        p.add(vertexX);
+        p.add(new javax.swing.JLabel("y"));
+        p.add(vertexY);
+        p.add(new javax.swing.JLabel("  leg A at"));
+        p.add(legA);
+        p.add(new javax.swing.JLabel("°  leg B at"));
+        p.add(legB);
+        p.add(new javax.swing.JLabel("° (from +x, counter-clockwise)"));
+        return p;
+    }
+
+    /** Checks the contour in {@code file} for the selected feature in the background (also used by drag and drop and tests). */
     public void check(Path file) {
         RadiusFeature f = session.selected().orElse(null);
-        InspectionRequest req;
+        CheckRequests.Binding binding;
         try {
-            req = requests.read(file, f);
+            binding = requests.read(file, f, frame());
         } catch (RuntimeException e) {
-            verdict.show("Cannot check", "Arcwright.error.foreground");
+            clearResult();
+            verdict.show("Cannot check " + file.getFileName() + ".", "Arcwright.error.foreground");
             figures.show(e.getMessage(), "Arcwright.error.foreground");
             return;
         }
+        if (binding instanceof CheckRequests.Refused r) {
+            clearResult();
+            verdict.show("Not checked: " + r.reason(), "Arcwright.error.foreground");
+            status.accept("Not checked: " + file.getFileName());
+            return;
+        }
+        if (binding instanceof CheckRequests.NeedsConfirmation n) {
+            clearResult();
+            pending = n;
+            pendingSource = file.toString();
+            verdict.show("Not checked yet: " + file.getFileName() + " does not describe " + n.featureId() + ". "
+                    + String.join(" ", n.mismatches()), "Arcwright.error.foreground");
+            confirm.setText("Judge the points as " + n.featureId() + " anyway (" + n.featureId() + "'s nominal and corner, "
+                    + "the file's frame)");
+            confirm.setVisible(true);
+            fileSays.show("The file says: " + n.ifConfirmed().fileSays(), "Arcwright.help.foreground");
+            return;
+        }
+        run((CheckRequests.Ready) binding, file.toString());
+    }
+
+    /** The frame stated for a CSV; a field that is not a number is reported by name. */
+    private CheckRequests.Frame frame() {
+        return CheckRequests.Frame.ofDegrees(number(vertexX, "vertex x"), number(vertexY, "vertex y"),
+                number(legA, "leg A"), number(legB, "leg B"));
+    }
+
+    private static double number(JTextField f, String name) {
+        return Numbers.parse(f.getText()).orElseThrow(() -> org.arcwright.io.InputProblem.ofField(name,
+                "the CSV frame's " + name + " is not a number: '" + f.getText() + "'"));
+    }
+
+    /** Sets the CSV frame (the vertex and the legs' directions in degrees), as a user types it. */
+    public void setFrame(double x, double y, double legADeg, double legBDeg) {
+        vertexX.setText(Numbers.trim(x));
+        vertexY.setText(Numbers.trim(y));
+        legA.setText(Numbers.trim(legADeg));
+        legB.setText(Numbers.trim(legBDeg));
+    }
+
+    private void confirmed() {
+        CheckRequests.NeedsConfirmation n = pending;
+        if (n == null) return;
+        run(n.ifConfirmed(), pendingSource);
+    }
+
+    private void run(CheckRequests.Ready ready, String src) {
+        clearResult();
         long g = ++generation;
+        Subject s = subject;
         progress.setIndeterminate(true);
         progress.setVisible(true);
         cancel.setVisible(true);
-        status.accept("Checking " + file.getFileName() + "…");
-        String src = file.toString();
-        String featureId = f == null ? null : f.id();
+        verdict.show("Checking " + Path.of(src).getFileName() + " against " + ready.featureId() + "'s "
+                + ready.request().callout().describe() + "…", "Label.foreground");
+        if (ready.fileSays() != null) fileSays.show("The file says: " + ready.fileSays() + " (not judged: "
+                + ready.featureId() + "'s chosen callout is)", "Arcwright.help.foreground");
+        status.accept("Checking " + Path.of(src).getFileName() + "…");
+        InspectionRequest req = ready.request();
         CompletableFuture.supplyAsync(() -> {
             InspectionResult r = new Inspector().inspect(req);
             return new Checked(r, MeasuredPoints.of(r, src));
-        }, background).whenComplete((c, e) -> SwingUtilities.invokeLater(() -> inspected(g, src, featureId, c, e)));
+        }, background).whenComplete((c, e) -> SwingUtilities.invokeLater(() -> inspected(g, s, src, ready, c, e)));
     }
 
     /** An inspection and its points as the Zone view plots them (when its nominal is a corner). */
     private record Checked(InspectionResult result, Optional<MeasuredPoints> points) {}
 
     public String verdictText() { return verdict.getText(); }
+
+    /** The line naming the feature the panel judges for (tests). */
+    public String targetText() { return target.getText(); }
+
+    /** What the file states, shown beside the verdict (tests). */
+    public String fileSaysText() { return fileSays.getText(); }
+
+    /** Whether Keep may be pressed now (tests). */
+    public boolean canKeep() { return keep.isEnabled(); }
+
+    /** Whether the panel offers to judge a mismatched file as the feature anyway (tests). */
+    public boolean confirmOffered() { return confirm.isVisible(); }
+
+    /** Rows in the comparison table (tests). */
+    public int comparisonRows() { return comparisons.getRowCount(); }
 
     /** Whether every wrapped line of the verdict fits in the space it was given (tests). */
     public boolean verdictFullyShown() {
@@ -152,6 +280,9 @@ public final class CheckPanel extends JPanel {
         if (c.showOpenDialog(this) == JFileChooser.APPROVE_OPTION) check(c.getSelectedFile().toPath());
     }
 
+    /** Opens the file chooser (the menu and command finder command). */
+    public void importPoints() { chooseFile(); }
+
     /** Hides the bar and stops its animation, which an invisible indeterminate bar keeps running. */
     private void hideProgress() {
         progress.setIndeterminate(false);
@@ -162,70 +293,153 @@ public final class CheckPanel extends JPanel {
         generation++;
         hideProgress();
         cancel.setVisible(false);
+        showIdle();
         status.accept("Check cancelled");
     }
 
-    private void inspected(long g, String src, String featureId, Checked c, Throwable e) {
-        if (g != generation) return;
+    // ---- model to view ----
+
+    private void sessionChanged() {
+        Subject now = Subject.of(session);
+        if (!now.equals(subject)) {
+            subject = now;
+            // a check running for the last feature is dropped, and nothing of it stays on the screen
+            generation++;
+            hideProgress();
+            cancel.setVisible(false);
+            showIdle();
+            return;
+        }
+        refreshKeep();
+    }
+
+    /** What the panel says when nothing is judged: the selected feature and what it would be judged against. */
+    private void showIdle() {
+        clearResult();
+        RadiusFeature f = session.selected().orElse(null);
+        target.show(targetLine(f), "Label.foreground");
+        verdict.show(f == null ? "No feature selected." : "No contour checked for " + f.id() + " yet.", "Label.foreground");
+        figures.show("Import measured points (a CSV of x,y per line, in the frame stated above, or an inspection file "
+                + "(.json)), or drop either here. They are judged against the selected feature's chosen callout.",
+                "Arcwright.help.foreground");
+    }
+
+    private static String targetLine(RadiusFeature f) {
+        if (f == null) return "Select a feature in the Part panel: points are judged against its chosen callout.";
+        String u = f.designCase().units().symbol();
+        String what = f.id() + ", " + f.designCase().kind().key() + " R" + Numbers.trim(f.designCase().nominalRadius()) + " " + u;
+        if (f.chosen() == null) return what + ": no callout chosen yet, so nothing to judge against. Decide it first (Alt+2).";
+        return what + ": judged against its chosen callout " + f.chosen().text() + " (lengths in " + u + ").";
+    }
+
+    /** Empties the verdict, the figures, the table and the plot, and disables Keep. */
+    private void clearResult() {
+        judged = null;
+        pending = null;
+        pendingSource = null;
+        confirm.setVisible(false);
+        fileSays.show("", "Arcwright.help.foreground");
+        figures.show("", "Arcwright.help.foreground");
+        comparisons.setRowCount(0);
+        plot.show(null);
+        refreshKeep();
+    }
+
+    private void refreshKeep() {
+        RadiusFeature f = session.selected().orElse(null);
+        boolean current = judged != null && f != null && judged.subject().equals(Subject.of(session));
+        boolean kept = current && judged.record().equals(f.inspection());
+        keep.setEnabled(current && !kept);
+        keep.setToolTipText(judged == null ? "Unavailable: check a contour of the selected feature first"
+                : !current ? "Unavailable: the verdict shown is not for the selected feature as it stands"
+                : kept ? "Kept on " + f.id() : "Record this verdict with " + f.id() + " (Ctrl+Z to undo)");
+    }
+
+    private void inspected(long g, Subject s, String src, CheckRequests.Ready ready, Checked c, Throwable e) {
+        if (g != generation || !s.equals(subject)) return;
         hideProgress();
         cancel.setVisible(false);
         if (e != null) {
             Throwable cause = e.getCause() != null ? e.getCause() : e;
-            verdict.show("Cannot check", "Arcwright.error.foreground");
+            verdict.show("Cannot check " + Path.of(src).getFileName() + ".", "Arcwright.error.foreground");
             figures.show(cause.getMessage(), "Arcwright.error.foreground");
             status.accept("Check failed");
             return;
         }
         InspectionResult r = c.result();
-        result = r;
-        source = src;
+        String u = r.request().units().symbol();
         // the Zone view plots the points of the feature they were checked for
-        if (featureId != null && c.points().isPresent() && session.worksheet().feature(featureId).isPresent()) {
-            session.keepMeasured(featureId, c.points().get());
+        if (c.points().isPresent() && session.worksheet().feature(ready.featureId()).isPresent()) {
+            session.keepMeasured(ready.featureId(), c.points().get());
         }
-        verdict.show((r.pass() ? "Conforms" : "Does not conform") + " · " + r.request().callout().describe(),
+        judged = new Judged(s, r, CheckRequests.record(r, src, LocalDate.now(clock)));
+        verdict.show(sentence(ready.featureId(), r.pass(), r.request().callout(), u),
                 r.pass() ? "Arcwright.pass.foreground" : "Arcwright.fail.foreground");
         figures.show(describe(r), "Label.foreground");
         comparisons.setRowCount(0);
         for (Comparison k : r.comparisons()) {
-            comparisons.addRow(new Object[] {k.name(), k.callout(), k.pass() ? "conforms" : "does not", k.figure()});
+            comparisons.addRow(new Object[] {k.name(), k.callout(), k.pass() ? "conforms" : "does not conform", k.figure()});
         }
         plot.show(r);
-        boolean canKeep = session.selected().isPresent();
-        keep.setEnabled(canKeep);
-        keep.setToolTipText(canKeep ? "Record this verdict with the selected feature (Ctrl+Z to undo)"
-                : "Unavailable: select the feature this contour belongs to");
-        status.accept("Checked " + Path.of(src).getFileName() + ": " + (r.pass() ? "conforms" : "does not conform"));
+        refreshKeep();
+        status.accept("Checked " + Path.of(src).getFileName() + " for " + ready.featureId() + ": "
+                + (r.pass() ? "conforms" : "does not conform"));
+    }
+
+    /** The verdict as a whole sentence: which feature, against what, in which units. */
+    static String sentence(String featureId, boolean pass, InspectionCallout callout, String units) {
+        return "The measured contour of " + featureId + (pass ? " conforms to " : " does not conform to ")
+                + "its chosen callout, " + callout.describe() + " (" + units + ").";
     }
 
     private static String describe(InspectionResult r) {
+        String u = " " + r.request().units().symbol();
         StringBuilder sb = new StringBuilder();
-        sb.append(r.request().points().size()).append(" points, ").append(r.request().units().symbol()).append('\n');
+        sb.append(r.request().points().size()).append(" points; lengths in").append(u).append('\n');
         if (r.worst() != null) {
-            sb.append("Worst point: (").append(fmt(r.worst().x())).append(", ").append(fmt(r.worst().y())).append("), ")
-                    .append(r.worst().excess() > 0 ? "beyond" : "within").append(" by ").append(fmt(Math.abs(r.worst().excess())))
-                    .append(" (").append(r.worst().measure()).append(")\n");
+            sb.append("Worst point: (").append(fmt(r.worst().x())).append(", ").append(fmt(r.worst().y())).append(")").append(u)
+                    .append(", ").append(r.worst().excess() > 0 ? "beyond" : "within").append(" by ")
+                    .append(fmt(Math.abs(r.worst().excess()))).append(u).append(" (").append(r.worst().measure()).append(")\n");
         }
         if (r.radius() != null) {
-            sb.append("Radius envelope: ").append(fmt(r.radius().smallest())).append(" to ").append(fmt(r.radius().largest())).append('\n');
+            sb.append("Radius envelope: ").append(length(r.radius().smallest(), u)).append(" to ")
+                    .append(length(r.radius().largest(), u)).append('\n');
         }
         if (r.fits() != null && r.fits().leastSquares() != null) {
-            sb.append("Least-squares radius: ").append(fmt(r.fits().leastSquares().circle().r())).append('\n');
+            sb.append("Least-squares radius: ").append(fmt(r.fits().leastSquares().circle().r())).append(u).append('\n');
         }
-        if (r.profile() != null) sb.append("Zone the points need: ").append(fmt(r.profile().requiredZone())).append('\n');
+        if (r.profile() != null) sb.append("Zone the points need: ").append(fmt(r.profile().requiredZone())).append(u).append('\n');
         for (String n : r.notes()) sb.append("• ").append(n).append('\n');
         return sb.toString().strip();
     }
 
+    /** A length with its unit, or "none" (no unit) where the core found none. */
+    private static String length(double v, String unit) { return Double.isNaN(v) ? "none" : fmt(v) + unit; }
+
     private static String fmt(double v) {
-        return Double.isNaN(v) ? "none" : String.format(java.util.Locale.ROOT, "%.4f", v);
+        return Double.isNaN(v) ? "none" : Numbers.fixed(v, 4);
     }
 
     private void keepVerdict() {
-        if (result == null || session.selected().isEmpty()) return;
-        String id = session.selected().get().id();
-        session.recordInspection(id, CheckRequests.record(result, source, LocalDate.now(clock)));
-        status.accept("Kept the verdict on " + id);
+        RadiusFeature f = session.selected().orElse(null);
+        if (judged == null || f == null || !judged.subject().equals(Subject.of(session)) || f.chosen() == null) return;
+        session.recordInspection(f.id(), judged.record());
+        status.accept("Kept the verdict on " + f.id() + " (Ctrl+Z to undo)");
+    }
+
+    /** A table whose cells show their whole text as a tooltip when it does not fit. */
+    private static final class TipTable extends JTable {
+        private static final long serialVersionUID = 1L;
+
+        TipTable(DefaultTableModel m) { super(m); }
+
+        @Override
+        public String getToolTipText(java.awt.event.MouseEvent e) {
+            int row = rowAtPoint(e.getPoint()), col = columnAtPoint(e.getPoint());
+            if (row < 0 || col < 0) return null;
+            Object v = getValueAt(row, col);
+            return v == null ? null : v.toString();
+        }
     }
 
     /** Accepts a dropped .csv or .json file. */

@@ -29,10 +29,10 @@ import org.arcwright.app.model.DecideForm;
 import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.Question;
 import org.arcwright.app.model.WorksheetSession;
-import org.arcwright.app.shell.Cautions;
-import org.arcwright.app.shell.ScrollablePanel;
-import org.arcwright.app.shell.WrapLabel;
-import org.arcwright.app.shell.Themes;
+import org.arcwright.app.widgets.Cautions;
+import org.arcwright.app.widgets.ScrollablePanel;
+import org.arcwright.app.widgets.WrapLabel;
+import org.arcwright.app.widgets.Themes;
 import org.arcwright.render.Palette;
 import org.arcwright.model.BlendFunction;
 import org.arcwright.model.BlendKind;
@@ -517,7 +517,7 @@ public final class DecidePanel extends JPanel {
     private void copyFrame(Recommendation r) {
         java.awt.image.BufferedImage img = frameImages.get(r);
         if (img == null) return;
-        Toolkit.getDefaultToolkit().getSystemClipboard().setContents(new org.arcwright.app.shell.ImageSelection(img), null);
+        Toolkit.getDefaultToolkit().getSystemClipboard().setContents(new org.arcwright.app.widgets.ImageSelection(img), null);
         status.accept("Copied the frame of " + r.text() + " as an image");
     }
 

@@ -28,6 +28,7 @@ public final class WorksheetSession {
     private Path file;
     private String selectedId;
     private long revision;
+    private long document;
     /** Points of the inspections run in this window, by feature id: the worksheet keeps only verdicts. */
     private final java.util.Map<String, MeasuredPoints> measured = new java.util.HashMap<>();
 
@@ -51,6 +52,9 @@ public final class WorksheetSession {
 
     /** Grows with every change; autosave compares it. */
     public long revision() { return revision; }
+
+    /** Grows each time another worksheet is shown (open, new, demo, restore); views drop what belonged to the last one. */
+    public long document() { return document; }
 
     /** A short title for the window: file name or part number, with a mark when unsaved. */
     public String title() {
@@ -119,23 +123,36 @@ public final class WorksheetSession {
         measured.keySet().removeIf(id -> worksheet.features().stream().noneMatch(f -> f.id().equals(id)));
     }
 
-    /** Replaces the case of feature {@code id}; a changed case clears the chosen callout. */
+    /**
+     * Replaces the case of feature {@code id}; a changed case clears the chosen callout and with it
+     * the verdict judged against that callout.
+     */
     public void updateCase(String id, DesignCase c) {
         RadiusFeature f = require(id);
         if (f.designCase().equals(c)) return;
-        edit("Edit " + id, worksheet.withFeature(f.withCase(c)));
+        edit("Edit " + id, worksheet.withFeature(f.withCase(c).withInspection(null)));
     }
 
-    /** Puts {@code r} on the drawing for feature {@code id}, keeping the case it was decided for. */
+    /**
+     * Puts {@code r} on the drawing for feature {@code id}, keeping the case it was decided for; a
+     * verdict judged against another callout or case does not stay with the new one.
+     */
     public void choose(String id, DesignCase c, Recommendation r) {
         RadiusFeature f = require(id);
-        RadiusFeature next = new RadiusFeature(f.id(), c, r, f.inspection());
+        boolean sameCallout = f.chosen() != null && r != null && java.util.Objects.equals(f.chosen().callout(), r.callout())
+                && f.designCase().equals(c);
+        RadiusFeature next = new RadiusFeature(f.id(), c, r, sameCallout ? f.inspection() : null);
         edit("Choose " + (r.text() == null ? r.ruleId() : r.text()) + " for " + id, worksheet.withFeature(next));
     }
 
-    /** Keeps the outcome of inspecting a measured contour of feature {@code id}. */
+    /**
+     * Keeps the outcome of inspecting a measured contour of feature {@code id}.
+     *
+     * @throws IllegalStateException when the feature has no chosen callout: an undecided feature keeps no verdict
+     */
     public void recordInspection(String id, InspectionRecord record) {
         RadiusFeature f = require(id);
+        if (f.chosen() == null) throw new IllegalStateException(id + " has no chosen callout: an undecided feature keeps no verdict");
         edit("Inspect " + id, worksheet.withFeature(f.withInspection(record)));
     }
 
@@ -229,6 +246,7 @@ public final class WorksheetSession {
         saved = savedState;
         history.clear();
         measured.clear();
+        document++;
         selectedId = ws.features().isEmpty() ? null : ws.features().get(0).id();
         changed();
     }

@@ -19,7 +19,7 @@ import javax.swing.JComponent;
 import javax.swing.JList;
 import javax.swing.ListCellRenderer;
 import javax.swing.UIManager;
-import org.arcwright.app.shell.Themes;
+import org.arcwright.app.widgets.Themes;
 import org.arcwright.notes.NoteHit;
 
 /**

@@ -14,7 +14,7 @@ import javax.swing.table.DefaultTableCellRenderer;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.FeatureColumn;
 import org.arcwright.app.model.WorksheetSession;
-import org.arcwright.app.shell.Themes;
+import org.arcwright.app.widgets.Themes;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.RadiusFeature;
 

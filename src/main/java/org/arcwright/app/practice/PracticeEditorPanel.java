@@ -26,7 +26,7 @@ import org.arcwright.app.model.RuleSaver;
 import org.arcwright.app.model.TemplatePreview;
 import org.arcwright.app.model.TemplateSaver;
 import org.arcwright.app.model.WorksheetSession;
-import org.arcwright.app.shell.WrapLabel;
+import org.arcwright.app.widgets.WrapLabel;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackLayer;
 import org.arcwright.rules.Advisor;

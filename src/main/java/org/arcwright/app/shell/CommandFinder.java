@@ -21,6 +21,7 @@ import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.Command;
+import org.arcwright.app.widgets.Icons;
 
 /**
  * The command finder: type a few letters of any command, see its shortcut, press Enter to run it.

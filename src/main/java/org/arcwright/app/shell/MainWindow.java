@@ -35,7 +35,6 @@ import javax.swing.JToolBar;
 import javax.swing.SwingWorker;
 import javax.swing.WindowConstants;
 import javax.swing.filechooser.FileNameExtensionFilter;
-import org.arcwright.app.AppServices;
 import org.arcwright.app.decide.DecidePanel;
 import org.arcwright.app.model.AdviceSource;
 import org.arcwright.app.model.Autosaver;
@@ -71,6 +70,10 @@ import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.RadiusFeature;
 import org.arcwright.worksheet.WorksheetFiles;
+import org.arcwright.app.widgets.Themes;
+import org.arcwright.app.widgets.NoticeStrip;
+import org.arcwright.app.widgets.LazyTab;
+import org.arcwright.app.widgets.Icons;
 
 /**
  * The Arcwright window: the Part panel on the left, the work area (Decide, Zone view, Stress view,

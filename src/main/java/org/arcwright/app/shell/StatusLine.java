@@ -5,6 +5,7 @@ import javax.swing.JPanel;
 import javax.swing.JProgressBar;
 import javax.swing.JButton;
 import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.widgets.Themes;
 
 /**
  * The strip along the bottom of the window: the latest message, the progress of background work

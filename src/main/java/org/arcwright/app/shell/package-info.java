@@ -1,9 +1,9 @@
 /**
- * The window's frame: themes, the command finder, menus and shortcuts built from one command
- * catalog, the status line, the notice strip, and the wiring of the panels.
+ * The window's frame: the layout of the panels, the command catalog behind the menus, shortcuts
+ * and command finder, the file commands, the status line, and the wiring of the panels to the
+ * services loaded once for the window.
  *
- * <p>May import: the JDK, Swing/AWT, FlatLaf, MigLayout, the core packages, {@code org.arcwright.render},
- * {@code org.arcwright.app.model} and the panels ({@code app.check}, {@code app.decide}, {@code app.notes},
- * {@code app.part}, {@code app.practice}, {@code app.stress}, {@code app.zoneview}).
+ * <p>May import: every {@code app} panel package, {@code app.widgets}, {@code app.model} and the
+ * core. No panel package imports this one; {@code app} (the entry point) starts it.
  */
 package org.arcwright.app.shell;

@@ -19,7 +19,7 @@ import org.arcwright.app.model.MeasuredPoints;
 import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.ZonePicture;
 import org.arcwright.app.model.ZoneScene;
-import org.arcwright.app.shell.Themes;
+import org.arcwright.app.widgets.Themes;
 
 /**
  * Draws a {@link ZoneScene}: the zone between its boundaries filled, the boundaries, the nominal

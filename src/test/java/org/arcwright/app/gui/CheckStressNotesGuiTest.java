@@ -45,17 +45,25 @@ class CheckStressNotesGuiTest {
     @Test
     @Order(1)
     void aMeasuredContourGetsItsVerdictAndGoesOnTheWorksheet() {
-        GuiSupport.onEdt(() -> window.session().select("F4"));
+        // F1, the invented shaft's R2 shoulder fillet, decided as CR 1.8-2.2; an example section of an R2 fillet
+        GuiSupport.onEdt(() -> {
+            window.session().select("F1");
+            RadiusFeature f1 = window.session().selected().orElseThrow();
+            window.session().choose("F1", f1.designCase(), new org.arcwright.rules.Recommendation("demo",
+                    new org.arcwright.callout.Callout.ControlledRadius(1.8, 2.2, 2.0), "CR 1.8-2.2", 0, java.util.List.of(),
+                    java.util.List.of(), java.util.List.of(), java.util.Map.of(), java.util.List.of(), java.util.List.of(), false));
+        });
         GuiSupport.onEdt(() -> window.showTab(3));
-        // an example inspection file of an invented bracket: a CR 1.9-2.1 round measured with a flat in it
-        Path example = Path.of("examples/inspect/bracket-round-cr-flat.json").toAbsolutePath();
+        Path example = Path.of("examples/inspect/housing-fillet-profile.json").toAbsolutePath();
         boolean corePass = new org.arcwright.inspect.Inspector()
-                .inspect(new org.arcwright.inspect.InspectionFiles(new org.arcwright.io.JsonFiles()).read(example)).pass();
+                .inspect(new org.arcwright.inspect.InspectionFiles(new org.arcwright.io.JsonFiles()).read(example)
+                        .withCallout(new org.arcwright.inspect.InspectionCallout.RadiusLimits(
+                                org.arcwright.tolerance.RadiusKind.CR, 1.8, 2.2))).pass();
         GuiSupport.onEdt(() -> window.checkPanel().check(example));
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.checkPanel().verdictText().contains("·")), 30);
-        // the panel shows the inspection core's verdict, as `arcwright inspect` prints it for the same file
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.checkPanel().verdictText().startsWith("The measured")), 30);
+        // the panel shows the inspection core's verdict for F1's chosen callout
         assertThat(GuiSupport.onEdt(() -> window.checkPanel().verdictText()))
-                .startsWith(corePass ? "Conforms" : "Does not conform").contains("CR 1.9-2.1");
+                .contains(corePass ? " conforms to" : " does not conform to").contains("CR 1.8-2.2");
         assertThat(fixture.table("checkComparisons").rowCount()).isGreaterThan(0);
         GuiSupport.settle(200);
         // the verdict wraps rather than being cut short, and the comparison table shows several rows
@@ -63,10 +71,10 @@ class CheckStressNotesGuiTest {
         assertThat(GuiSupport.onEdt(() -> window.checkPanel().visibleComparisonRows())).isGreaterThanOrEqualTo(3);
         GuiSupport.screenshot(window.frame(), "check-light");
         fixture.button("checkKeep").click();
-        RadiusFeature f4 = window.session().worksheet().feature("F4").orElseThrow();
-        assertThat(f4.inspection()).isNotNull();
-        assertThat(f4.inspection().verdict()).isEqualTo(corePass ? "pass" : "fail");
-        assertThat(f4.inspection().figures()).containsKey("callout");
+        RadiusFeature kept = window.session().worksheet().feature("F1").orElseThrow();
+        assertThat(kept.inspection()).isNotNull();
+        assertThat(kept.inspection().verdict()).isEqualTo(corePass ? "pass" : "fail");
+        assertThat(kept.inspection().figures()).containsEntry("callout", "CR 1.8-2.2");
     }
 
     @Test
@@ -84,7 +92,7 @@ class CheckStressNotesGuiTest {
         java.nio.file.Files.writeString(csv, dippedSection());
         GuiSupport.onEdt(() -> window.showTab(3));
         GuiSupport.onEdt(() -> window.checkPanel().check(csv));
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.checkPanel().verdictText().contains("·")), 30);
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.checkPanel().verdictText().startsWith("The measured")), 30);
         GuiSupport.onEdt(() -> window.showTab(1));
         org.arcwright.app.zoneview.ZoneViewPanel zone =
                 (org.arcwright.app.zoneview.ZoneViewPanel) fixture.panel("zoneView").target();

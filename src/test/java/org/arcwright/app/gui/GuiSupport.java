@@ -13,7 +13,7 @@ import java.util.concurrent.Callable;
 import java.util.concurrent.atomic.AtomicReference;
 import javax.imageio.ImageIO;
 import javax.swing.SwingUtilities;
-import org.arcwright.app.AppServices;
+import org.arcwright.app.shell.AppServices;
 import org.arcwright.app.DesktopApp;
 import org.arcwright.app.model.Settings;
 import org.arcwright.app.model.ThemeChoice;

@@ -1,4 +1,4 @@
-package org.arcwright.app;
+package org.arcwright.app.shell;
 
 import java.nio.file.Path;
 import java.time.Clock;

@@ -1,4 +1,4 @@
-package org.arcwright.app.shell;
+package org.arcwright.app.widgets;
 
 import com.formdev.flatlaf.FlatDarculaLaf;
 import com.formdev.flatlaf.FlatIntelliJLaf;

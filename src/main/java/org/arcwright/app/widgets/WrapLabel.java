@@ -1,4 +1,4 @@
-package org.arcwright.app.shell;
+package org.arcwright.app.widgets;
 
 import javax.swing.JTextArea;
 import javax.swing.UIManager;

@@ -1,4 +1,4 @@
-package org.arcwright.app.shell;
+package org.arcwright.app.widgets;
 
 import com.formdev.flatlaf.extras.FlatSVGIcon;
 import javax.swing.Icon;

@@ -1,4 +1,4 @@
-package org.arcwright.app.shell;
+package org.arcwright.app.widgets;
 
 import javax.swing.JButton;
 import javax.swing.JLabel;

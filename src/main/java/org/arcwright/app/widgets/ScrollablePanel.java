@@ -1,4 +1,4 @@
-package org.arcwright.app.shell;
+package org.arcwright.app.widgets;
 
 import java.awt.Dimension;
 import java.awt.LayoutManager;
