@@ -43,9 +43,7 @@ public final class Inspector {
         PointSet pts = req.points();
         if (pts.size() < 3) throw InputProblem.ofField("points", "too few points: " + pts.size() + "; need at least 3");
         Contour contour = contourOf(req.nominal(), pts);
-        double[] stations = new double[pts.size()];
-        contour.measureAll(pts.xs(), pts.ys(), pts.size(), null, null, null, stations);
-        return judge(req, req.callout(), contour, stations, new ArrayList<>(), false);
+        return judge(req, req.callout(), contour, new ArrayList<>(), false);
     }
 
     /** The nominal contour the request's points are measured against (legs long enough for every point). */
