@@ -1,6 +1,7 @@
 package org.arcwright.notes;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.io.IOException;
 import java.nio.file.Files;
@@ -8,6 +9,7 @@ import java.nio.file.Path;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
+import java.util.Set;
 import java.util.stream.Stream;
 import org.apache.lucene.analysis.standard.StandardAnalyzer;
 import org.apache.lucene.index.IndexWriter;
@@ -232,6 +234,50 @@ class NotesStoreRecoveryTest {
             assertThat(r.kind()).isEqualTo(IndexReport.Kind.REBUILT);
             assertThat(r.written()).isEqualTo(ALL.size());
             assertThat(s.ids()).containsExactlyElementsOf(ALL);
+        }
+    }
+
+    @Test
+    void aNoteWhoseHeaderBrokeKeepsItsLastGoodVersionThroughAReindexAndIsReported() throws IOException {
+        buildOnce();
+        Path victim = pack.resolve("notes/note-04.md");
+        String text = Files.readString(victim);
+        Files.writeString(victim, text.substring(0, text.indexOf("process:") - 3));
+        try (NotesStore s = NotesStore.open(stack(), index)) {
+            IndexReport r = s.reindex();
+            assertThat(r.kind()).isEqualTo(IndexReport.Kind.REBUILT);
+            assertThat(r.problems()).isEqualTo(1);
+            assertThat(s.problems()).extracting(p -> p.source()).containsExactly(victim.toString());
+            assertThat(s.ids()).containsExactlyElementsOf(ALL);
+            assertThat(s.get("note-04").orElseThrow().note().body()).contains("R4.5");
+            assertThat(s.search("R4.5", NoteFilters.none(), 3).hits()).extracting(NoteHit::id).contains("note-04");
+        }
+        try (NotesStore again = NotesStore.open(stack(), index)) {
+            assertThat(again.problems()).as("still reported after the reindex").hasSize(1);
+            assertThat(again.get("note-04").orElseThrow().note().body()).contains("R4.5");
+        }
+    }
+
+    @Test
+    void aBugInTheHitCodeSurfacesAndLeavesTheIndexAlone() throws IOException {
+        buildOnce();
+        List<Path> before = indexFiles();
+        NoteHits faulty = new NoteHits(NoteDocuments.facetsConfig()) {
+            @Override
+            NoteHit hit(FiledNote f, float score, Set<String> marks) {
+                throw new IllegalStateException("a bug in the hit code");
+            }
+        };
+        try (NotesStore s = NotesStore.open(stack(), index, faulty)) {
+            assertThat(s.report().kind()).isEqualTo(IndexReport.Kind.OPENED);
+            assertThatThrownBy(() -> s.search("bracket", NoteFilters.none(), 5))
+                    .isInstanceOf(IllegalStateException.class).hasMessageContaining("a bug in the hit code");
+            assertThat(s.report().kind()).as("no rebuild after the bug").isEqualTo(IndexReport.Kind.OPENED);
+        }
+        assertThat(indexFiles()).as("the index files are the ones written before").isEqualTo(before);
+        try (NotesStore s = NotesStore.open(stack(), index)) {
+            assertThat(s.report().kind()).isEqualTo(IndexReport.Kind.OPENED);
+            assertThat(s.search("bracket", NoteFilters.none(), 10).hits()).hasSize(ALL.size());
         }
     }
 }

@@ -54,6 +54,20 @@ class NotesStoreTest {
     }
 
     @Test
+    void aThousandWordQuerySearchesByItsFirstWordsInsteadOfFailing() {
+        // a pasted page: 1,000 words, several with multi-word synonyms; Lucene's graph analysis gave up
+        // ("Exceeded maximum recursion level") before the query was capped
+        StringBuilder page = new StringBuilder("shoulder fillet kt ");
+        String[] w = {"corner", "radius", "edge", "break", "seal", "groove", "shaft", "cr", "profile", "fillet"};
+        for (int i = 0; page.toString().split(" ").length < 1000; i++) page.append(w[i % w.length]).append(' ');
+        try (NotesStore store = open(TestPacks.stack(base()))) {
+            SearchResult r = store.search(page.toString(), NoteFilters.none(), 3);
+            assertThat(r.hits()).extracting(NoteHit::id).contains("shoulder-fatigue");
+            assertThat(r.query()).isEqualTo(page.toString());
+        }
+    }
+
+    @Test
     void aLongQueryOfWordsWithSynonymsStillSearches() {
         // six words, several with trade synonyms: the proximity phrase would expand past Lucene's
         // 1,024-clause limit (found by the typing-stall harness); the search runs without that boost
@@ -166,9 +180,9 @@ class NotesStoreTest {
     @Test
     void aLongSnippetStartsNearItsFirstHighlight() {
         String filler = "word ".repeat(120);
-        String snippet = NotesStore.trimSnippet(filler + "the **R0.5** fillet " + filler);
+        String snippet = NoteHits.trimSnippet(filler + "the **R0.5** fillet " + filler);
         assertThat(snippet).startsWith("… ").contains("**R0.5**").hasSizeLessThan(330);
-        assertThat(NotesStore.trimSnippet("short **one**")).isEqualTo("short **one**");
+        assertThat(NoteHits.trimSnippet("short **one**")).isEqualTo("short **one**");
     }
 
     @Test

@@ -5,7 +5,9 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import org.arcwright.io.InputProblem;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -184,21 +186,88 @@ class CrescentZoneTest {
 
     private record Separation(double distance, double[] where) {}
 
-    /** The largest distance from a point of {@code outer} to the polyline {@code inner} (directed Hausdorff). */
+    /**
+     * The largest distance from a point of {@code outer} to the polyline {@code inner} (directed
+     * Hausdorff), exact: each point's distance is the minimum over every segment of {@code inner}
+     * that could be nearer than the best found, found through a grid of the segments' bounding boxes
+     * (a segment whose box lies only in cells k or more rings away is at least (k - 1) cells away).
+     */
     private static Separation separation(List<double[]> outer, List<double[]> inner) {
+        SegmentGrid grid = new SegmentGrid(inner);
         double best = -1;
         double[] where = null;
         for (double[] p : outer) {
-            double d = Double.POSITIVE_INFINITY;
-            for (int i = 1; i < inner.size(); i++) {
-                d = Math.min(d, segmentDistance(p, inner.get(i - 1), inner.get(i)));
-            }
+            double d = grid.distance(p);
             if (d > best) {
                 best = d;
                 where = p;
             }
         }
         return new Separation(best, where);
+    }
+
+    /** The segments of a polyline filed by the grid cells their bounding boxes touch. */
+    private static final class SegmentGrid {
+        private final List<double[]> pts;
+        private final double x0;
+        private final double y0;
+        private final double cell;
+        private final Map<Long, List<Integer>> cells = new HashMap<>();
+
+        SegmentGrid(List<double[]> pts) {
+            this.pts = pts;
+            double minX = Double.POSITIVE_INFINITY, minY = Double.POSITIVE_INFINITY;
+            double maxX = Double.NEGATIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+            for (double[] p : pts) {
+                minX = Math.min(minX, p[0]);
+                minY = Math.min(minY, p[1]);
+                maxX = Math.max(maxX, p[0]);
+                maxY = Math.max(maxY, p[1]);
+            }
+            x0 = minX;
+            y0 = minY;
+            cell = Math.max(Math.hypot(maxX - minX, maxY - minY) / 256, 1e-9);
+            for (int i = 1; i < pts.size(); i++) {
+                double[] a = pts.get(i - 1);
+                double[] b = pts.get(i);
+                for (long cx = ix(Math.min(a[0], b[0])); cx <= ix(Math.max(a[0], b[0])); cx++) {
+                    for (long cy = iy(Math.min(a[1], b[1])); cy <= iy(Math.max(a[1], b[1])); cy++) {
+                        cells.computeIfAbsent(key(cx, cy), k -> new ArrayList<>()).add(i);
+                    }
+                }
+            }
+        }
+
+        private long ix(double x) {
+            return (long) Math.floor((x - x0) / cell);
+        }
+
+        private long iy(double y) {
+            return (long) Math.floor((y - y0) / cell);
+        }
+
+        private static long key(long cx, long cy) {
+            return (cx << 32) ^ (cy & 0xffffffffL);
+        }
+
+        /** The distance from {@code p} to the nearest segment, searching rings of cells outwards. */
+        double distance(double[] p) {
+            long px = ix(p[0]);
+            long py = iy(p[1]);
+            double best = Double.POSITIVE_INFINITY;
+            for (long ring = 0; ; ring++) {
+                if ((ring - 1) * cell >= best) return best;
+                for (long cx = px - ring; cx <= px + ring; cx++) {
+                    for (long cy = py - ring; cy <= py + ring; cy++) {
+                        if (Math.max(Math.abs(cx - px), Math.abs(cy - py)) != ring) continue;
+                        List<Integer> segs = cells.get(key(cx, cy));
+                        if (segs == null) continue;
+                        for (int i : segs) best = Math.min(best, segmentDistance(p, pts.get(i - 1), pts.get(i)));
+                    }
+                }
+                if (ring > 4 * 256 + 4) return best;
+            }
+        }
     }
 
     private static double segmentDistance(double[] p, double[] a, double[] b) {

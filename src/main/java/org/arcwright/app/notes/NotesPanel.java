@@ -30,7 +30,7 @@ import org.arcwright.notes.FiledNote;
 import org.arcwright.notes.Note;
 import org.arcwright.notes.NoteFacet;
 import org.arcwright.notes.NoteHit;
-import org.arcwright.notes.NotesStore;
+import org.arcwright.notes.NoteLibrary;
 import org.arcwright.notes.SearchResult;
 
 /**
@@ -44,7 +44,7 @@ public final class NotesPanel extends JPanel {
             NoteFacet.PACK);
     private final transient Executor background;
     private final transient Consumer<String> status;
-    private transient NotesStore store;
+    private transient NoteLibrary store;
     private transient NoteSearch search;
     private final JTextField query = new JTextField();
     private final DefaultListModel<NoteHit> hits = new DefaultListModel<>();
@@ -103,7 +103,7 @@ public final class NotesPanel extends JPanel {
     private final transient ExecutorService searchThread;
 
     /** Called once the notes store has opened; enables searching and lists every note. */
-    public void setStore(NotesStore s) {
+    public void setStore(NoteLibrary s) {
         this.store = s;
         this.search = new NoteSearch(q -> s.search(q.text(), q.filters(), q.limit()), searchThread,
                 r -> SwingUtilities.invokeLater(() -> show(r)));
@@ -170,7 +170,7 @@ public final class NotesPanel extends JPanel {
     private void opened(boolean adjusting) {
         NoteHit h = list.getSelectedValue();
         if (adjusting || h == null || store == null) return;
-        NotesStore s = store;
+        NoteLibrary s = store;
         java.util.concurrent.CompletableFuture.supplyAsync(() -> s.get(h.id()), background)
                 .whenComplete((n, e) -> SwingUtilities.invokeLater(() -> read(n.orElse(null))));
     }
@@ -195,7 +195,7 @@ public final class NotesPanel extends JPanel {
             status.accept("Note not saved: " + e.getMessage());
             return;
         }
-        NotesStore s = store;
+        NoteLibrary s = store;
         java.util.concurrent.CompletableFuture.supplyAsync(() -> s.save(note), background)
                 .whenComplete((f, e) -> SwingUtilities.invokeLater(() -> saved(f, e)));
     }
