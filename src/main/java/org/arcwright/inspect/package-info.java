@@ -14,7 +14,12 @@
  *   <li>{@link org.arcwright.inspect.CircleFits}: Taubin, geometric least squares, minimum zone.</li>
  *   <li>{@link org.arcwright.inspect.ProfileCheck}: Chebyshev registration of a profile zone over the
  *       free degrees of freedom; {@link org.arcwright.inspect.ControlledRadiusCheck}: local radius,
- *       flats and reversals; {@link org.arcwright.inspect.Blend}: separating the blend from the legs.</li>
+ *       flats and reversals, each local radius with its uncertainty; {@link org.arcwright.inspect.Blend}:
+ *       separating the blend from the legs; {@link org.arcwright.inspect.AdjacentSurfaces}: the surfaces
+ *       next to the blend, fitted to the points (robust orthogonal lines), on which R and CR zones are
+ *       built (ADR 0302).</li>
+ *   <li>{@link org.arcwright.inspect.Verdict}: pass, fail or indeterminate (ISO 14253-1 default rule
+ *       when an uncertainty is stated, or when a CR window's local radius straddles a limit).</li>
  *   <li>{@link org.arcwright.inspect.InspectionJson}: the JSON form of a result;
  *       {@link org.arcwright.inspect.PointExcesses}: each point's excess and the allowance it is
  *       read against, for the plot and the window alike.</li>

@@ -137,6 +137,19 @@ class FittedSurfacesTest {
     }
 
     @Test
+    void aBurrOnALegDoesNotTiltItsSurface() {
+        // Tukey's biweight (Beaton and Tukey 1974) gives points far beyond the scatter no weight: a
+        // 0.05 burr on four of leg A's points leaves the fitted line where the other points put it.
+        PointSet base = Sections.section(SQUARE, 2, 40, 400, 0.0005, 5, f -> 0);
+        double[] xs = base.x(), ys = base.y();
+        for (int i = 2; i < 6; i++) ys[i] -= 0.05;
+        InspectionResult r = inspector.inspect(Sections.request(SQUARE, 2, R, new PointSet(xs, ys, xs.length, "test")));
+        assertThat(r.surfaces().a().points()).isLessThanOrEqualTo(36);
+        assertThat(Math.abs(r.surfaces().a().direction().y())).isLessThan(3e-4);
+        assertThat(Math.abs(r.surfaces().a().point().y())).isLessThan(3e-4);
+    }
+
+    @Test
     void aLegWithTooFewPointsFallsBackToTheNominalWithANote() {
         PointSet pts = Sections.section(SQUARE, 2, 3, 400, 0, 1, f -> 0);
         InspectionResult r = inspector.inspect(Sections.request(SQUARE, 2, R, pts));
