@@ -51,6 +51,18 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
                     + "analysis or test to the governing code.",
             "Arcwright's readings of ASME Y14.5 and ISO 1101 are summaries, not the standards' text.");
 
+    /**
+     * The usual cautions in the words of the part's standard: ISO defines no controlled radius, so an
+     * ISO sheet points to a profile tolerance only.
+     */
+    public static List<String> usualCautions(DrawingStyle style) {
+        if (style == DrawingStyle.ASME) return USUAL_CAUTIONS;
+        List<String> iso = new ArrayList<>(USUAL_CAUTIONS);
+        iso.set(0, "A ± or limit radius bounds size only: flats, dips and a step at the tangent point can still pass. "
+                + "Where form or location matters, use a profile of a surface tolerance (ISO 1101).");
+        return List.copyOf(iso);
+    }
+
     /** Closing words of every sheet. */
     public static final String DEFERRAL = "This sheet is design guidance, not approval. Parts fail and people get hurt "
             + "when a stress-relief fillet is wrong: the governing standard (ASME Y14.5-2018 or ISO 1101 as the drawing "
@@ -189,7 +201,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
                     featureCautions, r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
                     fill(templates, "inspection-plan", ctx, f), inspection(f.inspection(), ctx), r.demoted(), ""));
         }
-        Set<String> cautions = new LinkedHashSet<>(USUAL_CAUTIONS);
+        Set<String> cautions = new LinkedHashSet<>(usualCautions(ws.standard()));
         SheetProblems.mixedGeneralTolerance(ws).ifPresent(cautions::add);
         for (Map.Entry<String, List<String>> e : byCaution.entrySet()) {
             cautions.add(String.join(", ", e.getValue()) + ": " + e.getKey());

@@ -198,7 +198,7 @@ public final class CalloutText {
     public String words(Callout c) {
         if (c instanceof Callout.Radius || c instanceof Callout.ControlledRadius) {
             String kind = c instanceof Callout.Radius ? "radius"
-                    : style == DrawingStyle.ISO ? "radius (smooth, without flats or reversals, by a company note: ISO defines no controlled radius)"
+                    : style == DrawingStyle.ISO ? "radius (smooth, without flats or reversals, by a company note that ISO does not define)"
                     : "controlled radius (fair curve, no flats or reversals)";
             double min = c instanceof Callout.Radius r ? r.min() : ((Callout.ControlledRadius) c).min();
             double max = c instanceof Callout.Radius r ? r.max() : ((Callout.ControlledRadius) c).max();
