@@ -153,13 +153,13 @@ final class FilletStressCommand implements Callable<Integer> {
         }
         out.printf("  %-10s %8s %7s %7s%s%n", "", "r (" + u + ")", "h/r", "Kt", kf ? String.format("%7s %7s", "q", "Kf") : "");
         if (c.hasTolerance()) {
-            row(out, "r min", r.atMin(), kf);
-            row(out, "nominal", r.atNominal(), kf);
-            row(out, "r max", r.atMax(), kf);
+            row(out, "r min", r.atMin(), kf, places(c));
+            row(out, "nominal", r.atNominal(), kf, places(c));
+            row(out, "r max", r.atMax(), kf, places(c));
             out.printf("  r min costs Kt %+.3f%s against nominal (%s %+.1f%%)%n", r.ktCostOfMinimum(),
                     kf ? String.format(" and Kf %+.3f", r.kfCostOfMinimum()) : "", kf ? "Kf" : "Kt", r.costPercent());
         } else {
-            row(out, "r", r.atNominal(), kf);
+            row(out, "r", r.atNominal(), kf, places(c));
         }
         for (MinimumRadius m : minima) out.println("  target     " + m.message());
         MinimumRadius g = governing(minima);
@@ -181,8 +181,13 @@ final class FilletStressCommand implements Callable<Integer> {
         for (String n : r.cautions()) out.println("  caution: " + n);
     }
 
-    private static void row(PrintWriter out, String label, StressPoint p, boolean kf) {
-        out.printf("  %-10s %8s %7s %7s%s%s%n", label, Numbers.fixed(p.r(), 3), Numbers.fixed(p.kt().hOverR(), 2),
+    /** Places for a radius in the file's units: an inch radius needs one more than a millimetre one. */
+    private static int places(FilletStressCase c) {
+        return c.units() == org.arcwright.tolerance.Units.INCH ? 4 : 3;
+    }
+
+    private static void row(PrintWriter out, String label, StressPoint p, boolean kf, int places) {
+        out.printf("  %-10s %8s %7s %7s%s%s%n", label, Numbers.fixed(p.r(), places), Numbers.fixed(p.kt().hOverR(), 2),
                 Numbers.fixed(p.kt().kt(), 3), kf ? String.format("%7s %7s", Numbers.fixed(p.q(), 3), Numbers.fixed(p.kf(), 3)) : "",
                 p.withinFit() ? "" : "   (extrapolated)");
     }

@@ -1,13 +1,11 @@
 package org.arcwright.render;
 
 import java.util.List;
-import org.arcwright.rules.NoteLink;
-import org.arcwright.templates.Figures;
 
 /**
- * The tolerancing sheet as Markdown. Frames are referenced as SVG files in a folder beside the
- * sheet (written by {@link SheetExporter}); the Unicode line of each callout is there as well, for
- * readers that show no images.
+ * Lays out the tolerancing sheet's blocks ({@link SheetContent#blocks()}) as Markdown. Frames are
+ * referenced as SVG files in a folder beside the sheet (written by {@link SheetExporter}); the
+ * Unicode line of each callout is there as well, for readers that show no images.
  */
 final class MarkdownSheet {
     private MarkdownSheet() {}
@@ -17,63 +15,58 @@ final class MarkdownSheet {
      */
     static String write(SheetContent s, String framesDir) {
         StringBuilder sb = new StringBuilder();
-        sb.append("# ").append(s.title()).append("\n\n");
-        for (SheetContent.Fact f : s.partFacts()) sb.append("- **").append(f.label()).append(":** ").append(esc(f.value())).append('\n');
-        sb.append("\n## Summary\n\n");
-        sb.append("| ID | Feature | Function | Control | Callout | Status |\n");
-        sb.append("|---|---|---|---|---|---|\n");
-        for (SheetContent.SummaryRow r : s.summary()) {
-            sb.append("| ").append(r.id()).append(" | ").append(cell(r.feature())).append(" | ").append(r.function())
-                    .append(" | ").append(cell(r.control())).append(" | `").append(r.callout().replace("|", "\\|"))
-                    .append("` | ").append(r.status()).append(" |\n");
-        }
-        if (!s.generalNotes().isEmpty()) {
-            sb.append("\n## General notes\n\n");
-            for (String n : s.generalNotes()) sb.append("```text\n").append(n).append("\n```\n\n");
-        }
-        for (SheetContent.FeatureSection f : s.features()) {
-            sb.append("\n## ").append(f.id()).append(" ").append(esc(f.heading())).append("\n\n");
-            sb.append("*").append(esc(f.caseLine())).append("*\n\n");
-            if (!f.decided()) {
-                sb.append("**Undecided:** no control is chosen for this feature yet.\n");
-                if (!f.suggestion().isEmpty()) {
-                    sb.append("\nThe advisor suggests (not chosen, to be reviewed): ").append(esc(f.suggestion())).append('\n');
-                }
-                if (!f.inspection().isEmpty()) sb.append("\nLast inspection: ").append(esc(f.inspection())).append('\n');
-                continue;
-            }
-            if (f.demoted()) sb.append("**Demoted:** the chosen control failed one of its checks; see the cautions.\n\n");
-            sb.append("**Callout:** ").append(esc(f.calloutWords())).append("\n\n");
-            sb.append("![").append(f.id()).append(" callout](").append(framesDir).append('/').append(f.id()).append(".svg)\n\n");
-            sb.append("```text\n").append(f.calloutUnicode()).append("\n```\n\n");
-            list(sb, "Why", f.because());
-            if (!f.figures().isEmpty()) {
-                sb.append("**Numbers**\n\n| Figure | Value |\n|---|---|\n");
-                for (Figures.Figure g : f.figures()) sb.append("| ").append(cell(g.label())).append(" | ").append(cell(g.value())).append(" |\n");
+        for (SheetBlock b : s.blocks()) {
+            if (b instanceof SheetBlock.Title t) {
+                sb.append("# ").append(t.text()).append("\n\n");
+            } else if (b instanceof SheetBlock.Facts f) {
+                for (SheetContent.Fact x : f.facts()) sb.append("- **").append(x.label()).append(":** ").append(esc(x.value())).append('\n');
+            } else if (b instanceof SheetBlock.Heading h) {
+                if (sb.length() > 0 && !sb.toString().endsWith("\n\n")) sb.append('\n');
+                sb.append("## ").append(h.anchor() == null ? h.text() : esc(h.text())).append("\n\n");
+            } else if (b instanceof SheetBlock.Subheading h) {
+                sb.append("**").append(h.text()).append("**\n\n");
+            } else if (b instanceof SheetBlock.Paragraph p) {
+                paragraph(sb, p);
+            } else if (b instanceof SheetBlock.Table t) {
+                table(sb, t);
+            } else if (b instanceof SheetBlock.Bullets l) {
+                for (String i : l.items()) sb.append("- ").append(esc(i)).append('\n');
                 sb.append('\n');
+            } else if (b instanceof SheetBlock.Preformatted p) {
+                sb.append("```text\n").append(p.text()).append("\n```\n\n");
+            } else if (b instanceof SheetBlock.Frame f) {
+                sb.append("![").append(f.featureId()).append(" callout](").append(framesDir).append('/').append(f.featureId())
+                        .append(".svg)\n\n```text\n").append(f.unicode()).append("\n```\n\n");
+            } else if (b instanceof SheetBlock.Cautions c) {
+                for (String i : c.items()) sb.append("- ").append(esc(i)).append('\n');
+                sb.append("\n").append(esc(c.deferral())).append("\n\n");
+            } else if (b instanceof SheetBlock.Colophon c) {
+                sb.append("*Made by ").append(c.generatedBy()).append(".*\n");
             }
-            list(sb, "Cautions", f.cautions());
-            list(sb, "References", f.references());
-            if (!f.notes().isEmpty()) {
-                sb.append("**Linked notes**\n\n");
-                for (NoteLink n : f.notes()) sb.append("- ").append(esc(n.title())).append(" (`").append(n.id()).append("`, ").append(esc(n.pack())).append(")\n");
-                sb.append('\n');
-            }
-            if (!f.drawingNote().isEmpty()) sb.append("**Drawing note**\n\n```text\n").append(f.drawingNote()).append("\n```\n\n");
-            if (!f.inspectionNote().isEmpty()) sb.append("**Inspection plan**\n\n```text\n").append(f.inspectionNote()).append("\n```\n\n");
-            if (!f.inspection().isEmpty()) sb.append("**Last inspection:** ").append(esc(f.inspection())).append("\n\n");
         }
-        sb.append("\n## Cautions\n\n");
-        for (String c : s.cautions()) sb.append("- ").append(esc(c)).append('\n');
-        sb.append("\n").append(esc(s.deferral())).append("\n\n");
-        sb.append("*Made by ").append(s.generatedBy()).append(".*\n");
         return sb.toString();
     }
 
-    private static void list(StringBuilder sb, String title, List<String> items) {
-        if (items.isEmpty()) return;
-        sb.append("**").append(title).append("**\n\n");
-        for (String i : items) sb.append("- ").append(esc(i)).append('\n');
+    private static void paragraph(StringBuilder sb, SheetBlock.Paragraph p) {
+        if (p.tone() == SheetBlock.Tone.CASE) {
+            sb.append('*').append(esc(p.text())).append("*\n\n");
+            return;
+        }
+        if (!p.lead().isEmpty()) sb.append("**").append(p.lead()).append("** ");
+        sb.append(esc(p.text())).append("\n\n");
+    }
+
+    private static void table(StringBuilder sb, SheetBlock.Table t) {
+        sb.append("| ").append(String.join(" | ", t.header())).append(" |\n|");
+        sb.append("---|".repeat(t.header().size())).append('\n');
+        for (List<String> row : t.rows()) {
+            sb.append('|');
+            for (int i = 0; i < row.size(); i++) {
+                String cell = row.get(i);
+                sb.append(' ').append(i == t.codeColumn() ? "`" + cell.replace("|", "\\|") + "`" : cell(cell)).append(" |");
+            }
+            sb.append('\n');
+        }
         sb.append('\n');
     }
 

@@ -14,8 +14,6 @@ import org.apache.pdfbox.pdmodel.PDPage;
 import org.apache.pdfbox.pdmodel.PDPageContentStream;
 import org.apache.pdfbox.pdmodel.common.PDRectangle;
 import org.apache.pdfbox.pdmodel.font.PDType0Font;
-import org.arcwright.rules.NoteLink;
-import org.arcwright.templates.Figures;
 
 /**
  * The tolerancing sheet as a PDF (PDFBox): A4 pages, text in the embedded DejaVu Sans, frames as
@@ -54,25 +52,16 @@ final class PdfSheet {
             info.setProducer(s.generatedBy());
             info.setCreationDate(null);
             newPage();
-            heading(s.title(), 15f);
-            for (SheetContent.Fact f : s.partFacts()) paragraph(f.label() + ": " + f.value(), BODY, 0);
-            heading("Summary", 12f);
-            summary(s);
-            if (!s.generalNotes().isEmpty()) {
-                heading("General notes", 12f);
-                for (String n : s.generalNotes()) block(n);
-            }
+            List<SheetBlock> blocks = s.blocks();
             int done = 0;
             int total = s.features().size();
-            for (SheetContent.FeatureSection f : s.features()) {
-                progress.update(done, total, "PDF page for " + f.id());
-                feature(f, frames.get(f.id()));
-                done++;
+            for (SheetBlock b : blocks) {
+                if (b instanceof SheetBlock.Heading h && h.anchor() != null) {
+                    progress.update(done++, total, "PDF page for " + h.anchor());
+                    need(80);
+                }
+                block(b, frames);
             }
-            heading("Cautions", 12f);
-            for (String c : s.cautions()) bullet(c);
-            space(4);
-            paragraph(s.deferral(), BODY, 0);
             closeAll();
             footers(s);
             ByteArrayOutputStream out = new ByteArrayOutputStream();
@@ -83,43 +72,41 @@ final class PdfSheet {
         }
     }
 
-    private void feature(SheetContent.FeatureSection f, CalloutDrawing frame) throws IOException {
-        need(80);
-        heading(f.id() + " " + f.heading(), 12f);
-        paragraph(f.caseLine(), BODY - 1, 0);
-        if (!f.decided()) {
-            paragraph("Undecided: no control is chosen for this feature yet.", BODY, 0);
-            if (!f.suggestion().isEmpty()) {
-                paragraph("The advisor suggests (not chosen, to be reviewed): " + f.suggestion(), BODY - 1, 10);
+    /** Lays out one block of the sheet's text. */
+    private void block(SheetBlock b, Map<String, CalloutDrawing> frames) throws IOException {
+        if (b instanceof SheetBlock.Title t) {
+            heading(t.text(), 15f);
+        } else if (b instanceof SheetBlock.Facts f) {
+            for (SheetContent.Fact x : f.facts()) paragraph(x.label() + ": " + x.value(), BODY, 0);
+        } else if (b instanceof SheetBlock.Heading h) {
+            heading(h.text(), 12f);
+        } else if (b instanceof SheetBlock.Subheading h) {
+            subheading(h.text());
+        } else if (b instanceof SheetBlock.Paragraph p) {
+            String text = p.lead().isEmpty() ? p.text() : p.lead() + " " + p.text();
+            paragraph(text, p.tone() == SheetBlock.Tone.CASE ? BODY - 1 : BODY, 0);
+        } else if (b instanceof SheetBlock.Table t) {
+            if (t.header().size() == 2) {
+                for (List<String> row : t.rows()) row2(row.get(0), row.get(1));
+            } else {
+                table(t);
             }
-            if (!f.inspection().isEmpty()) paragraph("Last inspection: " + f.inspection(), BODY, 0);
-            return;
+        } else if (b instanceof SheetBlock.Bullets l) {
+            for (String i : l.items()) bullet(i);
+        } else if (b instanceof SheetBlock.Preformatted p) {
+            block(p.text());
+        } else if (b instanceof SheetBlock.Frame f) {
+            paragraph(f.plain(), BODY, 10);
+            CalloutDrawing d = frames.get(f.featureId());
+            if (d != null) drawFrame(d);
+        } else if (b instanceof SheetBlock.Cautions c) {
+            for (String i : c.items()) bullet(i);
+            space(4);
+            paragraph(c.deferral(), BODY, 0);
+        } else if (b instanceof SheetBlock.Colophon c) {
+            space(4);
+            paragraph("Made by " + c.generatedBy() + ".", BODY - 1.5f, 0);
         }
-        if (f.demoted()) paragraph("Demoted: the chosen control failed one of its checks; see the cautions.", BODY, 0);
-        paragraph("Callout: " + f.calloutPlain().replace("\n", " / "), BODY, 0);
-        paragraph(f.calloutWords(), BODY - 1, 10);
-        if (frame != null) drawFrame(frame);
-        listSection("Why", f.because());
-        if (!f.figures().isEmpty()) {
-            subheading("Numbers");
-            for (Figures.Figure g : f.figures()) row2(g.label(), g.value());
-        }
-        listSection("Cautions", f.cautions());
-        listSection("References", f.references());
-        if (!f.notes().isEmpty()) {
-            List<String> notes = new ArrayList<>();
-            for (NoteLink n : f.notes()) notes.add(n.title() + " (" + n.id() + ", " + n.pack() + ")");
-            listSection("Linked notes", notes);
-        }
-        if (!f.drawingNote().isEmpty()) {
-            subheading("Drawing note");
-            block(f.drawingNote());
-        }
-        if (!f.inspectionNote().isEmpty()) {
-            subheading("Inspection plan");
-            block(f.inspectionNote());
-        }
-        if (!f.inspection().isEmpty()) paragraph("Last inspection: " + f.inspection(), BODY, 0);
     }
 
     // ---- layout primitives ---------------------------------------------------------------------
@@ -211,43 +198,51 @@ final class PdfSheet {
         y -= 4;
     }
 
-    private void summary(SheetContent s) throws IOException {
-        float[] cols = {MARGIN, MARGIN + 28, MARGIN + 190, MARGIN + 255, MARGIN + 340, MARGIN + 445};
-        String[] head = {"ID", "Feature", "Function", "Control", "Callout", "Status"};
+    /** A table with columns as wide as its weights share of the text width. */
+    private void table(SheetBlock.Table t) throws IOException {
+        int n = t.header().size();
+        float[] cols = new float[n];
+        int sum = t.weights().stream().mapToInt(Integer::intValue).sum();
+        float x = MARGIN;
+        for (int i = 0; i < n; i++) {
+            cols[i] = x;
+            x += width() * t.weights().get(i) / sum;
+        }
         float size = BODY - 1.5f;
         need(size * 3);
-        y -= size * LEADING;
-        for (int i = 0; i < head.length; i++) text(head[i], cols[i], y, size);
-        y -= 3;
+        tableRow(t.header(), cols, size);
         cs.setLineWidth(0.4f);
         cs.moveTo(MARGIN, y);
         cs.lineTo(MARGIN + width(), y);
         cs.stroke();
-        for (SheetContent.SummaryRow r : s.summary()) {
-            String[] cells = {r.id(), r.feature(), r.function(), r.control(), r.callout(), r.status()};
-            List<List<String>> wrapped = new ArrayList<>();
-            int lines = 1;
-            for (int i = 0; i < cells.length; i++) {
-                float w = (i + 1 < cols.length ? cols[i + 1] : MARGIN + width()) - cols[i] - 4;
-                List<String> l = wrap(cells[i], size, w);
-                wrapped.add(l);
-                lines = Math.max(lines, l.size());
-            }
-            need(lines * size * LEADING + 4);
-            float top = y;
-            for (int i = 0; i < cells.length; i++) {
-                float yy = top;
-                for (String l : wrapped.get(i)) {
-                    yy -= size * LEADING;
-                    text(l, cols[i], yy, size);
-                }
-            }
-            y = top - lines * size * LEADING - 3;
+        for (List<String> row : t.rows()) {
+            tableRow(row, cols, size);
             cs.setLineWidth(0.2f);
             cs.moveTo(MARGIN, y);
             cs.lineTo(MARGIN + width(), y);
             cs.stroke();
         }
+    }
+
+    private void tableRow(List<String> cells, float[] cols, float size) throws IOException {
+        List<List<String>> wrapped = new ArrayList<>();
+        int lines = 1;
+        for (int i = 0; i < cells.size(); i++) {
+            float w = (i + 1 < cols.length ? cols[i + 1] : MARGIN + width()) - cols[i] - 4;
+            List<String> l = wrap(cells.get(i), size, w);
+            wrapped.add(l);
+            lines = Math.max(lines, l.size());
+        }
+        need(lines * size * LEADING + 4);
+        float top = y;
+        for (int i = 0; i < cells.size(); i++) {
+            float yy = top;
+            for (String l : wrapped.get(i)) {
+                yy -= size * LEADING;
+                text(l, cols[i], yy, size);
+            }
+        }
+        y = top - lines * size * LEADING - 3;
     }
 
     private void drawFrame(CalloutDrawing d) throws IOException {

@@ -51,6 +51,18 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
                     + "analysis or test to the governing code.",
             "Arcwright's readings of ASME Y14.5 and ISO 1101 are summaries, not the standards' text.");
 
+    /**
+     * The usual cautions in the words of the part's standard: ISO defines no controlled radius, so an
+     * ISO sheet points to a profile tolerance only.
+     */
+    public static List<String> usualCautions(DrawingStyle style) {
+        if (style == DrawingStyle.ASME) return USUAL_CAUTIONS;
+        List<String> iso = new ArrayList<>(USUAL_CAUTIONS);
+        iso.set(0, "A ± or limit radius bounds size only: flats, dips and a step at the tangent point can still pass. "
+                + "Where form or location matters, use a profile of a surface tolerance (ISO 1101).");
+        return List.copyOf(iso);
+    }
+
     /** Closing words of every sheet. */
     public static final String DEFERRAL = "This sheet is design guidance, not approval. Parts fail and people get hurt "
             + "when a stress-relief fillet is wrong: the governing standard (ASME Y14.5-2018 or ISO 1101 as the drawing "
@@ -67,8 +79,17 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
     /** A labelled fact. */
     public record Fact(String label, String value) {}
 
-    /** One row of the summary table. */
-    public record SummaryRow(String id, String feature, String function, String control, String callout, String status) {}
+    /**
+     * One row of the summary table.
+     *
+     * @param problems every open problem of the feature, in words (empty when none)
+     */
+    public record SummaryRow(String id, String feature, String function, String control, String callout, String status,
+                             List<String> problems) {
+        public SummaryRow {
+            problems = List.copyOf(problems);
+        }
+    }
 
     /**
      * One feature's section.
@@ -131,7 +152,8 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
         if (p.revision() != null) facts.add(new Fact("Revision", p.revision()));
         facts.add(new Fact("Standard", ws.standard() == DrawingStyle.ASME ? "ASME Y14.5-2018" : "ISO 1101 / ISO 129-1"));
         facts.add(new Fact("Units", ws.units() == Units.MM ? "millimetres" : "inches"));
-        facts.add(new Fact("Title block", CalloutText.tableText(ws.titleBlock().table(), ws.titleBlock().toleranceClass())));
+        facts.add(new Fact("Title block", CalloutText.tableText(ws.titleBlock().table(), ws.titleBlock().toleranceClass())
+                + (SheetProblems.mixedGeneralTolerance(ws).isPresent() ? " (another standard's table: see the cautions)" : "")));
         long decided = ws.features().stream().filter(f -> f.chosen() != null).count();
         facts.add(new Fact("Features", ws.features().size() + " (" + decided + " decided, "
                 + (ws.features().size() - decided) + " undecided)"));
@@ -151,8 +173,9 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
             Recommendation r = f.chosen();
             String status = r == null ? "undecided" : f.status().label() + (r.demoted() ? " (demoted)" : "");
             rows.add(new SummaryRow(f.id(), heading, c.function().key(),
-                    r == null ? "—" : CalloutText.controlName(r.callout()),
-                    r == null ? "undecided" : text.line(r.callout(), false).replace("\n", " / "), status));
+                    r == null ? "—" : CalloutText.controlName(r.callout(), ws.standard()),
+                    r == null ? "undecided" : text.line(r.callout(), false).replace("\n", " / "), status,
+                    SheetProblems.of(f, ws)));
             String caseLine = c.kind().key() + ", " + c.function().key() + ", "
                     + (c.loading() == org.arcwright.model.Loading.NONE ? "no service load" : c.loading().key() + " loading")
                     + ", "
@@ -178,7 +201,8 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
                     featureCautions, r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
                     fill(templates, "inspection-plan", ctx, f), inspection(f.inspection(), ctx), r.demoted(), ""));
         }
-        Set<String> cautions = new LinkedHashSet<>(USUAL_CAUTIONS);
+        Set<String> cautions = new LinkedHashSet<>(usualCautions(ws.standard()));
+        SheetProblems.mixedGeneralTolerance(ws).ifPresent(cautions::add);
         for (Map.Entry<String, List<String>> e : byCaution.entrySet()) {
             cautions.add(String.join(", ", e.getValue()) + ": " + e.getKey());
         }
@@ -206,5 +230,80 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
         List<Map<String, Object>> figs = ctx.figures(i.figures());
         for (Map<String, Object> m : figs) sb.append("; ").append(m.get("label")).append(' ').append(m.get("value"));
         return sb.toString();
+    }
+
+    /** The sheet's text as blocks in reading order: the one model every writer lays out. */
+    public List<SheetBlock> blocks() {
+        List<SheetBlock> b = new ArrayList<>();
+        b.add(new SheetBlock.Title(title));
+        b.add(new SheetBlock.Facts(partFacts));
+        b.add(new SheetBlock.Heading("Summary", null));
+        List<List<String>> rows = new ArrayList<>();
+        for (SummaryRow r : summary) {
+            rows.add(List.of(r.id(), r.feature(), r.function(), r.control(), r.callout(), r.status(),
+                    r.problems().isEmpty() ? "none" : String.join("; ", r.problems())));
+        }
+        b.add(new SheetBlock.Table(List.of("ID", "Feature", "Function", "Control", "Callout", "Status", "Open problems"),
+                rows, 4, 0, List.of(5, 24, 13, 15, 20, 12, 30)));
+        if (!generalNotes.isEmpty()) {
+            b.add(new SheetBlock.Heading("General notes", null));
+            for (String n : generalNotes) b.add(new SheetBlock.Preformatted(n));
+        }
+        for (FeatureSection f : features) featureBlocks(f, b);
+        b.add(new SheetBlock.Heading("Cautions", null));
+        b.add(new SheetBlock.Cautions(cautions, deferral));
+        b.add(new SheetBlock.Colophon(generatedBy));
+        return List.copyOf(b);
+    }
+
+    private void featureBlocks(FeatureSection f, List<SheetBlock> b) {
+        b.add(new SheetBlock.Heading(f.id() + " " + f.heading(), f.id()));
+        b.add(new SheetBlock.Paragraph("", f.caseLine(), SheetBlock.Tone.CASE));
+        SummaryRow row = summary.stream().filter(r -> r.id().equals(f.id())).findFirst().orElse(null);
+        if (row != null && !row.problems().isEmpty()) {
+            b.add(new SheetBlock.Paragraph("Open problems:", String.join("; ", row.problems()) + ".", SheetBlock.Tone.ALERT));
+        }
+        if (!f.decided()) {
+            b.add(new SheetBlock.Paragraph("Undecided:", "no control is chosen for this feature yet.", SheetBlock.Tone.WARNING));
+            if (!f.suggestion().isEmpty()) {
+                b.add(new SheetBlock.Paragraph("", "The advisor suggests (not chosen, to be reviewed): " + f.suggestion(),
+                        SheetBlock.Tone.PLAIN));
+            }
+            if (!f.inspection().isEmpty()) b.add(new SheetBlock.Paragraph("Last inspection:", f.inspection(), SheetBlock.Tone.PLAIN));
+            return;
+        }
+        if (f.demoted()) {
+            b.add(new SheetBlock.Paragraph("Demoted:", "the chosen control failed one of its checks; see the cautions.",
+                    SheetBlock.Tone.ALERT));
+        }
+        b.add(new SheetBlock.Paragraph("Callout:", f.calloutWords(), SheetBlock.Tone.PLAIN));
+        b.add(new SheetBlock.Frame(f.id(), f.calloutPlain().replace("\n", " / "), f.calloutUnicode()));
+        list(b, "Why", f.because());
+        if (!f.figures().isEmpty()) {
+            b.add(new SheetBlock.Subheading("Numbers"));
+            List<List<String>> rows = new ArrayList<>();
+            for (Figures.Figure g : f.figures()) rows.add(List.of(g.label(), g.value()));
+            b.add(new SheetBlock.Table(List.of("Figure", "Value"), rows, -1, -1, List.of(45, 55)));
+        }
+        list(b, "Cautions", f.cautions());
+        list(b, "References", f.references());
+        List<String> notes = new ArrayList<>();
+        for (NoteLink n : f.notes()) notes.add(n.title() + " (" + n.id() + ", " + n.pack() + ")");
+        list(b, "Linked notes", notes);
+        if (!f.drawingNote().isEmpty()) {
+            b.add(new SheetBlock.Subheading("Drawing note"));
+            b.add(new SheetBlock.Preformatted(f.drawingNote()));
+        }
+        if (!f.inspectionNote().isEmpty()) {
+            b.add(new SheetBlock.Subheading("Inspection plan"));
+            b.add(new SheetBlock.Preformatted(f.inspectionNote()));
+        }
+        if (!f.inspection().isEmpty()) b.add(new SheetBlock.Paragraph("Last inspection:", f.inspection(), SheetBlock.Tone.PLAIN));
+    }
+
+    private static void list(List<SheetBlock> b, String title, List<String> items) {
+        if (items.isEmpty()) return;
+        b.add(new SheetBlock.Subheading(title));
+        b.add(new SheetBlock.Bullets(items));
     }
 }

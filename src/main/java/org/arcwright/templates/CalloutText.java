@@ -68,6 +68,16 @@ public final class CalloutText {
         return "general tolerance";
     }
 
+    /**
+     * The name of the control in the words of {@code style}: ISO defines neither a controlled radius
+     * nor a composite frame, so under ISO those are named for what the drawing then shows.
+     */
+    public static String controlName(Callout c, DrawingStyle style) {
+        if (style == DrawingStyle.ISO && c instanceof Callout.ControlledRadius) return "radius, smooth blend by company note";
+        if (style == DrawingStyle.ISO && c instanceof Callout.CompositeProfile) return "profile of a surface, stacked frames";
+        return controlName(c);
+    }
+
     /** The text of an R or CR dimension as drawn, e.g. {@code R2 ±0.2} or {@code CR1.8-2.2}. */
     public String radius(Callout c) {
         if (c instanceof Callout.Radius r) return style.formatLimits(RadiusKind.R, units, r.min(), r.max(), r.nominal());
@@ -187,7 +197,9 @@ public final class CalloutText {
     /** The callout in words, for reasoning and reviews. */
     public String words(Callout c) {
         if (c instanceof Callout.Radius || c instanceof Callout.ControlledRadius) {
-            String kind = c instanceof Callout.Radius ? "radius" : "controlled radius (fair curve, no flats or reversals)";
+            String kind = c instanceof Callout.Radius ? "radius"
+                    : style == DrawingStyle.ISO ? "radius (smooth, without flats or reversals, by a company note that ISO does not define)"
+                    : "controlled radius (fair curve, no flats or reversals)";
             double min = c instanceof Callout.Radius r ? r.min() : ((Callout.ControlledRadius) c).min();
             double max = c instanceof Callout.Radius r ? r.max() : ((Callout.ControlledRadius) c).max();
             String[] pair = limits(min, max);
@@ -212,7 +224,8 @@ public final class CalloutText {
             return sb.toString();
         }
         Callout.CompositeProfile cp = (Callout.CompositeProfile) c;
-        StringBuilder sb = new StringBuilder("composite profile of a surface");
+        StringBuilder sb = new StringBuilder(style == DrawingStyle.ISO ? "profile of a surface in stacked frames"
+                : "composite profile of a surface");
         for (int t = 0; t < cp.tiers().size(); t++) {
             ProfileTier tier = cp.tiers().get(t);
             sb.append(t == 0 ? ": " : "; ").append(t == 0 ? "locating zone " : "refining zone ")

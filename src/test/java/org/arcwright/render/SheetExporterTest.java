@@ -51,6 +51,38 @@ class SheetExporterTest {
                 "crescent width", "0.1657 mm", "governing standard", "licensed engineering judgement", "page 1 of");
         // the frame's own text is real text in the PDF, not only outlines
         assertThat(text).contains("0.06", "CR2 ±0.2");
+        Golden.assertMatches("sheets/tarnbeck-output-shaft.pdf.txt", text.replace("\r\n", "\n"));
+    }
+
+    @Test
+    void everyFormatStatesEachFeaturesOpenProblems(@TempDir Path dir) throws Exception {
+        // F1 shows "measured: pass" while its CR2 ±0.2 gives Kt 1.94 against the target 1.6 stated on the same sheet.
+        SheetContent content = exporter.content(demo, templates, "t");
+        SheetContent.SummaryRow f1 = content.summary().get(0);
+        assertThat(f1.status()).isEqualTo("measured: pass");
+        assertThat(f1.problems()).anySatisfy(p -> assertThat(p).contains("stress target not met"));
+        assertThat(content.summary().get(4).problems()).contains("no control chosen");
+        Path pdf = dir.resolve("s.pdf");
+        exporter.export(demo, templates, "t", pdf, null);
+        String pdfText;
+        try (PDDocument doc = Loader.loadPDF(pdf.toFile())) {
+            pdfText = new PDFTextStripper().getText(doc).replaceAll("\\s+", " ");
+        }
+        for (String text : List.of(exporter.markdown(content, "x"), exporter.html(content, null), pdfText)) {
+            assertThat(text).contains("stress target not met").contains("Open problems")
+                    .contains("Standards mixed: the part is drawn to ASME Y14.5-2018 but its title block invokes ISO 2768");
+        }
+    }
+
+    @Test
+    void everyRadiusCarriesItsOwnCalloutOnlyWhenEveryFeatureIsDecided() {
+        // Four of five features decided: the edge note must not claim every radius has its own callout.
+        SheetContent content = exporter.content(demo, templates, "t");
+        assertThat(String.join("\n", content.generalNotes())).doesNotContain("EVERY RADIUS CARRIES ITS OWN CALLOUT");
+        // Only F1-F3, each with its own callout: now the claim is true and stated.
+        PartWorksheet decided = demo.withoutFeature("F4").withoutFeature("F5");
+        assertThat(String.join("\n", exporter.content(decided, templates, "t").generalNotes()))
+                .contains("EVERY RADIUS CARRIES ITS OWN CALLOUT");
     }
 
     @Test

@@ -1,0 +1,113 @@
+package org.arcwright.render;
+
+import java.math.BigDecimal;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.Optional;
+import org.arcwright.callout.Callout;
+import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.rules.DesignCase;
+import org.arcwright.rules.Recommendation;
+import org.arcwright.tolerance.DrawingStyle;
+import org.arcwright.tolerance.RadiusKind;
+import org.arcwright.worksheet.InspectionRecord;
+import org.arcwright.worksheet.PartWorksheet;
+import org.arcwright.worksheet.RadiusFeature;
+
+/**
+ * The open problems of a feature that a sheet must never hide behind a status such as
+ * "measured: pass": a stress target the chosen limits miss, a mating part that does not seat, an
+ * inspection judged against another callout (or against one it did not record), a feature drawn to
+ * another standard or in other units than the part, a demoted or missing choice.
+ */
+final class SheetProblems {
+    private SheetProblems() {}
+
+    /** Every open problem of {@code f} on the sheet of {@code ws}, in words; empty when there are none. */
+    static List<String> of(RadiusFeature f, PartWorksheet ws) {
+        List<String> out = new ArrayList<>();
+        DesignCase c = f.designCase();
+        if (c.standard() != ws.standard()) {
+            out.add("standard mixed: the feature is drawn to " + name(c.standard()) + ", the part to " + name(ws.standard()));
+        }
+        if (c.units() != ws.units()) {
+            out.add("units mixed: the feature is in " + c.units().symbol() + ", the part in " + ws.units().symbol());
+        }
+        Recommendation r = f.chosen();
+        if (r == null) {
+            out.add("no control chosen");
+            if (f.inspection() != null) out.add("inspected before a control was chosen");
+            return out;
+        }
+        Map<String, Object> n = r.numbers();
+        Double ktMin = number(n.get("ktAtMin"));
+        Double ktTarget = number(n.get("targetKt"));
+        if (ktMin != null && ktTarget != null && ktMin > ktTarget) {
+            out.add("stress target not met: Kt " + plain(ktMin) + " at the smallest radius against the target " + plain(ktTarget));
+        }
+        Double kfMin = number(n.get("kfAtMin"));
+        Double kfTarget = number(n.get("targetKf"));
+        if (kfMin != null && kfTarget != null && kfMin > kfTarget) {
+            out.add("stress target not met: Kf " + plain(kfMin) + " at the smallest radius against the target " + plain(kfTarget));
+        }
+        if (Boolean.FALSE.equals(n.get("seats"))) {
+            Double margin = number(n.get("seatingMargin"));
+            out.add("seating not met: the largest fillet fouls the mating corner"
+                    + (margin == null ? "" : " by " + plain(-margin) + " " + c.units().symbol()));
+        }
+        if (r.demoted()) out.add("the chosen control failed one of its checks (demoted)");
+        InspectionRecord i = f.inspection();
+        if (i != null) {
+            Object judged = i.figures().get("callout");
+            if (judged == null) {
+                out.add("the inspection does not record which callout it judged: re-inspect against the chosen one");
+            } else if (!sameCallout(String.valueOf(judged), r.callout())) {
+                out.add("inspected against another callout (" + judged + ")");
+            }
+        }
+        return out;
+    }
+
+    /**
+     * A caution when the part is drawn to ASME Y14.5 but its title block invokes ISO 2768 general
+     * tolerances: ASME Y14.5 does not define them, so the drawing must say which standard governs
+     * the untoleranced sizes (common practice).
+     */
+    static Optional<String> mixedGeneralTolerance(PartWorksheet ws) {
+        String table = ws.titleBlock().table();
+        if (ws.standard() == DrawingStyle.ASME && table != null && table.toLowerCase(Locale.ROOT).startsWith("iso2768")) {
+            return Optional.of("Standards mixed: the part is drawn to ASME Y14.5-2018 but its title block invokes ISO 2768 "
+                    + "general tolerances, which ASME Y14.5 does not define. State on the drawing that ISO 2768 governs the "
+                    + "untoleranced sizes (and which table applies to radii), or give general tolerances in ASME terms; "
+                    + "company practice decides.");
+        }
+        return Optional.empty();
+    }
+
+    /** Whether an inspection record's callout text names the chosen callout. */
+    private static boolean sameCallout(String judged, Callout chosen) {
+        if (chosen instanceof Callout.Radius r) return judged.equals(new InspectionCallout.RadiusLimits(RadiusKind.R, r.min(), r.max()).describe());
+        if (chosen instanceof Callout.ControlledRadius r) {
+            return judged.equals(new InspectionCallout.RadiusLimits(RadiusKind.CR, r.min(), r.max()).describe());
+        }
+        if (chosen instanceof Callout.Profile p) return judged.startsWith("profile " + plain(p.zone()));
+        if (chosen instanceof Callout.CompositeProfile cp) {
+            return judged.startsWith("composite profile") && judged.contains(plain(cp.tiers().get(0).zone()));
+        }
+        return false;
+    }
+
+    private static String name(DrawingStyle s) {
+        return s == DrawingStyle.ASME ? "ASME Y14.5" : "ISO";
+    }
+
+    private static Double number(Object o) {
+        return o instanceof Number v ? v.doubleValue() : null;
+    }
+
+    private static String plain(double v) {
+        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+    }
+}

@@ -1,0 +1,142 @@
+package org.arcwright.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
+
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * An inch twin of a millimetre run for every command: the same part written in inches (1 in =
+ * 25.4 mm exactly, ISO 31-1 / NIST SP 811) must give the same answer, reported in inches, with no
+ * length read in the wrong unit. Clearance's twins live in {@link ClearanceCommandTest}.
+ */
+class InchTwinsTest {
+    private static final double MM = 25.4;
+    private final ObjectMapper json = new ObjectMapper();
+
+    @TempDir
+    Path dir;
+
+    private JsonNode run(String... args) throws Exception {
+        CliRun r = CliRun.of(args);
+        assertThat(r.exitCode()).as(String.join(" ", args) + "\n" + r.err()).isIn(0, 1);
+        return json.readTree(r.out());
+    }
+
+    @Test
+    void limits() throws Exception {
+        // R.120 +.012/+.004 in is R3.048 +0.3048/+0.1016 mm: zone 2 × 0.3048 × (√2 − 1) mm (worked by hand).
+        JsonNode in = run("limits", "R.120 +.012/+.004", "--units", "in", "--format", "json");
+        JsonNode mm = run("limits", "R3.048 +0.3048/+0.1016", "--format", "json");
+        assertThat(in.get("units").asText()).isEqualTo("in");
+        assertThat(in.get("profileZone").asDouble() * MM).isCloseTo(mm.get("profileZone").asDouble(), within(1e-9));
+        assertThat(in.get("profileZoneShortcut").asDouble() * MM).isCloseTo(0.6096, within(1e-9));
+    }
+
+    @Test
+    void generalTolerance() throws Exception {
+        // ISO 2768-1 Table 2, class m, over 3 up to 6 mm: ±0.5 mm; 0.1575 in = 4.0 mm, so ±0.5/25.4 in.
+        JsonNode in = run("general-tolerance", "--class", "m", "--radius", "0.1575", "--units", "in", "--format", "json");
+        assertThat(in.get("toleranceUnits").asText()).isEqualTo("in");
+        assertThat(in.get("tolerance").asDouble()).isCloseTo(0.5 / MM, within(1e-12));
+    }
+
+    @Test
+    void filletStress() throws Exception {
+        // Kt depends on ratios only (Peterson's charts are dimensionless), so the inch twin gives the same Kt.
+        ObjectNode c = (ObjectNode) json.readTree(Path.of("examples/mechanics/drive-shaft-fillet.json").toFile());
+        JsonNode mm = run("fillet-stress", "examples/mechanics/drive-shaft-fillet.json", "--format", "json");
+        c.put("units", "in");
+        for (String k : new String[] {"D", "d", "rMin", "rMax"}) c.put(k, c.get(k).asDouble() / MM);
+        Path f = dir.resolve("in.json");
+        Files.writeString(f, c.toString());
+        JsonNode in = run("fillet-stress", f.toString(), "--format", "json");
+        assertThat(in.get("units").asText()).isEqualTo("in");
+        assertThat(in.at("/atNominal/kt").asDouble()).isCloseTo(mm.at("/atNominal/kt").asDouble(), within(1e-9));
+        assertThat(in.at("/atNominal/r").asDouble() * MM).isCloseTo(mm.at("/atNominal/r").asDouble(), within(1e-9));
+    }
+
+    @Test
+    void inspect() throws Exception {
+        ObjectNode c = (ObjectNode) json.readTree(Path.of("examples/inspect/bracket-round-r.json").toFile());
+        JsonNode mm = run("inspect", "examples/inspect/bracket-round-r.json", "--format", "json");
+        c.put("units", "in");
+        c.put("nominalRadius", c.get("nominalRadius").asDouble() / MM);
+        c.put("resolution", c.get("resolution").asDouble() / MM);
+        ObjectNode callout = (ObjectNode) c.get("callout");
+        callout.put("min", callout.get("min").asDouble() / MM).put("max", callout.get("max").asDouble() / MM);
+        for (JsonNode p : c.get("points")) {
+            ArrayNode a = (ArrayNode) p;
+            a.set(0, json.getNodeFactory().numberNode(a.get(0).asDouble() / MM));
+            a.set(1, json.getNodeFactory().numberNode(a.get(1).asDouble() / MM));
+        }
+        Path f = dir.resolve("in.json");
+        Files.writeString(f, c.toString());
+        JsonNode in = run("inspect", f.toString(), "--format", "json");
+        assertThat(in.get("units").asText()).isEqualTo("in");
+        assertThat(in.get("verdict").asText()).isEqualTo(mm.get("verdict").asText());
+        assertThat(in.at("/envelope/smallest").asDouble() * MM).isCloseTo(mm.at("/envelope/smallest").asDouble(), within(1e-6));
+    }
+
+    @Test
+    void render() throws Exception {
+        // ASME Y14.5 writes inch values below one without the leading zero (common practice).
+        Path f = dir.resolve("in.json");
+        Files.writeString(f, "{\"units\":\"in\",\"standard\":\"asme\",\"callout\":{\"type\":\"profile\",\"zone\":0.004,\"outward\":0.001}}");
+        CliRun r = CliRun.of("render", f.toString());
+        assertThat(r.exitCode()).isZero();
+        assertThat(r.out()).contains(".004 (U) .001").doesNotContain("0.004");
+    }
+
+    private Path inchWorksheet() throws Exception {
+        ObjectNode ws = (ObjectNode) json.readTree(Path.of("examples/tarnbeck-output-shaft-decided.arcpart").toFile());
+        ws.put("units", "in");
+        for (JsonNode f : ws.get("features")) ((ObjectNode) f.get("case")).put("units", "in");
+        Path f = dir.resolve("part-in.arcpart");
+        Files.writeString(f, ws.toString());
+        return f;
+    }
+
+    @Test
+    void drawingNote() throws Exception {
+        CliRun r = CliRun.of("drawing-note", "title-block-notes", inchWorksheet().toString(), "--no-settings");
+        assertThat(r.exitCode()).isZero();
+        assertThat(r.out()).contains("DIMENSIONS ARE IN INCHES").doesNotContain("MILLIMETRES");
+    }
+
+    @Test
+    void sheet() throws Exception {
+        Path out = dir.resolve("part.md");
+        CliRun r = CliRun.of("sheet", inchWorksheet().toString(), "--out", out.toString(), "--no-settings", "--no-suggest");
+        assertThat(r.exitCode()).as(r.err()).isZero();
+        String md = Files.readString(out);
+        assertThat(md).contains("**Units:** inches").doesNotContain("units mixed");
+    }
+
+    @Test
+    void advise() throws Exception {
+        ObjectNode c = (ObjectNode) json.readTree(Path.of("examples/advisor/gear-seat-shoulder.json").toFile());
+        JsonNode mm = run("advise", "examples/advisor/gear-seat-shoulder.json", "--format", "json", "--no-settings");
+        c.put("units", "in");
+        c.put("nominalRadius", 2.0 / MM);
+        ObjectNode s = (ObjectNode) c.get("stress");
+        s.put("D", 42 / MM).put("d", 35 / MM);
+        c.remove("tolerance");
+        Path f = dir.resolve("in.json");
+        Files.writeString(f, c.toString());
+        JsonNode in = run("advise", f.toString(), "--format", "json", "--no-settings");
+        double ktMm = mm.at("/recommendations/0/numbers/ktAtMin").asDouble();
+        double ktIn = in.at("/recommendations/0/numbers/ktAtMin").asDouble();
+        // Limits are rounded to the units' places, so Kt agrees to the rounding of r (0.0001 in), not exactly.
+        assertThat(ktIn).isCloseTo(ktMm, within(0.01));
+        assertThat(in.at("/recommendations/0/numbers/min").asDouble() * MM)
+                .isCloseTo(mm.at("/recommendations/0/numbers/min").asDouble(), within(0.01));
+    }
+}
