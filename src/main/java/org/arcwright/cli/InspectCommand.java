@@ -52,6 +52,7 @@ final class InspectCommand implements Callable<Integer> {
         if (plot != null) {
             String name = plot.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
             if (!name.endsWith(".png") && !name.endsWith(".svg")) throw InputProblem.ofField("--plot", "give a .png or .svg file name");
+            org.arcwright.io.OutputFiles.requireWritable(plot, "--plot", file);
         }
         InspectionRequest req = new InspectionFiles(new JsonFiles()).read(file).withCompare(compare);
         if (window != null) req = req.withWindow(window);

@@ -79,6 +79,7 @@ import org.apache.lucene.store.LockObtainFailedException;
 import org.apache.lucene.util.Bits;
 import org.apache.lucene.util.QueryBuilder;
 import org.arcwright.io.AtomicFiles;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackLayer;
 import org.arcwright.pack.PackStack;
@@ -821,6 +822,8 @@ public final class NotesStore implements Closeable {
 
     private static Loaded load(SourceScan.Entry e) {
         try {
+            InputFiles.requireInside(e.path(), e.pack().root());
+            InputFiles.requireRegular(e.path(), InputFiles.TEXT_LIMIT);
             byte[] bytes = Files.readAllBytes(e.path());
             String text = decode(bytes, e.path());
             Note note = NoteFormat.parse(text, e.path().toString());

@@ -32,7 +32,7 @@ public final class GeneralToleranceTables {
         JsonFiles json = new JsonFiles();
         List<GeneralToleranceTable> tables = new ArrayList<>();
         for (PackStack.PackFile f : stack.files("tables", ".json")) {
-            var tree = json.readTree(f.path());
+            var tree = json.readPackObject(f.path(), f.pack().root());
             if (!"general-tolerance".equals(tree.path("kind").asText())) continue;
             var obj = ((com.fasterxml.jackson.databind.node.ObjectNode) tree.deepCopy());
             obj.remove("kind");

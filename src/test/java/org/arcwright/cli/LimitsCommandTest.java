@@ -74,7 +74,7 @@ class LimitsCommandTest {
             "R0 ±0.05   | --angle=90 | greater than zero",
             "CR 2.0-1.5 | --angle=90 | min 2.0 is greater than max 1.5",
             "R NaN      | --angle=90 | NaN",
-            "R0.5 ±0.1  | --angle=NaN | between 0 and 180",
+            "R0.5 ±0.1  | --angle=NaN | not a finite number",
             "R0.5 ±0.1  | --angle=180 | between 0 and 180",
     })
     void badInputExitsWithTwoAndAClearMessage(String text, String angle, String message) {
