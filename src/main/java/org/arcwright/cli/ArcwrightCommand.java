@@ -24,11 +24,15 @@ import picocli.CommandLine.Command;
                 SheetCommand.class,
                 picocli.CommandLine.HelpCommand.class
         },
-        footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage.",
+        footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage, 70 internal error (a fault in Arcwright).",
                 "Design guidance only: defer to the governing standard, your company's practice and licensed engineering judgement."})
 public final class ArcwrightCommand implements Runnable {
     @picocli.CommandLine.Spec
     picocli.CommandLine.Model.CommandSpec spec;
+
+    @picocli.CommandLine.Option(names = Cli.DEBUG, scope = picocli.CommandLine.ScopeType.INHERIT,
+            description = "On an internal error, also print the stack trace to report.")
+    boolean debug;
 
     @Override
     public void run() {

@@ -16,6 +16,13 @@ public final class Cli {
     public static final int BAD_INPUT = 2;
     /** An inspection verdict neither pass nor fail can be proven (measurement uncertainty straddles a limit). */
     public static final int INDETERMINATE = 3;
+    /**
+     * A fault in Arcwright itself, never in the input (the BSD {@code EX_SOFTWARE} code): kept apart
+     * from 1 so that a crash is never read as a verdict of fail.
+     */
+    public static final int INTERNAL_ERROR = 70;
+    /** The option, inherited by every command, that shows an internal error's stack trace. */
+    static final String DEBUG = "--debug";
 
     private Cli() {}
 
@@ -36,29 +43,63 @@ public final class Cli {
         cl.setCaseInsensitiveEnumValuesAllowed(true);
         cl.registerConverter(Double.class, Cli::decimal);
         cl.registerConverter(double.class, Cli::decimal);
+        cl.setExecutionStrategy(Cli::executeKnown);
         cl.setExecutionExceptionHandler((ex, commandLine, parseResult) -> {
             Throwable t = ex;
             while (!(t instanceof InputProblem) && t.getCause() != null && t.getCause() != t) t = t.getCause();
             if (t instanceof InputProblem p) {
-                commandLine.getErr().println("arcwright " + commandLine.getCommandName() + ": " + p.getMessage());
+                commandLine.getErr().println(prefix(commandLine) + p.getMessage());
                 return BAD_INPUT;
             }
             if (ex instanceof java.io.UncheckedIOException || ex instanceof java.io.IOException) {
-                commandLine.getErr().println("arcwright " + commandLine.getCommandName() + ": " + ex.getMessage());
+                commandLine.getErr().println(prefix(commandLine) + ex.getMessage());
                 return BAD_INPUT;
             }
-            throw ex;
+            commandLine.getErr().println(prefix(commandLine) + "internal error: this is a fault in Arcwright, not in "
+                    + "your input; no result was produced. Run again with " + DEBUG + " for the details to report.");
+            if (parseResult != null && debugAsked(parseResult)) ex.printStackTrace(commandLine.getErr());
+            return INTERNAL_ERROR;
         });
         cl.setParameterExceptionHandler((ex, args) -> {
             CommandLine c = ex.getCommandLine();
-            c.getErr().println("arcwright: " + ex.getMessage());
+            c.getErr().println(prefix(c) + ex.getMessage());
             if (!CommandLine.UnmatchedArgumentException.printSuggestions(ex, c.getErr())) {
-                c.getErr().println("Try 'arcwright " + (c.getCommandName().equals("arcwright") ? "" : c.getCommandName() + " ")
-                        + "--help' for usage.");
+                c.getErr().println("Try '" + qualifiedName(c) + " --help' for usage.");
             }
             return BAD_INPUT;
         });
         return cl;
+    }
+
+    /**
+     * Runs the last command given, but refuses words no command took first: picocli would otherwise
+     * print the top help for {@code arcwright zone --help} and exit 0 for a command that does not exist.
+     */
+    private static int executeKnown(CommandLine.ParseResult parseResult) {
+        CommandLine.ParseResult last = parseResult;
+        while (last.hasSubcommand()) last = last.subcommand();
+        if (!last.unmatched().isEmpty()) {
+            throw new CommandLine.UnmatchedArgumentException(last.commandSpec().commandLine(), last.unmatched());
+        }
+        return new CommandLine.RunLast().execute(parseResult);
+    }
+
+    private static boolean debugAsked(CommandLine.ParseResult parseResult) {
+        for (CommandLine.ParseResult r = parseResult; r != null; r = r.hasSubcommand() ? r.subcommand() : null) {
+            if (r.hasMatchedOption(DEBUG)) return true;
+        }
+        return false;
+    }
+
+    /** {@code arcwright pack check: }, naming the command as the user typed it. */
+    static String prefix(CommandLine c) {
+        return qualifiedName(c) + ": ";
+    }
+
+    private static String qualifiedName(CommandLine c) {
+        StringBuilder sb = new StringBuilder(c.getCommandName());
+        for (CommandLine p = c.getParent(); p != null; p = p.getParent()) sb.insert(0, p.getCommandName() + " ");
+        return sb.toString();
     }
 
     /** Runs the command line on {@code args} with the process's streams; returns the exit code. */

@@ -47,6 +47,7 @@ final class FilletStressCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
+        if (plot != null) org.arcwright.io.OutputFiles.requireWritable(plot, "--plot", file);
         PetersonFits fits = PetersonFits.published();
         FilletStressAnalysis analysis = new FilletStressAnalysis(new StressConcentration(fits), new NotchSensitivity());
         MechanicsFiles.FilletStressJob job = new MechanicsFiles(new JsonFiles(), fits).readFilletStress(file);

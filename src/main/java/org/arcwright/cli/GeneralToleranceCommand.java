@@ -65,7 +65,7 @@ final class GeneralToleranceCommand implements Callable<Integer> {
         if (size <= 0) throw org.arcwright.io.InputProblem.ofField(field, "must be greater than zero, got " + size);
         PackStack stack = packs.load("general-tolerance", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
-        GeneralToleranceTables tables = GeneralToleranceTables.load(stack.files("tables", ".json").stream().map(PackStack.PackFile::path).toList());
+        GeneralToleranceTables tables = GeneralToleranceTables.load(stack.files("tables", ".json").stream().map(f -> new GeneralToleranceTables.TableFile(f.path(), f.pack().root())).toList());
         GeneralToleranceTable table = tableId == null ? tables.iso(q) : tables.require(tableId);
         double sizeMm = size * u.millimetres();
         GeneralTolerance t;

@@ -58,6 +58,7 @@ final class InspectCommand implements Callable<Integer> {
         if (plot != null) {
             String name = plot.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
             if (!name.endsWith(".png") && !name.endsWith(".svg")) throw InputProblem.ofField("--plot", "give a .png or .svg file name");
+            org.arcwright.io.OutputFiles.requireWritable(plot, "--plot", file);
         }
         if (window != null && !Double.isFinite(window)) throw InputProblem.ofField("--window", "must be a finite length, got " + window);
         if (uncertainty != null && !Double.isFinite(uncertainty)) throw InputProblem.ofField("--uncertainty", "must be a finite length, got " + uncertainty);

@@ -48,7 +48,7 @@ final class NoteCommand implements Callable<Integer> {
             Path file = Path.of(template);
             if (!Files.isRegularFile(file)) throw new InputProblem(template, 0, 0, null, "file not found");
             String name = file.getFileName().toString().replace(NoteTemplates.EXTENSION, "");
-            NoteTemplate t = NoteTemplate.compile(name, Files.readString(file), file.toString(), "command line");
+            NoteTemplate t = NoteTemplate.compile(name, org.arcwright.io.InputFiles.readText(file), file.toString(), "command line");
             templates = new NoteTemplates(List.of(t));
             template = name;
         }

@@ -41,6 +41,7 @@ final class RenderCommand implements Callable<Integer> {
             throw org.arcwright.io.InputProblem.ofField("--dpi", "must be between " + PngPainter.MIN_DPI + " and "
                     + PngPainter.MAX_DPI + ", got " + dpi);
         }
+        if (out != null) org.arcwright.io.OutputFiles.requireWritable(out, "--out", file);
         RenderRequest r = RenderRequest.read(file, new JsonFiles());
         FrameRenderer renderer = FrameRenderer.withBundledFont();
         PrintWriter pw = spec.commandLine().getOut();

@@ -42,6 +42,7 @@ final class SheetCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SheetExporter.Format.of(out);
+        org.arcwright.io.OutputFiles.requireWritable(out, "--out", part);
         PackStack stack = packs.load("sheet", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         NoteTemplates templates = NoteTemplates.load(stack);

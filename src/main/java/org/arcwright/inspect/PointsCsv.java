@@ -3,12 +3,11 @@ package org.arcwright.inspect;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Arrays;
 import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -17,7 +16,8 @@ import org.arcwright.io.InputProblem;
  * whose fields are all words without a digit ({@code x,y}); a first line such as {@code 2.O3,0.0004}
  * is a mistyped point, not a header. Blank lines and lines starting with {@code #} are skipped. Any
  * other line that is not two finite numbers ({@link DecimalText}) is an error naming the line, column
- * and field.
+ * and field, never quoting the line: a {@code pointsFile} may name any file the user can read, and its content must not leak
+ * into a message (or a log, or a shared report) when it is not a points file.
  */
 public final class PointsCsv {
     private PointsCsv() {}
@@ -29,7 +29,7 @@ public final class PointsCsv {
         int n = 0;
         int lineNo = 0;
         boolean seenData = false;
-        try (BufferedReader r = Files.newBufferedReader(file, StandardCharsets.UTF_8)) {
+        try (BufferedReader r = InputFiles.openText(file, InputFiles.CSV_LIMIT)) {
             String line;
             while ((line = r.readLine()) != null) {
                 lineNo++;
@@ -37,11 +37,11 @@ public final class PointsCsv {
                 if (t.isEmpty() || t.startsWith("#")) continue;
                 int comma = t.indexOf(',');
                 if (comma < 0) {
-                    throw new InputProblem(src, lineNo, 1, null, "expected two comma-separated values x,y, got '" + clip(t) + "'");
+                    throw new InputProblem(src, lineNo, 1, null, "expected two comma-separated values x,y; not a points file?");
                 }
                 int comma2 = t.indexOf(',', comma + 1);
                 if (comma2 >= 0) {
-                    throw new InputProblem(src, lineNo, comma2 + 1, null, "expected two values x,y, found more: '" + clip(t) + "'");
+                    throw new InputProblem(src, lineNo, comma2 + 1, null, "expected two values x,y, found more");
                 }
                 String fx = t.substring(0, comma).strip(), fy = t.substring(comma + 1).strip();
                 if (!seenData && n == 0 && isWord(fx) && isWord(fy)) {
@@ -84,9 +84,8 @@ public final class PointsCsv {
         try {
             return DecimalText.parseFinite(s);
         } catch (NumberFormatException e) {
-            throw new InputProblem(src, line, col, field, e.getMessage());
+            throw new InputProblem(src, line, col, field, "not a finite decimal number (such as 0.25 or 1e-3)");
         }
     }
 
-    private static String clip(String s) { return s.length() > 40 ? s.substring(0, 40) + "..." : s; }
 }

@@ -62,6 +62,15 @@ public final class JsonFiles {
         return parse(InputFiles.readPackText(file, packFolder), file.toString(), type);
     }
 
+    /** A JSON object a practice pack supplies (a table), read from inside {@code packFolder} only. */
+    public com.fasterxml.jackson.databind.node.ObjectNode readPackObject(Path file, Path packFolder) {
+        JsonNode tree = readPackFile(file, packFolder, JsonNode.class);
+        if (!tree.isObject()) {
+            throw new InputProblem(file.toString(), 1, 1, null, "expected a JSON object {...} at the top of the file");
+        }
+        return (com.fasterxml.jackson.databind.node.ObjectNode) tree;
+    }
+
     /** Parses text as the given type, attributing errors to {@code source}; a bare {@code null} is refused. */
     public <T> T parse(String text, String source, Class<T> type) {
         if (text.isBlank()) {
@@ -116,7 +125,26 @@ public final class JsonFiles {
                     .collect(Collectors.joining("."))
                     .replace(".[", "[");
         }
+        if (field == null && e.getProcessor() instanceof JsonParser p && p.getParsingContext() != null) {
+            field = pointerToField(p.getParsingContext().pathAsPointer().toString());
+        }
         return new InputProblem(source, line, col, field, cleanMessage(e), e);
+    }
+
+    /** {@code /features/0/chosen} as {@code features[0].chosen}; null for the top level. */
+    private static String pointerToField(String pointer) {
+        if (pointer == null || pointer.isEmpty() || pointer.equals("/")) return null;
+        StringBuilder sb = new StringBuilder();
+        for (String part : pointer.substring(1).split("/", -1)) {
+            String p = part.replace("~1", "/").replace("~0", "~");
+            if (!p.isEmpty() && p.chars().allMatch(Character::isDigit)) {
+                sb.append('[').append(p).append(']');
+            } else {
+                if (sb.length() > 0) sb.append('.');
+                sb.append(p);
+            }
+        }
+        return sb.length() == 0 ? null : sb.toString();
     }
 
     private static final Pattern FROM_VALUE = Pattern.compile("from (\\w+) value");
@@ -157,7 +185,7 @@ public final class JsonFiles {
     }
 
     private static String parseMessage(String msg) {
-        String m = msg;
+        String m = msg.replaceAll(" \\(code \\d+\\)", "");
         if (m.contains("'NaN'") || m.contains("Infinity") || m.contains("ALLOW_NON_NUMERIC_NUMBERS")) {
             return "NaN and Infinity are not numbers here; give a finite number";
         }
@@ -167,7 +195,16 @@ public final class JsonFiles {
             int q2 = q < 0 ? -1 : m.indexOf('\'', q + 1);
             return "field " + (q2 > q ? m.substring(q, q2 + 1) : "") + " given twice";
         }
-        if (m.contains("ALLOW_SINGLE_QUOTES")) return "text must be in double quotes";
+        if (m.contains("ALLOW_SINGLE_QUOTES") || m.startsWith("Unexpected character (''')")) {
+            return "text must be in double quotes";
+        }
+        if (m.startsWith("Unexpected character") && m.contains("expected a valid value")) {
+            int q = m.indexOf("('");
+            int q2 = q < 0 ? -1 : m.indexOf("')", q);
+            String ch = q2 > q ? m.substring(q + 2, q2) : "?";
+            return "unexpected '" + ch + "' where a value should be (text in double quotes, a number, a list, an "
+                    + "object, true, false or null)";
+        }
         if (m.contains("ALLOW_COMMENTS")) return "comments are not allowed in JSON";
         if (m.contains("ALLOW_TRAILING_COMMA") || m.contains("was expecting double-quote to start field name")) {
             return "expected a field name in double quotes (a trailing comma?)";

@@ -70,9 +70,9 @@ public record BearingSeatTable(String id, String title, String source, String un
         JsonFiles json = new JsonFiles();
         BearingSeatTable found = null;
         for (PackStack.PackFile f : stack.files("tables", ".json")) {
-            var tree = json.readTree(f.path());
+            ObjectNode tree = json.readPackObject(f.path(), f.pack().root());
             if (!KIND.equals(tree.path("kind").asText())) continue;
-            ObjectNode obj = (ObjectNode) tree.deepCopy();
+            ObjectNode obj = tree.deepCopy();
             obj.remove("kind");
             BearingSeatTable t = json.convert(obj, f.path().toString(), BearingSeatTable.class);
             if (t.id().equals(id)) found = t;

@@ -43,6 +43,7 @@ import org.apache.lucene.search.TermQuery;
 import org.apache.lucene.search.TopDocs;
 import org.apache.lucene.store.Directory;
 import org.apache.lucene.util.Bits;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -320,6 +321,8 @@ final class NoteSync {
 
     private static Loaded load(SourceScan.Entry e) {
         try {
+            InputFiles.requireInside(e.path(), e.pack().root());
+            InputFiles.requireRegular(e.path(), InputFiles.TEXT_LIMIT);
             byte[] bytes = Files.readAllBytes(e.path());
             String text = decode(bytes, e.path());
             Note note = NoteFormat.parse(text, e.path().toString());

@@ -33,7 +33,7 @@ public record PracticePack(PackManifest manifest, Path root, PackLayer layer) {
             throw new InputProblem(manifest.toString(), 0, 0, null,
                     "missing pack.json: a practice pack needs one with at least a name");
         }
-        return new PracticePack(json.read(manifest, PackManifest.class), dir, layer);
+        return new PracticePack(json.readPackFile(manifest, dir, PackManifest.class), dir, layer);
     }
 
     public String name() { return manifest.name(); }

@@ -19,6 +19,9 @@ public record RenderRequest(Units units, DrawingStyle standard, Callout callout)
     public RenderRequest(@JsonProperty(value = "units", required = true) Units units,
                          @JsonProperty(value = "standard", required = true) DrawingStyle standard,
                          @JsonProperty(value = "callout", required = true) Callout callout) {
+        if (units == null) throw new IllegalArgumentException("units is null; use mm or in");
+        if (standard == null) throw new IllegalArgumentException("standard is null; use asme or iso");
+        if (callout == null) throw new IllegalArgumentException("callout is null; give the callout to draw");
         this.units = units;
         this.standard = standard;
         this.callout = callout;

@@ -12,8 +12,6 @@ import com.fasterxml.jackson.dataformat.csv.CsvSchema;
 import java.io.IOException;
 import java.io.Reader;
 import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -52,7 +50,7 @@ public final class CaseTable {
         mapper.enable(CsvParser.Feature.SKIP_EMPTY_LINES);
         CsvSchema schema = CsvSchema.emptySchema().withHeader().withComments();
         List<Row> rows = new ArrayList<>();
-        try (Reader reader = Files.newBufferedReader(file, StandardCharsets.UTF_8);
+        try (Reader reader = org.arcwright.io.InputFiles.openText(file, org.arcwright.io.InputFiles.CSV_LIMIT);
              MappingIterator<Map<String, String>> it = mapper.readerFor(Map.class).with(schema).readValues(reader)) {
             CsvSchema header = null;
             while (true) {

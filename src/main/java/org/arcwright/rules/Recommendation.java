@@ -26,6 +26,16 @@ public record Recommendation(String ruleId, Callout callout, String text, double
                              List<String> trace, List<NoteLink> notes, boolean demoted) {
 
     public Recommendation {
+        // a saved worksheet may have lost a field: say which, rather than fail later on a null
+        if (callout == null) throw new IllegalArgumentException("callout is missing; a chosen control needs its callout");
+        if (because == null || cautions == null || references == null || numbers == null || trace == null
+                || notes == null) {
+            throw new IllegalArgumentException("because, cautions, references, numbers, trace and notes must be "
+                    + "present (they may be empty: [] or {})");
+        }
+        for (int i = 0; i < notes.size(); i++) {
+            if (notes.get(i) == null) throw new IllegalArgumentException("notes[" + i + "] is null; expected a note link");
+        }
         because = List.copyOf(because);
         cautions = List.copyOf(cautions);
         references = List.copyOf(references);

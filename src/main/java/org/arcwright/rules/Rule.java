@@ -11,7 +11,7 @@ import java.util.List;
  *
  * @param id unique across the packs in force; a later pack replaces it only by declaring an override
  * @param summary one line saying what the rule recommends
- * @param when the conditions on case facts
+ * @param when the conditions on case facts; required ({@code {}} for a rule that applies to every case)
  * @param recommend the control and how to size it
  * @param weight rank among the rules that fire, 1 to 1000, higher first
  * @param because the reasoning, in the engineer's words
@@ -38,13 +38,17 @@ public record Rule(String id, String summary, When when, CalloutPlan recommend, 
             throw new IllegalArgumentException("id must be lower-case letters, digits, dots and hyphens, got '" + id + "'");
         }
         if (summary == null || summary.isBlank()) throw new IllegalArgumentException("summary must not be blank");
+        if (when == null) {
+            throw new IllegalArgumentException("when is missing or null; a rule that applies to every case says so "
+                    + "with \"when\": {}");
+        }
         if (weight < 1 || weight > 1000) throw new IllegalArgumentException("weight must be 1 to 1000, got " + weight);
         if (because == null || because.isEmpty()) {
             throw new IllegalArgumentException("because must give the reasoning: at least one sentence");
         }
         this.id = id;
         this.summary = summary;
-        this.when = when == null ? When.ALWAYS : when;
+        this.when = when;
         this.recommend = recommend;
         this.weight = weight;
         this.because = List.copyOf(because);
@@ -58,6 +62,10 @@ public record Rule(String id, String summary, When when, CalloutPlan recommend, 
     public record File(List<Rule> rules) {
         @JsonCreator
         public File(@JsonProperty(value = "rules", required = true) List<Rule> rules) {
+            if (rules == null) throw new IllegalArgumentException("rules must be a list of rules, got null");
+            for (int i = 0; i < rules.size(); i++) {
+                if (rules.get(i) == null) throw new IllegalArgumentException("rules[" + i + "] is null; expected a rule");
+            }
             this.rules = List.copyOf(rules);
         }
     }

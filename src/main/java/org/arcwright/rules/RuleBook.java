@@ -74,9 +74,9 @@ public final class RuleBook {
         Map<String, CapabilityTable> capabilityTables = new LinkedHashMap<>();
         for (PackStack.PackFile f : stack.files("tables", ".json")) {
             try {
-                JsonNode tree = json.readTree(f.path());
+                ObjectNode tree = json.readPackObject(f.path(), f.pack().root());
                 if (!"process-capability".equals(tree.path("kind").asText())) continue;
-                ObjectNode obj = ((ObjectNode) tree).deepCopy();
+                ObjectNode obj = tree.deepCopy();
                 obj.remove("kind");
                 CapabilityTable t = json.convert(obj, f.path().toString(), CapabilityTable.class);
                 capabilityTables.put(t.id(), t);
@@ -87,7 +87,7 @@ public final class RuleBook {
         CapabilityTable capability = capabilityTables.get(CapabilityTable.DEFAULT_ID);
         GeneralToleranceTables general;
         try {
-            general = GeneralToleranceTables.load(stack.files("tables", ".json").stream().map(PackStack.PackFile::path).toList());
+            general = GeneralToleranceTables.load(stack.files("tables", ".json").stream().map(f -> new GeneralToleranceTables.TableFile(f.path(), f.pack().root())).toList());
         } catch (InputProblem p) {
             problems.add(p);
             general = new GeneralToleranceTables(List.<GeneralToleranceTable>of());
@@ -108,7 +108,7 @@ public final class RuleBook {
         for (Path file : pack.files("rules", ".json")) {
             Rule.File rf;
             try {
-                rf = json.read(file, Rule.File.class);
+                rf = json.readPackFile(file, pack.root(), Rule.File.class);
             } catch (InputProblem p) {
                 problems.add(p);
                 continue;

@@ -19,6 +19,9 @@ public final class NoteTemplate {
             .defaultValue("")
             .strictSections(false);
 
+    /** Longest note a template may produce, in characters: a drawing note is a few pages at most. */
+    static final int MAX_OUTPUT = 1 << 20;
+
     private final String name;
     private final String source;
     private final String pack;
@@ -58,10 +61,46 @@ public final class NoteTemplate {
 
     /** Fills the template from a context made by {@link NoteContext}. */
     public String fill(Map<String, Object> context) {
+        java.io.StringWriter out = new java.io.StringWriter();
         try {
-            return compiled.execute(context);
+            compiled.execute(context, new BoundedWriter(out));
+            return out.toString();
+        } catch (BoundedWriter.TooLong e) {
+            throw new InputProblem(source, 0, 0, null, "the filled note would be longer than " + MAX_OUTPUT
+                    + " characters; a drawing note is far shorter (a list repeated inside another?)");
         } catch (MustacheException e) {
+            if (e.getCause() instanceof BoundedWriter.TooLong) {
+                throw new InputProblem(source, 0, 0, null, "the filled note would be longer than " + MAX_OUTPUT
+                        + " characters; a drawing note is far shorter (a list repeated inside another?)");
+            }
             throw new InputProblem(source, 0, 0, null, "could not fill the template: " + e.getMessage(), e);
+        }
+    }
+
+    /** A writer that stops a note growing past {@link #MAX_OUTPUT}. */
+    private static final class BoundedWriter extends java.io.Writer {
+        private final java.io.StringWriter out;
+        private long written;
+
+        BoundedWriter(java.io.StringWriter out) { this.out = out; }
+
+        @Override
+        public void write(char[] buf, int off, int len) {
+            written += len;
+            if (written > MAX_OUTPUT) throw new TooLong();
+            out.write(buf, off, len);
+        }
+
+        @Override
+        public void flush() {}
+
+        @Override
+        public void close() {}
+
+        private static final class TooLong extends RuntimeException {
+            private static final long serialVersionUID = 1L;
+
+            TooLong() { super(null, null, false, false); }
         }
     }
 

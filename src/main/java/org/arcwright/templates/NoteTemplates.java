@@ -1,8 +1,6 @@
 package org.arcwright.templates;
 
 import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.charset.MalformedInputException;
 import java.nio.file.Files;
 import java.util.ArrayList;
 import java.util.Collections;
@@ -41,13 +39,7 @@ public final class NoteTemplates {
             String file = f.path().getFileName().toString();
             String name = file.substring(0, file.length() - EXTENSION.length());
             String text;
-            try {
-                text = Files.readString(f.path());
-            } catch (MalformedInputException e) {
-                throw new InputProblem(f.path().toString(), 0, 0, null, "not UTF-8 text");
-            } catch (IOException e) {
-                throw new UncheckedIOException("could not read " + f.path(), e);
-            }
+            text = org.arcwright.io.InputFiles.readPackText(f.path(), f.pack().root());
             out.add(NoteTemplate.compile(name, text, f.path().toString(), f.pack().name()));
         }
         return new NoteTemplates(out);

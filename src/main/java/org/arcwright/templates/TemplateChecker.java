@@ -18,7 +18,15 @@ final class TemplateChecker {
     /** What the check learnt about a valid template. */
     record Result(Set<String> fields, boolean perFeature) {}
 
-    private record Open(String name, int line, int column) {}
+    private record Open(String name, int line, int column, boolean list) {}
+
+    /** Sections nested deeper than this are refused: a drawing note needs a handful; thousands overflow the stack. */
+    static final int MAX_DEPTH = 24;
+    /**
+     * List sections nested deeper than this are refused: each repeats what it holds for every item, so
+     * nesting multiplies the note's length (eleven nested feature lists made 97 MB).
+     */
+    static final int MAX_LIST_DEPTH = 3;
 
     private TemplateChecker() {}
 
@@ -58,7 +66,28 @@ final class TemplateChecker {
                     FieldSchema s = resolve(name, scopes, root, source, line, column);
                     if (scopes.size() == 1 && name.split("\\.")[0].equals("feature")) perFeature = true;
                     used.add(name);
-                    open.push(new Open(name, line, column));
+                    boolean list = sigil == '#' && s.kind() == FieldSchema.Kind.LIST;
+                    if (open.size() >= MAX_DEPTH) {
+                        throw new InputProblem(source, line, column, name, "sections nested more than " + MAX_DEPTH
+                                + " deep; a drawing note needs far fewer");
+                    }
+                    if (list) {
+                        int lists = 1;
+                        for (Open o : open) {
+                            if (!o.list()) continue;
+                            lists++;
+                            if (o.name().equals(name)) {
+                                throw new InputProblem(source, line, column, name, "list section opened inside itself "
+                                        + "(at line " + o.line() + "); each item would repeat the whole list");
+                            }
+                        }
+                        if (lists > MAX_LIST_DEPTH) {
+                            throw new InputProblem(source, line, column, name, "list sections nested more than "
+                                    + MAX_LIST_DEPTH + " deep; each repeats its text for every item, so the note "
+                                    + "would grow beyond use");
+                        }
+                    }
+                    open.push(new Open(name, line, column, list));
                     if (sigil == '^') {
                         scopes.push(scopes.peek());
                     } else if (s.kind() == FieldSchema.Kind.LIST) {

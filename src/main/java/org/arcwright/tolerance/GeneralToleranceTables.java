@@ -32,11 +32,12 @@ public final class GeneralToleranceTables {
      * lowest layer first, so a later table replaces an earlier one with the same id); files of another
      * {@code kind} are skipped, a malformed table is an error naming its file.
      */
-    public static GeneralToleranceTables load(List<Path> tableFiles) {
+    public static GeneralToleranceTables load(List<TableFile> tableFiles) {
         JsonFiles json = new JsonFiles();
         List<GeneralToleranceTable> tables = new ArrayList<>();
-        for (Path file : tableFiles) {
-            var tree = json.readTree(file);
+        for (TableFile tf : tableFiles) {
+            Path file = tf.file();
+            var tree = json.readPackObject(file, tf.packFolder());
             if (!"general-tolerance".equals(tree.path("kind").asText())) continue;
             var obj = ((com.fasterxml.jackson.databind.node.ObjectNode) tree.deepCopy());
             obj.remove("kind");
@@ -44,6 +45,12 @@ public final class GeneralToleranceTables {
         }
         return new GeneralToleranceTables(tables);
     }
+
+    /**
+     * A table file and the folder of the pack that supplies it: the file must lie, links followed,
+     * inside that folder (a shared pack cannot pull in another file of the user's).
+     */
+    public record TableFile(Path file, Path packFolder) {}
 
     /** All tables, in load order. */
     public List<GeneralToleranceTable> all() { return List.copyOf(byId.values()); }

@@ -40,11 +40,19 @@ public record PartWorksheet(int format, PartInfo part, Units units, DrawingStyle
             throw new IllegalArgumentException("worksheet format " + format + " is newer than this Arcwright reads ("
                     + FORMAT + ")");
         }
+        if (part == null) throw new IllegalArgumentException("part is null; give the part's number and name");
+        if (units == null) throw new IllegalArgumentException("units is null; use mm or in");
+        if (standard == null) throw new IllegalArgumentException("standard is null; use asme or iso");
         this.format = FORMAT;
         this.part = part;
         this.units = units;
         this.standard = standard;
         this.titleBlock = titleBlock == null ? TitleBlock.ISO_2768_M : titleBlock;
+        if (features != null) {
+            for (int i = 0; i < features.size(); i++) {
+                if (features.get(i) == null) throw new IllegalArgumentException("features[" + i + "] is null; expected a feature");
+            }
+        }
         this.features = features == null ? List.of() : List.copyOf(features);
         Set<String> ids = new HashSet<>();
         for (RadiusFeature f : this.features) {

@@ -189,7 +189,7 @@ class InspectCommandTest {
         Files.writeString(dir.resolve("s.csv"), "x,y\n1,0\n0.5,0.1\nabc,2\n");
         Path f = file("run.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"pointsFile\": \"s.csv\"}");
         assertThat(run("inspect", f.toString())).isEqualTo(2);
-        assertThat(err.toString()).contains("s.csv:4:1: x: not a number: 'abc'");
+        assertThat(err.toString()).contains("s.csv:4:1: x: not a number").doesNotContain("abc");
     }
 
     @Test

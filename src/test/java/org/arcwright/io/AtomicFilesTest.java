@@ -63,4 +63,52 @@ class AtomicFilesTest {
                 })
                 .hasMessageStartingWith(f + ":3:");
     }
+
+    @Test
+    void aTwoFileSaveIsAllOrNothingWhenTheSecondFails(@TempDir Path dir) throws Exception {
+        Path rule = dir.resolve("rules").resolve("override-x.json");
+        Path manifest = dir.resolve("pack.json");
+        Files.writeString(manifest, "{\"name\": \"Personal\"}");
+        java.util.LinkedHashMap<Path, AtomicFiles.Writer> writes = new java.util.LinkedHashMap<>();
+        writes.put(rule, out -> out.write("{\"rules\": []}".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        writes.put(manifest, out -> {
+            throw new IOException("disk full");
+        });
+        assertThatThrownBy(() -> AtomicFiles.writeAll(writes)).hasMessageContaining("disk full");
+        assertThat(rule).doesNotExist();
+        assertThat(Files.readString(manifest)).isEqualTo("{\"name\": \"Personal\"}");
+        try (var s = Files.list(dir)) {
+            assertThat(s.map(p -> p.getFileName().toString())).containsExactlyInAnyOrder("pack.json", "rules");
+        }
+    }
+
+    @Test
+    void aFailedRenameRollsBackTheFilesAlreadyReplaced(@TempDir Path dir) throws Exception {
+        Path first = dir.resolve("a.json");
+        Files.writeString(first, "old a");
+        Path second = Files.createDirectories(dir.resolve("b.json")); // a folder: the rename over it fails
+        Files.writeString(second.resolve("keep"), "x");
+        java.util.LinkedHashMap<Path, AtomicFiles.Writer> writes = new java.util.LinkedHashMap<>();
+        writes.put(first, out -> out.write("new a".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        writes.put(second, out -> out.write("new b".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        assertThatThrownBy(() -> AtomicFiles.writeAll(writes)).isInstanceOf(java.io.UncheckedIOException.class);
+        assertThat(Files.readString(first)).isEqualTo("old a");
+    }
+
+    @Test
+    void staleTemporaryFilesOfKilledSavesGoOnTheNextSave(@TempDir Path dir) throws Exception {
+        Path f = dir.resolve("part.arcpart");
+        Path stale = Files.createFile(dir.resolve(".part.arcpart.123456.tmp"));
+        Path fresh = Files.createFile(dir.resolve(".part.arcpart.777.tmp"));
+        Path other = Files.createFile(dir.resolve(".other.arcpart.1.tmp"));
+        java.nio.file.attribute.FileTime old = java.nio.file.attribute.FileTime.fromMillis(
+                System.currentTimeMillis() - AtomicFiles.STALE_AFTER.toMillis() - 60_000);
+        Files.setLastModifiedTime(stale, old);
+        Files.setLastModifiedTime(other, old);
+        AtomicFiles.writeString(f, "saved");
+        assertThat(stale).doesNotExist();
+        assertThat(fresh).as("a save running now in another process keeps its file").exists();
+        assertThat(other).as("another file's leftovers wait for its own save").exists();
+        assertThat(Files.readString(f)).isEqualTo("saved");
+    }
 }

@@ -21,7 +21,7 @@ class Iso2768TablesTest {
 
     @BeforeAll
     static void load() {
-        tables = GeneralToleranceTables.load(PackStack.builtIn().files("tables", ".json").stream().map(PackStack.PackFile::path).toList());
+        tables = GeneralToleranceTables.load(PackStack.builtIn().files("tables", ".json").stream().map(f -> new GeneralToleranceTables.TableFile(f.path(), f.pack().root())).toList());
     }
 
     /** ISO 2768-1:1989 Table 2 (broken edges: external radii and chamfer heights), every cell. */

@@ -59,11 +59,14 @@ public final class RuleSaver {
         Path file = overrideFile(personalPack, id);
         ObjectNode content = json.mapper().createObjectNode();
         content.putArray("rules").add(rule);
-        AtomicFiles.writeString(file, pretty(content));
+        // one transaction: the rule file and the manifest listing it are both saved, or neither
+        java.util.LinkedHashMap<Path, AtomicFiles.Writer> writes = new java.util.LinkedHashMap<>();
+        writes.put(file, utf8(pretty(content)));
         if (!listed) {
             overrides.add(id);
-            AtomicFiles.writeString(manifest, pretty(pack));
+            writes.put(manifest, utf8(pretty(pack)));
         }
+        AtomicFiles.writeAll(writes);
         return file;
     }
 
@@ -79,6 +82,10 @@ public final class RuleSaver {
                     + draft.rule().get().id() + "'; keep the id to save over this rule");
         }
         return json.parse(draft.text(), "rule", JsonNode.class);
+    }
+
+    private static AtomicFiles.Writer utf8(String text) {
+        return out -> out.write(text.getBytes(java.nio.charset.StandardCharsets.UTF_8));
     }
 
     private String pretty(JsonNode tree) {

@@ -1,0 +1,244 @@
+package org.arcwright.cli;
+
+import static org.assertj.core.api.Assertions.assertThat;
+
+import java.nio.file.Files;
+import java.nio.file.Path;
+import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
+
+/**
+ * Regression tests for inputs a hostile or careless user gives: each was a crash, a silent skip, an
+ * escape from a pack or an overwrite, and is now a located error with exit 2.
+ */
+class HostileInputTest {
+    @TempDir
+    Path dir;
+
+    private static final String SHOULDER = """
+            {"units": "mm", "standard": "asme", "kind": "fillet", "nominalRadius": 2, "function": "stress-relief",
+             "loading": "fatigue", "formMatters": true, "locationMatters": false, "datums": ["A"], "process": "machined"}
+            """;
+
+    private Path file(String name, String text) throws Exception {
+        return Files.writeString(dir.resolve(name), text);
+    }
+
+    private static String example(String name) {
+        return Path.of("examples").resolve(name).toAbsolutePath().toString();
+    }
+
+    private static void badInput(CliRun r, String... fragments) {
+        assertThat(r.exitCode()).as(r.err()).isEqualTo(Cli.BAD_INPUT);
+        assertThat(r.err()).contains(fragments).doesNotContain("Exception", "java.", "org.arcwright.", "\tat ");
+    }
+
+    @Test
+    void anEmptyKfTargetIsBadInputNotASkippedCheck() throws Exception {
+        Path f = file("shaft.json", """
+                {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 38, "d": 32, "rMin": 0.8, "rMax": 1.2,
+                 "ultimateStrength": {"value": 690, "units": "MPa"}, "targetKf": ""}
+                """);
+        badInput(CliRun.of("fillet-stress", f.toString()), "shaft.json:2:", "targetKf", "a number");
+        Path g = file("shaft2.json", Files.readString(f).replace("\"\"", "\"two\""));
+        badInput(CliRun.of("fillet-stress", g.toString()), "targetKf", "expected a number");
+    }
+
+    @Test
+    void anEmptyRequiredSupportIsBadInputNotASkippedCheck() throws Exception {
+        Path f = file("corner.json", """
+                {"units": "mm", "fillet": {"rMin": 0.8, "rMax": 1.2}, "mating": {"type": "bearing", "chamferMin": 1.1},
+                 "shoulderHeight": 3.0, "requiredSupport": ""}
+                """);
+        badInput(CliRun.of("clearance", f.toString()), "corner.json:2:", "requiredSupport", "a number");
+    }
+
+    @Test
+    void aFileOfJustNullIsALocatedErrorInEveryFileCommand() throws Exception {
+        Path f = file("null.json", "null");
+        String p = f.toString();
+        String[][] commands = {
+                {"fillet-stress", p}, {"clearance", p}, {"advise", p, "--no-notes", "--no-settings"},
+                {"inspect", p}, {"render", p}, {"sheet", p, "--out", dir.resolve("s.md").toString(), "--no-settings"},
+                {"drawing-note", "callout-note", p, "--no-settings"},
+        };
+        for (String[] c : commands) {
+            CliRun r = CliRun.of(c);
+            assertThat(r.exitCode()).as(String.join(" ", c) + "\n" + r.err()).isEqualTo(Cli.BAD_INPUT);
+            assertThat(r.err()).as(c[0]).contains("null.json:1:1", "null").doesNotContain("Exception");
+        }
+    }
+
+    @Test
+    void renderWithNullUnitsNamesTheField() throws Exception {
+        Path f = file("callout.json", "{\"units\": null, \"standard\": \"asme\", \"callout\": {\"type\": \"profile\", \"zone\": 0.1}}");
+        badInput(CliRun.of("render", f.toString()), "callout.json:1:", "units is null");
+    }
+
+    @Test
+    void aChosenFeatureWithoutItsCalloutOrANoteWithoutATitleIsLocated() throws Exception {
+        String ws = Files.readString(Path.of(example("tarnbeck-output-shaft-decided.arcpart")));
+        int chosen = ws.indexOf("\"chosen\"");
+        int callout = ws.indexOf("\"callout\"", chosen);
+        int text = ws.indexOf("\"text\"", callout);
+        Path noCallout = file("no-callout.arcpart", ws.substring(0, callout) + ws.substring(text));
+        badInput(CliRun.of("sheet", noCallout.toString(), "--out", dir.resolve("s.md").toString(), "--no-settings",
+                "--no-suggest"), "no-callout.arcpart:", "features[0].chosen", "callout is missing");
+        badInput(CliRun.of("drawing-note", "callout-note", noCallout.toString(), "--no-settings"), "callout is missing");
+        Path noTitle = file("no-title.arcpart", ws.replaceFirst("\"title\": \"[^\"]*\",", ""));
+        badInput(CliRun.of("sheet", noTitle.toString(), "--out", dir.resolve("s.md").toString(), "--no-settings",
+                "--no-suggest"), "no-title.arcpart:", "notes[0]", "title is missing");
+    }
+
+    @Test
+    void aPackTemplateLinkedToAFileOutsideThePackIsRefusedAndNeverPrinted() throws Exception {
+        Path secret = file("id_demo_key", "PRIVATE-KEY-OF-A-DEMO-USER");
+        Path pack = Files.createDirectories(dir.resolve("team-pack"));
+        Files.writeString(pack.resolve("pack.json"), "{\"name\": \"Link test pack\", \"version\": \"1\"}");
+        Files.createDirectories(pack.resolve("templates"));
+        Files.createSymbolicLink(pack.resolve("templates").resolve("leak.mustache"), secret);
+        String part = example("tarnbeck-output-shaft-decided.arcpart");
+        CliRun note = CliRun.of("drawing-note", "leak", part, "--pack", pack.toString(), "--no-settings");
+        badInput(note, "leak.mustache", "outside its pack's folder");
+        assertThat(note.out() + note.err()).doesNotContain("PRIVATE-KEY");
+        Path out = dir.resolve("sheet.html");
+        CliRun sheet = CliRun.of("sheet", part, "--out", out.toString(), "--pack", pack.toString(), "--no-settings",
+                "--no-suggest");
+        badInput(sheet, "outside its pack's folder");
+        assertThat(out).doesNotExist();
+    }
+
+    @Test
+    void aPackRuleFileLinkedOutOfThePackIsAPackProblem() throws Exception {
+        Path outside = file("rules-elsewhere.json", "{\"rules\": []}");
+        Path pack = Files.createDirectories(dir.resolve("team-pack"));
+        Files.writeString(pack.resolve("pack.json"), "{\"name\": \"Link test pack\", \"version\": \"1\"}");
+        Files.createDirectories(pack.resolve("rules"));
+        Files.createSymbolicLink(pack.resolve("rules").resolve("borrowed.json"), outside);
+        CliRun r = CliRun.of("pack", "check", pack.toString(), "--no-settings");
+        assertThat(r.exitCode()).as(r.out() + r.err()).isEqualTo(Cli.FAIL);
+        assertThat(r.out()).contains("borrowed.json", "outside its pack's folder");
+    }
+
+    @Test
+    void aPointsFileThatIsNotPointsIsNeverEchoed() throws Exception {
+        Path secret = file("shadow-demo", "demo-user:$6$SECRETHASH$abcdef:19000:0:99999:7:::\nsecond,line\n");
+        Path f = file("inspect.json", """
+                {"units": "mm", "corner": {"vertex": [0, 0], "legA": [1, 0], "legB": [0, 1], "kind": "round"},
+                 "nominalRadius": 2.0, "callout": {"type": "radius", "min": 1.9, "max": 2.1},
+                 "pointsFile": "%s"}
+                """.formatted(secret.toString()));
+        CliRun r = CliRun.of("inspect", f.toString());
+        badInput(r, "shadow-demo");
+        assertThat(r.out() + r.err()).doesNotContain("SECRETHASH", "demo-user", "second");
+    }
+
+    @Test
+    void aNullPackManifestOrRuleFileIsAPackProblemNotACrash() throws Exception {
+        Path pack = Files.createDirectories(dir.resolve("team-pack"));
+        Files.writeString(pack.resolve("pack.json"), "null");
+        Path c = file("case.json", SHOULDER);
+        CliRun advise = CliRun.of("advise", c.toString(), "--pack", pack.toString(), "--no-notes", "--no-settings");
+        assertThat(advise.exitCode()).as(advise.err()).isIn(Cli.OK, Cli.BAD_INPUT);
+        assertThat(advise.err()).contains("pack.json:1:1", "null").doesNotContain("Exception");
+        badInput(CliRun.of("pack", "check", pack.toString(), "--no-settings"), "pack.json:1:1");
+
+        Files.writeString(pack.resolve("pack.json"), "{\"name\": \"Null rules pack\", \"version\": \"1\"}");
+        Files.createDirectories(pack.resolve("rules"));
+        Files.writeString(pack.resolve("rules").resolve("empty.json"), "null");
+        CliRun check = CliRun.of("pack", "check", pack.toString(), "--no-settings");
+        assertThat(check.exitCode()).as(check.out() + check.err()).isEqualTo(Cli.FAIL);
+        assertThat(check.out()).contains("empty.json:1:1");
+        CliRun advise2 = CliRun.of("advise", c.toString(), "--pack", pack.toString(), "--no-notes", "--no-settings");
+        assertThat(advise2.err()).doesNotContain("Exception", "internal error");
+    }
+
+    @Test
+    void aRuleWithNullOrNoWhenIsAnErrorThatPackCheckReports() throws Exception {
+        Path pack = Files.createDirectories(dir.resolve("team-pack"));
+        Files.writeString(pack.resolve("pack.json"), "{\"name\": \"When test pack\", \"version\": \"1\"}");
+        Files.createDirectories(pack.resolve("rules"));
+        String rule = """
+                {"rules": [{"id": "team.always", "summary": "Always", %s "recommend": {"callout": "radius"},
+                  "weight": 10, "because": ["Because."]}]}
+                """;
+        for (String when : new String[] {"\"when\": null,", ""}) {
+            Files.writeString(pack.resolve("rules").resolve("always.json"), rule.formatted(when));
+            CliRun r = CliRun.of("pack", "check", pack.toString(), "--no-settings");
+            assertThat(r.exitCode()).as(r.out() + r.err()).isEqualTo(Cli.FAIL);
+            assertThat(r.out()).contains("always.json:", "when is missing or null", "\"when\": {}");
+        }
+        Files.writeString(pack.resolve("rules").resolve("always.json"), rule.formatted("\"when\": {},"));
+        CliRun ok = CliRun.of("pack", "check", pack.toString(), "--no-settings");
+        assertThat(ok.out()).doesNotContain("when is missing");
+    }
+
+    @Test
+    void theOutputMayNotBeTheInput() throws Exception {
+        Path part = dir.resolve("part.html");
+        Files.copy(Path.of(example("tarnbeck-output-shaft-decided.arcpart")), part);
+        String before = Files.readString(part);
+        badInput(CliRun.of("sheet", part.toString(), "--out", part.toString(), "--no-settings", "--no-suggest"),
+                "--out", "also the input");
+        assertThat(Files.readString(part)).isEqualTo(before);
+
+        Path callout = file("x.txt", "{\"units\": \"mm\", \"standard\": \"asme\", \"callout\": {\"type\": \"profile\", \"zone\": 0.1}}");
+        badInput(CliRun.of("render", callout.toString(), "--out", callout.toString()), "also the input");
+        assertThat(Files.readString(callout)).startsWith("{");
+        Path shaft = dir.resolve("shaft.svg");
+        Files.copy(Path.of(example("mechanics/drive-shaft-fillet.json")), shaft);
+        badInput(CliRun.of("fillet-stress", shaft.toString(), "--plot", shaft.toString()), "--plot", "also the input");
+    }
+
+    @Test
+    void aSymlinkedReadOnlyOrFolderlessOutputIsRefused() throws Exception {
+        Path callout = file("c.json", "{\"units\": \"mm\", \"standard\": \"asme\", \"callout\": {\"type\": \"profile\", \"zone\": 0.1}}");
+        Path real = file("real.svg", "keep");
+        Path link = Files.createSymbolicLink(dir.resolve("link.svg"), real);
+        badInput(CliRun.of("render", callout.toString(), "--out", link.toString()), "symbolic link");
+        assertThat(Files.isSymbolicLink(link)).isTrue();
+        badInput(CliRun.of("render", callout.toString(), "--out", dir.resolve("nowhere").resolve("f.svg").toString()),
+                "does not exist");
+        assertThat(dir.resolve("nowhere")).doesNotExist();
+        if (java.nio.file.FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
+            Files.setPosixFilePermissions(real, java.nio.file.attribute.PosixFilePermissions.fromString("r--r--r--"));
+            badInput(CliRun.of("render", callout.toString(), "--out", real.toString()), "read-only");
+            assertThat(Files.readString(real)).isEqualTo("keep");
+        }
+    }
+
+    @Test
+    void messagesCarryTheFullCommandName() throws Exception {
+        CliRun r = CliRun.of("pack", "check", dir.resolve("no-pack").toString(), "--no-settings");
+        assertThat(r.err()).startsWith("arcwright pack check: ");
+        CliRun add = CliRun.of("notes", "add", dir.resolve("missing.md").toString());
+        assertThat(add.err()).startsWith("arcwright notes add: ");
+    }
+
+    @Test
+    void anUnknownCommandWithHelpIsAUsageError() {
+        CliRun r = CliRun.of("zone", "--help");
+        assertThat(r.exitCode()).isEqualTo(Cli.BAD_INPUT);
+        assertThat(r.err()).contains("zone");
+        assertThat(CliRun.of("--help").exitCode()).isZero();
+        assertThat(CliRun.of("pack", "check", "--help").exitCode()).isZero();
+    }
+
+    @Test
+    void notANumberAndInfinityAreRefusedByEveryNumberOption() throws Exception {
+        Path f = Path.of(example("inspect/bracket-round-r.json"));
+        for (String v : new String[] {"NaN", "Infinity", "-Infinity", "nan"}) {
+            badInput(CliRun.of("inspect", f.toString(), "--window", v), "--window", "not a");
+            badInput(CliRun.of("limits", "R3 +0.2/-0.1", "--angle", v), "--angle", "not a");
+            badInput(CliRun.of("general-tolerance", "--class", "m", "--radius", v), "--radius", "not a");
+        }
+    }
+
+    @Test
+    void aDeviceGivenAsInputIsRefusedAtOnce() {
+        org.junit.jupiter.api.Assumptions.assumeTrue(Files.exists(Path.of("/dev/zero")));
+        badInput(CliRun.of("inspect", "/dev/zero"), "/dev/zero", "not a regular file");
+        badInput(CliRun.of("advise", "/dev/zero", "--no-notes", "--no-settings"), "not a regular file");
+        badInput(CliRun.of("advise", "--batch", "/dev/zero", "--no-notes", "--no-settings"), "not a regular file");
+    }
+}
