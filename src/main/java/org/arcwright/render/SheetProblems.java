@@ -8,7 +8,7 @@ import java.util.Map;
 import java.util.Optional;
 import org.arcwright.callout.Callout;
 import org.arcwright.inspect.InspectionCallout;
-import org.arcwright.rules.DesignCase;
+import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.RadiusKind;
