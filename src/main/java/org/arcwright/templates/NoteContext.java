@@ -120,7 +120,7 @@ public final class NoteContext {
             m.put("because", r.because());
             m.put("cautions", r.cautions());
             m.put("references", r.references());
-            m.put("figures", figures(r.numbers()));
+            m.put("figures", figures(r.numbers().asMap()));
             List<Map<String, Object>> notes = new ArrayList<>();
             for (NoteLink n : r.notes()) notes.add(map("id", nz(n.id()), "title", nz(n.title()), "pack", nz(n.pack())));
             m.put("notes", notes);
