@@ -48,20 +48,21 @@ final class Candidates {
         DesignCase c = needs.designCase();
         double unit = Math.pow(10, -places);
         double t = Math.max(Advisor.roundTo(plusMinus, places, RoundingMode.HALF_UP), unit);
-        double floor = needs.floor();
-        double ceiling = needs.ceiling();
-        double lo = c.nominalRadius() - t;
-        double hi = c.nominalRadius() + t;
+        // the floor rounded up and the ceiling rounded down to the drawing grid first, so the band keeps its width
+        double floor = needs.floor() > 0 ? Advisor.roundTo(needs.floor(), places, RoundingMode.CEILING) : 0;
+        double ceiling = Double.isFinite(needs.ceiling())
+                ? Advisor.roundTo(needs.ceiling(), places, RoundingMode.FLOOR) : Double.POSITIVE_INFINITY;
+        double lo = Advisor.roundTo(c.nominalRadius() - t, places, RoundingMode.HALF_EVEN);
+        double hi = Advisor.roundTo(c.nominalRadius() + t, places, RoundingMode.HALF_EVEN);
         if (lo < floor) {
             lo = floor;
-            hi = floor + 2 * t;
+            hi = Advisor.roundTo(floor + 2 * t, places, RoundingMode.HALF_EVEN);
         }
         if (hi > ceiling) {
             hi = ceiling;
-            lo = Math.max(floor, ceiling - 2 * t);
+            lo = Math.max(floor, Advisor.roundTo(ceiling - 2 * t, places, RoundingMode.HALF_EVEN));
         }
-        lo = Math.max(Advisor.roundTo(lo, places, RoundingMode.CEILING), unit);
-        hi = Advisor.roundTo(hi, places, RoundingMode.FLOOR);
+        lo = Math.max(lo, unit);
         if (needs.floorUnreachable() || hi - lo < unit - 1e-12) return null;
         return new double[] {lo, hi, 2 * t};
     }

@@ -41,7 +41,10 @@ final class DesignChanges {
                     + u + ": R" + Advisor.plain(nominal) + " lies outside the room the needs leave (" + Advisor.fmt(floor, places)
                     + " to " + (Double.isFinite(ceiling) ? Advisor.fmt(ceiling, places) : "any") + u + ").",
                     numbers("nominal", suggested, "floor", floor, "ceiling", ceiling)));
-            if (!(Double.isFinite(h) && nominal > h)) return out;
+            if (c.stress() != null && Double.isFinite(h) && nominal > h) {
+                largerStep(c, nominal + band / 2, band, places).ifPresent(out::add);
+            }
+            return out;
         }
         double needFor = needs.floorUnreachable() ? Double.NaN : floor + band;
         if (c.stress() != null && Double.isFinite(h)) {
@@ -76,7 +79,7 @@ final class DesignChanges {
             });
         }
         if (c.stress() != null && Double.isFinite(h) && (!seatingCeiling || Double.isNaN(needFor))) {
-            largerStep(c, band, places).ifPresent(out::add);
+            largerStep(c, 0, band, places).ifPresent(out::add);
         }
         strongerMaterial(needs, band, places).ifPresent(out::add);
         return out;
@@ -107,8 +110,11 @@ final class DesignChanges {
         }
     }
 
-    /** The larger diameter D at which the stress floor plus the band fits under the step, iterating the floor. */
-    private Optional<DesignChange> largerStep(DesignCase c, double band, int places) {
+    /**
+     * The larger diameter D at which the stress floor (or {@code radius}, if larger) plus the band fits under the
+     * step, iterating the floor (it rises a little with D/d).
+     */
+    private Optional<DesignChange> largerStep(DesignCase c, double radius, double band, int places) {
         DesignCase.StressInputs s = c.stress();
         double bigD = s.bigD();
         for (int i = 0; i < 30; i++) {
@@ -120,13 +126,14 @@ final class DesignChanges {
                 else floor = Math.max(floor, m.radius());
             }
             double h = (bigD - s.smallD()) / 2;
+            floor = Math.max(floor, radius - band);
             if (found && h >= floor + band - 1e-9 && bigD > s.bigD()) {
                 double rounded = Advisor.roundTo(bigD, Math.max(0, places - 1), java.math.RoundingMode.CEILING);
                 return Optional.of(new DesignChange(DesignChange.Kind.LARGER_STEP, "Make the step larger: D = "
                         + Advisor.plain(rounded) + " " + c.units().symbol() + " (with d = " + Advisor.plain(s.smallD())
-                        + ") gives h = " + Advisor.fmt((rounded - s.smallD()) / 2, places) + ", room for the stress floor "
-                        + Advisor.fmt(floor, places) + " plus the band " + Advisor.fmt(band, places)
-                        + " (the floor rises a little with D/d; it was found again at this D).",
+                        + ") gives h = " + Advisor.fmt((rounded - s.smallD()) / 2, places) + ", room for radii from "
+                        + Advisor.fmt(floor, places) + " to " + Advisor.fmt(floor + band, places) + " " + c.units().symbol()
+                        + " (the stress floor rises a little with D/d; it was found again at this D).",
                         numbers("D", rounded, "d", s.smallD(), "stepHeight", (rounded - s.smallD()) / 2, "floor", floor)));
             }
             bigD = Math.max(bigD * 1.05, s.smallD() + 2 * (floor + band));
@@ -147,6 +154,10 @@ final class DesignChanges {
             return Optional.empty();
         }
         if (sf.isEmpty() || Double.isNaN(sf.get().ktAtMin())) return Optional.empty();
+        boolean kfTarget = c.stress().targetKf() != null && sf.get().kfAtMin() != null;
+        double over = kfTarget ? sf.get().kfAtMin() - c.stress().targetKf()
+                : c.stress().targetKt() == null ? 0 : sf.get().ktAtMin() - c.stress().targetKt();
+        if (!(over > 0)) return Optional.empty();
         FilletChecks.StressFigures f = sf.get();
         boolean kf = c.stress().targetKf() != null && f.kfAtMin() != null;
         double value = kf ? f.kfAtMin() : f.ktAtMin();
