@@ -9,6 +9,8 @@ import java.util.Map;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.rules.Advice;
+import org.arcwright.rules.DesignChange;
+import org.arcwright.rules.Need;
 import org.arcwright.model.DesignCase;
 import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.Recommendation;
@@ -18,17 +20,22 @@ import org.arcwright.rules.RuleBook;
 final class AdviceOutput {
     private final JsonFiles json = new JsonFiles();
 
-    /** The advice as a JSON object: {@code feature}, {@code recommendations}, {@code conflicts}, {@code warnings}. */
+    /**
+     * The advice as a JSON object: {@code feature}, {@code needs}, {@code designChanges}, {@code recommendations}
+     * (each with {@code meets} and {@code meetsAll}), {@code conflicts}, {@code warnings}.
+     */
     ObjectNode toJson(String feature, Advice advice) {
         ObjectNode root = json.mapper().createObjectNode();
         if (feature != null) root.put("feature", feature);
+        root.set("needs", json.mapper().valueToTree(advice.needs()));
+        root.set("designChanges", json.mapper().valueToTree(advice.designChanges()));
         ArrayNode recs = root.putArray("recommendations");
         for (Recommendation r : advice.recommendations()) {
             ObjectNode n = recs.addObject();
             n.put("rule", r.ruleId());
             ObjectNode callout = json.mapper().valueToTree(r.callout());
             if (!callout.has("datums")) callout.set("datums", json.mapper().valueToTree(r.callout().allDatums()));
-            Map<String, Object> nums = r.numbers();
+            Map<String, Object> nums = r.numbers().asMap();
             if (!callout.has("min") && nums.get("min") != null && !"general".equals(r.callout().typeName())) {
                 callout.set("admitsMin", json.mapper().valueToTree(nums.get("min")));
                 callout.set("admitsMax", json.mapper().valueToTree(nums.get("max")));
@@ -38,13 +45,16 @@ final class AdviceOutput {
                 callout.set("max", json.mapper().valueToTree(nums.get("max")));
             }
             n.set("callout", callout);
+            if (r.refinement() != null) n.set("refinement", json.mapper().valueToTree(r.refinement()));
             n.put("text", r.text());
             n.put("score", r.score());
             n.put("demoted", r.demoted());
+            n.set("meets", json.mapper().valueToTree(r.meets()));
+            if (r.meetsAll() != null) n.put("meetsAll", r.meetsAll());
             n.set("because", json.mapper().valueToTree(r.because()));
             n.set("cautions", json.mapper().valueToTree(r.cautions()));
             n.set("references", json.mapper().valueToTree(r.references()));
-            n.set("numbers", json.mapper().valueToTree(nums));
+            n.set("numbers", json.mapper().valueToTree(r.numbers()));
             n.set("trace", json.mapper().valueToTree(r.trace()));
             n.set("notes", json.mapper().valueToTree(r.notes()));
         }
@@ -73,16 +83,22 @@ final class AdviceOutput {
                 c.hasDatums() ? ", datums " + String.join(" ", c.datums()) : ", no datums",
                 (c.formMatters() ? ", form matters" : "") + (c.locationMatters() ? ", location matters" : "")
                         + (c.cornerAngle() == null ? "" : ", " + Numbers.plain(c.cornerAngle()) + "° corner"));
-        for (String w : advice.warnings()) out.println("warning   " + w);
         List<Recommendation> recs = advice.recommendations();
+        for (String w : advice.warnings()) out.println("warning   " + w);
+        if (!advice.designChanges().isEmpty()) {
+            out.println();
+            out.println(advice.anyUsable() ? "Design changes worth weighing:" : "What would work (design changes):");
+            for (DesignChange d : advice.designChanges()) out.println("  - " + d.kind().key() + ": " + d.text());
+        }
+        printNeeds(out, advice, Math.min(limit, recs.size()));
         for (int i = 0; i < recs.size() && i < limit; i++) {
             Recommendation r = recs.get(i);
             out.println();
             out.printf("%d. %s%n", i + 1, r.text());
-            out.printf("   %s, score %s%s, rule %s%n", r.callout().typeName(), Numbers.plain(r.score()),
-                    r.demoted() ? " (DEMOTED)" : "", r.ruleId());
+            out.printf("   %s, score %s%s%s, rule %s%n", r.callout().typeName(), Numbers.plain(r.score()),
+                    r.demoted() ? " (DEMOTED)" : "", Boolean.FALSE.equals(r.meetsAll()) ? " (MISSES A NEED)" : "", r.ruleId());
             for (String b : r.because()) out.println("   because   " + b);
-            out.println("   numbers   " + numbersLine(r.numbers()));
+            out.println("   numbers   " + numbersLine(r.numbers().asMap()));
             for (String t : r.cautions()) out.println("   caution   " + t);
             for (String ref : r.references()) out.println("   reference " + ref);
             for (NoteLink n : r.notes()) out.println("   note      " + n.title() + " [" + n.id() + ", " + n.pack() + "]");
@@ -95,6 +111,32 @@ final class AdviceOutput {
             out.printf("(%d more; --all lists every recommendation, --format json gives everything)%n", recs.size() - limit);
         }
         for (String cf : advice.conflicts()) out.println("CONFLICT  " + cf);
+    }
+
+    /** The needs with a tick or cross per card shown. */
+    private static void printNeeds(PrintWriter out, Advice advice, int cards) {
+        if (advice.needs().isEmpty()) {
+            out.println();
+            out.println("Needs: none beyond the radius itself (no floor, ceiling, form or location need stated).");
+            return;
+        }
+        out.println();
+        StringBuilder head = new StringBuilder(String.format("%-16s %-36s", "need", "limit"));
+        for (int i = 1; i <= cards; i++) head.append(String.format(" %3s", "#" + i));
+        out.println("Needs" + (cards > 0 ? " (✓ met, ✗ not met, by card):" : ":"));
+        out.println("  " + head);
+        String u = advice.designCase().units().symbol();
+        for (Need n : advice.needs()) {
+            String limit = n.min() != null ? "r ≥ " + Numbers.plain(n.min()) + " " + u
+                    : n.max() != null ? "r ≤ " + Numbers.plain(n.max()) + " " + u : n.reachable() ? "" : "none reaches it";
+            StringBuilder row = new StringBuilder(String.format("%-16s %-36s", n.key(), limit));
+            for (int i = 0; i < cards; i++) {
+                Boolean ok = advice.recommendations().get(i).meets().get(n.key());
+                row.append(String.format(" %3s", ok == null ? "?" : ok ? "✓" : "✗"));
+            }
+            out.println("  " + row);
+            out.println("      " + n.why() + " [" + n.source() + "]");
+        }
     }
 
     private static String numbersLine(Map<String, Object> m) {

@@ -153,7 +153,7 @@ final class AdviseCommand implements Callable<Integer> {
                 for (int k = 1; k < CSV_COLUMNS.size(); k++) cells.add("");
             } else {
                 Recommendation r = a.first().get();
-                Map<String, Object> n = r.numbers();
+                Map<String, Object> n = r.numbers().asMap();
                 cells.add(r.ruleId());
                 cells.add(r.callout().typeName());
                 cells.add(r.text());

@@ -33,7 +33,8 @@ final class GeneralToleranceCommand implements Callable<Integer> {
     What what;
 
     static final class What {
-        @Option(names = "--radius", paramLabel = "X", description = "An external radius or chamfer height (broken edge).")
+        @Option(names = "--radius", paramLabel = "X", description = "A radius or chamfer height; --blend says which "
+                + "ISO 2768-1 table applies (without it, both readings are given).")
         Double radius;
         @Option(names = "--linear", paramLabel = "X", description = "A linear size.")
         Double linear;
@@ -44,6 +45,10 @@ final class GeneralToleranceCommand implements Callable<Integer> {
     @Option(names = "--units", paramLabel = "mm|in", defaultValue = "mm",
             description = "Units of the size given (default: ${DEFAULT-VALUE}); tables are in mm.")
     String units;
+
+    @Option(names = "--blend", paramLabel = "fillet|round", description = "With --radius: an internal fillet radius is a "
+            + "linear size (ISO 2768-1 Table 1); an external round or chamfer height is a broken edge (Table 2).")
+    String blend;
 
     @Option(names = "--table", paramLabel = "ID", description = "A table id other than ISO 2768-1 (from a practice pack).")
     String tableId;
@@ -57,22 +62,37 @@ final class GeneralToleranceCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         Units u = Units.parse(units);
-        ToleranceQuantity q = what.radius != null ? ToleranceQuantity.RADIUS_CHAMFER
+        ToleranceQuantity q0 = what.radius != null ? ToleranceQuantity.RADIUS_CHAMFER
                 : what.linear != null ? ToleranceQuantity.LINEAR : ToleranceQuantity.ANGULAR;
+        ToleranceQuantity q = q0;
         double size = what.radius != null ? what.radius : what.linear != null ? what.linear : what.angleSide;
         String field = what.radius != null ? "--radius" : what.linear != null ? "--linear" : "--angle-side";
         if (!Double.isFinite(size)) throw org.arcwright.io.InputProblem.ofField(field, "not a finite number");
         if (size <= 0) throw org.arcwright.io.InputProblem.ofField(field, "must be greater than zero, got " + size);
+        if (blend != null && !List.of("fillet", "round").contains(blend)) {
+            throw org.arcwright.io.InputProblem.ofField("--blend", "use fillet or round, got '" + blend + "'");
+        }
+        if (blend != null && what.radius == null) {
+            throw org.arcwright.io.InputProblem.ofField("--blend", "applies to --radius only");
+        }
+        // ISO 2768-1:1989: an internal fillet radius is a linear size (Table 1); broken edges are Table 2
+        if ("fillet".equals(blend)) q = ToleranceQuantity.LINEAR;
         PackStack stack = packs.load("general-tolerance", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         GeneralToleranceTables tables = GeneralToleranceTables.load(stack.files("tables", ".json").stream().map(f -> new GeneralToleranceTables.TableFile(f.path(), f.pack().root())).toList());
         GeneralToleranceTable table = tableId == null ? tables.iso(q) : tables.require(tableId);
         double sizeMm = size * u.millimetres();
-        GeneralTolerance t;
-        try {
-            t = table.lookup(toleranceClass, sizeMm);
-        } catch (org.arcwright.io.InputProblem p) {
-            throw "size".equals(p.field()) ? org.arcwright.io.InputProblem.ofField(field, p.problem()) : p;
+        GeneralTolerance t = lookup(table, sizeMm, field);
+        // without --blend, a radius gets both readings: the other one is the internal-fillet (Table 1) value
+        GeneralTolerance asFillet = null;
+        GeneralToleranceTable linear = null;
+        if (what.radius != null && blend == null && tableId == null) {
+            linear = tables.iso(ToleranceQuantity.LINEAR);
+            try {
+                asFillet = linear.lookup(toleranceClass, sizeMm);
+            } catch (org.arcwright.io.InputProblem p) {
+                asFillet = null;
+            }
         }
         double tol = q == ToleranceQuantity.ANGULAR ? t.plusMinus() : t.plusMinus() / u.millimetres();
         PrintWriter out = spec.commandLine().getOut();
@@ -89,11 +109,24 @@ final class GeneralToleranceCommand implements Callable<Integer> {
             m.put("units", u.symbol());
             m.put("table", table.id());
             m.put("source", table.source());
+            if (blend != null) m.put("blend", blend);
+            if (asFillet != null) {
+                m.put("reading", "external round or chamfer height (broken edge, ISO 2768-1 Table 2)");
+                Map<String, Object> other = new LinkedHashMap<>();
+                other.put("reading", "internal fillet radius (linear size, ISO 2768-1 Table 1)");
+                other.put("tolerance", asFillet.plusMinus() / u.millimetres());
+                other.put("toleranceUnits", u.symbol());
+                other.put("range", asFillet.range() + " mm");
+                other.put("table", linear.id());
+                other.put("source", linear.source());
+                m.put("asInternalFillet", other);
+            }
             out.println(new JsonFiles().write(m));
         } else {
             String what = switch (q) {
-                case RADIUS_CHAMFER -> "radius/chamfer";
-                case LINEAR -> "linear size";
+                case RADIUS_CHAMFER -> blend == null ? "radius/chamfer (read as an external round or chamfer height)"
+                        : "external round/chamfer";
+                case LINEAR -> "fillet".equals(blend) ? "internal fillet radius (a linear size)" : "linear size";
                 case ANGULAR -> "angle, shorter side";
             };
             out.printf("%s %s %s, class %s (%s): %s%s%n", what, Numbers.plain(size), u.symbol(), t.toleranceClass(),
@@ -102,7 +135,21 @@ final class GeneralToleranceCommand implements Callable<Integer> {
                     q == ToleranceQuantity.ANGULAR ? "" : " " + u.symbol());
             out.printf("  range   %s mm%n", t.range());
             out.printf("  table   %s — %s%n", table.title(), table.source());
+            if (asFillet != null) {
+                out.printf("  as an internal fillet radius it is a linear size: ±%s %s (range %s mm; %s — %s)%n",
+                        Numbers.plain(asFillet.plusMinus() / u.millimetres()), u.symbol(), asFillet.range(), linear.title(),
+                        linear.source());
+                out.println("  --blend fillet|round picks one; a title block should say which table applies to radii.");
+            }
         }
         return Cli.OK;
+    }
+
+    private GeneralTolerance lookup(GeneralToleranceTable table, double sizeMm, String field) {
+        try {
+            return table.lookup(toleranceClass, sizeMm);
+        } catch (org.arcwright.io.InputProblem p) {
+            throw "size".equals(p.field()) ? org.arcwright.io.InputProblem.ofField(field, p.problem()) : p;
+        }
     }
 }

@@ -118,18 +118,28 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
      * @param bigD larger diameter (or width) D
      * @param smallD smaller diameter (or width) d, &lt; D
      * @param ultimateStrength material ultimate tensile strength, or null
-     * @param targetKt largest acceptable Kt (or Kf when a strength is given), or null
+     * @param targetKt largest acceptable K<sub>t</sub>, or null; always K<sub>t</sub>, with or without a strength
+     * @param targetKf largest acceptable K<sub>f</sub>, or null; needs {@code ultimateStrength} for the notch
+     *     sensitivity
      */
     @JsonInclude(JsonInclude.Include.NON_NULL)
     public record StressInputs(String shape, String load, double bigD, double smallD, Strength ultimateStrength,
-                               Double targetKt) {
+                               Double targetKt, Double targetKf) {
+
+        /** Section geometry with a K<sub>t</sub> target only (the form every caller used before K<sub>f</sub> targets). */
+        public StressInputs(String shape, String load, double bigD, double smallD, Strength ultimateStrength,
+                            Double targetKt) {
+            this(shape, load, bigD, smallD, ultimateStrength, targetKt, null);
+        }
+
         @JsonCreator
         public StressInputs(@JsonProperty(value = "shape", required = true) String shape,
                             @JsonProperty(value = "load", required = true) String load,
                             @JsonProperty(value = "D", required = true) double bigD,
                             @JsonProperty(value = "d", required = true) double smallD,
                             @JsonProperty("ultimateStrength") Strength ultimateStrength,
-                            @JsonProperty("targetKt") Double targetKt) {
+                            @JsonProperty("targetKt") Double targetKt,
+                            @JsonProperty("targetKf") Double targetKf) {
             if (!List.of("stepped-shaft", "stepped-bar").contains(shape)) {
                 throw new IllegalArgumentException("shape must be stepped-shaft or stepped-bar, got '" + shape + "'");
             }
@@ -142,13 +152,24 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
             if (targetKt != null && !(Double.isFinite(targetKt) && targetKt >= 1)) {
                 throw new IllegalArgumentException("targetKt must be at least 1, got " + targetKt);
             }
+            if (targetKf != null && !(Double.isFinite(targetKf) && targetKf >= 1)) {
+                throw new IllegalArgumentException("targetKf must be at least 1, got " + targetKf);
+            }
+            if (targetKf != null && ultimateStrength == null) {
+                throw new IllegalArgumentException("targetKf needs the material's ultimateStrength (for the notch sensitivity)");
+            }
             this.shape = shape;
             this.load = load;
             this.bigD = bigD;
             this.smallD = smallD;
             this.ultimateStrength = ultimateStrength;
             this.targetKt = targetKt;
+            this.targetKf = targetKf;
         }
+
+        /** h = (D - d)/2: the largest fillet tangent to both the smaller diameter and the shoulder face. */
+        @JsonIgnore
+        public double stepHeight() { return (bigD - smallD) / 2; }
 
         @JsonProperty("D")
         public double bigD() { return bigD; }
@@ -184,8 +205,10 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
     /**
      * The corner of the part that seats against this fillet.
      *
-     * @param corner {@code chamfer} or {@code radius}
-     * @param size the mating part's minimum chamfer leg or minimum corner radius, > 0
+     * @param corner {@code chamfer}, {@code radius} or {@code bearing} (a rolling bearing's ring corner)
+     * @param size the mating part's minimum chamfer leg or minimum corner radius, or for a bearing the ring's
+     *     smallest chamfer dimension r<sub>s min</sub> (the largest fillet then comes from the pack's bearing
+     *     table), > 0
      * @param angle chamfer angle in degrees from the seating face, default 45
      */
     @JsonInclude(JsonInclude.Include.NON_NULL)
@@ -194,8 +217,11 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
         public MatingCorner(@JsonProperty(value = "corner", required = true) String corner,
                             @JsonProperty(value = "size", required = true) double size,
                             @JsonProperty("angle") Double angle) {
-            if (!"chamfer".equals(corner) && !"radius".equals(corner)) {
-                throw new IllegalArgumentException("corner must be chamfer or radius, got '" + corner + "'");
+            if (!"chamfer".equals(corner) && !"radius".equals(corner) && !"bearing".equals(corner)) {
+                throw new IllegalArgumentException("corner must be chamfer, radius or bearing, got '" + corner + "'");
+            }
+            if (angle != null && !"chamfer".equals(corner)) {
+                throw new IllegalArgumentException("angle applies only to a chamfer corner");
             }
             if (!(Double.isFinite(size) && size > 0)) {
                 throw new IllegalArgumentException("size must be greater than zero, got " + size);

@@ -197,7 +197,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
             featureCautions.addAll(r.cautions());
             for (String fc : featureCautions) byCaution.computeIfAbsent(fc, k -> new ArrayList<>()).add(f.id());
             sections.add(new FeatureSection(f.id(), heading, caseLine, r.callout(), text.line(r.callout(), false),
-                    text.line(r.callout(), true), text.words(r.callout()), r.because(), Figures.of(r.numbers(), text),
+                    text.line(r.callout(), true), text.words(r.callout()), r.because(), Figures.of(r.numbers().asMap(), text),
                     featureCautions, r.references(), r.notes(), fill(templates, "callout-note", ctx, f),
                     fill(templates, "inspection-plan", ctx, f), inspection(f.inspection(), ctx), r.demoted(), ""));
         }

@@ -17,8 +17,11 @@ import java.util.Optional;
  * @param title what the table is
  * @param source where the values come from ({@code common practice} for the built-in one)
  * @param processes for each process key, steps of nominal radius (mm) and the ± value (mm)
+ * @param rowSources for each process key, where its row comes from (a source named, or common practice); a
+ *     process without one falls back to {@code source}
  */
-public record CapabilityTable(String id, String title, String source, Map<String, List<Step>> processes) {
+public record CapabilityTable(String id, String title, String source, Map<String, List<Step>> processes,
+                              Map<String, String> rowSources) {
 
     /** The id of the built-in table. */
     public static final String DEFAULT_ID = "process-capability";
@@ -27,7 +30,8 @@ public record CapabilityTable(String id, String title, String source, Map<String
     public CapabilityTable(@JsonProperty(value = "id", required = true) String id,
                            @JsonProperty(value = "title", required = true) String title,
                            @JsonProperty(value = "source", required = true) String source,
-                           @JsonProperty(value = "processes", required = true) Map<String, List<Step>> processes) {
+                           @JsonProperty(value = "processes", required = true) Map<String, List<Step>> processes,
+                           @JsonProperty("rowSources") Map<String, String> rowSources) {
         for (var e : processes.entrySet()) {
             Process.fromKey(e.getKey());
             List<Step> steps = e.getValue();
@@ -50,6 +54,13 @@ public record CapabilityTable(String id, String title, String source, Map<String
         this.title = title;
         this.source = source;
         this.processes = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(processes));
+        if (rowSources != null) rowSources.keySet().forEach(Process::fromKey);
+        this.rowSources = rowSources == null ? Map.of() : Map.copyOf(rowSources);
+    }
+
+    /** Where the row of {@code process} comes from: its own source, else the table's. */
+    public String sourceFor(Process process) {
+        return rowSources.getOrDefault(process.key(), source);
     }
 
     /** The ± value in mm for a radius of {@code radiusMm} made by {@code process}, if the table covers it. */

@@ -32,7 +32,7 @@ public final class CaseTable {
     public static final List<String> COLUMNS = List.of("feature", "units", "standard", "kind", "nominalRadius",
             "function", "loading", "formMatters", "locationMatters", "datums", "process", "tolerance", "stress.shape",
             "stress.load", "stress.D", "stress.d", "stress.ultimateStrength", "stress.targetKt", "mating.corner",
-            "mating.size", "mating.angle", "cornerAngle");
+            "mating.size", "mating.angle", "cornerAngle", "stress.targetKf");
     /** Columns every table needs. */
     public static final List<String> REQUIRED = List.of("feature", "units", "standard", "kind", "nominalRadius",
             "function", "process");
@@ -147,8 +147,11 @@ public final class CaseTable {
                 DesignCase.Strength strength = su == null ? null : new DesignCase.Strength(number(su), "MPa");
                 field = "stress.targetKt";
                 String kt = text(v, "stress.targetKt");
+                field = "stress.targetKf";
+                String kf = text(v, "stress.targetKf");
                 field = "stress.shape";
-                stress = new DesignCase.StressInputs(shape, load, bigD, smallD, strength, kt == null ? null : number(kt));
+                stress = new DesignCase.StressInputs(shape, load, bigD, smallD, strength, kt == null ? null : number(kt),
+                        kf == null ? null : number(kf));
             }
             field = "mating.corner";
             DesignCase.MatingCorner mating = null;

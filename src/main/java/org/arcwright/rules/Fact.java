@@ -43,8 +43,9 @@ public enum Fact {
             c -> c.stress() == null || c.stress().ultimateStrength() == null ? null
                     : c.stress().ultimateStrength().megapascals()),
     STRESS_TARGET_KT("stress.targetKt", Type.NUMBER, List.of(), c -> c.stress() == null ? null : c.stress().targetKt()),
+    STRESS_TARGET_KF("stress.targetKf", Type.NUMBER, List.of(), c -> c.stress() == null ? null : c.stress().targetKf()),
     MATING("mating", Type.PRESENCE, List.of(), c -> c.mating() == null ? null : Boolean.TRUE),
-    MATING_CORNER("mating.corner", Type.TEXT, List.of("chamfer", "radius"),
+    MATING_CORNER("mating.corner", Type.TEXT, List.of("chamfer", "radius", "bearing"),
             c -> c.mating() == null ? null : c.mating().corner()),
     MATING_SIZE("mating.size", Type.NUMBER, List.of(), c -> c.mating() == null ? null : c.mating().size()),
     TOLERANCE("tolerance", Type.TEXT, List.of(), DesignCase::tolerance);

@@ -15,8 +15,16 @@ public interface FilletChecks {
     /** K<sub>t</sub> (and K<sub>f</sub> with a strength) at {@code rMin} and {@code rMax}; needs the case's stress section. */
     Optional<StressFigures> stress(DesignCase c, double rMin, double rMax);
 
-    /** The smallest radius that keeps the case's target (K<sub>f</sub> with a strength, else K<sub>t</sub>). */
+    /** The smallest radius that keeps the case's governing stress target (the largest of {@link #minimumRadii}). */
     Optional<MinimumRadiusFigure> minimumRadius(DesignCase c);
+
+    /**
+     * The smallest radius for each stress target the case states ({@code targetKt} as K<sub>t</sub>,
+     * {@code targetKf} as K<sub>f</sub>); by default the single governing figure.
+     */
+    default List<MinimumRadiusFigure> minimumRadii(DesignCase c) {
+        return minimumRadius(c).map(List::of).orElse(List.of());
+    }
 
     /** Whether a fillet of radius up to {@code rMax} lets the mating part seat; needs the case's mating corner. */
     Optional<SeatingFigure> seating(DesignCase c, double rMax);

@@ -73,31 +73,55 @@ public final class MechanicsChecks implements FilletChecks {
                 r.withinFit() && top == rMax, method, notes));
     }
 
+    /** The governing floor of {@link #minimumRadii}: the largest radius any target asks for, or the first unmet one. */
     @Override
     public Optional<MinimumRadiusFigure> minimumRadius(DesignCase c) {
-        DesignCase.StressInputs s = c.stress();
-        if (s == null || s.targetKt() == null) return Optional.empty();
-        UltimateStrength strength = strength(s);
-        String factor = strength == null ? "Kt" : "Kf";
-        if (s.targetKt() <= 1) {
-            return Optional.of(new MinimumRadiusFigure(factor, s.targetKt(), false, Double.NaN,
-                    "a target of 1 means no notch at all; no fillet meets it"));
+        List<MinimumRadiusFigure> all = minimumRadii(c);
+        MinimumRadiusFigure best = null;
+        for (MinimumRadiusFigure m : all) {
+            if (!m.found()) return Optional.of(m);
+            if (best == null || m.radius() > best.radius()) best = m;
         }
-        StressTarget target = strength == null ? StressTarget.kt(s.targetKt()) : StressTarget.kf(s.targetKt());
-        double h = (s.bigD() - s.smallD()) / 2;
+        return Optional.ofNullable(best);
+    }
+
+    /**
+     * One floor per target the case states: {@code targetKt} is always a K<sub>t</sub> target (geometry only),
+     * {@code targetKf} a K<sub>f</sub> target through the notch sensitivity of the stated strength.
+     */
+    @Override
+    public List<MinimumRadiusFigure> minimumRadii(DesignCase c) {
+        DesignCase.StressInputs s = c.stress();
+        if (s == null) return List.of();
+        List<MinimumRadiusFigure> out = new ArrayList<>(2);
+        if (s.targetKt() != null) out.add(floor(c, s, "Kt", s.targetKt()));
+        if (s.targetKf() != null) out.add(floor(c, s, "Kf", s.targetKf()));
+        return out;
+    }
+
+    private MinimumRadiusFigure floor(DesignCase c, DesignCase.StressInputs s, String factor, double value) {
+        if (value <= 1) {
+            return new MinimumRadiusFigure(factor, value, false, Double.NaN,
+                    "a target of 1 means no notch at all; no fillet meets it");
+        }
+        UltimateStrength strength = strength(s);
+        StressTarget target = "Kt".equals(factor) ? StressTarget.kt(value) : StressTarget.kf(value);
+        double h = s.stepHeight();
         FilletStressCase probe = FilletStressCase.of(shape(s), load(s), c.units(), s.bigD(), s.smallD(),
                 Math.min(c.nominalRadius(), h), strength);
         MinimumRadius m = stress.minimumRadius(probe, target);
-        return Optional.of(new MinimumRadiusFigure(factor, s.targetKt(), m.found(), m.radius(), m.message()));
+        return new MinimumRadiusFigure(factor, value, m.found(), m.radius(), m.message());
     }
 
     @Override
     public Optional<SeatingFigure> seating(DesignCase c, double rMax) {
         DesignCase.MatingCorner m = c.mating();
         if (m == null) return Optional.empty();
-        MatingCorner corner = "chamfer".equals(m.corner())
-                ? new MatingCorner.Chamfer(m.size(), m.angle() == null ? 45.0 : m.angle())
-                : new MatingCorner.Radius(m.size());
+        MatingCorner corner = switch (m.corner()) {
+            case "chamfer" -> new MatingCorner.Chamfer(m.size(), m.angle() == null ? 45.0 : m.angle());
+            case "bearing" -> new MatingCorner.Bearing(m.size() * c.units().millimetres());
+            default -> new MatingCorner.Radius(m.size());
+        };
         CornerClearance cc;
         try {
             cc = clearance.check(new ClearanceCase(c.units(), rMax, rMax, corner, null, 0.0, null));

@@ -52,7 +52,12 @@ public final class NoteContext {
         m.put("unitsWord", worksheet.units() == Units.MM ? "MILLIMETRES" : "INCHES");
         PartWorksheet.TitleBlock tb = worksheet.titleBlock();
         m.put("titleBlock", map("table", nz(tb.table()), "toleranceClass", nz(tb.toleranceClass()),
-                "text", CalloutText.tableText(tb.table(), tb.toleranceClass())));
+                "text", CalloutText.tableText(tb.table(), tb.toleranceClass()),
+                // ISO 2768-1:1989: an internal fillet radius is a linear size (Table 1); only external radii and
+                // chamfer heights are broken edges (Table 2); the standard's own advice is to say so on the drawing
+                "radiiTables", tb.table() != null && tb.table().startsWith("iso2768-1")
+                        ? "INTERNAL FILLET RADII AS LINEAR SIZES (ISO 2768-1 TABLE 1), EXTERNAL RADII AND CHAMFER HEIGHTS "
+                        + "AS BROKEN EDGES (TABLE 2)" : ""));
         List<Map<String, Object>> all = new ArrayList<>();
         List<Map<String, Object>> decided = new ArrayList<>();
         List<Map<String, Object>> edges = new ArrayList<>();
@@ -121,7 +126,7 @@ public final class NoteContext {
             m.put("because", r.because());
             m.put("cautions", r.cautions());
             m.put("references", r.references());
-            m.put("figures", figures(r.numbers()));
+            m.put("figures", figures(r.numbers().asMap()));
             List<Map<String, Object>> notes = new ArrayList<>();
             for (NoteLink n : r.notes()) notes.add(map("id", nz(n.id()), "title", nz(n.title()), "pack", nz(n.pack())));
             m.put("notes", notes);

@@ -25,6 +25,27 @@ class GeneralToleranceCommandTest {
     }
 
     @Test
+    void aFilletRadiusIsALinearSizeAndARoundABrokenEdge() throws Exception {
+        // ISO 2768-1:1989: an internal fillet radius is a linear size, Table 1, R4 class m (over 3 up to 6): ±0.1;
+        // an external round is a broken edge, Table 2, same range and class: ±0.5
+        JsonNode fillet = json.readTree(CliRun.of("general-tolerance", "--class", "m", "--radius", "4", "--blend", "fillet",
+                "--format", "json").out());
+        assertThat(fillet.get("tolerance").asDouble()).isEqualTo(0.1);
+        assertThat(fillet.get("table").asText()).isEqualTo("iso2768-1-linear");
+        JsonNode round = json.readTree(CliRun.of("general-tolerance", "--class", "m", "--radius", "4", "--blend", "round",
+                "--format", "json").out());
+        assertThat(round.get("tolerance").asDouble()).isEqualTo(0.5);
+        // without --blend both readings are named
+        CliRun both = CliRun.of("general-tolerance", "--class", "m", "--radius", "4");
+        assertThat(both.out()).contains("±0.5 mm", "internal fillet radius it is a linear size: ±0.1 mm", "--blend");
+        JsonNode bothJson = json.readTree(CliRun.of("general-tolerance", "--class", "m", "--radius", "4", "--format", "json")
+                .out());
+        assertThat(bothJson.get("asInternalFillet").get("tolerance").asDouble()).isEqualTo(0.1);
+        assertThat(CliRun.of("general-tolerance", "--class", "m", "--linear", "4", "--blend", "fillet").exitCode())
+                .isEqualTo(Cli.BAD_INPUT);
+    }
+
+    @Test
     void linearAndAngularUseTheirOwnTables() throws Exception {
         // ISO 2768-1:1989 Table 1: class c, over 120 up to 400 mm: ±1.2.
         assertThat(json.readTree(CliRun.of("general-tolerance", "--class", "c", "--linear", "250", "--format", "json")

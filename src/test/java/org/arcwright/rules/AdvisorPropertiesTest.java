@@ -54,10 +54,15 @@ class AdvisorPropertiesTest {
     void everyCaseGetsAtLeastOneRecommendationRankedBestFirst(@ForAll("cases") DesignCase c) {
         Advice a = new Advisor(BOOK, FilletChecks.NONE, NoteLinker.NONE).advise(c);
         assertThat(a.recommendations()).isNotEmpty();
+        // needs first: usable, then meets every need but demoted, then the rest; within a class fewer drawing
+        // elements, then the higher pack weight
         for (int i = 1; i < a.recommendations().size(); i++) {
             Recommendation prev = a.recommendations().get(i - 1);
             Recommendation r = a.recommendations().get(i);
-            if (prev.demoted() == r.demoted()) assertThat(prev.score()).isGreaterThanOrEqualTo(r.score());
+            assertThat(needsClass(prev)).isLessThanOrEqualTo(needsClass(r));
+            if (needsClass(prev) == needsClass(r) && elements(prev) == elements(r)) {
+                assertThat(prev.score()).isGreaterThanOrEqualTo(r.score());
+            }
         }
     }
 
@@ -65,10 +70,17 @@ class AdvisorPropertiesTest {
     void limitsArePositiveAndOrdered(@ForAll("cases") DesignCase c) {
         Advice a = new Advisor(BOOK, FilletChecks.NONE, NoteLinker.NONE).advise(c);
         for (Recommendation r : a.recommendations()) {
-            double min = (Double) r.numbers().get("min");
-            double max = (Double) r.numbers().get("max");
+            double min = (Double) r.numbers().asMap().get("min");
+            double max = (Double) r.numbers().asMap().get("max");
             assertThat(min).isPositive();
             assertThat(max).isGreaterThan(min);
         }
     }
+
+    private static int needsClass(Recommendation r) {
+        boolean all = Boolean.TRUE.equals(r.meetsAll());
+        return all ? (r.demoted() ? 1 : 0) : (r.demoted() ? 3 : 2);
+    }
+
+    private static int elements(Recommendation r) { return r.refinement() == null ? 1 : 2; }
 }

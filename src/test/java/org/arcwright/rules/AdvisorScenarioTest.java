@@ -44,14 +44,14 @@ class AdvisorScenarioTest {
     @CsvSource(delimiter = '|', textBlock = """
             # A fatigue shoulder on an ASME drawing: CR, because it bounds every local radius (ASME Y14.5-2018 CR definition, from memory).
             stress-relief | fatigue | asme | fillet | true  | false | -   | machined | stress-relief.fatigue.asme-cr        | controlled-radius
-            # The same shoulder with datums and location: fatigue still governs, CR stays first.
-            stress-relief | fatigue | asme | fillet | true  | true  | A B | machined | stress-relief.fatigue.asme-cr        | controlled-radius
-            # ISO has no CR: a limit radius with the band above the nominal.
-            stress-relief | fatigue | iso  | fillet | false | false | -   | machined | stress-relief.fatigue.iso-limits     | radius
+            # The same shoulder with datums and location: the location need rules CR out (it cannot locate); the composite locates and bounds form (needs first).
+            stress-relief | fatigue | asme | fillet | true  | true  | A B | machined | stress-relief.located-form.composite | composite-profile
+            # ISO has no CR, and fatigue needs form (a flat is a sharper local radius): the floating profile, not the limit radius.
+            stress-relief | fatigue | iso  | fillet | false | false | -   | machined | stress-relief.fatigue.iso-profile-form | profile
             # ISO and the shape matters: profile without datums bounds size and form (ISO 1101).
             stress-relief | fatigue | iso  | fillet | true  | false | -   | machined | stress-relief.fatigue.iso-profile-form | profile
-            # ISO, shape and location matter, datums exist: still the form profile first; the composite ranks below it.
-            stress-relief | fatigue | iso  | fillet | true  | true  | A   | machined | stress-relief.fatigue.iso-profile-form | profile
+            # ISO, shape and location matter, datums exist: the floating form profile cannot locate; the composite meets both needs.
+            stress-relief | fatigue | iso  | fillet | true  | true  | A   | machined | stress-relief.located-form.composite | composite-profile
             # Static, nothing else matters: a ± radius bounds size and that is enough.
             stress-relief | static  | asme | fillet | false | false | -   | machined | stress-relief.static.radius          | radius
             # Static, shape matters, ASME: CR is the cheapest form control.
@@ -76,8 +76,8 @@ class AdvisorScenarioTest {
             sealing       | none    | asme | fillet | true  | true  | A B | machined | sealing.located-form.composite       | composite-profile
             # Mating fillet: the maximum decides seating, so the band goes below the nominal.
             mating        | static  | asme | fillet | false | false | -   | machined | mating.fillet.max-radius             | radius
-            # Mating fillet with datums and location: seating still governs first.
-            mating        | static  | iso  | fillet | false | true  | A B | machined | mating.fillet.max-radius             | radius
+            # Mating fillet with datums and location: a limit radius cannot locate; the located profile also has its largest radius checked.
+            mating        | static  | iso  | fillet | false | true  | A B | machined | mating.located.profile-datums        | profile
             # Mating fillet whose shape matters, ASME: CR with the band below the nominal.
             mating        | static  | asme | fillet | true  | false | -   | machined | mating.form.asme-cr                  | controlled-radius
             # Mating fillet whose shape matters, ISO: floating profile.
@@ -86,14 +86,16 @@ class AdvisorScenarioTest {
             mating        | static  | iso  | round  | false | false | -   | machined | mating.round.min-radius              | radius
             # Cosmetic edge, ASME: title-block general tolerance (ISO 2768-1 Table 2).
             cosmetic      | none    | asme | round  | false | false | -   | machined | cosmetic.asme.title-block            | general
-            # Cosmetic edge, ISO: general tolerance with an ISO 13715 edge indication.
+            # Cosmetic edge, ISO, cast: general tolerance (the castings table, not ISO 2768-1) with an ISO 13715 edge indication.
             cosmetic      | none    | iso  | round  | false | false | -   | cast     | cosmetic.iso.edge-note               | general
             # Cosmetic with datums changes nothing: the title block still covers it.
             cosmetic      | none    | iso  | fillet | false | false | A   | machined | cosmetic.iso.edge-note               | general
             # Cosmetic but shaped (appearance part): floating profile.
             cosmetic      | none    | asme | round  | true  | false | -   | molded   | cosmetic.form.profile                | profile
-            # A "cosmetic" edge that carries load is given a radius with limits.
-            cosmetic      | fatigue | iso  | round  | false | false | -   | forged   | cosmetic.loaded.radius               | radius
+            # A "cosmetic" edge under fatigue load needs form: a floating profile.
+            cosmetic      | fatigue | iso  | round  | false | false | -   | forged   | cosmetic.fatigue.form                | profile
+            # A "cosmetic" edge under static load is given a radius with limits.
+            cosmetic      | static  | iso  | round  | false | false | -   | forged   | cosmetic.loaded.radius               | radius
             """)
     void builtInPracticeRanksTheExpectedControlFirst(String function, String loading, String standard, String kind,
                                                      boolean form, boolean location, String datums, String process,
@@ -141,9 +143,9 @@ class AdvisorScenarioTest {
         Callout.Profile p = (Callout.Profile) r.callout();
         assertThat(p.datums()).extracting(dr -> dr.label()).containsExactly("A", "B");
         assertThat(p.extent().kind()).isEqualTo(Extent.Kind.WITH_ADJACENT);
-        // cast R2: ±0.3 mm (capability table, common practice); the zone holding the same radius band at a 90° corner
-        // is 2 × 0.3 × (1/sin 45° − 1) = 0.2485, rounded up to 0.25
-        assertThat(r.text()).isEqualTo("|⌓|0.25|A|B| on the radius and its adjacent surfaces");
+        // cast R2: ±0.6 mm (capability table: ISO 8062-3 DCTG 10, from memory); the zone holding the same radius band
+        // at a 90° corner is 2 × 0.6 × (1/sin 45° − 1) = 0.4971, rounded up to 0.5
+        assertThat(r.text()).isEqualTo("|⌓|0.5|A|B| on the radius and its adjacent surfaces");
     }
 
     @Test
@@ -173,7 +175,7 @@ class AdvisorScenarioTest {
         assertThat(cr.max()).isEqualTo(2.2);
         assertThat(r.text()).isEqualTo("CR2 +0.2/0");
         // crescent at 90°: (rmax - rmin)(1/sin 45° - 1) = 0.2 × 0.41421 (the CrescentZone construction)
-        assertThat((Double) r.numbers().get("crescentWidth")).isCloseTo(0.2 * (Math.sqrt(2) - 1), org.assertj.core.data.Offset.offset(1e-6));
+        assertThat((Double) r.numbers().asMap().get("crescentWidth")).isCloseTo(0.2 * (Math.sqrt(2) - 1), org.assertj.core.data.Offset.offset(1e-6));
     }
 
     @Test
@@ -181,7 +183,7 @@ class AdvisorScenarioTest {
         // ISO 2768-1:1989 Table 2: 0.5 to 3 mm, class m: ±0.2 mm
         Recommendation r = advisor.advise(scenario("cosmetic", "none", "iso", "round", false, false, "-", "machined"))
                 .first().orElseThrow();
-        assertThat(r.numbers()).containsEntry("min", 1.8).containsEntry("max", 2.2);
+        assertThat(r.numbers().asMap()).containsEntry("min", 1.8).containsEntry("max", 2.2);
         assertThat(((Callout.General) r.callout()).edgeNote()).contains("ISO 13715");
     }
 
@@ -189,7 +191,7 @@ class AdvisorScenarioTest {
     void belowTheSmallestIso2768RangeTheTitleBlockIsDemotedAndALimitRadiusComesFirst() {
         // ISO 2768-1:1989 Table 2 starts at 0.5 mm: smaller radii get their deviations stated next to the size
         DesignCase c = new DesignCase(Units.MM, DrawingStyle.ISO, null, BlendKind.ROUND, 0.3, BlendFunction.COSMETIC,
-                Loading.NONE, false, false, List.of(), Process.MOLDED, null, null, null);
+                Loading.NONE, false, false, List.of(), Process.MACHINED, null, null, null);
         Advice a = advisor.advise(c);
         assertThat(a.first().orElseThrow().ruleId()).isEqualTo("fallback.limits");
         assertThat(a.recommendations()).filteredOn(r -> r.callout() instanceof Callout.General)

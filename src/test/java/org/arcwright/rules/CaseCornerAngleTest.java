@@ -72,9 +72,9 @@ class CaseCornerAngleTest {
         Recommendation obtuse = advisor.advise(seal(120.0)).first().orElseThrow();
         assertThat(((Callout.Profile) square.callout()).zone()).isEqualTo(0.09);
         assertThat(((Callout.Profile) obtuse.callout()).zone()).isEqualTo(0.04);
-        assertThat((Double) obtuse.numbers().get("min")).isCloseTo(1.871, within(0.001));
-        assertThat((Double) obtuse.numbers().get("max")).isCloseTo(2.129, within(0.001));
-        assertThat(obtuse.numbers()).containsEntry("angle", 120.0);
+        assertThat((Double) obtuse.numbers().asMap().get("min")).isCloseTo(1.871, within(0.001));
+        assertThat((Double) obtuse.numbers().asMap().get("max")).isCloseTo(2.129, within(0.001));
+        assertThat(obtuse.numbers().asMap()).containsEntry("angle", 120.0);
     }
 
     @Test
@@ -85,7 +85,7 @@ class CaseCornerAngleTest {
         Recommendation square = advisor.advise(base).first().orElseThrow();
         Recommendation acute = advisor.advise(base.withCornerAngle(60.0)).first().orElseThrow();
         assertThat(square.text()).isEqualTo(acute.text()).isEqualTo("CR2 +0.2/0");
-        assertThat((Double) square.numbers().get("crescentWidth")).isCloseTo(0.0828, within(1e-4));
-        assertThat((Double) acute.numbers().get("crescentWidth")).isCloseTo(0.2, within(1e-4));
+        assertThat((Double) square.numbers().asMap().get("crescentWidth")).isCloseTo(0.0828, within(1e-4));
+        assertThat((Double) acute.numbers().asMap().get("crescentWidth")).isCloseTo(0.2, within(1e-4));
     }
 }

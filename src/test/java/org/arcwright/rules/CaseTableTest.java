@@ -25,7 +25,7 @@ class CaseTableTest {
     @Test
     void readsEveryColumnIncludingNestedStressAndMating() throws Exception {
         List<CaseTable.Row> rows = CaseTable.read(csv(String.join(",", CaseTable.COLUMNS) + "\n"
-                + "F1,mm,asme,fillet,2,stress-relief,fatigue,yes,no,A B,machined,R2 ±0.2,stepped-shaft,bending,42,35,900,1.6,radius,1.1,,120\n"));
+                + "F1,mm,asme,fillet,2,stress-relief,fatigue,yes,no,A B,machined,R2 ±0.2,stepped-shaft,bending,42,35,900,1.6,radius,1.1,,120,1.5\n"));
         DesignCase c = rows.get(0).designCase();
         assertThat(rows.get(0).line()).isEqualTo(2);
         assertThat(c.formMatters()).isTrue();
@@ -33,6 +33,7 @@ class CaseTableTest {
         assertThat(c.stress().bigD()).isEqualTo(42);
         assertThat(c.stress().ultimateStrength().megapascals()).isEqualTo(900);
         assertThat(c.stress().targetKt()).isEqualTo(1.6);
+        assertThat(c.stress().targetKf()).isEqualTo(1.5);
         assertThat(c.mating().size()).isEqualTo(1.1);
         assertThat(c.tolerance()).isEqualTo("R2 ±0.2");
         assertThat(c.cornerAngle()).isEqualTo(120.0);

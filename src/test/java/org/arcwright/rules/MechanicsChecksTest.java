@@ -50,10 +50,10 @@ class MechanicsChecksTest {
     void fatigueShoulderUnderItsKfTargetHasItsMinimumRaisedAndStaysUnderTheStepHeight() {
         Recommendation r = advisor.advise(feature("F1")).first().orElseThrow();
         Callout.ControlledRadius cr = (Callout.ControlledRadius) r.callout();
-        double minNeeded = (Double) r.numbers().get("minRadiusForTarget");
+        double minNeeded = (Double) r.numbers().asMap().get("minRadiusForTarget");
         assertThat(cr.min()).isGreaterThanOrEqualTo(minNeeded);
         assertThat(cr.max()).isLessThanOrEqualTo(3.5); // h = (42 - 35)/2
-        assertThat((Double) r.numbers().get("kfAtMin")).isLessThanOrEqualTo(1.6 + 1e-6);
+        assertThat((Double) r.numbers().asMap().get("kfAtMin")).isLessThanOrEqualTo(1.6 + 1e-6);
         assertThat(r.cautions()).anySatisfy(c -> assertThat(c).startsWith("Limits adjusted"));
     }
 
@@ -65,15 +65,24 @@ class MechanicsChecksTest {
                 new NotchSensitivity());
         var point = a.point(FilletStressCase.of(ShoulderShape.STEPPED_SHAFT, LoadCase.BENDING, Units.MM, 42, 35, min,
                 UltimateStrength.ofMpa(900)), min);
-        assertThat((Double) r.numbers().get("ktAtMin")).isCloseTo(point.kt().kt(), org.assertj.core.data.Offset.offset(1e-6));
+        assertThat((Double) r.numbers().asMap().get("ktAtMin")).isCloseTo(point.kt().kt(), org.assertj.core.data.Offset.offset(1e-6));
     }
 
     @Test
     void bearingSeatFilletUnderALargerMatingRadiusSeatsWithItsMargin() {
         // fillet 0.70-0.80 under a mating radius of 1.1 min: margin 1.1 - 0.8 = 0.3 (ASME/ISO-neutral geometry, decision 0802)
-        Recommendation r = advisor.advise(feature("F2")).first().orElseThrow();
-        assertThat(r.numbers()).containsEntry("seats", true);
-        assertThat((Double) r.numbers().get("seatingMargin")).isCloseTo(0.3, org.assertj.core.data.Offset.offset(1e-9));
+        Advice a = advisor.advise(feature("F2"));
+        Recommendation r = a.recommendations().stream().filter(x -> x.ruleId().equals("mating.fillet.max-radius"))
+                .findFirst().orElseThrow();
+        assertThat(r.numbers().asMap()).containsEntry("seats", true);
+        assertThat((Double) r.numbers().asMap().get("seatingMargin")).isCloseTo(0.3, org.assertj.core.data.Offset.offset(1e-9));
+        // F2's location matters and it has datums A B: the located profile ranks first, its largest admitted radius
+        // checked the same way (margin 1.1 minus that radius)
+        Recommendation first = a.first().orElseThrow();
+        assertThat(first.ruleId()).isEqualTo("mating.located.profile-datums");
+        assertThat(first.meetsAll()).isTrue();
+        assertThat(first.numbers().seatingMargin()).isCloseTo(1.1 - first.numbers().max(),
+                org.assertj.core.data.Offset.offset(1e-6));
     }
 
     @Test
@@ -85,7 +94,7 @@ class MechanicsChecksTest {
         Callout.Radius rad = (Callout.Radius) r.callout();
         // a 45° chamfer with legs 0.9 admits fillets up to 0.9 (both legs equal; common practice, decision 0802)
         assertThat(rad.max()).isEqualTo(0.9);
-        assertThat(r.numbers()).containsEntry("seats", true);
+        assertThat(r.numbers().asMap()).containsEntry("seats", true);
     }
 
     @Test

@@ -39,7 +39,7 @@ final class RecommendationCard extends Card {
             preview.setToolTipText("The feature control frame as drawn");
             add(preview, "span 2, left, growx, wmin 10, wmax " + frame.getWidth() + ", gaptop 2, gapbottom 2");
         }
-        List<CardFigures.Figure> figures = CardFigures.of(r.numbers(), style);
+        List<CardFigures.Figure> figures = CardFigures.of(r.numbers().asMap(), style);
         if (!figures.isEmpty()) {
             JPanel grid = new JPanel(new MigLayout("insets 0, wrap 2, gap 10 2", "[45%,fill][55%,fill]", ""));
             grid.setOpaque(false);

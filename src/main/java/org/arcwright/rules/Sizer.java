@@ -1,0 +1,176 @@
+package org.arcwright.rules;
+
+import java.math.BigDecimal;
+import java.util.List;
+import java.util.Optional;
+import org.arcwright.io.InputProblem;
+import org.arcwright.model.BlendKind;
+import org.arcwright.model.DesignCase;
+import org.arcwright.model.Process;
+import org.arcwright.rules.CalloutPlan.CalloutKind;
+import org.arcwright.tolerance.CalloutParser;
+import org.arcwright.tolerance.GeneralTolerance;
+import org.arcwright.tolerance.GeneralToleranceTable;
+import org.arcwright.tolerance.RadiusCallout;
+import org.arcwright.tolerance.Units;
+
+/**
+ * Sizes a candidate's radius band: from the engineer's intent, the process capability table, or the title-block
+ * general tolerance that covers the process and the blend kind.
+ *
+ * <p>Which title-block table: ISO 2768-1 covers parts made by metal removal or formed from sheet metal (its
+ * scope clause, from memory). Within it an internal fillet radius is a linear size (Table 1) and only external
+ * radii and chamfer heights are broken edges (Table 2). Cast and moulded radii take the pack's castings or
+ * mouldings table instead ({@link #CASTINGS_TABLE}, {@link #MOULDINGS_TABLE}); forged and additive radii have no
+ * shipped title-block table and are sized from the process capability.
+ */
+final class Sizer {
+    /** ISO 2768-1 Table 2: broken edges (external radii and chamfer heights). */
+    static final String ISO_EDGES = "iso2768-1-radius-chamfer";
+    /** ISO 2768-1 Table 1: linear sizes, which an internal fillet radius is. */
+    static final String ISO_LINEAR = "iso2768-1-linear";
+    /** The pack's general tolerance for cast radii. */
+    static final String CASTINGS_TABLE = "castings-radius-general";
+    /** The pack's general tolerance for moulded radii. */
+    static final String MOULDINGS_TABLE = "mouldings-radius-general";
+
+    private final RuleBook book;
+
+    Sizer(RuleBook book) { this.book = book; }
+
+    /** Decimal places of the case's figures: at least 2 (mm) or 3 (inch), more when the nominal has more. */
+    static int places(DesignCase c) {
+        int nominalPlaces = Math.max(0, BigDecimal.valueOf(c.nominalRadius()).stripTrailingZeros().scale());
+        return Math.max(c.units() == Units.INCH ? 3 : 2, nominalPlaces);
+    }
+
+    /**
+     * The title-block table that covers this case, given the table a plan names: an ISO 2768-1 table is swapped
+     * for the one that fits the blend kind, or for the pack's castings/mouldings table when the process is not
+     * covered by ISO 2768-1. Other tables (a company's own) are taken as named.
+     */
+    static String coveringTable(String named, DesignCase c) {
+        if (named == null || !named.startsWith("iso2768-1")) return named;
+        if (c.process() == Process.CAST) return CASTINGS_TABLE;
+        if (c.process() == Process.MOLDED) return MOULDINGS_TABLE;
+        return c.kind() == BlendKind.FILLET ? ISO_LINEAR : ISO_EDGES;
+    }
+
+    /** True when the process is one ISO 2768-1 covers (metal removal, sheet metal). */
+    static boolean iso2768Covers(Process p) {
+        return p == Process.MACHINED || p == Process.SHEET_METAL;
+    }
+
+    void size(Draft d, List<String> cautions) {
+        DesignCase c = d.c;
+        CalloutPlan plan = d.plan;
+        double mmPer = c.units().millimetres();
+        double nomMm = c.nominalRadius() * mmPer;
+        CalloutPlan.Sizing s = plan.size();
+        if (s.basis() == CalloutPlan.Basis.INTENT && c.tolerance() != null) {
+            RadiusCallout rc = CalloutParser.parse(c.tolerance(), c.units(), "tolerance");
+            if (rc.isFullyToleranced()) {
+                d.fromIntent(rc);
+                return;
+            }
+            cautions.add("The tolerance given (" + c.tolerance() + ") does not bound both ends; the process capability "
+                    + "sizes it instead.");
+        }
+        if (s.basis() == CalloutPlan.Basis.GENERAL || plan.callout() == CalloutKind.GENERAL) {
+            String named = plan.table() == null ? ISO_EDGES : plan.table();
+            String tableId = coveringTable(named, c);
+            String cls = plan.toleranceClass() == null ? "m" : plan.toleranceClass();
+            Optional<GeneralToleranceTable> table = book.generalTables().byId(tableId);
+            if (table.isPresent() && !table.get().classList().contains(cls) && !tableId.equals(named)) {
+                cls = table.get().classList().get(table.get().classList().size() / 2);
+            }
+            if (!tableId.equals(named)) {
+                cautions.add(tableId.startsWith("iso2768-1")
+                        ? "The title block reads ISO 2768-1 " + (tableId.equals(ISO_LINEAR)
+                        ? "Table 1 (linear sizes) for this internal fillet radius; Table 2 covers only external radii "
+                        + "and chamfer heights (broken edges)." : "Table 2 (broken edges) for this external radius.")
+                        + " State on the title block which table applies to radii."
+                        : "ISO 2768-1 covers machined and sheet-metal parts, not " + c.process().key() + " ones: the "
+                        + c.process().key() + " general tolerance of the pack applies instead; state it on the title block.");
+            }
+            if (table.isPresent()) {
+                try {
+                    GeneralTolerance g = table.get().lookup(cls, nomMm);
+                    String label = generalLabel(table.get(), cls);
+                    d.fromPlusMinus(g.plusMinus() * s.factor() / mmPer, CalloutPlan.Disposition.EQUAL,
+                            label + " ±" + Advisor.plain(g.plusMinus()) + " mm (" + table.get().source() + ")");
+                    d.general(tableId, cls, label);
+                    return;
+                } catch (InputProblem p) {
+                    d.generalMissing = "the general tolerance " + generalLabel(table.get(), cls) + " gives no value at R"
+                            + Advisor.plain(c.nominalRadius()) + " " + c.units().symbol() + " (" + p.problem() + ")";
+                }
+                d.general(tableId, cls, generalLabel(table.get(), cls));
+            } else {
+                d.generalMissing = "no general-tolerance table '" + tableId + "' is loaded";
+                d.general(tableId, cls, tableId + " class " + cls);
+            }
+            if (plan.callout() != CalloutKind.GENERAL) {
+                cautions.add("Sized from the process capability instead: " + d.generalMissing + ".");
+                d.generalMissing = null;
+            }
+        }
+        CapabilityTable cap = book.capability();
+        Optional<Double> t = cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), nomMm);
+        if (t.isPresent()) {
+            d.fromPlusMinus(t.get() * s.factor() / mmPer, s.disposition(), capabilitySource(c, t.get(), s.factor(), cap));
+        } else {
+            d.fromPlusMinus(c.nominalRadius() * 0.1 * s.factor(), s.disposition(),
+                    "10% of the nominal: no process capability entry for " + c.process().key());
+            cautions.add("No process capability entry for " + c.process().key() + "; the tolerance is 10% of the nominal. "
+                    + "Ask the shop what it holds.");
+        }
+    }
+
+    /** The ± value the process holds at a radius, in the case's units, if the table says. */
+    Optional<Double> plusMinus(DesignCase c, double radius) {
+        CapabilityTable cap = book.capability();
+        double mmPer = c.units().millimetres();
+        return cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), radius * mmPer).map(t -> t / mmPer);
+    }
+
+    String capabilitySource(DesignCase c, double plusMinusMm, double factor, CapabilityTable cap) {
+        return "process capability, " + c.process().key() + " at R" + Advisor.plain(c.nominalRadius() * c.units().millimetres())
+                + " mm: ±" + Advisor.plain(plusMinusMm) + " mm" + (factor == 1 ? "" : " × " + Advisor.plain(factor))
+                + " (" + cap.sourceFor(c.process()) + ")";
+    }
+
+    /**
+     * Why the band left by an adjustment cannot be made, if it cannot: it shrank below both what the rule asked
+     * ({@code bandBefore}) and the band the process capability table says the process holds at that size. A band
+     * the rule itself set tighter than the table (a team's deliberate choice) is not second-guessed.
+     */
+    Optional<String> tooTight(Draft d, double bandBefore) {
+        double band = d.hi() - d.lo();
+        if (!(band < bandBefore - 1e-9)) return Optional.empty();
+        CapabilityTable cap = book.capability();
+        DesignCase c = d.c;
+        double mmPer = c.units().millimetres();
+        Optional<Double> t = cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), d.hi() * mmPer);
+        if (t.isEmpty()) return Optional.empty();
+        double holds = 2 * t.get() / mmPer;
+        if (!(band < Math.min(holds, bandBefore) - 1e-9)) return Optional.empty();
+        return Optional.of("narrower than " + c.process().key() + " radii near R" + Advisor.fmt(d.hi(), d.places) + " are held (±"
+                + Advisor.plain(t.get()) + " mm, a band of " + Advisor.fmt(holds, d.places) + "; " + cap.sourceFor(c.process()) + ")");
+    }
+
+    /**
+     * The band the process holds near the step height, when it is wider than the room between {@code minRadius}
+     * and the step height (so no limits fit); empty when limits can fit or nothing says what the process holds.
+     */
+    Optional<Double> roomUnderStep(DesignCase c, double minRadius, double h) {
+        if (!Double.isFinite(h)) return Optional.empty();
+        return plusMinus(c, h).map(t -> 2 * t).filter(band -> band > h - minRadius + 1e-9);
+    }
+
+    static String generalLabel(GeneralToleranceTable table, String cls) {
+        if (table.id().equals(ISO_LINEAR)) return "ISO 2768-" + cls + " (Table 1, linear sizes)";
+        if (table.id().startsWith("iso2768-1")) return "ISO 2768-" + cls;
+        return table.title() + ", class " + cls;
+    }
+}
