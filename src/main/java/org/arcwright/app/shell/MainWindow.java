@@ -37,6 +37,7 @@ import javax.swing.WindowConstants;
 import javax.swing.filechooser.FileNameExtensionFilter;
 import org.arcwright.app.decide.DecidePanel;
 import org.arcwright.app.model.AdviceSource;
+import org.arcwright.app.model.AnswerDrafts;
 import org.arcwright.app.model.Autosaver;
 import org.arcwright.app.model.Command;
 import org.arcwright.app.model.CommandCatalog;
@@ -91,6 +92,7 @@ public final class MainWindow {
     private final JFrame frame = new JFrame("Arcwright");
     private final WorksheetSession session;
     private final DecideForm decideForm = new DecideForm();
+    private final AnswerDrafts answerDrafts = new AnswerDrafts();
     private final CommandCatalog catalog = new CommandCatalog();
     private final StatusLine status = new StatusLine();
     private final NoticeStrip notice = new NoticeStrip();
@@ -207,7 +209,7 @@ public final class MainWindow {
         partPanel = new PartPanel(session, List.of(actions.get("part.add"), actions.get("part.duplicate"),
                 actions.get("part.delete")));
         // the form's sixty-odd controls are built just after the first paint, not before it
-        decideTab = new LazyTab<>("decide", () -> new DecidePanel(decideForm, session, AdviceSource.intentOnly(90),
+        decideTab = new LazyTab<>("decide", () -> new DecidePanel(decideForm, session, answerDrafts, AdviceSource.intentOnly(90),
                 services.background(), status::show), true);
         work.setName("workArea");
         work.addTab("Decide", Icons.get("decide"), decideTab, "The guided form and its recommendations (Alt+2)");
@@ -484,6 +486,12 @@ public final class MainWindow {
     }
 
     private boolean confirmDiscard() {
+        List<String> unkept = decideTab.isBuilt() ? decideTab.panel().unkeptAnswers() : List.of();
+        if (!unkept.isEmpty()) {
+            int answer = JOptionPane.showConfirmDialog(frame, "The answers typed in Decide for " + String.join(", ", unkept)
+                    + " are not kept on the worksheet. Drop them?", "Answers not kept", JOptionPane.OK_CANCEL_OPTION);
+            if (answer != JOptionPane.OK_OPTION) return false;
+        }
         if (!session.isDirty()) return true;
         int answer = JOptionPane.showConfirmDialog(frame, "Save the changes to " + session.title().replace("• ", "") + "?",
                 "Unsaved changes", JOptionPane.YES_NO_CANCEL_OPTION);
