@@ -15,7 +15,7 @@ class ArchitectureTest {
             "org.arcwright.io..", "org.arcwright.tolerance..", "org.arcwright.pack..", "org.arcwright.zone..",
             "org.arcwright.inspect..", "org.arcwright.mechanics..", "org.arcwright.rules..",
             "org.arcwright.notes..", "org.arcwright.templates..", "org.arcwright.callout..",
-            "org.arcwright.worksheet.."};
+            "org.arcwright.worksheet..", "org.arcwright.services.."};
 
     private static JavaClasses classes;
 

@@ -17,6 +17,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
 import java.util.function.Supplier;
 import javax.swing.Action;
 import javax.swing.Icon;
@@ -32,6 +34,7 @@ import javax.swing.JPanel;
 import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
 import javax.swing.JToolBar;
+import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
 import javax.swing.WindowConstants;
 import javax.swing.filechooser.FileNameExtensionFilter;
@@ -53,17 +56,12 @@ import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.notes.NotesPanel;
 import org.arcwright.app.stress.StressViewPanel;
 import org.arcwright.app.practice.PracticeEditorPanel;
-import org.arcwright.mechanics.FilletMechanics;
 import org.arcwright.notes.NotesPaths;
 import org.arcwright.notes.NotesStore;
 import org.arcwright.render.FrameRenderer;
-import org.arcwright.render.SheetExporter;
 import org.arcwright.rules.Advisor;
-import org.arcwright.rules.MechanicsChecks;
-import org.arcwright.rules.NoteLink;
-import org.arcwright.rules.NoteLinker;
-import org.arcwright.rules.RuleBook;
-import org.arcwright.templates.NoteTemplates;
+import org.arcwright.services.Practice;
+import org.arcwright.services.SheetService;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackStack;
 import org.arcwright.tolerance.DrawingStyle;
@@ -595,22 +593,24 @@ public final class MainWindow {
     }
 
     private void loadPacksInBackground() {
-        List<Path> team = new ArrayList<>();
-        for (String t : settings.teamPacks()) team.add(Path.of(t));
+        List<Path> team = teamPacks();
         Path personal = personalPackPath();
         new SwingWorker<Loaded, Void>() {
             @Override
             protected Loaded doInBackground() {
                 NotesPaths.ensurePersonalPack(personal);
-                PackStack stack = PackStack.load(team, personal);
-                RuleBook book = RuleBook.load(stack);
-                return new Loaded(stack, FilletMechanics.load(stack), book, MechanicsChecks.standard(stack),
-                        FrameRenderer.withBundledFont(), NoteTemplates.load(stack));
+                return new Loaded(Practice.load(team, personal), FrameRenderer.withBundledFont());
             }
 
             @Override
             protected void done() { packsLoaded(this); }
         }.execute();
+    }
+
+    private List<Path> teamPacks() {
+        List<Path> team = new ArrayList<>();
+        for (String t : settings.teamPacks()) team.add(Path.of(t));
+        return team;
     }
 
     /** The personal pack folder: the one in the settings, else the default under the user's config. */
@@ -620,53 +620,52 @@ public final class MainWindow {
 
     /**
      * Reloads the packs, the rule book and the note templates off the UI thread after a rule or a
-     * template was saved, then gives the
-     * advisor (with the open notes, if any) and the Practice editor the new book.
+     * template was saved, then gives the advisor (with the open notes, if any) and the Practice
+     * editor the new book.
      */
     private void reloadRulesInBackground() {
         if (core == null) return;
-        List<Path> team = new ArrayList<>();
-        for (String t : settings.teamPacks()) team.add(Path.of(t));
+        List<Path> team = teamPacks();
         Path personal = personalPackPath();
+        Loaded before = core;
         status.progress("Reloading the packs…", -1, null);
-        java.util.concurrent.CompletableFuture.supplyAsync(() -> {
-            PackStack stack = PackStack.load(team, personal);
-            return new Loaded(stack, core.mechanics(), RuleBook.load(stack), core.checks(), core.frames(), NoteTemplates.load(stack));
-        }, services.background()).whenComplete((loaded, e) -> javax.swing.SwingUtilities.invokeLater(() -> {
+        CompletableFuture.supplyAsync(() -> new Loaded(before.practice().reloaded(team, personal), before.frames()),
+                services.background()).whenComplete((loaded, e) -> SwingUtilities.invokeLater(() -> {
             if (e != null) {
                 status.done("The packs could not reload: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));
                 return;
             }
             core = loaded;
-            packs = loaded.packs();
-            NotesStore store = notesStore;
-            NoteLinker linker = store == null ? NoteLinker.NONE : (tags, text, limit) -> store.related(tags, text, limit)
-                    .stream().map(h -> new NoteLink(h.id(), h.title(), h.pack())).toList();
-            Advisor advisor = new Advisor(loaded.book(), loaded.checks(), linker);
+            packs = loaded.practice().packs();
+            Advisor advisor = advisorWithNotes(loaded.practice());
             useAdvisor(advisor);
-            practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), advisor));
-            status.done("Packs reloaded: " + loaded.book().entries().size() + " rules and "
-                    + loaded.templates().names().size() + " note templates in force");
+            practiceTab.whenBuilt(p -> p.setRules(packs, loaded.practice().book(), advisor));
+            status.done("Packs reloaded: " + loaded.practice().book().entries().size() + " rules and "
+                    + loaded.practice().templates().names().size() + " note templates in force");
         }));
     }
 
-    /** What loads in the background after the window shows. */
-    private record Loaded(PackStack packs, FilletMechanics mechanics, RuleBook book, MechanicsChecks checks,
-                          FrameRenderer frames, NoteTemplates templates) {}
+    /** The advisor over {@code practice}, with the notes linked once the notes index is open. */
+    private Advisor advisorWithNotes(Practice practice) {
+        return notesStore == null ? practice.advisor() : practice.advisor(Practice.linker(notesStore));
+    }
+
+    /** What loads in the background after the window shows: the practice shared with the CLI, and the frame drawer. */
+    private record Loaded(Practice practice, FrameRenderer frames) {}
 
     private void packsLoaded(SwingWorker<Loaded, Void> worker) {
         try {
             Loaded loaded = worker.get();
-            packs = loaded.packs();
+            packs = loaded.practice().packs();
             StringBuilder names = new StringBuilder();
             packs.packs().forEach(p -> names.append(p.name()).append(" (").append(p.layer()).append(")<br>"));
             status.packs("Packs: " + packs.packs().size(), "<html>" + names + "</html>");
             status.done("Ready");
-            stressTab.whenBuilt(p -> p.setMechanics(loaded.mechanics()));
+            stressTab.whenBuilt(p -> p.setMechanics(loaded.practice().mechanics()));
             core = loaded;
-            Advisor plain = new Advisor(loaded.book(), loaded.checks(), NoteLinker.NONE);
+            Advisor plain = loaded.practice().advisor();
             useAdvisor(plain);
-            practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), plain));
+            practiceTab.whenBuilt(p -> p.setRules(packs, loaded.practice().book(), plain));
             decideTab.whenBuilt(p -> p.setFrames((r, ink) -> loaded.frames().image(r.callout(), decideForm.standard(),
                     decideForm.units(), 110, ink)));
             actions.refresh();
@@ -676,7 +675,7 @@ public final class MainWindow {
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-        } catch (java.util.concurrent.ExecutionException e) {
+        } catch (ExecutionException e) {
             status.done("Practice packs failed to load: " + e.getCause().getMessage());
             status.packs("Packs: none", null);
         }
@@ -697,11 +696,7 @@ public final class MainWindow {
         }
         notesStore = store;
         notesPanel.setStore(store);
-        if (core != null) {
-            NoteLinker linker = (tags, text, limit) -> store.related(tags, text, limit).stream()
-                    .map(h -> new NoteLink(h.id(), h.title(), h.pack())).toList();
-            useAdvisor(new Advisor(core.book(), core.checks(), linker));
-        }
+        if (core != null) useAdvisor(advisorWithNotes(core.practice()));
         status.done("Ready · " + store.report().describe());
     }
 
@@ -724,7 +719,8 @@ public final class MainWindow {
         status.progress("Exporting " + out.getFileName() + "…", 0, () -> cancelExport(job[0]));
         job[0] = services.background().submit(() -> {
             try {
-                SheetExporter.withBundledFont().export(ws, loaded.templates(), "Arcwright", out,
+                // the same sheet service, suggestions and generated-by line as `arcwright sheet`
+                SheetService.withBundledFont().export(ws, loaded.practice(), true, out,
                         (done, total, step) -> javax.swing.SwingUtilities.invokeLater(() ->
                                 status.progress("Exporting: " + step, total == 0 ? -1 : 100 * done / total, () -> cancelExport(job[0]))));
                 javax.swing.SwingUtilities.invokeLater(() -> status.done("Exported " + out.getFileName()));

@@ -201,6 +201,31 @@ class FeatureBoundViewsGuiTest {
         assertThat(GuiSupport.onEdt(() -> window.practicePanel().ruleEdited())).isFalse();
     }
 
+    @Test
+    @Order(9)
+    void theDesktopExportWritesTheSameSheetAsTheCommandLine() throws Exception {
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.action("file.export").isEnabled()), 60);
+        Path saved = config.resolve("same.arcpart");
+        GuiSupport.onEdt(() -> window.saveTo(saved));
+        // the same file name in two folders: a Markdown sheet names its frames folder after itself
+        Path desk = config.resolve("desk").resolve("sheet.md");
+        java.nio.file.Files.createDirectories(desk.getParent());
+        GuiSupport.onEdt(() -> window.export(desk));
+        GuiSupport.waitFor(() -> java.nio.file.Files.exists(desk)
+                && GuiSupport.onEdt(() -> window.statusLine().message()).startsWith("Exported"), 60);
+        Path cli = config.resolve("cli").resolve("sheet.md");
+        java.nio.file.Files.createDirectories(cli.getParent());
+        java.io.StringWriter out = new java.io.StringWriter();
+        int code = org.arcwright.cli.Cli.commandLine(new java.io.PrintWriter(out, true), new java.io.PrintWriter(out, true))
+                .execute("sheet", saved.toString(), "--out", cli.toString(), "--no-settings",
+                        "--personal", config.resolve("personal-pack").toString());
+        assertThat(code).as(out.toString()).isZero();
+        String a = java.nio.file.Files.readString(desk), b = java.nio.file.Files.readString(cli);
+        // the undecided F5 shows the advisor's suggestion in both, and both name the same producer
+        assertThat(a).contains("F5");
+        assertThat(a).isEqualTo(b);
+    }
+
     private static String firstRuleId() {
         return GuiSupport.onEdt(() -> ((org.arcwright.rules.RuleBook.Entry) fixture.list("ruleList").target().getModel()
                 .getElementAt(0)).rule().id());
