@@ -2,13 +2,11 @@ package org.arcwright.cli;
 
 import java.io.Closeable;
 import java.nio.file.Path;
-import java.util.List;
 import org.arcwright.notes.NotesPaths;
 import org.arcwright.notes.NotesStore;
 import org.arcwright.pack.PackStack;
 import org.arcwright.rules.Advisor;
 import org.arcwright.rules.MechanicsChecks;
-import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.NoteLinker;
 import org.arcwright.rules.RuleBook;
 
@@ -37,11 +35,7 @@ final class Advisors {
             warn.accept("notes not linked: " + e.getMessage());
             return new WithNotes(standard(stack, book), () -> { });
         }
-        NoteLinker linker = (tags, text, limit) -> {
-            List<NoteLink> out = store.related(tags, text, limit).stream()
-                    .map(h -> new NoteLink(h.id(), h.title(), h.pack())).toList();
-            return out;
-        };
+        NoteLinker linker = org.arcwright.services.Practice.linker(store);
         return new WithNotes(new Advisor(book, MechanicsChecks.standard(stack), linker), store);
     }
 }

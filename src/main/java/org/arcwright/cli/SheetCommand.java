@@ -2,12 +2,12 @@ package org.arcwright.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
-import java.util.List;
 import java.util.concurrent.Callable;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
 import org.arcwright.render.SheetExporter;
-import org.arcwright.templates.NoteTemplates;
+import org.arcwright.services.Practice;
+import org.arcwright.services.SheetService;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.WorksheetFiles;
 import picocli.CommandLine.Command;
@@ -45,15 +45,8 @@ final class SheetCommand implements Callable<Integer> {
         org.arcwright.io.OutputFiles.requireWritable(out, "--out", part);
         PackStack stack = packs.load("sheet", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
-        NoteTemplates templates = NoteTemplates.load(stack);
         PartWorksheet ws = new WorksheetFiles(new JsonFiles()).read(part);
-        SheetExporter.Suggestions suggestions = SheetExporter.Suggestions.NONE;
-        if (!noSuggest) {
-            org.arcwright.rules.Advisor advisor = Advisors.standard(stack, org.arcwright.rules.RuleBook.load(stack));
-            suggestions = c -> advisor.advise(c).first();
-        }
-        SheetExporter.withBundledFont().export(ws, templates, new VersionProvider().getVersion()[0], suggestions, out,
-                SheetExporter.Progress.NONE);
+        SheetService.withBundledFont().export(ws, Practice.of(stack), !noSuggest, out, SheetExporter.Progress.NONE);
         PrintWriter pw = spec.commandLine().getOut();
         long open = ws.features().stream().filter(f -> f.chosen() == null).count();
         pw.println("wrote " + out + ": " + ws.features().size() + " features" + (open == 0 ? "" : ", " + open + " undecided"));

@@ -6,7 +6,6 @@ import picocli.CommandLine.IVersionProvider;
 public final class VersionProvider implements IVersionProvider {
     @Override
     public String[] getVersion() {
-        String v = ArcwrightCommand.class.getPackage().getImplementationVersion();
-        return new String[] {"Arcwright " + (v == null ? "development build" : v)};
+        return new String[] {org.arcwright.services.SheetService.generatedBy()};
     }
 }

@@ -25,6 +25,7 @@ import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.AdviceSource;
+import org.arcwright.app.model.AnswerDrafts;
 import org.arcwright.app.model.DecideForm;
 import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.Question;
@@ -54,6 +55,7 @@ public final class DecidePanel extends JPanel {
     private static final long serialVersionUID = 1L;
     private final transient DecideForm form;
     private final transient WorksheetSession session;
+    private final transient AnswerDrafts drafts;
     private final transient Executor background;
     private final transient Consumer<String> status;
     private transient AdviceSource advice;
@@ -64,20 +66,27 @@ public final class DecidePanel extends JPanel {
     private final JPanel figures = new JPanel(new MigLayout("insets 0, wrap 2, gap 12 2", "[][grow,fill]", ""));
     private final JLabel featureTitle = new JLabel();
     private final JScrollPane formScroll;
+    private final JScrollPane resultsScroll;
     private final JPanel cards = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 10", "[grow,fill]", ""));
     private final Timer adviseLater = new Timer(250, e -> adviseNow());
     private final javax.swing.JButton keep = new javax.swing.JButton("Keep these answers");
+    private final WrapLabel unkeptNote = new WrapLabel("", "Arcwright.help.font", "Arcwright.error.foreground");
     private transient List<Recommendation> shown = List.of();
     private String featureId;
     private DesignCase loadedCase;
+    /** The answers as the worksheet holds them for the feature shown: anything else is not kept yet. */
+    private transient DecideForm.Draft loadedAnswers;
+    private long document;
     private boolean binding;
     private long generation;
 
-    public DecidePanel(DecideForm form, WorksheetSession session, AdviceSource advice, Executor background,
-                       Consumer<String> status) {
+    public DecidePanel(DecideForm form, WorksheetSession session, AnswerDrafts drafts, AdviceSource advice,
+                       Executor background, Consumer<String> status) {
         super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[][grow,fill]"));
         this.form = Objects.requireNonNull(form, "form");
         this.session = Objects.requireNonNull(session, "session");
+        this.drafts = Objects.requireNonNull(drafts, "drafts");
+        this.document = session.document();
         this.advice = Objects.requireNonNull(advice, "advice");
         this.background = Objects.requireNonNull(background, "background");
         this.status = Objects.requireNonNull(status, "status");
@@ -85,7 +94,9 @@ public final class DecidePanel extends JPanel {
         adviseLater.setRepeats(false);
         add(Cautions.box(Cautions.ADVICE));
         formScroll = scroll(buildForm());
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, formScroll, scroll(buildResults()));
+        resultsScroll = scroll(buildResults());
+        resultsScroll.setName("resultsScroll");
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, formScroll, resultsScroll);
         split.setResizeWeight(0.45);
         split.addComponentListener(new java.awt.event.ComponentAdapter() {
             @Override
@@ -146,7 +157,9 @@ public final class DecidePanel extends JPanel {
         p.add(featureTitle, "wmin 10, gapbottom 2");
         keep.setName("keepAnswers");
         keep.addActionListener(e -> keepAnswers());
-        p.add(keep, "left, growx 0, gapbottom 6");
+        p.add(keep, "left, growx 0, gapbottom 2");
+        unkeptNote.setName("unkeptAnswers");
+        p.add(unkeptNote, "wmin 10, hidemode 3, gapbottom 6");
         section(p, "The radius");
         text(p, Question.FEATURE);
         combo(p, Question.KIND, BlendKind.values(), form::setKind);
@@ -269,25 +282,64 @@ public final class DecidePanel extends JPanel {
     // ---- model to view ----
 
     private void sessionChanged() {
+        if (session.document() != document) {
+            // another worksheet: the window asked before dropping answers not kept
+            document = session.document();
+            drafts.clear();
+            featureId = null;
+        }
         Optional<RadiusFeature> sel = session.selected();
         if (sel.isEmpty()) {
+            leaveFeature();
             featureId = null;
             featureTitle.setText("No feature selected: add one in the Part panel");
             setCards(List.of());
+            refreshKeep();
             return;
         }
         RadiusFeature f = sel.get();
         featureTitle.setText(f.id() + (f.designCase().feature() == null ? "" : "  " + f.designCase().feature()));
-        if (!f.id().equals(featureId) || !f.designCase().equals(loadedCase)) {
+        if (!f.id().equals(featureId)) {
+            leaveFeature();
             featureId = f.id();
             loadedCase = f.designCase();
             form.load(f.designCase());
+            loadedAnswers = form.draft();
+            drafts.take(f.id()).ifPresent(d -> {
+                form.restore(d);
+                status.accept("Restored the answers you typed for " + f.id() + ": Keep these answers puts them on the worksheet");
+            });
             // a feature's form opens at its first question; filling the text fields moved their carets,
             // and a caret scrolls its field into view after the event that moved it
             SwingUtilities.invokeLater(() -> formScroll.getViewport().setViewPosition(new java.awt.Point(0, 0)));
+        } else if (!f.designCase().equals(loadedCase)) {
+            loadedCase = f.designCase();
+            form.load(f.designCase());
+            loadedAnswers = form.draft();
         } else {
             renderCards();
         }
+        refreshKeep();
+    }
+
+    /** Keeps the answers typed for the feature being left, if they differ from the worksheet's, and says so. */
+    private void leaveFeature() {
+        if (featureId == null || loadedAnswers == null || !hasUnkeptAnswers()) return;
+        if (session.worksheet().feature(featureId).isEmpty()) return;
+        drafts.put(featureId, form.draft());
+        status.accept("The answers typed for " + featureId + " are not kept yet: select " + featureId
+                + " again to keep them (they are held until then)");
+    }
+
+    /** Whether the form holds answers the worksheet does not have. */
+    private boolean hasUnkeptAnswers() { return loadedAnswers != null && !form.draft().equals(loadedAnswers); }
+
+    /** The features with answers typed but not kept on the worksheet: the one shown, then any left behind. */
+    public List<String> unkeptAnswers() {
+        List<String> out = new java.util.ArrayList<>();
+        if (featureId != null && hasUnkeptAnswers()) out.add(featureId);
+        for (String id : drafts.features()) if (!out.contains(id)) out.add(id);
+        return out;
     }
 
     private void formChanged() {
@@ -317,6 +369,10 @@ public final class DecidePanel extends JPanel {
     private void refreshKeep() {
         Optional<DesignCase> c = form.toCase();
         boolean changed = c.isPresent() && featureId != null && !c.get().equals(loadedCase);
+        boolean unkept = featureId != null && hasUnkeptAnswers();
+        unkeptNote.setVisible(unkept);
+        unkeptNote.show(unkept ? "These answers are not on the worksheet yet: Keep these answers (or choose a "
+                + "recommendation) puts them there." : "", "Arcwright.error.foreground");
         keep.setEnabled(changed);
         keep.setToolTipText(featureId == null ? "Unavailable: no feature is selected"
                 : c.isEmpty() ? "Unavailable: answer the questions marked in red first"
@@ -329,6 +385,7 @@ public final class DecidePanel extends JPanel {
         if (featureId == null || c.isEmpty()) return;
         loadedCase = c.get();
         session.updateCase(featureId, c.get());
+        loadedAnswers = form.draft();
         status.accept("Kept the answers for " + featureId + " (Ctrl+Z to undo)");
         refreshKeep();
     }
@@ -468,6 +525,17 @@ public final class DecidePanel extends JPanel {
         setCards(a.list());
     }
 
+    /**
+     * Scrolls the recommendations back to the best card once the rebuilt cards are laid out: new
+     * advice, a callout put on the worksheet and a change of look all open at the top.
+     */
+    private void showBestCard() {
+        SwingUtilities.invokeLater(() -> resultsScroll.getViewport().setViewPosition(new java.awt.Point(0, 0)));
+    }
+
+    /** How far the recommendations are scrolled down, in pixels (tests: 0 shows the best card first). */
+    public int resultsScrolledBy() { return resultsScroll.getViewport().getViewPosition().y; }
+
     private void setCards(List<Recommendation> list) {
         shown = List.copyOf(list);
         renderCards();
@@ -493,6 +561,7 @@ public final class DecidePanel extends JPanel {
         cards.revalidate();
         cards.repaint();
         if (focusInCards) keepFocusInCards();
+        SwingUtilities.invokeLater(this::showBestCard);
     }
 
     /** After the cards are rebuilt, the keyboard focus stays on them instead of falling out of the window. */
@@ -510,6 +579,7 @@ public final class DecidePanel extends JPanel {
         Optional<DesignCase> c = form.toCase();
         if (featureId == null || c.isEmpty()) return;
         loadedCase = c.get();
+        loadedAnswers = form.draft();
         session.choose(featureId, c.get(), r);
         status.accept("Put " + r.text() + " on " + featureId + " (Ctrl+Z to undo)");
     }

@@ -83,6 +83,41 @@ public final class DecideForm {
         changed();
     }
 
+    /**
+     * Every answer as typed, valid or not: what the form keeps for a feature the user leaves
+     * before keeping the answers, so that going back restores them.
+     */
+    public record Draft(Map<Question, String> text, BlendKind kind, BlendFunction function, Loading loading,
+                        Process process, DrawingStyle standard, Units units, boolean formMatters,
+                        boolean locationMatters, boolean stress, boolean mating) {
+        public Draft {
+            text = Map.copyOf(text);
+        }
+    }
+
+    /** The answers as they stand. */
+    public Draft draft() {
+        return new Draft(new EnumMap<>(text), kind, function, loading, process, standard, units, formMatters,
+                locationMatters, stress, mating);
+    }
+
+    /** Puts back answers taken by {@link #draft()}. */
+    public void restore(Draft d) {
+        text.clear();
+        text.putAll(d.text());
+        kind = d.kind();
+        function = d.function();
+        loading = d.loading();
+        process = d.process();
+        standard = d.standard();
+        units = d.units();
+        formMatters = d.formMatters();
+        locationMatters = d.locationMatters();
+        stress = d.stress();
+        mating = d.mating();
+        changed();
+    }
+
     // ---- answers ----
 
     public String text(Question q) { return text.getOrDefault(q, ""); }

@@ -46,6 +46,12 @@ public final class PracticeEditorPanel extends JPanel {
     private transient org.arcwright.pack.PackStack stack;
     private transient Advisor advisor;
     private transient RuleDraft draft;
+    /** The rule shown in the editor and its text as opened or last saved: anything else is an unsaved edit. */
+    private transient RuleBook.Entry shownRule;
+    private String ruleOpened;
+    private boolean reselecting;
+    private String savedRuleText;
+    private transient TemplatePreview.Entry shownTemplate;
     private final DefaultListModel<RuleBook.Entry> entries = new DefaultListModel<>();
     private final JList<RuleBook.Entry> list = new JList<>(entries);
     private final JTextArea editor = new JTextArea();
@@ -188,9 +194,20 @@ public final class PracticeEditorPanel extends JPanel {
 
     private void templateSelected(boolean adjusting) {
         TemplatePreview.Entry e = templateList.getSelectedValue();
-        if (adjusting || e == null) return;
+        if (adjusting || e == null || reselecting || e.equals(shownTemplate)) return;
+        if (shownTemplate != null && templateOpened != null && !templateText.getText().equals(templateOpened)
+                && !letGo("template " + shownTemplate.name())) {
+            reselecting = true;
+            try {
+                templateList.setSelectedValue(shownTemplate, true);
+            } finally {
+                reselecting = false;
+            }
+            return;
+        }
         try {
             String text = TemplatePreview.text(e);
+            shownTemplate = e;
             templateOpened = text;
             boolean builtIn = e.layer() == PackLayer.BUILT_IN;
             templateSave.setText(builtIn ? "Save as an override in my personal pack" : "Save");
@@ -275,6 +292,7 @@ public final class PracticeEditorPanel extends JPanel {
         // edits typed while the packs reloaded stay in the editor; only the list and the file behind it change
         String typed = templateText.getText();
         boolean edited = templateOpened != null && !typed.equals(templateOpened);
+        shownTemplate = null;
         templates.clear();
         for (TemplatePreview.Entry t : TemplatePreview.entries(packs)) {
             templates.addElement(t);
@@ -289,13 +307,43 @@ public final class PracticeEditorPanel extends JPanel {
         book = b;
         advisor = a;
         String keep = list.getSelectedValue() == null ? null : list.getSelectedValue().rule().id();
-        entries.clear();
-        for (RuleBook.Entry e : b.entries()) entries.addElement(e);
+        // as for templates, a rule edit typed while the packs reloaded stays in the editor
+        String typedRule = editor.getText();
+        boolean ruleEdited = ruleOpened != null && !typedRule.equals(ruleOpened);
+        reselecting = true;
+        try {
+            entries.clear();
+            for (RuleBook.Entry e : b.entries()) entries.addElement(e);
+        } finally {
+            reselecting = false;
+        }
+        shownRule = null;
         if (keep != null) {
             for (int i = 0; i < entries.size(); i++) {
                 if (entries.get(i).rule().id().equals(keep)) list.setSelectedIndex(i);
             }
         }
+        if (ruleEdited && shownRule != null) {
+            loading = true;
+            editor.setText(typedRule);
+            loading = false;
+            validateNow();
+        }
+    }
+
+    /** Whether the rule editor holds text that is not in the rule's file. */
+    public boolean ruleEdited() { return ruleOpened != null && !editor.getText().equals(ruleOpened); }
+
+    /**
+     * Asks before an edit is dropped; true when the user lets it go. Shown only when there is an
+     * unsaved edit, so nothing is lost without a word.
+     */
+    private boolean letGo(String what) {
+        Object[] options = {"Keep editing", "Discard the changes"};
+        int answer = javax.swing.JOptionPane.showOptionDialog(this, "The changes to " + what + " are not saved.",
+                "Changes not saved", javax.swing.JOptionPane.DEFAULT_OPTION, javax.swing.JOptionPane.WARNING_MESSAGE, null,
+                options, options[0]);
+        return answer == 1;
     }
 
     public JTextArea editor() { return editor; }
@@ -306,7 +354,16 @@ public final class PracticeEditorPanel extends JPanel {
 
     private void selected(boolean adjusting) {
         RuleBook.Entry e = list.getSelectedValue();
-        if (adjusting || e == null) return;
+        if (adjusting || e == null || reselecting || e.equals(shownRule)) return;
+        if (shownRule != null && ruleEdited() && !letGo("rule " + shownRule.rule().id())) {
+            reselecting = true;
+            try {
+                list.setSelectedValue(shownRule, true);
+            } finally {
+                reselecting = false;
+            }
+            return;
+        }
         java.nio.file.Path file = null;
         for (org.arcwright.pack.PackStack.PackFile f : stack.files("rules", ".json")) {
             if (f.path().toString().equals(e.file())) file = f.path();
@@ -316,6 +373,8 @@ public final class PracticeEditorPanel extends JPanel {
             return;
         }
         draft = RuleDraft.fromFile(json, file, e.rule().id());
+        shownRule = e;
+        ruleOpened = draft.text();
         loading = true;
         editor.setText(draft.text());
         editor.setCaretPosition(0);
@@ -359,6 +418,7 @@ public final class PracticeEditorPanel extends JPanel {
         if (draft.problem().isPresent()) return;
         save.setEnabled(false);
         RuleDraft d = draft;
+        savedRuleText = editor.getText();
         String id = e.rule().id();
         boolean builtIn = e.layer() == PackLayer.BUILT_IN;
         Path file = Path.of(e.file());
@@ -375,6 +435,7 @@ public final class PracticeEditorPanel extends JPanel {
             verdict.show(saveMessage, "Arcwright.error.foreground");
             return;
         }
+        ruleOpened = savedRuleText;
         saveMessage = "Saved to " + written + "; reloading the rules…";
         verdict.show(saveMessage, "Arcwright.pass.foreground");
         reloadRules.run();

@@ -6,37 +6,33 @@ import java.awt.Toolkit;
 import java.awt.datatransfer.StringSelection;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
-import java.io.IOException;
-import java.io.InputStream;
-import java.io.UncheckedIOException;
-import java.nio.charset.StandardCharsets;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
+import java.util.concurrent.ExecutionException;
 import java.util.function.Supplier;
 import javax.swing.Action;
 import javax.swing.Icon;
 import javax.swing.JButton;
 import javax.swing.JComponent;
-import javax.swing.JFileChooser;
 import javax.swing.JFrame;
 import javax.swing.JMenu;
 import javax.swing.JMenuBar;
 import javax.swing.JMenuItem;
-import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
 import javax.swing.JToolBar;
+import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
 import javax.swing.WindowConstants;
-import javax.swing.filechooser.FileNameExtensionFilter;
 import org.arcwright.app.decide.DecidePanel;
 import org.arcwright.app.model.AdviceSource;
+import org.arcwright.app.model.AnswerDrafts;
 import org.arcwright.app.model.Autosaver;
 import org.arcwright.app.model.Command;
 import org.arcwright.app.model.CommandCatalog;
@@ -52,21 +48,12 @@ import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.notes.NotesPanel;
 import org.arcwright.app.stress.StressViewPanel;
 import org.arcwright.app.practice.PracticeEditorPanel;
-import org.arcwright.mechanics.FilletMechanics;
 import org.arcwright.notes.NotesPaths;
 import org.arcwright.notes.NotesStore;
 import org.arcwright.render.FrameRenderer;
-import org.arcwright.render.SheetExporter;
 import org.arcwright.rules.Advisor;
-import org.arcwright.rules.MechanicsChecks;
-import org.arcwright.rules.NoteLink;
-import org.arcwright.rules.NoteLinker;
-import org.arcwright.rules.RuleBook;
-import org.arcwright.templates.NoteTemplates;
-import org.arcwright.io.InputProblem;
+import org.arcwright.services.Practice;
 import org.arcwright.pack.PackStack;
-import org.arcwright.tolerance.DrawingStyle;
-import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.RadiusFeature;
 import org.arcwright.worksheet.WorksheetFiles;
@@ -82,7 +69,7 @@ import org.arcwright.app.widgets.Icons;
  */
 public final class MainWindow {
     /** Class-path location of the first-run demo worksheet. */
-    public static final String DEMO_RESOURCE = "/arcwright/examples/tarnbeck-output-shaft.arcpart";
+    public static final String DEMO_RESOURCE = FileCommands.DEMO_RESOURCE;
     /** The packs start loading this long after the window opens even if it has not painted. */
     private static final int PACKS_AT_THE_LATEST_MS = 1000;
 
@@ -91,12 +78,14 @@ public final class MainWindow {
     private final JFrame frame = new JFrame("Arcwright");
     private final WorksheetSession session;
     private final DecideForm decideForm = new DecideForm();
+    private final AnswerDrafts answerDrafts = new AnswerDrafts();
     private final CommandCatalog catalog = new CommandCatalog();
     private final StatusLine status = new StatusLine();
     private final NoticeStrip notice = new NoticeStrip();
     private final JTabbedPane work = new JTabbedPane();
     private final Autosaver autosaver;
     private final CommandActions actions;
+    private final FileCommands files;
     private final JMenu recentMenu = new JMenu("Open recent");
     private Settings settings;
     private PartPanel partPanel;
@@ -124,6 +113,9 @@ public final class MainWindow {
         this.settings = settings;
         this.session = new WorksheetSession(services.files(), opening.worksheet(), opening.file());
         this.autosaver = new Autosaver(services.recovery(), services.io(), services.clock());
+        this.files = new FileCommands(frame, session, services, status, notice,
+                () -> decideTab != null && decideTab.isBuilt() ? decideTab.panel().unkeptAnswers() : List.of(),
+                () -> core == null ? null : core.practice(), this::remember);
         registerCommands();
         this.actions = new CommandActions(catalog, icons());
         build();
@@ -207,7 +199,7 @@ public final class MainWindow {
         partPanel = new PartPanel(session, List.of(actions.get("part.add"), actions.get("part.duplicate"),
                 actions.get("part.delete")));
         // the form's sixty-odd controls are built just after the first paint, not before it
-        decideTab = new LazyTab<>("decide", () -> new DecidePanel(decideForm, session, AdviceSource.intentOnly(90),
+        decideTab = new LazyTab<>("decide", () -> new DecidePanel(decideForm, session, answerDrafts, AdviceSource.intentOnly(90),
                 services.background(), status::show), true);
         work.setName("workArea");
         work.addTab("Decide", Icons.get("decide"), decideTab, "The guided form and its recommendations (Alt+2)");
@@ -329,13 +321,13 @@ public final class MainWindow {
     private void registerCommands() {
         Supplier<Optional<String>> needsSelection = () -> session.selected().isPresent() ? Optional.empty()
                 : Optional.of("no feature is selected");
-        catalog.add(Command.always("file.new", "New worksheet", "File", "ctrl N", this::newWorksheet));
-        catalog.add(Command.always("file.open", "Open worksheet…", "File", "ctrl O", this::openChosen));
-        catalog.add(Command.always("file.save", "Save", "File", "ctrl S", this::save));
-        catalog.add(Command.always("file.saveAs", "Save as…", "File", "ctrl shift S", this::saveAs));
+        catalog.add(Command.always("file.new", "New worksheet", "File", "ctrl N", files::newWorksheet));
+        catalog.add(Command.always("file.open", "Open worksheet…", "File", "ctrl O", files::openChosen));
+        catalog.add(Command.always("file.save", "Save", "File", "ctrl S", files::save));
+        catalog.add(Command.always("file.saveAs", "Save as…", "File", "ctrl shift S", files::saveAs));
         catalog.add(new Command("file.export", "Export the sheet (PDF, HTML, Markdown)…", "File", "ctrl E",
                 () -> core == null ? Optional.of("the practice packs and templates are still loading") : Optional.empty(),
-                this::exportSheet));
+                files::exportSheet));
         catalog.add(Command.always("file.quit", "Quit", "File", "ctrl Q", this::quit));
         catalog.add(new Command("edit.undo", "Undo", "Edit", "ctrl Z",
                 () -> session.canUndo() ? Optional.empty() : Optional.of("there is nothing to undo"), session::undo));
@@ -363,65 +355,28 @@ public final class MainWindow {
         catalog.add(Command.always("view.dark", "Dark look", "View", null, () -> setTheme(ThemeChoice.DARK)));
         catalog.add(Command.always("view.system", "Follow the system's look", "View", null, () -> setTheme(ThemeChoice.SYSTEM)));
         catalog.add(Command.always("help.keys", "Keyboard shortcuts", "Help", "F1", this::openFinder));
-        catalog.add(Command.always("help.demo", "Open the demo worksheet", "Help", null, this::showDemo));
+        catalog.add(Command.always("help.demo", "Open the demo worksheet", "Help", null, files::showDemo));
     }
 
     // ---- commands ----
 
-    private void newWorksheet() {
-        if (!confirmDiscard()) return;
-        session.newWorksheet(Units.MM, DrawingStyle.ASME);
-        status.show("New worksheet");
-    }
-
-    private void openChosen() {
-        if (!confirmDiscard()) return;
-        JFileChooser chooser = chooser();
-        if (chooser.showOpenDialog(frame) == JFileChooser.APPROVE_OPTION) open(chooser.getSelectedFile().toPath());
-    }
-
     /** Opens {@code file}; a bad file is reported and the current worksheet kept. */
-    public void open(Path file) {
-        try {
-            session.open(file);
-            remember(file);
-            status.show("Opened " + file.getFileName());
-        } catch (InputProblem | UncheckedIOException e) {
-            notice.show("Could not open " + file.getFileName() + ": " + e.getMessage(), "OK", null, null, null);
-        }
-    }
-
-    private void save() {
-        if (!session.file().isPresent()) {
-            saveAs();
-            return;
-        }
-        saveTo(session.file().get());
-    }
-
-    private void saveAs() {
-        JFileChooser chooser = chooser();
-        chooser.setSelectedFile(new java.io.File(session.worksheet().part().number() + WorksheetFiles.EXTENSION));
-        if (chooser.showSaveDialog(frame) == JFileChooser.APPROVE_OPTION) saveTo(chooser.getSelectedFile().toPath());
-    }
+    public void open(Path file) { files.open(file); }
 
     /** Saves atomically to {@code file}; a failed save leaves the old file and says why. */
-    public void saveTo(Path file) {
-        try {
-            session.saveAs(file);
-            remember(session.file().orElse(file));
-            status.show("Saved " + session.file().map(Path::getFileName).orElse(file.getFileName()));
-        } catch (UncheckedIOException e) {
-            notice.show("Not saved: " + e.getMessage() + ". The file on disk is unchanged.", "OK", null, null, null);
-        }
-    }
+    public void saveTo(Path file) { files.saveTo(file); }
 
-    private JFileChooser chooser() {
-        JFileChooser c = new JFileChooser(session.file().map(p -> p.toAbsolutePath().getParent().toFile()).orElse(null));
-        c.setFileFilter(new FileNameExtensionFilter("Arcwright part worksheets (*" + WorksheetFiles.EXTENSION + ")",
-                WorksheetFiles.EXTENSION.substring(1)));
-        return c;
-    }
+    /** Exports the sheet to {@code out} (PDF, HTML or Markdown by extension) in the background, with progress. */
+    public void export(Path out) { files.export(out); }
+
+    /** The bundled demo worksheet of an invented part. */
+    public static PartWorksheet readDemo(WorksheetFiles files) { return FileCommands.readDemo(files); }
+
+    /**
+     * What to open with: after the first run, the most recent worksheet that still reads; else the
+     * demo. Runs before the window exists, so it may run on any thread.
+     */
+    public static Opening opening(Settings settings, WorksheetFiles files) { return FileCommands.opening(settings, files); }
 
     private void copyCallout() {
         session.selected().map(RadiusFeature::chosen).ifPresent(r -> {
@@ -465,13 +420,8 @@ public final class MainWindow {
         status.show((themes.isDark() ? "Dark" : "Light") + " look" + (choice == ThemeChoice.SYSTEM ? ", following the system" : ""));
     }
 
-    private void showDemo() {
-        if (!confirmDiscard()) return;
-        session.showFresh(demo());
-    }
-
     private void quit() {
-        if (!confirmDiscard()) return;
+        if (!files.confirmDiscard()) return;
         services.recovery().clear();
         dispose();
     }
@@ -481,15 +431,6 @@ public final class MainWindow {
         frame.dispose();
         services.shutdown();
         if (notesStore != null) notesStore.close();
-    }
-
-    private boolean confirmDiscard() {
-        if (!session.isDirty()) return true;
-        int answer = JOptionPane.showConfirmDialog(frame, "Save the changes to " + session.title().replace("• ", "") + "?",
-                "Unsaved changes", JOptionPane.YES_NO_CANCEL_OPTION);
-        if (answer == JOptionPane.CANCEL_OPTION || answer == JOptionPane.CLOSED_OPTION) return false;
-        if (answer == JOptionPane.YES_OPTION) save();
-        return !session.isDirty() || answer == JOptionPane.NO_OPTION;
     }
 
     // ---- state ----
@@ -516,46 +457,11 @@ public final class MainWindow {
         for (String f : settings.recentFiles()) {
             JMenuItem item = new JMenuItem(Path.of(f).getFileName().toString());
             item.setToolTipText(f);
-            item.addActionListener(e -> openRecent(f));
+            item.addActionListener(e -> files.openRecent(f));
             recentMenu.add(item);
         }
         recentMenu.setEnabled(!settings.recentFiles().isEmpty());
         recentMenu.setToolTipText(settings.recentFiles().isEmpty() ? "Unavailable: no worksheet opened or saved yet" : null);
-    }
-
-    private void openRecent(String f) {
-        if (confirmDiscard()) open(Path.of(f));
-    }
-
-    private PartWorksheet demo() { return readDemo(services.files()); }
-
-    /** The bundled demo worksheet of an invented part. */
-    public static PartWorksheet readDemo(WorksheetFiles files) {
-        try (InputStream in = MainWindow.class.getResourceAsStream(DEMO_RESOURCE)) {
-            if (in == null) throw new IllegalStateException("demo worksheet missing: " + DEMO_RESOURCE);
-            return files.parse(new String(in.readAllBytes(), StandardCharsets.UTF_8), DEMO_RESOURCE);
-        } catch (IOException e) {
-            throw new UncheckedIOException(e);
-        }
-    }
-
-    /**
-     * What to open with: after the first run, the most recent worksheet that still reads; else the
-     * demo. Runs before the window exists, so it may run on any thread.
-     */
-    public static Opening opening(Settings settings, WorksheetFiles files) {
-        if (settings.demoShown()) {
-            for (String f : settings.recentFiles()) {
-                Path p = Path.of(f);
-                if (!Files.isRegularFile(p)) continue;
-                try {
-                    return new Opening(files.read(p), p);
-                } catch (RuntimeException e) {
-                    break;
-                }
-            }
-        }
-        return new Opening(readDemo(files), null);
     }
 
     /** The first run shows the demo; later runs offer an autosave left behind, else reopen the last file. */
@@ -570,7 +476,7 @@ public final class MainWindow {
         if (!settings.demoShown()) {
             updateSettings(settings.withDemoShown());
             notice.show("This is a demo worksheet of an invented part, Tarnbeck Drives' output shaft: select a feature "
-                    + "and look at each panel.", "Start a new worksheet", this::newWorksheet, "Keep exploring", null);
+                    + "and look at each panel.", "Start a new worksheet", files::newWorksheet, "Keep exploring", null);
             return;
         }
         session.file().ifPresent(f -> status.show("Reopened " + f.getFileName()));
@@ -587,22 +493,24 @@ public final class MainWindow {
     }
 
     private void loadPacksInBackground() {
-        List<Path> team = new ArrayList<>();
-        for (String t : settings.teamPacks()) team.add(Path.of(t));
+        List<Path> team = teamPacks();
         Path personal = personalPackPath();
         new SwingWorker<Loaded, Void>() {
             @Override
             protected Loaded doInBackground() {
                 NotesPaths.ensurePersonalPack(personal);
-                PackStack stack = PackStack.load(team, personal);
-                RuleBook book = RuleBook.load(stack);
-                return new Loaded(stack, FilletMechanics.load(stack), book, MechanicsChecks.standard(stack),
-                        FrameRenderer.withBundledFont(), NoteTemplates.load(stack));
+                return new Loaded(Practice.load(team, personal), FrameRenderer.withBundledFont());
             }
 
             @Override
             protected void done() { packsLoaded(this); }
         }.execute();
+    }
+
+    private List<Path> teamPacks() {
+        List<Path> team = new ArrayList<>();
+        for (String t : settings.teamPacks()) team.add(Path.of(t));
+        return team;
     }
 
     /** The personal pack folder: the one in the settings, else the default under the user's config. */
@@ -612,53 +520,52 @@ public final class MainWindow {
 
     /**
      * Reloads the packs, the rule book and the note templates off the UI thread after a rule or a
-     * template was saved, then gives the
-     * advisor (with the open notes, if any) and the Practice editor the new book.
+     * template was saved, then gives the advisor (with the open notes, if any) and the Practice
+     * editor the new book.
      */
     private void reloadRulesInBackground() {
         if (core == null) return;
-        List<Path> team = new ArrayList<>();
-        for (String t : settings.teamPacks()) team.add(Path.of(t));
+        List<Path> team = teamPacks();
         Path personal = personalPackPath();
+        Loaded before = core;
         status.progress("Reloading the packs…", -1, null);
-        java.util.concurrent.CompletableFuture.supplyAsync(() -> {
-            PackStack stack = PackStack.load(team, personal);
-            return new Loaded(stack, core.mechanics(), RuleBook.load(stack), core.checks(), core.frames(), NoteTemplates.load(stack));
-        }, services.background()).whenComplete((loaded, e) -> javax.swing.SwingUtilities.invokeLater(() -> {
+        CompletableFuture.supplyAsync(() -> new Loaded(before.practice().reloaded(team, personal), before.frames()),
+                services.background()).whenComplete((loaded, e) -> SwingUtilities.invokeLater(() -> {
             if (e != null) {
                 status.done("The packs could not reload: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));
                 return;
             }
             core = loaded;
-            packs = loaded.packs();
-            NotesStore store = notesStore;
-            NoteLinker linker = store == null ? NoteLinker.NONE : (tags, text, limit) -> store.related(tags, text, limit)
-                    .stream().map(h -> new NoteLink(h.id(), h.title(), h.pack())).toList();
-            Advisor advisor = new Advisor(loaded.book(), loaded.checks(), linker);
+            packs = loaded.practice().packs();
+            Advisor advisor = advisorWithNotes(loaded.practice());
             useAdvisor(advisor);
-            practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), advisor));
-            status.done("Packs reloaded: " + loaded.book().entries().size() + " rules and "
-                    + loaded.templates().names().size() + " note templates in force");
+            practiceTab.whenBuilt(p -> p.setRules(packs, loaded.practice().book(), advisor));
+            status.done("Packs reloaded: " + loaded.practice().book().entries().size() + " rules and "
+                    + loaded.practice().templates().names().size() + " note templates in force");
         }));
     }
 
-    /** What loads in the background after the window shows. */
-    private record Loaded(PackStack packs, FilletMechanics mechanics, RuleBook book, MechanicsChecks checks,
-                          FrameRenderer frames, NoteTemplates templates) {}
+    /** The advisor over {@code practice}, with the notes linked once the notes index is open. */
+    private Advisor advisorWithNotes(Practice practice) {
+        return notesStore == null ? practice.advisor() : practice.advisor(Practice.linker(notesStore));
+    }
+
+    /** What loads in the background after the window shows: the practice shared with the CLI, and the frame drawer. */
+    private record Loaded(Practice practice, FrameRenderer frames) {}
 
     private void packsLoaded(SwingWorker<Loaded, Void> worker) {
         try {
             Loaded loaded = worker.get();
-            packs = loaded.packs();
+            packs = loaded.practice().packs();
             StringBuilder names = new StringBuilder();
             packs.packs().forEach(p -> names.append(p.name()).append(" (").append(p.layer()).append(")<br>"));
             status.packs("Packs: " + packs.packs().size(), "<html>" + names + "</html>");
             status.done("Ready");
-            stressTab.whenBuilt(p -> p.setMechanics(loaded.mechanics()));
+            stressTab.whenBuilt(p -> p.setMechanics(loaded.practice().mechanics()));
             core = loaded;
-            Advisor plain = new Advisor(loaded.book(), loaded.checks(), NoteLinker.NONE);
+            Advisor plain = loaded.practice().advisor();
             useAdvisor(plain);
-            practiceTab.whenBuilt(p -> p.setRules(loaded.packs(), loaded.book(), plain));
+            practiceTab.whenBuilt(p -> p.setRules(packs, loaded.practice().book(), plain));
             decideTab.whenBuilt(p -> p.setFrames((r, ink) -> loaded.frames().image(r.callout(), decideForm.standard(),
                     decideForm.units(), 110, ink)));
             actions.refresh();
@@ -668,7 +575,7 @@ public final class MainWindow {
             }
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
-        } catch (java.util.concurrent.ExecutionException e) {
+        } catch (ExecutionException e) {
             status.done("Practice packs failed to load: " + e.getCause().getMessage());
             status.packs("Packs: none", null);
         }
@@ -689,46 +596,12 @@ public final class MainWindow {
         }
         notesStore = store;
         notesPanel.setStore(store);
-        if (core != null) {
-            NoteLinker linker = (tags, text, limit) -> store.related(tags, text, limit).stream()
-                    .map(h -> new NoteLink(h.id(), h.title(), h.pack())).toList();
-            useAdvisor(new Advisor(core.book(), core.checks(), linker));
-        }
+        if (core != null) useAdvisor(advisorWithNotes(core.practice()));
         status.done("Ready · " + store.report().describe());
     }
 
     private void useAdvisor(Advisor a) {
         decideTab.whenBuilt(p -> p.setAdviceSource(AdviceSource.advisor(c -> a.advise(c).recommendations(), 90)));
-    }
-
-    private void exportSheet() {
-        JFileChooser c = new JFileChooser(session.file().map(p -> p.toAbsolutePath().getParent().toFile()).orElse(null));
-        c.setFileFilter(new FileNameExtensionFilter("Sheets (*.pdf, *.html, *.md)", "pdf", "html", "md"));
-        c.setSelectedFile(new java.io.File(session.worksheet().part().number() + ".pdf"));
-        if (c.showSaveDialog(frame) == JFileChooser.APPROVE_OPTION) export(c.getSelectedFile().toPath());
-    }
-
-    /** Exports the sheet to {@code out} (PDF, HTML or Markdown by extension) in the background, with progress. */
-    public void export(Path out) {
-        Loaded loaded = core;
-        PartWorksheet ws = session.worksheet();
-        java.util.concurrent.Future<?>[] job = new java.util.concurrent.Future<?>[1];
-        status.progress("Exporting " + out.getFileName() + "…", 0, () -> cancelExport(job[0]));
-        job[0] = services.background().submit(() -> {
-            try {
-                SheetExporter.withBundledFont().export(ws, loaded.templates(), "Arcwright", out,
-                        (done, total, step) -> javax.swing.SwingUtilities.invokeLater(() ->
-                                status.progress("Exporting: " + step, total == 0 ? -1 : 100 * done / total, () -> cancelExport(job[0]))));
-                javax.swing.SwingUtilities.invokeLater(() -> status.done("Exported " + out.getFileName()));
-            } catch (RuntimeException e) {
-                javax.swing.SwingUtilities.invokeLater(() -> status.done("Export failed: " + e.getMessage()));
-            }
-        });
-    }
-
-    private void cancelExport(java.util.concurrent.Future<?> job) {
-        if (job != null) job.cancel(true);
-        status.done("Export cancelled");
     }
 
     public NotesPanel notesPanel() { return notesPanel; }

@@ -51,6 +51,9 @@ public final class LazyTab<T extends JComponent> extends JPanel {
         return panel;
     }
 
+    /** Whether the panel exists yet. */
+    public boolean isBuilt() { return panel != null; }
+
     /** Applies {@code change} to the panel now if it exists, else when it is built. */
     public void whenBuilt(Consumer<T> change) {
         if (panel != null) change.accept(panel); else pending = pending.andThen(change);

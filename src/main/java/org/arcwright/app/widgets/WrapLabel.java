@@ -2,6 +2,7 @@ package org.arcwright.app.widgets;
 
 import javax.swing.JTextArea;
 import javax.swing.UIManager;
+import javax.swing.text.DefaultCaret;
 
 /**
  * Plain text that wraps at its width and reads like a label. Cheaper than an HTML label (no HTML
@@ -24,6 +25,7 @@ public final class WrapLabel extends JTextArea {
         setFocusable(false);
         setOpaque(false);
         setBorder(null);
+        stayPut();
         restyle();
     }
 
@@ -39,7 +41,17 @@ public final class WrapLabel extends JTextArea {
     @Override
     public void updateUI() {
         super.updateUI();
+        stayPut();
         restyle();
+    }
+
+    /**
+     * A label never scrolls its caret into view: a text area's caret follows {@code setText} to
+     * the end and drags the enclosing scroll pane down with it (cards opened scrolled to the
+     * bottom). The caret is replaced with each look, so this runs again on every look change.
+     */
+    private void stayPut() {
+        if (getCaret() instanceof DefaultCaret) ((DefaultCaret) getCaret()).setUpdatePolicy(DefaultCaret.NEVER_UPDATE);
     }
 
     private void restyle() {

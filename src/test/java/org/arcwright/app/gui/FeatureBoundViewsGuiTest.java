@@ -135,4 +135,99 @@ class FeatureBoundViewsGuiTest {
         assertThat(GuiSupport.onEdt(() -> window.checkPanel().canKeep())).isFalse();
         GuiSupport.onEdt(() -> window.open(DECIDED));
     }
+
+    @Test
+    @Order(6)
+    void decideAnswersTypedForOneFeatureSurviveSelectingAnother() {
+        selectRow(1);
+        GuiSupport.onEdt(() -> window.showTab(0));
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.decidePanel().isShowing()), 10);
+        fixture.textBox("q.NOMINAL").deleteText().enterText("0.9");
+        GuiSupport.settle(100);
+        selectRow(4);
+        // nothing was put on the worksheet, and nothing was dropped either
+        assertThat(window.session().worksheet().feature("F2").orElseThrow().designCase().nominalRadius()).isEqualTo(0.8);
+        assertThat(GuiSupport.onEdt(() -> window.decidePanel().unkeptAnswers())).containsExactly("F2");
+        selectRow(1);
+        assertThat(fixture.textBox("q.NOMINAL").text()).isEqualTo("0.9");
+        assertThat(fixture.textBox("unkeptAnswers").target().isVisible()).isTrue();
+        GuiSupport.screenshot(window.frame(), "decide-unkept-light");
+        fixture.button("keepAnswers").click();
+        assertThat(window.session().worksheet().feature("F2").orElseThrow().designCase().nominalRadius()).isEqualTo(0.9);
+        assertThat(GuiSupport.onEdt(() -> window.decidePanel().unkeptAnswers())).isEmpty();
+        GuiSupport.onEdt(() -> window.session().undo());
+    }
+
+    @Test
+    @Order(7)
+    void recommendationsOpenAtTheBestCard() {
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.notesPanel().queryField().isEnabled()), 60);
+        selectRow(0);
+        GuiSupport.onEdt(() -> window.showTab(0));
+        GuiSupport.waitFor(() -> !GuiSupport.onEdt(() -> window.decidePanel().shownRecommendations()).isEmpty(), 30);
+        GuiSupport.settle(500);
+        assertThat(GuiSupport.onEdt(() -> window.decidePanel().resultsScrolledBy())).isZero();
+        fixture.button("choose1").click();
+        GuiSupport.settle(500);
+        assertThat(GuiSupport.onEdt(() -> window.decidePanel().resultsScrolledBy())).isZero();
+        GuiSupport.onEdt(() -> window.setTheme(org.arcwright.app.model.ThemeChoice.DARK));
+        GuiSupport.settle(800);
+        assertThat(GuiSupport.onEdt(() -> window.decidePanel().resultsScrolledBy())).isZero();
+        GuiSupport.screenshot(window.frame(), "decide-cards-dark");
+        GuiSupport.onEdt(() -> window.setTheme(org.arcwright.app.model.ThemeChoice.LIGHT));
+        GuiSupport.onEdt(() -> window.session().undo());
+    }
+
+    @Test
+    @Order(8)
+    void anUnsavedRuleEditIsNotDroppedWhenAnotherRuleIsClicked() {
+        GuiSupport.onEdt(() -> window.showTab(4));
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().isShowing())
+                && fixture.list("ruleList").contents().length > 1, 30);
+        fixture.list("ruleList").selectItem(0);
+        GuiSupport.settle(200);
+        String edited = GuiSupport.onEdt(() -> window.practicePanel().editor().getText()).replaceFirst("\\{", "{\n  ");
+        fixture.textBox("ruleText").setText(edited);
+        fixture.list("ruleList").selectItem(1);
+        fixture.optionPane().requireMessage("The changes to rule " + firstRuleId() + " are not saved.")
+                .buttonWithText("Keep editing").click();
+        GuiSupport.settle(200);
+        assertThat(fixture.list("ruleList").target().getSelectedIndex()).isZero();
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().editor().getText())).isEqualTo(edited);
+        fixture.list("ruleList").selectItem(1);
+        fixture.optionPane().buttonWithText("Discard the changes").click();
+        GuiSupport.settle(200);
+        assertThat(fixture.list("ruleList").target().getSelectedIndex()).isEqualTo(1);
+        assertThat(GuiSupport.onEdt(() -> window.practicePanel().ruleEdited())).isFalse();
+    }
+
+    @Test
+    @Order(9)
+    void theDesktopExportWritesTheSameSheetAsTheCommandLine() throws Exception {
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.action("file.export").isEnabled()), 60);
+        Path saved = config.resolve("same.arcpart");
+        GuiSupport.onEdt(() -> window.saveTo(saved));
+        // the same file name in two folders: a Markdown sheet names its frames folder after itself
+        Path desk = config.resolve("desk").resolve("sheet.md");
+        java.nio.file.Files.createDirectories(desk.getParent());
+        GuiSupport.onEdt(() -> window.export(desk));
+        GuiSupport.waitFor(() -> java.nio.file.Files.exists(desk)
+                && GuiSupport.onEdt(() -> window.statusLine().message()).startsWith("Exported"), 60);
+        Path cli = config.resolve("cli").resolve("sheet.md");
+        java.nio.file.Files.createDirectories(cli.getParent());
+        java.io.StringWriter out = new java.io.StringWriter();
+        int code = org.arcwright.cli.Cli.commandLine(new java.io.PrintWriter(out, true), new java.io.PrintWriter(out, true))
+                .execute("sheet", saved.toString(), "--out", cli.toString(), "--no-settings",
+                        "--personal", config.resolve("personal-pack").toString());
+        assertThat(code).as(out.toString()).isZero();
+        String a = java.nio.file.Files.readString(desk), b = java.nio.file.Files.readString(cli);
+        // the undecided F5 shows the advisor's suggestion in both, and both name the same producer
+        assertThat(a).contains("F5");
+        assertThat(a).isEqualTo(b);
+    }
+
+    private static String firstRuleId() {
+        return GuiSupport.onEdt(() -> ((org.arcwright.rules.RuleBook.Entry) fixture.list("ruleList").target().getModel()
+                .getElementAt(0)).rule().id());
+    }
 }
