@@ -41,7 +41,7 @@ final class SheetProblems {
             if (f.inspection() != null) out.add("inspected before a control was chosen");
             return out;
         }
-        Map<String, Object> n = r.numbers();
+        Map<String, Object> n = r.numbers().asMap();
         Double ktMin = number(n.get("ktAtMin"));
         Double ktTarget = number(n.get("targetKt"));
         if (ktMin != null && ktTarget != null && ktMin > ktTarget) {
