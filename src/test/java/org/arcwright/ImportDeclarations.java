@@ -40,7 +40,7 @@ final class ImportDeclarations {
     static final List<String> CORE = List.of("org.arcwright.io", "org.arcwright.model", "org.arcwright.tolerance",
             "org.arcwright.pack", "org.arcwright.callout", "org.arcwright.worksheet", "org.arcwright.zone",
             "org.arcwright.inspect", "org.arcwright.mechanics", "org.arcwright.rules", "org.arcwright.notes",
-            "org.arcwright.templates", "org.arcwright.simulate", "org.arcwright.services");
+            "org.arcwright.templates", "org.arcwright.simulate");
 
     /** Packages {@code the JDK} leaves out: each must be named to be imported. */
     static final List<String> GUARDED = List.of("java.awt..", "javax.swing..", "javax.imageio..");

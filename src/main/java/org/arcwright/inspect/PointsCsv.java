@@ -84,7 +84,7 @@ public final class PointsCsv {
         try {
             return DecimalText.parseFinite(s);
         } catch (NumberFormatException e) {
-            throw new InputProblem(src, line, col, field, "not a finite decimal number (such as 0.25 or 1e-3)");
+            throw new InputProblem(src, line, col, field, "not a number (expected a finite decimal such as 0.25 or 1e-3)");
         }
     }
 

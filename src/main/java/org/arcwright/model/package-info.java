@@ -16,9 +16,9 @@
  * <p>Nothing here recommends, judges or computes a tolerance; the JSON form of a case is unchanged by
  * where these types live.
  *
- * <p>May import: the JDK, Jackson, {@code org.arcwright.io}, and from {@code org.arcwright.tolerance}
- * only the two vocabulary types a case carries ({@code Units}, {@code DrawingStyle}); {@code tolerance}
- * itself imports only the JDK, Jackson and {@code io}, so no cycle can form. Must not import Swing/AWT
- * or print.
+ * <p>May import: the JDK, Jackson, {@code org.arcwright.io} and {@code org.arcwright.tolerance}.
+ * Of {@code tolerance} a case uses only the two vocabulary types it carries ({@code Units},
+ * {@code DrawingStyle}); {@code tolerance} itself imports only the JDK, Jackson and {@code io}, so no
+ * cycle can form. Must not import Swing/AWT or print.
  */
 package org.arcwright.model;

@@ -4,9 +4,8 @@
  * templates, loaded once by {@link org.arcwright.services.Practice#load}), the advisor over it with
  * or without linked notes, and the tolerancing sheet ({@link org.arcwright.services.SheetService}).
  *
- * <p>May import: the JDK and every core package ({@code io}, {@code pack}, {@code tolerance},
- * {@code callout}, {@code worksheet}, {@code zone}, {@code inspect}, {@code mechanics},
- * {@code rules}, {@code notes}, {@code templates}) and {@code render} for the sheet. Swing-free and
+ * <p>May import: the JDK, every core package and {@code org.arcwright.render}. It uses {@code render}
+ * only for the sheet. Swing-free and
  * silent: no Swing or AWT windows, nothing printed. Imported by {@code cli} and {@code app} only.
  */
 package org.arcwright.services;
