@@ -235,7 +235,11 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
             if (along > spanHi) spanHi = along;
         }
 
-        /** Fits the {@link #count} points gathered in {@code ws}; {@code leg} orients the direction. */
+        /**
+         * Fits the {@link #count} points gathered in {@code ws}; {@code leg} orients the direction.
+         * On more than {@value #COARSE_POINTS} points the reweighting runs on an evenly thinned
+         * subset, and one last reweighted pass over all points places the line.
+         */
         void solve(Workspace ws, boolean robust, Point2 leg) {
             int k = count;
             weighted = k;
@@ -260,48 +264,61 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
             direction(sxx, syy, sxy, hx, hy);
             rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, dx, dy) / k));
             if (!robust || k < MIN_POINTS) return;
-            double[] r = ws.r;
+            int every = Math.max(1, k / COARSE_POINTS);
             double floor = 1e-12 * Math.max(1, Math.abs(cx) + Math.abs(cy) + (hi - lo));
+            double cut = Double.NaN;
             for (int round = 0; round < ROBUST_ROUNDS; round++) {
-                double nxl = -dy, nyl = dx;
-                // the scale from an evenly thinned sample of at most COARSE_POINTS residuals
-                int every = Math.max(1, k / COARSE_POINTS), m = 0;
-                for (int i = 0; i < k; i += every) r[m++] = Math.abs((px[i] - cx) * nxl + (py[i] - cy) * nyl);
-                double mad = 1.4826 * Select.median(r, m);
-                double cut = TUKEY_C * Math.max(mad, floor);
-                // Select reorders r: the weights are computed afresh from the points, and the weighted
-                // moments about the current centre shifted to the new one (one pass instead of two)
-                double sw = 0, wx = 0, wy = 0, wxx = 0, wyy = 0, wxy = 0;
-                int w = 0;
-                for (int i = 0; i < k; i++) {
-                    double ex = px[i] - cx, ey = py[i] - cy;
-                    double e = (ex * nxl + ey * nyl) / cut;
-                    if (Math.abs(e) >= 1) continue;
-                    double wt = (1 - e * e) * (1 - e * e);
-                    sw += wt;
-                    wx += wt * ex;
-                    wy += wt * ey;
-                    wxx += wt * ex * ex;
-                    wyy += wt * ey * ey;
-                    wxy += wt * ex * ey;
-                    w++;
-                }
-                if (w < 2 || !(sw > 0)) break;
-                double mx = wx / sw, my = wy / sw;
-                double ncx = cx + mx, ncy = cy + my;
-                sxx = wxx - sw * mx * mx;
-                syy = wyy - sw * my * my;
-                sxy = wxy - sw * mx * my;
+                double mad = scale(ws, k, every);
+                cut = TUKEY_C * Math.max(mad, floor);
                 double odx = dx, ody = dy, ocx = cx, ocy = cy;
-                cx = ncx;
-                cy = ncy;
-                direction(sxx, syy, sxy, hx, hy);
-                weighted = w;
-                rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, dx, dy) / sw));
+                if (!reweight(px, py, k, every, cut, hx, hy)) break;
                 // settled when the line moves at either end by less than 1e-6 of the scatter, or 1e-10 of its span
-                double moved = Math.abs((cx - ocx) * nxl + (cy - ocy) * nyl) + Math.abs(odx * dy - ody * dx) * (hi - lo);
+                double moved = Math.abs((cx - ocx) * -ody + (cy - ocy) * odx) + Math.abs(odx * dy - ody * dx) * (hi - lo);
                 if (moved <= Math.max(1e-6 * mad, 1e-10 * Math.max(1e-9, hi - lo))) break;
             }
+            if (every > 1 && !Double.isNaN(cut)) reweight(px, py, k, 1, TUKEY_C * Math.max(scale(ws, k, every), floor), hx, hy);
+        }
+
+        /** 1.4826 × the median absolute orthogonal residual of every {@code every}-th point (MAD scale). */
+        private double scale(Workspace ws, int k, int every) {
+            double nxl = -dy, nyl = dx;
+            double[] px = ws.x, py = ws.y, r = ws.r;
+            int m = 0;
+            for (int i = 0; i < k; i += every) r[m++] = Math.abs((px[i] - cx) * nxl + (py[i] - cy) * nyl);
+            return 1.4826 * Select.median(r, m);
+        }
+
+        /**
+         * One reweighting with Tukey's biweight at cut-off {@code cut}, over every {@code every}-th
+         * point: the weighted moments about the current centre, shifted to the new one. False when too
+         * few points keep weight.
+         */
+        private boolean reweight(double[] px, double[] py, int k, int every, double cut, double hx, double hy) {
+            double nxl = -dy, nyl = dx;
+            double sw = 0, wx = 0, wy = 0, wxx = 0, wyy = 0, wxy = 0;
+            int w = 0;
+            for (int i = 0; i < k; i += every) {
+                double ex = px[i] - cx, ey = py[i] - cy;
+                double e = (ex * nxl + ey * nyl) / cut;
+                if (Math.abs(e) >= 1) continue;
+                double wt = (1 - e * e) * (1 - e * e);
+                sw += wt;
+                wx += wt * ex;
+                wy += wt * ey;
+                wxx += wt * ex * ex;
+                wyy += wt * ey * ey;
+                wxy += wt * ex * ey;
+                w++;
+            }
+            if (w < 2 || !(sw > 0)) return false;
+            double mx = wx / sw, my = wy / sw;
+            cx += mx;
+            cy += my;
+            double sxx = wxx - sw * mx * mx, syy = wyy - sw * my * my, sxy = wxy - sw * mx * my;
+            direction(sxx, syy, sxy, hx, hy);
+            weighted = every == 1 ? w : Math.min(count, w * every);
+            rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, dx, dy) / sw));
+            return true;
         }
 
         /** Major eigenvector of {@code [[sxx, sxy], [sxy, syy]]}, turned to point along {@code (hx, hy)}. */
