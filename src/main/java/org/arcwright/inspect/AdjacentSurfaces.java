@@ -22,8 +22,10 @@ import org.arcwright.zone.Point2;
  * to the blend's own points, burrs and steps by iteratively reweighted least squares with Tukey's
  * biweight, {@code w = (1 - (e / (c·s))²)²} for {@code |e| < c·s}, else 0, with
  * {@code c = }{@value #TUKEY_C} and the scale {@code s = 1.4826 · median |e|} (Beaton and Tukey
- * 1974; Huber, Robust Statistics, 1981, for the MAD scale). The selection is made twice: once
- * from the nominal corner, once from the corner the first fits define.
+ * 1974; Huber, Robust Statistics, 1981, for the MAD scale), until the line moves by less than 1e-6
+ * of that scale. The selection is made twice: once from the nominal corner (on a section of more than
+ * {@value #COARSE_POINTS} points, from an evenly thinned subset), once from the corner the first fits
+ * define.
  *
  * <p>A leg with fewer than {@value #MIN_POINTS} points beyond the tangent point, or whose points
  * span less than {@value #MIN_SPAN} of the tangent distance along it, keeps its nominal line and
@@ -45,6 +47,8 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
     /** Tukey's biweight tuning constant (95 % efficiency at the normal distribution). */
     public static final double TUKEY_C = 4.685;
     private static final int ROBUST_ROUNDS = 6;
+    /** Above this many points the first selection runs on an evenly thinned subset. */
+    private static final int COARSE_POINTS = 20_000;
 
     public AdjacentSurfaces {
         notes = List.copyOf(notes);
@@ -78,13 +82,19 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
      *     taken as the legs'
      */
     public static AdjacentSurfaces fit(Corner nominal, double largestRadius, double[] xs, double[] ys, int n) {
-        Workspace ws = new Workspace(Math.max(16, Math.min(n, 1024)));
+        int size = Math.max(16, Math.min(n, 1024));
+        Workspace wa = new Workspace(size), wb = new Workspace(size);
         Corner work = nominal;
         LineFit fa = null, fb = null;
+        // the first selection only places the second: on a large section, every stride-th point will do
+        int coarse = Math.max(1, n / COARSE_POINTS);
         for (int pass = 0; pass < 2; pass++) {
             double t = work.tangentDistance(largestRadius);
-            fa = LineFit.of(work, true, t, xs, ys, n, pass == 1, ws);
-            fb = LineFit.of(work, false, t, xs, ys, n, pass == 1, ws);
+            fa = new LineFit();
+            fb = new LineFit();
+            gather(work, t, xs, ys, n, pass == 0 ? coarse : 1, wa, wb, fa, fb);
+            fa.solve(wa, pass == 1, work.legA());
+            fb.solve(wb, pass == 1, work.legB());
             Corner next = cornerOf(nominal, fa, fb);
             if (next == null) break;
             work = next;
@@ -177,6 +187,40 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
         }
     }
 
+    /**
+     * Gathers the points of leg A and of leg B of {@code work} in one pass: beyond the tangent
+     * distance {@code t} (plus the margin) along a leg, and nearer that leg's line than the other's.
+     */
+    private static void gather(Corner work, double t, double[] xs, double[] ys, int n, int stride, Workspace wa,
+                               Workspace wb, LineFit fa, LineFit fb) {
+        Point2 v = work.vertex(), da = work.legA(), db = work.legB(), na = work.inwardNormalA(), nb = work.inwardNormalB();
+        double vx = v.x(), vy = v.y(), ax = da.x(), ay = da.y(), bx = db.x(), by = db.y();
+        double nax = na.x(), nay = na.y(), nbx = nb.x(), nby = nb.y();
+        double from = t * (1 + MARGIN);
+        int ka = 0, kb = 0;
+        for (int i = 0; i < n; i += stride) {
+            double qx = xs[i] - vx, qy = ys[i] - vy;
+            double ha = Math.abs(qx * nax + qy * nay), hb = Math.abs(qx * nbx + qy * nby);
+            if (ha < hb) {
+                double along = qx * ax + qy * ay;
+                if (along <= from) continue;
+                if (ka == wa.x.length) wa.ensure(ka + 1);
+                wa.x[ka] = xs[i];
+                wa.y[ka++] = ys[i];
+                fa.span(along);
+            } else if (hb < ha) {
+                double along = qx * bx + qy * by;
+                if (along <= from) continue;
+                if (kb == wb.x.length) wb.ensure(kb + 1);
+                wb.x[kb] = xs[i];
+                wb.y[kb++] = ys[i];
+                fb.span(along);
+            }
+        }
+        fa.count = ka;
+        fb.count = kb;
+    }
+
     /** A robust orthogonal line fit to one leg's points; fields, not a record, to keep it cheap. */
     private static final class LineFit {
         int count, weighted;
@@ -186,94 +230,95 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
             return count >= MIN_POINTS && weighted >= MIN_POINTS && spanHi - spanLo >= MIN_SPAN * t;
         }
 
+        void span(double along) {
+            if (along < spanLo) spanLo = along;
+            if (along > spanHi) spanHi = along;
+        }
+
         /**
-         * Points of leg A (or B) of {@code work}: beyond the tangent distance {@code t} (plus the
-         * margin) along it, and nearer its line than the other leg's. They are gathered once into
-         * the workspace; the fit and its reweighting then run over them alone.
+         * Fits the {@link #count} points gathered in {@code ws}; {@code leg} orients the direction.
+         * On more than {@value #COARSE_POINTS} points the reweighting runs on an evenly thinned
+         * subset, and one last reweighted pass over all points places the line.
          */
-        static LineFit of(Corner work, boolean legA, double t, double[] xs, double[] ys, int n, boolean robust, Workspace ws) {
-            Point2 v = work.vertex();
-            Point2 d = legA ? work.legA() : work.legB(), nn = legA ? work.inwardNormalA() : work.inwardNormalB();
-            Point2 on = legA ? work.inwardNormalB() : work.inwardNormalA();
-            double vx = v.x(), vy = v.y(), dx = d.x(), dy = d.y(), nx = nn.x(), ny = nn.y(), ox = on.x(), oy = on.y();
-            double from = t * (1 + MARGIN);
-            LineFit f = new LineFit();
-            int k = 0;
-            double sx = 0, sy = 0, lo = Double.POSITIVE_INFINITY, hi = Double.NEGATIVE_INFINITY;
-            for (int i = 0; i < n; i++) {
-                double qx = xs[i] - vx, qy = ys[i] - vy;
-                double along = qx * dx + qy * dy;
-                if (along <= from || Math.abs(qx * nx + qy * ny) >= Math.abs(qx * ox + qy * oy)) continue;
-                if (k == ws.x.length) ws.ensure(k + 1);
-                ws.x[k] = xs[i];
-                ws.y[k] = ys[i];
-                sx += xs[i];
-                sy += ys[i];
-                k++;
-                lo = Math.min(lo, along);
-                hi = Math.max(hi, along);
-            }
-            f.count = k;
-            f.weighted = k;
-            f.spanLo = lo;
-            f.spanHi = hi;
-            if (k < 2) return f;
+        void solve(Workspace ws, boolean robust, Point2 leg) {
+            int k = count;
+            weighted = k;
+            if (k < 2) return;
             double[] px = ws.x, py = ws.y;
+            double hx = leg.x(), hy = leg.y(), lo = spanLo, hi = spanHi;
             // plain total least squares: centroid and the major axis of the scatter matrix
-            f.cx = sx / k;
-            f.cy = sy / k;
+            double sx = 0, sy = 0;
+            for (int i = 0; i < k; i++) {
+                sx += px[i];
+                sy += py[i];
+            }
+            cx = sx / k;
+            cy = sy / k;
             double sxx = 0, syy = 0, sxy = 0;
             for (int i = 0; i < k; i++) {
-                double ex = px[i] - f.cx, ey = py[i] - f.cy;
+                double ex = px[i] - cx, ey = py[i] - cy;
                 sxx += ex * ex;
                 syy += ey * ey;
                 sxy += ex * ey;
             }
-            f.direction(sxx, syy, sxy, dx, dy);
-            f.rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, f.dx, f.dy) / k));
-            if (!robust || k < MIN_POINTS) return f;
-            double[] r = ws.r;
-            double floor = 1e-12 * Math.max(1, Math.abs(f.cx) + Math.abs(f.cy) + (hi - lo));
+            direction(sxx, syy, sxy, hx, hy);
+            rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, dx, dy) / k));
+            if (!robust || k < MIN_POINTS) return;
+            int every = Math.max(1, k / COARSE_POINTS);
+            double floor = 1e-12 * Math.max(1, Math.abs(cx) + Math.abs(cy) + (hi - lo));
+            double cut = Double.NaN;
             for (int round = 0; round < ROBUST_ROUNDS; round++) {
-                double nxl = -f.dy, nyl = f.dx;
-                for (int i = 0; i < k; i++) r[i] = Math.abs((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl);
-                double cut = TUKEY_C * Math.max(1.4826 * Select.median(r, k), floor);
-                // Select reorders r: the weights are computed afresh from the points
-                double sw = 0, wx = 0, wy = 0;
-                int w = 0;
-                for (int i = 0; i < k; i++) {
-                    double e = ((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl) / cut;
-                    if (Math.abs(e) >= 1) continue;
-                    double wt = (1 - e * e) * (1 - e * e);
-                    sw += wt;
-                    wx += wt * px[i];
-                    wy += wt * py[i];
-                    w++;
-                }
-                if (w < 2 || !(sw > 0)) break;
-                double ncx = wx / sw, ncy = wy / sw;
-                sxx = 0;
-                syy = 0;
-                sxy = 0;
-                for (int i = 0; i < k; i++) {
-                    double e = ((px[i] - f.cx) * nxl + (py[i] - f.cy) * nyl) / cut;
-                    if (Math.abs(e) >= 1) continue;
-                    double wt = (1 - e * e) * (1 - e * e);
-                    double ex = px[i] - ncx, ey = py[i] - ncy;
-                    sxx += wt * ex * ex;
-                    syy += wt * ey * ey;
-                    sxy += wt * ex * ey;
-                }
-                double odx = f.dx, ody = f.dy, ocx = f.cx, ocy = f.cy;
-                f.cx = ncx;
-                f.cy = ncy;
-                f.direction(sxx, syy, sxy, dx, dy);
-                f.weighted = w;
-                f.rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, f.dx, f.dy) / sw));
-                double moved = Math.abs((f.cx - ocx) * nxl + (f.cy - ocy) * nyl) + Math.abs(odx * f.dy - ody * f.dx) * (hi - lo);
-                if (moved <= 1e-13 * Math.max(1, hi)) break;
+                double mad = scale(ws, k, every);
+                cut = TUKEY_C * Math.max(mad, floor);
+                double odx = dx, ody = dy, ocx = cx, ocy = cy;
+                if (!reweight(px, py, k, every, cut, hx, hy)) break;
+                // settled when the line moves at either end by less than 1e-6 of the scatter, or 1e-10 of its span
+                double moved = Math.abs((cx - ocx) * -ody + (cy - ocy) * odx) + Math.abs(odx * dy - ody * dx) * (hi - lo);
+                if (moved <= Math.max(1e-6 * mad, 1e-10 * Math.max(1e-9, hi - lo))) break;
             }
-            return f;
+            if (every > 1 && !Double.isNaN(cut)) reweight(px, py, k, 1, TUKEY_C * Math.max(scale(ws, k, every), floor), hx, hy);
+        }
+
+        /** 1.4826 × the median absolute orthogonal residual of every {@code every}-th point (MAD scale). */
+        private double scale(Workspace ws, int k, int every) {
+            double nxl = -dy, nyl = dx;
+            double[] px = ws.x, py = ws.y, r = ws.r;
+            int m = 0;
+            for (int i = 0; i < k; i += every) r[m++] = Math.abs((px[i] - cx) * nxl + (py[i] - cy) * nyl);
+            return 1.4826 * Select.median(r, m);
+        }
+
+        /**
+         * One reweighting with Tukey's biweight at cut-off {@code cut}, over every {@code every}-th
+         * point: the weighted moments about the current centre, shifted to the new one. False when too
+         * few points keep weight.
+         */
+        private boolean reweight(double[] px, double[] py, int k, int every, double cut, double hx, double hy) {
+            double nxl = -dy, nyl = dx;
+            double sw = 0, wx = 0, wy = 0, wxx = 0, wyy = 0, wxy = 0;
+            int w = 0;
+            for (int i = 0; i < k; i += every) {
+                double ex = px[i] - cx, ey = py[i] - cy;
+                double e = (ex * nxl + ey * nyl) / cut;
+                if (Math.abs(e) >= 1) continue;
+                double wt = (1 - e * e) * (1 - e * e);
+                sw += wt;
+                wx += wt * ex;
+                wy += wt * ey;
+                wxx += wt * ex * ex;
+                wyy += wt * ey * ey;
+                wxy += wt * ex * ey;
+                w++;
+            }
+            if (w < 2 || !(sw > 0)) return false;
+            double mx = wx / sw, my = wy / sw;
+            cx += mx;
+            cy += my;
+            double sxx = wxx - sw * mx * mx, syy = wyy - sw * my * my, sxy = wxy - sw * mx * my;
+            direction(sxx, syy, sxy, hx, hy);
+            weighted = every == 1 ? w : Math.min(count, w * every);
+            rms = Math.sqrt(Math.max(0, orthogonal(sxx, syy, sxy, dx, dy) / sw));
+            return true;
         }
 
         /** Major eigenvector of {@code [[sxx, sxy], [sxy, syy]]}, turned to point along {@code (hx, hy)}. */

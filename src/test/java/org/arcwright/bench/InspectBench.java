@@ -10,6 +10,13 @@ import org.arcwright.inspect.ReferenceSolvers;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.ProfileZone;
 import org.arcwright.zone.RadiusZone;
+import org.arcwright.inspect.AdjacentSurfaces;
+import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.inspect.InspectionRequest;
+import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.Nominal;
+import org.arcwright.tolerance.RadiusKind;
+import org.arcwright.tolerance.Units;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
 import org.openjdk.jmh.annotations.Fork;
@@ -37,7 +44,8 @@ public class InspectBench {
     @Param({"1000000"})
     int n;
 
-    PointSet all, blend, all1k, blend1k;
+    PointSet all, blend, all1k, blend1k, all200;
+    InspectionRequest r1M, cr1M, r200, cr200;
     RadiusZone zone;
     Contour nominal, nominal1k;
     Circle start, start1k;
@@ -55,7 +63,40 @@ public class InspectBench {
         start1k = CircleFits.leastSquares(blend1k.xs(), blend1k.ys(), blend1k.size()).circle();
         Circle t = CircleFits.taubin(blend1k.xs(), blend1k.ys(), blend1k.size());
         taubin1k = new double[] {t.cx(), t.cy(), t.r()};
+        all200 = SectionData.section(200, 3);
+        InspectionCallout r = new InspectionCallout.RadiusLimits(RadiusKind.R, 1.9, 2.1);
+        InspectionCallout cr = new InspectionCallout.RadiusLimits(RadiusKind.CR, 1.9, 2.1);
+        Nominal nom = new Nominal.CornerBlend(SectionData.CORNER, SectionData.NOMINAL);
+        r1M = new InspectionRequest(Units.MM, nom, r, all, 1e-3, Double.NaN, false);
+        cr1M = new InspectionRequest(Units.MM, nom, cr, all, 1e-3, Double.NaN, false);
+        r200 = new InspectionRequest(Units.MM, nom, r, all200, 1e-3, Double.NaN, false);
+        cr200 = new InspectionRequest(Units.MM, nom, cr, all200, 1e-3, Double.NaN, false);
     }
+
+    /** The adjacent surfaces fitted to a million points (robust orthogonal lines, ADR 0302). */
+    @Benchmark
+    public Object surfaces1M() { return AdjacentSurfaces.fit(SectionData.CORNER, 2.1, all.xs(), all.ys(), all.size()); }
+
+    /** What the radius envelope now costs: the surfaces, then the zone on them. */
+    @Benchmark
+    public Object surfacesAndEnvelope1M() {
+        AdjacentSurfaces s = AdjacentSurfaces.fit(SectionData.CORNER, 2.1, all.xs(), all.ys(), all.size());
+        return new RadiusZone(s.corner(), 1.9, 2.1, 1e-3).evaluate(all.xs(), all.ys(), all.size());
+    }
+
+    /** The whole R inspection of a million points, as the CLI runs it (side by side with the previous build). */
+    @Benchmark
+    public Object inspectR1M() { return new Inspector().inspect(r1M); }
+
+    @Benchmark
+    public Object inspectCR1M() { return new Inspector().inspect(cr1M); }
+
+    /** A 200-point section, as a simulation calls it thousands of times. */
+    @Benchmark
+    public Object inspectR200() { return new Inspector().inspect(r200); }
+
+    @Benchmark
+    public Object inspectCR200() { return new Inspector().inspect(cr200); }
 
     @Benchmark
     public Object radiusEnvelope1M() { return zone.evaluate(all.xs(), all.ys(), all.size()); }

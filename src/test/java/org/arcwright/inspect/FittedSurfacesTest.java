@@ -150,6 +150,18 @@ class FittedSurfacesTest {
     }
 
     @Test
+    void aLargeSectionTakesTheThinnedPathAndStillFindsItsSurfaces() {
+        // 50,000 points a leg: the first selection and the reweighting run on thinned subsets, the
+        // last pass on all points (ADR 0302); the moved corner is found to far below the noise
+        PointSet pts = moved(Sections.section(SQUARE, 2, 50_000, 20_000, 0.0005, 9, f -> 0), 0.03, 0.02, 0, 0, 0);
+        InspectionResult r = inspector.inspect(request(SQUARE, 2, R, pts, 0.002));
+        assertThat(r.verdict()).isEqualTo(Verdict.PASS);
+        assertThat(r.surfaces().corner().vertex().distance(new Point2(0.03, 0.02))).isLessThan(2e-5);
+        assertThat(r.surfaces().includedAngleDeg()).isCloseTo(90, within(1e-3));
+        assertThat(r.surfaces().a().rms()).isCloseTo(0.0005, within(0.0001));
+    }
+
+    @Test
     void aLegWithTooFewPointsFallsBackToTheNominalWithANote() {
         PointSet pts = Sections.section(SQUARE, 2, 3, 400, 0, 1, f -> 0);
         InspectionResult r = inspector.inspect(Sections.request(SQUARE, 2, R, pts));
