@@ -625,7 +625,7 @@ public final class Advisor {
             m.put("max", round(hi));
             m.put("band", round(hi - lo));
             m.put("angle", angle);
-            CrescentZone z = CrescentZone.of(lo, nominal, hi, angle);
+            CrescentZone z = CrescentZone.of(lo, Math.min(Math.max(nominal, lo), hi), hi, angle);
             m.put("crescentWidth", round(z.width()));
             m.put("equivalentProfileZone", round(z.equalBilateralProfile()));
             if (isProfile()) {
