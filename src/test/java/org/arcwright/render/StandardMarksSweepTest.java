@@ -38,20 +38,24 @@ import org.junit.jupiter.api.io.TempDir;
  * composite frame; ISO alone has the UZ and OZ zone modifiers.
  */
 class StandardMarksSweepTest {
-    private static final Map<String, Pattern> ASME_ONLY = new LinkedHashMap<>();
-    private static final Map<String, Pattern> ISO_ONLY = new LinkedHashMap<>();
+    private static final Map<String, Pattern> ASME_ONLY;
+    private static final Map<String, Pattern> ISO_ONLY;
 
     static {
-        ASME_ONLY.put("CR callout", Pattern.compile("\\bCR\\s?[0-9.]"));
-        ASME_ONLY.put("controlled radius", Pattern.compile("(?i)controlled radius"));
-        ASME_ONLY.put("circled U", Pattern.compile("\\(U\\)|\u24CA"));
-        ASME_ONLY.put("dynamic triangle", Pattern.compile("\\(DYN\\)|\u25B3|(?i)\\bdynamic\\b"));
-        ASME_ONLY.put("composite frame", Pattern.compile("(?i)composite"));
-        ASME_ONLY.put("unequally disposed", Pattern.compile("(?i)unequally disposed"));
-        ISO_ONLY.put("UZ", Pattern.compile("\\bUZ[+-]?[0-9.]"));
-        ISO_ONLY.put("OZ", Pattern.compile("\\bOZ\\b"));
-        ISO_ONLY.put("ISO 129-1 dimensioning", Pattern.compile("ISO 129-1"));
-        ISO_ONLY.put("stacked ISO frames", Pattern.compile("(?i)stacked frames"));
+        Map<String, Pattern> asme = new LinkedHashMap<>();
+        Map<String, Pattern> iso = new LinkedHashMap<>();
+        asme.put("CR callout", Pattern.compile("\\bCR\\s?[0-9.]"));
+        asme.put("controlled radius", Pattern.compile("(?i)controlled radius"));
+        asme.put("circled U", Pattern.compile("\\(U\\)|\u24CA"));
+        asme.put("dynamic triangle", Pattern.compile("\\(DYN\\)|\u25B3|(?i)\\bdynamic\\b"));
+        asme.put("composite frame", Pattern.compile("(?i)composite"));
+        asme.put("unequally disposed", Pattern.compile("(?i)unequally disposed"));
+        iso.put("UZ", Pattern.compile("\\bUZ[+-]?[0-9.]"));
+        iso.put("OZ", Pattern.compile("\\bOZ\\b"));
+        iso.put("ISO 129-1 dimensioning", Pattern.compile("ISO 129-1"));
+        iso.put("stacked ISO frames", Pattern.compile("(?i)stacked frames"));
+        ASME_ONLY = java.util.Collections.unmodifiableMap(asme);
+        ISO_ONLY = java.util.Collections.unmodifiableMap(iso);
     }
 
     /** Sentences that name the other standard to warn about it, which is what they are for. */
