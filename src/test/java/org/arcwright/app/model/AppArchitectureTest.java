@@ -4,9 +4,11 @@ import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
 import org.arcwright.testing.ProductionClasses;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /** Keeps the window's view models free of Swing, so they are tested without a screen. */
+@Tag("slow")
 class AppArchitectureTest {
     private final JavaClasses classes = ProductionClasses.get();
 
