@@ -13,7 +13,7 @@ import org.junit.jupiter.params.provider.ValueSource;
 /**
  * Arcwright's solvers against Apache Commons Math 3.6.1 (Maven Central) on the same problems:
  * Levenberg-Marquardt for the geometric circle; SimplexSolver for the linear programmes of the
- * minimum-zone circle and of Chebyshev registration. Issue 3 asks for agreement within 1e-9 relative.
+ * minimum-zone circle and of Chebyshev registration. They must agree within 1e-9 relative.
  */
 @Tag("slow")
 class ReferenceSolversTest {

@@ -25,7 +25,7 @@ class CornerAndZonesProperties {
     void exactTangentArcHasEnvelopeSmallestEqualLargestEqualItsRadius(@ForAll @DoubleRange(min = 30, max = 150) double angle,
                                                                     @ForAll @DoubleRange(min = 0, max = 360) double turn,
                                                                     @ForAll @DoubleRange(min = 0.1, max = 10) double r) {
-        // Analytic (issue 3 check): an exact arc of radius r tangent to both legs: smallest = largest = r.
+        // Analytic: an exact arc of radius r tangent to both legs: smallest = largest = r.
         for (CornerKind kind : CornerKind.values()) {
             Corner c = corner(angle, turn, kind);
             double[][] p = arc(c, r, 101);
