@@ -1,24 +1,27 @@
 package org.arcwright;
 
 import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
-import static com.tngtech.archunit.library.dependencies.SlicesRuleDefinition.slices;
 import static org.assertj.core.api.Assertions.assertThat;
 
-import com.tngtech.archunit.base.DescribedPredicate;
 import com.tngtech.archunit.core.domain.Dependency;
 import com.tngtech.archunit.core.domain.JavaClass;
 import com.tngtech.archunit.core.domain.JavaClasses;
 import com.tngtech.archunit.library.GeneralCodingRules;
-import com.tngtech.archunit.library.dependencies.SliceAssignment;
-import com.tngtech.archunit.library.dependencies.SliceIdentifier;
-import com.tngtech.archunit.library.dependencies.SliceRule;
 import java.nio.file.Path;
+import java.util.ArrayDeque;
+import java.util.ArrayList;
+import java.util.Collections;
+import java.util.Deque;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import java.util.TreeMap;
 import java.util.TreeSet;
+import java.util.function.Function;
 import org.arcwright.testing.ProductionClasses;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -26,6 +29,7 @@ import org.junit.jupiter.api.Test;
  * shells; each package imports only what the "May import" sentence of its package-info declares
  * ({@link ImportDeclarations}); and packages form no cycles.
  */
+@Tag("slow")
 class ArchitectureTest {
     private static final String[] CORE = ImportDeclarations.CORE.stream().map(p -> p + "..").toArray(String[]::new);
 
@@ -102,7 +106,7 @@ class ArchitectureTest {
             for (Dependency dep : c.getDirectDependenciesFromSelf()) {
                 JavaClass target = dep.getTargetClass().getBaseComponentType();
                 String to = target.getPackageName();
-                if (target.isPrimitive() || d.allows(to)) continue;
+                if (target.isPrimitive() || d.allows(to, target.getName())) continue;
                 KnownViolation known = known(pkg, to);
                 if (known != null) {
                     seen.add(known);
@@ -119,41 +123,93 @@ class ArchitectureTest {
 
     @Test
     void topLevelPackagesFormNoCycles() {
-        withKnownViolationsIgnored(slices().matching("org.arcwright.(*)..").should().beFreeOfCycles())
-                .check(classes);
+        assertThat(cycles(p -> p.startsWith("org.arcwright.") ? "org.arcwright." + p.split("\\.")[2] : null))
+                .as("cycles among org.arcwright.(*)..").isEmpty();
     }
 
     @Test
     void desktopPackagesFormNoCycles() {
-        withKnownViolationsIgnored(slices().assignedFrom(DESKTOP).should().beFreeOfCycles()).check(classes);
+        assertThat(cycles(p -> p.equals("org.arcwright.app") || p.startsWith("org.arcwright.app.")
+                ? String.join(".", List.of(p.split("\\.")).subList(0, Math.min(4, p.split("\\.").length))) : null))
+                .as("cycles among org.arcwright.app and the packages below it").isEmpty();
     }
 
-    /** The desktop's packages: {@code org.arcwright.app} itself and each package below it. */
-    private static final SliceAssignment DESKTOP = new SliceAssignment() {
-        @Override
-        public SliceIdentifier getIdentifierOf(JavaClass c) {
-            String p = c.getPackageName();
-            if (p.equals("org.arcwright.app")) return SliceIdentifier.of("app");
-            if (!p.startsWith("org.arcwright.app.")) return SliceIdentifier.ignore();
-            return SliceIdentifier.of("app." + p.substring("org.arcwright.app.".length()).split("\\.")[0]);
+    /**
+     * The cycles between slices of the production classes, {@code sliceOf} giving a package's slice
+     * (null: not in any), known violations left out: each strongly connected set of more than one
+     * slice (Tarjan), with one class dependency for each edge inside it. Computed from the shared
+     * classes directly, which takes a fraction of the time of ArchUnit's slice rule.
+     */
+    private List<String> cycles(Function<String, String> sliceOf) {
+        Map<String, Map<String, String>> edges = new TreeMap<>();
+        for (JavaClass c : classes) {
+            String from = sliceOf.apply(c.getPackageName());
+            if (from == null) continue;
+            edges.computeIfAbsent(from, k -> new TreeMap<>());
+            for (Dependency dep : c.getDirectDependenciesFromSelf()) {
+                JavaClass target = dep.getTargetClass().getBaseComponentType();
+                String to = sliceOf.apply(target.getPackageName());
+                if (to == null || to.equals(from) || known(c.getPackageName(), target.getPackageName()) != null) continue;
+                edges.get(from).putIfAbsent(to, c.getName() + " -> " + target.getName());
+            }
         }
-
-        @Override
-        public String getDescription() {
-            return "org.arcwright.app and each package below it";
+        List<String> out = new ArrayList<>();
+        for (List<String> component : new Tarjan(edges).components()) {
+            if (component.size() < 2) continue;
+            StringBuilder b = new StringBuilder("cycle among " + component + ":");
+            for (String from : component) {
+                for (Map.Entry<String, String> e : edges.get(from).entrySet()) {
+                    if (component.contains(e.getKey())) b.append("\n  ").append(from).append(" -> ").append(e.getKey()).append(" (").append(e.getValue()).append(')');
+                }
+            }
+            out.add(b.toString());
         }
-    };
-
-    private static SliceRule withKnownViolationsIgnored(SliceRule rule) {
-        SliceRule r = rule;
-        for (KnownViolation k : KNOWN_VIOLATIONS) {
-            r = r.ignoreDependency(inPackage(k.from()), inPackage(k.to()));
-        }
-        return r;
+        return out;
     }
 
-    private static DescribedPredicate<JavaClass> inPackage(String pkg) {
-        return DescribedPredicate.describe("in " + pkg, c -> c.getPackageName().equals(pkg));
+    /** Strongly connected components of a small graph (Tarjan, 1972). */
+    private static final class Tarjan {
+        private final Map<String, Map<String, String>> edges;
+        private final Map<String, Integer> index = new HashMap<>();
+        private final Map<String, Integer> low = new HashMap<>();
+        private final Deque<String> stack = new ArrayDeque<>();
+        private final Set<String> onStack = new HashSet<>();
+        private final List<List<String>> components = new ArrayList<>();
+
+        Tarjan(Map<String, Map<String, String>> edges) {
+            this.edges = edges;
+        }
+
+        List<List<String>> components() {
+            for (String v : edges.keySet()) if (!index.containsKey(v)) visit(v);
+            return components;
+        }
+
+        private void visit(String v) {
+            index.put(v, index.size());
+            low.put(v, index.get(v));
+            stack.push(v);
+            onStack.add(v);
+            for (String w : edges.getOrDefault(v, Map.of()).keySet()) {
+                if (!index.containsKey(w)) {
+                    visit(w);
+                    low.put(v, Math.min(low.get(v), low.get(w)));
+                } else if (onStack.contains(w)) {
+                    low.put(v, Math.min(low.get(v), index.get(w)));
+                }
+            }
+            if (low.get(v).equals(index.get(v))) {
+                List<String> component = new ArrayList<>();
+                String w;
+                do {
+                    w = stack.pop();
+                    onStack.remove(w);
+                    component.add(w);
+                } while (!w.equals(v));
+                Collections.sort(component);
+                components.add(component);
+            }
+        }
     }
 
     private static KnownViolation known(String from, String to) {

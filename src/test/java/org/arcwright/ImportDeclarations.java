@@ -19,7 +19,8 @@ import java.util.stream.Stream;
  * What each production package may import, read from the {@code May import:} sentence of its
  * {@code package-info.java}, so that the sentence a reader sees is the rule the build checks.
  *
- * <p>The sentence runs from {@code May import:} to the first full stop that ends a sentence. Its
+ * <p>The sentence runs from {@code May import:} to the first full stop that ends a sentence, or a
+ * semicolon. Its
  * items are separated by commas, {@code and} or {@code including}; each is
  * <ul>
  *   <li>a package: {@code {@code org.arcwright.io}}, the short {@code {@code io}} or
@@ -28,7 +29,9 @@ import java.util.stream.Stream;
  *       package includes its sub-packages;</li>
  *   <li>a word of {@link #VOCABULARY}: {@code the JDK}, {@code Jackson}, {@code the core packages}...;</li>
  *   <li>{@code WORDS (ITEM, ITEM)}: the items in the brackets stand for the words before them; a
- *       bracket with no package in it is a comment and is dropped.</li>
+ *       bracket with no package in it is a comment and is dropped. When the words name a package
+ *       and the items are types, {@code from {@code tolerance} only ({@code Units}, {@code DrawingStyle})},
+ *       only those types of that package may be imported.</li>
  * </ul>
  * Anything else is an error naming the file, so the declaration stays readable by both.
  *
@@ -67,16 +70,25 @@ final class ImportDeclarations {
             Map.entry("the core packages", CORE),
             Map.entry("every core package", CORE));
 
-    private static final Pattern SENTENCE = Pattern.compile("May import:(.*?)\\.(\\s|$)", Pattern.DOTALL);
+    private static final Pattern SENTENCE = Pattern.compile("May import:(.*?)(\\.(\\s|$)|;)", Pattern.DOTALL);
     private static final Pattern CODE = Pattern.compile("\\{@code\\s+([^}]*)}");
     private static final Pattern BRACKETS = Pattern.compile("[^,(]*\\(([^)]*)\\)");
     /** First names of library and JDK packages; any other name is short for a package of ours. */
     private static final Pattern LIBRARY_ROOT = Pattern.compile("(java|javax|jdk|org|com|net|picocli)(\\.|$)");
     private static final Pattern PACKAGE = Pattern.compile("[a-z][a-z0-9_]*(\\.[a-z][a-z0-9_]*)*");
 
-    /** One package's declaration. {@code patterns} are ArchUnit package patterns. */
+    /** Prefix of a pattern that names one class, {@code class:org.arcwright.tolerance.Units}. */
+    static final String CLASS = "class:";
+
+    /** One package's declaration. {@code patterns} are package patterns, or {@link #CLASS} and a class name. */
     record Declaration(String packageName, Path file, String sentence, List<String> patterns, boolean jdk) {
-        /** Whether a class of this package may depend on a class in {@code target}. */
+        /** Whether a class of this package may depend on the class {@code targetClass} of package {@code target}. */
+        boolean allows(String target, String targetClass) {
+            return allows(target) || patterns.contains(CLASS + targetClass.replace('$', '.'))
+                    || targetClass.contains("$") && patterns.contains(CLASS + targetClass.substring(0, targetClass.indexOf('$')));
+        }
+
+        /** Whether a class of this package may depend on any class in {@code target}. */
         boolean allows(String target) {
             if (target.equals(packageName)) return true;
             boolean guarded = GUARDED.stream().anyMatch(g -> matches(g, target));
@@ -108,9 +120,16 @@ final class ImportDeclarations {
         if (!m.find()) throw new AssertionError(file + ": no 'May import:' sentence saying what " + pkg + " may import");
         String sentence = m.group(1).strip();
         String items = BRACKETS.matcher(sentence.replaceAll("\\s+(and|including)\\s+", ", ")).replaceAll(r -> {
+            String before = r.group().substring(0, r.group().indexOf('('));
             String inside = r.group(1);
-            return CODE.matcher(inside).find() ? Matcher.quoteReplacement(inside) : Matcher.quoteReplacement(
-                    r.group().substring(0, r.group().indexOf('(')));
+            if (!CODE.matcher(inside).find()) return Matcher.quoteReplacement(before);
+            Matcher owner = CODE.matcher(before);
+            String of = owner.find() ? owner.group(1).strip() : null;
+            if (of == null) return Matcher.quoteReplacement(inside);
+            // "only some types of {@code P} ({@code A}, {@code B})": the types A and B of P
+            return Matcher.quoteReplacement(CODE.matcher(inside).replaceAll(
+                    c -> Matcher.quoteReplacement(Character.isUpperCase(c.group(1).strip().charAt(0))
+                            ? "{@code " + of + "." + c.group(1).strip() + "}" : c.group())));
         });
         Set<String> patterns = new LinkedHashSet<>();
         boolean jdk = false;
@@ -139,6 +158,10 @@ final class ImportDeclarations {
     }
 
     private static String packagePattern(String name, Path file) {
+        int last = name.lastIndexOf('.');
+        if (last > 0 && Character.isUpperCase(name.charAt(last + 1))) {
+            return CLASS + packagePattern(name.substring(0, last), file) + "." + name.substring(last + 1);
+        }
         String n = name.endsWith("..") ? name.substring(0, name.length() - 2) : name;
         if (!PACKAGE.matcher(n).matches()) throw new AssertionError(file + ": '" + name + "' is not a package name");
         if (n.startsWith("org.arcwright.")) return name.endsWith("..") ? n + ".." : n;

@@ -62,4 +62,16 @@ class ImportDeclarationsTest {
         assertThatThrownBy(() -> parse(" * <p>Imports whatever it likes."))
                 .hasMessageContaining("x/package-info.java").hasMessageContaining("May import");
     }
+
+    @Test
+    void onlyNamedTypesOfAPackageWhenTheBracketListsTypes() {
+        ImportDeclarations.Declaration d = parse(" * <p>May import: the JDK, Jackson, {@code org.arcwright.io}, and from {@code org.arcwright.tolerance}\n"
+                + " * only the two vocabulary types a case carries ({@code Units}, {@code DrawingStyle}); {@code tolerance}\n"
+                + " * itself imports only the JDK, Jackson and {@code io}, so no cycle can form. Must not import Swing/AWT.");
+        assertThat(d.allows("org.arcwright.io")).isTrue();
+        assertThat(d.allows("org.arcwright.tolerance", "org.arcwright.tolerance.Units")).isTrue();
+        assertThat(d.allows("org.arcwright.tolerance", "org.arcwright.tolerance.DrawingStyle$Mark")).isTrue();
+        assertThat(d.allows("org.arcwright.tolerance", "org.arcwright.tolerance.CrescentZone")).isFalse();
+        assertThat(d.allows("org.arcwright.tolerance")).isFalse();
+    }
 }

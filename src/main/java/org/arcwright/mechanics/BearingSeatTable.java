@@ -3,7 +3,6 @@ package org.arcwright.mechanics;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import com.fasterxml.jackson.databind.node.ObjectNode;
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
@@ -124,7 +123,4 @@ public record BearingSeatTable(String id, String title, String source, String un
 
     /** A row found, whether it matched exactly, and a note when it did not. */
     public record Lookup(Row row, boolean exact, String note) {}
-
-    /** All rows, as a list (for reports). */
-    public List<Row> allRows() { return new ArrayList<>(rows); }
 }

@@ -58,9 +58,4 @@ public record FilletStressCase(ShoulderShape shape, LoadCase load, Units units, 
 
     /** h = (D - d)/2, the largest radius that still meets the shoulder face tangentially. */
     public double stepHeight() { return (bigD - smallD) / 2; }
-
-    /** The same case with other radius limits (the nominal at their mean). */
-    public FilletStressCase withRadii(double newMin, double newMax) {
-        return new FilletStressCase(shape, load, units, bigD, smallD, newMin, (newMin + newMax) / 2, newMax, strength);
-    }
 }

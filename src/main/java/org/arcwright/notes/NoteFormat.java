@@ -6,6 +6,7 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Pattern;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -37,14 +38,14 @@ public final class NoteFormat {
             List.of("id", "title", "tags", "functions", "standard", "process", "author", "updated");
 
     private static final String FENCE = "---";
-    private static final java.util.regex.Pattern LINE_BREAK = java.util.regex.Pattern.compile("\r?\n");
-    private static final java.util.regex.Pattern HEADING = java.util.regex.Pattern.compile("^\\s{0,3}#{1,6}\\s+");
-    private static final java.util.regex.Pattern BULLET = java.util.regex.Pattern.compile("^\\s*[-*+]\\s+");
-    private static final java.util.regex.Pattern QUOTE = java.util.regex.Pattern.compile("^\\s*>\\s?");
-    private static final java.util.regex.Pattern LINK = java.util.regex.Pattern.compile("\\[([^\\]]*)\\]\\([^)]*\\)");
-    private static final java.util.regex.Pattern STRONG_OR_CODE = java.util.regex.Pattern.compile("(\\*\\*|__|`)");
-    private static final java.util.regex.Pattern EMPHASIS =
-            java.util.regex.Pattern.compile("(?<![\\w*])\\*(?!\\s)([^*]+?)(?<!\\s)\\*(?![\\w*])");
+    private static final Pattern LINE_BREAK = Pattern.compile("\r?\n");
+    private static final Pattern HEADING = Pattern.compile("^\\s{0,3}#{1,6}\\s+");
+    private static final Pattern BULLET = Pattern.compile("^\\s*[-*+]\\s+");
+    private static final Pattern QUOTE = Pattern.compile("^\\s*>\\s?");
+    private static final Pattern LINK = Pattern.compile("\\[([^\\]]*)\\]\\([^)]*\\)");
+    private static final Pattern STRONG_OR_CODE = Pattern.compile("(\\*\\*|__|`)");
+    private static final Pattern EMPHASIS =
+            Pattern.compile("(?<![\\w*])\\*(?!\\s)([^*]+?)(?<!\\s)\\*(?![\\w*])");
 
     private NoteFormat() {}
 

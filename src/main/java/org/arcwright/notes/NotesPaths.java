@@ -1,5 +1,7 @@
 package org.arcwright.notes;
 
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Map;
@@ -59,8 +61,8 @@ public final class NotesPaths {
     public static Path ensurePersonalPack(Path dir) {
         try {
             Files.createDirectories(dir.resolve("notes"));
-        } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException("could not create the personal pack folder " + dir + ": " + e.getMessage(), e);
+        } catch (IOException e) {
+            throw new UncheckedIOException("could not create the personal pack folder " + dir + ": " + e.getMessage(), e);
         }
         Path manifest = dir.resolve("pack.json");
         if (!Files.exists(manifest)) {

@@ -1,5 +1,6 @@
 package org.arcwright.notes;
 
+import java.util.Collections;
 import java.util.EnumMap;
 import java.util.List;
 import java.util.Map;
@@ -18,7 +19,7 @@ public record SearchResult(String query, long totalHits, List<NoteHit> hits, Map
         hits = List.copyOf(hits);
         EnumMap<NoteFacet, List<FacetCount>> f = new EnumMap<>(NoteFacet.class);
         facets.forEach((k, v) -> f.put(k, List.copyOf(v)));
-        facets = java.util.Collections.unmodifiableMap(f);
+        facets = Collections.unmodifiableMap(f);
     }
 
     /** Nothing found. */

@@ -3,11 +3,15 @@ package org.arcwright.notes;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.nio.file.FileVisitResult;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.SimpleFileVisitor;
 import java.nio.file.attribute.BasicFileAttributes;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
+import java.util.Set;
 import org.arcwright.pack.PackStack;
 import org.arcwright.pack.PracticePack;
 
@@ -57,19 +61,19 @@ final class SourceScan {
         if (!Files.isDirectory(dir)) return List.of();
         List<Entry> out = new ArrayList<>();
         try {
-            Files.walkFileTree(dir, java.util.Set.of(), 1, new java.nio.file.SimpleFileVisitor<>() {
+            Files.walkFileTree(dir, Set.of(), 1, new SimpleFileVisitor<>() {
                 @Override
-                public java.nio.file.FileVisitResult visitFile(Path file, BasicFileAttributes a) {
+                public FileVisitResult visitFile(Path file, BasicFileAttributes a) {
                     if (a.isRegularFile() && file.getFileName().toString().endsWith(".md")) {
                         out.add(new Entry(packIndex, pack, file, a.size(), a.lastModifiedTime().toMillis()));
                     }
-                    return java.nio.file.FileVisitResult.CONTINUE;
+                    return FileVisitResult.CONTINUE;
                 }
             });
         } catch (IOException e) {
             throw new UncheckedIOException("could not list " + dir, e);
         }
-        out.sort(java.util.Comparator.comparing(e -> e.path().getFileName().toString()));
+        out.sort(Comparator.comparing(e -> e.path().getFileName().toString()));
         return out;
     }
 

@@ -3,6 +3,7 @@ package org.arcwright.notes;
 import java.io.IOException;
 import java.io.StringReader;
 import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
 import java.text.ParseException;
 import org.apache.lucene.analysis.Analyzer;
 import org.apache.lucene.analysis.LowerCaseFilter;
@@ -97,7 +98,7 @@ public final class TradeAnalyzer extends Analyzer {
         try (var in = TradeAnalyzer.class.getResourceAsStream(SYNONYMS_RESOURCE)) {
             if (in == null) throw new IllegalStateException("synonym list missing from the classpath: " + SYNONYMS_RESOURCE);
             SolrSynonymParser parser = new SolrSynonymParser(true, true, ruleAnalyzer);
-            parser.parse(new StringReader(new String(in.readAllBytes(), java.nio.charset.StandardCharsets.UTF_8)));
+            parser.parse(new StringReader(new String(in.readAllBytes(), StandardCharsets.UTF_8)));
             return parser.build();
         } catch (IOException e) {
             throw new UncheckedIOException(e);

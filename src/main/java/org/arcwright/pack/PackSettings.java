@@ -1,6 +1,7 @@
 package org.arcwright.pack;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.InvalidPathException;
 import java.nio.file.Path;
@@ -54,7 +55,7 @@ public record PackSettings(Path file, List<Path> teamPacks, Path personalPack, O
         } catch (InputProblem e) {
             InputProblem located = e.source() == null ? e.in(file.toString()) : e;
             return new PackSettings(file, List.of(), null, Optional.of(located));
-        } catch (java.io.UncheckedIOException e) {
+        } catch (UncheckedIOException e) {
             return new PackSettings(file, List.of(), null,
                     Optional.of(new InputProblem(file.toString(), 0, 0, null, "could not read: " + e.getMessage(), e)));
         }

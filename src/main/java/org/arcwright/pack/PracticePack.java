@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Objects;
 import java.util.stream.Stream;
@@ -44,7 +45,7 @@ public record PracticePack(PackManifest manifest, Path root, PackLayer layer) {
         if (!Files.isDirectory(dir)) return List.of();
         try (Stream<Path> s = Files.list(dir)) {
             return s.filter(p -> Files.isRegularFile(p) && p.getFileName().toString().endsWith(extension))
-                    .sorted(java.util.Comparator.comparing(p -> p.getFileName().toString()))
+                    .sorted(Comparator.comparing(p -> p.getFileName().toString()))
                     .toList();
         } catch (IOException e) {
             throw new UncheckedIOException("could not list " + dir, e);

@@ -43,9 +43,6 @@ public final class DrawingFont {
         }
     }
 
-    /** The AWT font at {@code size} (used where a real font is needed, e.g. PDF embedding by name). */
-    public Font awtFont(float size) { return font.deriveFont(size); }
-
     /** Advance width of {@code text} at font size {@code size}. */
     public double width(String text, double size) {
         if (text.isEmpty()) return 0;

@@ -3,7 +3,6 @@ package org.arcwright.render;
 import java.awt.Shape;
 import java.awt.geom.Arc2D;
 import java.awt.geom.Ellipse2D;
-import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
 
 /**
@@ -96,7 +95,4 @@ public final class Symbols {
         p.closePath();
         return p;
     }
-
-    /** The shaft of the between symbol from x0 to x1 at height y. */
-    public static Shape betweenShaft(double x0, double x1, double y) { return new Line2D.Double(x0, y, x1, y); }
 }

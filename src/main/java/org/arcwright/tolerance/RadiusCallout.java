@@ -75,12 +75,6 @@ public record RadiusCallout(RadiusKind kind, Units units, ToleranceForm form) {
         return form.places();
     }
 
-    /** This radius with a general tolerance applied (for an untoleranced callout). */
-    public RadiusCallout withGeneralTolerance(BigDecimal plusMinus) {
-        BigDecimal nominal = form.nominal().orElseThrow(() -> new IllegalStateException("no nominal"));
-        return new RadiusCallout(kind, units, new ToleranceForm.EqualBilateral(nominal, plusMinus));
-    }
-
     /** The same values with another kind (e.g. R turned into CR). */
     public RadiusCallout withKind(RadiusKind newKind) {
         return new RadiusCallout(newKind, units, form);

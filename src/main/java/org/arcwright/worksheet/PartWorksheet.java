@@ -96,10 +96,6 @@ public record PartWorksheet(int format, PartInfo part, Units units, DrawingStyle
         return new PartWorksheet(format, newPart, units, standard, titleBlock, features);
     }
 
-    public PartWorksheet withTitleBlock(TitleBlock newTitleBlock) {
-        return new PartWorksheet(format, part, units, standard, newTitleBlock, features);
-    }
-
     /** A feature id not yet used, e.g. {@code F4}. */
     public String nextFeatureId() {
         int n = features.size() + 1;

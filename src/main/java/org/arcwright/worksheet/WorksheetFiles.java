@@ -25,11 +25,6 @@ public final class WorksheetFiles {
         json.writeAtomically(file, worksheet);
     }
 
-    /** The worksheet as JSON text, as it would be saved. */
-    public String toText(PartWorksheet worksheet) {
-        return json.write(worksheet);
-    }
-
     /** Parses worksheet JSON text, attributing errors to {@code source}. */
     public PartWorksheet parse(String text, String source) {
         return json.parse(text, source, PartWorksheet.class);

@@ -5,6 +5,7 @@ import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
@@ -126,7 +127,7 @@ public final class GeneratedNotes {
     }
 
     private String word(SplittableRandom r) {
-        int i = java.util.Arrays.binarySearch(cumulative, r.nextDouble());
+        int i = Arrays.binarySearch(cumulative, r.nextDouble());
         return words[Math.min(words.length - 1, i < 0 ? -i - 1 : i)];
     }
 

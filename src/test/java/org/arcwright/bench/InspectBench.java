@@ -29,7 +29,7 @@ import org.openjdk.jmh.annotations.Setup;
 import org.openjdk.jmh.annotations.State;
 
 /**
- * Issue 3 speed targets, one thread, warm: on 1,000,000 points the radius-zone envelope, the
+ * The speed targets of docs/benchmarks/inspect.md, one thread, warm: on 1,000,000 points the radius-zone envelope, the
  * algebraic (Taubin) circle, the geometric least-squares circle, the minimum-zone circle and the
  * floating profile registration; on 1,000 points the same fits side by side with the Commons Math
  * reference solvers (Levenberg-Marquardt, SimplexSolver).

@@ -3,12 +3,18 @@ package org.arcwright.bench;
 import java.lang.management.ManagementFactory;
 import java.lang.management.MemoryPoolMXBean;
 import java.lang.management.MemoryType;
+import java.lang.management.OperatingSystemMXBean;
+import java.lang.management.ThreadMXBean;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Arrays;
+import java.util.Comparator;
 import java.util.List;
+import java.util.Map;
 import java.util.SplittableRandom;
+import java.util.TreeMap;
+import java.util.stream.Collectors;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.notes.IndexReport;
 import org.arcwright.notes.NoteFilters;
@@ -131,7 +137,7 @@ public final class NotesHarness {
     }
 
     private static void coldUnchecked(Path pack, Path index) {
-        java.lang.management.ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+        ThreadMXBean threads = ManagementFactory.getThreadMXBean();
         long cpuMain0 = threads.getCurrentThreadCpuTime();
         long cpuAll0 = processCpuNanos();
         long p0 = System.nanoTime();
@@ -177,8 +183,8 @@ public final class NotesHarness {
                 int n = 1000;
                 long[] nanos = new long[n];
                 long[] cpu = new long[n];
-                java.lang.management.ThreadMXBean threads = ManagementFactory.getThreadMXBean();
-                java.util.Map<String, List<Long>> byQuery = new java.util.TreeMap<>();
+                ThreadMXBean threads = ManagementFactory.getThreadMXBean();
+                Map<String, List<Long>> byQuery = new TreeMap<>();
                 for (int i = 0; i < n; i++) {
                     String q = QUERIES[random.nextInt(QUERIES.length)];
                     long c = threads.getCurrentThreadCpuTime();
@@ -197,10 +203,10 @@ public final class NotesHarness {
                         nanos[(int) (n * 0.95)] / 1e6, nanos[(int) (n * 0.99)] / 1e6, nanos[n - 1] / 1e6,
                         cpu[n / 2] / 1e6, cpu[(int) (n * 0.95)] / 1e6);
                 System.out.println("  slowest queries by median: " + byQuery.entrySet().stream()
-                        .map(e -> java.util.Map.entry(e.getKey(), e.getValue().stream().sorted().toList().get(e.getValue().size() / 2)))
-                        .sorted(java.util.Map.Entry.<String, Long>comparingByValue().reversed()).limit(5)
+                        .map(e -> Map.entry(e.getKey(), e.getValue().stream().sorted().toList().get(e.getValue().size() / 2)))
+                        .sorted(Map.Entry.<String, Long>comparingByValue().reversed()).limit(5)
                         .map(e -> String.format("\"%s\" %.2f ms", e.getKey(), e.getValue() / 1e6))
-                        .collect(java.util.stream.Collectors.joining(", ")));
+                        .collect(Collectors.joining(", ")));
             }
             long t = System.nanoTime();
             for (int i = 0; i < 200; i++) store.related(List.of("sealing", "o-ring"), "groove corner radius on a housing", 5);
@@ -210,7 +216,7 @@ public final class NotesHarness {
     }
 
     private static long processCpuNanos() {
-        java.lang.management.OperatingSystemMXBean os = ManagementFactory.getOperatingSystemMXBean();
+        OperatingSystemMXBean os = ManagementFactory.getOperatingSystemMXBean();
         if (os instanceof com.sun.management.OperatingSystemMXBean sun) return sun.getProcessCpuTime();
         return 0;
     }
@@ -232,7 +238,7 @@ public final class NotesHarness {
     private static void deleteTree(Path dir) throws Exception {
         if (!Files.exists(dir)) return;
         try (var s = Files.walk(dir)) {
-            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) Files.delete(p);
+            for (Path p : s.sorted(Comparator.reverseOrder()).toList()) Files.delete(p);
         }
     }
 }

@@ -6,14 +6,16 @@ import static org.assertj.core.api.Assertions.within;
 import java.util.Random;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.ProfileZone;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.ValueSource;
 
 /**
  * Arcwright's solvers against Apache Commons Math 3.6.1 (Maven Central) on the same problems:
  * Levenberg-Marquardt for the geometric circle; SimplexSolver for the linear programmes of the
- * minimum-zone circle and of Chebyshev registration. Issue 3 asks for agreement within 1e-9 relative.
+ * minimum-zone circle and of Chebyshev registration. They must agree within 1e-9 relative.
  */
+@Tag("slow")
 class ReferenceSolversTest {
 
     private static double[][] noisyArc(long seed, int n) {

@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Map;
 import java.util.Random;
@@ -110,7 +111,7 @@ class NotesStoreRecoveryTest {
     void aMissingIndexFolderIsBuilt() throws IOException {
         buildOnce();
         try (Stream<Path> s = Files.walk(index)) {
-            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) Files.delete(p);
+            for (Path p : s.sorted(Comparator.reverseOrder()).toList()) Files.delete(p);
         }
         try (NotesStore s = NotesStore.open(stack(), index)) {
             assertThat(s.report().reason()).isEqualTo("no index yet");

@@ -170,12 +170,6 @@ public final class WorksheetSession {
         return Optional.ofNullable(id == null ? null : measured.get(id));
     }
 
-    /** Renames the part (number, name...) as one undoable edit. */
-    public void updatePart(PartWorksheet.PartInfo info) {
-        if (info.equals(worksheet.part())) return;
-        edit("Edit part", worksheet.withPart(info));
-    }
-
     public boolean canUndo() { return history.canUndo(); }
 
     public boolean canRedo() { return history.canRedo(); }

@@ -11,6 +11,7 @@ import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
 import org.junit.jupiter.api.io.TempDir;
@@ -20,6 +21,7 @@ import org.junit.jupiter.api.io.TempDir;
  * verdict, the stress view of a fatigue-loaded fillet, and a notes search while the UI stays live.
  */
 @TestMethodOrder(MethodOrderer.OrderAnnotation.class)
+@Tag("gui")
 class CheckStressNotesGuiTest {
     @TempDir
     static Path config;

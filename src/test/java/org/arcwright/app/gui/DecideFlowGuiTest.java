@@ -12,6 +12,7 @@ import org.assertj.swing.core.Robot;
 import org.assertj.swing.fixture.FrameFixture;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -19,6 +20,7 @@ import org.junit.jupiter.api.io.TempDir;
  * Walks the main decision flow through the real window: a fatigue-loaded shoulder fillet from the
  * form to a callout on the worksheet, in the light look and again in the dark one.
  */
+@Tag("gui")
 class DecideFlowGuiTest {
     @TempDir
     static Path config;

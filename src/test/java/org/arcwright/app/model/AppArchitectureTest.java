@@ -4,12 +4,14 @@ import static com.tngtech.archunit.lang.syntax.ArchRuleDefinition.noClasses;
 
 import com.tngtech.archunit.core.domain.JavaClasses;
 import org.arcwright.testing.ProductionClasses;
+import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 
 /**
  * Keeps the window's view models free of Swing, so they are tested without a screen, and the desktop
  * layered: entry point, then the window, then the panels, then the widgets and view models.
  */
+@Tag("slow")
 class AppArchitectureTest {
     private final JavaClasses classes = ProductionClasses.get();
 
