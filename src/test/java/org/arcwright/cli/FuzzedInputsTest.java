@@ -39,7 +39,7 @@ import net.jqwik.api.lifecycle.BeforeContainer;
  * {@code -Djqwik.tries.default=...} for a long hunt.
  */
 @Tag("fuzz")
-class FuzzedInputsProperties {
+class FuzzedInputsTest {
     private static final ObjectMapper JSON = new ObjectMapper();
     private static final Set<Integer> CLEAN_EXITS = Set.of(Cli.OK, Cli.FAIL, Cli.BAD_INPUT, 3);
     private static Path dir;
