@@ -76,6 +76,9 @@ final class ClearanceCommand implements Callable<Integer> {
             s.put("required", r.support().required());
             s.put("sufficient", r.support().sufficient());
             m.put("support", s);
+            if (r.support().required() == null) m.put("notChecked", "support: no requiredSupport given");
+        } else {
+            m.put("notChecked", "support: no shoulderHeight given");
         }
         m.put("passes", r.passes());
         m.put("notes", r.notes());
@@ -106,6 +109,11 @@ final class ClearanceCommand implements Callable<Integer> {
                     Numbers.fixed(s.contactFrom(), d), Numbers.fixed(s.contactTo(), d),
                     s.required() == null ? "" : (s.sufficient() ? ": meets" : ": LESS THAN") + " the required "
                             + Numbers.plain(s.required()) + " " + u);
+        }
+        if (s == null) {
+            out.println("  support    not checked: no shoulderHeight given");
+        } else if (s.required() == null) {
+            out.println("  support    not judged: no requiredSupport given");
         }
         for (String n : r.notes()) out.println("  note: " + n);
         for (String n : r.cautions()) out.println("  caution: " + n);

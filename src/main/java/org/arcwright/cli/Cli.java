@@ -106,7 +106,17 @@ public final class Cli {
     public static int run(String[] args) {
         PrintWriter out = new PrintWriter(new java.io.OutputStreamWriter(System.out, java.nio.charset.StandardCharsets.UTF_8), true);
         PrintWriter err = new PrintWriter(new java.io.OutputStreamWriter(System.err, java.nio.charset.StandardCharsets.UTF_8), true);
-        int code = commandLine(out, err).execute(args);
+        int code;
+        try {
+            code = commandLine(out, err).execute(args);
+        } catch (OutOfMemoryError e) {
+            err.println("arcwright: out of memory; no result was produced. Give Java more memory (java -Xmx...), or fewer "
+                    + "points (the README states what a heap holds).");
+            code = INTERNAL_ERROR;
+        } catch (Error e) {
+            err.println("arcwright: internal error (" + e.getClass().getSimpleName() + "); no result was produced.");
+            code = INTERNAL_ERROR;
+        }
         out.flush();
         err.flush();
         return code;

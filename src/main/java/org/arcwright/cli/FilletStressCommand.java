@@ -124,6 +124,8 @@ final class FilletStressCommand implements Callable<Integer> {
                 detail.add(d);
             }
             m.put("minimumRadiusDetail", detail);
+        } else {
+            m.put("notChecked", NO_TARGET);
         }
         m.put("notes", r.notes());
         m.put("cautions", r.cautions());
@@ -140,6 +142,10 @@ final class FilletStressCommand implements Callable<Integer> {
         m.put("withinFit", p.withinFit());
         return m;
     }
+
+    /** Said whenever no target is given, so that exit 0 is not read as "meets its target". */
+    static final String NO_TARGET = "not checked: no targetKt or targetKf given, so no limit on K_t or K_f was judged; "
+            + "exit 0 says only that the figures were computed";
 
     private static void printText(PrintWriter out, FilletStressReport r, List<MinimumRadius> minima, Boolean meets) {
         FilletStressCase c = r.input();
@@ -163,6 +169,7 @@ final class FilletStressCommand implements Callable<Integer> {
             row(out, "r", r.atNominal(), kf, places(c));
         }
         for (MinimumRadius m : minima) out.println("  target     " + m.message());
+        if (minima.isEmpty()) out.println("  " + NO_TARGET);
         MinimumRadius g = governing(minima);
         if (meets != null) {
             if (meets) {

@@ -169,6 +169,10 @@ public final class JsonFiles {
         if (cut >= 0) msg = msg.substring(0, cut);
         if (e instanceof com.fasterxml.jackson.databind.exc.MismatchedInputException mie) {
             if (msg.startsWith("Missing required creator property")) return "missing required field";
+            if (mie instanceof com.fasterxml.jackson.databind.exc.InvalidTypeIdException ite) {
+                return ite.getTypeId() == null ? "missing the field that says which kind it is (\"type\")"
+                        : "unknown type '" + ite.getTypeId() + "'";
+            }
             String want = mie.getTargetType() == null ? null : expected(mie.getTargetType());
             if (msg.startsWith("Cannot coerce empty String")) {
                 return "empty text \"\" where " + (want == null ? "a value" : want) + " is expected";

@@ -241,4 +241,25 @@ class HostileInputTest {
         badInput(CliRun.of("advise", "/dev/zero", "--no-notes", "--no-settings"), "not a regular file");
         badInput(CliRun.of("advise", "--batch", "/dev/zero", "--no-notes", "--no-settings"), "not a regular file");
     }
+
+    @Test
+    void anOptionalCheckLeftOutIsSaidNotSilentlySkipped() throws Exception {
+        Path shaft = file("no-target.json", """
+                {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 38, "d": 32, "rMin": 0.8, "rMax": 1.2}
+                """);
+        CliRun text = CliRun.of("fillet-stress", shaft.toString());
+        assertThat(text.exitCode()).isZero();
+        assertThat(text.out()).contains("not checked: no targetKt or targetKf given");
+        assertThat(CliRun.of("fillet-stress", shaft.toString(), "--format", "json").out()).contains("\"notChecked\"");
+        Path corner = file("no-support.json", """
+                {"units": "mm", "fillet": {"rMin": 0.8, "rMax": 1.0}, "mating": {"type": "bearing", "chamferMin": 1.1},
+                 "shoulderHeight": 3.0}
+                """);
+        assertThat(CliRun.of("clearance", corner.toString()).out()).contains("not judged: no requiredSupport given");
+        Path bare = file("no-shoulder.json", """
+                {"units": "mm", "fillet": {"rMin": 0.8, "rMax": 1.0}, "mating": {"type": "bearing", "chamferMin": 1.1}}
+                """);
+        assertThat(CliRun.of("clearance", bare.toString()).out()).contains("not checked: no shoulderHeight given");
+        assertThat(CliRun.of("clearance", bare.toString(), "--format", "json").out()).contains("\"notChecked\"");
+    }
 }

@@ -1,8 +1,5 @@
 package org.arcwright.app.model;
 
-import java.io.IOException;
-import java.io.UncheckedIOException;
-import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -53,11 +50,8 @@ public final class TemplatePreview {
 
     /** The text of {@code e} as written in its pack. */
     public static String text(Entry e) {
-        try {
-            return Files.readString(e.file());
-        } catch (IOException ex) {
-            throw new UncheckedIOException("could not read " + e.file() + ": " + ex.getMessage(), ex);
-        }
+        // PACK/templates/NAME.mustache: read only from inside PACK, as the CLI does
+        return org.arcwright.io.InputFiles.readPackText(e.file(), e.file().getParent().getParent());
     }
 
     /**
