@@ -85,9 +85,10 @@ public final class Advisor {
         for (Fact f : all) facts[f.ordinal()] = f.valueOf(c);
         int places = Sizer.places(c);
         List<Recommendation> recs = new ArrayList<>();
+        java.util.Map<Double, String> capabilitySources = new java.util.HashMap<>(4);
         for (RuleBook.Entry e : book.entries()) {
             if (!e.rule().when().holds(facts)) continue;
-            Recommendation r = fromRule(e, needs, facts, places, warnings);
+            Recommendation r = fromRule(e, needs, facts, places, warnings, capabilitySources);
             if (r != null) recs.add(r);
         }
         boolean ruleUsable = recs.stream().anyMatch(Recommendation::usable);
@@ -176,7 +177,8 @@ public final class Advisor {
         return conflicts;
     }
 
-    private Recommendation fromRule(RuleBook.Entry e, Needs needs, Object[] facts, int places, List<String> warnings) {
+    private Recommendation fromRule(RuleBook.Entry e, Needs needs, Object[] facts, int places, List<String> warnings,
+                                    java.util.Map<Double, String> capabilitySources) {
         Rule rule = e.rule();
         CalloutPlan plan = rule.recommend();
         DesignCase c = needs.designCase();
@@ -196,7 +198,7 @@ public final class Advisor {
         trace.add(e.describe());
         List<String> fired = rule.when().firedBy(facts);
         trace.add(fired.isEmpty() ? "fires on every case" : "fired by " + String.join(", ", fired));
-        sizer.size(d, cautions);
+        sizer.size(d, cautions, capabilitySources);
         trace.add("tolerance from " + d.source);
         if (plan.callout() == CalloutKind.PROFILE || plan.callout() == CalloutKind.COMPOSITE_PROFILE) {
             d.zoneFromBand();
@@ -361,7 +363,6 @@ public final class Advisor {
         List<String> allCautions = new ArrayList<>(proof.unmet().size() + cautions.size() + 1);
         allCautions.addAll(proof.unmet());
         allCautions.addAll(cautions);
-        trace.add("numbers: " + summary(figures));
         if (!(c.function() == BlendFunction.COSMETIC && c.loading() == Loading.NONE) || !proof.meetsAll()) {
             allCautions.add(GUIDANCE_CAUTION);
         }
@@ -424,26 +425,6 @@ public final class Advisor {
         while (s.charAt(end - 1) == '0') end--;
         if (s.charAt(end - 1) == '.') end--;
         return s.substring(0, end);
-    }
-
-    /** The figures that decide a recommendation, for the trace; the full set is in its numbers. */
-    private static String summary(AdviceFigures f) {
-        StringBuilder sb = new StringBuilder(80);
-        add(sb, "min", f.min());
-        add(sb, "max", f.max());
-        add(sb, "zone", f.zone());
-        add(sb, "ktAtMin", f.ktAtMin());
-        add(sb, "kfAtMin", f.kfAtMin());
-        add(sb, "minRadiusForTarget", f.minRadiusForTarget());
-        if (f.seats() != null) add(sb, "seats", f.seats());
-        add(sb, "seatingMargin", f.seatingMargin());
-        return sb.toString();
-    }
-
-    private static void add(StringBuilder sb, String k, Object v) {
-        if (v == null) return;
-        if (sb.length() > 0) sb.append(", ");
-        sb.append(k).append('=').append(v instanceof Double dv ? plain(dv) : v.toString());
     }
 
     /** The mechanics' cautions less a bare deference line, which {@link #GUIDANCE_CAUTION} already gives. */

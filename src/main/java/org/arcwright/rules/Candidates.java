@@ -88,45 +88,61 @@ final class Candidates {
         boolean asme = c.standard() == DrawingStyle.ASME;
         List<String> datums = c.datums().subList(0, Math.min(3, c.datums().size()));
 
-        Draft limits = draft(CalloutKind.RADIUS, DatumChoice.NONE, c, places, lo, hi);
-        out.add(new Built("needs.limits", limits, List.of(), List.of("A radius with limits holding " + bandWords + ".",
-                "It bounds size only."), List.of(asme ? "ASME Y14.5-2018: radius" : "ISO 129-1:2018: radii"), cautions, narrow));
-        if (asme) {
+        // only the controls that can meet the needs present: size-only controls cannot meet form, floating ones
+        // cannot meet location
+        boolean form = needs.has(Need.Kind.FORM);
+        boolean location = needs.has(Need.Kind.LOCATION);
+        if (!form && !location) {
+            out.add(limits(c, places, lo, hi, bandWords, asme, cautions, narrow));
+        }
+        if (asme && !location) {
             out.add(new Built("needs.controlled-radius", draft(CalloutKind.CONTROLLED_RADIUS, DatumChoice.NONE, c, places, lo, hi),
                     List.of(), List.of("A controlled radius holding " + bandWords + ".",
                             "It also forbids flats and reversals, so no local radius is sharper than its minimum."),
                     List.of("ASME Y14.5-2018: controlled radius (CR)"), cautions, narrow));
         }
-        Draft floating = profile(c, places, DatumChoice.NONE, Extent.Kind.THIS_RADIUS, lo, hi);
+        Draft floating = location ? null : profile(c, places, DatumChoice.NONE, Extent.Kind.THIS_RADIUS, lo, hi);
         if (floating != null) {
             out.add(new Built("needs.profile", floating, List.of(), List.of("A profile of a surface without datums holding "
                     + bandWords + (floating.outward != null ? ", its zone unequally disposed about the nominal ("
                     + (asme ? "ASME Y14.5-2018 Ⓤ" : "ISO 1101:2017 UZ offset") + ")" : "") + ".",
                     "It bounds size and form; without datums it floats."), profileRefs(asme, floating), cautions, narrow));
         }
-        if (!datums.isEmpty()) {
-            Draft located = profile(c, places, DatumChoice.ALL, Extent.Kind.WITH_ADJACENT, lo, hi);
-            if (located != null) {
-                out.add(new Built("needs.profile-located", located, datums, List.of("A profile of a surface to "
-                        + String.join(", ", datums) + " on the radius and its adjacent surfaces, holding " + bandWords
-                        + (located.outward != null ? ", its zone unequally disposed about the nominal" : "") + ".",
-                        "It bounds size and form and locates the blend."), profileRefs(asme, located), cautions, narrow));
-            }
-            Draft refined = refined(c, places, lo, hi);
-            out.add(new Built("needs.profile-located-with-radius", refined, datums, List.of("A profile of a surface to "
-                    + String.join(", ", datums) + " locates the blend; a radius with limits under it refines its size to "
-                    + bandWords + ".", "Two drawing elements: the profile for where the blend sits and its form, the radius "
-                    + "for the smallest and largest radius."), List.of(asme ? "ASME Y14.5-2018: profile with datums; radius"
-                    : "ISO 1101:2017: profile related to a datum system; ISO 129-1:2018: radii"), cautions, narrow));
-            Draft composite = composite(c, places, lo, hi);
-            if (composite != null) {
-                out.add(new Built("needs.composite", composite, datums, List.of("A composite profile: the upper tier to "
-                        + String.join(", ", datums) + " locates the blend, the lower tier without datums holds " + bandWords + "."),
-                        List.of(asme ? "ASME Y14.5-2018: composite profile" : "ISO 1101:2017: combined zone, stacked frames"),
-                        cautions, narrow));
-            }
+        if (location && !datums.isEmpty()) {
+            located(c, places, lo, hi, datums, bandWords, asme, cautions, narrow, out);
         }
         return out;
+    }
+
+    private Built limits(DesignCase c, int places, double lo, double hi, String bandWords, boolean asme,
+                         List<String> cautions, boolean narrow) {
+        Draft limits = draft(CalloutKind.RADIUS, DatumChoice.NONE, c, places, lo, hi);
+        return new Built("needs.limits", limits, List.of(), List.of("A radius with limits holding " + bandWords + ".",
+                "It bounds size only."), List.of(asme ? "ASME Y14.5-2018: radius" : "ISO 129-1:2018: radii"), cautions, narrow);
+    }
+
+    private static void located(DesignCase c, int places, double lo, double hi, List<String> datums, String bandWords,
+                            boolean asme, List<String> cautions, boolean narrow, List<Built> out) {
+        Draft located = profile(c, places, DatumChoice.ALL, Extent.Kind.WITH_ADJACENT, lo, hi);
+        if (located != null) {
+            out.add(new Built("needs.profile-located", located, datums, List.of("A profile of a surface to "
+                    + String.join(", ", datums) + " on the radius and its adjacent surfaces, holding " + bandWords
+                    + (located.outward != null ? ", its zone unequally disposed about the nominal" : "") + ".",
+                    "It bounds size and form and locates the blend."), profileRefs(asme, located), cautions, narrow));
+        }
+        Draft refined = refined(c, places, lo, hi);
+        out.add(new Built("needs.profile-located-with-radius", refined, datums, List.of("A profile of a surface to "
+                + String.join(", ", datums) + " locates the blend; a radius with limits under it refines its size to "
+                + bandWords + ".", "Two drawing elements: the profile for where the blend sits and its form, the radius "
+                + "for the smallest and largest radius."), List.of(asme ? "ASME Y14.5-2018: profile with datums; radius"
+                : "ISO 1101:2017: profile related to a datum system; ISO 129-1:2018: radii"), cautions, narrow));
+        Draft composite = composite(c, places, lo, hi);
+        if (composite != null) {
+            out.add(new Built("needs.composite", composite, datums, List.of("A composite profile: the upper tier to "
+                    + String.join(", ", datums) + " locates the blend, the lower tier without datums holds " + bandWords + "."),
+                    List.of(asme ? "ASME Y14.5-2018: composite profile" : "ISO 1101:2017: combined zone, stacked frames"),
+                    cautions, narrow));
+        }
     }
 
     private static List<String> profileRefs(boolean asme, Draft d) {

@@ -117,7 +117,7 @@ final class DesignChanges {
     private Optional<DesignChange> largerStep(DesignCase c, double radius, double band, int places) {
         DesignCase.StressInputs s = c.stress();
         double bigD = s.bigD();
-        for (int i = 0; i < 30; i++) {
+        for (int i = 0; i < 8; i++) {
             DesignCase changed = withD(c, bigD);
             double floor = 0;
             boolean found = true;
@@ -136,7 +136,7 @@ final class DesignChanges {
                         + " (the stress floor rises a little with D/d; it was found again at this D).",
                         numbers("D", rounded, "d", s.smallD(), "stepHeight", (rounded - s.smallD()) / 2, "floor", floor)));
             }
-            bigD = Math.max(bigD * 1.05, s.smallD() + 2 * (floor + band));
+            bigD = Math.max(bigD * 1.02, s.smallD() + 2 * (floor + band) * 1.02);
         }
         return Optional.empty();
     }

@@ -27,8 +27,8 @@ public record Proof(Map<String, Boolean> meets, boolean meetsAll, List<String> u
     private static final double SLACK = 1e-9;
 
     public Proof {
-        meets = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(meets));
-        unmet = List.copyOf(unmet);
+        meets = java.util.Collections.unmodifiableMap(meets);
+        unmet = java.util.Collections.unmodifiableList(unmet);
     }
 
     /**

@@ -61,7 +61,12 @@ final class Sizer {
         return p == Process.MACHINED || p == Process.SHEET_METAL;
     }
 
-    void size(Draft d, List<String> cautions) {
+    /**
+     * Sizes {@code d}.
+     *
+     * @param capabilitySources the capability wording already built for this case, by factor (built once per case)
+     */
+    void size(Draft d, List<String> cautions, java.util.Map<Double, String> capabilitySources) {
         DesignCase c = d.c;
         CalloutPlan plan = d.plan;
         double mmPer = c.units().millimetres();
@@ -118,7 +123,9 @@ final class Sizer {
         CapabilityTable cap = book.capability();
         Optional<Double> t = cap == null ? Optional.empty() : cap.plusMinusMm(c.process(), nomMm);
         if (t.isPresent()) {
-            d.fromPlusMinus(t.get() * s.factor() / mmPer, s.disposition(), capabilitySource(c, t.get(), s.factor(), cap));
+            double pm = t.get();
+            d.fromPlusMinus(pm * s.factor() / mmPer, s.disposition(),
+                    capabilitySources.computeIfAbsent(s.factor(), f -> capabilitySource(c, pm, f, cap)));
         } else {
             d.fromPlusMinus(c.nominalRadius() * 0.1 * s.factor(), s.disposition(),
                     "10% of the nominal: no process capability entry for " + c.process().key());

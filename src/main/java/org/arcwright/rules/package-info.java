@@ -10,8 +10,13 @@
  *       weight, reasoning, cautions, references and self-test examples.</li>
  *   <li>{@link org.arcwright.rules.RuleBook}: the rules in force after layering every pack, with what
  *       failed to load and the conflicts found; never stops at the first bad file.</li>
- *   <li>{@link org.arcwright.rules.Advisor}: the engine, returning an {@link org.arcwright.rules.Advice}
- *       of {@link org.arcwright.rules.Recommendation}s best first.</li>
+ *   <li>{@link org.arcwright.rules.Advisor}: the engine, needs first, returning an {@link org.arcwright.rules.Advice}
+ *       of {@link org.arcwright.rules.Recommendation}s best first, the {@link org.arcwright.rules.Need}s it derived
+ *       and, when nothing meets every need, {@link org.arcwright.rules.DesignChange}s. Its steps live in their own
+ *       classes: {@link org.arcwright.rules.Needs} (derive), {@code Sizer} and {@code Draft} (size a candidate),
+ *       {@code Candidates} (one per control when no rule meets every need), {@link org.arcwright.rules.Proof}
+ *       (meets, per need), {@code Ranking} (order) and {@code DesignChanges} (what would work).</li>
+ *   <li>{@link org.arcwright.rules.AdviceFigures}: a recommendation's figures, lengths with their units.</li>
  *   <li>{@link org.arcwright.rules.FilletChecks}: the mechanics seam, implemented over
  *       {@code org.arcwright.mechanics} by {@link org.arcwright.rules.MechanicsChecks}.</li>
  *   <li>{@link org.arcwright.rules.PackCheck}: runs a pack's examples; {@link org.arcwright.rules.CaseTable}
