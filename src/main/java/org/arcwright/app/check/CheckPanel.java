@@ -30,6 +30,7 @@ import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.model.MeasuredPoints;
 import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.WorksheetSession;
+import org.arcwright.app.widgets.Cautions;
 import org.arcwright.app.widgets.Icons;
 import org.arcwright.app.widgets.Themes;
 import org.arcwright.app.widgets.WrapLabel;
@@ -100,7 +101,7 @@ public final class CheckPanel extends JPanel {
 
     public CheckPanel(WorksheetSession session, CheckRequests requests, Executor background, Clock clock,
                       Consumer<String> status) {
-        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][][][][grow,fill]"));
+        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][][][][][grow,fill]"));
         this.session = Objects.requireNonNull(session, "session");
         this.requests = Objects.requireNonNull(requests, "requests");
         this.background = Objects.requireNonNull(background, "background");
@@ -124,6 +125,7 @@ public final class CheckPanel extends JPanel {
         confirm.addActionListener(e -> confirmed());
         table.setName("checkComparisons");
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 5));
+        add(Cautions.box(Cautions.VERDICT), "growx, wmin 10");
         add(target, "growx, wmin 10");
         add(open, "split 4, growx 0");
         add(keep, "growx 0");

@@ -328,34 +328,39 @@ public final class MainWindow {
         catalog.add(new Command("file.export", "Export the sheet (PDF, HTML, Markdown)…", "File", "ctrl E",
                 () -> core == null ? Optional.of("the practice packs and templates are still loading") : Optional.empty(),
                 files::exportSheet));
+        catalog.add(new Command("file.importPoints", "Import measured points to check…", "File", "ctrl I",
+                () -> session.selected().isPresent() ? Optional.empty() : Optional.of("no feature is selected"),
+                this::importPoints));
         catalog.add(Command.always("file.quit", "Quit", "File", "ctrl Q", this::quit));
         catalog.add(new Command("edit.undo", "Undo", "Edit", "ctrl Z",
-                () -> session.canUndo() ? Optional.empty() : Optional.of("there is nothing to undo"), session::undo));
+                () -> session.canUndo() ? Optional.empty() : Optional.of("there is nothing to undo"), this::undo));
         catalog.add(new Command("edit.redo", "Redo", "Edit", "ctrl shift Z",
-                () -> session.canRedo() ? Optional.empty() : Optional.of("there is nothing to redo"), session::redo));
+                () -> session.canRedo() ? Optional.empty() : Optional.of("there is nothing to redo"), this::redo));
         catalog.add(new Command("edit.copyCallout", "Copy the chosen callout", "Edit", "ctrl shift C",
-                () -> session.selected().map(f -> f.chosen() == null ? "the selected feature has no callout yet" : null)
-                        .map(Optional::ofNullable).orElse(Optional.of("no feature is selected")), this::copyCallout));
+                this::whyNoCopy, this::copyCallout));
         catalog.add(Command.always("part.add", "Add feature", "Part", "ctrl shift N", this::addFeature));
         catalog.add(new Command("part.duplicate", "Duplicate feature", "Part", "ctrl D", needsSelection,
                 this::duplicateFeature));
         catalog.add(new Command("part.delete", "Delete feature", "Part", "ctrl DELETE", needsSelection,
                 this::deleteFeature));
         catalog.add(Command.always("view.part", "Go to Part", "View", "alt 1", this::focusPart));
+        // in the order of their shortcuts: the work-area views, then Notes (Alt+6), then the Practice editor
         String[] tabs = {"Decide", "Zone view", "Stress view", "Check", "Practice editor"};
         String[] keys = {"alt 2", "alt 3", "alt 4", "alt 5", "alt 7"};
         for (int i = 0; i < tabs.length; i++) {
             int tab = i;
+            if (keys[i].equals("alt 7")) catalog.add(Command.always("view.notes", "Go to Notes", "View", "alt 6", this::focusNotes));
             catalog.add(Command.always("view.tab" + i, "Go to " + tabs[i], "View", keys[i], () -> showTab(tab)));
         }
-        catalog.add(Command.always("view.notes", "Go to Notes", "View", "alt 6", this::focusNotes));
         catalog.add(Command.always("view.finder", "Find a command", "View", "ctrl K", this::openFinder));
         catalog.add(Command.always("view.toggleTheme", "Switch light/dark look", "View", "ctrl alt T", this::toggleTheme));
         catalog.add(Command.always("view.light", "Light look", "View", null, () -> setTheme(ThemeChoice.LIGHT)));
         catalog.add(Command.always("view.dark", "Dark look", "View", null, () -> setTheme(ThemeChoice.DARK)));
         catalog.add(Command.always("view.system", "Follow the system's look", "View", null, () -> setTheme(ThemeChoice.SYSTEM)));
-        catalog.add(Command.always("help.keys", "Keyboard shortcuts", "Help", "F1", this::openFinder));
+        catalog.add(Command.always("help.guide", "Guide", "Help", "F1", this::showGuide));
+        catalog.add(Command.always("help.keys", "Keyboard shortcuts and commands", "Help", null, this::openFinder));
         catalog.add(Command.always("help.demo", "Open the demo worksheet", "Help", null, files::showDemo));
+        catalog.add(Command.always("help.about", "About Arcwright", "Help", null, this::showAbout));
     }
 
     // ---- commands ----
@@ -377,6 +382,34 @@ public final class MainWindow {
      * demo. Runs before the window exists, so it may run on any thread.
      */
     public static Opening opening(Settings settings, WorksheetFiles files) { return FileCommands.opening(settings, files); }
+
+    /** Why the chosen callout cannot be copied now, or empty when it can. */
+    private Optional<String> whyNoCopy() {
+        Optional<RadiusFeature> f = session.selected();
+        if (f.isEmpty()) return Optional.of("no feature is selected");
+        return f.get().chosen() == null ? Optional.of(f.get().id() + " has no callout chosen yet") : Optional.empty();
+    }
+
+    private void importPoints() {
+        showTab(3);
+        checkTab.panel().importPoints();
+    }
+
+    private void undo() {
+        String what = session.undoLabel().orElse(null);
+        session.undo();
+        if (what != null) status.show("Undid: " + what + " (Ctrl+Shift+Z redoes it)");
+    }
+
+    private void redo() {
+        String what = session.redoLabel().orElse(null);
+        session.redo();
+        if (what != null) status.show("Redid: " + what);
+    }
+
+    private void showGuide() { HelpDialogs.guide(frame); }
+
+    private void showAbout() { HelpDialogs.about(frame); }
 
     private void copyCallout() {
         session.selected().map(RadiusFeature::chosen).ifPresent(r -> {

@@ -226,6 +226,36 @@ class FeatureBoundViewsGuiTest {
         assertThat(a).isEqualTo(b);
     }
 
+    @Test
+    @Order(10)
+    void commandsAreWhereAUserLooksForThem() {
+        selectRow(0);
+        // F1 has a chosen callout: Copy is available (it said "no feature is selected")
+        assertThat(GuiSupport.onEdt(() -> window.action("edit.copyCallout").isEnabled())).isTrue();
+        selectRow(4);
+        assertThat(GuiSupport.onEdt(() -> (String) window.action("edit.copyCallout").getValue(javax.swing.Action.SHORT_DESCRIPTION)))
+                .contains("F5 has no callout chosen yet");
+        // import measured points is a command: in the File menu and so in the command finder
+        assertThat(GuiSupport.onEdt(() -> window.catalog().group("File").stream().map(c -> c.id()).toList()))
+                .contains("file.importPoints");
+        fixture.menuItemWithPath("View").click();
+        java.util.List<String> view = GuiSupport.onEdt(() -> {
+            java.util.List<String> names = new java.util.ArrayList<>();
+            javax.swing.JMenu m = window.frame().getJMenuBar().getMenu(3);
+            for (int i = 0; i < m.getItemCount(); i++) if (m.getItem(i) != null) names.add(m.getItem(i).getText());
+            return names;
+        });
+        fixture.pressAndReleaseKeys(java.awt.event.KeyEvent.VK_ESCAPE, java.awt.event.KeyEvent.VK_ESCAPE);
+        assertThat(view.indexOf("Go to Check")).isLessThan(view.indexOf("Go to Notes"));
+        assertThat(view.indexOf("Go to Notes")).isLessThan(view.indexOf("Go to Practice editor"));
+        assertThat(GuiSupport.onEdt(() -> window.catalog().group("Help").stream().map(c -> c.title()).toList()))
+                .contains("Guide", "About Arcwright");
+        // undo says what it undid
+        GuiSupport.onEdt(() -> window.session().addFeature());
+        fixture.button("tool.edit.undo").click();
+        assertThat(GuiSupport.onEdt(() -> window.statusLine().message())).startsWith("Undid: Add F6");
+    }
+
     private static String firstRuleId() {
         return GuiSupport.onEdt(() -> ((org.arcwright.rules.RuleBook.Entry) fixture.list("ruleList").target().getModel()
                 .getElementAt(0)).rule().id());
