@@ -72,6 +72,8 @@ public final class MainWindow {
     public static final String DEMO_RESOURCE = FileCommands.DEMO_RESOURCE;
     /** The packs start loading this long after the window opens even if it has not painted. */
     private static final int PACKS_AT_THE_LATEST_MS = 1000;
+    /** Shares of the window's width for the Part and the Notes panels; the work area has the rest. */
+    private static final double PART_SHARE = 0.24, NOTES_SHARE = 0.2;
 
     private final AppServices services;
     private final Themes themes;
@@ -88,6 +90,8 @@ public final class MainWindow {
     private final FileCommands files;
     private final JMenu recentMenu = new JMenu("Open recent");
     private Settings settings;
+    private JSplitPane main;
+    private JSplitPane right;
     private PartPanel partPanel;
     private LazyTab<DecidePanel> decideTab;
     private NotesPanel notesPanel;
@@ -214,11 +218,23 @@ public final class MainWindow {
                 session, this::personalPackPath, this::reloadRulesInBackground));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
         notesPanel = new NotesPanel(services.search(), services.background(), status::show);
-        JSplitPane right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);
-        right.setResizeWeight(1);
+        // the side panels collapse with the divider's arrows, and each column keeps its share of any
+        // window width: the weights equal the initial shares (Part 24 %, Notes 20 %, the work area the rest)
+        work.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
+        work.setMinimumSize(new java.awt.Dimension(440, 0));
+        partPanel.setMinimumSize(new java.awt.Dimension(0, 0));
+        notesPanel.setMinimumSize(new java.awt.Dimension(0, 0));
+        right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);
+        right.setName("notesSplit");
+        right.setResizeWeight(1 - NOTES_SHARE / (1 - PART_SHARE));
+        right.setOneTouchExpandable(true);
+        right.setContinuousLayout(true);
         right.setBorder(null);
-        JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, partPanel, right);
-        main.setResizeWeight(0);
+        main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, partPanel, right);
+        main.setName("partSplit");
+        main.setResizeWeight(PART_SHARE);
+        main.setOneTouchExpandable(true);
+        main.setContinuousLayout(true);
         main.setBorder(null);
         JPanel top = new JPanel(new BorderLayout());
         top.add(toolBar(), BorderLayout.NORTH);
@@ -231,9 +247,9 @@ public final class MainWindow {
         java.awt.Rectangle screen = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment().getMaximumWindowBounds();
         int w = Math.min(1480, screen.width);
         frame.setSize(w, Math.min(900, screen.height));
-        int partWidth = Math.min(470, w * 10 / 32);
+        int partWidth = (int) Math.round(w * PART_SHARE);
         main.setDividerLocation(partWidth);
-        right.setDividerLocation(w - partWidth - Math.min(290, w * 2 / 9));
+        right.setDividerLocation(w - partWidth - (int) Math.round(w * NOTES_SHARE));
         frame.setLocationRelativeTo(null);
         rebuildRecent();
     }
@@ -644,6 +660,9 @@ public final class MainWindow {
     public PracticeEditorPanel practicePanel() { return practiceTab.panel(); }
 
     public CheckPanel checkPanel() { return checkTab.panel(); }
+
+    /** The widths of the Part panel, the work area and the Notes panel, as laid out now (tests). */
+    public int[] columnWidths() { return new int[] {partPanel.getWidth(), work.getWidth(), notesPanel.getWidth()}; }
 
     /** The Swing action of command {@code id}, for tests and toolbars. */
     public Action action(String id) { return actions.get(id); }

@@ -256,6 +256,48 @@ class FeatureBoundViewsGuiTest {
         assertThat(GuiSupport.onEdt(() -> window.statusLine().message())).startsWith("Undid: Add F6");
     }
 
+    @Test
+    @Order(11)
+    void atBothWindowSizesTheColumnsShareTheWidthAndTheTabsStayInOneRow() {
+        selectRow(0);
+        int[] small = null;
+        for (int[] size : new int[][] {{1024, 700}, {1600, 1000}}) {
+            GuiSupport.onEdt(() -> {
+                window.frame().setExtendedState(java.awt.Frame.NORMAL);
+                window.frame().setSize(size[0], size[1]);
+                window.frame().validate();
+            });
+            GuiSupport.settle(300);
+            int[] widths = GuiSupport.onEdt(() -> window.columnWidths());
+            if (size[0] == 1024) {
+                small = widths;
+                // the work area keeps a usable width, and its tabs one row in a fixed order
+                assertThat(widths[1]).isGreaterThanOrEqualTo(440);
+                assertThat(GuiSupport.onEdt(() -> window.workArea().getTabRunCount())).isEqualTo(1);
+            } else {
+                // a larger window widens the side panels too, not only the work area
+                assertThat(widths[0]).isGreaterThan(small[0]);
+                assertThat(widths[2]).isGreaterThan(small[2]);
+            }
+            for (org.arcwright.app.model.ThemeChoice theme : new org.arcwright.app.model.ThemeChoice[] {
+                org.arcwright.app.model.ThemeChoice.LIGHT, org.arcwright.app.model.ThemeChoice.DARK}) {
+                String look = theme == org.arcwright.app.model.ThemeChoice.LIGHT ? "light" : "dark";
+                GuiSupport.onEdt(() -> window.setTheme(theme));
+                GuiSupport.onEdt(() -> window.showTab(3));
+                checkAndWait(HOUSING);
+                GuiSupport.settle(400);
+                GuiSupport.screenshot(window.frame(), "check-" + size[0] + "x" + size[1] + "-" + look);
+                GuiSupport.onEdt(() -> window.showTab(0));
+                GuiSupport.settle(600);
+                GuiSupport.screenshot(window.frame(), "decide-" + size[0] + "x" + size[1] + "-" + look);
+                GuiSupport.onEdt(() -> window.showTab(4));
+                GuiSupport.settle(400);
+                GuiSupport.screenshot(window.frame(), "practice-" + size[0] + "x" + size[1] + "-" + look);
+            }
+        }
+        GuiSupport.onEdt(() -> window.setTheme(org.arcwright.app.model.ThemeChoice.LIGHT));
+    }
+
     private static String firstRuleId() {
         return GuiSupport.onEdt(() -> ((org.arcwright.rules.RuleBook.Entry) fixture.list("ruleList").target().getModel()
                 .getElementAt(0)).rule().id());
