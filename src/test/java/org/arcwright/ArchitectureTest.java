@@ -15,7 +15,7 @@ class ArchitectureTest {
             "org.arcwright.io..", "org.arcwright.tolerance..", "org.arcwright.pack..", "org.arcwright.zone..",
             "org.arcwright.inspect..", "org.arcwright.mechanics..", "org.arcwright.rules..",
             "org.arcwright.notes..", "org.arcwright.templates..", "org.arcwright.callout..",
-            "org.arcwright.worksheet..", "org.arcwright.services.."};
+            "org.arcwright.worksheet.."};
 
     private static JavaClasses classes;
 
@@ -52,6 +52,14 @@ class ArchitectureTest {
         noClasses().that().resideInAnyPackage(CORE)
                 .should().dependOnClassesThat().resideInAnyPackage("org.arcwright.cli..", "org.arcwright.app..",
                         "org.arcwright.render..", "picocli..")
+                .check(classes);
+    }
+
+    @Test
+    void theSharedServicesAreSwingFreeAndBelowTheShells() {
+        noClasses().that().resideInAPackage("org.arcwright.services..")
+                .should().dependOnClassesThat().resideInAnyPackage("javax.swing..", "org.arcwright.cli..",
+                        "org.arcwright.app..", "picocli..")
                 .check(classes);
     }
 }
