@@ -4,7 +4,7 @@ import java.util.concurrent.CompletableFuture;
 import javax.swing.JComponent;
 import javax.swing.JFrame;
 import javax.swing.SwingUtilities;
-import org.arcwright.app.model.ConfigLocation;
+import org.arcwright.pack.ConfigDirectory;
 import org.arcwright.app.model.Settings;
 import org.arcwright.app.shell.AppServices;
 import org.arcwright.app.shell.MainWindow;
@@ -33,7 +33,7 @@ public final class DesktopApp {
     public static void launch(String[] args) {
         // A second thread reads the settings and then the first worksheet (Jackson's first use) while
         // this thread connects to the display; the look needs the settings, the window both.
-        java.nio.file.Path config = ConfigLocation.current();
+        java.nio.file.Path config = ConfigDirectory.ofSystem();
         CompletableFuture<AppServices> services = new CompletableFuture<>();
         CompletableFuture<Settings> settings = new CompletableFuture<>();
         CompletableFuture<MainWindow.Opening> opening = new CompletableFuture<>();

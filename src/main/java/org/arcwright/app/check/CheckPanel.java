@@ -30,6 +30,7 @@ import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.model.MeasuredPoints;
 import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.WorksheetSession;
+import org.arcwright.app.widgets.Cautions;
 import org.arcwright.app.widgets.Icons;
 import org.arcwright.app.widgets.Themes;
 import org.arcwright.app.widgets.WrapLabel;
@@ -74,7 +75,7 @@ public final class CheckPanel extends JPanel {
     private final JTable table = new TipTable(comparisons);
     private final JProgressBar progress = new JProgressBar();
     private final JButton cancel = new JButton("Cancel");
-    private final JButton keep = new JButton("Keep the verdict on the worksheet");
+    private final JButton keep = new JButton("Keep the verdict");
     private final JButton confirm = new JButton();
     private final JTextField vertexX = frameField("0", "frameVertexX");
     private final JTextField vertexY = frameField("0", "frameVertexY");
@@ -100,7 +101,7 @@ public final class CheckPanel extends JPanel {
 
     public CheckPanel(WorksheetSession session, CheckRequests requests, Executor background, Clock clock,
                       Consumer<String> status) {
-        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][][][][grow,fill]"));
+        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][][][][][grow,fill]"));
         this.session = Objects.requireNonNull(session, "session");
         this.requests = Objects.requireNonNull(requests, "requests");
         this.background = Objects.requireNonNull(background, "background");
@@ -111,7 +112,7 @@ public final class CheckPanel extends JPanel {
         verdict.setName("checkVerdict");
         fileSays.setName("checkFileSays");
         figures.setName("checkFigures");
-        JButton open = new JButton("Import measured points…", Icons.get("open"));
+        JButton open = new JButton("Import points…", Icons.get("open"));
         open.setName("checkImport");
         open.addActionListener(e -> chooseFile());
         progress.setVisible(false);
@@ -124,12 +125,13 @@ public final class CheckPanel extends JPanel {
         confirm.addActionListener(e -> confirmed());
         table.setName("checkComparisons");
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 5));
+        add(Cautions.box(Cautions.VERDICT), "growx, wmin 10");
         add(target, "growx, wmin 10");
-        add(open, "split 4, growx 0");
-        add(keep, "growx 0");
+        add(open, "split 4, growx 0, wmin 10");
+        add(keep, "growx 0, wmin 10");
         add(progress, "w 120!, growx 0");
         add(cancel, "growx 0");
-        add(frameRow(), "growx, wmin 10");
+        add(frameRow(), "growx 0, wmin 10");
         add(verdict, "growx, wmin 10");
         add(confirm, "growx 0");
         add(fileSays, "growx, wmin 10");
@@ -143,27 +145,30 @@ public final class CheckPanel extends JPanel {
     }
 
     private static JTextField frameField(String value, String name) {
-        JTextField f = new JTextField(value, 4);
+        JTextField f = new JTextField(value, 3);
         f.setName(name);
         return f;
     }
 
     /** The CSV frame: where the corner's vertex is and which way its legs run, in the CSV's coordinates. */
     private JPanel frameRow() {
-        JPanel p = new JPanel(new MigLayout("insets 0, gap 4", "[][][][][][][][][]", ""));
+        JPanel p = new JPanel(new MigLayout("insets 0, gap 4", "[][][][][][][][]", ""));
         p.setOpaque(false);
-        javax.swing.JLabel l = new javax.swing.JLabel("CSV frame: vertex x");
-        l.setToolTipText("A CSV holds points only: say where the corner's vertex is and which way its two legs run, "
-                + "in the CSV's own coordinates and in the feature's units");
+        String tip = "A CSV holds points only: say where the corner's vertex is (x, y, in the feature's units) and which "
+                + "way its two legs run (degrees from +x, counter-clockwise), in the CSV's own coordinates";
+        javax.swing.JLabel l = new javax.swing.JLabel("CSV vertex x");
+        l.setToolTipText(tip);
+        p.setToolTipText(tip);
         p.add(l);
         p.add(vertexX);
         p.add(new javax.swing.JLabel("y"));
         p.add(vertexY);
-        p.add(new javax.swing.JLabel("  leg A at"));
+        p.add(new javax.swing.JLabel("  legs at"));
         p.add(legA);
-        p.add(new javax.swing.JLabel("°  leg B at"));
+        p.add(new javax.swing.JLabel("° and"));
         p.add(legB);
-        p.add(new javax.swing.JLabel("° (from +x, counter-clockwise)"));
+        p.add(new javax.swing.JLabel("°"));
+        for (JTextField f : List.of(vertexX, vertexY, legA, legB)) f.setToolTipText(tip);
         return p;
     }
 

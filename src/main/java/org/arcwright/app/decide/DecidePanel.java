@@ -1,5 +1,6 @@
 package org.arcwright.app.decide;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import java.awt.Toolkit;
 import java.awt.datatransfer.StringSelection;
 import java.util.EnumMap;
@@ -152,7 +153,7 @@ public final class DecidePanel extends JPanel {
 
     private JPanel buildForm() {
         JPanel p = new ScrollablePanel(new MigLayout("insets 4 4 12 12, wrap 1, gap 0 2", "[grow,fill]", ""));
-        featureTitle.putClientProperty("FlatLaf.styleClass", "h3");
+        featureTitle.putClientProperty(FlatClientProperties.STYLE_CLASS, "h3");
         featureTitle.setName("decideFeature");
         p.add(featureTitle, "wmin 10, gapbottom 2");
         keep.setName("keepAnswers");
@@ -196,13 +197,13 @@ public final class DecidePanel extends JPanel {
     private JPanel buildResults() {
         JPanel p = new ScrollablePanel(new MigLayout("insets 4 12 12 4, wrap 1, gap 6", "[grow,fill]", ""));
         JLabel h1 = new JLabel("Your tolerance at this corner");
-        h1.putClientProperty("FlatLaf.styleClass", "h4");
+        h1.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         p.add(h1);
         figures.setName("limitsFigures");
         figures.setOpaque(false);
         p.add(figures, "wmin 10");
         JLabel h2 = new JLabel("Recommendations, best first");
-        h2.putClientProperty("FlatLaf.styleClass", "h4");
+        h2.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         p.add(h2, "gaptop 10");
         cards.setOpaque(false);
         cards.setName("cards");
@@ -212,7 +213,7 @@ public final class DecidePanel extends JPanel {
 
     private static void section(JPanel p, String title) {
         JLabel l = new JLabel(title);
-        l.putClientProperty("FlatLaf.styleClass", "h4");
+        l.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         p.add(l, "gaptop 12, gapbottom 2");
     }
 

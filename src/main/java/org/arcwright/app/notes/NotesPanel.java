@@ -1,5 +1,6 @@
 package org.arcwright.app.notes;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import java.time.LocalDate;
 import java.util.Arrays;
 import java.util.List;
@@ -65,15 +66,15 @@ public final class NotesPanel extends JPanel {
         query.setName("notesQuery");
         list.setName("notesHits");
         reader.setName("notesReader");
-        query.putClientProperty("JTextField.placeholderText", "Search notes…");
-        query.putClientProperty("JTextField.leadingIcon", Icons.get("finder"));
-        query.putClientProperty("JTextField.showClearButton", true);
+        query.putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT, "Search notes…");
+        query.putClientProperty(FlatClientProperties.TEXT_FIELD_LEADING_ICON, Icons.get("finder"));
+        query.putClientProperty(FlatClientProperties.TEXT_FIELD_SHOW_CLEAR_BUTTON, true);
         query.setEnabled(false);
         query.setToolTipText("Unavailable until the notes index has opened");
         write.setEnabled(false);
         write.setToolTipText("Unavailable until the notes index has opened");
         write.addActionListener(e -> writeNote());
-        count.putClientProperty("FlatLaf.styleClass", "small");
+        count.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
         count.setName("notesCount");
         list.setCellRenderer(new HitCell());
         list.addListSelectionListener(e -> opened(e.getValueIsAdjusting()));
@@ -88,7 +89,7 @@ public final class NotesPanel extends JPanel {
             public void changedUpdate(DocumentEvent e) { typed(); }
         });
         JLabel title = new JLabel("Notes");
-        title.putClientProperty("FlatLaf.styleClass", "h4");
+        title.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         add(title, "split 2");
         add(write, "gapleft push");
         add(query, "wmin 10");
@@ -147,7 +148,7 @@ public final class NotesPanel extends JPanel {
             List<FacetCount> values = counts.getOrDefault(f, List.of());
             if (values.isEmpty()) continue;
             JLabel l = new JLabel(f.key());
-            l.putClientProperty("FlatLaf.styleClass", "small");
+            l.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
             l.setForeground(Themes.color("Arcwright.help.foreground"));
             facets.add(l, "gaptop 4");
             int shown = 0;

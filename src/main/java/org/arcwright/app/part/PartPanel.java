@@ -1,5 +1,6 @@
 package org.arcwright.app.part;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import java.awt.Component;
 import java.util.List;
 import javax.swing.Action;
@@ -46,8 +47,8 @@ public final class PartPanel extends JPanel {
         table.setDefaultRenderer(Object.class, new StatusRenderer());
         table.getSelectionModel().addListSelectionListener(e -> rowSelected(e.getValueIsAdjusting()));
         partNumber.setName("partNumber");
-        partNumber.putClientProperty("FlatLaf.styleClass", "h3");
-        material.putClientProperty("FlatLaf.styleClass", "small");
+        partNumber.putClientProperty(FlatClientProperties.STYLE_CLASS, "h3");
+        material.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
         JToolBar bar = new JToolBar();
         bar.setFloatable(false);
         for (Action a : rowActions) {

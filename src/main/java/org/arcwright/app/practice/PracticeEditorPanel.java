@@ -50,6 +50,7 @@ public final class PracticeEditorPanel extends JPanel {
     private transient RuleBook.Entry shownRule;
     private String ruleOpened;
     private boolean reselecting;
+    private boolean asking;
     private String savedRuleText;
     private transient TemplatePreview.Entry shownTemplate;
     private final DefaultListModel<RuleBook.Entry> entries = new DefaultListModel<>();
@@ -195,13 +196,11 @@ public final class PracticeEditorPanel extends JPanel {
     private void templateSelected(boolean adjusting) {
         TemplatePreview.Entry e = templateList.getSelectedValue();
         if (adjusting || e == null || reselecting || e.equals(shownTemplate)) return;
-        if (shownTemplate != null && templateOpened != null && !templateText.getText().equals(templateOpened)
-                && !letGo("template " + shownTemplate.name())) {
-            reselecting = true;
-            try {
-                templateList.setSelectedValue(shownTemplate, true);
-            } finally {
-                reselecting = false;
+        if (shownTemplate != null && templateOpened != null && !templateText.getText().equals(templateOpened)) {
+            reselect(templateList, shownTemplate);
+            if (!asking) {
+                asking = true;
+                SwingUtilities.invokeLater(() -> askBeforeLeavingTemplate(e));
             }
             return;
         }
@@ -331,6 +330,39 @@ public final class PracticeEditorPanel extends JPanel {
         }
     }
 
+    /** Selects {@code value} in {@code l} without treating it as the user's choice. */
+    private <T> void reselect(javax.swing.JList<T> l, T value) {
+        reselecting = true;
+        try {
+            l.setSelectedValue(value, true);
+        } finally {
+            reselecting = false;
+        }
+    }
+
+    /** Asks whether to drop the rule edit; if so, opens {@code wanted}, else stays on the edited rule. */
+    private void askBeforeLeavingRule(RuleBook.Entry wanted) {
+        try {
+            if (shownRule == null || !ruleEdited() || !letGo("rule " + shownRule.rule().id())) return;
+            ruleOpened = editor.getText();
+            list.setSelectedValue(wanted, true);
+        } finally {
+            asking = false;
+        }
+    }
+
+    /** As {@link #askBeforeLeavingRule}, for a template. */
+    private void askBeforeLeavingTemplate(TemplatePreview.Entry wanted) {
+        try {
+            if (shownTemplate == null || templateOpened == null || templateText.getText().equals(templateOpened)
+                    || !letGo("template " + shownTemplate.name())) return;
+            templateOpened = templateText.getText();
+            templateList.setSelectedValue(wanted, true);
+        } finally {
+            asking = false;
+        }
+    }
+
     /** Whether the rule editor holds text that is not in the rule's file. */
     public boolean ruleEdited() { return ruleOpened != null && !editor.getText().equals(ruleOpened); }
 
@@ -355,12 +387,12 @@ public final class PracticeEditorPanel extends JPanel {
     private void selected(boolean adjusting) {
         RuleBook.Entry e = list.getSelectedValue();
         if (adjusting || e == null || reselecting || e.equals(shownRule)) return;
-        if (shownRule != null && ruleEdited() && !letGo("rule " + shownRule.rule().id())) {
-            reselecting = true;
-            try {
-                list.setSelectedValue(shownRule, true);
-            } finally {
-                reselecting = false;
+        if (shownRule != null && ruleEdited()) {
+            // back to the edited rule at once, then ask once the click that moved the selection is over
+            reselect(list, shownRule);
+            if (!asking) {
+                asking = true;
+                SwingUtilities.invokeLater(() -> askBeforeLeavingRule(e));
             }
             return;
         }

@@ -1,5 +1,6 @@
 package org.arcwright.app.shell;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import java.awt.Component;
 import java.awt.Frame;
 import java.awt.event.KeyEvent;
@@ -40,15 +41,15 @@ public final class CommandFinder extends JDialog {
         setName("commandFinder");
         query.setName("finderQuery");
         list.setName("finderList");
-        query.putClientProperty("JTextField.placeholderText", "Type to find a command…");
-        query.putClientProperty("JTextField.leadingIcon", Icons.get("finder"));
+        query.putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT, "Type to find a command…");
+        query.putClientProperty(FlatClientProperties.TEXT_FIELD_LEADING_ICON, Icons.get("finder"));
         list.setCellRenderer(new Row());
         list.setVisibleRowCount(12);
         JPanel p = new JPanel(new MigLayout("insets dialog, wrap 1", "[grow,fill]", "[][grow,fill][]"));
         p.add(query, "w 36sp");
         p.add(new JScrollPane(list), "h 18sp");
         JLabel hint = new JLabel("Enter runs the command · Esc closes");
-        hint.putClientProperty("FlatLaf.styleClass", "small");
+        hint.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
         p.add(hint);
         setContentPane(p);
         query.getDocument().addDocumentListener(new DocumentListener() {
@@ -116,7 +117,7 @@ public final class CommandFinder extends JDialog {
         private final JLabel key = new JLabel();
 
         Row() {
-            group.putClientProperty("FlatLaf.styleClass", "small");
+            group.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
             panel.add(title);
             panel.add(group);
             panel.add(key);

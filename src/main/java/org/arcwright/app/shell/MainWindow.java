@@ -72,6 +72,8 @@ public final class MainWindow {
     public static final String DEMO_RESOURCE = FileCommands.DEMO_RESOURCE;
     /** The packs start loading this long after the window opens even if it has not painted. */
     private static final int PACKS_AT_THE_LATEST_MS = 1000;
+    /** Shares of the window's width for the Part and the Notes panels; the work area has the rest. */
+    private static final double PART_SHARE = 0.24, NOTES_SHARE = 0.2;
 
     private final AppServices services;
     private final Themes themes;
@@ -88,6 +90,8 @@ public final class MainWindow {
     private final FileCommands files;
     private final JMenu recentMenu = new JMenu("Open recent");
     private Settings settings;
+    private JSplitPane main;
+    private JSplitPane right;
     private PartPanel partPanel;
     private LazyTab<DecidePanel> decideTab;
     private NotesPanel notesPanel;
@@ -214,11 +218,23 @@ public final class MainWindow {
                 session, this::personalPackPath, this::reloadRulesInBackground));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
         notesPanel = new NotesPanel(services.search(), services.background(), status::show);
-        JSplitPane right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);
-        right.setResizeWeight(1);
+        // the side panels collapse with the divider's arrows, and each column keeps its share of any
+        // window width: the weights equal the initial shares (Part 24 %, Notes 20 %, the work area the rest)
+        work.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
+        work.setMinimumSize(new java.awt.Dimension(440, 0));
+        partPanel.setMinimumSize(new java.awt.Dimension(0, 0));
+        notesPanel.setMinimumSize(new java.awt.Dimension(0, 0));
+        right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);
+        right.setName("notesSplit");
+        right.setResizeWeight(1 - NOTES_SHARE / (1 - PART_SHARE));
+        right.setOneTouchExpandable(true);
+        right.setContinuousLayout(true);
         right.setBorder(null);
-        JSplitPane main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, partPanel, right);
-        main.setResizeWeight(0);
+        main = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, partPanel, right);
+        main.setName("partSplit");
+        main.setResizeWeight(PART_SHARE);
+        main.setOneTouchExpandable(true);
+        main.setContinuousLayout(true);
         main.setBorder(null);
         JPanel top = new JPanel(new BorderLayout());
         top.add(toolBar(), BorderLayout.NORTH);
@@ -231,9 +247,9 @@ public final class MainWindow {
         java.awt.Rectangle screen = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment().getMaximumWindowBounds();
         int w = Math.min(1480, screen.width);
         frame.setSize(w, Math.min(900, screen.height));
-        int partWidth = Math.min(470, w * 10 / 32);
+        int partWidth = (int) Math.round(w * PART_SHARE);
         main.setDividerLocation(partWidth);
-        right.setDividerLocation(w - partWidth - Math.min(290, w * 2 / 9));
+        right.setDividerLocation(w - partWidth - (int) Math.round(w * NOTES_SHARE));
         frame.setLocationRelativeTo(null);
         rebuildRecent();
     }
@@ -328,34 +344,39 @@ public final class MainWindow {
         catalog.add(new Command("file.export", "Export the sheet (PDF, HTML, Markdown)…", "File", "ctrl E",
                 () -> core == null ? Optional.of("the practice packs and templates are still loading") : Optional.empty(),
                 files::exportSheet));
+        catalog.add(new Command("file.importPoints", "Import measured points to check…", "File", "ctrl I",
+                () -> session.selected().isPresent() ? Optional.empty() : Optional.of("no feature is selected"),
+                this::importPoints));
         catalog.add(Command.always("file.quit", "Quit", "File", "ctrl Q", this::quit));
         catalog.add(new Command("edit.undo", "Undo", "Edit", "ctrl Z",
-                () -> session.canUndo() ? Optional.empty() : Optional.of("there is nothing to undo"), session::undo));
+                () -> session.canUndo() ? Optional.empty() : Optional.of("there is nothing to undo"), this::undo));
         catalog.add(new Command("edit.redo", "Redo", "Edit", "ctrl shift Z",
-                () -> session.canRedo() ? Optional.empty() : Optional.of("there is nothing to redo"), session::redo));
+                () -> session.canRedo() ? Optional.empty() : Optional.of("there is nothing to redo"), this::redo));
         catalog.add(new Command("edit.copyCallout", "Copy the chosen callout", "Edit", "ctrl shift C",
-                () -> session.selected().map(f -> f.chosen() == null ? "the selected feature has no callout yet" : null)
-                        .map(Optional::ofNullable).orElse(Optional.of("no feature is selected")), this::copyCallout));
+                this::whyNoCopy, this::copyCallout));
         catalog.add(Command.always("part.add", "Add feature", "Part", "ctrl shift N", this::addFeature));
         catalog.add(new Command("part.duplicate", "Duplicate feature", "Part", "ctrl D", needsSelection,
                 this::duplicateFeature));
         catalog.add(new Command("part.delete", "Delete feature", "Part", "ctrl DELETE", needsSelection,
                 this::deleteFeature));
         catalog.add(Command.always("view.part", "Go to Part", "View", "alt 1", this::focusPart));
+        // in the order of their shortcuts: the work-area views, then Notes (Alt+6), then the Practice editor
         String[] tabs = {"Decide", "Zone view", "Stress view", "Check", "Practice editor"};
         String[] keys = {"alt 2", "alt 3", "alt 4", "alt 5", "alt 7"};
         for (int i = 0; i < tabs.length; i++) {
             int tab = i;
+            if (keys[i].equals("alt 7")) catalog.add(Command.always("view.notes", "Go to Notes", "View", "alt 6", this::focusNotes));
             catalog.add(Command.always("view.tab" + i, "Go to " + tabs[i], "View", keys[i], () -> showTab(tab)));
         }
-        catalog.add(Command.always("view.notes", "Go to Notes", "View", "alt 6", this::focusNotes));
         catalog.add(Command.always("view.finder", "Find a command", "View", "ctrl K", this::openFinder));
         catalog.add(Command.always("view.toggleTheme", "Switch light/dark look", "View", "ctrl alt T", this::toggleTheme));
         catalog.add(Command.always("view.light", "Light look", "View", null, () -> setTheme(ThemeChoice.LIGHT)));
         catalog.add(Command.always("view.dark", "Dark look", "View", null, () -> setTheme(ThemeChoice.DARK)));
         catalog.add(Command.always("view.system", "Follow the system's look", "View", null, () -> setTheme(ThemeChoice.SYSTEM)));
-        catalog.add(Command.always("help.keys", "Keyboard shortcuts", "Help", "F1", this::openFinder));
+        catalog.add(Command.always("help.guide", "Guide", "Help", "F1", this::showGuide));
+        catalog.add(Command.always("help.keys", "Keyboard shortcuts and commands", "Help", null, this::openFinder));
         catalog.add(Command.always("help.demo", "Open the demo worksheet", "Help", null, files::showDemo));
+        catalog.add(Command.always("help.about", "About Arcwright", "Help", null, this::showAbout));
     }
 
     // ---- commands ----
@@ -377,6 +398,34 @@ public final class MainWindow {
      * demo. Runs before the window exists, so it may run on any thread.
      */
     public static Opening opening(Settings settings, WorksheetFiles files) { return FileCommands.opening(settings, files); }
+
+    /** Why the chosen callout cannot be copied now, or empty when it can. */
+    private Optional<String> whyNoCopy() {
+        Optional<RadiusFeature> f = session.selected();
+        if (f.isEmpty()) return Optional.of("no feature is selected");
+        return f.get().chosen() == null ? Optional.of(f.get().id() + " has no callout chosen yet") : Optional.empty();
+    }
+
+    private void importPoints() {
+        showTab(3);
+        checkTab.panel().importPoints();
+    }
+
+    private void undo() {
+        String what = session.undoLabel().orElse(null);
+        session.undo();
+        if (what != null) status.show("Undid: " + what + " (Ctrl+Shift+Z redoes it)");
+    }
+
+    private void redo() {
+        String what = session.redoLabel().orElse(null);
+        session.redo();
+        if (what != null) status.show("Redid: " + what);
+    }
+
+    private void showGuide() { HelpDialogs.guide(frame); }
+
+    private void showAbout() { HelpDialogs.about(frame); }
 
     private void copyCallout() {
         session.selected().map(RadiusFeature::chosen).ifPresent(r -> {
@@ -611,6 +660,9 @@ public final class MainWindow {
     public PracticeEditorPanel practicePanel() { return practiceTab.panel(); }
 
     public CheckPanel checkPanel() { return checkTab.panel(); }
+
+    /** The widths of the Part panel, the work area and the Notes panel, as laid out now (tests). */
+    public int[] columnWidths() { return new int[] {partPanel.getWidth(), work.getWidth(), notesPanel.getWidth()}; }
 
     /** The Swing action of command {@code id}, for tests and toolbars. */
     public Action action(String id) { return actions.get(id); }

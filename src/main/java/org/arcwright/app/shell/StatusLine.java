@@ -1,5 +1,6 @@
 package org.arcwright.app.shell;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
@@ -26,7 +27,7 @@ public final class StatusLine extends JPanel {
         message.setName("statusMessage");
         progress.setVisible(false);
         cancel.setVisible(false);
-        cancel.putClientProperty("JButton.buttonType", "borderless");
+        cancel.putClientProperty(FlatClientProperties.BUTTON_TYPE, FlatClientProperties.BUTTON_TYPE_BORDERLESS);
         cancel.addActionListener(e -> cancelPressed());
         add(message);
         add(progress, "w 120!");

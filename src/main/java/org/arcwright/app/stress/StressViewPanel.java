@@ -1,5 +1,6 @@
 package org.arcwright.app.stress;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import java.util.Objects;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
@@ -41,7 +42,7 @@ public final class StressViewPanel extends JPanel {
         this.session = Objects.requireNonNull(session, "session");
         this.background = Objects.requireNonNull(background, "background");
         setName("stressView");
-        title.putClientProperty("FlatLaf.styleClass", "h4");
+        title.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         summary.setName("stressSummary");
         chart.setName("stressChart");
         add(Cautions.box(Cautions.ADVICE + " Stress concentration factors here come from published curve fits and "

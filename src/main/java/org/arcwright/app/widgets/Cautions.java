@@ -11,6 +11,12 @@ public final class Cautions {
             + "judgement, above all for fatigue-loaded fillets, where the smallest radius the drawing allows decides "
             + "the life of the part.";
 
+    /** The text shown with every verdict on measured points (the Check view). */
+    public static final String VERDICT = "A verdict covers only the points imported, judged against the callout named, "
+            + "with no allowance for measurement uncertainty unless one is stated. Conformance is decided by the governing "
+            + "standard (ASME Y14.5 or ISO 1101, with the ISO 14253-1 decision rules), your company's inspection practice "
+            + "and a licensed engineer's judgement.";
+
     private Cautions() {}
 
     /** A caution box holding {@code text}. */

@@ -1,5 +1,6 @@
 package org.arcwright.app.widgets;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import javax.swing.JLabel;
 import javax.swing.JPanel;
 import net.miginfocom.swing.MigLayout;
@@ -13,7 +14,7 @@ public final class PendingPanel extends JPanel {
         setName(name);
         add(new JLabel(Icons.get(icon, 48)), "center");
         JLabel t = new JLabel(title);
-        t.putClientProperty("FlatLaf.styleClass", "h2");
+        t.putClientProperty(FlatClientProperties.STYLE_CLASS, "h2");
         add(t, "center");
         add(new WrapLabel(whatItDoes + "\n\nNot available in this build yet: its calculation is still being added to "
                 + "Arcwright's core.", "Label.font", "Arcwright.help.foreground"), "wmin 10, wmax 420lp, center");

@@ -1,5 +1,6 @@
 package org.arcwright.app.zoneview;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import java.util.Hashtable;
 import java.util.Optional;
 import javax.swing.JButton;
@@ -50,7 +51,7 @@ public final class ZoneViewPanel extends JPanel {
         out.addActionListener(e -> canvas.zoomBy(1 / 1.5));
         JPanel bar = new JPanel(new MigLayout("insets 0, gap 8", "[grow,fill][][][][]", "[]"));
         what.setName("zoneWhat");
-        what.putClientProperty("FlatLaf.styleClass", "h4");
+        what.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         add(what, "wmin 10");
         bar.add(new JLabel(), "");
         bar.add(new JLabel("Deviation magnification"));

@@ -226,6 +226,78 @@ class FeatureBoundViewsGuiTest {
         assertThat(a).isEqualTo(b);
     }
 
+    @Test
+    @Order(10)
+    void commandsAreWhereAUserLooksForThem() {
+        selectRow(0);
+        // F1 has a chosen callout: Copy is available (it said "no feature is selected")
+        assertThat(GuiSupport.onEdt(() -> window.action("edit.copyCallout").isEnabled())).isTrue();
+        selectRow(4);
+        assertThat(GuiSupport.onEdt(() -> (String) window.action("edit.copyCallout").getValue(javax.swing.Action.SHORT_DESCRIPTION)))
+                .contains("F5 has no callout chosen yet");
+        // import measured points is a command: in the File menu and so in the command finder
+        assertThat(GuiSupport.onEdt(() -> window.catalog().group("File").stream().map(c -> c.id()).toList()))
+                .contains("file.importPoints");
+        fixture.menuItemWithPath("View").click();
+        java.util.List<String> view = GuiSupport.onEdt(() -> {
+            java.util.List<String> names = new java.util.ArrayList<>();
+            javax.swing.JMenu m = window.frame().getJMenuBar().getMenu(3);
+            for (int i = 0; i < m.getItemCount(); i++) if (m.getItem(i) != null) names.add(m.getItem(i).getText());
+            return names;
+        });
+        fixture.pressAndReleaseKeys(java.awt.event.KeyEvent.VK_ESCAPE, java.awt.event.KeyEvent.VK_ESCAPE);
+        assertThat(view.indexOf("Go to Check")).isLessThan(view.indexOf("Go to Notes"));
+        assertThat(view.indexOf("Go to Notes")).isLessThan(view.indexOf("Go to Practice editor"));
+        assertThat(GuiSupport.onEdt(() -> window.catalog().group("Help").stream().map(c -> c.title()).toList()))
+                .contains("Guide", "About Arcwright");
+        // undo says what it undid
+        GuiSupport.onEdt(() -> window.session().addFeature());
+        fixture.button("tool.edit.undo").click();
+        assertThat(GuiSupport.onEdt(() -> window.statusLine().message())).startsWith("Undid: Add F6");
+    }
+
+    @Test
+    @Order(11)
+    void atBothWindowSizesTheColumnsShareTheWidthAndTheTabsStayInOneRow() {
+        selectRow(0);
+        int[] small = null;
+        for (int[] size : new int[][] {{1024, 700}, {1600, 1000}}) {
+            GuiSupport.onEdt(() -> {
+                window.frame().setExtendedState(java.awt.Frame.NORMAL);
+                window.frame().setSize(size[0], size[1]);
+                window.frame().validate();
+            });
+            GuiSupport.settle(300);
+            int[] widths = GuiSupport.onEdt(() -> window.columnWidths());
+            if (size[0] == 1024) {
+                small = widths;
+                // the work area keeps a usable width, and its tabs one row in a fixed order
+                assertThat(widths[1]).isGreaterThanOrEqualTo(440);
+                assertThat(GuiSupport.onEdt(() -> window.workArea().getTabRunCount())).isEqualTo(1);
+            } else {
+                // a larger window widens the side panels too, not only the work area
+                assertThat(widths[0]).isGreaterThan(small[0]);
+                assertThat(widths[2]).isGreaterThan(small[2]);
+            }
+            for (org.arcwright.app.model.ThemeChoice theme : new org.arcwright.app.model.ThemeChoice[] {
+                org.arcwright.app.model.ThemeChoice.LIGHT, org.arcwright.app.model.ThemeChoice.DARK}) {
+                String look = theme == org.arcwright.app.model.ThemeChoice.LIGHT ? "light" : "dark";
+                GuiSupport.onEdt(() -> window.setTheme(theme));
+                GuiSupport.onEdt(() -> window.showTab(3));
+                checkAndWait(HOUSING);
+                GuiSupport.settle(400);
+                GuiSupport.screenshot(window.frame(), "check-" + size[0] + "x" + size[1] + "-" + look);
+                GuiSupport.onEdt(() -> window.showTab(0));
+                GuiSupport.settle(600);
+                GuiSupport.screenshot(window.frame(), "decide-" + size[0] + "x" + size[1] + "-" + look);
+                GuiSupport.onEdt(() -> window.showTab(4));
+                GuiSupport.settle(400);
+                GuiSupport.screenshot(window.frame(), "practice-" + size[0] + "x" + size[1] + "-" + look);
+            }
+        }
+        GuiSupport.onEdt(() -> window.setTheme(org.arcwright.app.model.ThemeChoice.LIGHT));
+    }
+
     private static String firstRuleId() {
         return GuiSupport.onEdt(() -> ((org.arcwright.rules.RuleBook.Entry) fixture.list("ruleList").target().getModel()
                 .getElementAt(0)).rule().id());

@@ -60,12 +60,12 @@ class SettingsAndRecoveryTest {
 
     @Test
     void theConfigDirectoryFollowsEachOperatingSystemsConvention() {
-        assertThat(ConfigLocation.directory(null, "Linux", "/home/u", Map.of())).isEqualTo(Path.of("/home/u/.config/arcwright"));
-        assertThat(ConfigLocation.directory(null, "Linux", "/home/u", Map.of("XDG_CONFIG_HOME", "/x")))
+        assertThat(org.arcwright.pack.ConfigDirectory.resolve(null, "Linux", "/home/u", Map.of())).isEqualTo(Path.of("/home/u/.config/arcwright"));
+        assertThat(org.arcwright.pack.ConfigDirectory.resolve(null, "Linux", "/home/u", Map.of("XDG_CONFIG_HOME", "/x")))
                 .isEqualTo(Path.of("/x/arcwright"));
-        assertThat(ConfigLocation.directory(null, "Mac OS X", "/Users/u", Map.of()))
+        assertThat(org.arcwright.pack.ConfigDirectory.resolve(null, "Mac OS X", "/Users/u", Map.of()))
                 .isEqualTo(Path.of("/Users/u/Library/Application Support/Arcwright"));
-        assertThat(ConfigLocation.directory("/tmp/c", "Linux", "/home/u", Map.of())).isEqualTo(Path.of("/tmp/c"));
+        assertThat(org.arcwright.pack.ConfigDirectory.resolve("/tmp/c", "Linux", "/home/u", Map.of())).isEqualTo(Path.of("/tmp/c"));
     }
 
     @Test
