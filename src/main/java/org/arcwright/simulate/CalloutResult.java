@@ -13,7 +13,7 @@ import org.arcwright.inspect.InspectionCallout;
  * @param escapes accepted but functionally bad
  * @param falseRejects not accepted but functionally good
  * @param indeterminate parts with no verdict (counted as not accepted)
- * @param examples the first few parts of each outcome, by part number
+ * @param examples the first few parts of each outcome, by part number, among the first 16,384 parts
  */
 public record CalloutResult(InspectionCallout callout, long parts, long accepted, long escapes, long falseRejects,
                             long indeterminate, Map<Outcome, List<Example>> examples) {

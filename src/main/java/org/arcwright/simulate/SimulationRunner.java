@@ -40,6 +40,11 @@ public final class SimulationRunner {
     public static final int BLOCK = 256;
     /** Example parts kept per callout and outcome. */
     public static final int EXAMPLES = 4;
+    /**
+     * Examples are drawn from the first this many blocks only (the first 16,384 parts), so that a run of
+     * millions of parts does not keep a few sections per block in memory until the blocks are merged.
+     */
+    static final int EXAMPLE_BLOCKS = 64;
 
     /** Told of progress from the worker threads after each block; must be thread-safe. */
     @FunctionalInterface
@@ -87,7 +92,7 @@ public final class SimulationRunner {
         for (int b = 0; b < blocks; b++) {
             UniformRandomProvider geometry = base.jump();
             UniformRandomProvider noise = base.jump();
-            work.add(new Block(b * BLOCK, Math.min(sim.parts(), (b + 1) * BLOCK), geometry, noise));
+            work.add(new Block(b * BLOCK, Math.min(sim.parts(), (b + 1) * BLOCK), geometry, noise, b < EXAMPLE_BLOCKS));
         }
         AtomicLong done = new AtomicLong();
         ExecutorService pool = Executors.newFixedThreadPool(threads, r -> {
@@ -104,7 +109,7 @@ public final class SimulationRunner {
                     return t;
                 }));
             }
-            Tally total = new Tally(sim.callouts().size());
+            Tally total = new Tally(sim.callouts().size(), true);
             for (Future<Tally> f : futures) total.add(get(f));
             return total.result(sim);
         } finally {
@@ -157,10 +162,10 @@ public final class SimulationRunner {
         }
     }
 
-    private record Block(int from, int to, UniformRandomProvider geometry, UniformRandomProvider noise) {
+    private record Block(int from, int to, UniformRandomProvider geometry, UniformRandomProvider noise, boolean keepExamples) {
         Tally run(Simulation sim, PartGenerator gen, BooleanSupplier cancelled) {
             int k = sim.callouts().size();
-            Tally t = new Tally(k);
+            Tally t = new Tally(k, keepExamples);
             Inspector inspector = new Inspector();
             PartGenerator.Scan scan = gen.newScan();
             NormalizedGaussianSampler g = PartGenerator.gaussian(geometry);
@@ -186,8 +191,10 @@ public final class SimulationRunner {
         long good;
         final long[] accepted, escapes, falseRejects, indeterminate;
         final List<Map<Outcome, List<Example>>> examples = new ArrayList<>();
+        final boolean keepExamples;
 
-        Tally(int k) {
+        Tally(int k, boolean keepExamples) {
+            this.keepExamples = keepExamples;
             accepted = new long[k];
             escapes = new long[k];
             falseRejects = new long[k];
@@ -202,6 +209,7 @@ public final class SimulationRunner {
             Outcome o = Outcome.of(acc, good);
             if (o == Outcome.ESCAPE) escapes[c]++;
             if (o == Outcome.FALSE_REJECT) falseRejects[c]++;
+            if (!keepExamples) return;
             List<Example> list = examples.get(c).computeIfAbsent(o, x -> new ArrayList<>());
             if (list.size() < EXAMPLES) list.add(new Example(part, new PointSet(pts.x(), pts.y(), pts.size(), "part " + (part.index() + 1)), o));
         }
