@@ -3,7 +3,7 @@
  * controls to a model and dispatches actions to the core.
  *
  * <p>May import: the JDK, Swing/AWT, FlatLaf, MigLayout, JFreeChart, every core package,
- * {@code org.arcwright.app.model} and {@code org.arcwright.app.shell} (the window it starts). Core
+ * {@code org.arcwright.app.model}, {@code org.arcwright.app.widgets} and {@code org.arcwright.app.shell} (the window it starts). Core
  * packages must never import this one.
  */
 package org.arcwright.app;

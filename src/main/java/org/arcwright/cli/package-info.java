@@ -8,7 +8,7 @@
  * so commands are testable in-process.
  *
  * <p>May import: the JDK, every core package, {@code org.arcwright.render},
- * {@code org.arcwright.render.plot}, picocli and Jackson. Must not
+ * {@code org.arcwright.render.plot}, {@code org.arcwright.services}, picocli and Jackson. Must not
  * import Swing.
  */
 package org.arcwright.cli;

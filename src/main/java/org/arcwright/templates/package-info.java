@@ -18,6 +18,6 @@
  * holds only maps, lists, strings and booleans, so filling a template executes nothing.
  *
  * <p>May import: the JDK, JMustache and the core packages ({@code io}, {@code tolerance},
- * {@code pack}, {@code callout}, {@code rules}, {@code worksheet}). Must not import Swing/AWT or print.
+ * {@code pack}, {@code callout}, {@code model}, {@code rules}, {@code worksheet}). Must not import Swing/AWT or print.
  */
 package org.arcwright.templates;

@@ -4,8 +4,8 @@
  * shows example parts of that kind, their deviations drawn magnified against the zone. Runs in the
  * background with progress and cancel.
  *
- * <p>May import: Swing/AWT, MigLayout, {@code org.arcwright.simulate} and the core packages it
- * uses ({@code inspect}, {@code zone}, {@code tolerance}, {@code io}). Registered in the main window
+ * <p>May import: the JDK, Swing/AWT, MigLayout and the core packages. Of the core it uses
+ * {@code simulate}, {@code inspect}, {@code zone}, {@code tolerance} and {@code io}. Registered in the main window
  * by one tab line.
  */
 package org.arcwright.app.simulate;
