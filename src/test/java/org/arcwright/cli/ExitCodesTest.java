@@ -43,7 +43,12 @@ class ExitCodesTest {
         String notes = dir.resolve("cache").toString();
         String personal = dir.resolve("personal").toString();
         String narrowR = write("narrow-r.json", Files.readString(Path.of(ex("inspect/bracket-round-r.json")))
+                .replace("\"nominalRadius\": 2.0", "\"nominalRadius\": 2.55")
                 .replace("\"min\": 1.9", "\"min\": 2.5").replace("\"max\": 2.1", "\"max\": 2.6")).toString();
+        // the revised bearing seat with a taller shoulder: the flat beyond the ring's largest chamfer (r_s max)
+        // then meets the required support
+        String tallSeat = write("tall-seat.json", Files.readString(Path.of(ex("mechanics/bearing-seat-clearance-revised.json")))
+                .replace("\"shoulderHeight\": 3.0", "\"shoulderHeight\": 4.0")).toString();
         String part = ex("tarnbeck-output-shaft-decided.arcpart");
         String callout = ex("callout-composite.json");
         Path note = write("note.md", "---\nid: exit-code-note\ntitle: An exit code note\ntags: [test]\n---\nBody text.\n");
@@ -59,7 +64,8 @@ class ExitCodesTest {
                 new Case(Cli.OK, "fillet-stress", ex("mechanics/drive-shaft-fillet-revised.json")),
                 new Case(Cli.FAIL, "fillet-stress", ex("mechanics/drive-shaft-fillet.json")),
                 new Case(Cli.BAD_INPUT, "fillet-stress", bad),
-                new Case(Cli.OK, "clearance", ex("mechanics/bearing-seat-clearance-revised.json")),
+                new Case(Cli.OK, "clearance", tallSeat),
+                new Case(Cli.FAIL, "clearance", ex("mechanics/bearing-seat-clearance-revised.json")),
                 new Case(Cli.FAIL, "clearance", ex("mechanics/bearing-seat-clearance.json")),
                 new Case(Cli.BAD_INPUT, "clearance", bad),
                 new Case(Cli.OK, "advise", ex("advisor/gear-seat-shoulder.json"), "--no-notes", "--no-settings"),

@@ -100,7 +100,7 @@ class InspectCommandTest {
         assertThat(run("inspect", f.toString(), "--window", "1e-9")).isEqualTo(2);
         assertThat(err.toString()).contains("--window").contains("at least 0.012566");
         assertThat(run("inspect", f.toString(), "--window", "NaN")).isEqualTo(2);
-        assertThat(err.toString()).contains("--window").contains("finite");
+        assertThat(err.toString()).contains("--window").contains("not a number");
     }
 
     @Test
