@@ -100,7 +100,8 @@ final class GeneralToleranceCommand implements Callable<Integer> {
             Map<String, Object> m = new LinkedHashMap<>();
             m.put("tolerance", tol);
             m.put("toleranceUnits", q == ToleranceQuantity.ANGULAR ? "deg" : u.symbol());
-            m.put("formatted", t.formatted());
+            // in the file's units, with its unit: a bare "±1" beside an inch tolerance reads as inches
+            m.put("formatted", q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + Numbers.plain(tol) + " " + u.symbol());
             m.put("class", t.toleranceClass());
             m.put("className", table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()));
             m.put("range", t.range() + " mm");

@@ -46,6 +46,18 @@ class GeneralToleranceCommandTest {
     }
 
     @Test
+    void theFormattedToleranceOfAnInchSizeIsInInchesWithItsUnit() throws Exception {
+        // ISO 2768-1:1989 Table 2: class m, over 6 mm (4 in = 101.6 mm): ±1 mm = ±0.03937 in.
+        // Before: "formatted" said "±1", the millimetre value with no unit, beside an inch tolerance.
+        JsonNode in = json.readTree(CliRun.of("general-tolerance", "--class", "m", "--radius", "4", "--units", "in",
+                "--format", "json").out());
+        assertThat(in.get("tolerance").asDouble()).isCloseTo(1 / 25.4, within(1e-12));
+        assertThat(in.get("formatted").asText()).isEqualTo("±0.03937 in");
+        JsonNode mm = json.readTree(CliRun.of("general-tolerance", "--class", "m", "--radius", "4", "--format", "json").out());
+        assertThat(mm.get("formatted").asText()).isEqualTo("±0.5 mm");
+    }
+
+    @Test
     void linearAndAngularUseTheirOwnTables() throws Exception {
         // ISO 2768-1:1989 Table 1: class c, over 120 up to 400 mm: ±1.2.
         assertThat(json.readTree(CliRun.of("general-tolerance", "--class", "c", "--linear", "250", "--format", "json")
