@@ -11,6 +11,10 @@ public enum Verdict {
 
     /** The verdict of an inspection result. */
     static Verdict of(InspectionResult r) {
-        return r.pass() ? ACCEPTED : REJECTED;
+        switch (r.verdict()) {
+            case PASS: return ACCEPTED;
+            case INDETERMINATE: return INDETERMINATE;
+            default: return REJECTED;
+        }
     }
 }
