@@ -74,6 +74,8 @@ class ExitCodesTest {
                 new Case(Cli.BAD_INPUT, "pack", "check", dir.resolve("no-pack").toString(), "--no-settings"),
                 new Case(Cli.OK, "inspect", ex("inspect/bracket-round-r.json")),
                 new Case(Cli.FAIL, "inspect", narrowR),
+                // U = 0.06 mm against a 0.2 mm band: the ISO 14253-1 default rule proves neither pass nor fail
+                new Case(Cli.INDETERMINATE, "inspect", ex("inspect/bracket-round-r.json"), "--uncertainty", "0.06"),
                 new Case(Cli.BAD_INPUT, "inspect", bad),
                 new Case(Cli.OK, "drawing-note", "title-block-notes", part, "--no-settings"),
                 new Case(Cli.BAD_INPUT, "drawing-note", "title-block-notes", bad, "--no-settings"),
