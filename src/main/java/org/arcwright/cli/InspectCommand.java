@@ -63,6 +63,10 @@ final class InspectCommand implements Callable<Integer> {
         if (window != null && !Double.isFinite(window)) throw InputProblem.ofField("--window", "must be a finite length, got " + window);
         if (uncertainty != null && !Double.isFinite(uncertainty)) throw InputProblem.ofField("--uncertainty", "must be a finite length, got " + uncertainty);
         InspectionRequest req = new InspectionFiles(new JsonFiles()).read(file).withCompare(compare);
+        if (plot != null && !"points".equals(req.points().source())) {
+            // the points came from a pointsFile: the plot must not replace it either
+            org.arcwright.io.OutputFiles.requireWritable(plot, "--plot", file, Path.of(req.points().source()));
+        }
         try {
             if (window != null) req = req.withWindow(window);
             if (uncertainty != null) req = req.withUncertainty(uncertainty);

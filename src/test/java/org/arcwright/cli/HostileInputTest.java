@@ -188,6 +188,15 @@ class HostileInputTest {
         Path shaft = dir.resolve("shaft.svg");
         Files.copy(Path.of(example("mechanics/drive-shaft-fillet.json")), shaft);
         badInput(CliRun.of("fillet-stress", shaft.toString(), "--plot", shaft.toString()), "--plot", "also the input");
+
+        // a plot named like the section's pointsFile must not replace the measured points
+        Path points = file("section.svg", "x,y\n4,0\n2.586,0.586\n2,2\n0.586,2.586\n0,4\n");
+        String pointsBefore = Files.readString(points);
+        Path section = file("section.json", "{\"units\": \"mm\", \"corner\": {\"vertex\": [0, 0], \"legA\": [1, 0], "
+                + "\"legB\": [0, 1], \"kind\": \"fillet\"}, \"nominalRadius\": 2.0, "
+                + "\"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"pointsFile\": \"section.svg\"}");
+        badInput(CliRun.of("inspect", section.toString(), "--plot", points.toString()), "--plot", "also the input");
+        assertThat(Files.readString(points)).isEqualTo(pointsBefore);
     }
 
     @Test
