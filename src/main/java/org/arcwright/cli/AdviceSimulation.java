@@ -103,7 +103,7 @@ final class AdviceSimulation {
         for (Need n : advice.needs()) {
             if (n.id() == Need.Kind.RADIUS_FLOOR && n.min() != null) floor = Math.max(floor, n.min());
             else if (n.id() == Need.Kind.RADIUS_CEILING && n.max() != null) ceiling = Math.min(ceiling, n.max());
-            else notJudged.add(n.key() + ": not judged (not a radius limit the simulation can check on the true blend)");
+            else notJudged.add(n.key() + " (not a radius limit the simulation can check on the true blend)");
         }
         if (defaults.isEmpty()) {
             notes.add("not simulated: no pack provides a " + ProcessDefaults.KIND + " table");
@@ -248,7 +248,20 @@ final class AdviceSimulation {
             share(s.putObject("escapes"), c.result().escapeShare());
             share(s.putObject("falseRejects"), c.result().falseRejectShare());
             if (c.result().indeterminate() > 0) share(s.putObject("indeterminate"), c.result().indeterminateShare());
+            remark(c).ifPresent(t -> s.put("remark", t));
         }
+    }
+
+    /**
+     * A remark when most functionally good parts are rejected: then the simulated inspection (measuring
+     * noise, scan density, the engine's slack) rather than the process limits the callout, and the
+     * figure says more about the inspection model than about the parts.
+     */
+    static Optional<String> remark(Card c) {
+        if (c.result() == null || c.good() == null || c.good().count() == 0) return Optional.empty();
+        if (2 * c.result().falseRejects() <= c.good().count()) return Optional.empty();
+        return Optional.of("more than half the functionally good parts are rejected: the simulated inspection (measuring noise, "
+                + "points per section) rather than the process limits this callout; check how the shop inspects it before reading this as scrap");
     }
 
     private static void share(ObjectNode n, Share s) {
@@ -286,6 +299,7 @@ final class AdviceSimulation {
                 + "; false rejects " + cell(x.falseRejectShare()));
         lines.add("          (shares of " + x.parts() + " parts, 95 % Wilson interval; " + cell(c.good()) + " of them meet the needs)");
         if (x.indeterminate() > 0) lines.add("simulated no verdict on " + cell(x.indeterminateShare()));
+        remark(c).ifPresent(t -> lines.add("simulated " + t));
         return lines;
     }
 
