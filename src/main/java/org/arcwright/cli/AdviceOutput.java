@@ -74,6 +74,12 @@ final class AdviceOutput {
     }
 
     void printText(PrintWriter out, Advice advice, int limit) {
+        printText(out, advice, limit, () -> { }, i -> List.of());
+    }
+
+    /** As above, with a block printed before the cards and extra lines per card (e.g. simulated evidence). */
+    void printText(PrintWriter out, Advice advice, int limit, Runnable beforeCards,
+                   java.util.function.IntFunction<List<String>> cardExtra) {
         DesignCase c = advice.designCase();
         out.printf("%s%s R%s %s, %s, %s, %s, %s%s%s%n",
                 c.feature() == null ? "" : c.feature() + ": ", c.kind().key(),
@@ -91,6 +97,7 @@ final class AdviceOutput {
             for (DesignChange d : advice.designChanges()) out.println("  - " + d.kind().key() + ": " + d.text());
         }
         printNeeds(out, advice, Math.min(limit, recs.size()));
+        beforeCards.run();
         for (int i = 0; i < recs.size() && i < limit; i++) {
             Recommendation r = recs.get(i);
             out.println();
@@ -99,6 +106,7 @@ final class AdviceOutput {
                     r.demoted() ? " (DEMOTED)" : "", Boolean.FALSE.equals(r.meetsAll()) ? " (MISSES A NEED)" : "", r.ruleId());
             for (String b : r.because()) out.println("   because   " + b);
             out.println("   numbers   " + numbersLine(r.numbers().asMap()));
+            for (String s : cardExtra.apply(i)) out.println("   " + s);
             for (String t : r.cautions()) out.println("   caution   " + t);
             for (String ref : r.references()) out.println("   reference " + ref);
             for (NoteLink n : r.notes()) out.println("   note      " + n.title() + " [" + n.id() + ", " + n.pack() + "]");

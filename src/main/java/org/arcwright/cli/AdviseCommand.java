@@ -53,6 +53,16 @@ final class AdviseCommand implements Callable<Integer> {
     @Option(names = "--all", description = "In text, list every recommendation, not only the first three.")
     boolean all;
 
+    @Option(names = "--simulate", description = "Add to each card what its callout lets through over a simulated population "
+            + "from the pack's default process model for the case's process (evidence only; the ranking does not change).")
+    boolean simulate;
+
+    @Option(names = "--simulate-parts", paramLabel = "N", description = "Parts per simulated population with --simulate. Default: 2000.")
+    Integer simulateParts;
+
+    @Option(names = "--simulate-seed", paramLabel = "S", description = "Seed of the simulation with --simulate. Default: 19.")
+    Long simulateSeed;
+
     @Option(names = "--no-notes", description = "Do not link practice notes (skips opening the notes index).")
     boolean noNotes;
 
@@ -103,6 +113,11 @@ final class AdviseCommand implements Callable<Integer> {
             single = true;
         }
         if (single && format.equals("csv")) throw InputProblem.ofField("--format", "csv is for part files and --batch");
+        if (!simulate && (simulateParts != null || simulateSeed != null)) {
+            throw InputProblem.ofField(simulateParts != null ? "--simulate-parts" : "--simulate-seed", "needs --simulate");
+        }
+        if (simulateParts != null && simulateParts < 1) throw InputProblem.ofField("--simulate-parts", "must be at least 1, got " + simulateParts);
+        if (simulate && format.equals("csv")) throw InputProblem.ofField("--simulate", "is for text and json output, not csv");
         List<Advice> advice = new ArrayList<>();
         for (int i = 0; i < designCases.size(); i++) {
             try {
@@ -111,18 +126,36 @@ final class AdviseCommand implements Callable<Integer> {
                 throw p.under(cases.get(i)[0] == null ? "case" : cases.get(i)[0]);
             }
         }
+        List<AdviceSimulation.Report> sims = new ArrayList<>();
+        if (simulate) {
+            var defaults = org.arcwright.simulate.ProcessDefaults.load(stack);
+            int n = simulateParts == null ? AdviceSimulation.DEFAULT_PARTS : simulateParts;
+            long seed = simulateSeed == null ? AdviceSimulation.DEFAULT_SEED : simulateSeed;
+            for (int i = 0; i < advice.size(); i++) {
+                try {
+                    sims.add(AdviceSimulation.run(advice.get(i), defaults, book.capability(), n, seed));
+                } catch (InputProblem p) {
+                    throw p.under(cases.get(i)[0] == null ? "case" : cases.get(i)[0]);
+                }
+            }
+        }
         AdviceOutput o = new AdviceOutput();
         List<String> packNames = stack.packs().stream().map(PracticePack::name).toList();
         switch (format) {
             case "json" -> {
                 if (single) {
                     ObjectNode n = o.toJson(cases.get(0)[0], advice.get(0));
+                    if (simulate) AdviceSimulation.addJson(n, sims.get(0));
                     n.setAll(o.packs(book, packNames));
                     out.println(o.write(n));
                 } else {
                     ObjectNode root = o.packs(book, packNames);
                     ArrayNode features = root.putArray("features");
-                    for (int i = 0; i < advice.size(); i++) features.add(o.toJson(cases.get(i)[0], advice.get(i)));
+                    for (int i = 0; i < advice.size(); i++) {
+                        ObjectNode f = o.toJson(cases.get(i)[0], advice.get(i));
+                        if (simulate) AdviceSimulation.addJson(f, sims.get(i));
+                        features.add(f);
+                    }
                     out.println(o.write(root));
                 }
             }
@@ -132,7 +165,13 @@ final class AdviseCommand implements Callable<Integer> {
                 for (int i = 0; i < advice.size(); i++) {
                     out.println();
                     if (!single) out.println("== " + cases.get(i)[0]);
-                    o.printText(out, advice.get(i), all ? Integer.MAX_VALUE : single ? 3 : 1);
+                    int limit = all ? Integer.MAX_VALUE : single ? 3 : 1;
+                    if (simulate) {
+                        AdviceSimulation.Report r = sims.get(i);
+                        o.printText(out, advice.get(i), limit, () -> AdviceSimulation.printHeader(out, r), k -> AdviceSimulation.cardLines(r, k));
+                    } else {
+                        o.printText(out, advice.get(i), limit);
+                    }
                 }
             }
         }

@@ -1,0 +1,309 @@
+package org.arcwright.cli;
+
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.PrintWriter;
+import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.List;
+import java.util.Locale;
+import java.util.Optional;
+import java.util.Set;
+import org.arcwright.callout.Callout;
+import org.arcwright.callout.ProfileTier;
+import org.arcwright.inspect.Freedom;
+import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.io.InputProblem;
+import org.arcwright.model.BlendKind;
+import org.arcwright.model.DesignCase;
+import org.arcwright.rules.Advice;
+import org.arcwright.rules.CapabilityTable;
+import org.arcwright.rules.Need;
+import org.arcwright.rules.Recommendation;
+import org.arcwright.simulate.CalloutResult;
+import org.arcwright.simulate.Needs;
+import org.arcwright.simulate.ProcessDefaults;
+import org.arcwright.simulate.ProcessModel;
+import org.arcwright.simulate.Share;
+import org.arcwright.simulate.Simulation;
+import org.arcwright.simulate.SimulationResult;
+import org.arcwright.simulate.SimulationRunner;
+import org.arcwright.zone.Corner;
+import org.arcwright.zone.CornerKind;
+import org.arcwright.zone.ProfileZone;
+import org.arcwright.zone.Point2;
+
+/**
+ * {@code advise --simulate}: judges each card's callout over one simulated population from the
+ * pack's default process model for the case's process, against the advice's radius needs. Evidence
+ * on the cards only; the ranking is the advisor's and is not touched.
+ *
+ * <p>Each card is judged on its own population of the same seed; radius limits off the nominal are
+ * judged with the process aimed at their middle. Mapping (the adapter's whole job): the radius floor (largest of the floors) becomes
+ * {@code minRadius}, the radius ceiling (smallest of the ceilings) {@code maxRadius}; form and
+ * location needs are not radius limits and are reported as not judged. Callouts: R and CR as radius
+ * limits; a profile floats without datums and is located with them (a 2-D section has no partial
+ * datum frame to honour); a composite profile's lower tiers keep rotation fixed and translation free
+ * when they repeat datums (refinement of orientation, ASME Y14.5-2018 composite profile, from memory).
+ * Not simulated: a title-block general tolerance (not a callout on this blend) and a profile with a
+ * radius refinement (two callouts judged together; the runner judges one at a time).
+ */
+final class AdviceSimulation {
+    /** Parts when {@code --simulate-parts} is not given: small enough for an interactive answer. */
+    static final int DEFAULT_PARTS = 2_000;
+    /** The fixed seed: the same case gives the same figures on every run and machine. */
+    static final long DEFAULT_SEED = 19;
+
+    /**
+     * One card's evidence: a result, or why there is none.
+     *
+     * @param result the callout's record over the population, if simulated
+     * @param good parts of that population meeting the needs, if simulated
+     * @param notSimulated why the callout was not simulated; null when it was
+     */
+    record Card(CalloutResult result, Share good, String notSimulated) {}
+
+    /**
+     * The simulation behind one advice.
+     *
+     * @param ran whether a population was simulated at all
+     * @param process the process key whose default model was used
+     * @param modelSource the table id and its source
+     * @param radiusSd the radius standard deviation used, case units
+     * @param radiusSdFrom where the radius scatter comes from
+     * @param seed the seed
+     * @param parts parts simulated
+     * @param points points per measured section
+     * @param noise measuring noise (1 sd), case units
+     * @param units unit symbol
+     * @param needs the needs judged, in words
+     * @param notJudged needs not mapped, each with why
+     * @param cards per recommendation, in the advice's order
+     * @param notes anything else the reader must know (why nothing ran)
+     */
+    record Report(boolean ran, String process, String modelSource, double radiusSd, String radiusSdFrom, long seed, int parts,
+                  int points, double noise, String units, String needs, List<String> notJudged, List<Card> cards,
+                  List<String> notes) {
+        Report {
+            notJudged = List.copyOf(notJudged);
+            cards = List.copyOf(cards);
+            notes = List.copyOf(notes);
+        }
+    }
+
+    private AdviceSimulation() {}
+
+    /** Runs the simulation for one advice; never changes it. */
+    static Report run(Advice advice, Optional<ProcessDefaults> defaults, CapabilityTable capability, int parts, long seed) {
+        DesignCase c = advice.designCase();
+        String u = c.units().symbol();
+        List<String> notes = new ArrayList<>();
+        List<String> notJudged = new ArrayList<>();
+        double floor = 0, ceiling = Double.POSITIVE_INFINITY;
+        for (Need n : advice.needs()) {
+            if (n.id() == Need.Kind.RADIUS_FLOOR && n.min() != null) floor = Math.max(floor, n.min());
+            else if (n.id() == Need.Kind.RADIUS_CEILING && n.max() != null) ceiling = Math.min(ceiling, n.max());
+            else notJudged.add(n.key() + " (not a radius limit the simulation can check on the true blend)");
+        }
+        if (defaults.isEmpty()) {
+            notes.add("not simulated: no pack provides a " + ProcessDefaults.KIND + " table");
+            return empty(advice, c, u, seed, parts, notJudged, notes, "no table");
+        }
+        if (floor > ceiling) {
+            notes.add("not simulated: the radius floor " + Numbers.plain(floor) + " " + u + " lies above the ceiling "
+                    + Numbers.plain(ceiling) + " " + u + "; no part can be functionally good");
+            return empty(advice, c, u, seed, parts, notJudged, notes, defaults.get().id());
+        }
+        if (floor == 0 && Double.isInfinite(ceiling)) {
+            notes.add("no radius floor or ceiling among the needs: every part counts as functionally good, so escapes are 0 by construction");
+        }
+        double mmPer = c.units().millimetres();
+        Optional<Double> pmMm = capability == null ? Optional.empty() : capability.plusMinusMm(c.process(), c.nominalRadius() * mmPer);
+        double pm = pmMm.map(t -> t / mmPer).orElse(c.nominalRadius() * 0.1);
+        ProcessDefaults d = defaults.get();
+        String sdFrom = "process capability ±" + Numbers.plain(pm) + " " + u + " / " + Numbers.plain(d.radiusSdDivisor())
+                + (pmMm.isPresent() ? " (capability table, " + c.process().key() + ")" : " (no capability entry: ±10 % of the nominal assumed)");
+        ProcessModel caseModel;
+        try {
+            caseModel = d.model(c.process().key(), c.units(), corner(c), c.nominalRadius(), pm);
+        } catch (InputProblem p) {
+            notes.add("not simulated: " + p.getMessage());
+            return empty(advice, c, u, seed, parts, notJudged, notes, d.id());
+        }
+        Needs needs = new Needs(floor, ceiling, Double.NaN, Double.NaN);
+        List<Card> cards = new ArrayList<>();
+        SimulationResult result = null;
+        boolean centred = false;
+        for (Recommendation r : advice.recommendations()) {
+            String reason = r.refinement() != null
+                    ? "a profile with a radius refinement is judged by two callouts together; the simulation judges one callout at a time"
+                    : null;
+            InspectionCallout ic = reason == null ? toInspection(r.callout()) : null;
+            if (ic == null && reason == null) {
+                reason = r.callout() instanceof Callout.General
+                        ? "a title-block general tolerance is no callout on this blend; its range is judged by the size check, not simulated here"
+                        : "no inspection equivalent for " + r.callout().typeName();
+            }
+            if (ic == null) {
+                cards.add(new Card(null, null, reason));
+                continue;
+            }
+            ProcessModel model = caseModel;
+            if (r.callout() instanceof Callout.SizeLimits lim && lim.min() + lim.max() != 2 * c.nominalRadius()) {
+                model = d.model(c.process().key(), c.units(), corner(c), (lim.min() + lim.max()) / 2, pm);
+                centred = true;
+            }
+            Simulation sim = new Simulation(model, needs, List.of(ic), parts, seed, Simulation.defaultResolution(model), Double.NaN);
+            try {
+                SimulationResult one = SimulationRunner.allCores().run(sim);
+                if (result == null || model == caseModel) result = one;
+                cards.add(new Card(one.callouts().get(0), one.goodShare(), null));
+            } catch (InputProblem p) {
+                cards.add(new Card(null, null, "the inspection cannot judge even the nominal part: " + p.getMessage()));
+            }
+        }
+        if (centred) {
+            notes.add("radius limits off the nominal: the process aims at the middle of each card's limits (a shop centres on the "
+                    + "drawn band, common practice); other cards at the nominal R" + Numbers.plain(c.nominalRadius()) + " " + u);
+        }
+        if (result == null) notes.add("no card's callout could be simulated");
+        ProcessModel model = caseModel;
+        return new Report(result != null, c.process().key(), d.id() + " (" + d.source() + ")", pm / d.radiusSdDivisor(), sdFrom,
+                seed, parts, model.points(), model.noise(), u, needs.describe(u), notJudged, cards, notes);
+    }
+
+    private static Report empty(Advice advice, DesignCase c, String u, long seed, int parts, List<String> notJudged,
+                                List<String> notes, String source) {
+        List<Card> cards = new ArrayList<>();
+        for (int i = 0; i < advice.recommendations().size(); i++) cards.add(new Card(null, null, notes.get(notes.size() - 1)));
+        return new Report(false, c.process().key(), source, Double.NaN, "", seed, parts, 0, Double.NaN, u, "", notJudged,
+                cards, notes);
+    }
+
+    /** The case's corner: leg A along x, leg B at the corner angle, material as the blend kind says. */
+    static Corner corner(DesignCase c) {
+        double a = Math.toRadians(c.cornerAngleDegrees());
+        return new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(Math.cos(a), Math.sin(a)),
+                c.kind() == BlendKind.ROUND ? CornerKind.ROUND : CornerKind.FILLET);
+    }
+
+    /** The inspection callout judging the same thing, or null when there is none. */
+    static InspectionCallout toInspection(Callout callout) {
+        if (callout instanceof Callout.SizeLimits s) {
+            return new InspectionCallout.RadiusLimits(s.radiusKind(), s.min(), s.max());
+        }
+        if (callout instanceof Callout.Profile p) {
+            ProfileZone z = p.outward() == null ? ProfileZone.bilateral(p.zone()) : new ProfileZone(p.zone(), p.outward());
+            Set<Freedom> free = p.datums().isEmpty() ? EnumSet.allOf(Freedom.class) : EnumSet.noneOf(Freedom.class);
+            return new InspectionCallout.ProfileTolerance(z, free, p.dynamic());
+        }
+        if (callout instanceof Callout.CompositeProfile cp) {
+            List<InspectionCallout.Tier> tiers = new ArrayList<>();
+            for (int i = 0; i < cp.tiers().size(); i++) {
+                ProfileTier t = cp.tiers().get(i);
+                Set<Freedom> free = t.datums().isEmpty() ? EnumSet.allOf(Freedom.class)
+                        : i == 0 ? EnumSet.noneOf(Freedom.class) : EnumSet.of(Freedom.X, Freedom.Y);
+                tiers.add(new InspectionCallout.Tier(t.zone(), free));
+            }
+            return new InspectionCallout.CompositeProfile(tiers);
+        }
+        return null;
+    }
+
+    /** Adds {@code simulation} to each recommendation of an advice's JSON and the run's note at the top. */
+    static void addJson(ObjectNode adviceNode, Report r) {
+        ObjectNode top = adviceNode.putObject("simulation");
+        top.put("ran", r.ran());
+        top.put("processModel", r.process());
+        top.put("table", r.modelSource());
+        top.put("seed", r.seed());
+        top.put("parts", r.parts());
+        if (r.ran()) {
+            top.put("points", r.points());
+            top.put("noise", r.noise());
+            top.put("radiusSd", r.radiusSd());
+            top.put("radiusSdFrom", r.radiusSdFrom());
+            top.put("units", r.units());
+            top.put("needs", r.needs());
+        }
+        ArrayNode nj = top.putArray("needsNotJudged");
+        r.notJudged().forEach(nj::add);
+        ArrayNode notes = top.putArray("notes");
+        r.notes().forEach(notes::add);
+        top.put("evidenceOnly", "the simulation does not change the ranking");
+        top.put("caution", SimulationResult.CAUTION);
+        ArrayNode recs = (ArrayNode) adviceNode.get("recommendations");
+        for (int i = 0; i < recs.size() && i < r.cards().size(); i++) {
+            Card c = r.cards().get(i);
+            ObjectNode s = ((ObjectNode) recs.get(i)).putObject("simulation");
+            s.put("simulated", c.result() != null);
+            if (c.result() == null) {
+                s.put("reason", c.notSimulated());
+                continue;
+            }
+            s.put("callout", c.result().text());
+            s.put("parts", c.result().parts());
+            share(s.putObject("good"), c.good());
+            share(s.putObject("accepted"), c.result().acceptedShare());
+            share(s.putObject("escapes"), c.result().escapeShare());
+            share(s.putObject("falseRejects"), c.result().falseRejectShare());
+            if (c.result().indeterminate() > 0) share(s.putObject("indeterminate"), c.result().indeterminateShare());
+            remark(c).ifPresent(t -> s.put("remark", t));
+        }
+    }
+
+    /**
+     * A remark when most functionally good parts are rejected: then the simulated inspection (measuring
+     * noise, scan density, the engine's slack) rather than the process limits the callout, and the
+     * figure says more about the inspection model than about the parts.
+     */
+    static Optional<String> remark(Card c) {
+        if (c.result() == null || c.good() == null || c.good().count() == 0) return Optional.empty();
+        if (2 * c.result().falseRejects() <= c.good().count()) return Optional.empty();
+        return Optional.of("more than half the functionally good parts are rejected: the simulated inspection (measuring noise, "
+                + "points per section) rather than the process limits this callout; check how the shop inspects it before reading this as scrap");
+    }
+
+    private static void share(ObjectNode n, Share s) {
+        n.put("count", s.count());
+        n.put("share", s.share());
+        n.putArray("interval95").add(s.low()).add(s.high());
+    }
+
+    /** The run's note, printed once above the cards. */
+    static void printHeader(PrintWriter out, Report r) {
+        out.println();
+        if (r.ran()) {
+            out.printf("Simulated (evidence only, ranking unchanged): %d parts, seed %d, default %s process model, "
+                            + "%d points per section, measuring noise %s %s; radius sd %s %s from %s%n",
+                    r.parts(), r.seed(), r.process(), r.points(), Numbers.plain(r.noise()), r.units(),
+                    Numbers.fixed(r.radiusSd(), 4), r.units(), r.radiusSdFrom());
+            out.println("  table     " + r.modelSource());
+            out.println("  needs     " + r.needs());
+        } else {
+            out.println("Simulation: not run.");
+        }
+        for (String s : r.notJudged()) out.println("  not judged " + s);
+        for (String s : r.notes()) out.println("  note      " + s);
+        out.println("  caution   " + SimulationResult.CAUTION);
+    }
+
+    /** The lines for card {@code i}. */
+    static List<String> cardLines(Report r, int i) {
+        if (i >= r.cards().size()) return List.of();
+        Card c = r.cards().get(i);
+        if (c.result() == null) return List.of("simulated not simulated: " + c.notSimulated());
+        CalloutResult x = c.result();
+        List<String> lines = new ArrayList<>();
+        lines.add("simulated " + x.text() + ": accepted " + cell(x.acceptedShare()) + "; escapes " + cell(x.escapeShare())
+                + "; false rejects " + cell(x.falseRejectShare()));
+        lines.add("          (shares of " + x.parts() + " parts, 95 % Wilson interval; " + cell(c.good()) + " of them meet the needs)");
+        if (x.indeterminate() > 0) lines.add("simulated no verdict on " + cell(x.indeterminateShare()));
+        remark(c).ifPresent(t -> lines.add("simulated " + t));
+        return lines;
+    }
+
+    private static String cell(Share s) {
+        return String.format(Locale.ROOT, "%.2f %% [%.2f-%.2f %%]", 100 * s.share(), 100 * s.low(), 100 * s.high());
+    }
+}
