@@ -451,14 +451,15 @@ public final class DecidePanel extends JPanel {
                     : "Fix the tolerance intent to see its limits.", "Label.font", "Arcwright.help.foreground"), "span 2, growx, wmin 10");
         } else {
             LimitsReport l = r.get();
+            String u = " " + form.units().symbol();
             figure("As drawn (ASME)", l.asme());
             figure("As drawn (ISO)", l.iso());
-            figure("Smallest radius", l.min() == null ? "open (MAX only)" : Numbers.fixed(l.min(), 4));
-            figure("Largest radius", l.max() == null ? "open (MIN only)" : Numbers.fixed(l.max(), 4));
+            figure("Smallest radius", l.min() == null ? "open (MAX only)" : Numbers.fixed(l.min(), 4) + u);
+            figure("Largest radius", l.max() == null ? "open (MIN only)" : Numbers.fixed(l.max(), 4) + u);
             if (l.crescent() != null) {
-                figure("Crescent width (bisector)", Numbers.fixed(l.crescent().width(), 4));
-                figure("Equal-bilateral profile", l.profileZone() == null ? "none (no nominal arc)" : Numbers.fixed(l.profileZone(), 4));
-                figure("Shortcut profile (2 × the larger deviation)", l.shortcutProfile() == null ? "none (no deviation)" : Numbers.fixed(l.shortcutProfile(), 4));
+                figure("Crescent width (bisector)", Numbers.fixed(l.crescent().width(), 4) + u);
+                figure("Equal-bilateral profile", l.profileZone() == null ? "none (no nominal arc)" : Numbers.fixed(l.profileZone(), 4) + u);
+                figure("Shortcut profile (2 × the larger deviation)", l.shortcutProfile() == null ? "none (no deviation)" : Numbers.fixed(l.shortcutProfile(), 4) + u);
             }
             for (String remark : l.remarks()) figures.add(new WrapLabel(remark, "Label.font", null), "span 2, growx, wmin 10, gaptop 4");
         }

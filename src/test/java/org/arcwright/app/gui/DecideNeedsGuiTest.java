@@ -100,6 +100,50 @@ class DecideNeedsGuiTest {
         shoot("decide-needs");
     }
 
+    /**
+     * R2 ±0.2 at ×100: the R1.8 limit would be drawn with radius 2 + 100 × (−0.2) &lt; 0, a sharp corner; the
+     * view says so in words, the captions carry units and sit above the drawing, not on it.
+     */
+    @Test
+    void theZoneViewWarnsWhenTheMagnificationDrawsALimitArcAsASharpCorner() {
+        fixture.table("featureTable").selectRows(0);
+        DesignCase c = new DesignCase(Units.MM, DrawingStyle.ISO, "shoulder", BlendKind.FILLET, 2, BlendFunction.STRESS_RELIEF,
+                Loading.STATIC, false, false, List.of(), Process.MACHINED, null, null, "R2 ±0.2");
+        GuiSupport.onEdt(() -> window.session().updateCase("F1", c));
+        GuiSupport.onEdt(() -> window.showTab(1));
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> find(window.frame(), "zoneView") != null), 30);
+        org.arcwright.app.zoneview.ZoneViewPanel zone =
+                GuiSupport.onEdt(() -> (org.arcwright.app.zoneview.ZoneViewPanel) find(window.frame(), "zoneView"));
+        GuiSupport.onEdt(() -> zone.setMagnification(100));
+        GuiSupport.settle(300);
+        assertThat(GuiSupport.onEdt(zone::distortionWarning)).contains("×100", "R1.8 mm", "sharp corner");
+        assertThat(GuiSupport.onEdt(zone::captionText)).contains("R limits 1.8 to 2.2 mm", "Zone width on the bisector: ")
+                .contains(" mm (deviations shown ×100");
+        // the words sit above the drawing: the canvas starts below the last caption
+        JComponent canvas = GuiSupport.onEdt(() -> find(zone, "zoneCanvas"));
+        JComponent warning = GuiSupport.onEdt(() -> find(zone, "zoneDistortion"));
+        assertThat(GuiSupport.onEdt(() -> canvas.getY())).isGreaterThanOrEqualTo(
+                GuiSupport.onEdt(() -> warning.getY() + warning.getHeight()));
+        shootZone("zone-x100", zone);
+        GuiSupport.onEdt(() -> zone.setMagnification(5));
+        GuiSupport.settle(300);
+        assertThat(GuiSupport.onEdt(zone::distortionWarning)).isEmpty();
+        GuiSupport.onEdt(() -> window.showTab(0));
+    }
+
+    private static void shootZone(String name, org.arcwright.app.zoneview.ZoneViewPanel zone) {
+        for (ThemeChoice theme : List.of(ThemeChoice.LIGHT, ThemeChoice.DARK)) {
+            GuiSupport.onEdt(() -> window.setTheme(theme));
+            for (java.awt.Dimension d : List.of(new java.awt.Dimension(1024, 700), new java.awt.Dimension(1600, 1000))) {
+                GuiSupport.onEdt(() -> window.frame().setSize(d));
+                GuiSupport.settle(600);
+                GuiSupport.screenshot(window.frame(), name + "-" + theme.name().toLowerCase(java.util.Locale.ROOT)
+                        + "-" + d.width);
+            }
+        }
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
+    }
+
     private static void shoot(String name) {
         for (ThemeChoice theme : List.of(ThemeChoice.LIGHT, ThemeChoice.DARK)) {
             GuiSupport.onEdt(() -> window.setTheme(theme));
