@@ -104,7 +104,7 @@ public record NeedsSummary(boolean nothingMeets, String statement, String change
             return "Not proven against the needs: taken as written; check it against every need below.";
         }
         if (r.meetsAll()) return "Meets every need (" + needs.size() + " of " + needs.size() + ").";
-        List<String> missed = new ArrayList<>();
+        java.util.Set<String> missed = new java.util.LinkedHashSet<>();
         for (Need n : needs) if (mark(r, n) != Mark.MET) missed.add(n.key());
         return "Does not meet every need: misses " + String.join(", ", missed) + ". Not a usable answer as it stands.";
     }

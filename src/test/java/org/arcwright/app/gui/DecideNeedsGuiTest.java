@@ -95,9 +95,18 @@ class DecideNeedsGuiTest {
         for (int i = 1; i <= advice.recommendations().size(); i++) {
             int rank = i;
             String verdict = GuiSupport.onEdt(() -> verdictOf(find("card" + rank)));
-            assertThat(verdict).as("card " + rank).isNotNull().doesNotStartWith("Meets every need");
+            assertThat(verdict).as("card " + rank).isNotNull().doesNotStartWith("Meets every need")
+                    .doesNotContain("radius-ceiling, radius-ceiling");
         }
         shoot("decide-needs");
+        GuiSupport.onEdt(() -> window.frame().setSize(1600, 1000));
+        GuiSupport.settle(400);
+        GuiSupport.onEdt(() -> {
+            JComponent t = find("needsTable");
+            t.scrollRectToVisible(new java.awt.Rectangle(0, 0, t.getWidth(), t.getHeight()));
+        });
+        GuiSupport.settle(300);
+        GuiSupport.screenshot(window.frame(), "decide-needs-table-light-1600");
     }
 
     /**
