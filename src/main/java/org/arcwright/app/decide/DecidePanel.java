@@ -26,6 +26,9 @@ import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.AdviceSource;
+import org.arcwright.app.model.NeedsSummary;
+import org.arcwright.rules.Advice;
+import org.arcwright.rules.Need;
 import org.arcwright.app.model.AnswerDrafts;
 import org.arcwright.app.model.DecideForm;
 import org.arcwright.app.model.Numbers;
@@ -73,6 +76,8 @@ public final class DecidePanel extends JPanel {
     private final javax.swing.JButton keep = new javax.swing.JButton("Keep these answers");
     private final WrapLabel unkeptNote = new WrapLabel("", "Arcwright.help.font", "Arcwright.error.foreground");
     private transient List<Recommendation> shown = List.of();
+    /** The advice the cards came from; null when none is shown. */
+    private transient Advice shownAdvice;
     private String featureId;
     private DesignCase loadedCase;
     /** The answers as the worksheet holds them for the feature shown: anything else is not kept yet. */
@@ -294,7 +299,7 @@ public final class DecidePanel extends JPanel {
             leaveFeature();
             featureId = null;
             featureTitle.setText("No feature selected: add one in the Part panel");
-            setCards(List.of());
+            setCards(null);
             refreshKeep();
             return;
         }
@@ -446,14 +451,15 @@ public final class DecidePanel extends JPanel {
                     : "Fix the tolerance intent to see its limits.", "Label.font", "Arcwright.help.foreground"), "span 2, growx, wmin 10");
         } else {
             LimitsReport l = r.get();
+            String u = " " + form.units().symbol();
             figure("As drawn (ASME)", l.asme());
             figure("As drawn (ISO)", l.iso());
-            figure("Smallest radius", l.min() == null ? "open (MAX only)" : Numbers.fixed(l.min(), 4));
-            figure("Largest radius", l.max() == null ? "open (MIN only)" : Numbers.fixed(l.max(), 4));
+            figure("Smallest radius", l.min() == null ? "open (MAX only)" : Numbers.fixed(l.min(), 4) + u);
+            figure("Largest radius", l.max() == null ? "open (MIN only)" : Numbers.fixed(l.max(), 4) + u);
             if (l.crescent() != null) {
-                figure("Crescent width (bisector)", Numbers.fixed(l.crescent().width(), 4));
-                figure("Equal-bilateral profile", l.profileZone() == null ? "none (no nominal arc)" : Numbers.fixed(l.profileZone(), 4));
-                figure("Shortcut profile (2 × the larger deviation)", l.shortcutProfile() == null ? "none (no deviation)" : Numbers.fixed(l.shortcutProfile(), 4));
+                figure("Crescent width (bisector)", Numbers.fixed(l.crescent().width(), 4) + u);
+                figure("Equal-bilateral profile", l.profileZone() == null ? "none (no nominal arc)" : Numbers.fixed(l.profileZone(), 4) + u);
+                figure("Shortcut profile (2 × the larger deviation)", l.shortcutProfile() == null ? "none (no deviation)" : Numbers.fixed(l.shortcutProfile(), 4) + u);
             }
             for (String remark : l.remarks()) figures.add(new WrapLabel(remark, "Label.font", null), "span 2, growx, wmin 10, gaptop 4");
         }
@@ -470,6 +476,9 @@ public final class DecidePanel extends JPanel {
         v.setFont(Themes.font("Arcwright.figure.font").deriveFont(java.awt.Font.BOLD));
         figures.add(v, "top");
     }
+
+    /** The advice the cards show now; null when none. */
+    public Advice shownAdvice() { return shownAdvice; }
 
     /** The recommendations shown now, best first. */
     public List<Recommendation> shownRecommendations() { return shown; }
@@ -488,7 +497,7 @@ public final class DecidePanel extends JPanel {
         long g = ++generation;
         Optional<DesignCase> c = form.toCase();
         if (c.isEmpty()) {
-            setCards(List.of());
+            setCards(null);
             return;
         }
         AdviceSource source = advice;
@@ -499,12 +508,12 @@ public final class DecidePanel extends JPanel {
                 .whenComplete((list, error) -> SwingUtilities.invokeLater(() -> advised(g, list, error)));
     }
 
-    private record Advised(List<Recommendation> list, Map<Recommendation, java.awt.image.BufferedImage> frames) {}
+    private record Advised(Advice advice, Map<Recommendation, java.awt.image.BufferedImage> frames) {}
 
-    private static Advised withFrames(List<Recommendation> list,
+    private static Advised withFrames(Advice advice,
                                       java.util.function.Function<Recommendation, java.awt.image.BufferedImage> draw) {
         Map<Recommendation, java.awt.image.BufferedImage> images = new java.util.HashMap<>();
-        for (Recommendation r : list) {
+        for (Recommendation r : advice.recommendations()) {
             try {
                 java.awt.image.BufferedImage img = draw.apply(r);
                 if (img != null) images.put(r, img);
@@ -512,18 +521,18 @@ public final class DecidePanel extends JPanel {
                 // a frame that cannot be drawn is left out; the callout text still shows
             }
         }
-        return new Advised(list, images);
+        return new Advised(advice, images);
     }
 
     private void advised(long g, Advised a, Throwable error) {
         if (g != generation) return;
         if (error != null) {
             status.accept("Advice failed: " + error.getMessage());
-            setCards(List.of());
+            setCards(null);
             return;
         }
         frameImages = a.frames();
-        setCards(a.list());
+        setCards(a.advice());
     }
 
     /**
@@ -537,8 +546,9 @@ public final class DecidePanel extends JPanel {
     /** How far the recommendations are scrolled down, in pixels (tests: 0 shows the best card first). */
     public int resultsScrolledBy() { return resultsScroll.getViewport().getViewPosition().y; }
 
-    private void setCards(List<Recommendation> list) {
-        shown = List.copyOf(list);
+    private void setCards(Advice a) {
+        shownAdvice = a;
+        shown = a == null ? List.of() : a.recommendations();
         renderCards();
     }
 
@@ -553,10 +563,16 @@ public final class DecidePanel extends JPanel {
                     : "Answer the questions marked in red to see recommendations.", "Label.font", "Arcwright.help.foreground"),
                     "wmin 10");
         }
+        List<Need> needs = shownAdvice == null ? List.of() : shownAdvice.needs();
+        if (shownAdvice != null && !shown.isEmpty()) {
+            NeedsSummary summary = NeedsSummary.of(shownAdvice, shown);
+            if (summary.nothingMeets() || !summary.changes().isEmpty()) cards.add(new NothingMeetsBlock(summary), "wmin 10");
+            if (!summary.rows().isEmpty()) cards.add(new NeedsTableView(summary), "wmin 10");
+        }
         int rank = 1;
         for (Recommendation r : shown) {
             boolean isChosen = chosen != null && chosen.callout().equals(r.callout()) && chosen.ruleId().equals(r.ruleId());
-            cards.add(new RecommendationCard(rank++, r, form.standard(), frameImages.get(r), this::choose, this::copy, this::copyFrame, isChosen),
+            cards.add(new RecommendationCard(rank++, r, NeedsSummary.cardVerdict(r, needs), form.standard(), frameImages.get(r), this::choose, this::copy, this::copyFrame, isChosen),
                     "wmin 10");
         }
         cards.revalidate();

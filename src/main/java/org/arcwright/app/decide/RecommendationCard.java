@@ -18,7 +18,7 @@ import org.arcwright.tolerance.DrawingStyle;
 final class RecommendationCard extends Card {
     private static final long serialVersionUID = 1L;
 
-    RecommendationCard(int rank, Recommendation r, DrawingStyle style, java.awt.image.BufferedImage frame,
+    RecommendationCard(int rank, Recommendation r, String verdict, DrawingStyle style, java.awt.image.BufferedImage frame,
                        Consumer<Recommendation> onChoose,
                        Consumer<Recommendation> onCopy, Consumer<Recommendation> onCopyFrame, boolean chosen) {
         super(new MigLayout("insets 10 12 10 12, wrap 2, gap 6 3", "[][grow,fill]", ""), "card");
@@ -33,6 +33,13 @@ final class RecommendationCard extends Card {
                 r.demoted() ? "Arcwright.error.foreground" : "Arcwright.help.foreground");
         tag.setName("cardRule");
         add(tag, "span 2, growx, wmin 10");
+        if (!verdict.isEmpty()) {
+            boolean meets = Boolean.TRUE.equals(r.meetsAll());
+            if (!meets) add(new JLabel(Icons.get("caution")), "top");
+            WrapLabel v = new WrapLabel(verdict, "Label.font", meets ? "Arcwright.pass.foreground" : "Arcwright.fail.foreground");
+            v.setName("cardVerdict");
+            add(v, (meets ? "span 2, " : "") + "growx, wmin 10");
+        }
         if (frame != null) {
             FramePreview preview = new FramePreview(frame);
             preview.setName("cardFrame");

@@ -2,6 +2,7 @@ package org.arcwright.app.model;
 
 import java.util.List;
 import org.arcwright.model.DesignCase;
+import org.arcwright.rules.Advice;
 import org.arcwright.rules.Recommendation;
 
 /**
@@ -10,26 +11,27 @@ import org.arcwright.rules.Recommendation;
  */
 @FunctionalInterface
 public interface AdviceSource {
-    /** Recommendations for {@code c}, best first. */
-    List<Recommendation> advise(DesignCase c);
+    /** The advice for {@code c}: needs, design changes and recommendations, best first. */
+    Advice advise(DesignCase c);
 
     /**
      * The advisor's ranked recommendations, followed by the engineer's own tolerance intent as
      * written when no recommendation already proposes that callout.
      */
-    static AdviceSource advisor(java.util.function.Function<DesignCase, List<Recommendation>> advise, double angleDeg) {
+    static AdviceSource advisor(java.util.function.Function<DesignCase, Advice> advise, double angleDeg) {
         return c -> {
-            List<Recommendation> out = new java.util.ArrayList<>(advise.apply(c));
+            Advice a = advise.apply(c);
+            List<Recommendation> out = new java.util.ArrayList<>(a.recommendations());
             IntentCard.of(c, angleDeg).ifPresent(intent -> {
                 boolean proposed = out.stream().anyMatch(r -> r.callout().equals(intent.callout()));
                 if (!proposed) out.add(intent);
             });
-            return out;
+            return new Advice(a.designCase(), a.needs(), out, a.designChanges(), a.conflicts(), a.warnings());
         };
     }
 
     /** Only the engineer's own tolerance intent, as written. */
     static AdviceSource intentOnly(double angleDeg) {
-        return c -> IntentCard.of(c, angleDeg).map(List::of).orElse(List.of());
+        return c -> new Advice(c, IntentCard.of(c, angleDeg).map(List::of).orElse(List.of()), List.of(), List.of());
     }
 }

@@ -18,12 +18,14 @@ import org.arcwright.tolerance.CrescentZone;
  * @param upper the boundary away from the vertex
  * @param crescentWidth the true zone width on the bisector (not magnified), or NaN without a zone
  * @param magnification the factor applied to deviations from nominal
- * @param caption what is drawn, in words
+ * @param caption what is drawn, in words, with the units
  * @param spec the zone drawn, which {@link #place} follows so that measured points and the zone are
  *     magnified alike
+ * @param distortion empty, or in words how the magnification misdraws a boundary: a limit arc or band
+ *     edge magnified below radius zero is drawn as a sharp corner, which the part does not have
  */
 public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, double crescentWidth,
-                          double magnification, String caption, ZoneSpec spec) {
+                          double magnification, String caption, ZoneSpec spec, String distortion) {
 
     /** A point in drawing units. */
     public record Pt(double x, double y) {}
@@ -31,6 +33,12 @@ public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, doub
     private static final int ARC_STEPS = 72;
 
     public static ZonePicture of(ZoneSpec spec, double magnification) {
+        return of(spec, magnification, "");
+    }
+
+    /** The picture of {@code spec} at {@code magnification}, its figures in {@code units} (a symbol, e.g. mm). */
+    public static ZonePicture of(ZoneSpec spec, double magnification, String units) {
+        String u = units.isEmpty() ? "" : " " + units;
         if (!(magnification >= 1)) throw new IllegalArgumentException("magnification must be at least 1, got " + magnification);
         double th = Math.toRadians(spec.angleDeg());
         double r = spec.nominal();
@@ -40,8 +48,20 @@ public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, doub
             double lo = Math.max(1e-9, r + magnification * (a.min() - r));
             double hi = r + magnification * (a.max() - r);
             double w = CrescentZone.of(a.min(), Math.min(Math.max(r, a.min()), a.max()), a.max(), spec.angleDeg()).width();
-            String what = (a.controlled() ? "CR" : "R") + " limits " + Numbers.trim(a.min()) + " to " + Numbers.trim(a.max());
-            return new ZonePicture(nominal, contour(lo, th, reach), contour(hi, th, reach), w, magnification, what, spec);
+            String what = (a.controlled() ? "CR" : "R") + " limits " + Numbers.trim(a.min()) + " to " + Numbers.trim(a.max()) + u;
+            double drawn = r + magnification * (a.min() - r);
+            String distortion = "";
+            if (a.min() < r && drawn <= 1e-9 * r) {
+                // the magnified radius r + M(min - r) is zero or less: no arc is left to draw
+                distortion = "At ×" + Numbers.trim(magnification) + " the smaller limit arc R" + Numbers.trim(a.min()) + u
+                        + " would need a radius of " + Numbers.trim(r) + " + " + Numbers.trim(magnification) + " × ("
+                        + Numbers.trim(a.min()) + " − " + Numbers.trim(r) + ") = " + Numbers.fixed(drawn, 3) + u
+                        + ", so it is drawn as a sharp corner. The part has no sharp corner: its smallest radius is "
+                        + Numbers.trim(a.min()) + u + ". At ×" + Numbers.trim(maxArcMagnification(r, r - a.min()))
+                        + " or less the limit is drawn as an arc.";
+            }
+            return new ZonePicture(nominal, contour(lo, th, reach), contour(hi, th, reach), w, magnification, what, spec,
+                    distortion);
         }
         if (spec instanceof ZoneSpec.Band b) {
             double addMaterial = b.outward();
@@ -52,11 +72,27 @@ public record ZonePicture(List<Pt> nominal, List<Pt> lower, List<Pt> upper, doub
             double away = round ? removeMaterial : addMaterial;
             List<Pt> lower = offset(nominal, r, th, reach, magnification * towardVertex);
             List<Pt> upper = offset(nominal, r, th, reach, -magnification * away);
+            String distortion = "";
+            if (r - magnification * away <= 1e-9 * r) {
+                // the boundary on the centre side is the blend offset by M × its share of the zone toward the centre
+                distortion = "At ×" + Numbers.trim(magnification) + " the zone's boundary on the centre side of the blend"
+                        + " would need a radius of " + Numbers.trim(r) + " − " + Numbers.trim(magnification) + " × "
+                        + Numbers.trim(away) + " = " + Numbers.fixed(r - magnification * away, 3) + u
+                        + ", so it folds over and looks like a sharp corner. The zone itself is "
+                        + Numbers.trim(b.zone()) + u + " wide. At ×" + Numbers.trim(maxArcMagnification(r, away))
+                        + " or less it is drawn as an arc.";
+            }
             return new ZonePicture(nominal, lower, upper, b.zone(), magnification,
-                    "profile zone " + Numbers.trim(b.zone()) + (Math.abs(b.outward() - b.zone() / 2) > 1e-12
-                            ? " (" + Numbers.trim(b.outward()) + " add-material side)" : " equally disposed"), spec);
+                    "profile zone " + Numbers.trim(b.zone()) + u + (Math.abs(b.outward() - b.zone() / 2) > 1e-12
+                            ? " (" + Numbers.trim(b.outward()) + u + " add-material side)" : " equally disposed"), spec, distortion);
         }
-        return new ZonePicture(nominal, List.of(), List.of(), Double.NaN, magnification, "nominal only: no tolerance yet", spec);
+        return new ZonePicture(nominal, List.of(), List.of(), Double.NaN, magnification, "nominal only: no tolerance yet",
+                spec, "");
+    }
+
+    /** The largest whole magnification M at which an arc of radius r shrunk by M × shrink keeps a radius. */
+    private static double maxArcMagnification(double r, double shrink) {
+        return Math.max(1, Math.floor(r / shrink - 1e-9));
     }
 
     /**

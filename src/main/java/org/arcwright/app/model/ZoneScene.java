@@ -29,7 +29,7 @@ public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints meas
         double angle = points.map(MeasuredPoints::angleDeg).orElse(DEFAULT_ANGLE);
         ZoneSpec spec = feature.chosen() != null ? ZoneSpec.of(feature.designCase(), feature.chosen().callout(), angle)
                 : ZoneSpec.ofIntent(feature.designCase(), angle);
-        ZonePicture picture = ZonePicture.of(spec, magnification);
+        ZonePicture picture = ZonePicture.of(spec, magnification, feature.designCase().units().symbol());
         String heading = feature.id() + " · " + (feature.chosen() != null ? "chosen: " + feature.chosen().text()
                 : "not decided: showing the tolerance intent") + " · " + Numbers.trim(Math.round(angle * 10) / 10.0)
                 + "° corner";
@@ -45,6 +45,17 @@ public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints meas
         String mismatch = m.mismatch(spec, feature);
         if (!mismatch.isEmpty()) caption.append(" · ").append(mismatch);
         return new ZoneScene(picture, heading, m, placed, caption.toString());
+    }
+
+    /**
+     * Everything drawn, for fitting the view: the zone, the nominal, the shaded material and the
+     * measured points as placed, so that Fit never leaves a point outside the view.
+     */
+    public List<ZonePicture.Pt> extent() {
+        List<ZonePicture.Pt> all = new ArrayList<>(picture.allPoints());
+        all.addAll(picture.material(picture.spec().kind(), picture.spec().angleDeg()));
+        all.addAll(placed);
+        return all;
     }
 
     /** The tooltip of point {@code i} of {@link #measured()}: which point, its deviation and its excess. */

@@ -652,7 +652,7 @@ public final class MainWindow {
     }
 
     private void useAdvisor(Advisor a) {
-        decideTab.whenBuilt(p -> p.setAdviceSource(AdviceSource.advisor(c -> a.advise(c).recommendations(), 90)));
+        decideTab.whenBuilt(p -> p.setAdviceSource(AdviceSource.advisor(a::advise, 90)));
     }
 
     public NotesPanel notesPanel() { return notesPanel; }

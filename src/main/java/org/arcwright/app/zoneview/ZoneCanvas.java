@@ -108,8 +108,7 @@ final class ZoneCanvas extends JComponent {
 
     /** Part coordinates to screen: fit the drawing, then zoom and pan; y up. */
     private AffineTransform transform() {
-        List<ZonePicture.Pt> pts = new java.util.ArrayList<>(picture.allPoints());
-        pts.addAll(picture.material(kind, angle));
+        List<ZonePicture.Pt> pts = scene.extent();
         double minX = 0, minY = 0, maxX = 0, maxY = 0;
         for (ZonePicture.Pt p : pts) {
             minX = Math.min(minX, p.x());
@@ -260,19 +259,12 @@ final class ZoneCanvas extends JComponent {
             g2.setColor(Themes.color("Arcwright.zone.nominal"));
             g2.setStroke(new BasicStroke(1.8f, BasicStroke.CAP_ROUND, BasicStroke.JOIN_ROUND));
             g2.draw(t.createTransformedShape(path(picture.nominal(), false)));
-            if (scene != null && scene.measured() != null) paintPoints(g2, t);
-            g2.setFont(Themes.font("Arcwright.figure.font"));
-            g2.setColor(Themes.color("Label.foreground"));
-            int y = g2.getFontMetrics().getAscent() + 8;
-            if (scene != null && !scene.pointsCaption().isEmpty()) {
-                g2.drawString(scene.pointsCaption(), 10, y + 2 * g2.getFontMetrics().getHeight());
+            if (scene != null && scene.measured() != null) {
+                paintPoints(g2, t);
+                // the captions are labels above the canvas, so zoomed geometry never runs under words;
+                // only the legend is drawn here, on its own background
+                g2.setFont(Themes.font("Arcwright.figure.font"));
                 paintLegend(g2);
-            }
-            g2.drawString(picture.caption() + " · material shaded", 10, y);
-            if (!Double.isNaN(picture.crescentWidth())) {
-                g2.drawString("zone width on the bisector: " + Numbers.fixed(picture.crescentWidth(), 4) + " " + units
-                        + (picture.magnification() > 1 ? "  (deviations shown ×" + Numbers.trim(picture.magnification()) + ")" : ""),
-                        10, y + g2.getFontMetrics().getHeight());
             }
         } finally {
             g2.dispose();

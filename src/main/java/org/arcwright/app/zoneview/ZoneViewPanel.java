@@ -8,7 +8,10 @@ import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JSlider;
 import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.WorksheetSession;
+import org.arcwright.app.model.ZonePicture;
+import org.arcwright.app.widgets.WrapLabel;
 import org.arcwright.app.model.ZoneScene;
 import org.arcwright.worksheet.RadiusFeature;
 
@@ -26,9 +29,13 @@ public final class ZoneViewPanel extends JPanel {
     /** The feature and zone the slider was last set for. */
     private String framed = "";
     private final JLabel what = new JLabel();
+    private final WrapLabel caption = new WrapLabel("", "Label.font", null);
+    private final WrapLabel width = new WrapLabel("", "Label.font", null);
+    private final WrapLabel pointsCaption = new WrapLabel("", "Label.font", null);
+    private final WrapLabel distortion = new WrapLabel("", "Label.font", "Arcwright.fail.foreground");
 
     public ZoneViewPanel(WorksheetSession session) {
-        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[][][grow,fill]"));
+        super(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", ""));
         this.session = session;
         setName("zoneView");
         magnification.setName("magnification");
@@ -55,13 +62,21 @@ public final class ZoneViewPanel extends JPanel {
         add(what, "wmin 10");
         bar.add(new JLabel(), "");
         bar.add(new JLabel("Deviation magnification"));
-        bar.add(magnification, "w 14sp!");
+        bar.add(magnification, "wmin 5sp, w 14sp");
         bar.add(magnificationText, "w 3sp!");
         bar.add(in, "split 3");
         bar.add(out);
         bar.add(fit);
-        add(bar);
-        add(canvas);
+        add(bar, "wmin 10");
+        caption.setName("zoneCaption");
+        width.setName("zoneWidth");
+        pointsCaption.setName("zonePointsCaption");
+        distortion.setName("zoneDistortion");
+        add(caption, "wmin 10, hidemode 3");
+        add(width, "wmin 10, hidemode 3");
+        add(pointsCaption, "wmin 10, hidemode 3");
+        add(distortion, "wmin 10, hidemode 3");
+        add(canvas, "push, grow, wmin 10, hmin 10");
         session.listeners().add(this::redraw);
         redraw();
     }
@@ -83,6 +98,7 @@ public final class ZoneViewPanel extends JPanel {
         Optional<RadiusFeature> f = session.selected();
         if (f.isEmpty()) {
             what.setText("No feature selected");
+            captions(null, "mm");
             canvas.show(null, "mm", null);
             return;
         }
@@ -96,7 +112,32 @@ public final class ZoneViewPanel extends JPanel {
             return;
         }
         what.setText(scene.heading());
+        captions(scene, feature.designCase().units().symbol());
         canvas.show(scene, feature.designCase().units().symbol(), feature.designCase().kind());
+    }
+
+    /** The words about the drawing, above it rather than over it, with their units. */
+    private void captions(ZoneScene scene, String units) {
+        ZonePicture p = scene == null ? null : scene.picture();
+        set(caption, p == null ? "" : p.caption() + " · material shaded");
+        set(width, p == null || Double.isNaN(p.crescentWidth()) ? ""
+                : "Zone width on the bisector: " + Numbers.fixed(p.crescentWidth(), 4) + " " + units
+                + (p.magnification() > 1 ? " (deviations shown ×" + Numbers.trim(p.magnification()) + "; figures are true size)" : ""));
+        set(pointsCaption, scene == null ? "" : scene.pointsCaption());
+        set(distortion, p == null ? "" : p.distortion());
+    }
+
+    private static void set(WrapLabel l, String text) {
+        l.setText(text);
+        l.setVisible(!text.isEmpty());
+    }
+
+    /** The warning shown when the magnification misdraws a boundary; empty when none (tests). */
+    public String distortionWarning() { return distortion.isVisible() ? distortion.getText() : ""; }
+
+    /** The caption lines shown above the drawing (tests). */
+    public String captionText() {
+        return String.join("\n", caption.getText(), width.getText(), pointsCaption.getText());
     }
 
     /** How many measured points the view plots for the selected feature (tests). */

@@ -54,7 +54,7 @@ class DecideFlowGuiTest {
         GuiSupport.onEdt(() -> window.showTab(0));
         fixture.textBox("q.TOLERANCE").deleteText().enterText("R2 +0.3/-0.1");
         GuiSupport.settle(1500);
-        assertThat(GuiSupport.onEdt(() -> window.decidePanel().figuresText())).contains("1.9000").contains("2.3000");
+        assertThat(GuiSupport.onEdt(() -> window.decidePanel().figuresText())).contains("1.9000 mm").contains("2.3000 mm");
         java.util.List<org.arcwright.rules.Recommendation> shown =
                 GuiSupport.onEdt(() -> window.decidePanel().shownRecommendations());
         assertThat(shown).isNotEmpty();
