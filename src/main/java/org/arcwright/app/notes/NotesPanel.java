@@ -136,7 +136,7 @@ public final class NotesPanel extends JPanel {
         bottom.add(new JScrollPane(reader), "wmin 10, hmin 60");
         bottom.setMinimumSize(new Dimension(10, MIN_PART));
         bottom.setPreferredSize(new Dimension(PREFERRED_WIDTH, 2 * MIN_PART));
-        split.setName("notesSplit");
+        split.setName("notesListReaderSplit");
         split.setTopComponent(top);
         split.setBottomComponent(bottom);
         split.setResizeWeight(0.5);

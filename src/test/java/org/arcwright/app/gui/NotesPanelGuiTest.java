@@ -108,6 +108,9 @@ class NotesPanelGuiTest {
                     window.frame().validate();
                 });
                 GuiSupport.settle(400);
+                // the display applies the new size after the call; lay out again at the size it gave
+                GuiSupport.onEdt(() -> window.frame().validate());
+                GuiSupport.settle(200);
                 GuiSupport.screenshot(window.frame(), "notes-open-" + size[0] + "x" + size[1] + "-" + look);
             }
         }
@@ -153,6 +156,8 @@ class NotesPanelGuiTest {
         pane.okButton().click();
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.statusLine().message().startsWith("Saved note")), 20);
         GuiSupport.settle(500);
+        GuiSupport.onEdt(() -> window.frame().validate());
+        GuiSupport.settle(200);
         assertThat(visibleHeight("notesHits")).as("list height after a save").isGreaterThanOrEqualTo(90);
         assertThat(visibleHeight("notesReader")).as("reader height after a save").isGreaterThanOrEqualTo(100);
         String manifest = Files.readString(Files.walk(config).filter(p -> p.endsWith("pack.json")
