@@ -21,6 +21,12 @@ import org.arcwright.pack.PackManifest;
  * Decision record 0502 explains the choice.
  */
 public final class NotesPaths {
+    /** What a new personal pack.json says it holds. */
+    static final String PERSONAL_DESCRIPTION = "Your own practice notes (Markdown files in notes/, one per note id), "
+            + "written in the desktop Notes panel or with 'arcwright notes add'. Holds notes only: no rules and no "
+            + "templates. A note here replaces a built-in or team note only when it was saved as an override of that "
+            + "note (same id); new notes get ids of their own.";
+
     private final Map<String, String> env;
     private final Path home;
 
@@ -66,8 +72,7 @@ public final class NotesPaths {
         }
         Path manifest = dir.resolve("pack.json");
         if (!Files.exists(manifest)) {
-            new JsonFiles().writeAtomically(manifest, new PackManifest("Personal notes", "1",
-                    "Notes added with 'arcwright notes add'; they replace built-in and team notes with the same id.",
+            new JsonFiles().writeAtomically(manifest, new PackManifest("Personal notes", "1", PERSONAL_DESCRIPTION,
                     null, null));
         }
         return dir;

@@ -50,6 +50,7 @@ final class HitCell extends JComponent implements ListCellRenderer<NoteHit> {
         background = isSelected ? list.getSelectionBackground() : list.getBackground();
         foreground = isSelected ? list.getSelectionForeground() : list.getForeground();
         setFont(list.getFont());
+        setToolTipText(value == null ? null : value.title() + "  (" + value.pack() + ")");
         return this;
     }
 
@@ -73,8 +74,9 @@ final class HitCell extends JComponent implements ListCellRenderer<NoteHit> {
             int y = 4 + fm.getAscent();
             g2.setFont(base.deriveFont(Font.BOLD));
             g2.setColor(foreground);
-            g2.drawString(hit.title(), x, y);
-            int w = g2.getFontMetrics().stringWidth(hit.title());
+            String title = clipped(hit.title(), g2.getFontMetrics(), getWidth() - 2 * x);
+            g2.drawString(title, x, y);
+            int w = g2.getFontMetrics().stringWidth(title);
             g2.setFont(base.deriveFont(base.getSize2D() - 1));
             g2.setColor(selected ? foreground : Themes.color("Arcwright.help.foreground"));
             g2.drawString("  " + hit.pack(), x + w, y);
@@ -82,6 +84,15 @@ final class HitCell extends JComponent implements ListCellRenderer<NoteHit> {
         } finally {
             g2.dispose();
         }
+    }
+
+    /** {@code text} cut to {@code width} with an ellipsis; the tooltip carries the whole title. */
+    static String clipped(String text, FontMetrics fm, int width) {
+        if (fm.stringWidth(text) <= width) return text;
+        String ellipsis = "…";
+        int end = text.length();
+        while (end > 0 && fm.stringWidth(text.substring(0, end).stripTrailing() + ellipsis) > width) end--;
+        return text.substring(0, end).stripTrailing() + ellipsis;
     }
 
     private void paintSnippet(Graphics2D g2, Font font, int x, int top, int width) {

@@ -23,12 +23,27 @@ final class NoteEditor extends JPanel {
     private final JTextField author = new JTextField(30);
     private final JTextArea body = new JTextArea(12, 50);
 
-    NoteEditor(Note existing) {
+    /** An empty form for a new note, with the free id {@code freshId} filled in. */
+    static NoteEditor empty(String freshId) {
+        NoteEditor e = new NoteEditor(null);
+        e.id.setText(freshId);
+        return e;
+    }
+
+    /** A form over {@code existing} whose id cannot change (an override or an edit of one's own note). */
+    static NoteEditor over(Note existing) {
+        NoteEditor e = new NoteEditor(existing);
+        e.id.setEditable(false);
+        return e;
+    }
+
+    private NoteEditor(Note existing) {
         super(new MigLayout("insets 0, wrap 2", "[right][grow,fill]", ""));
         setName("noteEditor");
         id.setName("noteId");
         title.setName("noteTitle");
         body.setName("noteBody");
+        author.setName("noteAuthor");
         body.setLineWrap(true);
         body.setWrapStyleWord(true);
         if (existing != null) {

@@ -11,12 +11,14 @@ import java.util.function.Consumer;
 import javax.swing.DefaultListModel;
 import javax.swing.JButton;
 import javax.swing.JCheckBox;
+import javax.swing.JEditorPane;
+import javax.swing.JSplitPane;
+import java.awt.Dimension;
 import javax.swing.JLabel;
 import javax.swing.JList;
 import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
-import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 import javax.swing.Timer;
@@ -41,6 +43,9 @@ import org.arcwright.notes.SearchResult;
  */
 public final class NotesPanel extends JPanel {
     private static final long serialVersionUID = 1L;
+    /** The least height of the list part and of the reader part: each stays usable at 1024x700. */
+    private static final int MIN_PART = 150;
+    private static final int PREFERRED_WIDTH = 220;
     private static final List<NoteFacet> FACETS = List.of(NoteFacet.FUNCTION, NoteFacet.PROCESS, NoteFacet.STANDARD,
             NoteFacet.PACK);
     private final transient Executor background;
@@ -52,14 +57,32 @@ public final class NotesPanel extends JPanel {
     private final JList<NoteHit> list = new JList<>(hits);
     private final JPanel facets = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 0", "[grow,fill]", ""));
     private final JLabel count = new JLabel("Notes load after the window opens…");
-    private final JTextArea reader = new JTextArea();
+    private final JEditorPane reader = new JEditorPane();
     private final JButton write = new JButton("Write a note…", Icons.get("notes"));
+    private final JButton override = new JButton("Override this note…");
+    private final JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, true) {
+        private static final long serialVersionUID = 1L;
+
+        /** Keeps both parts at least MIN_PART high whenever the panel is laid out (after a search, a save, a resize). */
+        @Override
+        public void doLayout() {
+            super.doLayout();
+            int most = getHeight() - getDividerSize() - MIN_PART;
+            int at = getDividerLocation();
+            int kept = Math.max(MIN_PART, Math.min(at, most));
+            if (most >= MIN_PART && kept != at) {
+                setDividerLocation(kept);
+                super.doLayout();
+            }
+        }
+    };
+    private transient FiledNote shown;
     private final Timer debounce = new Timer(150, e -> searchNow());
     private boolean rebuildingFacets;
 
     /** @param searchThread a single thread for searches, so they run in order off the UI thread */
     public NotesPanel(ExecutorService searchThread, Executor background, Consumer<String> status) {
-        super(new MigLayout("insets 8, wrap 1, gap 4", "[grow,fill]", "[][][][grow 60,fill][][grow 40,fill]"));
+        super(new MigLayout("insets 8, wrap 1, gap 4", "[grow,fill]", "[][][][grow,fill]"));
         this.background = background;
         this.status = status;
         setName("notesPanel");
@@ -73,14 +96,19 @@ public final class NotesPanel extends JPanel {
         query.setToolTipText("Unavailable until the notes index has opened");
         write.setEnabled(false);
         write.setToolTipText("Unavailable until the notes index has opened");
+        write.setName("notesWrite");
         write.addActionListener(e -> writeNote());
+        override.setName("notesOverride");
+        override.setEnabled(false);
+        override.setToolTipText("Open a note to override it or edit it");
+        override.addActionListener(e -> overrideNote());
         count.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
         count.setName("notesCount");
         list.setCellRenderer(new HitCell());
         list.addListSelectionListener(e -> opened(e.getValueIsAdjusting()));
         reader.setEditable(false);
-        reader.setLineWrap(true);
-        reader.setWrapStyleWord(true);
+        reader.setContentType("text/html");
+        reader.putClientProperty(JEditorPane.HONOR_DISPLAY_PROPERTIES, Boolean.TRUE);
         facets.setOpaque(false);
         debounce.setRepeats(false);
         query.getDocument().addDocumentListener(new DocumentListener() {
@@ -94,9 +122,26 @@ public final class NotesPanel extends JPanel {
         add(write, "gapleft push");
         add(query, "wmin 10");
         add(count);
-        add(new JScrollPane(list), "wmin 10, hmin 10");
-        add(facets, "wmin 10");
-        add(new JScrollPane(reader), "wmin 10, hmin 10");
+        JScrollPane facetScroll = new JScrollPane(facets);
+        facetScroll.setBorder(null);
+        facetScroll.getVerticalScrollBar().setUnitIncrement(16);
+        JPanel top = new JPanel(new MigLayout("insets 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][]"));
+        top.add(new JScrollPane(list), "wmin 10, hmin 90");
+        top.add(facetScroll, "wmin 10, hmin 0, hmax 160");
+        top.setMinimumSize(new Dimension(10, MIN_PART));
+        // a long note or title must not widen the column: the panel's width comes from the window
+        top.setPreferredSize(new Dimension(PREFERRED_WIDTH, 2 * MIN_PART));
+        JPanel bottom = new JPanel(new MigLayout("insets 0, wrap 1, gap 4", "[grow,fill]", "[][grow,fill]"));
+        bottom.add(override, "growx 0, alignx right");
+        bottom.add(new JScrollPane(reader), "wmin 10, hmin 60");
+        bottom.setMinimumSize(new Dimension(10, MIN_PART));
+        bottom.setPreferredSize(new Dimension(PREFERRED_WIDTH, 2 * MIN_PART));
+        split.setName("notesListReaderSplit");
+        split.setTopComponent(top);
+        split.setBottomComponent(bottom);
+        split.setResizeWeight(0.5);
+        split.setBorder(null);
+        add(split, "wmin 10, hmin " + (2 * MIN_PART));
         this.search = null;
         this.searchThread = searchThread;
     }
@@ -178,15 +223,38 @@ public final class NotesPanel extends JPanel {
 
     private void read(FiledNote n) {
         if (n == null) return;
-        Note note = n.note();
-        reader.setText(note.title() + "\n" + String.join(", ", note.standards()) + " · " + n.pack() + "\n\n" + note.body());
+        shown = n;
+        reader.setText(NoteHtml.page(n));
         reader.setCaretPosition(0);
+        boolean own = NoteDrafts.purposeFor(n) == NoteDrafts.Purpose.EDIT;
+        override.setText(own ? "Edit my note…" : "Override this note…");
+        override.setToolTipText(own ? "Edit your own note '" + n.note().id() + "' in your personal pack"
+                : "Write your own version of '" + n.note().id() + "' (" + n.pack() + ") into your personal pack; it replaces this note for you");
+        override.setEnabled(store != null);
     }
 
+    /** The reader, for tests. */
+    public JEditorPane reader() { return reader; }
+
     private void writeNote() {
-        NoteEditor editor = new NoteEditor(list.getSelectedValue() == null || store == null ? null
-                : store.get(list.getSelectedValue().id()).map(FiledNote::note).orElse(null));
-        int answer = JOptionPane.showConfirmDialog(this, editor, "Practice note", JOptionPane.OK_CANCEL_OPTION,
+        if (store == null) return;
+        edit(NoteDrafts.Purpose.NEW, NoteEditor.empty(NoteDrafts.freshId(store::get)), "Write a new practice note", null);
+    }
+
+    private void overrideNote() {
+        FiledNote n = shown;
+        if (n == null || store == null) return;
+        NoteDrafts.Purpose purpose = NoteDrafts.purposeFor(n);
+        if (purpose == NoteDrafts.Purpose.EDIT) {
+            edit(purpose, NoteEditor.over(n.note()), "Edit my note '" + n.note().id() + "'", n.note().id());
+        } else {
+            edit(purpose, NoteEditor.over(NoteDrafts.overrideOf(n.note())),
+                    "Override '" + n.note().id() + "' (" + n.pack() + ") with my own note", n.note().id());
+        }
+    }
+
+    private void edit(NoteDrafts.Purpose purpose, NoteEditor editor, String heading, String opened) {
+        int answer = JOptionPane.showConfirmDialog(this, editor, heading, JOptionPane.OK_CANCEL_OPTION,
                 JOptionPane.PLAIN_MESSAGE);
         if (answer != JOptionPane.OK_OPTION) return;
         Note note;
@@ -194,6 +262,15 @@ public final class NotesPanel extends JPanel {
             note = editor.note(LocalDate.now());
         } catch (IllegalArgumentException e) {
             status.accept("Note not saved: " + e.getMessage());
+            JOptionPane.showMessageDialog(this, "Not saved yet: " + e.getMessage() + ".", heading, JOptionPane.WARNING_MESSAGE);
+            edit(purpose, editor, heading, opened);
+            return;
+        }
+        java.util.Optional<String> refused = NoteDrafts.refusal(purpose, note, store.get(note.id()), opened);
+        if (refused.isPresent()) {
+            status.accept("Note not saved: " + refused.get());
+            JOptionPane.showMessageDialog(this, "Not saved yet: " + refused.get() + ".", heading, JOptionPane.WARNING_MESSAGE);
+            edit(purpose, editor, heading, opened);
             return;
         }
         NoteLibrary s = store;
