@@ -220,7 +220,7 @@ public final class Inspector {
             double depth = -Math.min(ha, hb);
             String text = String.format(Locale.ROOT, "%s %s beyond surface %s (outside the sharp corner: no radius allows it) at %s",
                     fmt(depth), unit, ha < hb ? "a" : "b", where);
-            return new Worst(i, x, y, env.worstExcess(), "distance beyond surface", unit, text);
+            return new Worst(i, x, y, depth, "distance beyond surface", unit, text);
         }
         double e = env.worstExcess();
         double r = c.blendRadiusThrough(x, y);

@@ -180,6 +180,10 @@ class FittedSurfacesTest {
         InspectionResult r = inspector.inspect(Sections.request(SQUARE, 2, R, new PointSet(xs, ys, xs.length, "test")));
         assertThat(r.verdict()).isEqualTo(Verdict.FAIL);
         assertThat(r.worst().text()).startsWith("0.0009 mm beyond surface a").contains("point #39");
+        // the figure is the distance the text names, not the radius excess of the blend through the point
+        // (before: 0.0009 mm in words beside an excess of about 1.9 in the figures and the desktop)
+        assertThat(r.worst().measure()).isEqualTo("distance beyond surface");
+        assertThat(r.worst().excess()).isCloseTo(0.0009, within(1e-4));
     }
 
     @Property(tries = 25, seed = "15")

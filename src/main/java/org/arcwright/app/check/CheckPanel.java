@@ -402,9 +402,7 @@ public final class CheckPanel extends JPanel {
         StringBuilder sb = new StringBuilder();
         sb.append(r.request().points().size()).append(" points; lengths in").append(u).append('\n');
         if (r.worst() != null) {
-            sb.append("Worst point: (").append(fmt(r.worst().x())).append(", ").append(fmt(r.worst().y())).append(")").append(u)
-                    .append(", ").append(r.worst().excess() > 0 ? "beyond" : "within").append(" by ")
-                    .append(fmt(Math.abs(r.worst().excess()))).append(u).append(" (").append(r.worst().measure()).append(")\n");
+            sb.append("Worst: ").append(r.worst().text()).append("\n");
         }
         if (r.radius() != null) {
             sb.append("Radius envelope: ").append(length(r.radius().smallest(), u)).append(" to ")
