@@ -4,7 +4,6 @@ import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
-import java.io.UncheckedIOException;
 import java.nio.ByteBuffer;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
@@ -77,12 +76,8 @@ public final class InputFiles {
             return new BufferedReader(new InputStreamReader(rest, StandardCharsets.UTF_8.newDecoder()
                     .onMalformedInput(CodingErrorAction.REPORT)
                     .onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
-        } catch (NoSuchFileException e) {
-            throw problem(file, "file not found");
-        } catch (AccessDeniedException e) {
-            throw problem(file, "permission denied");
         } catch (IOException e) {
-            throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
+            throw readFailure(file, e);
         }
     }
 
@@ -143,13 +138,16 @@ public final class InputFiles {
                 throw problem(file, "the file grew past the limit of " + megabytes(maxBytes) + " while being read");
             }
             return bytes;
-        } catch (NoSuchFileException e) {
-            throw problem(file, "file not found");
-        } catch (AccessDeniedException e) {
-            throw problem(file, "permission denied");
         } catch (IOException e) {
-            throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
+            throw readFailure(file, e);
         }
+    }
+
+    /** A failed read as the user's problem with the file: missing, not permitted, or why it could not be read. */
+    private static InputProblem readFailure(Path file, IOException e) {
+        if (e instanceof NoSuchFileException) return problem(file, "file not found");
+        if (e instanceof AccessDeniedException) return problem(file, "permission denied");
+        return problem(file, "cannot be read: " + reason(e));
     }
 
     private static boolean startsWithBom(byte[] b) {

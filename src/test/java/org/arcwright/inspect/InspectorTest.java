@@ -149,7 +149,7 @@ class InspectorTest {
     void rigidlyMovingTheContourChangesNothingWhenAllFreedomsAreFree(
             @ForAll @DoubleRange(min = -0.2, max = 0.2) double dx, @ForAll @DoubleRange(min = -0.2, max = 0.2) double dy,
             @ForAll @DoubleRange(min = -3, max = 3) double turnDeg) {
-        // Analytic (issue 3 check): the floating zone fits the shape, not its place.
+        // Analytic: the floating zone fits the shape, not its place.
         PointSet pts = Sections.section(Sections.SQUARE, 2, 30, 150, 0.002, 5, f -> 0.01 * Math.sin(3 * Math.PI * f));
         var floating = new InspectionCallout.ProfileTolerance(ProfileZone.bilateral(0.05), Freedom.all(), false);
         double before = inspector.inspect(Sections.request(Sections.SQUARE, 2, floating, pts)).profile().requiredZone();
