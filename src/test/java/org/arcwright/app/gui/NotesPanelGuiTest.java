@@ -150,7 +150,7 @@ class NotesPanelGuiTest {
         assertThat(idText).isNotEqualTo("notch-sensitivity-neuber-peterson").startsWith("my-note-");
         assertThat(GuiSupport.onEdt(() -> title.getText())).isEmpty();
         assertThat(GuiSupport.onEdt(() -> author.getText())).isEmpty();
-        pane.cancelButton().click();
+        SwingUtilities.invokeLater(pane.cancelButton().target()::doClick);
     }
 
     @Test
@@ -168,7 +168,8 @@ class NotesPanelGuiTest {
         fixture.robot().finder().findByName(pane.target(), "noteAuthor", true);
         GuiSupport.onEdt(() -> ((JTextField) fixture.robot().finder().findByName(pane.target(), "noteAuthor", true))
                 .setText("Process engineer, Hollowmere Valves (invented)"));
-        pane.okButton().click();
+        // pressed like the other buttons here: a real click can land on another window left above the dialog
+        SwingUtilities.invokeLater(pane.okButton().target()::doClick);
         // the saved file is the effect to wait for: the status line may already show a later message
         // (the notes index finishing its first build on a fresh checkout)
         GuiSupport.waitFor(() -> savedOverride(), 60);
