@@ -3,6 +3,7 @@ package org.arcwright.app.gui;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.nio.file.Path;
+import javax.swing.SwingUtilities;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.fixture.FrameFixture;
@@ -46,7 +47,9 @@ class FeatureBoundViewsGuiTest {
     }
 
     private static void selectRow(int row) {
-        fixture.table("featureTable").selectRows(row);
+        var table = fixture.table("featureTable");
+        table.selectRows(row);
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> table.target().getSelectedRow()) == row, 10);
         GuiSupport.settle(100);
     }
 
@@ -189,15 +192,19 @@ class FeatureBoundViewsGuiTest {
         String edited = GuiSupport.onEdt(() -> window.practicePanel().editor().getText()).replaceFirst("\\{", "{\n  ");
         fixture.textBox("ruleText").setText(edited);
         fixture.list("ruleList").selectItem(1);
-        fixture.optionPane().requireMessage("The changes to rule " + firstRuleId() + " are not saved.")
-                .buttonWithText("Keep editing").click();
+        var keep = fixture.optionPane().requireMessage("The changes to rule " + firstRuleId() + " are not saved.")
+                .buttonWithText("Keep editing");
+        // pressed, not clicked: a real click can land on another window left above the dialog (a notice, a
+        // tooltip), which leaves the modal dialog open and every later step blocked behind it
+        SwingUtilities.invokeLater(keep.target()::doClick);
+        GuiSupport.waitFor(() -> !keep.target().isShowing(), 10);
         GuiSupport.settle(200);
         assertThat(fixture.list("ruleList").target().getSelectedIndex()).isZero();
         assertThat(GuiSupport.onEdt(() -> window.practicePanel().editor().getText())).isEqualTo(edited);
         fixture.list("ruleList").selectItem(1);
-        fixture.optionPane().buttonWithText("Discard the changes").click();
-        GuiSupport.settle(200);
-        assertThat(fixture.list("ruleList").target().getSelectedIndex()).isEqualTo(1);
+        var discard = fixture.optionPane().buttonWithText("Discard the changes");
+        SwingUtilities.invokeLater(discard.target()::doClick);
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> fixture.list("ruleList").target().getSelectedIndex()) == 1, 10);
         assertThat(GuiSupport.onEdt(() -> window.practicePanel().ruleEdited())).isFalse();
     }
 
