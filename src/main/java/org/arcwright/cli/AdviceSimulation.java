@@ -29,7 +29,6 @@ import org.arcwright.simulate.Simulation;
 import org.arcwright.simulate.SimulationResult;
 import org.arcwright.simulate.SimulationRunner;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
 import org.arcwright.zone.ProfileZone;
 import org.arcwright.zone.Point2;
 
@@ -184,7 +183,7 @@ final class AdviceSimulation {
     static Corner corner(DesignCase c) {
         double a = Math.toRadians(c.cornerAngleDegrees());
         return new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(Math.cos(a), Math.sin(a)),
-                c.kind() == BlendKind.ROUND ? CornerKind.ROUND : CornerKind.FILLET);
+                c.kind());
     }
 
     /** The inspection callout judging the same thing, or null when there is none. */

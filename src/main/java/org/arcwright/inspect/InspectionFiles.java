@@ -18,7 +18,7 @@ import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 import org.arcwright.zone.ProfileZone;
 import org.arcwright.zone.Segment;
@@ -135,9 +135,11 @@ public final class InspectionFiles {
                   @com.fasterxml.jackson.annotation.JsonProperty("kind") String kind) {
             Point2 v = point(vertex, "vertex"), a = point(legA, "legA"), b = point(legB, "legB");
             if (kind == null) throw new IllegalArgumentException("kind: missing; use round or fillet");
-            CornerKind k = CornerKind.fromKey(kind);
+            BlendKind k = null;
+            for (BlendKind each : BlendKind.values()) if (each.key().equalsIgnoreCase(kind)) k = each;
             if (k == null) throw new IllegalArgumentException("kind: unknown kind '" + kind + "'; use round or fillet");
-            this.corner = wrap(null, () -> new Corner(v, a, b, k));
+            BlendKind known = k;
+            this.corner = wrap(null, () -> new Corner(v, a, b, known));
         }
 
         /** The corner as read (also used by other files that share the corner shape). */

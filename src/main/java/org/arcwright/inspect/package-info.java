@@ -30,7 +30,7 @@
  * programmes with an active set of extreme points and a small dense simplex (ADR 0301); points are
  * kept in primitive arrays throughout, so a million-point section inspects in a 256 MB heap.
  *
- * <p>May import: the JDK, Jackson, {@code org.arcwright.io}, {@code org.arcwright.tolerance} and
+ * <p>May import: the JDK, Jackson, {@code org.arcwright.io}, {@code org.arcwright.model}, {@code org.arcwright.tolerance} and
  * {@code org.arcwright.zone}. Must not import Swing/AWT or print.
  */
 package org.arcwright.inspect;

@@ -2,6 +2,7 @@ package org.arcwright.zone;
 
 import java.util.List;
 import org.arcwright.io.InputProblem;
+import org.arcwright.model.BlendKind;
 
 /**
  * Two straight adjacent surfaces meeting at a vertex, seen in a section perpendicular to the edge,
@@ -20,7 +21,7 @@ import org.arcwright.io.InputProblem;
  * @param legB unit direction along the second surface, away from the vertex
  * @param kind which side the material is on
  */
-public record Corner(Point2 vertex, Point2 legA, Point2 legB, CornerKind kind) {
+public record Corner(Point2 vertex, Point2 legA, Point2 legB, BlendKind kind) {
     /** Smallest and largest included angle accepted, degrees: outside this the zone degenerates. */
     public static final double MIN_ANGLE_DEG = 1, MAX_ANGLE_DEG = 179;
 
@@ -108,7 +109,7 @@ public record Corner(Point2 vertex, Point2 legA, Point2 legB, CornerKind kind) {
         Point2 travelA = legA.times(-1);
         // Air is outside the angle for a round, inside it for a fillet.
         boolean leftIsInside = travelA.left().dot(inwardNormalA()) > 0;
-        Side air = (kind == CornerKind.FILLET) == leftIsInside ? Side.LEFT : Side.RIGHT;
+        Side air = (kind == BlendKind.FILLET) == leftIsInside ? Side.LEFT : Side.RIGHT;
         if (r == 0) {
             return new Contour(List.of(new Segment.Line(farA, vertex), new Segment.Line(vertex, farB)), air);
         }

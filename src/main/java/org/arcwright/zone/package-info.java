@@ -4,7 +4,7 @@
  * <h2>Main abstractions</h2>
  * <ul>
  *   <li>{@link org.arcwright.zone.Corner}: two adjacent surfaces meeting at a vertex, with the side the
- *       material is on ({@link org.arcwright.zone.CornerKind}); the family of blends tangent to both.</li>
+ *       material is on (a {@link org.arcwright.model.BlendKind}: the case vocabulary's round or fillet); the family of blends tangent to both.</li>
  *   <li>{@link org.arcwright.zone.Contour}: a chain of {@link org.arcwright.zone.Segment}s (lines and
  *       arcs) with an air side; signed deviation of points from it, positive toward air.</li>
  *   <li>{@link org.arcwright.zone.RadiusZone}: the zone of a radius tolerance (between the tangent
@@ -16,6 +16,6 @@
  * <p>All lengths are in the drawing's units; angles in radians unless a name says degrees. Points are
  * passed as primitive arrays so that a million of them cost 16 MB, not 50.
  *
- * <p>May import: the JDK and {@code org.arcwright.io}. Must not import Swing/AWT or print.
+ * <p>May import: the JDK, {@code org.arcwright.io} and {@code org.arcwright.model}. Must not import Swing/AWT or print.
  */
 package org.arcwright.zone;

@@ -3,7 +3,7 @@ package org.arcwright.bench;
 import java.util.Random;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 
 /**
@@ -12,7 +12,7 @@ import org.arcwright.zone.Point2;
  * three-lobed 0.004 mm form error and 0.001 mm noise, in order along the contour.
  */
 public final class SectionData {
-    public static final Corner CORNER = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+    public static final Corner CORNER = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.ROUND);
     public static final double NOMINAL = 2.0;
 
     private SectionData() {}

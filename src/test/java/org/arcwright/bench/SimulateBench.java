@@ -11,7 +11,7 @@ import org.arcwright.simulate.SimulationRunner;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 import org.arcwright.zone.ProfileZone;
 import org.openjdk.jmh.annotations.Benchmark;
@@ -53,7 +53,7 @@ public class SimulateBench {
 
     @Setup(Level.Trial)
     public void setUp() {
-        Corner corner = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.FILLET);
+        Corner corner = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.FILLET);
         ProcessModel model = new ProcessModel(Units.MM, corner, 2.0, new ProcessModel.Scatter(2.02, 0.05), 0.01,
                 new ProcessModel.Flats(0.1, 0.1, 0.2, 0.4, 0.6), new ProcessModel.Steps(0.05, 0.005, 0.03), 0.001, 200);
         InspectionCallout r = new InspectionCallout.RadiusLimits(RadiusKind.R, 1.9, 2.1);

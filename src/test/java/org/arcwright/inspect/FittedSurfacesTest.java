@@ -15,7 +15,7 @@ import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 import org.arcwright.zone.ProfileZone;
 import org.junit.jupiter.api.Test;
@@ -121,7 +121,7 @@ class FittedSurfacesTest {
         // 2(1 - cos 12°) = 0.0437 below the crown; the blend through the flat's middle has radius
         // about 2.044, inside R 1.9-2.1. CR forbids flats (ASME Y14.5-2018, from memory).
         Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(Math.cos(Math.PI / 3), Math.sin(Math.PI / 3)),
-                CornerKind.ROUND);
+                BlendKind.ROUND);
         double half = Math.toRadians(12), sweep = Math.toRadians(120);
         PointSet pts = Sections.section(c, 2, 300, 1200, 0.001, 3, f -> {
             double a = (f - 0.5) * sweep;

@@ -11,7 +11,7 @@ import net.jqwik.api.constraints.DoubleRange;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 import org.arcwright.zone.ProfileZone;
 import org.junit.jupiter.api.Test;
@@ -194,7 +194,7 @@ class InspectorTest {
 
     @Test
     void filletIsJudgedLikeARound() {
-        Corner f = new Corner(new Point2(4, 4), new Point2(-1, 0), new Point2(0, -1), CornerKind.FILLET);
+        Corner f = new Corner(new Point2(4, 4), new Point2(-1, 0), new Point2(0, -1), BlendKind.FILLET);
         PointSet pts = Sections.section(f, 2.05, 40, 300, 0, 2, x -> 0);
         InspectionResult cr = inspector.inspect(Sections.request(f, 2, CR, pts));
         assertThat(cr.pass()).isTrue();

@@ -3,14 +3,14 @@ package org.arcwright.inspect;
 import java.util.Random;
 import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 
 /** Synthetic measured sections for tests (fixed seeds; invented, not measured data). */
 final class Sections {
     private Sections() {}
 
-    static final Corner SQUARE = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+    static final Corner SQUARE = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.ROUND);
 
     /**
      * Leg A from 3r to the tangent point, the blend of radius {@code r} (with {@code shape} adding a

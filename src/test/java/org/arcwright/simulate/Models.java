@@ -6,13 +6,13 @@ import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 import org.arcwright.zone.ProfileZone;
 
 /** Invented process figures for the tests (not any shop's data). */
 final class Models {
-    static final Corner FILLET_90 = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.FILLET);
+    static final Corner FILLET_90 = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.FILLET);
 
     private Models() {}
 

@@ -8,6 +8,7 @@ import static org.assertj.core.api.Assertions.within;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.constraints.DoubleRange;
+import org.arcwright.model.BlendKind;
 
 /** Invariants of corners, blends and zones over random angles and radii (jqwik, apart from the JUnit tests so each engine reports its own). */
 class CornerAndZonesProperties {
@@ -16,7 +17,7 @@ class CornerAndZonesProperties {
                                                            @ForAll @DoubleRange(min = 0, max = 360) double turn,
                                                            @ForAll @DoubleRange(min = 0.01, max = 50) double r) {
         // Analytic: a point on the arc of radius r tangent to both legs lies on the blend of radius r.
-        Corner c = corner(angle, turn, CornerKind.ROUND);
+        Corner c = corner(angle, turn, BlendKind.ROUND);
         double[][] p = arc(c, r, 9);
         for (int i = 1; i < 8; i++) assertThat(c.blendRadiusThrough(p[0][i], p[1][i])).isCloseTo(r, within(1e-9 * r));
     }
@@ -26,7 +27,7 @@ class CornerAndZonesProperties {
                                                                     @ForAll @DoubleRange(min = 0, max = 360) double turn,
                                                                     @ForAll @DoubleRange(min = 0.1, max = 10) double r) {
         // Analytic: an exact arc of radius r tangent to both legs: smallest = largest = r.
-        for (CornerKind kind : CornerKind.values()) {
+        for (BlendKind kind : BlendKind.values()) {
             Corner c = corner(angle, turn, kind);
             double[][] p = arc(c, r, 101);
             RadiusEnvelope e = new RadiusZone(c, 0.8 * r, 1.2 * r, 1e-6).evaluate(p[0], p[1], 101);
@@ -42,7 +43,7 @@ class CornerAndZonesProperties {
             @ForAll @DoubleRange(min = 0.05, max = 0.95) double where, @ForAll @DoubleRange(min = -0.4, max = 0.4) double delta,
             @ForAll boolean fillet) {
         // Definition of the signed deviation (common practice): distance to the nominal, positive toward air.
-        Corner c = corner(angle, turn, fillet ? CornerKind.FILLET : CornerKind.ROUND);
+        Corner c = corner(angle, turn, fillet ? BlendKind.FILLET : BlendKind.ROUND);
         Contour nominal = c.contour(1, 6);
         double[] out = new double[4], w = new double[6];
         // a point of the nominal at the given fraction of its length, and its normal toward air

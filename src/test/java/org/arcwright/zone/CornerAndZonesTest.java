@@ -5,11 +5,12 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import org.arcwright.io.InputProblem;
+import org.arcwright.model.BlendKind;
 import org.junit.jupiter.api.Test;
 
 class CornerAndZonesTest {
 
-    static Corner corner(double angleDeg, double turnDeg, CornerKind kind) {
+    static Corner corner(double angleDeg, double turnDeg, BlendKind kind) {
         double t = Math.toRadians(turnDeg), a = Math.toRadians(angleDeg);
         return new Corner(new Point2(1.5, -2), new Point2(Math.cos(t), Math.sin(t)),
                 new Point2(Math.cos(t + a), Math.sin(t + a)), kind);
@@ -31,7 +32,7 @@ class CornerAndZonesTest {
 
     @Test
     void limitsOutsideTheEnvelopeFail() {
-        Corner c = corner(90, 0, CornerKind.ROUND);
+        Corner c = corner(90, 0, BlendKind.ROUND);
         double[][] p = arc(c, 2, 51);
         assertThat(new RadiusZone(c, 2.05, 2.5, 1e-6).evaluate(p[0], p[1], 51).pass()).isFalse();
         assertThat(new RadiusZone(c, 1.5, 1.95, 1e-6).evaluate(p[0], p[1], 51).pass()).isFalse();
@@ -40,7 +41,7 @@ class CornerAndZonesTest {
     @Test
     void pointOnALegAllowsEveryRadiusWhoseTangentPointIsBeyondIt() {
         // 90° corner: a point on leg A at 1.5 from the vertex lies on every contour with ρ·cot45° >= 1.5.
-        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.ROUND);
         RadiusEnvelope e = new RadiusZone(c, 1, 2, 1e-6).evaluate(new double[] {1.5}, new double[] {0}, 1);
         assertThat(e.largest()).isEqualTo(0);
         assertThat(e.smallest()).isCloseTo(1.5, within(1e-12));
@@ -49,7 +50,7 @@ class CornerAndZonesTest {
 
     @Test
     void pointBeyondTheSharpCornerFailsEveryRadius() {
-        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.ROUND);
         RadiusEnvelope e = new RadiusZone(c, 0, 2, 1e-6).evaluate(new double[] {1, 0.5}, new double[] {-0.01, 0.5}, 2);
         assertThat(e.outside()).isEqualTo(1);
         assertThat(Double.isNaN(e.smallest())).isTrue();
@@ -58,23 +59,23 @@ class CornerAndZonesTest {
 
     @Test
     void noPointWithinTheExtentIsBadInput() {
-        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.ROUND);
         assertThatThrownBy(() -> new RadiusZone(c, 1, 2, 1e-6).evaluate(new double[] {5, 6}, new double[] {0, 0}, 2))
                 .isInstanceOf(InputProblem.class).hasMessageContaining("extent");
     }
 
     @Test
     void parallelLegsAreBadInput() {
-        assertThatThrownBy(() -> new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(-1, 0), CornerKind.ROUND))
+        assertThatThrownBy(() -> new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(-1, 0), BlendKind.ROUND))
                 .isInstanceOf(InputProblem.class).hasMessageContaining("parallel");
-        assertThatThrownBy(() -> new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(2, 0), CornerKind.FILLET))
+        assertThatThrownBy(() -> new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(2, 0), BlendKind.FILLET))
                 .isInstanceOf(InputProblem.class).hasMessageContaining("parallel");
     }
 
     @Test
     void deviationIsPositiveTowardAirForRoundsAndFillets() {
         // A round's material is inside the angle, so the air is outside the arc; a fillet's the reverse.
-        Corner round = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.ROUND);
+        Corner round = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.ROUND);
         Contour cr = round.contour(1, 10);
         double[] out = new double[4], w = new double[5];
         double k = 1 - Math.sqrt(0.5); // the arc crosses the bisector at (k, k)
@@ -82,7 +83,7 @@ class CornerAndZonesTest {
         assertThat(out[0]).isCloseTo(0.01 * Math.sqrt(2), within(1e-12));
         cr.measure(5, -0.2, out, w);
         assertThat(out[0]).isCloseTo(0.2, within(1e-12));
-        Contour cf = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), CornerKind.FILLET).contour(1, 10);
+        Contour cf = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.FILLET).contour(1, 10);
         cf.measure(k - 0.01, k - 0.01, out, w);
         assertThat(out[0]).isCloseTo(-0.01 * Math.sqrt(2), within(1e-12));
         cf.measure(5, 0.3, out, w);

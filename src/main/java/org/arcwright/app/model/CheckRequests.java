@@ -28,7 +28,6 @@ import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.worksheet.InspectionRecord;
 import org.arcwright.worksheet.RadiusFeature;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
 import org.arcwright.zone.Point2;
 import org.arcwright.zone.ProfileZone;
 
@@ -79,7 +78,7 @@ public final class CheckRequests {
             return new Frame(new Point2(x, y), new Point2(Math.cos(a), Math.sin(a)), new Point2(Math.cos(b), Math.sin(b)));
         }
 
-        Corner corner(CornerKind kind) { return new Corner(vertex, legA, legB, kind); }
+        Corner corner(BlendKind kind) { return new Corner(vertex, legA, legB, kind); }
     }
 
     /** What became of an attempt to check a file for the selected feature: a closed family. */
@@ -147,7 +146,7 @@ public final class CheckRequests {
                     + ". Check it from the command line (arcwright inspect).");
         }
         Nominal.CornerBlend blend = (Nominal.CornerBlend) fromFile.nominal();
-        CornerKind kind = cornerKind(c.kind());
+        BlendKind kind = c.kind();
         List<String> mismatches = new ArrayList<>();
         if (Math.abs(blend.radius() - c.nominalRadius()) > SAME_NOMINAL * Math.max(1, c.nominalRadius())) {
             mismatches.add("The file's nominal radius is " + num(blend.radius()) + " " + c.units().symbol() + "; "
@@ -165,7 +164,7 @@ public final class CheckRequests {
 
     /** Points judged against the feature's chosen callout, at the corner the frame places. */
     public static Ready forFeature(RadiusFeature f, PointSet points, Frame frame) {
-        Corner corner = frame.corner(cornerKind(f.designCase().kind()));
+        Corner corner = frame.corner(f.designCase().kind());
         InspectionRequest req = new InspectionRequest(f.designCase().units(),
                 new Nominal.CornerBlend(corner, f.designCase().nominalRadius()), callout(f), points,
                 f.designCase().units().resolution() * 1000, Double.NaN, true);
@@ -193,7 +192,6 @@ public final class CheckRequests {
         return null;
     }
 
-    private static CornerKind cornerKind(BlendKind k) { return k == BlendKind.ROUND ? CornerKind.ROUND : CornerKind.FILLET; }
 
     /** The feature's chosen callout as the inspection core states it. */
     static InspectionCallout callout(RadiusFeature f) {

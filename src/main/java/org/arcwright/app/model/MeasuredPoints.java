@@ -13,7 +13,6 @@ import org.arcwright.inspect.Registration;
 import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
 import org.arcwright.zone.Point2;
 
 /**
@@ -123,7 +122,7 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
             ZonePicture.Pt p = frame.toView(x, y);
             out.add(new Point(i, p.x(), p.y(), excess, grade(excess, band)));
         }
-        BlendKind kind = corner.kind() == CornerKind.ROUND ? BlendKind.ROUND : BlendKind.FILLET;
+        BlendKind kind = corner.kind();
         return Optional.of(new MeasuredPoints(out, n, corner.includedAngleDeg(), kind, cb.radius(), q.callout(), band, source));
     }
 

@@ -17,7 +17,7 @@ import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.RadiusFeature;
 import org.arcwright.zone.Corner;
-import org.arcwright.zone.CornerKind;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 import org.junit.jupiter.api.Test;
 
@@ -148,7 +148,7 @@ class MeasuredPointsTest {
 
     @Test
     void anInspectionCornerInAnyPlaceIsMovedRigidlyIntoTheView() {
-        Corner corner = new Corner(new Point2(5, 3), new Point2(0, 1), new Point2(-1, 0), CornerKind.ROUND);
+        Corner corner = new Corner(new Point2(5, 3), new Point2(0, 1), new Point2(-1, 0), BlendKind.ROUND);
         InspectionRequest q = new InspectionRequest(Units.MM, new Nominal.CornerBlend(corner, 2),
                 new InspectionCallout.RadiusLimits(RadiusKind.R, 1.8, 2.2),
                 PointSet.of(new double[][] {{5, 5}, {4, 3}, {5 - 0.5, 3 + 0.5}}), 0.001, Double.NaN, false);
