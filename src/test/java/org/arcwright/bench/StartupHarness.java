@@ -37,7 +37,9 @@ import java.util.stream.Stream;
  * {@code xvfb-run -a -s "-screen 0 1600x1000x24" java -Dstartup.jdks=/usr/lib/jvm/java-17-openjdk-amd64,/usr/lib/jvm/temurin-25-jdk-amd64
  * -cp target/test-classes org.arcwright.bench.StartupHarness 7}. Argument: runs per configuration
  * (default 7). {@code startup.jdks}: comma-separated JDK homes (default: the JDK running the harness).
- * {@code startup.flags} replaces the JVM options for every child, to try others side by side. Each
+ * {@code startup.flags} replaces the JVM options for every child, to try others side by side.
+ * {@code startup.trainMillis} keeps the AOT training run's window open that much longer after the
+ * Decide form (packs, notes index), closer to the user's session that {@code ./arcwright} records. Each
  * Arcwright run uses a fresh config directory, so it takes the first-run path with the demo worksheet.
  */
 public final class StartupHarness {
@@ -142,6 +144,7 @@ public final class StartupHarness {
         List<String> quiet = List.of("-Xlog:aot=off", "-Xlog:cds=off");
         List<String> record = new ArrayList<>(List.of("-XX:AOTMode=record", "-XX:AOTConfiguration=" + conf));
         record.addAll(quiet);
+        record.add("-D" + StartupProbe.LINGER_PROPERTY + "=" + Integer.getInteger("startup.trainMillis", 0));
         time(jdk, record, s, "exit", bench);
         List<String> create = new ArrayList<>(List.of(jdk.java()));
         create.addAll(flags());
