@@ -36,7 +36,8 @@ import java.util.stream.Stream;
  * <p>Run on a display after {@code mvn -B -o -q package -DskipTests && mvn -B -o -q test-compile}:
  * {@code xvfb-run -a -s "-screen 0 1600x1000x24" java -Dstartup.jdks=/usr/lib/jvm/java-17-openjdk-amd64,/usr/lib/jvm/temurin-25-jdk-amd64
  * -cp target/test-classes org.arcwright.bench.StartupHarness 7}. Argument: runs per configuration
- * (default 7). {@code startup.jdks}: comma-separated JDK homes (default: the JDK running the harness).
+ * (default 7). {@code startup.jdks}: comma-separated JDK homes (default: the JDK running the harness);
+ * a home that is not there is left out with a line saying so.
  * {@code startup.flags} replaces the JVM options for every child, to try others side by side.
  * {@code startup.trainMillis} keeps the AOT training run's window open that much longer after the
  * Decide form (packs, notes index), closer to the user's session that {@code ./arcwright} records. Each
@@ -62,7 +63,12 @@ public final class StartupHarness {
 
         List<Config> configs = new ArrayList<>();
         for (String h : homes.split(",")) {
-            Jdk jdk = Jdk.at(Path.of(h.trim()));
+            Path home = Path.of(h.trim());
+            if (!Files.isRegularFile(home.resolve("release"))) {
+                System.out.printf(Locale.ROOT, "%s: no JDK there (no release file), left out%n", home);
+                continue;
+            }
+            Jdk jdk = Jdk.at(home);
             System.out.printf(Locale.ROOT, "%s: training runs (load %s)%n", jdk.name(), loadAverage());
             for (Subject s : List.of(bare, app)) {
                 configs.add(new Config(jdk, s, jdk.aot() ? "with AOT cache (as ./arcwright)" : "with CDS archive (as ./arcwright)",
@@ -70,6 +76,7 @@ public final class StartupHarness {
                 configs.add(new Config(jdk, s, jdk.aot() ? "without AOT cache" : "JDK default CDS only", jdk.plainFlags()));
             }
         }
+        if (configs.isEmpty()) throw new IllegalArgumentException("no JDK to time in startup.jdks=" + homes);
         Map<Config, List<Sample>> samples = new LinkedHashMap<>();
         configs.forEach(c -> samples.put(c, new ArrayList<>()));
         System.out.printf(Locale.ROOT, "timed runs: load average at start %s%n", loadAverage());
