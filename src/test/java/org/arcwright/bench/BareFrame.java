@@ -17,7 +17,7 @@ public final class BareFrame {
     private BareFrame() {}
 
     public static void main(String[] args) {
-        boolean exit = "exit".equals(System.getProperty("arcwright.startupProbe"));
+        boolean exit = "exit".equals(System.getProperty(StartupProbe.PROBE_PROPERTY));
         SwingUtilities.invokeLater(() -> {
             JFrame f = new JFrame("Bare frame");
             f.setDefaultCloseOperation(WindowConstants.EXIT_ON_CLOSE);
@@ -33,8 +33,8 @@ public final class BareFrame {
                     painted = true;
                     String cpu = " cpu=" + ProcessHandle.current().info().totalCpuDuration()
                             .map(java.time.Duration::toMillis).orElse(-1L);
-                    System.out.println("arcwright-window-usable" + cpu);
-                    System.out.println("arcwright-window-complete" + cpu);
+                    System.out.println(StartupProbe.USABLE_MARKER + cpu);
+                    System.out.println(StartupProbe.COMPLETE_MARKER + cpu);
                     System.out.flush();
                     if (exit) SwingUtilities.invokeLater(() -> System.exit(0));
                 }
