@@ -79,7 +79,12 @@ final class PacksPage extends JPanel {
     /** Shows the packs as they loaded, and the settings' folders as they are now. */
     void packsLoaded(PackStack stack) {
         inForce.clear();
-        for (String line : TeamPacks.summary(stack).lines()) inForce.addElement(line);
+        TeamPacks.Summary summary = TeamPacks.summary(stack);
+        for (String line : summary.lines()) inForce.addElement(line);
+        if (lastMessage.endsWith("reloading the packs…")) {
+            say(lastMessage.substring(0, lastMessage.length() - "reloading the packs…".length()) + "the packs reloaded. "
+                    + summary.text() + ".", stack.problems().isEmpty() ? "Arcwright.pass.foreground" : "Arcwright.error.foreground");
+        }
         showFolders();
     }
 

@@ -111,7 +111,7 @@ public final class PracticeEditorPanel extends JPanel {
                                Runnable reloadRules, TeamPackSettings teamPacks) {
         super(new MigLayout("insets 0, fill", "[grow,fill]", "[grow,fill]"));
         this.session = Objects.requireNonNull(session, "session");
-        JPanel rulesPage = new JPanel(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[][grow 70,fill][grow 30,fill][]"));
+        JPanel rulesPage = new JPanel(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[][grow,fill][]"));
         this.json = Objects.requireNonNull(json, "json");
         this.background = Objects.requireNonNull(background, "background");
         this.personalPack = Objects.requireNonNull(personalPack, "personalPack");
@@ -135,7 +135,12 @@ public final class PracticeEditorPanel extends JPanel {
             @Override
             public java.awt.Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
                 RuleBook.Entry e = (RuleBook.Entry) v;
-                return super.getListCellRendererComponent(l, e.rule().id() + "   (" + e.pack() + ")", i, s, f);
+                // the pack only where it is not the built-in one, so the ids stay readable in a narrow list
+                String where = e.layer() == PackLayer.BUILT_IN ? "" : "   (" + e.pack()
+                        + (e.replaces() == null ? "" : ", overrides " + lowerWord(e.replaces())) + ")";
+                java.awt.Component c = super.getListCellRendererComponent(l, e.rule().id() + where, i, s, f);
+                setToolTipText(e.describe());
+                return c;
             }
         });
         list.addListSelectionListener(e -> selected(e.getValueIsAdjusting()));
@@ -152,6 +157,10 @@ public final class PracticeEditorPanel extends JPanel {
         ruleViews.addTab("JSON", new JScrollPane(editor));
         ruleViews.setToolTipTextAt(0, "The rule field by field");
         ruleViews.setToolTipTextAt(1, "The rule as saved in its pack file (advanced); the form follows it");
+        JTable table = new JTable(results);
+        table.setName("exampleResults");
+        ruleViews.addTab("Examples run", new JScrollPane(table));
+        ruleViews.setToolTipTextAt(2, "What Run examples found: each example of the pack, and the rule that came first");
         verdict.setName("ruleVerdict");
         JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][]"));
         right.add(ruleViews, "wmin 10, hmin 10");
@@ -161,22 +170,18 @@ public final class PracticeEditorPanel extends JPanel {
         actions.add(run);
         right.add(actions, "left, growx 0, wmin 10");
         JScrollPane ruleScroll = new JScrollPane(list);
-        // Long rule ids must not push the editor and its buttons off the page: the list starts narrow.
-        ruleScroll.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(280),
+        // Long rule ids must not push the form off the page: the list starts narrow, and folds away with the arrows.
+        ruleScroll.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(230),
                 ruleScroll.getPreferredSize().height));
         ruleScroll.setMinimumSize(new java.awt.Dimension(0, 0));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, ruleScroll, right);
-        split.setResizeWeight(0.3);
+        split.setResizeWeight(0.25);
+        split.setOneTouchExpandable(true);
         split.setBorder(null);
         rulesPage.add(toolbar(newRule, deleteRule, revertRule), "wmin 10");
-        rulesPage.add(split, "wmin 10, hmin 10, h 60%");
-        JTable table = new JTable(results);
-        table.setName("exampleResults");
-        table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 6));
-        rulesPage.add(new JScrollPane(table), "wmin 10, hmin 10, h 25%");
-        rulesPage.add(new WrapLabel("Edits are checked as you type and saved only when they read. A built-in rule is saved as "
-                + "an override in your personal pack, and Revert brings the built-in one back; a new rule is saved in your "
-                + "personal pack. The rules reload after each save.",
+        rulesPage.add(split, "wmin 10, hmin 10");
+        rulesPage.add(new WrapLabel("Checked as you type, saved only when it reads. The built-in pack never changes: saving a "
+                + "built-in rule writes your override into your personal pack, and Revert brings the built-in one back.",
                 "Label.font", "Arcwright.help.foreground"), "wmin 10");
         newRule.setName("ruleNew");
         deleteRule.setName("ruleDelete");
@@ -232,19 +237,32 @@ public final class PracticeEditorPanel extends JPanel {
         centre.add(templateSave, "left, growx 0, wmin 10");
         TemplateFieldsView fields = new TemplateFieldsView(this::insertField);
         fields.setMinimumSize(new java.awt.Dimension(0, 0));
-        fields.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(220), 10));
-        JSplitPane inner = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, centre, fields);
-        inner.setName("templateFieldsSplit");
-        inner.setResizeWeight(1);
-        inner.setOneTouchExpandable(true);
-        inner.setBorder(null);
         JScrollPane listScroll = new JScrollPane(templateList);
-        // wide enough for a template name and the pack it comes from
-        listScroll.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(200), 10));
         listScroll.setMinimumSize(new java.awt.Dimension(0, 0));
-        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, listScroll, inner);
+        // the templates above the fields they may use, so the text and its preview keep the width
+        JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, listScroll, fields);
+        left.setName("templateFieldsSplit");
+        left.setResizeWeight(0.3);
+        left.setBorder(null);
+        left.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(220), 10));
+        left.setMinimumSize(new java.awt.Dimension(0, 0));
+        JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, centre);
         split.setResizeWeight(0.2);
+        split.setOneTouchExpandable(true);
         split.setBorder(null);
+        templateList.setCellRenderer(new javax.swing.DefaultListCellRenderer() {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public java.awt.Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
+                TemplatePreview.Entry e = (TemplatePreview.Entry) v;
+                String where = e.layer() == PackLayer.BUILT_IN ? "" : "   (" + e.pack()
+                        + (e.isOverride() ? ", overrides " + lowerWord(e.replaces()) : "") + ")";
+                java.awt.Component c = super.getListCellRendererComponent(l, e.name() + where, i, s, f);
+                setToolTipText(e.name() + " from " + e.pack() + ": " + e.file());
+                return c;
+            }
+        });
         newTemplate.setName("templateNew");
         deleteTemplate.setName("templateDelete");
         revertTemplate.setName("templateRevert");
@@ -256,9 +274,8 @@ public final class PracticeEditorPanel extends JPanel {
         JPanel page = new JPanel(new MigLayout("insets 8, wrap 1, gap 6", "[grow,fill]", "[][grow,fill][]"));
         page.add(toolbar(newTemplate, deleteTemplate, revertTemplate), "wmin 10");
         page.add(split, "wmin 10, hmin 10");
-        page.add(new WrapLabel("The note below is filled for the selected feature (or the whole part) as you type; "
-                + "a template is saved only when it checks. A built-in template is saved as an override of the same name in "
-                + "your personal pack, and Revert brings the built-in one back; the packs reload after each save.",
+        page.add(new WrapLabel("Filled for the selected feature (or the whole part) as you type, saved only when it checks. "
+                + "Saving a built-in template writes your override into your personal pack; Revert brings the built-in one back.",
                 "Label.font", "Arcwright.help.foreground"), "wmin 10");
         return page;
     }
@@ -297,7 +314,7 @@ public final class PracticeEditorPanel extends JPanel {
             shownTemplate = e;
             templateOpened = text;
             boolean builtIn = e.layer() == PackLayer.BUILT_IN;
-            templateSave.setText(builtIn ? "Save as an override in my personal pack" : "Save");
+            templateSave.setText(builtIn ? "Save as my override" : "Save");
             loading = true;
             templateText.setText(text);
             templateText.setCaretPosition(0);
@@ -402,7 +419,7 @@ public final class PracticeEditorPanel extends JPanel {
                 PackLayer.PERSONAL);
         templateOpened = "";
         reselect(templateList, null);
-        templateSave.setText("Save as a new template in my personal pack");
+        templateSave.setText("Save the new template");
         loading = true;
         templateText.setText(TemplateSaver.skeleton());
         templateText.setCaretPosition(0);
@@ -687,7 +704,7 @@ public final class PracticeEditorPanel extends JPanel {
         run.setEnabled(advisor != null);
         run.setToolTipText("Run every example of pack '" + e.pack() + "' against the advisor");
         boolean builtIn = e.layer() == PackLayer.BUILT_IN;
-        save.setText(builtIn ? "Save as an override in my personal pack" : "Save");
+        save.setText(builtIn ? "Save as my override" : "Save");
         ruleButtons();
         showVerdict();
     }
@@ -710,7 +727,7 @@ public final class PracticeEditorPanel extends JPanel {
         form.show(text);
         formProblem = null;
         ruleViews.setSelectedIndex(0);
-        save.setText("Save as a new rule in my personal pack");
+        save.setText("Save the new rule");
         run.setEnabled(false);
         run.setToolTipText("Unavailable: save the new rule first; its examples then run with the personal pack's");
         ruleButtons();
@@ -907,6 +924,7 @@ public final class PracticeEditorPanel extends JPanel {
 
     private void ran(PackCheck.Report r, Throwable err) {
         run.setEnabled(true);
+        ruleViews.setSelectedIndex(2);
         results.setRowCount(0);
         if (err != null) {
             verdict.show("The examples could not run: " + err.getMessage(), "Arcwright.error.foreground");

@@ -34,24 +34,26 @@ final class RuleFormView extends JScrollPane {
     RuleFormView(BiConsumer<RuleForm.Field, String> edited) {
         this.edited = edited;
         ScrollablePanel form = new ScrollablePanel(new MigLayout("insets 6 4 6 4, wrap 2, gapy 3", "[right][grow,fill]"));
-        form.add(state, "span 2, growx, wmin 10");
+        form.add(state, "span 2, growx, wmin 10, hidemode 3");
         state.setName("ruleFormState");
-        line(form, RuleForm.Field.ID, new JTextField(), "lower-case letters, digits, dots and hyphens; unique across the packs");
-        line(form, RuleForm.Field.SUMMARY, new JTextField(), "one line: what the rule recommends, and for which corners");
-        line(form, RuleForm.Field.WEIGHT, new JTextField(6), "1 to 1000; higher ranks first (built-in: 95 to 80 for "
+        line(form, RuleForm.Field.ID, new JTextField(), null, "lower-case letters, digits, dots and hyphens; unique across the packs");
+        line(form, RuleForm.Field.SUMMARY, new JTextField(), null, "one line: what the rule recommends, and for which corners");
+        line(form, RuleForm.Field.WEIGHT, new JTextField(6), null, "1 to 1000, higher ranks first (built-in: 95 to 80 for "
                 + "function-specific controls, 70 to 55 general practice)");
-        line(form, RuleForm.Field.WHEN, area(3), "conditions that must all hold, one a line: fact: value, e.g. "
-                + "function: sealing, loading: [\"static\",\"fatigue\"], nominalRadiusMm: {\"min\":0.5}; none: always");
-        line(form, RuleForm.Field.RECOMMEND, area(3), "callout: general, radius, controlled-radius, profile or "
-                + "composite-profile; then size, datums, extent, tiers… one a line");
-        line(form, RuleForm.Field.BECAUSE, area(3), "the reasoning, one sentence a line, in the words you would use "
-                + "with a colleague");
-        line(form, RuleForm.Field.CAUTIONS, area(2), "what to watch, one a line");
-        line(form, RuleForm.Field.REFERENCES, area(2), "standards and handbooks by clause topic, one a line "
+        line(form, RuleForm.Field.WHEN, area(3), "all must hold; fact: value, one a line",
+                "conditions that must all hold, one a line: fact: value, e.g. function: sealing, "
+                + "loading: [\"static\",\"fatigue\"], nominalRadiusMm: {\"min\":0.5}; no line: every case");
+        line(form, RuleForm.Field.RECOMMEND, area(3), "callout, then size, datums, extent…",
+                "callout: general, radius, controlled-radius, profile or composite-profile; then size, datums, extent, tiers… "
+                + "one a line");
+        line(form, RuleForm.Field.BECAUSE, area(3), "one sentence a line", "the reasoning, one sentence a line, in the words "
+                + "you would use with a colleague");
+        line(form, RuleForm.Field.CAUTIONS, area(2), null, "what to watch, one a line");
+        line(form, RuleForm.Field.REFERENCES, area(2), null, "standards and handbooks by clause topic, one a line "
                 + "(never copied text)");
-        line(form, RuleForm.Field.NOTE_TAGS, new JTextField(), "tags of practice notes to link, separated by commas");
-        line(form, RuleForm.Field.EXAMPLES, area(6), "self-tests as JSON: [{\"name\", \"case\", \"expect\"}, …]; "
-                + "Run examples checks them");
+        line(form, RuleForm.Field.NOTE_TAGS, new JTextField(), null, "tags of practice notes to link, separated by commas");
+        line(form, RuleForm.Field.EXAMPLES, area(6), "self-tests, JSON", "self-tests as JSON: [{\"name\", \"case\", "
+                + "\"expect\"}, …]; Run examples checks them");
         setViewportView(form);
         setBorder(null);
         getVerticalScrollBar().setUnitIncrement(16);
@@ -65,7 +67,12 @@ final class RuleFormView extends JScrollPane {
         return a;
     }
 
-    private void line(ScrollablePanel form, RuleForm.Field f, JTextComponent c, String help) {
+    /**
+     * Adds field {@code f}: its label, the control, a short hint under it when given (the
+     * conditions and recommendation have a syntax to learn), and the full help as its tooltip and
+     * placeholder.
+     */
+    private void line(ScrollablePanel form, RuleForm.Field f, JTextComponent c, String hint, String help) {
         JLabel label = new JLabel(f.label());
         label.setLabelFor(c);
         c.setName("ruleForm." + f.key());
@@ -87,8 +94,8 @@ final class RuleFormView extends JScrollPane {
         } else {
             form.add(c, "wmin 10");
         }
-        WrapLabel hint = new WrapLabel(help, "small.font", "Arcwright.help.foreground");
-        form.add(hint, "skip 1, wmin 10, gapbottom 4");
+        if (c instanceof JTextField) c.putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT, help);
+        if (hint != null) form.add(new WrapLabel(hint, "small.font", "Arcwright.help.foreground"), "skip 1, wmin 10");
     }
 
     private void changed(RuleForm.Field f) {
@@ -101,6 +108,7 @@ final class RuleFormView extends JScrollPane {
         if (form.isEmpty()) {
             state.show("The JSON does not read as a rule object, so the form cannot show it: fix it on the JSON tab "
                     + "(the message below says where).", "Arcwright.error.foreground");
+            state.setVisible(true);
             controls.values().forEach(c -> c.setEnabled(false));
             return;
         }
@@ -117,7 +125,7 @@ final class RuleFormView extends JScrollPane {
         } finally {
             filling = false;
         }
-        state.show("Edit the fields; the JSON tab shows the same rule as it is saved.", "Arcwright.help.foreground");
+        state.setVisible(false);
     }
 
     /** Outlines the field {@code problem} is about, clearing the others. */
