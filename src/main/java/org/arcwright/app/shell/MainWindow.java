@@ -106,6 +106,8 @@ public final class MainWindow {
     private boolean packsRequested;
     /** True when the team packs changed: the notes index reopens over the new packs after the reload. */
     private boolean reopenNotes;
+    /** True when the team packs changed while the packs were first loading. */
+    private boolean reloadWhenLoaded;
 
     /**
      * The worksheet the window opens with, read before the window is built (off the event thread).
@@ -586,7 +588,12 @@ public final class MainWindow {
     private void changeTeamPacks(List<String> folders) {
         updateSettings(settings.withPacks(folders, settings.personalPack()));
         reopenNotes = true;
-        reloadRulesInBackground();
+        // while the first load is still running, it read the old list: reload once it is done
+        if (core == null) {
+            reloadWhenLoaded = true;
+        } else {
+            reloadRulesInBackground();
+        }
     }
 
     /**
@@ -653,7 +660,13 @@ public final class MainWindow {
             decideTab.whenBuilt(p -> p.setFrames((r, ink) -> loaded.frames().image(r.callout(), decideForm.standard(),
                     decideForm.units(), 110, ink)));
             actions.refresh();
-            openNotesInBackground(packs);
+            if (reloadWhenLoaded) {
+                reloadWhenLoaded = false;
+                reloadRulesInBackground();
+            } else {
+                reopenNotes = false;
+                openNotesInBackground(packs);
+            }
             if (!packs.problems().isEmpty()) {
                 notice.show("A practice pack could not be opened: " + packs.problems().get(0).getMessage(), "OK", null, null, null);
             }
