@@ -382,6 +382,7 @@ public final class MainWindow {
             if (keys[i].equals("alt 7")) catalog.add(Command.always("view.notes", "Go to Notes", "View", "alt 6", this::focusNotes));
             catalog.add(Command.always("view.tab" + i, "Go to " + tabs[i], "View", keys[i], () -> showTab(tab)));
         }
+        catalog.add(Command.always("view.packs", "Practice packs in force and team packs…", "View", null, this::showPacks));
         catalog.add(Command.always("view.finder", "Find a command", "View", "ctrl K", this::openFinder));
         catalog.add(Command.always("view.toggleTheme", "Switch light/dark look", "View", "ctrl alt T", this::toggleTheme));
         catalog.add(Command.always("view.light", "Light look", "View", null, () -> setTheme(ThemeChoice.LIGHT)));
@@ -626,6 +627,12 @@ public final class MainWindow {
                 openNotesInBackground(packs);
             }
         }));
+    }
+
+    /** Opens the Practice editor's Packs page, where the team packs are chosen. */
+    private void showPacks() {
+        showTab(4);
+        practiceTab.whenBuilt(p -> p.showPage("Packs"));
     }
 
     /** Says in the status line which packs are in force; the tooltip names each, lowest layer first. */

@@ -263,7 +263,11 @@ class PracticeEditorGuiTest {
                 + "\"summary\": \"Kestrel cover rounds\", \"when\": {\"function\": \"cosmetic\", \"process\": \"cast\"}, "
                 + "\"recommend\": {\"callout\": \"general\"}, \"weight\": 30, \"because\": [\"Invented for the test.\"]}]}");
         Path notAPack = Files.createDirectories(config.resolve("just-a-folder"));
-        GuiSupport.onEdt(() -> panel().showPage("Packs"));
+        // found where a user looks for settings: a View command (and so the command finder) opens the page
+        GuiSupport.onEdt(() -> panel().showPage("Rules"));
+        GuiSupport.onEdt(() -> window.action("view.packs").actionPerformed(
+                new java.awt.event.ActionEvent(window.frame(), java.awt.event.ActionEvent.ACTION_PERFORMED, "packs")));
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> fixture.button("teamPackAdd").target().isShowing()), 10);
         press("teamPackAdd");
         chooseFolder(notAPack);
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> panel().packsMessage()).startsWith("Not added"), 10);
