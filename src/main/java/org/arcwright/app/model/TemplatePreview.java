@@ -26,14 +26,26 @@ public final class TemplatePreview {
      * One template of the stack, after later layers replaced earlier ones of the same name.
      *
      * @param layer the layer of the pack that supplies it: a built-in one cannot be written back
+     * @param replaces the name of the lower pack whose template of the same name this one replaces, or null
      */
-    public record Entry(String name, String pack, Path file, PackLayer layer) {
+    public record Entry(String name, String pack, Path file, PackLayer layer, String replaces) {
+        public Entry(String name, String pack, Path file, PackLayer layer) { this(name, pack, file, layer, null); }
+
+        /** True when deleting this template's file brings back a lower pack's template of the same name. */
+        public boolean isOverride() { return replaces != null; }
+
         @Override
         public String toString() { return name + "   (" + pack + ")"; }
     }
 
-    /** The outcome of a fill: the note, or what is wrong with the template text. */
-    public record Result(String note, InputProblem problem) {
+    /**
+     * The outcome of a fill: the note, or what is wrong with the template text.
+     *
+     * @param notice what the preview stands for when it is not the selected feature's note, or null
+     */
+    public record Result(String note, InputProblem problem, String notice) {
+        public Result(String note, InputProblem problem) { this(note, problem, null); }
+
         public boolean ok() { return problem == null; }
     }
 
@@ -43,7 +55,8 @@ public final class TemplatePreview {
         for (PackStack.PackFile f : stack.files(NoteTemplates.FOLDER, NoteTemplates.EXTENSION)) {
             String file = f.path().getFileName().toString();
             String name = file.substring(0, file.length() - NoteTemplates.EXTENSION.length());
-            byName.put(name, new Entry(name, f.pack().name(), f.path(), f.pack().layer()));
+            Entry lower = byName.get(name);
+            byName.put(name, new Entry(name, f.pack().name(), f.path(), f.pack().layer(), lower == null ? null : lower.pack()));
         }
         return new ArrayList<>(byName.values());
     }
@@ -56,7 +69,10 @@ public final class TemplatePreview {
 
     /**
      * Fills {@code text} as template {@code e} for {@code worksheet}: a per-feature template for
-     * {@code feature} (the selected one), a part template for the whole part.
+     * {@code feature} (the selected one), a part template for the whole part. An undecided feature
+     * gets no note, as in the sheet and {@code arcwright drawing-note}, which fill a per-feature
+     * template for decided features only: the preview says so and shows the note of the first
+     * decided feature instead, never a line with an empty callout.
      */
     public static Result fill(Entry e, String text, PartWorksheet worksheet, RadiusFeature feature) {
         try {
@@ -64,7 +80,16 @@ public final class TemplatePreview {
             NoteContext ctx = new NoteContext(worksheet, "Arcwright preview");
             if (!t.perFeature()) return new Result(t.fill(ctx.forPart()), null);
             if (feature == null) return new Result("Select a feature to see this per-feature note filled.", null);
-            return new Result(t.fill(ctx.forFeature(feature)), null);
+            if (feature.chosen() != null) return new Result(t.fill(ctx.forFeature(feature)), null);
+            String skipped = feature.id() + " has no callout chosen yet, so no note is filled for it (the sheet and "
+                    + "arcwright drawing-note fill this template for decided features only)";
+            for (RadiusFeature f : worksheet.features()) {
+                if (f.chosen() != null) {
+                    return new Result(t.fill(ctx.forFeature(f)), null, skipped + "; shown for " + f.id()
+                            + ", the first decided feature.");
+                }
+            }
+            return new Result("No callout chosen yet: no feature of this part has a note to fill.", null, skipped + ".");
         } catch (InputProblem p) {
             return new Result(null, p);
         } catch (RuntimeException ex) {

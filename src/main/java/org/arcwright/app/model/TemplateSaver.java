@@ -22,6 +22,11 @@ import org.arcwright.templates.NoteTemplates;
  * names line and field, as a pack load would); a file changed on disk since it was opened is not
  * written over; an override never replaces a personal template the list did not show; every write
  * is atomic.
+ *
+ * <p>A new template starts as a draft ({@link #skeleton}) under a name no template in force has
+ * ({@link #freshName}) and reaches the disk only when saved ({@link #saveNew}), in the personal
+ * pack. {@link #remove} deletes a team or personal template's file; when it replaced a lower pack's
+ * template of the same name, that one is in force again (a revert). The built-in pack is never written.
  */
 public final class TemplateSaver {
     private TemplateSaver() {}
@@ -53,6 +58,79 @@ public final class TemplateSaver {
                     "the file changed on disk since it was opened; nothing was written: select the template again to see it");
         }
         AtomicFiles.writeString(target, text);
+        return target;
+    }
+
+    /** The first name of the form {@code my-note-N} that is not in {@code taken}. */
+    public static String freshName(java.util.Collection<String> taken) {
+        for (int n = 1; ; n++) {
+            String name = "my-note-" + n;
+            if (!taken.contains(name)) return name;
+        }
+    }
+
+    /** The text a new template starts from: a comment saying how it fills, and one per-feature line. */
+    public static String skeleton() {
+        return "{{! Filled once for each decided feature, because it names feature. Numbers arrive formatted: "
+                + "place them, never add digits. }}\n"
+                + "{{feature.id}} {{feature.label}}: {{feature.callout}}\n";
+    }
+
+    /**
+     * Writes new template {@code name} into {@code personalPack}'s {@code templates/} folder.
+     *
+     * @param inForce the names of the templates in force: a new template may not take one (saving over
+     *     a built-in one is an override, made by editing that template)
+     * @throws InputProblem when the name is not usable or taken, the text does not check, or the file exists
+     */
+    public static Path saveNew(String name, String text, Path personalPack, java.util.Collection<String> inForce) {
+        if (name == null || !name.matches("[a-z0-9][a-z0-9-]*")) {
+            throw InputProblem.ofField("name", "a template name is lower-case letters, digits and hyphens, e.g. "
+                    + "bench-note; got '" + name + "'");
+        }
+        if (inForce.contains(name)) {
+            throw InputProblem.ofField("name", "a template '" + name + "' is in force already; choose another name, "
+                    + "or edit that template");
+        }
+        Path target = overrideFile(personalPack, name);
+        NoteTemplate.compile(name, text, target.toString(), "personal");
+        Path manifest = personalPack.resolve("pack.json");
+        if (!Files.isRegularFile(manifest)) {
+            throw new InputProblem(manifest.toString(), 0, 0, null, "the personal pack has no pack.json; nothing was written");
+        }
+        if (Files.exists(target)) {
+            throw new InputProblem(target.toString(), 0, 0, "name", "this file exists already and was not written over; "
+                    + "choose another name");
+        }
+        AtomicFiles.writeString(target, text);
+        return target;
+    }
+
+    /**
+     * Deletes team or personal template {@code e}'s file, so that a lower pack's template of the same
+     * name (if any) is in force again after a reload.
+     *
+     * @param asOpened the text when it was opened: a file changed on disk since is not deleted
+     * @throws InputProblem for a built-in template, or a file moved or changed since it was opened
+     */
+    public static Path remove(TemplatePreview.Entry e, String asOpened) {
+        if (e.layer() == PackLayer.BUILT_IN) {
+            throw new InputProblem(e.file().toString(), 0, 0, null, "template '" + e.name()
+                    + "' is built in and cannot be deleted");
+        }
+        Path target = e.file();
+        if (!Files.isRegularFile(target)) {
+            throw new InputProblem(target.toString(), 0, 0, null, "the file was moved or deleted since it was opened: reload the packs");
+        }
+        if (asOpened != null && !read(target).equals(asOpened)) {
+            throw new InputProblem(target.toString(), 0, 0, null,
+                    "the file changed on disk since it was opened; nothing was deleted: select the template again to see it");
+        }
+        try {
+            Files.delete(target);
+        } catch (IOException ex) {
+            throw new UncheckedIOException("could not delete " + target + ": " + ex.getMessage(), ex);
+        }
         return target;
     }
 

@@ -39,6 +39,7 @@ import org.arcwright.app.model.CommandCatalog;
 import org.arcwright.app.model.DecideForm;
 import org.arcwright.app.model.RecoveryStore;
 import org.arcwright.app.model.Settings;
+import org.arcwright.app.model.TeamPacks;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.part.PartPanel;
@@ -48,6 +49,7 @@ import org.arcwright.app.model.CheckRequests;
 import org.arcwright.app.notes.NotesPanel;
 import org.arcwright.app.stress.StressViewPanel;
 import org.arcwright.app.practice.PracticeEditorPanel;
+import org.arcwright.app.practice.TeamPackSettings;
 import org.arcwright.notes.NotesPaths;
 import org.arcwright.notes.NotesStore;
 import org.arcwright.render.FrameRenderer;
@@ -102,6 +104,10 @@ public final class MainWindow {
     private NotesStore notesStore;
     private Loaded core;
     private boolean packsRequested;
+    /** True when the team packs changed: the notes index reopens over the new packs after the reload. */
+    private boolean reopenNotes;
+    /** True when the team packs changed while the packs were first loading. */
+    private boolean reloadWhenLoaded;
 
     /**
      * The worksheet the window opens with, read before the window is built (off the event thread).
@@ -215,7 +221,13 @@ public final class MainWindow {
                 services.clock(), status::show));
         work.addTab("Check", Icons.get("check"), checkTab, "Conformance of a measured contour (Alt+5)");
         practiceTab = new LazyTab<>("practiceEditor", () -> new PracticeEditorPanel(services.json(), services.background(),
-                session, this::personalPackPath, this::reloadRulesInBackground));
+                session, this::personalPackPath, this::reloadRulesInBackground, new TeamPackSettings() {
+                    @Override
+                    public List<String> teamPacks() { return settings.teamPacks(); }
+
+                    @Override
+                    public void setTeamPacks(List<String> folders) { changeTeamPacks(folders); }
+                }));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
         work.addTab("Simulation", null, new LazyTab<>("simulation", () -> new org.arcwright.app.simulate.SimulationView(null)),
                 "What each candidate callout lets through, on a simulated population of parts");
@@ -370,6 +382,7 @@ public final class MainWindow {
             if (keys[i].equals("alt 7")) catalog.add(Command.always("view.notes", "Go to Notes", "View", "alt 6", this::focusNotes));
             catalog.add(Command.always("view.tab" + i, "Go to " + tabs[i], "View", keys[i], () -> showTab(tab)));
         }
+        catalog.add(Command.always("view.packs", "Practice packs in force and team packs…", "View", null, this::showPacks));
         catalog.add(Command.always("view.finder", "Find a command", "View", "ctrl K", this::openFinder));
         catalog.add(Command.always("view.toggleTheme", "Switch light/dark look", "View", "ctrl alt T", this::toggleTheme));
         catalog.add(Command.always("view.light", "Light look", "View", null, () -> setTheme(ThemeChoice.LIGHT)));
@@ -570,6 +583,21 @@ public final class MainWindow {
     }
 
     /**
+     * The team packs chosen on the Practice editor's Packs page: written to the settings (atomically,
+     * on the settings thread), then the packs, rules, templates and the notes index follow them.
+     */
+    private void changeTeamPacks(List<String> folders) {
+        updateSettings(settings.withPacks(folders, settings.personalPack()));
+        reopenNotes = true;
+        // while the first load is still running, it read the old list: reload once it is done
+        if (core == null) {
+            reloadWhenLoaded = true;
+        } else {
+            reloadRulesInBackground();
+        }
+    }
+
+    /**
      * Reloads the packs, the rule book and the note templates off the UI thread after a rule or a
      * template was saved, then gives the advisor (with the open notes, if any) and the Practice
      * editor the new book.
@@ -591,9 +619,30 @@ public final class MainWindow {
             Advisor advisor = advisorWithNotes(loaded.practice());
             useAdvisor(advisor);
             practiceTab.whenBuilt(p -> p.setRules(packs, loaded.practice().book(), advisor));
+            showPacks(packs);
             status.done("Packs reloaded: " + loaded.practice().book().entries().size() + " rules and "
                     + loaded.practice().templates().names().size() + " note templates in force");
+            if (reopenNotes) {
+                reopenNotes = false;
+                openNotesInBackground(packs);
+            }
         }));
+    }
+
+    /** Opens the Practice editor's Packs page, where the team packs are chosen. */
+    private void showPacks() {
+        showTab(4);
+        practiceTab.whenBuilt(p -> p.showPage("Packs"));
+    }
+
+    /** Says in the status line which packs are in force; the tooltip names each, lowest layer first. */
+    private void showPacks(PackStack stack) {
+        TeamPacks.Summary summary = TeamPacks.summary(stack);
+        StringBuilder lines = new StringBuilder("<html>");
+        for (String line : summary.lines()) {
+            lines.append(line.replace("&", "&amp;").replace("<", "&lt;")).append("<br>");
+        }
+        status.packs(summary.text(), lines.append("</html>").toString());
     }
 
     /** The advisor over {@code practice}, with the notes linked once the notes index is open. */
@@ -608,9 +657,7 @@ public final class MainWindow {
         try {
             Loaded loaded = worker.get();
             packs = loaded.practice().packs();
-            StringBuilder names = new StringBuilder();
-            packs.packs().forEach(p -> names.append(p.name()).append(" (").append(p.layer()).append(")<br>"));
-            status.packs("Packs: " + packs.packs().size(), "<html>" + names + "</html>");
+            showPacks(packs);
             status.done("Ready");
             stressTab.whenBuilt(p -> p.setMechanics(loaded.practice().mechanics()));
             core = loaded;
@@ -620,7 +667,13 @@ public final class MainWindow {
             decideTab.whenBuilt(p -> p.setFrames((r, ink) -> loaded.frames().image(r.callout(), decideForm.standard(),
                     decideForm.units(), 110, ink)));
             actions.refresh();
-            openNotesInBackground(packs);
+            if (reloadWhenLoaded) {
+                reloadWhenLoaded = false;
+                reloadRulesInBackground();
+            } else {
+                reopenNotes = false;
+                openNotesInBackground(packs);
+            }
             if (!packs.problems().isEmpty()) {
                 notice.show("A practice pack could not be opened: " + packs.problems().get(0).getMessage(), "OK", null, null, null);
             }
@@ -645,8 +698,11 @@ public final class MainWindow {
             status.done("The notes index could not open: " + (e.getCause() != null ? e.getCause().getMessage() : e.getMessage()));
             return;
         }
+        NotesStore before = notesStore;
         notesStore = store;
         notesPanel.setStore(store);
+        // after a change of team packs: the old index closes once the searches queued on it have run
+        if (before != null && before != store) services.search().execute(before::close);
         if (core != null) useAdvisor(advisorWithNotes(core.practice()));
         status.done("Ready · " + store.report().describe());
     }

@@ -49,6 +49,9 @@ public final class StatusLine extends JPanel {
 
     public void feature(String text) { feature.setText(text); }
 
+    /** What the status line says about the packs in force. */
+    public String packsText() { return packs.getText(); }
+
     public void packs(String text, String tooltip) {
         packs.setText(text);
         packs.setToolTipText(tooltip);

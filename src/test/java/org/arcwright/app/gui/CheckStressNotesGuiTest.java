@@ -177,6 +177,7 @@ class CheckStressNotesGuiTest {
         assertThat(GuiSupport.onEdt(() -> window.practicePanel().verdictText())).startsWith("The rule reads");
         String broken = original.replaceFirst("\"weight\"\\s*:\\s*\\d+", "\"weight\" : \"heavy\"");
         assertThat(broken).isNotEqualTo(original);
+        fixture.tabbedPane("ruleViews").selectTab("JSON");
         fixture.textBox("ruleText").setText(broken);
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().verdictText()).contains("weight"), 10);
         assertThat(GuiSupport.onEdt(() -> window.practicePanel().verdictText())).matches("(?s).*line \\d+.*|(?s).*:\\d+:\\d+.*");

@@ -190,6 +190,8 @@ class FeatureBoundViewsGuiTest {
         fixture.list("ruleList").selectItem(0);
         GuiSupport.settle(200);
         String edited = GuiSupport.onEdt(() -> window.practicePanel().editor().getText()).replaceFirst("\\{", "{\n  ");
+        // the JSON stays available as the advanced tab beside the form
+        fixture.tabbedPane("ruleViews").selectTab("JSON");
         fixture.textBox("ruleText").setText(edited);
         fixture.list("ruleList").selectItem(1);
         var keep = fixture.optionPane().requireMessage("The changes to rule " + firstRuleId() + " are not saved.")

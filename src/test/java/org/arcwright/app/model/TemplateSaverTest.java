@@ -118,4 +118,41 @@ class TemplateSaverTest {
                 .isInstanceOf(InputProblem.class).hasMessageContaining("already has");
         assertThat(Files.readString(existing)).isEqualTo("ALREADY MINE {{feature.id}}\n");
     }
+
+    @Test
+    void aNewTemplateIsWrittenOnlyWhenSavedUnderAFreeName(@TempDir Path dir) throws Exception {
+        Path personal = NotesPaths.ensurePersonalPack(dir.resolve("personal"));
+        List<String> names = TemplatePreview.entries(PackStack.load(List.of(), personal)).stream()
+                .map(TemplatePreview.Entry::name).toList();
+        String name = TemplateSaver.freshName(names);
+        assertThat(name).isEqualTo("my-note-1");
+        Path written = TemplateSaver.saveNew(name, TemplateSaver.skeleton(), personal, names);
+        assertThat(Files.readString(written)).isEqualTo(TemplateSaver.skeleton());
+        TemplatePreview.Entry mine = named(PackStack.load(List.of(), personal), name);
+        assertThat(mine.layer()).isEqualTo(PackLayer.PERSONAL);
+        assertThat(mine.isOverride()).isFalse();
+        assertThatThrownBy(() -> TemplateSaver.saveNew("callout-note", "X\n", personal, names))
+                .isInstanceOfSatisfying(InputProblem.class, p -> assertThat(p.field()).isEqualTo("name"));
+        assertThatThrownBy(() -> TemplateSaver.saveNew("Bad Name", "X\n", personal, names))
+                .isInstanceOfSatisfying(InputProblem.class, p -> assertThat(p.field()).isEqualTo("name"));
+    }
+
+    @Test
+    void revertingAnOverriddenTemplateDeletesTheOverrideOnlyAsItWasOpened(@TempDir Path dir) throws Exception {
+        Path personal = NotesPaths.ensurePersonalPack(dir.resolve("personal"));
+        TemplatePreview.Entry builtIn = named(PackStack.load(List.of(), personal), "callout-note");
+        String edited = "OVERRIDDEN {{feature.id}}\n";
+        TemplateSaver.save(builtIn, edited, TemplatePreview.text(builtIn), personal);
+        TemplatePreview.Entry override = named(PackStack.load(List.of(), personal), "callout-note");
+        assertThat(override.isOverride()).isTrue();
+        assertThat(override.replaces()).isEqualTo(builtIn.pack());
+        // changed on disk since it was opened: not deleted
+        assertThatThrownBy(() -> TemplateSaver.remove(override, "something else\n")).isInstanceOf(InputProblem.class)
+                .hasMessageContaining("changed on disk");
+        assertThat(Files.exists(override.file())).isTrue();
+        TemplateSaver.remove(override, edited);
+        assertThat(named(PackStack.load(List.of(), personal), "callout-note").layer()).isEqualTo(PackLayer.BUILT_IN);
+        assertThatThrownBy(() -> TemplateSaver.remove(builtIn, null)).isInstanceOf(InputProblem.class)
+                .hasMessageContaining("built in");
+    }
 }

@@ -1,0 +1,86 @@
+package org.arcwright.app.practice;
+
+import java.awt.Component;
+import java.util.function.Consumer;
+import javax.swing.DefaultListCellRenderer;
+import javax.swing.DefaultListModel;
+import javax.swing.JButton;
+import javax.swing.JLabel;
+import javax.swing.JList;
+import javax.swing.JPanel;
+import javax.swing.JScrollPane;
+import javax.swing.JTextField;
+import javax.swing.event.DocumentEvent;
+import javax.swing.event.DocumentListener;
+import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.model.TemplateFields;
+
+/**
+ * The fields a template may use, from the template model, beside the template: filtered as you type,
+ * described in the tooltip, inserted at the caret with Insert or a double click.
+ */
+final class TemplateFieldsView extends JPanel {
+    private static final long serialVersionUID = 1L;
+    private final DefaultListModel<TemplateFields.Field> shown = new DefaultListModel<>();
+    private final JList<TemplateFields.Field> list = new JList<>(shown);
+    private final JTextField filter = new JTextField();
+    private final JButton insert = new JButton("Insert");
+    private final transient Consumer<TemplateFields.Field> inserter;
+
+    TemplateFieldsView(Consumer<TemplateFields.Field> inserter) {
+        super(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[][][grow,fill][]"));
+        this.inserter = inserter;
+        setName("templateFields");
+        list.setName("templateFieldList");
+        filter.setName("templateFieldFilter");
+        insert.setName("templateFieldInsert");
+        filter.putClientProperty(com.formdev.flatlaf.FlatClientProperties.PLACEHOLDER_TEXT, "Filter, e.g. datum");
+        filter.getDocument().addDocumentListener(new DocumentListener() {
+            public void insertUpdate(DocumentEvent e) { refilter(); }
+            public void removeUpdate(DocumentEvent e) { refilter(); }
+            public void changedUpdate(DocumentEvent e) { refilter(); }
+        });
+        list.setCellRenderer(new DefaultListCellRenderer() {
+            private static final long serialVersionUID = 1L;
+
+            @Override
+            public Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
+                TemplateFields.Field field = (TemplateFields.Field) v;
+                JLabel c = (JLabel) super.getListCellRendererComponent(l, field.path(), i, s, f);
+                c.setToolTipText("<html><b>" + field.path() + "</b> (" + field.kind().name().toLowerCase(java.util.Locale.ROOT)
+                        + "): " + escape(field.doc()) + "<br>Inserts <code>" + escape(field.insert()) + "</code>, "
+                        + escape(field.where()) + "</html>");
+                return c;
+            }
+        });
+        list.addMouseListener(new java.awt.event.MouseAdapter() {
+            @Override
+            public void mouseClicked(java.awt.event.MouseEvent e) {
+                if (e.getClickCount() == 2) insertSelected();
+            }
+        });
+        list.addListSelectionListener(e -> insert.setEnabled(list.getSelectedValue() != null));
+        insert.setEnabled(false);
+        insert.setToolTipText("Insert the selected field at the caret in the template");
+        insert.addActionListener(e -> insertSelected());
+        add(new JLabel("Fields you can use"));
+        add(filter, "wmin 10");
+        add(new JScrollPane(list), "wmin 10, hmin 10");
+        add(insert, "growx 0");
+        refilter();
+    }
+
+    private static String escape(String s) {
+        return s.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;");
+    }
+
+    private void refilter() {
+        shown.clear();
+        for (TemplateFields.Field f : TemplateFields.matching(filter.getText())) shown.addElement(f);
+    }
+
+    private void insertSelected() {
+        TemplateFields.Field f = list.getSelectedValue();
+        if (f != null) inserter.accept(f);
+    }
+}
