@@ -258,7 +258,7 @@ public final class CheckPanel extends JPanel {
             confirm.setText("Judge the points as " + n.featureId() + " anyway (" + n.featureId() + "'s nominal and corner, "
                     + "the file's frame)");
             confirm.setVisible(true);
-            fileSays.show("The file says: " + n.ifConfirmed().fileSays(), "Arcwright.help.foreground");
+            showFileSays("The file says: " + n.ifConfirmed().fileSays());
             return;
         }
         run((CheckRequests.Ready) binding, file.toString());
@@ -368,8 +368,8 @@ public final class CheckPanel extends JPanel {
         cancel.setVisible(true);
         verdict.show("Checking " + Path.of(src).getFileName() + " against " + ready.featureId() + "'s "
                 + ready.request().callout().describe() + "…", "Label.foreground");
-        if (ready.fileSays() != null) fileSays.show("The file says: " + ready.fileSays() + " (not judged: "
-                + ready.featureId() + "'s chosen callout is)", "Arcwright.help.foreground");
+        if (ready.fileSays() != null) showFileSays("The file says: " + ready.fileSays() + " (not judged: "
+                + ready.featureId() + "'s chosen callout is)");
         status.accept("Checking " + Path.of(src).getFileName() + "…");
         InspectionRequest req = ready.request();
         CompletableFuture.supplyAsync(() -> {
@@ -466,6 +466,12 @@ public final class CheckPanel extends JPanel {
         return what + ": judged against its chosen callout " + f.chosen().text() + " (lengths in " + u + ").";
     }
 
+    /** What the file itself states, or nothing (no empty line is left where a CSV states nothing). */
+    private void showFileSays(String text) {
+        fileSays.show(text, "Arcwright.help.foreground");
+        fileSays.setVisible(!text.isEmpty());
+    }
+
     /** Empties the verdict, the figures, the table and the plot, and disables Keep. */
     private void clearResult() {
         picking = null;
@@ -475,7 +481,7 @@ public final class CheckPanel extends JPanel {
         pending = null;
         pendingSource = null;
         confirm.setVisible(false);
-        fileSays.show("", "Arcwright.help.foreground");
+        showFileSays("");
         figures.show("", "Arcwright.help.foreground");
         comparisons.setRowCount(0);
         tableScroll.setVisible(false);

@@ -42,7 +42,7 @@ public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints meas
         StringBuilder caption = new StringBuilder().append(m.total()).append(" measured points");
         if (m.points().size() < m.total()) caption.append(" (").append(m.points().size()).append(" drawn)");
         caption.append(", ").append(out == 0 ? "none" : Integer.toString(out)).append(" outside ")
-                .append(m.callout().describe());
+                .append(m.callout().describe()).append(' ').append(feature.designCase().units().symbol());
         String mismatch = m.mismatch(spec, feature);
         if (!mismatch.isEmpty()) caption.append(" · ").append(mismatch);
         return new ZoneScene(picture, heading, m, placed, caption.toString());

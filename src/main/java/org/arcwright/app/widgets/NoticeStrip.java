@@ -35,9 +35,19 @@ public final class NoticeStrip extends JPanel {
         });
     }
 
-    /** A new width wraps the message to another number of lines: lay the strip out again for its height. */
+    /** A new width wraps the message to another number of lines: lay the window out again for the strip's height. */
     private void refit() {
-        if (text.getPreferredSize().height != text.getHeight()) revalidate();
+        if (!isVisible() || getParent() == null) return;
+        // the cached sizes were measured at the old width: drop them here and in the panel above,
+        // which sets this strip's height from them
+        invalidate();
+        getParent().invalidate();
+        if (getParent() instanceof javax.swing.JComponent p) p.revalidate();
+    }
+
+    /** Whether the whole message shows: the strip is as high as its wrapped lines need (tests). */
+    public boolean messageFullyShown() {
+        return !isVisible() || (getHeight() >= getPreferredSize().height && text.getHeight() >= text.getPreferredSize().height);
     }
 
     @Override

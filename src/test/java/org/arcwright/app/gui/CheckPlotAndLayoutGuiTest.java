@@ -191,6 +191,13 @@ class CheckPlotAndLayoutGuiTest {
             cut.addAll(GuiSupport.onEdt(() -> cutOff(window.workArea().getTitleAt(tab))));
         }
         assertThat(cut).isEmpty();
+        // the first-run notice wraps its words over two lines and shows all of them
+        org.arcwright.app.widgets.NoticeStrip notice = (org.arcwright.app.widgets.NoticeStrip) fixture.robot().finder()
+                .findByName(window.frame(), "notice", true);
+        Component toolbar = fixture.robot().finder().findByName(window.frame(), "toolbar", true);
+        assertThat(GuiSupport.onEdt(() -> notice.isShowing() && notice.messageFullyShown())).isTrue();
+        // and sits below the toolbar, not over it (the panel above had kept the one-line height)
+        assertThat(GuiSupport.onEdt(() -> notice.getY() >= toolbar.getY() + toolbar.getHeight())).isTrue();
         // the Decide form and its results side by side, each at least as wide as it stays readable at
         GuiSupport.onEdt(() -> window.showTab(0));
         GuiSupport.settle(500);
