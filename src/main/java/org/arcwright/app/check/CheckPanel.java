@@ -55,8 +55,8 @@ import org.arcwright.zone.Point2;
 import org.arcwright.worksheet.RadiusFeature;
 
 /**
- * The Check panel: import measured points (an inspection file, or a CSV in a frame the user states;
- * by the button or by dropping the file here) and judge them against the selected feature's chosen
+ * The Check panel: import measured points (an inspection file, or a CSV in a frame the user types
+ * or picks on the plotted points; by the button or by dropping the file here) and judge them against the selected feature's chosen
  * callout, in the background with progress and cancel; see the verdict as a sentence naming the
  * feature, the callout and the units, what the file itself states, the figures, the same points
  * under other callouts, and the contour with its points coloured by excess.
