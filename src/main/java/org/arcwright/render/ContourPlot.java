@@ -3,8 +3,10 @@ package org.arcwright.render;
 import java.awt.BasicStroke;
 import java.awt.Color;
 import java.awt.Font;
+import java.awt.FontMetrics;
 import java.awt.Graphics2D;
 import java.awt.RenderingHints;
+import java.awt.geom.AffineTransform;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
@@ -29,6 +31,7 @@ import org.arcwright.inspect.ProfileOutcome;
 import org.arcwright.inspect.Registration;
 import org.arcwright.io.AtomicFiles;
 import org.arcwright.io.InputProblem;
+import org.arcwright.tolerance.CrescentZone;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.Point2;
@@ -46,7 +49,8 @@ public final class ContourPlot {
     /** Plot size in pixels (PNG) or user units (SVG). */
     public static final int WIDTH = 1000, HEIGHT = 760;
     private static final int MAX_DRAWN = 20_000;
-    private static final int TOP = 140;
+    /** The type the files are drawn in; a window passes its own. */
+    private static final Font FILE_FONT = new Font(Font.SANS_SERIF, Font.PLAIN, 13);
     /** The printed colours: files keep these whatever the window's look. */
     private static final Palette PRINTED = new Palette(Color.WHITE, new Color(0x30, 0x30, 0x30), new Color(0x1f, 0x5f, 0xbf));
     private static final Color OK = new Color(0x1a, 0x8f, 0x3c),
@@ -97,13 +101,27 @@ public final class ContourPlot {
         return bytes.toByteArray();
     }
 
-    /** Draws the plot on any Graphics2D of {@link #WIDTH} × {@link #HEIGHT}. */
+    /** Draws the plot on any Graphics2D of {@link #WIDTH} × {@link #HEIGHT}, as files show it. */
     public void draw(InspectionResult r, Graphics2D g) {
+        draw(r, g, WIDTH, HEIGHT, FILE_FONT, true);
+    }
+
+    /**
+     * Draws the plot at {@code width} × {@code height} with text in {@code font} (the other sizes
+     * follow it): the file output and the desktop's Check view both come through here, so the panel
+     * draws vectors at its own size and the window's type size rather than a scaled picture.
+     *
+     * @param summary whether to draw the verdict, the callout and the figures above the plot (a
+     *     window that shows them beside the plot leaves them out)
+     */
+    public void draw(InspectionResult r, Graphics2D g, int width, int height, Font font, boolean summary) {
         g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
         g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
         g.setColor(background);
-        g.fillRect(0, 0, WIDTH, HEIGHT);
+        g.fillRect(0, 0, width, height);
+        Type type = new Type(font);
         InspectionRequest q = r.request();
+        String units = q.units().symbol();
         Contour nominal = Inspector.nominalContour(q);
         PointSet pts = q.points();
         int n = pts.size();
@@ -120,7 +138,6 @@ public final class ContourPlot {
         for (int i = 0; i < n; i += stride) addPoint(i, pts, reg, excesses, drawn, moved);
         if (r.worst() != null && r.worst().index() % stride != 0) addPoint(r.worst().index(), pts, reg, excesses, drawn, moved);
 
-        // Magnification: the larger of the zone and the deviations shows as ~7% of the view.
         double[] view = view(q, drawn);
         double span = Math.max(view[2] - view[0], view[3] - view[1]);
         double[] m4 = new double[4], w5 = new double[5];
@@ -129,12 +146,19 @@ public final class ContourPlot {
             nominal.measure(p[0], p[1], m4, w5);
             maxDev = Math.max(maxDev, Math.abs(m4[0]));
         }
+        // Magnification: the larger of the zone and the deviations shows as ~7% of the view.
         double mag = niceFactor(0.12 * span / Math.max(Math.max(visibleBand(q, po), maxDev), 1e-12 * span));
-        double sx = (WIDTH - 120) / (view[2] - view[0]), sy = (HEIGHT - 200) / (view[3] - view[1]);
-        double scale = Math.min(sx, sy);
-        double ox = 60 + ((WIDTH - 120) - scale * (view[2] - view[0])) / 2 - scale * view[0];
-        double oy = TOP + 5 + ((HEIGHT - 200) + scale * (view[3] - view[1])) / 2 + scale * view[1];
-        Mapper map = new Mapper(nominal, mag, scale, ox, oy);
+        // Where the words go: the summary above, the legend below, the plot between.
+        List<String> head = summary ? wrap(g, type.body, summaryLines(r, units), width - 2 * type.margin) : List.of();
+        int top = summary ? (int) Math.ceil(type.firstLine + type.line * Math.max(4, head.size()) + 6 * type.k) : (int) (8 * type.k);
+        List<List<Legend>> rows = legendRows(g, type, mag, width);
+        int bottom = (int) Math.ceil(33 * type.k + type.line * (rows.size() - 1) + 22 * type.k);
+        double side = Math.min(60, 0.06 * width);
+        double plotW = Math.max(1, width - 2 * side), plotH = Math.max(1, height - top - 5 - bottom);
+        double scale = Math.min(plotW / (view[2] - view[0]), plotH / (view[3] - view[1]));
+        double ox = side + (plotW - scale * (view[2] - view[0])) / 2 - scale * view[0];
+        double oy = top + 5 + (plotH + scale * (view[3] - view[1])) / 2 + scale * view[1];
+        Mapper map = new Mapper(nominal, mag, scale, ox, oy, new double[] {8, top, width - 8, height - bottom + 10});
 
         // Zone.
         g.setStroke(new BasicStroke(1.6f));
@@ -181,14 +205,113 @@ public final class ContourPlot {
                 g.setStroke(new BasicStroke(1.5f));
                 g.draw(new Ellipse2D.Double(s[0] - 9, s[1] - 9, 18, 18));
                 g.draw(new Line2D.Double(s[0] + 7, s[1] - 7, s[0] + 30, s[1] - 30));
-                g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
+                g.setFont(type.body);
                 String t = String.format(Locale.ROOT, "worst #%d: %s by %s %s (%s)", r.worst().index(),
                         r.worst().excess() > 0 ? "outside" : "inside", fmt(Math.abs(r.worst().excess())), r.worst().unit(),
                         r.worst().measure());
-                g.drawString(t, (float) Math.min(s[0] + 32, WIDTH - 10 - g.getFontMetrics().stringWidth(t)), (float) Math.max(s[1] - 32, 110));
+                float tx = (float) Math.max(8, Math.min(s[0] + 32, width - 10 - g.getFontMetrics().stringWidth(t)));
+                float ty = (float) Math.max(s[1] - 32, summary ? 110 * type.k : top + g.getFontMetrics().getAscent());
+                g.drawString(t, tx, ty);
             }
         }
-        labels(g, r, mag, q.units().symbol());
+        if (summary) summary(g, type, r, units, head);
+        legend(g, type, rows, height);
+    }
+
+    /**
+     * The measured points alone, at true scale with equal axes, for picking the corner's frame on a
+     * CSV that states none: the points, the axes where they are in view, a scale bar with its unit,
+     * and what has been picked so far (the vertex, then the legs as rays from it).
+     *
+     * @param picked up to three points: the vertex, then a point along each leg
+     * @return the mapping from the points' coordinates to the drawing's, to read a click back
+     */
+    public AffineTransform drawPoints(PointSet points, List<Point2> picked, String units, Graphics2D g, int width,
+                                      int height, Font font) {
+        g.setRenderingHint(RenderingHints.KEY_ANTIALIASING, RenderingHints.VALUE_ANTIALIAS_ON);
+        g.setRenderingHint(RenderingHints.KEY_TEXT_ANTIALIASING, RenderingHints.VALUE_TEXT_ANTIALIAS_ON);
+        g.setColor(background);
+        g.fillRect(0, 0, width, height);
+        Type type = new Type(font);
+        double minX = Double.POSITIVE_INFINITY, minY = Double.POSITIVE_INFINITY;
+        double maxX = Double.NEGATIVE_INFINITY, maxY = Double.NEGATIVE_INFINITY;
+        for (int i = 0; i < points.size(); i++) {
+            minX = Math.min(minX, points.xs()[i]); maxX = Math.max(maxX, points.xs()[i]);
+            minY = Math.min(minY, points.ys()[i]); maxY = Math.max(maxY, points.ys()[i]);
+        }
+        for (Point2 p : picked) {
+            minX = Math.min(minX, p.x()); maxX = Math.max(maxX, p.x());
+            minY = Math.min(minY, p.y()); maxY = Math.max(maxY, p.y());
+        }
+        if (!(maxX >= minX)) {
+            minX = minY = -1;
+            maxX = maxY = 1;
+        }
+        double pad = 0.15 * Math.max(Math.max(maxX - minX, maxY - minY), 1e-9);
+        minX -= pad; maxX += pad; minY -= pad; maxY += pad;
+        double bottom = type.line * 2 + 12 * type.k, margin = type.margin;
+        double plotW = Math.max(1, width - 2 * margin), plotH = Math.max(1, height - margin - bottom);
+        double scale = Math.min(plotW / (maxX - minX), plotH / (maxY - minY));
+        double ox = margin + (plotW - scale * (maxX - minX)) / 2 - scale * minX;
+        double oy = margin + (plotH + scale * (maxY - minY)) / 2 + scale * minY;
+        AffineTransform toScreen = new AffineTransform(scale, 0, 0, -scale, ox, oy);
+        double[] s = new double[2];
+        // axes through the origin, where it is in view
+        g.setColor(new Color(nominalInk.getRed(), nominalInk.getGreen(), nominalInk.getBlue(), 0x50));
+        g.setStroke(new BasicStroke(1f));
+        if (minX < 0 && maxX > 0) g.draw(new Line2D.Double(ox, 0, ox, height - bottom));
+        if (minY < 0 && maxY > 0) g.draw(new Line2D.Double(0, oy, width, oy));
+        g.setColor(nominalInk);
+        double dot = points.size() > 2000 ? 2.2 : 4.5;
+        for (int i = 0; i < points.size(); i++) {
+            toScreen.transform(new double[] {points.xs()[i], points.ys()[i]}, 0, s, 0, 1);
+            g.fill(new Ellipse2D.Double(s[0] - dot / 2, s[1] - dot / 2, dot, dot));
+        }
+        // the picked vertex and legs
+        g.setColor(zoneInk);
+        g.setStroke(new BasicStroke(2f));
+        if (!picked.isEmpty()) {
+            double[] v = new double[2];
+            toScreen.transform(new double[] {picked.get(0).x(), picked.get(0).y()}, 0, v, 0, 1);
+            g.draw(new Ellipse2D.Double(v[0] - 7, v[1] - 7, 14, 14));
+            g.draw(new Line2D.Double(v[0] - 11, v[1], v[0] + 11, v[1]));
+            g.draw(new Line2D.Double(v[0], v[1] - 11, v[0], v[1] + 11));
+            double reach = Math.hypot(width, height);
+            for (Point2 p : picked.subList(1, picked.size())) {
+                toScreen.transform(new double[] {p.x(), p.y()}, 0, s, 0, 1);
+                double dx = s[0] - v[0], dy = s[1] - v[1], l = Math.hypot(dx, dy);
+                if (l > 0) g.draw(new Line2D.Double(v[0], v[1], v[0] + dx / l * reach, v[1] + dy / l * reach));
+            }
+        }
+        // scale bar: a round length near a fifth of the width, with its unit
+        double bar = niceFactorBelow(0.2 * plotW / scale);
+        float y = (float) (height - type.line - 4 * type.k);
+        g.setColor(nominalInk);
+        g.setStroke(new BasicStroke(1.5f));
+        g.draw(new Line2D.Double(margin, y, margin + bar * scale, y));
+        g.draw(new Line2D.Double(margin, y - 4, margin, y + 4));
+        g.draw(new Line2D.Double(margin + bar * scale, y - 4, margin + bar * scale, y + 4));
+        g.setFont(type.body);
+        g.drawString(fmt(bar) + " " + units + " (true scale; x to the right, y up, as in the file)",
+                (float) (margin + bar * scale + 10), y + g.getFontMetrics().getAscent() / 2f - 1);
+        return toScreen;
+    }
+
+    /** Sizes of the plot's words, from the body font ({@code k}: its size over the file's 13). */
+    private static final class Type {
+        final Font body, small, title, word;
+        final double k, line, firstLine, margin;
+
+        Type(Font font) {
+            body = font.deriveFont(Font.PLAIN);
+            k = body.getSize2D() / FILE_FONT.getSize2D();
+            small = body.deriveFont(body.getSize2D() * 12 / 13);
+            title = body.deriveFont(Font.BOLD, body.getSize2D() * 16 / 13);
+            word = body.deriveFont(Font.BOLD, body.getSize2D() * 22 / 13);
+            line = 18 * k;
+            firstLine = 62 * k;
+            margin = 24 * k;
+        }
     }
 
     private static void addPoint(int i, PointSet pts, Registration reg, PointExcesses excesses, List<double[]> drawn,
@@ -205,7 +328,7 @@ public final class ContourPlot {
     /** Width of the zone as drawn: the crescent on the bisector for R/CR, the zone for profile. */
     private static double visibleBand(InspectionRequest q, ProfileOutcome po) {
         if (q.callout() instanceof InspectionCallout.RadiusLimits rl && q.nominal() instanceof Nominal.CornerBlend cb) {
-            return (rl.max() - rl.min()) * (1 / Math.sin(cb.corner().halfAngle()) - 1);
+            return (rl.max() - rl.min()) * CrescentZone.factor(cb.corner().includedAngleDeg());
         }
         return po == null ? 0 : po.zone().width();
     }
@@ -255,6 +378,13 @@ public final class ContourPlot {
         return new double[] {minX - pad, minY - pad, maxX + pad, maxY + pad};
     }
 
+    /** 1, 2 or 5 times a power of ten, at most {@code raw} (any positive size; a scale bar's length). */
+    static double niceFactorBelow(double raw) {
+        double p = Math.pow(10, Math.floor(Math.log10(raw)));
+        double m = raw / p;
+        return (m >= 5 ? 5 : m >= 2 ? 2 : 1) * p;
+    }
+
     /** 1, 2 or 5 times a power of ten, at most {@code raw}, at least 1. */
     static double niceFactor(double raw) {
         if (!(raw > 1)) return 1;
@@ -263,18 +393,9 @@ public final class ContourPlot {
         return (m >= 5 ? 5 : m >= 2 ? 2 : 1) * p;
     }
 
-    private void labels(Graphics2D g, InspectionResult r, double mag, String units) {
+    /** The figures the verdict read, one line each, as the summary above a file's plot states them. */
+    private static List<String> summaryLines(InspectionResult r, String units) {
         InspectionRequest q = r.request();
-        g.setColor(r.verdict() == Verdict.PASS ? OK : r.verdict() == Verdict.FAIL ? OUT : NEAR);
-        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 22));
-        String word = r.verdict() == Verdict.INDETERMINATE ? "UNDECIDED" : r.verdict().key().toUpperCase(Locale.ROOT);
-        g.drawString(word, 24, 38);
-        int titleX = r.verdict() == Verdict.INDETERMINATE ? 170 : 100;
-        g.setColor(nominalInk);
-        g.setFont(new Font(Font.SANS_SERIF, Font.BOLD, 16));
-        g.drawString(q.callout().describe() + "   (" + units + ", " + q.points().size() + " points"
-                + (q.uncertainty() > 0 ? ", U = " + fmt(q.uncertainty()) + " " + units : "") + ")", titleX, 36);
-        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 13));
         List<String> lines = new ArrayList<>();
         if (r.radius() != null) {
             lines.add("envelope: radius smallest " + Inspector.down(r.radius().smallest(), q.resolution()) + ", largest "
@@ -305,24 +426,88 @@ public final class ContourPlot {
                     + " to " + fmt(r.fits().minimumZone().outer()) + ", steps at the fitted surfaces " + fmt(r.fits().stepA()) + " / "
                     + fmt(r.fits().stepB()) + " " + units);
         }
-        float y = 62;
-        for (String s : lines) {
-            g.drawString(s, 24, y);
-            y += 18;
+        return lines;
+    }
+
+    /** Breaks each line at spaces so that none is wider than {@code width}; a single long word stays whole. */
+    private static List<String> wrap(Graphics2D g, Font font, List<String> lines, double width) {
+        FontMetrics fm = g.getFontMetrics(font);
+        List<String> out = new ArrayList<>();
+        for (String line : lines) {
+            StringBuilder cur = new StringBuilder();
+            for (String word : line.split("(?<= )")) {
+                if (cur.length() > 0 && fm.stringWidth((cur + word).stripTrailing()) > width) {
+                    out.add(cur.toString().stripTrailing());
+                    cur.setLength(0);
+                }
+                cur.append(word);
+            }
+            out.add(cur.toString().stripTrailing());
         }
-        // legend and scale
-        int ly = HEIGHT - 22;
-        g.setFont(new Font(Font.SANS_SERIF, Font.PLAIN, 12));
+        return out;
+    }
+
+    private void summary(Graphics2D g, Type type, InspectionResult r, String units, List<String> lines) {
+        InspectionRequest q = r.request();
+        g.setColor(r.verdict() == Verdict.PASS ? OK : r.verdict() == Verdict.FAIL ? OUT : NEAR);
+        g.setFont(type.word);
+        String word = r.verdict() == Verdict.INDETERMINATE ? "UNDECIDED" : r.verdict().key().toUpperCase(Locale.ROOT);
+        g.drawString(word, (float) type.margin, (float) (38 * type.k));
+        float titleX = (float) (type.margin + g.getFontMetrics().stringWidth(word) + 16 * type.k);
         g.setColor(nominalInk);
-        g.drawString("deviations from nominal magnified ×" + fmt(mag) + "   - - nominal", 24, ly);
-        int x = 420;
+        g.setFont(type.title);
+        g.drawString(q.callout().describe() + "   (" + units + ", " + q.points().size() + " points"
+                + (q.uncertainty() > 0 ? ", U = " + fmt(q.uncertainty()) + " " + units : "") + ")", titleX, (float) (36 * type.k));
+        g.setFont(type.body);
+        double y = type.firstLine;
+        for (String s : lines) {
+            g.drawString(s, (float) type.margin, (float) y);
+            y += type.line;
+        }
+    }
+
+    /** One entry of the legend: a colour key (or none, for the magnification) and its words. */
+    private record Legend(Color key, String text, double x, double width) {}
+
+    /** The legend's entries flowed into rows that fit {@code width}: the magnification first, then the colour keys. */
+    private List<List<Legend>> legendRows(Graphics2D g, Type type, double mag, int width) {
+        FontMetrics fm = g.getFontMetrics(type.small);
+        List<List<Legend>> rows = new ArrayList<>();
+        List<Legend> row = new ArrayList<>();
+        rows.add(row);
+        String first = "deviations from nominal magnified ×" + fmt(mag) + "   - - nominal";
+        row.add(new Legend(null, first, type.margin, fm.stringWidth(first)));
+        double x = Math.max(420 * type.k, type.margin + fm.stringWidth(first) + type.margin);
         Object[][] keys = {{OK, "within"}, {NEAR, "within 15% of a limit"}, {OUT, "outside"}, {IDLE, "not judged"}, {zoneInk, "zone boundary"}};
         for (Object[] k : keys) {
-            g.setColor((Color) k[0]);
-            g.fill(new Ellipse2D.Double(x, ly - 9, 9, 9));
-            g.setColor(nominalInk);
-            g.drawString((String) k[1], x + 13, ly);
-            x += 20 + g.getFontMetrics().stringWidth((String) k[1]) + 10;
+            String t = (String) k[1];
+            double w = 13 * type.k + fm.stringWidth(t);
+            if (x + w > width - 8 && x > type.margin) {
+                row = new ArrayList<>();
+                rows.add(row);
+                x = type.margin;
+            }
+            row.add(new Legend((Color) k[0], t, x, w));
+            x += w + 17 * type.k;
+        }
+        return rows;
+    }
+
+    private void legend(Graphics2D g, Type type, List<List<Legend>> rows, int height) {
+        g.setFont(type.small);
+        double d = 9 * type.k;
+        for (int i = 0; i < rows.size(); i++) {
+            float ly = (float) (height - 22 * type.k - type.line * (rows.size() - 1 - i));
+            for (Legend e : rows.get(i)) {
+                float tx = (float) e.x();
+                if (e.key() != null) {
+                    g.setColor(e.key());
+                    g.fill(new Ellipse2D.Double(e.x(), ly - d, d, d));
+                    tx += (float) (13 * type.k);
+                }
+                g.setColor(nominalInk);
+                g.drawString(e.text(), tx, ly);
+            }
         }
     }
 
@@ -352,10 +537,12 @@ public final class ContourPlot {
     private static final class Mapper {
         private final Contour nominal;
         private final double mag, scale, ox, oy;
+        /** The plot area (left, top, right, bottom), below the words above and above the legend. */
+        private final double[] area;
         private final double[] m = new double[4], w = new double[5];
 
-        Mapper(Contour nominal, double mag, double scale, double ox, double oy) {
-            this.nominal = nominal; this.mag = mag; this.scale = scale; this.ox = ox; this.oy = oy;
+        Mapper(Contour nominal, double mag, double scale, double ox, double oy, double[] area) {
+            this.nominal = nominal; this.mag = mag; this.scale = scale; this.ox = ox; this.oy = oy; this.area = area;
         }
 
         double[] screen(double x, double y) {
@@ -390,7 +577,7 @@ public final class ContourPlot {
                     }
                     double[] sc = screen(x, y);
                     // the plot area, below the labels and above the legend (no clip paths: not every SVG viewer has them)
-                    if (sc[0] < 8 || sc[0] > WIDTH - 8 || sc[1] < TOP || sc[1] > HEIGHT - 45) {
+                    if (sc[0] < area[0] || sc[0] > area[2] || sc[1] < area[1] || sc[1] > area[3]) {
                         first = true;
                         continue;
                     }

@@ -72,6 +72,39 @@ class ContourPlotTest {
         assertGolden("plot-housing-fillet-profile.txt", content(Files.readString(svg)));
     }
 
+    /**
+     * A window draws the plot at its own size and type: nothing lands outside the size given, the
+     * summary and the legend wrap to it, and the crescent's magnification is the file's.
+     */
+    @Test
+    void drawnAtAPanelsSizeEverythingStaysInsideIt() {
+        InspectionResult r = inspect("bracket-round-r.json");
+        int w = 420, h = 360, margin = 60;
+        for (boolean summary : new boolean[] {false, true}) {
+            BufferedImage img = new BufferedImage(w + 2 * margin, h + 2 * margin, BufferedImage.TYPE_INT_RGB);
+            java.awt.Graphics2D g = img.createGraphics();
+            g.setColor(java.awt.Color.MAGENTA);
+            g.fillRect(0, 0, img.getWidth(), img.getHeight());
+            g.translate(margin, margin);
+            new ContourPlot().draw(r, g, w, h, new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 15), summary);
+            g.dispose();
+            int outside = 0;
+            for (int y = 0; y < img.getHeight(); y++) {
+                for (int x = 0; x < img.getWidth(); x++) {
+                    boolean in = x >= margin && x < margin + w && y >= margin && y < margin + h;
+                    if (!in && img.getRGB(x, y) != java.awt.Color.MAGENTA.getRGB()) outside++;
+                }
+            }
+            assertThat(outside).as("pixels drawn outside %d x %d (summary %s)", w, h, summary).isZero();
+        }
+        org.jfree.svg.SVGGraphics2D svg = new org.jfree.svg.SVGGraphics2D(w, h);
+        new ContourPlot().draw(r, svg, w, h, new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 15), false);
+        String text = content(svg.getSVGDocument());
+        // the same magnification as the file's plot (golden plot-bracket-round-r.txt), no summary
+        assertThat(text).contains("text: deviations from nominal magnified ×5").doesNotContain("text: PASS")
+                .contains("text: zone boundary");
+    }
+
     @Test
     void pngIsTheStatedSize() throws IOException {
         byte[] png = new ContourPlot().png(inspect("bracket-round-cr-flat.json"));

@@ -1,7 +1,12 @@
 package org.arcwright.app.check;
 
 import java.awt.Graphics;
+import java.awt.Cursor;
 import java.awt.Graphics2D;
+import java.awt.event.MouseAdapter;
+import java.awt.event.MouseEvent;
+import java.awt.geom.AffineTransform;
+import java.awt.image.BufferedImage;
 import java.awt.datatransfer.DataFlavor;
 import java.io.File;
 import java.nio.file.Path;
@@ -19,6 +24,7 @@ import javax.swing.JFileChooser;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
 import javax.swing.JScrollPane;
+import javax.swing.JSplitPane;
 import javax.swing.JTable;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
@@ -27,11 +33,13 @@ import javax.swing.filechooser.FileNameExtensionFilter;
 import javax.swing.table.DefaultTableModel;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.CheckRequests;
+import org.arcwright.app.model.FramePick;
 import org.arcwright.app.model.MeasuredPoints;
 import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.widgets.Cautions;
 import org.arcwright.app.widgets.Icons;
+import org.arcwright.app.widgets.ScrollablePanel;
 import org.arcwright.app.widgets.Themes;
 import org.arcwright.app.widgets.WrapLabel;
 import org.arcwright.inspect.Comparison;
@@ -39,13 +47,16 @@ import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.PointSet;
+import org.arcwright.inspect.PointsCsv;
 import org.arcwright.render.ContourPlot;
 import org.arcwright.worksheet.InspectionRecord;
+import org.arcwright.zone.Point2;
 import org.arcwright.worksheet.RadiusFeature;
 
 /**
- * The Check panel: import measured points (an inspection file, or a CSV in a frame the user states;
- * by the button or by dropping the file here) and judge them against the selected feature's chosen
+ * The Check panel: import measured points (an inspection file, or a CSV in a frame the user types
+ * or picks on the plotted points; by the button or by dropping the file here) and judge them against the selected feature's chosen
  * callout, in the background with progress and cancel; see the verdict as a sentence naming the
  * feature, the callout and the units, what the file itself states, the figures, the same points
  * under other callouts, and the contour with its points coloured by excess.
@@ -71,8 +82,13 @@ public final class CheckPanel extends JPanel {
         @Override
         public boolean isCellEditable(int row, int column) { return false; }
     };
-    private final Plot plot = new Plot();
+    private final Plot plot;
     private final JTable table = new TipTable(comparisons);
+    private final JScrollPane tableScroll = new JScrollPane(table);
+    /** Share of the height the verdict, figures and table get above the plot when the view first opens. */
+    private static final double DETAILS_SHARE = 0.42;
+    private final JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT);
+
     private final JProgressBar progress = new JProgressBar();
     private final JButton cancel = new JButton("Cancel");
     private final JButton keep = new JButton("Keep the verdict");
@@ -86,6 +102,12 @@ public final class CheckPanel extends JPanel {
     private transient String pendingSource;
     private transient Subject subject;
     private long generation;
+    /** The last CSV checked or picked on, which "Pick on the plot" offers again. */
+    private transient Path lastCsv;
+    /** The frame being picked on the plot, or null. */
+    private transient FramePick picking;
+    private transient Path pickCsv;
+    private transient PointSet pickPoints;
 
     /** What the panel's content belongs to: the worksheet shown, the feature and what was decided for it. */
     private record Subject(long document, String featureId, Object chosen, Object designCase) {
@@ -101,12 +123,13 @@ public final class CheckPanel extends JPanel {
 
     public CheckPanel(WorksheetSession session, CheckRequests requests, Executor background, Clock clock,
                       Consumer<String> status) {
-        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][][][][][grow,fill]"));
+        super(new MigLayout("insets 8, gap 8, wrap 1, hidemode 2", "[grow,fill]", "[][][][][grow,fill]"));
         this.session = Objects.requireNonNull(session, "session");
         this.requests = Objects.requireNonNull(requests, "requests");
         this.background = Objects.requireNonNull(background, "background");
         this.clock = Objects.requireNonNull(clock, "clock");
         this.status = Objects.requireNonNull(status, "status");
+        plot = new Plot();
         setName("checkPanel");
         target.setName("checkTarget");
         verdict.setName("checkVerdict");
@@ -127,21 +150,50 @@ public final class CheckPanel extends JPanel {
         table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 5));
         add(Cautions.box(Cautions.VERDICT), "growx, wmin 10");
         add(target, "growx, wmin 10");
-        add(open, "split 4, growx 0, wmin 10");
-        add(keep, "growx 0, wmin 10");
-        add(progress, "w 120!, growx 0");
-        add(cancel, "growx 0");
-        add(frameRow(), "growx 0, wmin 10");
-        add(verdict, "growx, wmin 10");
-        add(confirm, "growx 0");
-        add(fileSays, "growx, wmin 10");
-        add(figures, "growx, wmin 10");
-        add(new JScrollPane(table), "growx, wmin 10, hmin 110, h 150:150:");
-        add(plot, "grow, wmin 10, hmin 120");
+        JPanel buttons = new JPanel(new MigLayout("insets 2, gap 8, hidemode 3", "[][][][]", ""));
+        buttons.setOpaque(false);
+        buttons.add(open, "wmin 10");
+        buttons.add(keep, "wmin 10");
+        buttons.add(progress, "w 120!");
+        buttons.add(cancel);
+        // the rows' insets hold the buttons' focus rings; the negative gaps keep their faces aligned
+        add(buttons, "growx, wmin 10, gapleft -2");
+        add(frameRow(), "growx, wmin 10, gapleft -2");
+        // the words scroll above, the plot takes what is left below: at 1024×700 both stay usable
+        ScrollablePanel details = new ScrollablePanel(new MigLayout("insets 0 0 4 0, gap 8, wrap 1, hidemode 3",
+                "[grow,fill]", ""));
+        details.add(verdict, "growx, wmin 10");
+        details.add(confirm, "growx 0");
+        details.add(fileSays, "growx, wmin 10");
+        details.add(figures, "growx, wmin 10");
+        details.add(tableScroll, "growx, wmin 10, hmin 110, h 150:150:");
+        JScrollPane detailsScroll = new JScrollPane(details);
+        detailsScroll.setBorder(null);
+        detailsScroll.getVerticalScrollBar().setUnitIncrement(16);
+        detailsScroll.setMinimumSize(new java.awt.Dimension(10, 80));
+        plot.setMinimumSize(new java.awt.Dimension(10, 160));
+        split.setTopComponent(detailsScroll);
+        split.setBottomComponent(plot);
+        split.setName("checkSplit");
+        split.setResizeWeight(DETAILS_SHARE);
+        split.setContinuousLayout(true);
+        split.setBorder(null);
+        split.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) { splitFirstSized(this); }
+        });
+        add(split, "grow, wmin 10, hmin 260");
         setTransferHandler(new FileDrop());
         session.listeners().add(this::sessionChanged);
         subject = Subject.of(session);
         showIdle();
+    }
+
+    /** Puts the divider at its share the first time the split has a size; the user moves it after that. */
+    private void splitFirstSized(java.awt.event.ComponentListener self) {
+        if (split.getHeight() <= 0) return;
+        split.setDividerLocation(DETAILS_SHARE);
+        split.removeComponentListener(self);
     }
 
     private static JTextField frameField(String value, String name) {
@@ -152,7 +204,8 @@ public final class CheckPanel extends JPanel {
 
     /** The CSV frame: where the corner's vertex is and which way its legs run, in the CSV's coordinates. */
     private JPanel frameRow() {
-        JPanel p = new JPanel(new MigLayout("insets 0, gap 4", "[][][][][][][][]", ""));
+        // insets as wide as the button's focus ring, which would otherwise be cut at the row's edges
+        JPanel p = new JPanel(new MigLayout("insets 2, gap 4", "[][][][][][][][]", ""));
         p.setOpaque(false);
         String tip = "A CSV holds points only: say where the corner's vertex is (x, y, in the feature's units) and which "
                 + "way its two legs run (degrees from +x, counter-clockwise), in the CSV's own coordinates";
@@ -168,12 +221,18 @@ public final class CheckPanel extends JPanel {
         p.add(new javax.swing.JLabel("° and"));
         p.add(legB);
         p.add(new javax.swing.JLabel("°"));
+        JButton pick = new JButton("Pick on the plot…");
+        pick.setName("checkPickFrame");
+        pick.setToolTipText("Plot a CSV's points and click the vertex, then a point along each leg");
+        pick.addActionListener(e -> pickFrame());
+        p.add(pick, "gapleft 8");
         for (JTextField f : List.of(vertexX, vertexY, legA, legB)) f.setToolTipText(tip);
         return p;
     }
 
     /** Checks the contour in {@code file} for the selected feature in the background (also used by drag and drop and tests). */
     public void check(Path file) {
+        if (file.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".csv")) lastCsv = file;
         RadiusFeature f = session.selected().orElse(null);
         CheckRequests.Binding binding;
         try {
@@ -199,7 +258,7 @@ public final class CheckPanel extends JPanel {
             confirm.setText("Judge the points as " + n.featureId() + " anyway (" + n.featureId() + "'s nominal and corner, "
                     + "the file's frame)");
             confirm.setVisible(true);
-            fileSays.show("The file says: " + n.ifConfirmed().fileSays(), "Arcwright.help.foreground");
+            showFileSays("The file says: " + n.ifConfirmed().fileSays());
             return;
         }
         run((CheckRequests.Ready) binding, file.toString());
@@ -224,6 +283,76 @@ public final class CheckPanel extends JPanel {
         legB.setText(Numbers.trim(legBDeg));
     }
 
+    /** Plots the last CSV's points (or one the user chooses) to pick its frame on them. */
+    private void pickFrame() {
+        Path csv = lastCsv;
+        if (csv == null) {
+            JFileChooser c = new JFileChooser();
+            c.setFileFilter(new FileNameExtensionFilter("Measured points (*.csv)", "csv"));
+            if (c.showOpenDialog(this) != JFileChooser.APPROVE_OPTION) return;
+            csv = c.getSelectedFile().toPath();
+        }
+        pickFrame(csv);
+    }
+
+    /**
+     * Shows the points of {@code csv} at true scale and asks for the vertex, then a point along each
+     * leg; the third click fills the frame's fields and checks the file in that frame.
+     */
+    public void pickFrame(Path csv) {
+        PointSet points;
+        try {
+            points = PointsCsv.read(csv);
+        } catch (RuntimeException e) {
+            clearResult();
+            verdict.show("Cannot plot " + csv.getFileName() + ".", "Arcwright.error.foreground");
+            figures.show(e.getMessage(), "Arcwright.error.foreground");
+            return;
+        }
+        generation++;
+        hideProgress();
+        clearResult();
+        lastCsv = csv;
+        pickCsv = csv;
+        pickPoints = points;
+        RadiusFeature f = session.selected().orElse(null);
+        picking = FramePick.start(f == null ? "" : f.designCase().units().symbol());
+        cancel.setVisible(true);
+        showPick();
+    }
+
+    private void showPick() {
+        verdict.show(picking.prompt(), "Label.foreground");
+        figures.show(pickPoints.size() + " points of " + pickCsv.getFileName() + ", drawn at true scale in the file's "
+                + "coordinates. Cancel stops picking; the fields above can still be typed.", "Arcwright.help.foreground");
+        plot.showPoints(pickPoints, picking.picked(), picking.units());
+    }
+
+    private void plotClicked(Point2 at, double pixelSize) {
+        if (picking == null) return;
+        picking = picking.click(at, pixelSize);
+        if (!picking.complete()) {
+            showPick();
+            return;
+        }
+        FramePick done = picking;
+        Path csv = pickCsv;
+        setFrame(done.vertexX(), done.vertexY(), done.legDegrees(1), done.legDegrees(2));
+        status.accept(done.prompt());
+        check(csv);
+    }
+
+    /** What the plot asks for while a frame is picked, else empty (tests). */
+    public String pickPrompt() { return picking == null ? "" : picking.prompt(); }
+
+    /** Where the plot draws the CSV point {@code (x, y)} while a frame is picked, in the plot's pixels (tests). */
+    public java.awt.Point plotPointOf(double x, double y) { return plot.screenOf(x, y); }
+
+    /** The fields of the CSV frame as typed or picked: vertex x, y, legs A and B in degrees (tests). */
+    public List<String> frameText() {
+        return List.of(vertexX.getText(), vertexY.getText(), legA.getText(), legB.getText());
+    }
+
     private void confirmed() {
         CheckRequests.NeedsConfirmation n = pending;
         if (n == null) return;
@@ -239,8 +368,8 @@ public final class CheckPanel extends JPanel {
         cancel.setVisible(true);
         verdict.show("Checking " + Path.of(src).getFileName() + " against " + ready.featureId() + "'s "
                 + ready.request().callout().describe() + "…", "Label.foreground");
-        if (ready.fileSays() != null) fileSays.show("The file says: " + ready.fileSays() + " (not judged: "
-                + ready.featureId() + "'s chosen callout is)", "Arcwright.help.foreground");
+        if (ready.fileSays() != null) showFileSays("The file says: " + ready.fileSays() + " (not judged: "
+                + ready.featureId() + "'s chosen callout is)");
         status.accept("Checking " + Path.of(src).getFileName() + "…");
         InspectionRequest req = ready.request();
         CompletableFuture.supplyAsync(() -> {
@@ -337,15 +466,25 @@ public final class CheckPanel extends JPanel {
         return what + ": judged against its chosen callout " + f.chosen().text() + " (lengths in " + u + ").";
     }
 
+    /** What the file itself states, or nothing (no empty line is left where a CSV states nothing). */
+    private void showFileSays(String text) {
+        fileSays.show(text, "Arcwright.help.foreground");
+        fileSays.setVisible(!text.isEmpty());
+    }
+
     /** Empties the verdict, the figures, the table and the plot, and disables Keep. */
     private void clearResult() {
+        picking = null;
+        pickPoints = null;
+        cancel.setVisible(false);
         judged = null;
         pending = null;
         pendingSource = null;
         confirm.setVisible(false);
-        fileSays.show("", "Arcwright.help.foreground");
+        showFileSays("");
         figures.show("", "Arcwright.help.foreground");
         comparisons.setRowCount(0);
+        tableScroll.setVisible(false);
         plot.show(null);
         refreshKeep();
     }
@@ -385,6 +524,8 @@ public final class CheckPanel extends JPanel {
         for (Comparison k : r.comparisons()) {
             comparisons.addRow(new Object[] {k.name(), k.callout(), k.pass() ? "conforms" : "does not conform", k.figure()});
         }
+        tableScroll.setVisible(comparisons.getRowCount() > 0);
+        revalidate();
         plot.show(r);
         refreshKeep();
         status.accept("Checked " + Path.of(src).getFileName() + " for " + ready.featureId() + ": "
@@ -470,28 +611,90 @@ public final class CheckPanel extends JPanel {
         }
     }
 
-    /** The inspection core's contour plot, scaled to the space it has. */
-    private static final class Plot extends JComponent {
+    /**
+     * The contour plot drawn as vectors at the component's own size with the window's type (the same
+     * drawing as the command line's {@code --plot}, whose summary the labels above already give), or,
+     * while a frame is picked, the CSV's points at true scale taking clicks.
+     */
+    private final class Plot extends JComponent {
         private static final long serialVersionUID = 1L;
         private transient InspectionResult result;
+        private transient PointSet points;
+        private transient List<Point2> picked = List.of();
+        private transient String units = "";
+        /** From the points' coordinates to the component's, as last painted (pick mode). */
+        private transient AffineTransform toScreen;
 
-        Plot() { setName("checkPlot"); }
+        Plot() {
+            setName("checkPlot");
+            addMouseListener(new MouseAdapter() {
+                @Override
+                public void mouseClicked(MouseEvent e) { clicked(e.getX(), e.getY()); }
+            });
+        }
 
         void show(InspectionResult r) {
             result = r;
+            points = null;
+            toScreen = null;
+            setCursor(Cursor.getDefaultCursor());
             repaint();
         }
 
+        void showPoints(PointSet p, List<Point2> picks, String unitSymbol) {
+            result = null;
+            points = p;
+            picked = picks;
+            units = unitSymbol;
+            toScreen = null;
+            setCursor(Cursor.getPredefinedCursor(Cursor.CROSSHAIR_CURSOR));
+            repaint();
+        }
+
+        /** Where {@code (x, y)} of the points is drawn; the transform is the one painting uses at this size. */
+        java.awt.Point screenOf(double x, double y) {
+            if (points == null) throw new IllegalStateException("no frame is being picked");
+            java.awt.geom.Point2D s = transform().transform(new java.awt.geom.Point2D.Double(x, y), null);
+            return new java.awt.Point((int) Math.round(s.getX()), (int) Math.round(s.getY()));
+        }
+
+        private AffineTransform transform() {
+            if (toScreen == null) {
+                BufferedImage probe = new BufferedImage(1, 1, BufferedImage.TYPE_INT_RGB);
+                Graphics2D g = probe.createGraphics();
+                try {
+                    toScreen = drawing().drawPoints(points, picked, units, g, getWidth(), getHeight(), Themes.font("Label.font"));
+                } finally {
+                    g.dispose();
+                }
+            }
+            return toScreen;
+        }
+
+        private void clicked(int x, int y) {
+            if (points == null) return;
+            try {
+                AffineTransform t = transform();
+                java.awt.geom.Point2D w = t.inverseTransform(new java.awt.geom.Point2D.Double(x, y), null);
+                plotClicked(new Point2(w.getX(), w.getY()), 1 / t.getScaleX());
+            } catch (java.awt.geom.NoninvertibleTransformException e) {
+                status.accept("The plot has no room to pick on; enlarge the window");
+            }
+        }
+
+        private ContourPlot drawing() { return new ContourPlot(Themes.drawingPalette("Arcwright.zone.background")); }
+
         @Override
         protected void paintComponent(Graphics g) {
-            if (result == null) return;
+            if (result == null && points == null) return;
             Graphics2D g2 = (Graphics2D) g.create();
             try {
-                double s = Math.min(getWidth() / (double) ContourPlot.WIDTH, getHeight() / (double) ContourPlot.HEIGHT);
-                g2.translate((getWidth() - ContourPlot.WIDTH * s) / 2, (getHeight() - ContourPlot.HEIGHT * s) / 2);
-                g2.scale(s, s);
-                g2.clipRect(0, 0, ContourPlot.WIDTH, ContourPlot.HEIGHT);
-                new ContourPlot(Themes.drawingPalette("Arcwright.zone.background")).draw(result, g2);
+                g2.clipRect(0, 0, getWidth(), getHeight());
+                if (points != null) {
+                    toScreen = drawing().drawPoints(points, picked, units, g2, getWidth(), getHeight(), Themes.font("Label.font"));
+                } else {
+                    drawing().draw(result, g2, getWidth(), getHeight(), Themes.font("Label.font"), false);
+                }
             } finally {
                 g2.dispose();
             }

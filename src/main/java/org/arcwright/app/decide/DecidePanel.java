@@ -82,6 +82,8 @@ public final class DecidePanel extends JPanel {
     private DesignCase loadedCase;
     /** The answers as the worksheet holds them for the feature shown: anything else is not kept yet. */
     private transient DecideForm.Draft loadedAnswers;
+    /** Narrowest the form and the results may be dragged, px: a field with its help, a card with its frame. */
+    private static final int FORM_MIN_WIDTH = 280, RESULTS_MIN_WIDTH = 320;
     private long document;
     private boolean binding;
     private long generation;
@@ -103,7 +105,13 @@ public final class DecidePanel extends JPanel {
         resultsScroll = scroll(buildResults());
         resultsScroll.setName("resultsScroll");
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, formScroll, resultsScroll);
+        split.setName("decideSplit");
+        // neither side can be dragged narrower than its fields and cards stay readable at; a window
+        // too narrow for both still shares the width by the weight
+        formScroll.setMinimumSize(new java.awt.Dimension(FORM_MIN_WIDTH, 0));
+        resultsScroll.setMinimumSize(new java.awt.Dimension(RESULTS_MIN_WIDTH, 0));
         split.setResizeWeight(0.45);
+        split.setContinuousLayout(true);
         split.addComponentListener(new java.awt.event.ComponentAdapter() {
             @Override
             public void componentResized(java.awt.event.ComponentEvent e) { splitFirstSized(split, this); }

@@ -72,7 +72,7 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
      * @param grade its grade
      */
     public record Point(int index, double x, double y, double excess, Grade grade) {
-        public ZonePicture.Pt at() { return new ZonePicture.Pt(x, y); }
+        public Point2 at() { return new Point2(x, y); }
     }
 
     /** The grade of a point {@code excess} beyond limits {@code band} apart. */
@@ -119,7 +119,7 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
                 y -= offset * measured[2];
             }
             double excess = excesses.excess(i);
-            ZonePicture.Pt p = frame.toView(x, y);
+            Point2 p = frame.toView(x, y);
             out.add(new Point(i, p.x(), p.y(), excess, grade(excess, band)));
         }
         BlendKind kind = corner.kind();
@@ -162,8 +162,8 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
     }
 
     /**
-     * The rigid move from the inspection's corner to the view's: the bisector onto 45°, leg A onto
-     * the leg at {@code 45° - θ/2} (a reflection when leg A lies counter-clockwise of leg B).
+     * The rigid move from the inspection's corner to the view's ({@link ZonePicture#viewCorner}):
+     * bisector onto bisector, leg A onto leg A (a reflection when leg A lies counter-clockwise of leg B).
      */
     private static final class Frame {
         private final Point2 vertex, u, w, bigU, bigW;
@@ -171,18 +171,21 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
         Frame(Corner c) {
             vertex = c.vertex();
             u = c.bisector();
-            Point2 a = c.legA();
-            w = a.minus(u.times(a.dot(u))).unit();
-            double half = c.halfAngle();
-            bigU = new Point2(Math.cos(Math.PI / 4), Math.sin(Math.PI / 4));
-            Point2 l1 = new Point2(Math.cos(Math.PI / 4 - half), Math.sin(Math.PI / 4 - half));
-            bigW = l1.minus(bigU.times(l1.dot(bigU))).unit();
+            w = across(c);
+            Corner view = ZonePicture.viewCorner(c.includedAngleDeg(), c.kind());
+            bigU = view.bisector();
+            bigW = across(view);
         }
 
-        ZonePicture.Pt toView(double x, double y) {
+        /** Unit direction across the bisector toward leg A. */
+        private static Point2 across(Corner c) {
+            Point2 a = c.legA(), u = c.bisector();
+            return a.minus(u.times(a.dot(u))).unit();
+        }
+
+        Point2 toView(double x, double y) {
             Point2 q = new Point2(x - vertex.x(), y - vertex.y());
-            double a = q.dot(u), b = q.dot(w);
-            return new ZonePicture.Pt(a * bigU.x() + b * bigW.x(), a * bigU.y() + b * bigW.y());
+            return bigU.times(q.dot(u)).plus(bigW.times(q.dot(w)));
         }
     }
 }

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import org.arcwright.worksheet.RadiusFeature;
+import org.arcwright.zone.Point2;
 
 /**
  * What the Zone view shows for the selected feature: the picture of its zone, and the measured
@@ -16,7 +17,7 @@ import org.arcwright.worksheet.RadiusFeature;
  * @param placed where each point is drawn (magnified like the zone), index for index with the points
  * @param pointsCaption the line about the points, empty without points
  */
-public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints measured, List<ZonePicture.Pt> placed,
+public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints measured, List<Point2> placed,
                         String pointsCaption) {
     /** The corner the view draws when no measured corner says otherwise. */
     public static final double DEFAULT_ANGLE = 90;
@@ -35,13 +36,13 @@ public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints meas
                 + "° corner";
         if (points.isEmpty()) return new ZoneScene(picture, heading, null, List.of(), "");
         MeasuredPoints m = points.get();
-        List<ZonePicture.Pt> placed = new ArrayList<>(m.points().size());
+        List<Point2> placed = new ArrayList<>(m.points().size());
         for (MeasuredPoints.Point p : m.points()) placed.add(picture.place(p.at()));
         int out = m.count(MeasuredPoints.Grade.OUTSIDE) + m.count(MeasuredPoints.Grade.FAR_OUTSIDE);
         StringBuilder caption = new StringBuilder().append(m.total()).append(" measured points");
         if (m.points().size() < m.total()) caption.append(" (").append(m.points().size()).append(" drawn)");
         caption.append(", ").append(out == 0 ? "none" : Integer.toString(out)).append(" outside ")
-                .append(m.callout().describe());
+                .append(m.callout().describe()).append(' ').append(feature.designCase().units().symbol());
         String mismatch = m.mismatch(spec, feature);
         if (!mismatch.isEmpty()) caption.append(" · ").append(mismatch);
         return new ZoneScene(picture, heading, m, placed, caption.toString());
@@ -51,8 +52,8 @@ public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints meas
      * Everything drawn, for fitting the view: the zone, the nominal, the shaded material and the
      * measured points as placed, so that Fit never leaves a point outside the view.
      */
-    public List<ZonePicture.Pt> extent() {
-        List<ZonePicture.Pt> all = new ArrayList<>(picture.allPoints());
+    public List<Point2> extent() {
+        List<Point2> all = new ArrayList<>(picture.allPoints());
         all.addAll(picture.material(picture.spec().kind(), picture.spec().angleDeg()));
         all.addAll(placed);
         return all;

@@ -119,7 +119,7 @@ public final class NotesPanel extends JPanel {
         JLabel title = new JLabel("Notes");
         title.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         add(title, "split 2");
-        add(write, "gapleft push");
+        add(write, "gapleft push, wmin 10");
         add(query, "wmin 10");
         add(count);
         JScrollPane facetScroll = new JScrollPane(facets);
@@ -132,7 +132,7 @@ public final class NotesPanel extends JPanel {
         // a long note or title must not widen the column: the panel's width comes from the window
         top.setPreferredSize(new Dimension(PREFERRED_WIDTH, 2 * MIN_PART));
         JPanel bottom = new JPanel(new MigLayout("insets 0, wrap 1, gap 4", "[grow,fill]", "[][grow,fill]"));
-        bottom.add(override, "growx 0, alignx right");
+        bottom.add(override, "growx 0, alignx right, wmin 10");
         bottom.add(new JScrollPane(reader), "wmin 10, hmin 60");
         bottom.setMinimumSize(new Dimension(10, MIN_PART));
         bottom.setPreferredSize(new Dimension(PREFERRED_WIDTH, 2 * MIN_PART));

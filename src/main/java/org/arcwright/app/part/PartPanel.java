@@ -32,6 +32,7 @@ public final class PartPanel extends JPanel {
     private final JLabel partName = new JLabel();
     private final JLabel material = new JLabel();
     private boolean syncing;
+    private final JToolBar bar = new JToolBar();
 
     /** @param rowActions add, duplicate and delete, shown above the table */
     public PartPanel(WorksheetSession session, List<Action> rowActions) {
@@ -49,7 +50,6 @@ public final class PartPanel extends JPanel {
         partNumber.setName("partNumber");
         partNumber.putClientProperty(FlatClientProperties.STYLE_CLASS, "h3");
         material.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
-        JToolBar bar = new JToolBar();
         bar.setFloatable(false);
         for (Action a : rowActions) {
             JButton b = bar.add(a);
@@ -58,10 +58,14 @@ public final class PartPanel extends JPanel {
             b.setVerticalTextPosition(javax.swing.SwingConstants.CENTER);
             b.setName("part." + a.getValue(Action.NAME));
         }
-        add(partNumber);
-        add(partName);
-        add(material);
-        add(bar);
+        add(partNumber, "wmin 10");
+        add(partName, "wmin 10");
+        add(material, "wmin 10");
+        add(bar, "wmin 10");
+        addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) { fitBar(); }
+        });
         add(new JScrollPane(table));
         session.listeners().add(this::sessionChanged);
         sessionChanged();
@@ -69,6 +73,38 @@ public final class PartPanel extends JPanel {
     }
 
     public JTable table() { return table; }
+
+    /**
+     * Shows the row buttons with their words when the column is wide enough for them, else as icons
+     * (each action's tooltip names it), so no button is cut off in a narrow column.
+     */
+    private void fitBar() {
+        java.awt.Insets in = getInsets();
+        int room = getWidth() - in.left - in.right - 16;
+        boolean iconsOnly = fullBarWidth() > room;
+        for (java.awt.Component c : bar.getComponents()) {
+            if (c instanceof JButton b && b.getHideActionText() != iconsOnly) {
+                b.setHideActionText(iconsOnly);
+                bar.revalidate();
+            }
+        }
+    }
+
+    /** The bar's width with every button's words shown. */
+    private int fullBarWidth() {
+        int w = bar.getInsets().left + bar.getInsets().right;
+        for (java.awt.Component c : bar.getComponents()) {
+            if (!(c instanceof JButton b)) {
+                w += c.getPreferredSize().width;
+                continue;
+            }
+            String text = (String) b.getAction().getValue(Action.NAME);
+            java.awt.Insets bi = b.getInsets();
+            int icon = b.getIcon() == null ? 0 : b.getIcon().getIconWidth() + b.getIconTextGap();
+            w += bi.left + bi.right + icon + b.getFontMetrics(b.getFont()).stringWidth(text);
+        }
+        return w;
+    }
 
     private void sizeColumns() {
         int[] widths = {34, 56, 100, 66, 130, 110};
@@ -84,6 +120,9 @@ public final class PartPanel extends JPanel {
             partNumber.setText(ws.part().number() + (ws.part().revision() == null ? "" : "  rev " + ws.part().revision()));
             partName.setText(ws.part().name() == null ? " " : ws.part().name());
             material.setText(ws.part().material() == null ? " " : ws.part().material());
+            // a narrow column ends these with an ellipsis; the tooltip keeps the whole line
+            partName.setToolTipText(ws.part().name());
+            material.setToolTipText(ws.part().material());
             model.fireTableDataChanged();
             session.selected().ifPresent(this::selectRow);
         } finally {

@@ -76,6 +76,13 @@ public final class MainWindow {
     private static final int PACKS_AT_THE_LATEST_MS = 1000;
     /** Shares of the window's width for the Part and the Notes panels; the work area has the rest. */
     private static final double PART_SHARE = 0.24, NOTES_SHARE = 0.2;
+    /**
+     * Below this window width the Notes column starts collapsed (its divider's arrow opens it), so the
+     * work area keeps room for the Decide form beside its results and for the Check plot at 1024×700.
+     */
+    private static final int NARROW_WIDTH = 1280;
+    /** Whether the columns were last set out for a narrow window; null before the first layout. */
+    private Boolean narrowColumns;
 
     private final AppServices services;
     private final Themes themes;
@@ -264,8 +271,29 @@ public final class MainWindow {
         int partWidth = (int) Math.round(w * PART_SHARE);
         main.setDividerLocation(partWidth);
         right.setDividerLocation(w - partWidth - (int) Math.round(w * NOTES_SHARE));
+        main.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) { fitColumns(); }
+        });
         frame.setLocationRelativeTo(null);
         rebuildRecent();
+    }
+
+    /**
+     * Sets the columns out again when the window crosses {@link #NARROW_WIDTH}: Part keeps its share,
+     * Notes collapses below the width and takes its share again above it. Between crossings the
+     * dividers stay where the user put them, and the resize weights share any change of width.
+     */
+    private void fitColumns() {
+        int w = main.getWidth();
+        if (w <= 0) return;
+        boolean narrow = w < NARROW_WIDTH;
+        if (Boolean.valueOf(narrow).equals(narrowColumns)) return;
+        narrowColumns = narrow;
+        int part = (int) Math.round(w * PART_SHARE);
+        int rightWidth = w - part - main.getDividerSize();
+        main.setDividerLocation(part);
+        right.setDividerLocation(narrow ? rightWidth - right.getDividerSize() : rightWidth - (int) Math.round(w * NOTES_SHARE));
     }
 
     private JToolBar toolBar() {

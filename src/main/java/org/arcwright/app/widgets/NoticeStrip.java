@@ -1,7 +1,6 @@
 package org.arcwright.app.widgets;
 
 import javax.swing.JButton;
-import javax.swing.JLabel;
 import javax.swing.JPanel;
 import net.miginfocom.swing.MigLayout;
 
@@ -11,7 +10,8 @@ import net.miginfocom.swing.MigLayout;
  */
 public final class NoticeStrip extends JPanel {
     private static final long serialVersionUID = 1L;
-    private final JLabel text = new JLabel();
+    /** Wraps, so a long message in a narrow window leaves room for the answers beside it. */
+    private final WrapLabel text = new WrapLabel("", "Label.font", "Label.foreground");
     private final JButton first = new JButton();
     private final JButton second = new JButton();
     private transient Runnable firstAction;
@@ -24,11 +24,30 @@ public final class NoticeStrip extends JPanel {
         second.setName("noticeSecond");
         first.addActionListener(e -> firstPressed());
         second.addActionListener(e -> secondPressed());
-        add(text);
-        add(first);
-        add(second);
+        add(text, "wmin 10");
+        add(first, "aligny top");
+        add(second, "aligny top");
         setVisible(false);
         updateUI();
+        addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) { refit(); }
+        });
+    }
+
+    /** A new width wraps the message to another number of lines: lay the window out again for the strip's height. */
+    private void refit() {
+        if (!isVisible() || getParent() == null) return;
+        // the cached sizes were measured at the old width: drop them here and in the panel above,
+        // which sets this strip's height from them
+        invalidate();
+        getParent().invalidate();
+        if (getParent() instanceof javax.swing.JComponent p) p.revalidate();
+    }
+
+    /** Whether the whole message shows: the strip is as high as its wrapped lines need (tests). */
+    public boolean messageFullyShown() {
+        return !isVisible() || (getHeight() >= getPreferredSize().height && text.getHeight() >= text.getPreferredSize().height);
     }
 
     @Override

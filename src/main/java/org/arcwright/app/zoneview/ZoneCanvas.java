@@ -20,6 +20,7 @@ import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.ZonePicture;
 import org.arcwright.app.model.ZoneScene;
 import org.arcwright.app.widgets.Themes;
+import org.arcwright.zone.Point2;
 
 /**
  * Draws a {@link ZoneScene}: the zone between its boundaries filled, the boundaries, the nominal
@@ -108,9 +109,9 @@ final class ZoneCanvas extends JComponent {
 
     /** Part coordinates to screen: fit the drawing, then zoom and pan; y up. */
     private AffineTransform transform() {
-        List<ZonePicture.Pt> pts = scene.extent();
+        List<Point2> pts = scene.extent();
         double minX = 0, minY = 0, maxX = 0, maxY = 0;
-        for (ZonePicture.Pt p : pts) {
+        for (Point2 p : pts) {
             minX = Math.min(minX, p.x());
             minY = Math.min(minY, p.y());
             maxX = Math.max(maxX, p.x());
@@ -134,7 +135,7 @@ final class ZoneCanvas extends JComponent {
         if (near >= 0) return scene.describe(near, units);
         try {
             Point2D p = transform().inverseTransform(e.getPoint(), null);
-            double d = picture.distanceToNominal(new ZonePicture.Pt(p.getX(), p.getY()));
+            double d = picture.distanceToNominal(new Point2(p.getX(), p.getY()));
             double m = picture.magnification();
             return "x " + Numbers.fixed(p.getX(), 3) + ", y " + Numbers.fixed(p.getY(), 3) + " " + units
                     + (m > 1 ? " · " + Numbers.fixed(d / m, 4) + " " + units + " from nominal (shown ×" + Numbers.trim(m) + ")"
@@ -151,7 +152,7 @@ final class ZoneCanvas extends JComponent {
         double best = HOVER_PIXELS * HOVER_PIXELS;
         int found = -1;
         Point2D s = new Point2D.Double();
-        List<ZonePicture.Pt> placed = scene.placed();
+        List<Point2> placed = scene.placed();
         for (int i = 0; i < placed.size(); i++) {
             t.transform(new Point2D.Double(placed.get(i).x(), placed.get(i).y()), s);
             double d = s.distanceSq(at);
@@ -246,7 +247,7 @@ final class ZoneCanvas extends JComponent {
             g2.fill(t.createTransformedShape(material));
             if (!picture.lower().isEmpty()) {
                 Path2D band = path(picture.lower(), false);
-                List<ZonePicture.Pt> up = picture.upper();
+                List<Point2> up = picture.upper();
                 for (int i = up.size() - 1; i >= 0; i--) band.lineTo(up.get(i).x(), up.get(i).y());
                 band.closePath();
                 g2.setColor(Themes.color("Arcwright.zone.band"));
@@ -271,7 +272,7 @@ final class ZoneCanvas extends JComponent {
         }
     }
 
-    private static Path2D path(List<ZonePicture.Pt> pts, boolean close) {
+    private static Path2D path(List<Point2> pts, boolean close) {
         Path2D p = new Path2D.Double();
         for (int i = 0; i < pts.size(); i++) {
             if (i == 0) p.moveTo(pts.get(i).x(), pts.get(i).y()); else p.lineTo(pts.get(i).x(), pts.get(i).y());

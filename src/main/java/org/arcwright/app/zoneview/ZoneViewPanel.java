@@ -56,7 +56,8 @@ public final class ZoneViewPanel extends JPanel {
         JButton out = new JButton("−");
         out.setToolTipText("Zoom out");
         out.addActionListener(e -> canvas.zoomBy(1 / 1.5));
-        JPanel bar = new JPanel(new MigLayout("insets 0, gap 8", "[grow,fill][][][][]", "[]"));
+        // insets as wide as the buttons' focus ring, which would otherwise be cut at the bar's edges
+        JPanel bar = new JPanel(new MigLayout("insets 2, gap 8", "[grow,fill][][][][]", "[]"));
         what.setName("zoneWhat");
         what.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         add(what, "wmin 10");
@@ -67,7 +68,7 @@ public final class ZoneViewPanel extends JPanel {
         bar.add(in, "split 3");
         bar.add(out);
         bar.add(fit);
-        add(bar, "wmin 10");
+        add(bar, "wmin 10, hmin pref");
         caption.setName("zoneCaption");
         width.setName("zoneWidth");
         pointsCaption.setName("zonePointsCaption");

@@ -94,11 +94,11 @@ class MeasuredPointsTest {
             double hi = 2 + mag * (2.2 - 2);
             for (double phi : new double[] {10, 45, 80}) {
                 double[] a = onBlend(1.8, phi);
-                ZonePicture.Pt p = pic.place(new ZonePicture.Pt(a[0], a[1]));
+                Point2 p = pic.place(new Point2(a[0], a[1]));
                 assertThat(Math.hypot(p.x() - lo, p.y() - lo)).as("on the lower arc at ×%s", mag).isEqualTo(lo, within(1e-9));
                 assertThat(distance(p, pic.lower())).isLessThan(1e-3);
                 double[] b = onBlend(2.2, phi);
-                ZonePicture.Pt q = pic.place(new ZonePicture.Pt(b[0], b[1]));
+                Point2 q = pic.place(new Point2(b[0], b[1]));
                 assertThat(Math.hypot(q.x() - hi, q.y() - hi)).isEqualTo(hi, within(1e-9));
             }
         }
@@ -111,13 +111,13 @@ class MeasuredPointsTest {
         ZoneSpec spec = ZoneSpec.of(f.designCase(), f.chosen().callout(), 90);
         ZonePicture pic = ZonePicture.of(spec, 5);
         double phi = Math.toRadians(30);
-        ZonePicture.Pt onBoundary = new ZonePicture.Pt(2 - 1.85 * Math.cos(phi), 2 - 1.85 * Math.sin(phi));
+        Point2 onBoundary = new Point2(2 - 1.85 * Math.cos(phi), 2 - 1.85 * Math.sin(phi));
         assertThat(pic.deviationTowardAir(onBoundary)).isEqualTo(0.15, within(1e-12));
-        ZonePicture.Pt drawn = pic.place(onBoundary);
+        Point2 drawn = pic.place(onBoundary);
         assertThat(Math.hypot(drawn.x() - 2, drawn.y() - 2)).isEqualTo(2 - 5 * 0.15, within(1e-12));
         assertThat(distance(drawn, pic.upper())).isLessThan(1e-3);
         // beside a leg the distance from it is magnified alike
-        ZonePicture.Pt leg = pic.place(new ZonePicture.Pt(3, -0.01));
+        Point2 leg = pic.place(new Point2(3, -0.01));
         assertThat(leg.x()).isEqualTo(3, within(1e-12));
         assertThat(leg.y()).isEqualTo(-0.05, within(1e-12));
     }
@@ -216,11 +216,11 @@ class MeasuredPointsTest {
         assertThat(s.measured(last)).isEmpty();
     }
 
-    private static double distance(ZonePicture.Pt p, List<ZonePicture.Pt> line) {
+    private static double distance(Point2 p, List<Point2> line) {
         double best = Double.POSITIVE_INFINITY;
-        List<ZonePicture.Pt> pts = new ArrayList<>(line);
+        List<Point2> pts = new ArrayList<>(line);
         for (int i = 1; i < pts.size(); i++) {
-            ZonePicture.Pt a = pts.get(i - 1), b = pts.get(i);
+            Point2 a = pts.get(i - 1), b = pts.get(i);
             double dx = b.x() - a.x(), dy = b.y() - a.y();
             double t = Math.max(0, Math.min(1, ((p.x() - a.x()) * dx + (p.y() - a.y()) * dy) / (dx * dx + dy * dy)));
             best = Math.min(best, Math.hypot(p.x() - a.x() - t * dx, p.y() - a.y() - t * dy));

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.util.List;
 import org.arcwright.callout.Callout;
 import org.arcwright.model.BlendKind;
+import org.arcwright.zone.Point2;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -49,7 +50,7 @@ class ZoneDistortionTest {
     @Test
     void fitTakesInTheMeasuredPointsAsPlaced() {
         ZonePicture p = ZonePicture.of(r2PlusMinus02(), 5, "mm");
-        ZonePicture.Pt far = new ZonePicture.Pt(40, -3);
+        Point2 far = new Point2(40, -3);
         ZoneScene scene = new ZoneScene(p, "F1", null, List.of(far), "");
         assertThat(scene.extent()).contains(far).containsAll(p.allPoints());
     }

@@ -5,17 +5,44 @@ import static org.assertj.core.api.Assertions.within;
 
 import org.arcwright.callout.Callout;
 import org.arcwright.model.BlendKind;
+import org.arcwright.zone.Point2;
 import org.junit.jupiter.api.Test;
 
 class ZonePictureTest {
+    /**
+     * The view draws the zone package's geometry, not a copy of it: at a 60° round, each magnified
+     * limit arc is the blend {@link org.arcwright.zone.Corner} gives for the magnified radius, and
+     * the legs run along the corner's legs (plane geometry of tangent arcs, common practice).
+     */
+    @Test
+    void theLimitArcsAreTheZonePackagesBlendsOfTheMagnifiedRadii() {
+        ZoneSpec spec = new ZoneSpec.LimitArcs(2, 1.8, 2.2, 60, BlendKind.ROUND, false);
+        ZonePicture p = ZonePicture.of(spec, 3);
+        org.arcwright.zone.Corner k = ZonePicture.viewCorner(60, BlendKind.ROUND);
+        double lo = 2 + 3 * (1.8 - 2), hi = 2 + 3 * (2.2 - 2);
+        for (Point2 pt : p.lower().subList(1, p.lower().size() - 1)) {
+            assertThat(pt.distance(k.centre(lo))).isEqualTo(lo, within(1e-9));
+        }
+        for (Point2 pt : p.upper().subList(1, p.upper().size() - 1)) {
+            assertThat(pt.distance(k.centre(hi))).isEqualTo(hi, within(1e-9));
+        }
+        assertThat(p.upper().get(1).distance(k.tangentA(hi))).isLessThan(1e-9);
+        assertThat(p.upper().get(p.upper().size() - 2).distance(k.tangentB(hi))).isLessThan(1e-9);
+        Point2 farA = p.nominal().get(0);
+        assertThat(farA.unit().minus(k.legA()).length()).isLessThan(1e-12);
+        // a point on the smaller limit is drawn on the smaller magnified limit arc
+        Point2 onMin = k.centre(1.8).minus(k.bisector().times(1.8));
+        assertThat(p.place(onMin).distance(k.centre(lo))).isEqualTo(lo, within(1e-9));
+    }
+
     @Test
     void theNominalBlendIsTangentToBothSurfacesOfARightAngle() {
         ZonePicture p = ZonePicture.of(new ZoneSpec.NominalOnly(2, 90, BlendKind.FILLET), 1);
         // centre at (r, r); every arc point lies r from it (tangent-arc geometry, common practice)
-        for (ZonePicture.Pt pt : p.nominal().subList(1, p.nominal().size() - 1)) {
+        for (Point2 pt : p.nominal().subList(1, p.nominal().size() - 1)) {
             assertThat(Math.hypot(pt.x() - 2, pt.y() - 2)).isEqualTo(2, within(1e-9));
         }
-        assertThat(p.distanceToNominal(new ZonePicture.Pt(2, 2))).isEqualTo(2, within(1e-3));
+        assertThat(p.distanceToNominal(new Point2(2, 2))).isEqualTo(2, within(1e-3));
     }
 
     @Test
@@ -24,7 +51,7 @@ class ZonePictureTest {
         ZonePicture p = ZonePicture.of(spec, 10);
         // crescent 0.1 × (√2 − 1) on the bisector of a 90° corner (see CrescentZone)
         assertThat(p.crescentWidth()).isEqualTo(0.1 * (Math.sqrt(2) - 1), within(1e-12));
-        ZonePicture.Pt mid = p.upper().get(p.upper().size() / 2);
+        Point2 mid = p.upper().get(p.upper().size() / 2);
         double upperRadiusDrawn = 0.55 + 10 * 0.05;
         assertThat(Math.hypot(mid.x() - upperRadiusDrawn, mid.y() - upperRadiusDrawn)).isEqualTo(upperRadiusDrawn, within(1e-9));
     }
@@ -33,9 +60,9 @@ class ZonePictureTest {
     void aProfileBandOfAFilletPutsItsOutwardPartAwayFromTheVertex() {
         ZoneSpec spec = ZoneSpec.of(Fixtures.fillet(2, null), new Callout.Profile(0.2, 0.15, java.util.List.of(), false, null), 90);
         ZonePicture p = ZonePicture.of(spec, 1);
-        ZonePicture.Pt nomMid = p.nominal().get(p.nominal().size() / 2);
-        ZonePicture.Pt lowMid = p.lower().get(p.lower().size() / 2);
-        ZonePicture.Pt upMid = p.upper().get(p.upper().size() / 2);
+        Point2 nomMid = p.nominal().get(p.nominal().size() / 2);
+        Point2 lowMid = p.lower().get(p.lower().size() / 2);
+        Point2 upMid = p.upper().get(p.upper().size() / 2);
         double toVertexNom = Math.hypot(nomMid.x(), nomMid.y());
         assertThat(toVertexNom - Math.hypot(lowMid.x(), lowMid.y())).isEqualTo(0.05, within(1e-9));
         assertThat(Math.hypot(upMid.x(), upMid.y()) - toVertexNom).isEqualTo(0.15, within(1e-9));
