@@ -31,4 +31,16 @@ public record InspectionRecord(String verdict, String source, String measuredOn,
     }
 
     public boolean passed() { return "pass".equals(verdict); }
+
+    /**
+     * What was judged and against what, for a status line: "measured: pass against CR 1.8-2.2 (mm),
+     * 2026-11-20". A record written before verdicts named their callout says so, since a verdict
+     * without its callout cannot be checked against the one now chosen.
+     */
+    public String describe() {
+        Object callout = figures.get("callout"), units = figures.get("units");
+        String against = callout == null ? " (the callout judged is not recorded)"
+                : " against " + callout + (units == null ? "" : " (" + units + ")");
+        return "measured: " + verdict + against + (measuredOn == null ? "" : ", " + measuredOn);
+    }
 }

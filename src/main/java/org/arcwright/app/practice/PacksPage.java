@@ -54,7 +54,7 @@ final class PacksPage extends JPanel {
         add(new JLabel("Packs in force, lowest layer first (a later pack wins over the ones above it):"));
         add(new JScrollPane(inForceList), "wmin 10, hmin 60");
         add(new JLabel("Team pack folders (from your settings; the team layers, in this order):"));
-        JPanel buttons = new JPanel(new MigLayout("insets 0, gap 6", "[][][][]"));
+        JPanel buttons = new JPanel(new MigLayout("insets 2, gap 6", "[][][][]"));
         buttons.add(add);
         buttons.add(remove);
         buttons.add(up);

@@ -165,7 +165,8 @@ public final class PracticeEditorPanel extends JPanel {
         JPanel right = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]", "[grow,fill][][]"));
         right.add(ruleViews, "wmin 10, hmin 10");
         right.add(verdict, "wmin 10");
-        JPanel actions = new JPanel(new MigLayout("insets 0, gap 6", "[][]"));
+        // insets as wide as the buttons' focus rings, which would otherwise be cut at the row's edges
+        JPanel actions = new JPanel(new MigLayout("insets 2, gap 6", "[][]"));
         actions.add(save, "wmin 10");
         actions.add(run);
         right.add(actions, "left, growx 0, wmin 10");
@@ -201,7 +202,7 @@ public final class PracticeEditorPanel extends JPanel {
     }
 
     private static JPanel toolbar(JButton... buttons) {
-        JPanel bar = new JPanel(new MigLayout("insets 0, gap 6", ""));
+        JPanel bar = new JPanel(new MigLayout("insets 2, gap 6", ""));
         for (JButton b : buttons) bar.add(b);
         return bar;
     }

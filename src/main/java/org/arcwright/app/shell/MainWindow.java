@@ -529,7 +529,8 @@ public final class MainWindow {
 
     private void sessionChanged() {
         frame.setTitle(session.title() + " — Arcwright");
-        status.feature(session.selected().map(f -> f.id() + " · " + f.status().label()).orElse("no feature"));
+        status.feature(session.selected().map(f -> f.id() + " · " + (f.inspection() != null ? f.inspection().describe()
+                : f.status().label())).orElse("no feature"));
         actions.refresh();
         autosaver.sessionChanged(session);
     }

@@ -45,7 +45,7 @@ class CheckPlotAndLayoutGuiTest {
     private static final Path HOUSING = Path.of("examples/inspect/housing-fillet-profile.json").toAbsolutePath();
     private static final Path HOUSING_CSV = Path.of("examples/inspect/housing-fillet-section.csv").toAbsolutePath();
     private static final int CHECK = 3;
-    private static final List<String> OTHER_AREAS = List.of("Practice editor", "Simulation");
+    private static final List<String> OTHER_AREAS = List.of("Simulation");
 
     @TempDir
     static Path config;
@@ -200,12 +200,18 @@ class CheckPlotAndLayoutGuiTest {
         assertThat(GuiSupport.onEdt(() -> notice.getY() >= toolbar.getY() + toolbar.getHeight())).isTrue();
         // the Decide form and its results side by side, each at least as wide as it stays readable at
         GuiSupport.onEdt(() -> window.showTab(0));
-        GuiSupport.settle(500);
-        int[] decide = GuiSupport.onEdt(() -> {
+        java.util.function.Supplier<int[]> sides = () -> GuiSupport.onEdt(() -> {
             javax.swing.JSplitPane split = (javax.swing.JSplitPane) fixture.robot().finder()
                     .findByName(window.frame(), "decideSplit", true);
             return new int[] {split.getLeftComponent().getWidth(), split.getRightComponent().getWidth()};
         });
+        // the split takes its first proportions once it has been laid out at its size: wait for that, not a fixed time
+        try {
+            GuiSupport.waitFor(() -> sides.get()[0] >= 280 && sides.get()[1] >= 320, 10);
+        } catch (AssertionError notYet) {
+            // the assertions below then say which side is short, and by how much
+        }
+        int[] decide = sides.get();
         assertThat(decide[0]).isGreaterThanOrEqualTo(280);
         assertThat(decide[1]).isGreaterThanOrEqualTo(320);
         // the Check plot keeps a usable height under the verdict and figures
