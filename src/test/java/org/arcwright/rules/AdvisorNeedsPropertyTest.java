@@ -95,7 +95,7 @@ class AdvisorNeedsPropertyTest {
         }
     }
 
-    @Property(tries = 300, seed = "1416")
+    @Property(tries = 200, seed = "1416")
     void aRuleAddedNeedIsProvedLikeADerivedOne(@ForAll("cases") DesignCase c, @ForAll("ruleNeeds") RuleNeed need) {
         Advice a = withRuleNeed(need).advise(c);
         assertThat(a.needs()).anySatisfy(n -> assertThat(n.source()).contains("rule team.company-need (team)"));
