@@ -8,7 +8,7 @@ import java.util.List;
  * One piece of tolerancing practice: when a case's facts match, recommend a control, add needs the feature has
  * by the company's practice, or state which controls the company prefers, with the reasoning an engineer would give
  * and the cautions that go with it. A rule does at least one of the three. Rules are data in a practice pack's
- * {@code rules/*.json}; the format is described in DEVELOPERS.md and decision records 0400 and 0403.
+ * {@code rules/*.json}; the format is described in DEVELOPERS.md and decision records 0400 and 0404.
  *
  * @param id unique across the packs in force; a later pack replaces it only by declaring an override
  * @param summary one line saying what the rule recommends
