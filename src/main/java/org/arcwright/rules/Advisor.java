@@ -50,6 +50,12 @@ public final class Advisor {
     private final Sizer sizer;
     private final Candidates candidates;
     private final DesignChanges designChanges;
+    /** The rules in force and their conditions, as arrays: the loop every case runs. */
+    private final RuleBook.Entry[] entries;
+    private final When[] whens;
+    /** The facts some rule tests; only these are read from each case. */
+    private final Fact[] usedFacts;
+    private static final int FACT_COUNT = Fact.values().length;
 
     public Advisor(RuleBook book, FilletChecks checks, NoteLinker notes) {
         this.book = Objects.requireNonNull(book, "book");
@@ -58,6 +64,14 @@ public final class Advisor {
         this.sizer = new Sizer(book);
         this.candidates = new Candidates(sizer);
         this.designChanges = new DesignChanges(checks);
+        this.entries = book.entries().toArray(new RuleBook.Entry[0]);
+        this.whens = new When[entries.length];
+        java.util.EnumSet<Fact> used = java.util.EnumSet.noneOf(Fact.class);
+        for (int i = 0; i < entries.length; i++) {
+            whens[i] = entries[i].rule().when();
+            used.addAll(whens[i].conditions().keySet());
+        }
+        this.usedFacts = used.toArray(new Fact[0]);
     }
 
     /**
@@ -79,14 +93,14 @@ public final class Advisor {
      */
     public Advice advise(DesignCase c) {
         List<String> warnings = new ArrayList<>();
-        Fact[] all = Fact.values();
-        Object[] facts = new Object[all.length];
-        for (Fact f : all) facts[f.ordinal()] = f.valueOf(c);
+        Object[] facts = new Object[FACT_COUNT];
+        for (Fact f : usedFacts) facts[f.ordinal()] = f.valueOf(c);
         List<RuleBook.Entry> firing = new ArrayList<>();
         List<Needs.Added> added = List.of();
         Preference preference = Preference.NONE;
-        for (RuleBook.Entry e : book.entries()) {
-            if (!e.rule().when().holds(facts)) continue;
+        for (int i = 0; i < entries.length; i++) {
+            if (!whens[i].holds(facts)) continue;
+            RuleBook.Entry e = entries[i];
             firing.add(e);
             Rule rule = e.rule();
             if (!rule.needs().isEmpty()) {
@@ -104,7 +118,7 @@ public final class Advisor {
             Recommendation r = fromRule(e, needs, facts, places, warnings, capabilitySources, preference);
             if (r != null) recs.add(r);
         }
-        boolean ruleUsable = recs.stream().anyMatch(Recommendation::usable);
+        boolean ruleUsable = anyUsable(recs);
         if (!ruleUsable || !preference.isEmpty()) {
             for (Candidates.Built b : candidates.build(needs, places)) {
                 CalloutKind kind = b.draft().plan.callout();
@@ -130,9 +144,11 @@ public final class Advisor {
             }
         }
         List<String> conflicts = conflicts(distinctRanks);
-        boolean usable = distinct.stream().anyMatch(Recommendation::usable);
+        boolean usable = anyUsable(distinct);
         double band = Double.isNaN(processBand) ? c.nominalRadius() * 0.2 : processBand;
-        List<DesignChange> changes = designChanges.propose(needs, band, places);
+        // only shown when nothing is usable or the nominal lies outside the needs' room: not worked out otherwise
+        List<DesignChange> changes = usable && !changesNeeded(needs, c) ? List.of()
+                : designChanges.propose(needs, band, places);
         if (!usable) {
             warnings.add(0, nothingMeets(needs, distinct, places));
         }
@@ -145,8 +161,12 @@ public final class Advisor {
         if (distinct.isEmpty()) {
             warnings.add("No rule fired for this case; the title block's general tolerance applies unless you state one.");
         }
-        return new Advice(c, needs.list(), distinct, usable && !changesNeeded(needs, c) ? List.of() : changes, conflicts,
-                warnings);
+        return new Advice(c, needs.list(), distinct, changes, conflicts, warnings);
+    }
+
+    private static boolean anyUsable(List<Recommendation> recs) {
+        for (int i = 0; i < recs.size(); i++) if (recs.get(i).usable()) return true;
+        return false;
     }
 
     /** True when the nominal itself lies outside the room the needs leave, so a change is worth stating. */

@@ -18,19 +18,70 @@ import org.arcwright.model.Loading;
  * its mating chamfer and by the step has one {@code radius-ceiling} whose maximum is the tighter of the two and
  * whose words name both sources and say which binds (likewise for several floors, or a form need stated twice).
  *
- * @param designCase the case
- * @param list one need per kind, in the order floor, ceiling, form, location
- * @param stressFloors the stress-target figures behind the floors, for the numbers and the design changes
- * @param stepHeight h = (D - d)/2 of a shoulder fillet with a section, else +∞
- * @param bounds every bound found, before merging, each with where it came from
+ * <p>A value: built once per case by {@link #derive}, read for every card.
  */
-public record Needs(DesignCase designCase, List<Need> list, List<FilletChecks.MinimumRadiusFigure> stressFloors,
-                    double stepHeight, List<Bound> bounds) {
+public final class Needs {
+    private final DesignCase designCase;
+    private final List<Need> list;
+    private final List<FilletChecks.MinimumRadiusFigure> stressFloors;
+    private final double stepHeight;
+    private final List<Bound> bounds;
+    // read for every card: worked out once
+    private final double floor;
+    private final double ceiling;
+    private final boolean floorUnreachable;
+    private final Bound governingFloor;
+    private final Bound governingCeiling;
+    private final int kinds;
 
-    public Needs {
-        list = List.copyOf(list);
-        stressFloors = List.copyOf(stressFloors);
-        bounds = List.copyOf(bounds);
+    public Needs(DesignCase designCase, List<Need> list, List<FilletChecks.MinimumRadiusFigure> stressFloors,
+                 double stepHeight, List<Bound> bounds) {
+        this.designCase = Objects.requireNonNull(designCase, "designCase");
+        this.list = List.copyOf(list);
+        this.stressFloors = List.copyOf(stressFloors);
+        this.stepHeight = stepHeight;
+        this.bounds = List.copyOf(bounds);
+        double f = 0;
+        double c = Double.POSITIVE_INFINITY;
+        boolean unreachable = false;
+        int k = 0;
+        for (Need n : this.list) k |= 1 << n.id().ordinal();
+        for (Bound b : this.bounds) {
+            Need n = b.need();
+            if (n.id() == Need.Kind.RADIUS_FLOOR) {
+                if (n.reachable()) f = Math.max(f, n.min());
+                else unreachable = true;
+            } else if (n.id() == Need.Kind.RADIUS_CEILING) {
+                c = Math.min(c, n.max());
+            }
+        }
+        this.floor = f;
+        this.ceiling = c;
+        this.floorUnreachable = unreachable;
+        this.kinds = k;
+        this.governingFloor = bindingOf(this.bounds, Need.Kind.RADIUS_FLOOR);
+        this.governingCeiling = bindingOf(this.bounds, Need.Kind.RADIUS_CEILING);
+    }
+
+    /** The case. */
+    public DesignCase designCase() { return designCase; }
+
+    /** One need per kind, in the order floor, ceiling, form, location. */
+    public List<Need> list() { return list; }
+
+    /** The stress-target figures behind the floors, for the numbers and the design changes. */
+    public List<FilletChecks.MinimumRadiusFigure> stressFloors() { return stressFloors; }
+
+    /** h = (D - d)/2 of a shoulder fillet with a section, else +∞. */
+    public double stepHeight() { return stepHeight; }
+
+    /** Every bound found, before merging, each with where it came from. */
+    public List<Bound> bounds() { return bounds; }
+
+    private static Bound bindingOf(List<Bound> bounds, Need.Kind kind) {
+        List<Bound> same = new ArrayList<>(2);
+        for (Bound b : bounds) if (b.need().id() == kind) same.add(b);
+        return same.isEmpty() ? null : binding(same);
     }
 
     /** Where a bound came from, which decides the words and the design changes that can lift it. */
@@ -270,47 +321,33 @@ public record Needs(DesignCase designCase, List<Need> list, List<FilletChecks.Mi
     }
 
     /** The largest floor of the reachable floors, or 0. */
-    public double floor() {
-        double f = 0;
-        for (Need n : list) if (n.id() == Need.Kind.RADIUS_FLOOR && n.reachable()) f = Math.max(f, n.min());
-        return f;
-    }
+    public double floor() { return floor; }
 
     /** The smallest ceiling, or +∞. */
-    public double ceiling() {
-        double c = Double.POSITIVE_INFINITY;
-        for (Need n : list) if (n.id() == Need.Kind.RADIUS_CEILING) c = Math.min(c, n.max());
-        return c;
-    }
+    public double ceiling() { return ceiling; }
 
     /** True when some floor cannot be met by any radius. */
-    public boolean floorUnreachable() {
-        for (Need n : list) if (n.id() == Need.Kind.RADIUS_FLOOR && !n.reachable()) return true;
-        return false;
-    }
+    public boolean floorUnreachable() { return floorUnreachable; }
 
     /** True when the radius needs leave no room: a floor above a ceiling, or an unreachable floor. */
-    public boolean radiusConflict() { return floorUnreachable() || floor() > ceiling() + 1e-9; }
+    public boolean radiusConflict() { return floorUnreachable || floor > ceiling + 1e-9; }
 
-    public boolean has(Need.Kind kind) {
-        for (Need n : list) if (n.id() == kind) return true;
-        return false;
-    }
+    public boolean has(Need.Kind kind) { return (kinds & 1 << kind.ordinal()) != 0; }
 
     /** The ceiling that decides {@link #ceiling()}, as found (before merging), if any. */
     public Optional<Need> governingCeiling() {
-        return governing(Need.Kind.RADIUS_CEILING).map(Bound::need);
+        return governingCeiling == null ? Optional.empty() : Optional.of(governingCeiling.need());
     }
 
     /** The floor that decides {@link #floor()} (an unreachable one first), as found (before merging), if any. */
     public Optional<Need> governingFloor() {
-        return governing(Need.Kind.RADIUS_FLOOR).map(Bound::need);
+        return governingFloor == null ? Optional.empty() : Optional.of(governingFloor.need());
     }
 
     /** The bound of {@code kind} that decides the merged need, if any. */
     public Optional<Bound> governing(Need.Kind kind) {
-        List<Bound> same = new ArrayList<>(2);
-        for (Bound b : bounds) if (b.need().id() == kind) same.add(b);
-        return same.isEmpty() ? Optional.empty() : Optional.of(binding(same));
+        if (kind == Need.Kind.RADIUS_FLOOR) return Optional.ofNullable(governingFloor);
+        if (kind == Need.Kind.RADIUS_CEILING) return Optional.ofNullable(governingCeiling);
+        return Optional.ofNullable(bindingOf(bounds, kind));
     }
 }

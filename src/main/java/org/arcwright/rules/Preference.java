@@ -56,6 +56,7 @@ record Preference(List<CalloutKind> order, Map<CalloutKind, String> by) {
 
     /** The trace line for a card of {@code kind}, when a rule prefers it. */
     Optional<String> explain(CalloutKind kind) {
+        if (order.isEmpty()) return Optional.empty();
         String rule = by.get(kind);
         if (rule == null) return Optional.empty();
         int rank = order.indexOf(kind) + 1;
