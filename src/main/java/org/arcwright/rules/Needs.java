@@ -241,17 +241,22 @@ public final class Needs {
         return new Bound(new Need(n.id(), min, max, why, source, true), Origin.RULE, "rule " + a.ruleId());
     }
 
+    private static final Need.Kind[] KINDS = Need.Kind.values();
+
     /** One need per kind: the tightest bound, every source named, the binding one said. */
     private static List<Need> merge(List<Bound> bounds, String u) {
         List<Need> out = new ArrayList<>(4);
-        for (Need.Kind kind : Need.Kind.values()) {
-            List<Bound> same = new ArrayList<>(2);
-            for (Bound b : bounds) if (b.need().id() == kind) same.add(b);
-            if (same.isEmpty()) continue;
-            if (same.size() == 1) {
-                out.add(same.get(0).need());
+        int[] count = new int[KINDS.length];
+        for (Bound b : bounds) count[b.need().id().ordinal()]++;
+        for (Need.Kind kind : KINDS) {
+            int k = count[kind.ordinal()];
+            if (k == 0) continue;
+            if (k == 1) {
+                for (Bound b : bounds) if (b.need().id() == kind) out.add(b.need());
                 continue;
             }
+            List<Bound> same = new ArrayList<>(k);
+            for (Bound b : bounds) if (b.need().id() == kind) same.add(b);
             StringBuilder why = new StringBuilder();
             StringBuilder source = new StringBuilder();
             for (Bound b : same) {

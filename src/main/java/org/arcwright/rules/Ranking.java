@@ -25,13 +25,24 @@ import org.arcwright.callout.Callout;
 record Ranking(Recommendation recommendation, int preferred, int elements, int inspection, int cost) {
 
     /** Best first. */
-    static final Comparator<Ranking> ORDER = Comparator.comparingInt(Ranking::needsClass)
-            .thenComparingInt(Ranking::preferred)
-            .thenComparingInt(Ranking::elements)
-            .thenComparing(Comparator.comparingDouble((Ranking r) -> r.recommendation().score()).reversed())
-            .thenComparingInt(Ranking::inspection)
-            .thenComparingInt(Ranking::cost)
-            .thenComparing(r -> r.recommendation().ruleId());
+    static final Comparator<Ranking> ORDER = Ranking::compare;
+
+    /** Needs class, preference, elements, score (higher first), inspection, cost, rule id: written out, as it runs per case. */
+    private static int compare(Ranking a, Ranking b) {
+        int c = Integer.compare(a.needsClass(), b.needsClass());
+        if (c != 0) return c;
+        c = Integer.compare(a.preferred, b.preferred);
+        if (c != 0) return c;
+        c = Integer.compare(a.elements, b.elements);
+        if (c != 0) return c;
+        c = Double.compare(b.recommendation.score(), a.recommendation.score());
+        if (c != 0) return c;
+        c = Integer.compare(a.inspection, b.inspection);
+        if (c != 0) return c;
+        c = Integer.compare(a.cost, b.cost);
+        if (c != 0) return c;
+        return a.recommendation.ruleId().compareTo(b.recommendation.ruleId());
+    }
 
     /** 0 usable, 1 meets every need but demoted, 2 not demoted but misses a need, 3 both. */
     int needsClass() {
