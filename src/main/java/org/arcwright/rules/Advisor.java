@@ -50,6 +50,12 @@ public final class Advisor {
     private final Sizer sizer;
     private final Candidates candidates;
     private final DesignChanges designChanges;
+    /** The rules in force and their conditions, as arrays: the loop every case runs. */
+    private final RuleBook.Entry[] entries;
+    private final When[] whens;
+    /** The facts some rule tests; only these are read from each case. */
+    private final Fact[] usedFacts;
+    private static final int FACT_COUNT = Fact.values().length;
 
     public Advisor(RuleBook book, FilletChecks checks, NoteLinker notes) {
         this.book = Objects.requireNonNull(book, "book");
@@ -58,6 +64,14 @@ public final class Advisor {
         this.sizer = new Sizer(book);
         this.candidates = new Candidates(sizer);
         this.designChanges = new DesignChanges(checks);
+        this.entries = book.entries().toArray(new RuleBook.Entry[0]);
+        this.whens = new When[entries.length];
+        java.util.EnumSet<Fact> used = java.util.EnumSet.noneOf(Fact.class);
+        for (int i = 0; i < entries.length; i++) {
+            whens[i] = entries[i].rule().when();
+            used.addAll(whens[i].conditions().keySet());
+        }
+        this.usedFacts = used.toArray(new Fact[0]);
     }
 
     /**
@@ -79,29 +93,46 @@ public final class Advisor {
      */
     public Advice advise(DesignCase c) {
         List<String> warnings = new ArrayList<>();
-        Needs needs = Needs.derive(c, checks, warnings);
-        Fact[] all = Fact.values();
-        Object[] facts = new Object[all.length];
-        for (Fact f : all) facts[f.ordinal()] = f.valueOf(c);
+        Object[] facts = new Object[FACT_COUNT];
+        for (Fact f : usedFacts) facts[f.ordinal()] = f.valueOf(c);
+        List<RuleBook.Entry> firing = new ArrayList<>();
+        List<Needs.Added> added = List.of();
+        Preference preference = Preference.NONE;
+        for (int i = 0; i < entries.length; i++) {
+            if (!whens[i].holds(facts)) continue;
+            RuleBook.Entry e = entries[i];
+            firing.add(e);
+            Rule rule = e.rule();
+            if (!rule.needs().isEmpty()) {
+                if (added.isEmpty()) added = new ArrayList<>(2);
+                for (RuleNeed n : rule.needs()) added.add(new Needs.Added(n, rule.id(), e.pack()));
+            }
+            if (!rule.prefer().isEmpty()) preference = preference.with(rule);
+        }
+        Needs needs = Needs.derive(c, checks, warnings, added);
         int places = Sizer.places(c);
         List<Recommendation> recs = new ArrayList<>();
         java.util.Map<Double, String> capabilitySources = new java.util.HashMap<>(4);
-        for (RuleBook.Entry e : book.entries()) {
-            if (!e.rule().when().holds(facts)) continue;
-            Recommendation r = fromRule(e, needs, facts, places, warnings, capabilitySources);
+        for (RuleBook.Entry e : firing) {
+            if (e.rule().recommend() == null) continue;
+            Recommendation r = fromRule(e, needs, facts, places, warnings, capabilitySources, preference);
             if (r != null) recs.add(r);
         }
-        boolean ruleUsable = recs.stream().anyMatch(Recommendation::usable);
-        if (!ruleUsable) {
+        boolean ruleUsable = anyUsable(recs);
+        if (!ruleUsable || !preference.isEmpty()) {
             for (Candidates.Built b : candidates.build(needs, places)) {
+                CalloutKind kind = b.draft().plan.callout();
+                // with a usable rule card, only the preferred controls no rule card offers are worth building
+                if (ruleUsable && (preference.rank(kind) == Preference.UNLISTED || offers(recs, kind))) continue;
+                List<String> trace = new ArrayList<>(List.of("built from the needs: " + b.id()));
+                preference.explain(kind).ifPresent(trace::add);
                 recs.add(finish(b.id(), b.draft(), b.datums(), needs, Candidates.SCORE, b.because(),
-                        new ArrayList<>(b.cautions()), b.references(), new ArrayList<>(List.of("built from the needs: "
-                                + b.id())), List.of(), b.demoted()));
+                        new ArrayList<>(b.cautions()), b.references(), trace, List.of(), b.demoted()));
             }
         }
         double processBand = sizer.plusMinus(c, c.nominalRadius()).map(t -> 2 * t).orElse(Double.NaN);
         List<Ranking> ranked = new ArrayList<>(recs.size());
-        for (Recommendation r : recs) ranked.add(Ranking.of(r, processBand));
+        for (Recommendation r : recs) ranked.add(Ranking.of(r, processBand, preference));
         ranked.sort(Ranking.ORDER);
         List<Recommendation> distinct = new ArrayList<>(ranked.size());
         List<Ranking> distinctRanks = new ArrayList<>(ranked.size());
@@ -113,9 +144,11 @@ public final class Advisor {
             }
         }
         List<String> conflicts = conflicts(distinctRanks);
-        boolean usable = distinct.stream().anyMatch(Recommendation::usable);
+        boolean usable = anyUsable(distinct);
         double band = Double.isNaN(processBand) ? c.nominalRadius() * 0.2 : processBand;
-        List<DesignChange> changes = designChanges.propose(needs, band, places);
+        // only shown when nothing is usable or the nominal lies outside the needs' room: not worked out otherwise
+        List<DesignChange> changes = usable && !changesNeeded(needs, c) ? List.of()
+                : designChanges.propose(needs, band, places);
         if (!usable) {
             warnings.add(0, nothingMeets(needs, distinct, places));
         }
@@ -128,8 +161,12 @@ public final class Advisor {
         if (distinct.isEmpty()) {
             warnings.add("No rule fired for this case; the title block's general tolerance applies unless you state one.");
         }
-        return new Advice(c, needs.list(), distinct, usable && !changesNeeded(needs, c) ? List.of() : changes, conflicts,
-                warnings);
+        return new Advice(c, needs.list(), distinct, changes, conflicts, warnings);
+    }
+
+    private static boolean anyUsable(List<Recommendation> recs) {
+        for (int i = 0; i < recs.size(); i++) if (recs.get(i).usable()) return true;
+        return false;
     }
 
     /** True when the nominal itself lies outside the room the needs leave, so a change is worth stating. */
@@ -164,7 +201,7 @@ public final class Advisor {
             if (a.needsClass() != 0) break;
             for (int j = i + 1; j < ranked.size(); j++) {
                 Ranking b = ranked.get(j);
-                if (b.needsClass() != 0 || b.elements() != a.elements()
+                if (b.needsClass() != 0 || b.preferred() != a.preferred() || b.elements() != a.elements()
                         || b.recommendation().score() != a.recommendation().score()) break;
                 if (!a.recommendation().callout().typeName().equals(b.recommendation().callout().typeName())) {
                     conflicts.add("'" + a.recommendation().ruleId() + "' (" + a.recommendation().callout().typeName()
@@ -177,8 +214,16 @@ public final class Advisor {
         return conflicts;
     }
 
+    /** True when a usable card of {@code kind} is already among {@code recs}. */
+    private static boolean offers(List<Recommendation> recs, CalloutKind kind) {
+        for (Recommendation r : recs) {
+            if (r.usable() && r.callout().typeName().equals(kind.key())) return true;
+        }
+        return false;
+    }
+
     private Recommendation fromRule(RuleBook.Entry e, Needs needs, Object[] facts, int places, List<String> warnings,
-                                    java.util.Map<Double, String> capabilitySources) {
+                                    java.util.Map<Double, String> capabilitySources, Preference preference) {
         Rule rule = e.rule();
         CalloutPlan plan = rule.recommend();
         DesignCase c = needs.designCase();
@@ -198,6 +243,7 @@ public final class Advisor {
         trace.add(e.describe());
         List<String> fired = rule.when().firedBy(facts);
         trace.add(fired.isEmpty() ? "fires on every case" : "fired by " + String.join(", ", fired));
+        preference.explain(plan.callout()).ifPresent(trace::add);
         sizer.size(d, cautions, capabilitySources);
         trace.add("tolerance from " + d.source);
         if (plan.callout() == CalloutKind.PROFILE || plan.callout() == CalloutKind.COMPOSITE_PROFILE) {
@@ -273,11 +319,13 @@ public final class Advisor {
                         : "Give the radius its own limits with the minimum at or above " + fmt(floor, d.places) + "."));
             }
         }
-        Optional<Need> ce = needs.governingCeiling();
+        Optional<Needs.Bound> ce = needs.governing(Need.Kind.RADIUS_CEILING);
         if (ce.isPresent() && d.hi() > ceiling + SLACK) {
-            boolean seating = ce.get().source().startsWith("mating");
+            boolean seating = ce.get().origin() == Needs.Origin.MATING;
             String why = "the largest radius the callout allows, " + fmt(d.hi(), d.places) + ", "
-                    + (seating ? "fouls the mating corner" : "exceeds the step height") + " (" + ce.get().why() + ")";
+                    + (seating ? "fouls the mating corner" : ce.get().origin() == Needs.Origin.STEP
+                    ? "exceeds the step height" : "exceeds the ceiling of " + ce.get().label()) + " ("
+                    + ce.get().need().why() + ")";
             double bandBefore = d.hi() - d.lo();
             if (d.lowerUpperEnd(ceiling, floor)) {
                 cautions.add("Limits adjusted: " + why + "; the upper end was lowered to " + fmt(d.hi(), d.places) + ".");
@@ -288,7 +336,9 @@ public final class Advisor {
                     cautions.add("Demoted: to stay under the ceiling" + (floor > 0 ? " and above the floor" : "") + " the "
                             + d.describeRange() + (d.isProfile() ? " leaves" : " leave") + " a band of "
                             + fmt(d.hi() - d.lo(), d.places) + ", " + tooTight.get() + ". What would work: "
-                            + (seating ? "a larger chamfer on the mating part or a spacer" : "a larger step")
+                            + (seating ? "a larger chamfer on the mating part or a spacer"
+                            : ce.get().origin() == Needs.Origin.STEP ? "a larger step"
+                            : "a review of " + ce.get().label() + " with its owner")
                             + (floor > 0 ? ", a relief groove or undercut" : ", a smaller nominal")
                             + ", or a finishing process that holds the band (ask the shop).");
                     trace.add("demoted: the adjusted band is narrower than the process holds");

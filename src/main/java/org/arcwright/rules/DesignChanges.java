@@ -29,8 +29,8 @@ final class DesignChanges {
         double floor = needs.floor();
         double ceiling = needs.ceiling();
         double h = needs.stepHeight();
-        Optional<Need> ceilingNeed = needs.governingCeiling();
-        boolean seatingCeiling = ceilingNeed.isPresent() && ceilingNeed.get().source().startsWith("mating");
+        boolean seatingCeiling = needs.governing(Need.Kind.RADIUS_CEILING)
+                .filter(b -> b.origin() == Needs.Origin.MATING).isPresent();
         boolean roomForBand = !needs.floorUnreachable() && ceiling - floor >= band - 1e-9;
         double nominal = c.nominalRadius();
         if (roomForBand && nominal >= floor - 1e-9 && nominal <= ceiling + 1e-9) return out;

@@ -49,5 +49,10 @@ public record Need(Kind id, Double min, Double max, String why, String source, @
 
         @JsonValue
         public String key() { return key; }
+
+        @com.fasterxml.jackson.annotation.JsonCreator
+        public static Kind fromKey(String key) {
+            return org.arcwright.model.Keys.fromKey(Kind.class, values(), key, Kind::key);
+        }
     }
 }

@@ -79,10 +79,17 @@ public final class PackCheck {
         return new Report(packName, advisor.book().problems(), advisor.book().conflicts(), own);
     }
 
+    private static String keys(List<Need.Kind> kinds) {
+        List<String> out = new ArrayList<>(kinds.size());
+        for (Need.Kind k : kinds) out.add(k.key());
+        return String.join(", ", out);
+    }
+
     private ExampleResult runOne(RuleBook.Entry e, RuleExample ex, boolean own) {
         RuleExample.Expectation want = ex.expect();
         String expected = want.first() + (want.callout() == null ? "" : " (" + want.callout().key() + ")")
-                + (want.textContains() == null ? "" : " drawn with \"" + want.textContains() + "\"");
+                + (want.textContains() == null ? "" : " drawn with \"" + want.textContains() + "\"")
+                + (want.needs().isEmpty() ? "" : ", meeting " + keys(want.needs()) + " added by " + e.rule().id());
         String actual;
         boolean passed;
         try {
@@ -96,6 +103,15 @@ public final class PackCheck {
                 passed = r.ruleId().equals(want.first())
                         && (want.callout() == null || r.callout().typeName().equals(want.callout().key()))
                         && (want.textContains() == null || r.text().contains(want.textContains()));
+                for (Need.Kind k : want.needs()) {
+                    boolean added = advice.needs().stream().anyMatch(n -> n.id() == k
+                            && n.source().contains("rule " + e.rule().id() + " ("));
+                    boolean met = Boolean.TRUE.equals(r.meets().get(k.key()));
+                    if (!added || !met) {
+                        passed = false;
+                        actual += added ? "; does not meet " + k.key() : "; no " + k.key() + " need from " + e.rule().id();
+                    }
+                }
             }
         } catch (InputProblem p) {
             actual = "error: " + p.getMessage();

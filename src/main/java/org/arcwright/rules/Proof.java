@@ -37,38 +37,37 @@ public record Proof(Map<String, Boolean> meets, boolean meetsAll, List<String> u
      * @param refinement a radius refinement drawn with the profile, or null
      */
     public static Proof of(Needs needs, Callout control, Callout refinement, double lo, double hi, int places) {
-        Map<String, Boolean> meets = new LinkedHashMap<>();
-        List<String> unmet = new ArrayList<>();
-        String u = " " + needs.designCase().units().symbol();
+        Map<String, Boolean> meets = new LinkedHashMap<>(8);
+        List<String> unmet = new ArrayList<>(2);
+        boolean all = true;
         for (Need n : needs.list()) {
-            boolean ok;
-            String why;
-            switch (n.id()) {
-                case RADIUS_FLOOR -> {
-                    ok = n.reachable() && lo >= n.min() - SLACK;
-                    why = n.reachable() ? "admits " + Advisor.fmt(lo, places + 1) + u + ", under the floor "
-                            + Advisor.fmt(n.min(), places + 1) + u + " (" + n.why() + ")" : n.why();
-                }
-                case RADIUS_CEILING -> {
-                    ok = hi <= n.max() + SLACK;
-                    why = "admits " + Advisor.fmt(hi, places + 1) + u + ", over the ceiling " + Advisor.fmt(n.max(), places + 1)
-                            + u + " (" + n.why() + ")";
-                }
-                case FORM -> {
-                    ok = controlsForm(control);
-                    why = "a " + Callouts.name(control) + " bounds size only: flats and reversals inside its crescent pass";
-                }
-                default -> {
-                    ok = locates(control);
-                    why = "a " + Callouts.name(control) + (control instanceof Callout.Profile
-                            ? " without datums floats: it does not locate the blend" : " does not locate the blend");
-                }
+            boolean ok = switch (n.id()) {
+                case RADIUS_FLOOR -> n.reachable() && lo >= n.min() - SLACK;
+                case RADIUS_CEILING -> hi <= n.max() + SLACK;
+                case FORM -> controlsForm(control);
+                default -> locates(control);
+            };
+            if (meets.put(n.key(), ok) == Boolean.FALSE) meets.put(n.key(), Boolean.FALSE);
+            if (!ok) {
+                all = false;
+                String u = " " + needs.designCase().units().symbol();
+                unmet.add("Does not meet " + n.key() + ": " + why(n, control, lo, hi, places, u) + ".");
             }
-            meets.merge(n.key(), ok, Boolean::logicalAnd);
-            if (!ok) unmet.add("Does not meet " + n.key() + ": " + why + ".");
         }
-        boolean all = !meets.containsValue(Boolean.FALSE);
         return new Proof(meets, all, unmet);
+    }
+
+    /** Why {@code control} does not meet {@code n}, with the numbers: built only for the needs it misses. */
+    private static String why(Need n, Callout control, double lo, double hi, int places, String u) {
+        return switch (n.id()) {
+            case RADIUS_FLOOR -> n.reachable() ? "admits " + Advisor.fmt(lo, places + 1) + u + ", under the floor "
+                    + Advisor.fmt(n.min(), places + 1) + u + " (" + n.why() + ")" : n.why();
+            case RADIUS_CEILING -> "admits " + Advisor.fmt(hi, places + 1) + u + ", over the ceiling "
+                    + Advisor.fmt(n.max(), places + 1) + u + " (" + n.why() + ")";
+            case FORM -> "a " + Callouts.name(control) + " bounds size only: flats and reversals inside its crescent pass";
+            default -> "a " + Callouts.name(control) + (control instanceof Callout.Profile
+                    ? " without datums floats: it does not locate the blend" : " does not locate the blend");
+        };
     }
 
     /** True when the control bounds the form of the blend, not only its size. */

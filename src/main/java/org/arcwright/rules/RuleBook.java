@@ -44,7 +44,8 @@ public final class RuleBook {
     public record Entry(Rule rule, String pack, PackLayer layer, String file, String replaces, String describe) {
         public Entry(Rule rule, String pack, PackLayer layer, String file, String replaces) {
             this(rule, pack, layer, file, replaces, "rule " + rule.id() + " from " + pack
-                    + (replaces == null ? "" : " (overrides " + replaces + ")") + ", weight " + rule.weight());
+                    + (replaces == null ? "" : " (overrides " + replaces + ")")
+                    + (rule.weight() == 0 ? ", adds needs" : ", weight " + rule.weight()));
         }
 
         public Entry {
@@ -187,8 +188,10 @@ public final class RuleBook {
             while (end < entries.size() && entries.get(end).rule().weight() == w) end++;
             for (int i = start; i < end; i++) {
                 Rule a = entries.get(i).rule();
+                if (a.recommend() == null) continue;
                 for (int j = i + 1; j < end; j++) {
                     Rule b = entries.get(j).rule();
+                    if (b.recommend() == null) continue;
                     if (a.recommend().sameControlAs(b.recommend()) || !a.when().overlaps(b.when())) continue;
                     out.add(new RuleConflict(a.id(), b.id(), w, "rules '" + a.id() + "' (" + entries.get(i).pack()
                             + ") and '" + b.id() + "' (" + entries.get(j).pack() + ") can fire on the same case at "

@@ -7,6 +7,7 @@
  *   <li>the case it reads ({@link org.arcwright.model.DesignCase}, in the central model package).</li>
  *   <li>{@link org.arcwright.rules.Rule}: {@code when} ({@link org.arcwright.rules.When}, conditions on
  *       {@link org.arcwright.rules.Fact}s), {@code recommend} ({@link org.arcwright.rules.CalloutPlan}),
+ *       needs it adds ({@link org.arcwright.rules.RuleNeed}), controls it prefers ({@code Preference}),
  *       weight, reasoning, cautions, references and self-test examples.</li>
  *   <li>{@link org.arcwright.rules.RuleBook}: the rules in force after layering every pack, with what
  *       failed to load and the conflicts found; never stops at the first bad file.</li>

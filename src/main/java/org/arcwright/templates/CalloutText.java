@@ -1,270 +1,96 @@
 package org.arcwright.templates;
 
-import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 import org.arcwright.callout.Callout;
+import org.arcwright.callout.CalloutFormatter;
 import org.arcwright.callout.DatumReference;
 import org.arcwright.callout.Extent;
-import org.arcwright.callout.ProfileTier;
 import org.arcwright.tolerance.DrawingStyle;
-import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
 
 /**
- * A callout as text: in words for notes and reviews, as one plain ASCII line, and as one line with
- * the Unicode GD&amp;T code points for pasting into CAD notes. Numbers go through
- * {@link DrawingStyle}; nothing here rounds on its own.
- *
- * <p>Code points used (Unicode charts, Miscellaneous Technical and Enclosed Alphanumerics):
- * U+2313 SEGMENT (profile of a surface), U+24C2 CIRCLED LATIN CAPITAL LETTER M (MMB), U+24C1
- * CIRCLED L (LMB), U+24CA CIRCLED U (unequally disposed). From memory, not from a chart at hand:
- * U+25B3 WHITE UP-POINTING TRIANGLE for the dynamic profile modifier and U+2194 LEFT RIGHT ARROW for
- * the between indication, both as commonly pasted (common practice).
+ * A callout as text for notes, sheets and frames: in words, as one plain ASCII line, and as one line with the
+ * Unicode GD&amp;T code points for pasting into CAD notes. Every text comes from {@link CalloutFormatter}, the one
+ * formatter the advisor uses too, so numbers go through {@link DrawingStyle} and each standard gets its own marks;
+ * this class only keeps the names the templates and the renderer call.
  */
 public final class CalloutText {
     /** Profile of a surface, U+2313. */
-    public static final String PROFILE = "\u2313";
+    public static final String PROFILE = CalloutFormatter.PROFILE;
     /** Circled M, U+24C2: maximum material boundary. */
-    public static final String CIRCLED_M = "\u24C2";
+    public static final String CIRCLED_M = CalloutFormatter.CIRCLED_M;
     /** Circled L, U+24C1: least material boundary. */
-    public static final String CIRCLED_L = "\u24C1";
+    public static final String CIRCLED_L = CalloutFormatter.CIRCLED_L;
     /** Circled U, U+24CA: unequally disposed profile (ASME Y14.5-2018). */
-    public static final String CIRCLED_U = "\u24CA";
+    public static final String CIRCLED_U = CalloutFormatter.CIRCLED_U;
     /** Triangle for the dynamic profile modifier (from memory). */
-    public static final String DYNAMIC = "\u25B3";
+    public static final String DYNAMIC = CalloutFormatter.DYNAMIC;
     /** Left-right arrow for between (from memory). */
-    public static final String BETWEEN = "\u2194";
+    public static final String BETWEEN = CalloutFormatter.BETWEEN;
+    /** ISO 1101:2017's modifier for a zone offset by an unspecified amount. */
+    public static final String ISO_UNSPECIFIED_OFFSET = CalloutFormatter.ISO_UNSPECIFIED_OFFSET;
 
-    private final DrawingStyle style;
-    private final Units units;
+    private final CalloutFormatter format;
 
     public CalloutText(DrawingStyle style, Units units) {
-        this.style = Objects.requireNonNull(style, "style");
-        this.units = Objects.requireNonNull(units, "units");
+        this.format = new CalloutFormatter(Objects.requireNonNull(style, "style"), Objects.requireNonNull(units, "units"));
     }
 
     /** The units symbol, {@code mm} or {@code in}. */
-    public String unitsSymbol() { return units.symbol(); }
+    public String unitsSymbol() { return format.units().symbol(); }
 
     /** A tolerance value as this style writes it. */
-    public String value(double v) { return style.formatValue(v, units, 4); }
+    public String value(double v) { return format.value(v); }
 
     /** Two limits of one size with the same number of places. */
-    public String[] limits(double min, double max) { return style.formatLimitPair(min, max, units, 4); }
+    public String[] limits(double min, double max) { return format.limits(min, max); }
 
     /** The ISO offset value, signed: {@code +0.02}, {@code -0.03}, {@code 0}. */
-    public String signed(double v) {
-        String s = value(v);
-        return v > 0 && Double.parseDouble(s) != 0 ? "+" + s : s;
-    }
+    public String signed(double v) { return format.signed(v); }
 
     /** The name of the control, in the trade's words. */
-    public static String controlName(Callout c) {
-        if (c instanceof Callout.Radius) return "radius";
-        if (c instanceof Callout.ControlledRadius) return "controlled radius";
-        if (c instanceof Callout.Profile) return "profile of a surface";
-        if (c instanceof Callout.CompositeProfile) return "composite profile of a surface";
-        return "general tolerance";
-    }
+    public static String controlName(Callout c) { return CalloutFormatter.controlName(c); }
 
-    /**
-     * The name of the control in the words of {@code style}: ISO defines neither a controlled radius
-     * nor a composite frame, so under ISO those are named for what the drawing then shows.
-     */
-    public static String controlName(Callout c, DrawingStyle style) {
-        if (style == DrawingStyle.ISO && c instanceof Callout.ControlledRadius) return "radius, smooth blend by company note";
-        if (style == DrawingStyle.ISO && c instanceof Callout.CompositeProfile) return "profile of a surface, stacked frames";
-        return controlName(c);
-    }
+    /** The name of the control in the words of {@code style} ({@link CalloutFormatter#controlName(Callout, DrawingStyle)}). */
+    public static String controlName(Callout c, DrawingStyle style) { return CalloutFormatter.controlName(c, style); }
 
     /** The text of an R or CR dimension as drawn, e.g. {@code R2 ±0.2} or {@code CR1.8-2.2}. */
-    public String radius(Callout c) {
-        if (c instanceof Callout.Radius r) return style.formatLimits(RadiusKind.R, units, r.min(), r.max(), r.nominal());
-        if (c instanceof Callout.ControlledRadius r) {
-            return style.formatLimits(RadiusKind.CR, units, r.min(), r.max(), r.nominal());
-        }
-        throw new IllegalArgumentException("not a radius callout: " + c.typeName());
-    }
+    public String radius(Callout c) { return format.radius(c); }
 
     /** The title-block text of a general callout, e.g. {@code ISO 2768-m}, and its edge note. */
-    public String general(Callout.General g) {
-        List<String> parts = new ArrayList<>();
-        if (g.table() != null) parts.add(tableText(g.table(), g.toleranceClass()));
-        if (g.edgeNote() != null) parts.add(g.edgeNote());
-        return parts.isEmpty() ? "GENERAL TOLERANCE OF THE TITLE BLOCK" : String.join("; ", parts);
-    }
+    public String general(Callout.General g) { return format.general(g); }
 
     /** A general-tolerance table as written in a title block. */
     public static String tableText(String table, String toleranceClass) {
-        String cls = toleranceClass == null ? "" : toleranceClass;
-        if (table != null && table.startsWith("iso2768-1")) return "ISO 2768-" + cls;
-        return (table == null ? "" : table) + (cls.isEmpty() ? "" : " class " + cls);
+        return CalloutFormatter.tableText(table, toleranceClass);
     }
 
-    /**
-     * The zone cell of a profile frame without its symbol: {@code 0.1}, {@code 0.1 (U) 0.07}... Each
-     * standard's own marks: ASME's circled U and dynamic triangle, ISO 1101:2017's UZ (stated offset)
-     * and OZ (offset not specified, the ISO way to let a zone float in size as ASME's dynamic profile
-     * does; from memory of the 2017 edition).
-     */
-    public String zoneCell(Callout.Profile p, boolean unicode) {
-        checkMarks(p, style);
-        StringBuilder sb = new StringBuilder(value(p.zone()));
-        if (p.isUnequal()) {
-            if (style == DrawingStyle.ISO) {
-                sb.append(" UZ").append(signed(p.isoOffset()));
-            } else {
-                sb.append(unicode ? " " + CIRCLED_U + " " : " (U) ").append(value(p.outward()));
-            }
-        }
-        if (p.dynamic()) sb.append(style == DrawingStyle.ISO ? " " + ISO_UNSPECIFIED_OFFSET : unicode ? " " + DYNAMIC : " (DYN)");
-        return sb.toString();
-    }
-
-    /** ISO 1101:2017's modifier for a zone offset by an unspecified amount. */
-    public static final String ISO_UNSPECIFIED_OFFSET = "OZ";
+    /** The zone cell of a profile frame without its symbol ({@link CalloutFormatter#zoneCell}). */
+    public String zoneCell(Callout.Profile p, boolean unicode) { return format.zoneCell(p, unicode); }
 
     /**
-     * Refuses a profile the style cannot write: under ISO a zone's offset is either stated (UZ) or
-     * unspecified (OZ), not both.
+     * Refuses a profile the style cannot write ({@link CalloutFormatter#checkMarks}).
      *
      * @throws org.arcwright.io.InputProblem on field {@code callout.dynamic}
      */
-    public static void checkMarks(Callout.Profile p, DrawingStyle style) {
-        if (style == DrawingStyle.ISO && p.isUnequal() && p.dynamic()) {
-            throw org.arcwright.io.InputProblem.ofField("callout.dynamic", "under ISO 1101 a profile zone has either a stated "
-                    + "offset (UZ) or an unspecified one (OZ, the ISO form of a dynamic profile), not both: drop the unequal "
-                    + "disposition or the dynamic modifier, or draw to ASME Y14.5");
-        }
-    }
+    public static void checkMarks(Callout.Profile p, DrawingStyle style) { CalloutFormatter.checkMarks(p, style); }
 
     /** A datum reference cell: {@code A}, {@code B(M)} or {@code BⓂ}. */
-    public static String datum(DatumReference d, boolean unicode) {
-        if (d.modifier() == null) return d.label();
-        if (!unicode) return d.text();
-        return d.label() + ("MMB".equals(d.modifier()) ? CIRCLED_M : CIRCLED_L);
-    }
+    public static String datum(DatumReference d, boolean unicode) { return CalloutFormatter.datum(d, unicode); }
 
     /** The extent label written next to the frame, or empty. */
-    public static String extentLabel(Extent e, boolean unicode) {
-        switch (e.kind()) {
-            case ALL_AROUND:
-                return "ALL AROUND";
-            case ALL_OVER:
-                return "ALL OVER";
-            case BETWEEN:
-                return e.from() + (unicode ? " " + BETWEEN + " " : " <-> ") + e.to();
-            case WITH_ADJACENT:
-                return "BLEND AND ADJACENT SURFACES";
-            default:
-                return "";
-        }
-    }
+    public static String extentLabel(Extent e, boolean unicode) { return CalloutFormatter.extentLabel(e, unicode); }
 
-    /**
-     * The callout on one line per frame tier, cells separated by {@code |}: plain ASCII when
-     * {@code unicode} is false, else with the GD&amp;T code points.
-     */
-    public String line(Callout c, boolean unicode) {
-        if (c instanceof Callout.Radius || c instanceof Callout.ControlledRadius) return radius(c);
-        if (c instanceof Callout.General g) return general(g);
-        String symbol = unicode ? PROFILE : "PROFILE";
-        if (c instanceof Callout.Profile p) {
-            StringBuilder sb = new StringBuilder("|").append(symbol).append('|').append(zoneCell(p, unicode)).append('|');
-            for (DatumReference d : p.datums()) sb.append(datum(d, unicode)).append('|');
-            return withExtent(sb.toString(), p.extent(), unicode);
-        }
-        Callout.CompositeProfile cp = (Callout.CompositeProfile) c;
-        List<String> lines = new ArrayList<>();
-        for (int t = 0; t < cp.tiers().size(); t++) {
-            ProfileTier tier = cp.tiers().get(t);
-            // ISO 1101 stacks whole frames, each with its symbol; ASME shares one symbol (common practice)
-            String sym = t == 0 || style == DrawingStyle.ISO ? symbol : " ".repeat(unicode ? 1 : symbol.length());
-            StringBuilder sb = new StringBuilder("|").append(sym).append('|').append(value(tier.zone())).append('|');
-            for (DatumReference d : tier.datums()) sb.append(datum(d, unicode)).append('|');
-            lines.add(sb.toString());
-        }
-        lines.set(0, withExtent(lines.get(0), cp.extent(), unicode));
-        return String.join("\n", lines);
-    }
-
-    private static String withExtent(String frame, Extent e, boolean unicode) {
-        String label = extentLabel(e, unicode);
-        return label.isEmpty() ? frame : frame + " " + label;
-    }
+    /** The callout on one line per frame tier ({@link CalloutFormatter#line}). */
+    public String line(Callout c, boolean unicode) { return format.line(c, unicode); }
 
     /** The callout in words, for reasoning and reviews. */
-    public String words(Callout c) {
-        if (c instanceof Callout.Radius || c instanceof Callout.ControlledRadius) {
-            String kind = c instanceof Callout.Radius ? "radius"
-                    : style == DrawingStyle.ISO ? "radius (smooth, without flats or reversals, by a company note that ISO does not define)"
-                    : "controlled radius (fair curve, no flats or reversals)";
-            double min = c instanceof Callout.Radius r ? r.min() : ((Callout.ControlledRadius) c).min();
-            double max = c instanceof Callout.Radius r ? r.max() : ((Callout.ControlledRadius) c).max();
-            String[] pair = limits(min, max);
-            return kind + " " + radius(c) + ", between " + pair[0] + " and " + pair[1] + " " + units.symbol();
-        }
-        if (c instanceof Callout.General g) return "general tolerance of the title block: " + general(g);
-        if (c instanceof Callout.Profile p) {
-            StringBuilder sb = new StringBuilder("profile of a surface, zone ").append(value(p.zone())).append(' ')
-                    .append(units.symbol());
-            if (p.isUnequal()) {
-                sb.append(style == DrawingStyle.ISO ? ", offset zone with " : ", unequally disposed with ")
-                        .append(value(p.outward())).append(" outside the material")
-                        .append(style == DrawingStyle.ISO ? " (UZ" + signed(p.isoOffset()) + ")" : "");
-            }
-            if (p.dynamic()) {
-                sb.append(style == DrawingStyle.ISO ? ", offset not specified (OZ: form only, size left to the radius tolerance)"
-                        : ", dynamic (form only, size left to the radius tolerance)");
-            }
-            sb.append(datumWords(p.datums()));
-            String extent = extentWords(p.extent());
-            if (!extent.isEmpty()) sb.append(", ").append(extent);
-            return sb.toString();
-        }
-        Callout.CompositeProfile cp = (Callout.CompositeProfile) c;
-        StringBuilder sb = new StringBuilder(style == DrawingStyle.ISO ? "profile of a surface in stacked frames"
-                : "composite profile of a surface");
-        for (int t = 0; t < cp.tiers().size(); t++) {
-            ProfileTier tier = cp.tiers().get(t);
-            sb.append(t == 0 ? ": " : "; ").append(t == 0 ? "locating zone " : "refining zone ")
-                    .append(value(tier.zone())).append(datumWords(tier.datums()));
-        }
-        String extent = extentWords(cp.extent());
-        if (!extent.isEmpty()) sb.append(", ").append(extent);
-        return sb.toString();
-    }
-
-    private static String datumWords(List<DatumReference> datums) {
-        if (datums.isEmpty()) return ", no datums (size and form only)";
-        List<String> parts = new ArrayList<>();
-        for (DatumReference d : datums) {
-            parts.add(d.label() + (d.modifier() == null ? "" : " at " + d.modifier()));
-        }
-        return ", relative to datum" + (datums.size() > 1 ? "s " : " ") + String.join(", ", parts);
-    }
+    public String words(Callout c) { return format.words(c); }
 
     /** The extent in words, or empty for the blend alone. */
-    public static String extentWords(Extent e) {
-        switch (e.kind()) {
-            case ALL_AROUND:
-                return "all around the profile";
-            case ALL_OVER:
-                return "all over the part";
-            case BETWEEN:
-                return "between " + e.from() + " and " + e.to();
-            case WITH_ADJACENT:
-                return "over the blend and the adjacent surfaces";
-            default:
-                return "";
-        }
-    }
+    public static String extentWords(Extent e) { return CalloutFormatter.extentWords(e); }
 
     /** Datum references joined for a note: {@code A, B(M)}. */
-    public static String datumList(List<DatumReference> datums) {
-        List<String> parts = new ArrayList<>();
-        for (DatumReference d : datums) parts.add(d.text());
-        return String.join(", ", parts);
-    }
+    public static String datumList(List<DatumReference> datums) { return CalloutFormatter.datumList(datums); }
 }

@@ -6,6 +6,7 @@ import java.awt.geom.Rectangle2D;
 import java.util.ArrayList;
 import java.util.List;
 import net.jqwik.api.Arbitraries;
+import net.jqwik.api.Assume;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;
 import net.jqwik.api.ForAll;
@@ -29,6 +30,9 @@ class CalloutLayoutProperties {
     @Property(tries = 200, seed = "20261201")
     void framesLayOutWithoutOverlapsAndWithTextInsideCells(@ForAll("callouts") Callout c, @ForAll DrawingStyle style,
                                                            @ForAll Units units) {
+        // ISO 1101 states an offset (UZ) or leaves it unspecified (OZ), never both: the layout refuses that one
+        // with a located error (CalloutFormatter.checkMarks), so it is no frame to lay out
+        Assume.that(!(style == DrawingStyle.ISO && c instanceof Callout.Profile p && p.isUnequal() && p.dynamic()));
         CalloutDrawing d = layout.layout(c, style, units);
         List<CalloutDrawing.Cell> frameCells = d.cells().stream().filter(x -> x.role() != CalloutDrawing.Role.TEXT).toList();
         for (int i = 0; i < frameCells.size(); i++) {

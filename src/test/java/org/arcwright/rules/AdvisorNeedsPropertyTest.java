@@ -21,11 +21,35 @@ import org.arcwright.tolerance.Units;
 /**
  * The invariant of the needs-first advisor: a card that says it meets every need admits no radius outside any
  * need's bounds, and when some card can meet every need the first one does. Mechanics are the invented stand-in
- * curves of {@link AdvisorChecksTest.StandIn}, so floors and ceilings vary widely and cheaply.
+ * curves of {@link AdvisorChecksTest.StandIn}, so floors and ceilings vary widely and cheaply. The same holds with
+ * a pack rule adding a need of its own (an invented company floor, ceiling, form or location need).
  */
 class AdvisorNeedsPropertyTest {
-    private static final Advisor ADVISOR = new Advisor(RuleBook.load(PackStack.builtIn()), new AdvisorChecksTest.StandIn(),
-            NoteLinker.NONE);
+    private static final RuleBook BUILT_IN = RuleBook.load(PackStack.builtIn());
+    private static final Advisor ADVISOR = new Advisor(BUILT_IN, new AdvisorChecksTest.StandIn(), NoteLinker.NONE);
+
+    /** The built-in rules plus one that fires on every case and adds {@code need}. */
+    private static Advisor withRuleNeed(RuleNeed need) {
+        Rule rule = new Rule("team.company-need", "an invented company need", When.ALWAYS, null, 0,
+                List.of("the works standard says so"), null, null, null, null, List.of(need), null);
+        List<RuleBook.Entry> entries = new java.util.ArrayList<>(BUILT_IN.entries());
+        entries.add(new RuleBook.Entry(rule, "team", org.arcwright.pack.PackLayer.TEAM, "team/rules/r.json", null));
+        return new Advisor(new RuleBook(entries, List.of(), BUILT_IN.capability(), BUILT_IN.generalTables()),
+                new AdvisorChecksTest.StandIn(), NoteLinker.NONE);
+    }
+
+    @Provide
+    Arbitrary<RuleNeed> ruleNeeds() {
+        Arbitrary<Double> length = Arbitraries.doubles().between(0.2, 6).ofScale(2);
+        Arbitrary<Units> units = Arbitraries.of(Units.MM, Units.INCH);
+        return Arbitraries.oneOf(
+                Combinators.combine(length, units).as((v, u) -> new RuleNeed(Need.Kind.RADIUS_FLOOR,
+                        u == Units.INCH ? v / 25.4 : v, null, u, "company floor", "invented")),
+                Combinators.combine(length, units).as((v, u) -> new RuleNeed(Need.Kind.RADIUS_CEILING, null,
+                        u == Units.INCH ? v / 25.4 : v, u, "company ceiling", "invented")),
+                Arbitraries.just(new RuleNeed(Need.Kind.FORM, null, null, null, "company form", "invented")),
+                Arbitraries.just(new RuleNeed(Need.Kind.LOCATION, null, null, null, "company location", "invented")));
+    }
 
     @Provide
     Arbitrary<DesignCase> cases() {
@@ -64,6 +88,28 @@ class AdvisorNeedsPropertyTest {
     @Property(tries = 400, seed = "1415")
     void whenAnyCardIsUsableTheFirstIsAndOtherwiseTheAdviceSaysSo(@ForAll("cases") DesignCase c) {
         Advice a = ADVISOR.advise(c);
+        if (a.anyUsable()) {
+            assertThat(a.first().orElseThrow().usable()).isTrue();
+        } else {
+            assertThat(a.warnings()).anySatisfy(w -> assertThat(w).startsWith("Nothing meets every need"));
+        }
+    }
+
+    @Property(tries = 200, seed = "1416")
+    void aRuleAddedNeedIsProvedLikeADerivedOne(@ForAll("cases") DesignCase c, @ForAll("ruleNeeds") RuleNeed need) {
+        Advice a = withRuleNeed(need).advise(c);
+        assertThat(a.needs()).anySatisfy(n -> assertThat(n.source()).contains("rule team.company-need (team)"));
+        assertThat(a.needs()).extracting(Need::id).doesNotHaveDuplicates();
+        for (Recommendation r : a.recommendations()) {
+            if (!Boolean.TRUE.equals(r.meetsAll())) continue;
+            for (Need n : a.needs()) {
+                assertThat(n.reachable()).isTrue();
+                if (n.min() != null) assertThat(r.numbers().min()).as(r.text()).isGreaterThanOrEqualTo(n.min() - 1e-9);
+                if (n.max() != null) assertThat(r.numbers().max()).as(r.text()).isLessThanOrEqualTo(n.max() + 1e-9);
+            }
+            if (need.id() == Need.Kind.FORM) assertThat(Proof.controlsForm(r.callout())).isTrue();
+            if (need.id() == Need.Kind.LOCATION) assertThat(Proof.locates(r.callout())).isTrue();
+        }
         if (a.anyUsable()) {
             assertThat(a.first().orElseThrow().usable()).isTrue();
         } else {
