@@ -85,8 +85,8 @@ final class ExampleParts extends JPanel {
             part.setVisible(false);
             plot.show(null);
         } else {
-            heading.setText(capital(outcome.label()) + " under " + callout + " (" + OutcomeBars.meaning(outcome) + "): "
-                    + examples.size() + " example part" + (examples.size() == 1 ? "" : "s") + ", the first of the run.");
+            heading.setText(capital(outcome.label()) + " under " + callout + ": " + OutcomeBars.meaning(outcome) + ". The first "
+                    + (examples.size() == 1 ? "such part" : examples.size() + " such parts") + " of the run:");
             ButtonGroup group = new ButtonGroup();
             for (int i = 0; i < examples.size(); i++) {
                 Example e = examples.get(i);
@@ -116,7 +116,7 @@ final class ExampleParts extends JPanel {
         long g = ++generation;
         Example e = examples.get(k);
         SimulationResult r = result;
-        part.setText("True geometry of " + e.part().describe(unit()) + ". Measured section below, as the inspection judged it.");
+        part.setText(capital(e.part().describe(unit())) + " (true geometry); its measured section, as the inspection judged it:");
         plot.show(null);
         new SwingWorker<InspectionResult, Void>() {
             @Override

@@ -59,7 +59,9 @@ final class OutcomeBars {
     void show(List<CaseSimulations.Judged> rows, double nominal, String unit) {
         panel.removeAll();
         bars.clear();
-        panel.add(legend(), "wmin 10, gapbottom 4");
+        panel.add(legend(), "wmin 10");
+        panel.add(new WrapLabel("Shares of all parts, 95 % Wilson intervals in brackets. Click a segment to see example parts of that kind.",
+                "Label.font", "Arcwright.help.foreground"), "wmin 10, gapbottom 6");
         for (int i = 0; i < rows.size(); i++) {
             CaseSimulations.Judged j = rows.get(i);
             CaseSimulations.Candidate c = j.candidate();
@@ -89,7 +91,7 @@ final class OutcomeBars {
             said.add("escapes " + pct(r.escapeShare()));
             said.add("false rejects " + pct(r.falseRejectShare()));
             if (r.indeterminate() > 0) said.add("no verdict " + pct(r.indeterminateShare()));
-            said.add(String.format(Locale.ROOT, "%.1f %% of its parts meet the needs", 100 * j.good().share()));
+            said.add(String.format(Locale.ROOT, "%.1f %% of the parts good", 100 * j.good().share()));
             WrapLabel figures = new WrapLabel(String.join(" · ", said), "Label.font", "Arcwright.help.foreground");
             figures.setName("simulate.figures." + i);
             panel.add(figures, "wmin 10");
@@ -100,7 +102,7 @@ final class OutcomeBars {
 
     /** The four kinds of part, in the bars' colours and order. */
     private static JComponent legend() {
-        javax.swing.JPanel p = new javax.swing.JPanel(new MigLayout("insets 0, gap 12 2, wrap 2", "[][]"));
+        javax.swing.JPanel p = new javax.swing.JPanel(new MigLayout("insets 0, gap 12 2, wrap 2", ""));
         p.setOpaque(false);
         for (Outcome o : Outcome.values()) {
             JLabel l = new JLabel(o.label(), new Swatch(o), javax.swing.SwingConstants.LEFT);

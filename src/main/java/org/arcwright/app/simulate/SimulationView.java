@@ -52,6 +52,11 @@ import org.arcwright.worksheet.RadiusFeature;
  */
 public final class SimulationView extends JPanel {
     private static final long serialVersionUID = 1L;
+    /** The simulation's caution in as few words as keep its sense (the whole text is the box's tooltip). */
+    static final String SHORT_CAUTION = "A simulated process is a model, not the shop's capability data. Decisions defer to the governing "
+            + "standard, company practice and licensed engineering judgement.";
+    /** Views at least this wide show the example parts beside the bars, narrower ones below them. */
+    private static final int SIDE_BY_SIDE = 760;
     private final transient WorksheetSession session;
     private final transient Supplier<Practice> practice;
     private final JLabel title = new JLabel(" ");
@@ -63,6 +68,7 @@ public final class SimulationView extends JPanel {
     private final JButton cancel = new JButton("Cancel");
     private final JProgressBar progress = new JProgressBar(0, 100);
     private final WrapLabel status = new WrapLabel("", "Label.font", null);
+    private final JSplitPane split;
     private final transient OutcomeBars bars = new OutcomeBars();
     private final ExampleParts examples = new ExampleParts();
     private final List<Figure> figures = new ArrayList<>();
@@ -77,13 +83,14 @@ public final class SimulationView extends JPanel {
     private transient AtomicBoolean cancelled = new AtomicBoolean();
     private transient SwingWorker<List<CaseSimulations.Judged>, Void> worker;
     private long generation;
+    private String progressTail = "";
 
     /**
      * @param session the worksheet whose selected feature is simulated
      * @param practice the practice in force, or null while the packs load
      */
     public SimulationView(WorksheetSession session, Supplier<Practice> practice) {
-        super(new MigLayout("insets 8, wrap 1, gap 4", "[grow,fill]", "[][][][][][][][grow,fill]"));
+        super(new MigLayout("insets 8, wrap 1, gap 3", "[grow,fill]", "[][][][][][][grow,fill][]"));
         this.session = Objects.requireNonNull(session, "session");
         this.practice = Objects.requireNonNull(practice, "practice");
         setName("simulationView");
@@ -92,6 +99,7 @@ public final class SimulationView extends JPanel {
         context.setName("simulate.context");
         processLine.setName("simulate.process");
         edit.setName("simulate.edit");
+        edit.setToolTipText("Show the process figures to change them: scatter, defect rates, noise, points, parts, seed");
         run.setName("simulate.run");
         cancel.setName("simulate.cancel");
         progress.setName("simulate.progress");
@@ -119,27 +127,34 @@ public final class SimulationView extends JPanel {
         cancel.setEnabled(false);
         progress.setStringPainted(true);
         progress.setString("");
-        add(Cautions.box(SimulationResult.CAUTION + " The figures are evidence on the candidates, not a ranking."), "wmin 10");
-        add(title, "wmin 10");
+        status.setVisible(false);
+        add(title, "split 2, wmin 10, growx");
+        add(edit, "right");
         add(context, "wmin 10");
-        add(processLine, "split 2, wmin 10, growx");
-        add(edit, "top");
+        add(processLine, "wmin 10");
         add(figuresPanel, "wmin 10, hidemode 3");
         add(run, "split 3, sg simulateButtons");
         add(cancel, "sg simulateButtons");
-        add(progress, "growx, wmin 40");
-        add(status, "wmin 10");
+        add(progress, "growx, wmin 40, h 22!");
+        add(status, "wmin 10, hidemode 3");
         JScrollPane barScroll = new JScrollPane(bars.component());
         barScroll.setBorder(null);
         barScroll.getVerticalScrollBar().setUnitIncrement(16);
-        JSplitPane split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, barScroll, examples);
+        split = new JSplitPane(JSplitPane.VERTICAL_SPLIT, barScroll, examples);
         split.setName("simulate.split");
-        split.setResizeWeight(0.45);
+        split.setResizeWeight(0.5);
         split.setBorder(null);
         split.setContinuousLayout(true);
-        barScroll.setMinimumSize(new java.awt.Dimension(40, 60));
-        examples.setMinimumSize(new java.awt.Dimension(40, 80));
-        add(split, "grow, wmin 10, hmin 120");
+        barScroll.setMinimumSize(new java.awt.Dimension(40, 50));
+        examples.setMinimumSize(new java.awt.Dimension(40, 40));
+        add(split, "grow, wmin 10, hmin 100");
+        JComponent caution = Cautions.box(SHORT_CAUTION);
+        caution.setToolTipText("<html>" + SimulationResult.CAUTION + "<br>The figures are evidence on the candidates, not a ranking.</html>");
+        add(caution, "wmin 10");
+        addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) { arrange(); }
+        });
         edit.addActionListener(e -> toggleFigures());
         defaults.addActionListener(e -> resetFigures());
         run.addActionListener(e -> start());
@@ -156,6 +171,12 @@ public final class SimulationView extends JPanel {
 
     /** The line under the Run button: what ran, what failed, or what would run. */
     public String statusText() { return status.getText(); }
+
+    /** The words on the progress bar. */
+    public String progressText() { return progress.getString(); }
+
+    /** The process and run figures line. */
+    public String processText() { return processLine.getText(); }
 
     /** The finished rows of the selected feature, one per candidate; null when there is no result. */
     public List<CaseSimulations.Judged> rows() { return rows; }
@@ -227,7 +248,7 @@ public final class SimulationView extends JPanel {
             return;
         }
         fill(plan.defaults());
-        show(head, context(feature, plan), processText(plan), true);
+        show(head, context(feature, plan), processText(plan.defaults()), true);
         int n = plan.candidates(plan.defaults()).size();
         bars.clear("Run to judge " + (n == 1 ? "its candidate callout" : "its " + n + " candidate callouts")
                 + " over a simulated population: a bar each, of accepted, escapes and false rejects.");
@@ -237,37 +258,63 @@ public final class SimulationView extends JPanel {
         DesignCase c = f.designCase();
         String u = c.units().symbol();
         StringBuilder sb = new StringBuilder();
-        sb.append(c.process().key()).append(' ').append(c.kind().key()).append(", nominal R").append(Numbers.trim(c.nominalRadius()))
-                .append(' ').append(u).append(". ");
-        sb.append(f.chosen() == null ? "Undecided: the advisor's candidates are simulated."
-                : "Chosen: " + f.chosen().text() + ", simulated with the advisor's candidates.");
+        sb.append(capital(c.process().key())).append(' ').append(c.kind().key()).append(", nominal R").append(Numbers.trim(c.nominalRadius()))
+                .append(' ').append(u).append(f.chosen() == null ? ", undecided: the advisor's candidates." : ", chosen " + f.chosen().text() + ".");
         CaseSimulations.JudgedNeeds n = plan.needs();
-        sb.append("\nJudged against the needs: ").append(n.needs().describe(u)).append('.');
-        if (n.none()) sb.append(" No radius floor or ceiling: every part counts as good, so escapes are 0 by construction.");
-        if (!n.notJudged().isEmpty()) sb.append("\nNot judged: ").append(String.join("; ", n.notJudged())).append('.');
-        return sb.toString();
+        List<String> judged = new ArrayList<>();
+        if (n.floor() > 0) judged.add("local radius ≥ " + Numbers.trim(n.floor()) + " " + u + " (a flat's corners count as 0)");
+        if (Double.isFinite(n.ceiling())) judged.add("radius ≤ " + Numbers.trim(n.ceiling()) + " " + u);
+        sb.append(" Needs judged: ").append(judged.isEmpty() ? "none (no radius floor or ceiling: every part counts as good, so "
+                + "escapes are 0 by construction)" : String.join(", ", judged));
+        if (!n.notJudged().isEmpty()) {
+            List<String> keys = new ArrayList<>();
+            for (String x : n.notJudged()) keys.add(x.contains(" (") ? x.substring(0, x.indexOf(" (")) : x);
+            sb.append("; not judged: ").append(String.join(", ", keys));
+        }
+        return sb.append('.').toString();
     }
 
-    private static String processText(FeatureSimulation plan) {
+    private static String capital(String s) { return s.isEmpty() ? s : Character.toUpperCase(s.charAt(0)) + s.substring(1); }
+
+    /** The process and run figures in one line, as they will run. */
+    private String processText(FeatureSimulation.Figures f) {
         CaseSimulations.CaseProcess p = plan.process();
         String u = p.model().units().symbol();
-        return "Process model: the " + plan.feature().designCase().process().key() + " defaults of " + p.table().id()
-                + ", radius sd " + sig(p.radiusSd()) + " " + u + " = ±" + sig(p.plusMinus()) + " " + u
-                + (p.fromCapability() ? " (process capability table)" : " (no capability entry: ±10 % of the nominal assumed)")
-                + " / " + Numbers.trim(p.table().radiusSdDivisor()) + ". " + p.table().source() + ".";
+        boolean edited = !f.equals(plan.defaults());
+        return String.format(Locale.ROOT, "Process (%s %s): R %s %s, sd %s · flats %s %% · steps %s %% · noise %s %s · "
+                        + "%d points · %,d parts, seed %d", plan.feature().designCase().process().key(), edited ? "defaults, edited" : "defaults",
+                sig(f.radiusMean()), u, sig(f.radiusSd()), sig(100 * f.flatRate()), sig(100 * f.stepRate()), sig(f.noise()), u,
+                f.points(), f.parts(), f.seed());
+    }
+
+    /** Where the defaults come from, for the process line's tooltip. */
+    private static String processSource(FeatureSimulation plan) {
+        CaseSimulations.CaseProcess p = plan.process();
+        String u = p.model().units().symbol();
+        return "<html>Table " + p.table().id() + ": " + p.table().source() + ".<br>Radius sd " + sig(p.radiusSd()) + " " + u + " = ±"
+                + sig(p.plusMinus()) + " " + u + (p.fromCapability() ? " (process capability table)" : " (no capability entry: ±10 % of the nominal assumed)")
+                + " / " + Numbers.trim(p.table().radiusSdDivisor()) + ".<br>Flat widths and places and step sizes stay the table's.</html>";
     }
 
     private void show(String head, String ctx, String process, boolean canRun) {
         title.setText(head);
         context.setText(ctx);
         processLine.setText(process);
+        processLine.setToolTipText(canRun ? processSource(plan) : null);
         processLine.setVisible(!process.isEmpty());
         edit.setVisible(canRun);
         figuresPanel.setVisible(canRun && edit.isSelected());
         run.setEnabled(canRun);
-        status.show(canRun ? "" : " ", "Label.foreground");
+        say("", "Label.foreground");
         progress.setValue(0);
         progress.setString("");
+        revalidate();
+    }
+
+    /** A line under the Run button, shown only when there is something to say. */
+    private void say(String text, String colourKey) {
+        status.show(text, colourKey);
+        status.setVisible(!text.isBlank());
         revalidate();
     }
 
@@ -336,10 +383,10 @@ public final class SimulationView extends JPanel {
         seed.set(d.seed(), Long.toString(d.seed()));
     }
 
-    /** Five significant figures, no trailing zeros. */
+    /** Four significant figures, no trailing zeros. */
     private static String sig(double v) {
         if (v == 0 || !Double.isFinite(v)) return Numbers.trim(v);
-        return new BigDecimal(v).round(new MathContext(5)).stripTrailingZeros().toPlainString();
+        return new BigDecimal(v).round(new MathContext(4)).stripTrailingZeros().toPlainString();
     }
 
     private FeatureSimulation.Figures readFigures() {
@@ -349,6 +396,16 @@ public final class SimulationView extends JPanel {
         if (s != Math.rint(s)) throw InputProblem.ofField("Seed", "a whole number, got " + Numbers.trim(s));
         return new FeatureSimulation.Figures(radiusMean.value(), radiusSd.value(), positionSd.value(), flatRate.value() / 100,
                 stepRate.value() / 100, noise.value(), (int) pts, (int) n, (long) s);
+    }
+
+    /** The example parts beside the bars when there is room, else below them. */
+    private void arrange() {
+        int want = getWidth() >= SIDE_BY_SIDE ? JSplitPane.HORIZONTAL_SPLIT : JSplitPane.VERTICAL_SPLIT;
+        if (split.getOrientation() == want) return;
+        split.setOrientation(want);
+        split.setResizeWeight(want == JSplitPane.HORIZONTAL_SPLIT ? 0.45 : 0.5);
+        split.resetToPreferredSizes();
+        split.setDividerLocation(want == JSplitPane.HORIZONTAL_SPLIT ? 0.45 : 0.5);
     }
 
     private void toggleFigures() {
@@ -371,10 +428,14 @@ public final class SimulationView extends JPanel {
             f = readFigures();
             candidates = plan.candidates(f);
         } catch (InputProblem e) {
-            status.show("Cannot run: " + e.getMessage(), "Arcwright.error.foreground");
+            say("Cannot run: " + e.getMessage(), "Arcwright.error.foreground");
             return;
         }
         long g = ++generation;
+        if (edit.isSelected()) {
+            edit.setSelected(false);
+            toggleFigures();
+        }
         AtomicBoolean stop = new AtomicBoolean();
         cancelled = stop;
         rows = null;
@@ -382,10 +443,11 @@ public final class SimulationView extends JPanel {
         run.setEnabled(false);
         cancel.setEnabled(true);
         progress.setValue(0);
-        progress.setString("0 %");
         long simulable = candidates.stream().filter(c -> c.callout() != null).count();
-        status.show(String.format(Locale.ROOT, "Simulating %,d parts for each of %d callouts on all cores…", f.parts(), simulable),
-                "Label.foreground");
+        progressTail = String.format(Locale.ROOT, " of %,d parts × %d callouts", f.parts(), simulable);
+        processLine.setText(processText(f));
+        say("", "Label.foreground");
+        progress.setString(String.format(Locale.ROOT, "0 %% of %,d parts × %d callouts", f.parts(), simulable));
         CaseSimulations.JudgedNeeds needs = plan.needs();
         worker = new SwingWorker<>() {
             @Override
@@ -404,13 +466,13 @@ public final class SimulationView extends JPanel {
     private void progressed(long g, String property, Object value) {
         if (g != generation || !"progress".equals(property)) return;
         progress.setValue((Integer) value);
-        progress.setString(value + " %");
+        progress.setString(value + " %" + progressTail);
     }
 
     private void stop() {
         cancelled.set(true);
         cancel.setEnabled(false);
-        status.show("Cancelling…", "Label.foreground");
+        progress.setString("cancelling…");
     }
 
     private void finished(long g, FeatureSimulation.Figures f, SwingWorker<List<CaseSimulations.Judged>, Void> w) {
@@ -429,29 +491,31 @@ public final class SimulationView extends JPanel {
             if (e.getCause() instanceof CancellationException) {
                 cancelledRun();
             } else {
-                progress.setString("");
-                status.show("The simulation failed: " + e.getCause().getMessage(), "Arcwright.error.foreground");
+                progress.setString("failed");
+                say("The simulation failed: " + e.getCause().getMessage(), "Arcwright.error.foreground");
             }
             return;
         }
         progress.setValue(100);
-        progress.setString("done");
         ProcessModel base = plan.process().model();
         String u = base.units().symbol();
         long simulated = rows.stream().filter(r -> r.result() != null).count();
-        status.show(String.format(Locale.ROOT, "%s: %d of %d candidates simulated, %,d parts each, seed %d, %d points per section, "
-                        + "measuring noise %s %s. Shares of all parts, 95 %% Wilson intervals in brackets.", subject.id(), simulated,
-                rows.size(), f.parts(), f.seed(), f.points(), sig(f.noise()), u), "Label.foreground");
+        progress.setString(String.format(Locale.ROOT, "done: %d of %d candidates simulated, %,d parts each", simulated, rows.size(), f.parts()));
+        say("", "Label.foreground");
         bars.show(rows, base.nominalRadius(), u);
     }
 
     private void cancelledRun() {
         progress.setString("cancelled");
-        status.show("Cancelled; nothing counted. Run again to simulate.", "Label.foreground");
+        say("Cancelled; nothing counted. Run again to simulate.", "Label.foreground");
     }
 
     private void picked(int row, Outcome o) {
         if (rows == null || row >= rows.size() || rows.get(row).result() == null) return;
         examples.show(rows.get(row), o);
+        if (split.getOrientation() == JSplitPane.VERTICAL_SPLIT) {
+            int room = split.getHeight() - split.getDividerSize();
+            if (room > 0 && room - split.getDividerLocation() < 0.65 * room) split.setDividerLocation((int) Math.round(0.35 * room));
+        }
     }
 }

@@ -83,7 +83,11 @@ class SimulationGuiTest {
         GuiSupport.settle(100);
     }
 
+    /** Opens the figures as a user would ("Change figures") and types the parts. */
     private static void setParts(int n) {
+        javax.swing.JToggleButton edit = (javax.swing.JToggleButton) opened.robot().finder().findByName(window.frame(), "simulate.edit");
+        if (!GuiSupport.onEdt(edit::isSelected)) SwingUtilities.invokeLater(edit::doClick);
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> opened.robot().finder().findByName(window.frame(), "simulate.parts", false).isShowing()), 10);
         GuiSupport.onEdt(() -> ((JTextField) opened.robot().finder().findByName(window.frame(), "simulate.parts")).setText(Integer.toString(n)));
     }
 
@@ -123,7 +127,8 @@ class SimulationGuiTest {
             assertThat(r.callout().parts()).isEqualTo(300);
             assertThat(GuiSupport.onEdt(() -> view().bar(k) != null && view().bar(k).isShowing())).isTrue();
         }
-        assertThat(GuiSupport.onEdt(() -> view().statusText())).startsWith("F2:").contains("300 parts each").contains("seed 19");
+        assertThat(GuiSupport.onEdt(() -> view().progressText())).startsWith("done").contains("300 parts each");
+        assertThat(GuiSupport.onEdt(() -> view().processText())).contains("300 parts, seed 19").contains("noise 0.001 mm");
         GuiSupport.settle(200);
         GuiSupport.screenshot(window.frame(), "simulation-1024x700-light");
     }
