@@ -160,8 +160,14 @@ public final class SimulationView extends JPanel {
         run.addActionListener(e -> start());
         cancel.addActionListener(e -> stop());
         bars.onPick(this::picked);
+        addHierarchyListener(e -> shownOrHidden(e.getChangeFlags()));
         session.listeners().add(this::refresh);
         refresh();
+    }
+
+    /** Brought into view: the packs may have been reloaded meanwhile (a result never outlives the rules that advised it). */
+    private void shownOrHidden(long flags) {
+        if ((flags & java.awt.event.HierarchyEvent.SHOWING_CHANGED) != 0 && isShowing()) refresh();
     }
 
     // ---- what tests read and press ----
