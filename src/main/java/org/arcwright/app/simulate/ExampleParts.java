@@ -28,7 +28,7 @@ import org.arcwright.simulate.SimulationResult;
  */
 final class ExampleParts extends JPanel {
     private static final long serialVersionUID = 1L;
-    static final String IDLE = "Click a segment of a bar above to see a few example parts of that kind, drawn magnified in the zone.";
+    static final String IDLE = "Click a segment of a bar to see example parts of that kind, drawn magnified in the zone.";
     private final WrapLabel heading = new WrapLabel(IDLE, "Label.font", "Arcwright.help.foreground");
     private final JPanel buttons = new JPanel(new MigLayout("insets 0, gap 4", ""));
     private final WrapLabel part = new WrapLabel("", "Label.font", null);
@@ -85,8 +85,9 @@ final class ExampleParts extends JPanel {
             part.setVisible(false);
             plot.show(null);
         } else {
-            heading.setText(capital(outcome.label()) + " under " + callout + ": " + OutcomeBars.meaning(outcome) + ". The first "
-                    + (examples.size() == 1 ? "such part" : examples.size() + " such parts") + " of the run:");
+            heading.setText(capital(outcome.label()) + " under " + callout + ": the first " + (examples.size() == 1 ? "such part"
+                    : examples.size() + " such parts") + " of the run.");
+            heading.setToolTipText(capital(outcome.label()) + ": " + OutcomeBars.meaning(outcome) + ".");
             ButtonGroup group = new ButtonGroup();
             for (int i = 0; i < examples.size(); i++) {
                 Example e = examples.get(i);
@@ -116,7 +117,7 @@ final class ExampleParts extends JPanel {
         long g = ++generation;
         Example e = examples.get(k);
         SimulationResult r = result;
-        part.setText(capital(e.part().describe(unit())) + " (true geometry); its measured section, as the inspection judged it:");
+        part.setText(capital(e.part().describe(unit())) + " (true); measured section as judged:");
         plot.show(null);
         new SwingWorker<InspectionResult, Void>() {
             @Override

@@ -60,8 +60,11 @@ final class OutcomeBars {
         panel.removeAll();
         bars.clear();
         panel.add(legend(), "wmin 10");
-        panel.add(new WrapLabel("Shares of all parts, 95 % Wilson intervals in brackets. Click a segment to see example parts of that kind.",
-                "Label.font", "Arcwright.help.foreground"), "wmin 10, gapbottom 6");
+        WrapLabel how = new WrapLabel("Shares of all parts [95 % interval]. Click a segment for example parts.", "Label.font",
+                "Arcwright.help.foreground");
+        how.setToolTipText("Each share is of all simulated parts, with its 95 % Wilson score interval (Wilson 1927). "
+                + "Hover over a segment for its count.");
+        panel.add(how, "wmin 10, gapbottom 6");
         for (int i = 0; i < rows.size(); i++) {
             CaseSimulations.Judged j = rows.get(i);
             CaseSimulations.Candidate c = j.candidate();

@@ -57,6 +57,8 @@ public final class SimulationView extends JPanel {
             + "standard, company practice and licensed engineering judgement.";
     /** Views at least this wide show the example parts beside the bars, narrower ones below them. */
     private static final int SIDE_BY_SIDE = 760;
+    /** The bars' share of the height below the controls while no example part is picked (narrow views). */
+    private static final double BARS_SHARE = 0.75;
     private final transient WorksheetSession session;
     private final transient Supplier<Practice> practice;
     private final JLabel title = new JLabel(" ");
@@ -410,8 +412,19 @@ public final class SimulationView extends JPanel {
         if (split.getOrientation() == want) return;
         split.setOrientation(want);
         split.setResizeWeight(want == JSplitPane.HORIZONTAL_SPLIT ? 0.45 : 0.5);
-        split.resetToPreferredSizes();
-        split.setDividerLocation(want == JSplitPane.HORIZONTAL_SPLIT ? 0.45 : 0.5);
+        // the split takes its new size in the layout after this event: place the divider then
+        javax.swing.SwingUtilities.invokeLater(() -> {
+            if (split.getOrientation() == JSplitPane.HORIZONTAL_SPLIT) split.setDividerLocation(0.45);
+            else roomForExamples(examples.shown() > 0);
+        });
+    }
+
+    /** Below the bars, the example parts get most of the room once picked, little before. */
+    private void roomForExamples(boolean picked) {
+        if (split.getOrientation() != JSplitPane.VERTICAL_SPLIT) return;
+        int room = split.getHeight() - split.getDividerSize();
+        if (room <= 0) return;
+        split.setDividerLocation((int) Math.round((picked ? 0.35 : BARS_SHARE) * room));
     }
 
     private void toggleFigures() {
@@ -509,6 +522,7 @@ public final class SimulationView extends JPanel {
         progress.setString(String.format(Locale.ROOT, "done: %d of %d candidates simulated, %,d parts each", simulated, rows.size(), f.parts()));
         say("", "Label.foreground");
         bars.show(rows, base.nominalRadius(), u);
+        roomForExamples(false);
     }
 
     private void cancelledRun() {
@@ -519,9 +533,6 @@ public final class SimulationView extends JPanel {
     private void picked(int row, Outcome o) {
         if (rows == null || row >= rows.size() || rows.get(row).result() == null) return;
         examples.show(rows.get(row), o);
-        if (split.getOrientation() == JSplitPane.VERTICAL_SPLIT) {
-            int room = split.getHeight() - split.getDividerSize();
-            if (room > 0 && room - split.getDividerLocation() < 0.65 * room) split.setDividerLocation((int) Math.round(0.35 * room));
-        }
+        roomForExamples(true);
     }
 }

@@ -170,9 +170,17 @@ class SimulationGuiTest {
         assertThat(GuiSupport.onEdt(() -> view().rows())).isNull();
         assertThat(GuiSupport.onEdt(() -> view().examplesShown())).isZero();
         assertThat(GuiSupport.onEdt(() -> view().bar(0))).isNull();
-        // and back: F2's old result does not come back either, it must be run again
+        // F5 is undecided: it still has the advisor's candidates, none marked chosen
+        assertThat(window.session().selected().orElseThrow().chosen()).isNull();
+        setParts(200);
+        runAndWait();
+        List<CaseSimulations.Judged> f5 = GuiSupport.onEdt(() -> view().rows());
+        assertThat(f5).isNotEmpty().noneMatch(r -> r.candidate().chosen());
+        assertThat(f5).anyMatch(r -> r.result() != null);
+        // and back: F2's old result does not come back, it must be run again; nor does F5's
         selectAndWait(1, "F2");
         assertThat(GuiSupport.onEdt(() -> view().rows())).isNull();
+        assertThat(GuiSupport.onEdt(() -> view().examplesShown())).isZero();
     }
 
     @Test
