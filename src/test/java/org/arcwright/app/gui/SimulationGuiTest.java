@@ -144,6 +144,10 @@ class SimulationGuiTest {
         GuiSupport.settle(200);
         Point p = GuiSupport.onEdt(() -> view().barPoint(row, kind));
         assertThat(p).isNotNull();
+        // the segment's tooltip gives its count and 95 % interval
+        String tip = GuiSupport.onEdt(() -> view().bar(row).getToolTipText(new java.awt.event.MouseEvent(view().bar(row),
+                java.awt.event.MouseEvent.MOUSE_MOVED, 0, 0, p.x, p.y, 0, false)));
+        assertThat(tip).contains(capital(kind.label())).contains("of 300 parts").contains("95 % Wilson interval");
         opened.robot().click(view().bar(row), p);
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> view().examplesShown() > 0 && view().examplePlotted()), 60);
         assertThat(GuiSupport.onEdt(() -> view().examplesHeading())).startsWith(capital(kind.label())).contains("R 0.7-0.9");
@@ -189,6 +193,7 @@ class SimulationGuiTest {
         setParts(2_000_000);
         press("simulate.run");
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> view().running() && button("simulate.cancel").isEnabled()), 30);
+        assertThat(GuiSupport.onEdt(() -> view().progressText())).contains("% of 2,000,000 parts");
         press("simulate.cancel");
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> view().statusText().startsWith("Cancelled") && !view().running()), 60);
         assertThat(GuiSupport.onEdt(() -> button("simulate.run").isEnabled())).isTrue();
