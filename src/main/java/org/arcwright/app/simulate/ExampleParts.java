@@ -1,8 +1,9 @@
 package org.arcwright.app.simulate;
 
+import java.awt.Component;
 import java.awt.Dimension;
-import java.awt.Graphics;
 import java.awt.Graphics2D;
+import java.awt.Graphics;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.ExecutionException;
@@ -173,7 +174,7 @@ final class ExampleParts extends JPanel {
     /** The example parts' buttons, for tests. */
     List<JToggleButton> exampleButtons() {
         List<JToggleButton> out = new ArrayList<>();
-        for (java.awt.Component c : buttons.getComponents()) out.add((JToggleButton) c);
+        for (Component c : buttons.getComponents()) out.add((JToggleButton) c);
         return out;
     }
 }

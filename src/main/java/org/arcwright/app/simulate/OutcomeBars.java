@@ -2,9 +2,12 @@ package org.arcwright.app.simulate;
 
 import java.awt.BasicStroke;
 import java.awt.Color;
+import java.awt.Component;
+import java.awt.Cursor;
 import java.awt.Dimension;
-import java.awt.Graphics;
+import java.awt.Font;
 import java.awt.Graphics2D;
+import java.awt.Graphics;
 import java.awt.Point;
 import java.awt.RenderingHints;
 import java.awt.event.MouseAdapter;
@@ -13,10 +16,15 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.function.BiConsumer;
+import java.util.function.Consumer;
+import javax.swing.Icon;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
+import javax.swing.JPanel;
+import javax.swing.SwingConstants;
 import javax.swing.ToolTipManager;
 import net.miginfocom.swing.MigLayout;
+import org.arcwright.app.model.Numbers;
 import org.arcwright.app.widgets.ScrollablePanel;
 import org.arcwright.app.widgets.Themes;
 import org.arcwright.app.widgets.WrapLabel;
@@ -72,7 +80,7 @@ final class OutcomeBars {
             JLabel title = new JLabel((c.chosen() ? "Chosen: " : "") + c.recommendation().text()
                     + (rule == null || rule.isBlank() ? "" : "   (" + rule + ")"));
             title.setName("simulate.title." + i);
-            if (c.chosen()) title.setFont(title.getFont().deriveFont(java.awt.Font.BOLD));
+            if (c.chosen()) title.setFont(title.getFont().deriveFont(Font.BOLD));
             panel.add(title, "wmin 10, gaptop " + (i == 0 ? 0 : 10));
             if (j.callout() == null) {
                 bars.add(null);
@@ -88,7 +96,7 @@ final class OutcomeBars {
             List<String> said = new ArrayList<>();
             if (!r.text().replace(" ", "").equals(c.recommendation().text().replace(" ", ""))) said.add("judged as " + r.text());
             double aim = j.result().simulation().model().nominalRadius();
-            if (aim != nominal) said.add("process aimed at R" + org.arcwright.app.model.Numbers.trim(aim) + " " + unit
+            if (aim != nominal) said.add("process aimed at R" + Numbers.trim(aim) + " " + unit
                     + ", the middle of its limits");
             said.add("accepted " + pct(r.acceptedShare()));
             said.add("escapes " + pct(r.escapeShare()));
@@ -105,10 +113,10 @@ final class OutcomeBars {
 
     /** The four kinds of part, in the bars' colours and order. */
     private static JComponent legend() {
-        javax.swing.JPanel p = new javax.swing.JPanel(new MigLayout("insets 0, gap 12 2, wrap 2", ""));
+        JPanel p = new JPanel(new MigLayout("insets 0, gap 12 2, wrap 2", ""));
         p.setOpaque(false);
         for (Outcome o : Outcome.values()) {
-            JLabel l = new JLabel(o.label(), new Swatch(o), javax.swing.SwingConstants.LEFT);
+            JLabel l = new JLabel(o.label(), new Swatch(o), SwingConstants.LEFT);
             l.setToolTipText(meaning(o));
             p.add(l);
         }
@@ -116,9 +124,9 @@ final class OutcomeBars {
     }
 
     /** A small square of a bar's colour. */
-    private record Swatch(Outcome outcome) implements javax.swing.Icon {
+    private record Swatch(Outcome outcome) implements Icon {
         @Override
-        public void paintIcon(java.awt.Component c, Graphics g, int x, int y) {
+        public void paintIcon(Component c, Graphics g, int x, int y) {
             g.setColor(ink(outcome));
             g.fillRect(x, y + 1, 11, 11);
         }
@@ -183,7 +191,7 @@ final class OutcomeBars {
         private final transient CalloutResult result;
         private Outcome marked;
 
-        Bar(CalloutResult result, java.util.function.Consumer<Outcome> picked) {
+        Bar(CalloutResult result, Consumer<Outcome> picked) {
             this.result = result;
             ToolTipManager.sharedInstance().registerComponent(this);
             addMouseListener(new MouseAdapter() {
@@ -193,7 +201,7 @@ final class OutcomeBars {
                     if (o != null) picked.accept(o);
                 }
             });
-            setCursor(java.awt.Cursor.getPredefinedCursor(java.awt.Cursor.HAND_CURSOR));
+            setCursor(Cursor.getPredefinedCursor(Cursor.HAND_CURSOR));
         }
 
         void mark(Outcome o) {

@@ -1,7 +1,11 @@
 package org.arcwright.app.simulate;
 
 import com.formdev.flatlaf.FlatClientProperties;
+import java.awt.Dimension;
 import java.awt.Point;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
+import java.awt.event.HierarchyEvent;
 import java.math.BigDecimal;
 import java.math.MathContext;
 import java.util.ArrayList;
@@ -22,6 +26,7 @@ import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
 import javax.swing.JTextField;
 import javax.swing.JToggleButton;
+import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
 import javax.swing.Timer;
 import net.miginfocom.swing.MigLayout;
@@ -147,15 +152,15 @@ public final class SimulationView extends JPanel {
         split.setResizeWeight(0.5);
         split.setBorder(null);
         split.setContinuousLayout(true);
-        barScroll.setMinimumSize(new java.awt.Dimension(40, 50));
-        examples.setMinimumSize(new java.awt.Dimension(40, 40));
+        barScroll.setMinimumSize(new Dimension(40, 50));
+        examples.setMinimumSize(new Dimension(40, 40));
         add(split, "grow, wmin 10, hmin 100");
         JComponent caution = Cautions.box(SHORT_CAUTION);
         caution.setToolTipText("<html>" + SimulationResult.CAUTION + "<br>The figures are evidence on the candidates, not a ranking.</html>");
         add(caution, "wmin 10");
-        addComponentListener(new java.awt.event.ComponentAdapter() {
+        addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) { arrange(); }
+            public void componentResized(ComponentEvent e) { arrange(); }
         });
         edit.addActionListener(e -> toggleFigures());
         defaults.addActionListener(e -> resetFigures());
@@ -169,7 +174,7 @@ public final class SimulationView extends JPanel {
 
     /** Brought into view: the packs may have been reloaded meanwhile (a result never outlives the rules that advised it). */
     private void shownOrHidden(long flags) {
-        if ((flags & java.awt.event.HierarchyEvent.SHOWING_CHANGED) != 0 && isShowing()) refresh();
+        if ((flags & HierarchyEvent.SHOWING_CHANGED) != 0 && isShowing()) refresh();
     }
 
     // ---- what tests read and press ----
@@ -413,7 +418,7 @@ public final class SimulationView extends JPanel {
         split.setOrientation(want);
         split.setResizeWeight(want == JSplitPane.HORIZONTAL_SPLIT ? 0.45 : 0.5);
         // the split takes its new size in the layout after this event: place the divider then
-        javax.swing.SwingUtilities.invokeLater(() -> {
+        SwingUtilities.invokeLater(() -> {
             if (split.getOrientation() == JSplitPane.HORIZONTAL_SPLIT) split.setDividerLocation(0.45);
             else roomForExamples(examples.shown() > 0);
         });

@@ -4,11 +4,14 @@ import static org.assertj.core.api.Assertions.assertThat;
 
 import java.awt.Dimension;
 import java.awt.Point;
+import java.awt.Rectangle;
+import java.awt.event.MouseEvent;
 import java.nio.file.Path;
 import java.util.List;
 import javax.swing.JButton;
 import javax.swing.JTabbedPane;
 import javax.swing.JTextField;
+import javax.swing.JToggleButton;
 import javax.swing.SwingUtilities;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
@@ -85,7 +88,7 @@ class SimulationGuiTest {
 
     /** Opens the figures as a user would ("Change figures") and types the parts. */
     private static void setParts(int n) {
-        javax.swing.JToggleButton edit = (javax.swing.JToggleButton) opened.robot().finder().findByName(window.frame(), "simulate.edit");
+        JToggleButton edit = (JToggleButton) opened.robot().finder().findByName(window.frame(), "simulate.edit");
         if (!GuiSupport.onEdt(edit::isSelected)) SwingUtilities.invokeLater(edit::doClick);
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> opened.robot().finder().findByName(window.frame(), "simulate.parts", false).isShowing()), 10);
         GuiSupport.onEdt(() -> ((JTextField) opened.robot().finder().findByName(window.frame(), "simulate.parts")).setText(Integer.toString(n)));
@@ -140,13 +143,13 @@ class SimulationGuiTest {
         int row = rows.size() - 1;
         // the chosen R 0.7-0.9 turns good parts away as well as accepting them: click its false rejects if any, else its accepted
         Outcome kind = rows.get(row).callout().falseRejects() > 0 ? Outcome.FALSE_REJECT : Outcome.ACCEPTED_GOOD;
-        GuiSupport.onEdt(() -> view().bar(row).scrollRectToVisible(new java.awt.Rectangle(0, 0, 10, 30)));
+        GuiSupport.onEdt(() -> view().bar(row).scrollRectToVisible(new Rectangle(0, 0, 10, 30)));
         GuiSupport.settle(200);
         Point p = GuiSupport.onEdt(() -> view().barPoint(row, kind));
         assertThat(p).isNotNull();
         // the segment's tooltip gives its count and 95 % interval
-        String tip = GuiSupport.onEdt(() -> view().bar(row).getToolTipText(new java.awt.event.MouseEvent(view().bar(row),
-                java.awt.event.MouseEvent.MOUSE_MOVED, 0, 0, p.x, p.y, 0, false)));
+        String tip = GuiSupport.onEdt(() -> view().bar(row).getToolTipText(new MouseEvent(view().bar(row),
+                MouseEvent.MOUSE_MOVED, 0, 0, p.x, p.y, 0, false)));
         assertThat(tip).contains(capital(kind.label())).contains("of 300 parts").contains("95 % Wilson interval");
         opened.robot().click(view().bar(row), p);
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> view().examplesShown() > 0 && view().examplePlotted()), 60);
