@@ -85,8 +85,24 @@ public record FeatureSimulation(RadiusFeature feature, CaseSimulations.JudgedNee
      */
     public record Figures(double radiusMean, double radiusSd, double positionSd, double flatRate, double stepRate, double noise,
                           int points, int parts, long seed) {
+        /** Checks each figure under the name the view gives it, so an error names the field the engineer typed in. */
         public Figures {
-            if (parts < 1) throw InputProblem.ofField("parts", "must be at least 1, got " + parts);
+            if (!(radiusMean > 0) || !Double.isFinite(radiusMean)) throw InputProblem.ofField("Radius mean", "must be above zero");
+            atLeastZero(radiusSd, "Radius sd");
+            atLeastZero(positionSd, "Position sd");
+            atLeastZero(noise, "Noise (1 sd)");
+            share(flatRate, "Flats on");
+            share(stepRate, "Steps on");
+            if (points < 3) throw InputProblem.ofField("Points", "at least 3 per section, got " + points);
+            if (parts < 1) throw InputProblem.ofField("Parts", "at least 1, got " + parts);
+        }
+
+        private static void atLeastZero(double v, String field) {
+            if (!(v >= 0) || !Double.isFinite(v)) throw InputProblem.ofField(field, "must be zero or more");
+        }
+
+        private static void share(double v, String field) {
+            if (!(v >= 0 && v <= 1)) throw InputProblem.ofField(field, "a share from 0 to 100 % of parts");
         }
 
         /**
@@ -98,6 +114,12 @@ public record FeatureSimulation(RadiusFeature feature, CaseSimulations.JudgedNee
         public ProcessModel model(ProcessModel base) {
             ProcessModel.Flats f = base.flat();
             ProcessModel.Steps s = base.step();
+            if (flatRate > 0 && !(f.widthMax() > 0)) {
+                throw InputProblem.ofField("Flats on", "the process table gives this process no flat width; keep it at 0 %");
+            }
+            if (stepRate > 0 && !(s.sizeMax() > 0)) {
+                throw InputProblem.ofField("Steps on", "the process table gives this process no step size; keep it at 0 %");
+            }
             return new ProcessModel(base.units(), base.corner(), base.nominalRadius(), new ProcessModel.Scatter(radiusMean, radiusSd),
                     positionSd, new ProcessModel.Flats(flatRate, f.widthMin(), f.widthMax(), f.centreMin(), f.centreMax()),
                     new ProcessModel.Steps(stepRate, s.sizeMin(), s.sizeMax()), noise, points);

@@ -1,12 +1,14 @@
 package org.arcwright.app.simulate;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Path;
 import java.util.List;
 import org.arcwright.cli.CliRun;
+import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.services.CaseSimulations;
 import org.arcwright.services.Practice;
@@ -75,6 +77,21 @@ class FeatureSimulationTest {
             }
         }
         assertThat(compared).isGreaterThanOrEqualTo(8);
+    }
+
+    @Test
+    void aFigureOutOfRangeIsNamedAsTheViewLabelsIt() {
+        Practice practice = Practice.load(List.of(), null);
+        RadiusFeature f2 = new WorksheetFiles(new JsonFiles()).read(DECIDED).features().get(1);
+        FeatureSimulation plan = FeatureSimulation.of(f2, practice, ProcessDefaults.load(practice.packs()));
+        FeatureSimulation.Figures d = plan.defaults();
+        assertThatThrownBy(() -> new FeatureSimulation.Figures(d.radiusMean(), -0.01, d.positionSd(), d.flatRate(), d.stepRate(),
+                d.noise(), d.points(), d.parts(), d.seed())).isInstanceOf(InputProblem.class).hasMessageContaining("Radius sd");
+        assertThatThrownBy(() -> new FeatureSimulation.Figures(d.radiusMean(), d.radiusSd(), d.positionSd(), 1.5, d.stepRate(),
+                d.noise(), d.points(), d.parts(), d.seed())).isInstanceOf(InputProblem.class).hasMessageContaining("Flats on")
+                .hasMessageContaining("0 to 100 %");
+        assertThatThrownBy(() -> new FeatureSimulation.Figures(d.radiusMean(), d.radiusSd(), d.positionSd(), d.flatRate(), d.stepRate(),
+                d.noise(), 2, d.parts(), d.seed())).isInstanceOf(InputProblem.class).hasMessageContaining("Points");
     }
 
     @Test
