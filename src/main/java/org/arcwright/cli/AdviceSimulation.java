@@ -4,54 +4,34 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.util.ArrayList;
-import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Optional;
-import java.util.Set;
 import org.arcwright.callout.Callout;
-import org.arcwright.callout.ProfileTier;
-import org.arcwright.inspect.Freedom;
 import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.io.InputProblem;
-import org.arcwright.model.BlendKind;
 import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.CapabilityTable;
-import org.arcwright.rules.Need;
-import org.arcwright.rules.Recommendation;
+import org.arcwright.services.CaseSimulations;
 import org.arcwright.simulate.CalloutResult;
-import org.arcwright.simulate.Needs;
 import org.arcwright.simulate.ProcessDefaults;
 import org.arcwright.simulate.ProcessModel;
 import org.arcwright.simulate.Share;
-import org.arcwright.simulate.Simulation;
 import org.arcwright.simulate.SimulationResult;
-import org.arcwright.simulate.SimulationRunner;
-import org.arcwright.zone.Corner;
-import org.arcwright.zone.ProfileZone;
-import org.arcwright.zone.Point2;
 
 /**
  * {@code advise --simulate}: judges each card's callout over one simulated population from the
  * pack's default process model for the case's process, against the advice's radius needs. Evidence
- * on the cards only; the ranking is the advisor's and is not touched.
- *
- * <p>Each card is judged on its own population of the same seed; radius limits off the nominal are
- * judged with the process aimed at their middle. Mapping (the adapter's whole job): the radius floor (largest of the floors) becomes
- * {@code minRadius}, the radius ceiling (smallest of the ceilings) {@code maxRadius}; form and
- * location needs are not radius limits and are reported as not judged. Callouts: R and CR as radius
- * limits; a profile floats without datums and is located with them (a 2-D section has no partial
- * datum frame to honour); a composite profile's lower tiers keep rotation fixed and translation free
- * when they repeat datums (refinement of orientation, ASME Y14.5-2018 composite profile, from memory).
- * Not simulated: a title-block general tolerance (not a callout on this blend) and a profile with a
- * radius refinement (two callouts judged together; the runner judges one at a time).
+ * on the cards only; the ranking is the advisor's and is not touched. The simulations are built and
+ * run by {@link CaseSimulations} (shared with the desktop's Simulation view, so both give the same
+ * figures for the same case and seed); this class only words and prints them.
  */
 final class AdviceSimulation {
     /** Parts when {@code --simulate-parts} is not given: small enough for an interactive answer. */
-    static final int DEFAULT_PARTS = 2_000;
+    static final int DEFAULT_PARTS = CaseSimulations.DEFAULT_PARTS;
     /** The fixed seed: the same case gives the same figures on every run and machine. */
-    static final long DEFAULT_SEED = 19;
+    static final long DEFAULT_SEED = CaseSimulations.DEFAULT_SEED;
 
     /**
      * One card's evidence: a result, or why there is none.
@@ -97,78 +77,53 @@ final class AdviceSimulation {
         DesignCase c = advice.designCase();
         String u = c.units().symbol();
         List<String> notes = new ArrayList<>();
-        List<String> notJudged = new ArrayList<>();
-        double floor = 0, ceiling = Double.POSITIVE_INFINITY;
-        for (Need n : advice.needs()) {
-            if (n.id() == Need.Kind.RADIUS_FLOOR && n.min() != null) floor = Math.max(floor, n.min());
-            else if (n.id() == Need.Kind.RADIUS_CEILING && n.max() != null) ceiling = Math.min(ceiling, n.max());
-            else notJudged.add(n.key() + " (not a radius limit the simulation can check on the true blend)");
-        }
+        CaseSimulations.JudgedNeeds judged = CaseSimulations.needs(advice.needs());
+        List<String> notJudged = judged.notJudged();
         if (defaults.isEmpty()) {
             notes.add("not simulated: no pack provides a " + ProcessDefaults.KIND + " table");
             return empty(advice, c, u, seed, parts, notJudged, notes, "no table");
         }
-        if (floor > ceiling) {
-            notes.add("not simulated: the radius floor " + Numbers.plain(floor) + " " + u + " lies above the ceiling "
-                    + Numbers.plain(ceiling) + " " + u + "; no part can be functionally good");
+        if (judged.contradictory()) {
+            notes.add("not simulated: the radius floor " + Numbers.plain(judged.floor()) + " " + u + " lies above the ceiling "
+                    + Numbers.plain(judged.ceiling()) + " " + u + "; no part can be functionally good");
             return empty(advice, c, u, seed, parts, notJudged, notes, defaults.get().id());
         }
-        if (floor == 0 && Double.isInfinite(ceiling)) {
+        if (judged.none()) {
             notes.add("no radius floor or ceiling among the needs: every part counts as functionally good, so escapes are 0 by construction");
         }
-        double mmPer = c.units().millimetres();
-        Optional<Double> pmMm = capability == null ? Optional.empty() : capability.plusMinusMm(c.process(), c.nominalRadius() * mmPer);
-        double pm = pmMm.map(t -> t / mmPer).orElse(c.nominalRadius() * 0.1);
         ProcessDefaults d = defaults.get();
-        String sdFrom = "process capability ±" + Numbers.plain(pm) + " " + u + " / " + Numbers.plain(d.radiusSdDivisor())
-                + (pmMm.isPresent() ? " (capability table, " + c.process().key() + ")" : " (no capability entry: ±10 % of the nominal assumed)");
-        ProcessModel caseModel;
+        CaseSimulations.CaseProcess process;
         try {
-            caseModel = d.model(c.process().key(), c.units(), corner(c), c.nominalRadius(), pm);
+            process = CaseSimulations.process(c, d, capability);
         } catch (InputProblem p) {
             notes.add("not simulated: " + p.getMessage());
             return empty(advice, c, u, seed, parts, notJudged, notes, d.id());
         }
-        Needs needs = new Needs(floor, ceiling, Double.NaN, Double.NaN);
+        double pm = process.plusMinus();
+        String sdFrom = "process capability ±" + Numbers.plain(pm) + " " + u + " / " + Numbers.plain(d.radiusSdDivisor())
+                + (process.fromCapability() ? " (capability table, " + c.process().key() + ")" : " (no capability entry: ±10 % of the nominal assumed)");
+        ProcessModel caseModel = process.model();
+        List<CaseSimulations.Candidate> candidates = CaseSimulations.candidates(advice.recommendations(), null, caseModel, true);
+        List<CaseSimulations.Judged> judgedCards = CaseSimulations.run(candidates, judged.needs(), parts, seed);
         List<Card> cards = new ArrayList<>();
-        SimulationResult result = null;
+        boolean ran = false;
         boolean centred = false;
-        for (Recommendation r : advice.recommendations()) {
-            String reason = r.refinement() != null
-                    ? "a profile with a radius refinement is judged by two callouts together; the simulation judges one callout at a time"
-                    : null;
-            InspectionCallout ic = reason == null ? toInspection(r.callout()) : null;
-            if (ic == null && reason == null) {
-                reason = r.callout() instanceof Callout.General
-                        ? "a title-block general tolerance is no callout on this blend; its range is judged by the size check, not simulated here"
-                        : "no inspection equivalent for " + r.callout().typeName();
-            }
-            if (ic == null) {
-                cards.add(new Card(null, null, reason));
+        for (CaseSimulations.Judged j : judgedCards) {
+            centred |= j.candidate().aimedOff(caseModel);
+            if (j.result() == null) {
+                cards.add(new Card(null, null, j.notSimulated()));
                 continue;
             }
-            ProcessModel model = caseModel;
-            if (r.callout() instanceof Callout.SizeLimits lim && lim.min() + lim.max() != 2 * c.nominalRadius()) {
-                model = d.model(c.process().key(), c.units(), corner(c), (lim.min() + lim.max()) / 2, pm);
-                centred = true;
-            }
-            Simulation sim = new Simulation(model, needs, List.of(ic), parts, seed, Simulation.defaultResolution(model), Double.NaN);
-            try {
-                SimulationResult one = SimulationRunner.allCores().run(sim);
-                if (result == null || model == caseModel) result = one;
-                cards.add(new Card(one.callouts().get(0), one.goodShare(), null));
-            } catch (InputProblem p) {
-                cards.add(new Card(null, null, "the inspection cannot judge even the nominal part: " + p.getMessage()));
-            }
+            ran = true;
+            cards.add(new Card(j.callout(), j.good(), null));
         }
         if (centred) {
             notes.add("radius limits off the nominal: the process aims at the middle of each card's limits (a shop centres on the "
                     + "drawn band, common practice); other cards at the nominal R" + Numbers.plain(c.nominalRadius()) + " " + u);
         }
-        if (result == null) notes.add("no card's callout could be simulated");
-        ProcessModel model = caseModel;
-        return new Report(result != null, c.process().key(), d.id() + " (" + d.source() + ")", pm / d.radiusSdDivisor(), sdFrom,
-                seed, parts, model.points(), model.noise(), u, needs.describe(u), notJudged, cards, notes);
+        if (!ran) notes.add("no card's callout could be simulated");
+        return new Report(ran, c.process().key(), process.source(), process.radiusSd(), sdFrom,
+                seed, parts, caseModel.points(), caseModel.noise(), u, judged.needs().describe(u), notJudged, cards, notes);
     }
 
     private static Report empty(Advice advice, DesignCase c, String u, long seed, int parts, List<String> notJudged,
@@ -179,35 +134,8 @@ final class AdviceSimulation {
                 cards, notes);
     }
 
-    /** The case's corner: leg A along x, leg B at the corner angle, material as the blend kind says. */
-    static Corner corner(DesignCase c) {
-        double a = Math.toRadians(c.cornerAngleDegrees());
-        return new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(Math.cos(a), Math.sin(a)),
-                c.kind());
-    }
-
-    /** The inspection callout judging the same thing, or null when there is none. */
-    static InspectionCallout toInspection(Callout callout) {
-        if (callout instanceof Callout.SizeLimits s) {
-            return new InspectionCallout.RadiusLimits(s.radiusKind(), s.min(), s.max());
-        }
-        if (callout instanceof Callout.Profile p) {
-            ProfileZone z = p.outward() == null ? ProfileZone.bilateral(p.zone()) : new ProfileZone(p.zone(), p.outward());
-            Set<Freedom> free = p.datums().isEmpty() ? EnumSet.allOf(Freedom.class) : EnumSet.noneOf(Freedom.class);
-            return new InspectionCallout.ProfileTolerance(z, free, p.dynamic());
-        }
-        if (callout instanceof Callout.CompositeProfile cp) {
-            List<InspectionCallout.Tier> tiers = new ArrayList<>();
-            for (int i = 0; i < cp.tiers().size(); i++) {
-                ProfileTier t = cp.tiers().get(i);
-                Set<Freedom> free = t.datums().isEmpty() ? EnumSet.allOf(Freedom.class)
-                        : i == 0 ? EnumSet.noneOf(Freedom.class) : EnumSet.of(Freedom.X, Freedom.Y);
-                tiers.add(new InspectionCallout.Tier(t.zone(), free));
-            }
-            return new InspectionCallout.CompositeProfile(tiers);
-        }
-        return null;
-    }
+    /** The inspection callout judging the same thing, or null when there is none (the shared mapping). */
+    static InspectionCallout toInspection(Callout callout) { return CaseSimulations.toInspection(callout); }
 
     /** Adds {@code simulation} to each recommendation of an advice's JSON and the run's note at the top. */
     static void addJson(ObjectNode adviceNode, Report r) {

@@ -236,8 +236,8 @@ public final class MainWindow {
                     public void setTeamPacks(List<String> folders) { changeTeamPacks(folders); }
                 }));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
-        work.addTab("Simulation", null, new LazyTab<>("simulation", () -> new org.arcwright.app.simulate.SimulationView(null)),
-                "What each candidate callout lets through, on a simulated population of parts");
+        work.addTab("Simulation", null, new LazyTab<>("simulation", () -> new org.arcwright.app.simulate.SimulationView(session,
+                () -> core == null ? null : core.practice())), "What each candidate callout of the selected feature lets through");
         notesPanel = new NotesPanel(services.search(), services.background(), status::show);
         // the side panels collapse with the divider's arrows, and each column keeps its share of any
         // window width: the weights equal the initial shares (Part 24 %, Notes 20 %, the work area the rest)
