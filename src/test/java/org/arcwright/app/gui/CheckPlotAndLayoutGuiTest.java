@@ -45,7 +45,7 @@ class CheckPlotAndLayoutGuiTest {
     private static final Path HOUSING = Path.of("examples/inspect/housing-fillet-profile.json").toAbsolutePath();
     private static final Path HOUSING_CSV = Path.of("examples/inspect/housing-fillet-section.csv").toAbsolutePath();
     private static final int CHECK = 3;
-    private static final List<String> OTHER_AREAS = List.of("Simulation");
+    private static final List<String> OTHER_AREAS = List.of();
 
     @TempDir
     static Path config;
