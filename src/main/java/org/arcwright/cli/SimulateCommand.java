@@ -23,7 +23,7 @@ import picocli.CommandLine.Spec;
 @Command(name = "simulate", mixinStandardHelpOptions = true,
         description = {"Simulates parts from a process model, measures each as a CMM would and judges it",
                 "by every candidate callout (the inspect engine) and by the function (true geometry).",
-                "Reports per callout the shares accepted, escapes and false rejects, with 95 % intervals.",
+                "Reports per callout the shares accepted, escapes and false rejects, with 95 %% intervals.",
                 "Exit 0 done, 2 bad input."})
 final class SimulateCommand implements Callable<Integer> {
     @Spec

@@ -98,112 +98,140 @@ public final class Inspector {
         VERDICT
     }
 
-    private InspectionResult judge(InspectionRequest req, InspectionCallout callout, MeasuredSection section, Detail detail) {
-        PointSet pts = req.points();
-        double res = req.resolution(), u = req.uncertainty();
-        String unit = req.units().symbol();
-        boolean explain = detail == Detail.REPORT;
-        List<String> notes = new ArrayList<>();
-        Nominal.CornerBlend cb = req.nominal() instanceof Nominal.CornerBlend c ? c : null;
-        RadiusEnvelope env = null;
-        ControlledRadiusOutcome cr = null;
-        ProfileOutcome profile = null;
-        List<ProfileOutcome> tiers = null;
-        AdjacentSurfaces surfaces = null;
-        Worst worst;
+    /** What one callout's judgement found, filled in by the judging methods below. */
+    private static final class Judged {
         Verdict verdict;
-        Blend blend = null;
+        RadiusEnvelope env;
+        ControlledRadiusOutcome cr;
+        ProfileOutcome profile;
+        List<ProfileOutcome> tiers;
+        AdjacentSurfaces surfaces;
+        Blend blend;
+        Worst worst;
+        final List<String> notes = new ArrayList<>();
+    }
+
+    private InspectionResult judge(InspectionRequest req, InspectionCallout callout, MeasuredSection section, Detail detail) {
+        Nominal.CornerBlend cb = req.nominal() instanceof Nominal.CornerBlend c ? c : null;
+        Judged j = new Judged();
         if (callout instanceof InspectionCallout.RadiusLimits rl) {
             if (cb == null) throw InputProblem.ofField("callout.type", "a radius callout needs a corner, not a general contour");
-            surfaces = section.surfaces(cb.corner(), rl.max());
-            if (explain) notes.addAll(surfaces.notes());
-            Corner corner = surfaces.corner();
-            RadiusZone zone = new RadiusZone(corner, rl.min(), rl.max(), res);
-            env = zone.evaluate(pts.xs(), pts.ys(), pts.size());
-            verdict = env.pass() ? Verdict.PASS : Verdict.FAIL;
-            if (u > 0) {
-                int[] counts = new int[3];
-                Boolean proven = zone.decide(pts.xs(), pts.ys(), pts.size(), u, counts);
-                Verdict byU = proven == null ? Verdict.INDETERMINATE : proven ? Verdict.PASS : Verdict.FAIL;
-                verdict = byU == verdict ? verdict : Verdict.INDETERMINATE;
-                if (explain && counts[1] > 0) {
-                    notes.add(counts[1] + " point(s) lie within U = " + fmt(u) + " " + unit
-                            + " of a limit arc (or of a surface, beyond the resolution): neither in nor out is proven there (ISO 14253-1)");
-                }
-            }
-            worst = explain ? radiusWorst(pts, zone, env, section.stations(corner, cb.radius()), unit) : radiusExcess(pts, zone, env, unit);
-            if (explain) {
-                notes.add("the radius zone is two arcs tangent to the adjacent surfaces fitted to the points (ASME Y14.5-2018 radius; a ± radius locates nothing); "
-                        + "the nominal corner only seeds the fit");
-                notes.add(String.format(Locale.ROOT, "points within %s %s of a surface may be taken as on it (the zone narrows to nothing at the tangent points); limits compared with the same slack",
-                        fmt(res), unit));
-                if (env.beyond() > 0) {
-                    notes.add(env.beyond() + " point(s) beyond the tangent points of the " + fmt(rl.max()) + " " + unit
-                            + " arc belong to the adjacent surfaces and are not judged by the radius zone");
-                }
-                if (env.outside() > 0) notes.add(env.outside() + " point(s) lie outside the adjacent surfaces (beyond the sharp corner): no radius allows them");
-            }
-            if (rl.kind() == RadiusKind.CR) {
-                blend = blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max());
-                cr = ControlledRadiusCheck.evaluate(corner, cb.radius(), rl.min(), rl.max(), env, blend, req.window(), res, u);
-                verdict = verdict.and(cr.verdict());
-                if (cr.worst() != null && (worst == null || cr.worstExcess() > worst.excess())) {
-                    worst = explain ? windowWorst(pts, cr, unit)
-                            : new Worst(cr.worstIndex(), pts.xs()[cr.worstIndex()], pts.ys()[cr.worstIndex()], cr.worstExcess(), "local radius", unit, "");
-                }
-                if (explain) {
-                    notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s %s windows along the blend, stepped by a quarter window (75 %% overlap, %d windows); "
-                            + "each with its expanded uncertainty (k = 2) from the fit's residuals and the window's arc",
-                            fmt(cr.windowLength()), unit, cr.windows()));
-                    if (!cr.indeterminate().isEmpty()) {
-                        notes.add(cr.indeterminate().size() + " window(s) straddle a limit within their uncertainty: neither pass nor fail is proven there. "
-                                + "A longer window (--window, now " + fmt(cr.windowLength()) + " " + unit + "), a denser scan or a lower-noise probe would decide");
-                    }
-                }
-            }
+            judgeRadius(req, rl, cb, section, detail, j);
         } else if (callout instanceof InspectionCallout.ProfileTolerance pt) {
-            double stop = detail == Detail.VERDICT ? acceptAt(pt.zone(), u) : Double.NEGATIVE_INFINITY;
-            profile = profileCheck(req, section).evaluate(pts, pt.zone(), pt.free(), pt.dynamic(), stop);
-            verdict = profileVerdict(profile, u);
-            worst = profileWorst(pts, profile, unit, explain);
-            if (explain) {
-                notes.add("deviation is positive toward air (the side where added material would put the surface)");
-                if (pt.free().isEmpty() && !pt.dynamic()) notes.add("located profile: judged in the nominal (datum) frame, where the points were measured");
-            }
+            judgeProfile(req, pt, section, detail, j);
         } else {
-            InspectionCallout.CompositeProfile comp = (InspectionCallout.CompositeProfile) callout;
-            tiers = new ArrayList<>();
-            verdict = Verdict.PASS;
-            worst = null;
-            ProfileCheck check = profileCheck(req, section);
-            for (InspectionCallout.Tier t : comp.tiers()) {
-                ProfileZone tz = ProfileZone.bilateral(t.zone());
-                double stop = detail == Detail.VERDICT ? acceptAt(tz, u) : Double.NEGATIVE_INFINITY;
-                ProfileOutcome o = check.evaluate(pts, tz, t.free(), false, stop);
-                tiers.add(o);
-                verdict = verdict.and(profileVerdict(o, u));
-                Worst w = profileWorst(pts, o, unit, explain);
-                if (worst == null || w.excess() > worst.excess()) worst = w;
-            }
-            tiers = List.copyOf(tiers);
-            if (explain) notes.add("each tier's zone is placed on its own within the freedom it leaves; the surface must lie in every tier's zone");
+            judgeComposite(req, (InspectionCallout.CompositeProfile) callout, section, detail, j);
         }
-        if (explain && u > 0) {
-            notes.add("verdict by the ISO 14253-1 default rule with U = " + fmt(u) + " " + unit
+        double u = req.uncertainty();
+        if (detail == Detail.REPORT && u > 0) {
+            j.notes.add("verdict by the ISO 14253-1 default rule with U = " + fmt(u) + " " + req.units().symbol()
                     + ": conformance only inside the zone reduced by U, non-conformance only outside it enlarged by U");
         }
         Fits fits = null;
         if (detail == Detail.REPORT && cb != null) {
-            if (surfaces == null) {
-                surfaces = section.surfaces(cb.corner(), largestRadius(callout, cb));
-                notes.addAll(surfaces.notes());
+            PointSet pts = req.points();
+            if (j.surfaces == null) {
+                j.surfaces = section.surfaces(cb.corner(), largestRadius(callout, cb));
+                j.notes.addAll(j.surfaces.notes());
             }
-            if (blend == null) {
-                blend = blendOf(surfaces.corner(), cb, pts, section.stations(surfaces.corner(), cb.radius()), largestRadius(callout, cb));
-            }
-            fits = fitsOf(surfaces.corner(), blend);
+            Corner corner = j.surfaces.corner();
+            if (j.blend == null) j.blend = blendOf(corner, cb, pts, section.stations(corner, cb.radius()), largestRadius(callout, cb));
+            fits = fitsOf(corner, j.blend);
         }
-        return new InspectionResult(req, verdict, env, cr, profile, tiers, fits, surfaces, worst, List.copyOf(notes), List.of());
+        return new InspectionResult(req, j.verdict, j.env, j.cr, j.profile, j.tiers, fits, j.surfaces, j.worst,
+                List.copyOf(j.notes), List.of());
+    }
+
+    /** R and CR: the radius zone on the fitted surfaces, then for CR the local radius along the blend. */
+    private static void judgeRadius(InspectionRequest req, InspectionCallout.RadiusLimits rl, Nominal.CornerBlend cb,
+                                    MeasuredSection section, Detail detail, Judged j) {
+        PointSet pts = req.points();
+        double res = req.resolution(), u = req.uncertainty();
+        String unit = req.units().symbol();
+        boolean explain = detail == Detail.REPORT;
+        j.surfaces = section.surfaces(cb.corner(), rl.max());
+        if (explain) j.notes.addAll(j.surfaces.notes());
+        Corner corner = j.surfaces.corner();
+        RadiusZone zone = new RadiusZone(corner, rl.min(), rl.max(), res);
+        j.env = zone.evaluate(pts.xs(), pts.ys(), pts.size());
+        j.verdict = j.env.pass() ? Verdict.PASS : Verdict.FAIL;
+        if (u > 0) {
+            int[] counts = new int[3];
+            Boolean proven = zone.decide(pts.xs(), pts.ys(), pts.size(), u, counts);
+            Verdict byU = proven == null ? Verdict.INDETERMINATE : proven ? Verdict.PASS : Verdict.FAIL;
+            j.verdict = byU == j.verdict ? j.verdict : Verdict.INDETERMINATE;
+            if (explain && counts[1] > 0) {
+                j.notes.add(counts[1] + " point(s) lie within U = " + fmt(u) + " " + unit
+                        + " of a limit arc (or of a surface, beyond the resolution): neither in nor out is proven there (ISO 14253-1)");
+            }
+        }
+        j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), unit) : radiusExcess(pts, zone, j.env, unit);
+        if (explain) radiusNotes(rl, j.env, res, unit, j.notes);
+        if (rl.kind() != RadiusKind.CR) return;
+        j.blend = blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max());
+        // a failed zone fails the CR whatever its windows say: a verdict alone need not read them
+        // (the blend is still separated: a section without one is refused, as the full inspection refuses it)
+        if (detail == Detail.VERDICT && j.verdict == Verdict.FAIL) return;
+        ControlledRadiusOutcome cr = ControlledRadiusCheck.evaluate(corner, cb.radius(), rl.min(), rl.max(), j.env, j.blend, req.window(), res, u);
+        j.cr = cr;
+        j.verdict = j.verdict.and(cr.verdict());
+        if (cr.worst() != null && (j.worst == null || cr.worstExcess() > j.worst.excess())) {
+            int i = cr.worstIndex();
+            j.worst = explain ? windowWorst(pts, cr, unit) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, "");
+        }
+        if (explain) {
+            j.notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s %s windows along the blend, stepped by a quarter window (75 %% overlap, %d windows); "
+                    + "each with its expanded uncertainty (k = 2) from the fit's residuals and the window's arc",
+                    fmt(cr.windowLength()), unit, cr.windows()));
+            if (!cr.indeterminate().isEmpty()) {
+                j.notes.add(cr.indeterminate().size() + " window(s) straddle a limit within their uncertainty: neither pass nor fail is proven there. "
+                        + "A longer window (--window, now " + fmt(cr.windowLength()) + " " + unit + "), a denser scan or a lower-noise probe would decide");
+            }
+        }
+    }
+
+    private static void radiusNotes(InspectionCallout.RadiusLimits rl, RadiusEnvelope env, double res, String unit, List<String> notes) {
+        notes.add("the radius zone is two arcs tangent to the adjacent surfaces fitted to the points (ASME Y14.5-2018 radius; a ± radius locates nothing); "
+                + "the nominal corner only seeds the fit");
+        notes.add(String.format(Locale.ROOT, "points within %s %s of a surface may be taken as on it (the zone narrows to nothing at the tangent points); limits compared with the same slack",
+                fmt(res), unit));
+        if (env.beyond() > 0) {
+            notes.add(env.beyond() + " point(s) beyond the tangent points of the " + fmt(rl.max()) + " " + unit
+                    + " arc belong to the adjacent surfaces and are not judged by the radius zone");
+        }
+        if (env.outside() > 0) notes.add(env.outside() + " point(s) lie outside the adjacent surfaces (beyond the sharp corner): no radius allows them");
+    }
+
+    private static void judgeProfile(InspectionRequest req, InspectionCallout.ProfileTolerance pt, MeasuredSection section,
+                                     Detail detail, Judged j) {
+        double u = req.uncertainty();
+        double stop = detail == Detail.VERDICT ? acceptAt(pt.zone(), u) : Double.NEGATIVE_INFINITY;
+        j.profile = profileCheck(req, section).evaluate(req.points(), pt.zone(), pt.free(), pt.dynamic(), stop);
+        j.verdict = profileVerdict(j.profile, u);
+        j.worst = profileWorst(req.points(), j.profile, req.units().symbol(), detail == Detail.REPORT);
+        if (detail == Detail.REPORT) {
+            j.notes.add("deviation is positive toward air (the side where added material would put the surface)");
+            if (pt.free().isEmpty() && !pt.dynamic()) j.notes.add("located profile: judged in the nominal (datum) frame, where the points were measured");
+        }
+    }
+
+    private static void judgeComposite(InspectionRequest req, InspectionCallout.CompositeProfile comp, MeasuredSection section,
+                                       Detail detail, Judged j) {
+        double u = req.uncertainty();
+        List<ProfileOutcome> tiers = new ArrayList<>();
+        j.verdict = Verdict.PASS;
+        ProfileCheck check = profileCheck(req, section);
+        for (InspectionCallout.Tier t : comp.tiers()) {
+            ProfileZone tz = ProfileZone.bilateral(t.zone());
+            double stop = detail == Detail.VERDICT ? acceptAt(tz, u) : Double.NEGATIVE_INFINITY;
+            ProfileOutcome o = check.evaluate(req.points(), tz, t.free(), false, stop);
+            tiers.add(o);
+            j.verdict = j.verdict.and(profileVerdict(o, u));
+            Worst w = profileWorst(req.points(), o, req.units().symbol(), detail == Detail.REPORT);
+            if (j.worst == null || w.excess() > j.worst.excess()) j.worst = w;
+        }
+        j.tiers = List.copyOf(tiers);
+        if (detail == Detail.REPORT) j.notes.add("each tier's zone is placed on its own within the freedom it leaves; the surface must lie in every tier's zone");
     }
 
     /**

@@ -179,7 +179,7 @@ public final class ProfileCheck {
             int[] init = initial(lp, s, n, working);
             ActiveSetLp.Result res = ActiveSetLp.solve(lp, init, 1e-14 * spread);
             if (res.z() == null) break;
-            working = java.util.Arrays.stream(res.working()).filter(j -> j < 2 * n).toArray();
+            working = pointConstraints(res.working(), 2 * n);
             double[] step = lp.moves(res.z());
             State t = s.moved(step, xs, ys, contour, spare);
             double obj = objective(t.dev, n, f);
@@ -199,6 +199,16 @@ public final class ProfileCheck {
             }
         }
         return s;
+    }
+
+    /** The constraints of {@code working} below {@code limit} (the points', not the box's), in order. */
+    private static int[] pointConstraints(int[] working, int limit) {
+        int k = 0;
+        for (int j : working) if (j < limit) k++;
+        int[] out = new int[k];
+        k = 0;
+        for (int j : working) if (j < limit) out[k++] = j;
+        return out;
     }
 
     /** The minimax objective (the zone width needed), NaN-safe. */

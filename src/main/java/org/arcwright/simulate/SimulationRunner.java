@@ -139,9 +139,12 @@ public final class SimulationRunner {
         PartGenerator.Scan scan = gen.newScan();
         gen.measure(nominal, () -> 0, scan);
         PointSet pts = new PointSet(scan.xs(), scan.ys(), scan.size(), "simulated section");
+        MeasuredSection section = new MeasuredSection(nominal(sim), pts);
+        Inspector inspector = new Inspector();
         for (int k = 0; k < sim.callouts().size(); k++) {
             try {
-                new Inspector().inspect(request(sim, sim.callouts().get(k), pts));
+                // judged as the parts will be: the same path, so what it refuses here it would refuse there
+                inspector.verdict(request(sim, sim.callouts().get(k), pts), section);
             } catch (InputProblem p) {
                 throw p.under("callouts[" + k + "]");
             }
