@@ -45,7 +45,8 @@ public final class ProfileCheck {
      * measured) or an accepted step. The successive programmes only ever accept a placement that
      * needs no wider zone than the last, so the minimax needs at most {@code stopAt} too: a caller
      * that reads only the verdict gets the same verdict sooner. The outcome then describes that
-     * placement, not the minimax one. {@code -∞}: the full registration.
+     * placement, not the minimax one. {@code -∞}: the full registration. Sections of more than
+     * 20,000 points (thinned, then screened) always register fully.
      */
     ProfileOutcome evaluate(PointSet points, ProfileZone zone, Set<Freedom> free, boolean dynamic, double stopAt) {
         int n = points.size();
