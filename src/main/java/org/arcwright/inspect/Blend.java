@@ -35,37 +35,23 @@ public record Blend(PointSet points, double[] stations, int[] indices, Circle ci
         double[] xs = all.xs(), ys = all.ys();
         Point2 v = corner.vertex(), a = corner.legA(), b = corner.legB();
         Point2 na = corner.inwardNormalA(), nb = corner.inwardNormalB();
-        double tau = START_FRACTION * nominalRadius;
         boolean[] in = new boolean[n];
-        int count = 0;
-        for (int i = 0; i < n; i++) {
-            double qx = xs[i] - v.x(), qy = ys[i] - v.y();
-            double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
-            double ha = qx * na.x() + qy * na.y(), hb = qx * nb.x() + qy * nb.y();
-            in[i] = xa <= reach && xb <= reach && ha > tau && hb > tau;
-            if (in[i]) count++;
-        }
+        int count = seed(xs, ys, n, v, a, b, na, nb, START_FRACTION * nominalRadius, reach, in);
+        // the blend's points gathered in order, reused from round to round
+        double[] bx = new double[n], by = new double[n];
         Circle c = null;
         for (int round = 0; round < 6; round++) {
             if (count < 3) {
                 throw InputProblem.ofField("points", "only " + count + " point(s) lie on the blend between the legs; need at least 3");
             }
-            PointSet sub = all.subset(indexes(in, count), count);
-            CircleFits.requireCircular(sub.xs(), sub.ys(), count, "points (blend)");
-            c = CircleFits.taubin(sub.xs(), sub.ys(), count);
+            gather(xs, ys, n, in, bx, by);
+            CircleFits.requireCircular(bx, by, count, "points (blend)");
+            c = CircleFits.taubin(bx, by, count);
             double lim = (c.cx() - v.x()) * a.x() + (c.cy() - v.y()) * a.y();
             double limB = (c.cx() - v.x()) * b.x() + (c.cy() - v.y()) * b.y();
-            int next = 0;
-            boolean changed = false;
-            for (int i = 0; i < n; i++) {
-                double qx = xs[i] - v.x(), qy = ys[i] - v.y();
-                double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
-                boolean now = xa <= lim && xb <= limB && xa <= reach && xb <= reach;
-                if (now != in[i]) changed = true;
-                in[i] = now;
-                if (now) next++;
-            }
-            count = next;
+            int next = between(xs, ys, n, v, a, b, lim, limB, reach, in);
+            boolean changed = next < 0;
+            count = changed ? -next - 1 : next;
             if (!changed) break;
         }
         if (count < 3) throw InputProblem.ofField("points", "only " + count + " point(s) lie on the blend; need at least 3");
@@ -80,6 +66,51 @@ public record Blend(PointSet points, double[] stations, int[] indices, Circle ci
             sortedSt[k] = st[order[k]];
         }
         return new Blend(all.subset(sortedIdx, count), sortedSt, sortedIdx, c);
+    }
+
+    /** Marks the points more than {@code tau} inside both legs and within {@code reach} of the vertex; returns how many. */
+    private static int seed(double[] xs, double[] ys, int n, Point2 v, Point2 a, Point2 b, Point2 na, Point2 nb,
+                            double tau, double reach, boolean[] in) {
+        int count = 0;
+        for (int i = 0; i < n; i++) {
+            double qx = xs[i] - v.x(), qy = ys[i] - v.y();
+            double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
+            double ha = qx * na.x() + qy * na.y(), hb = qx * nb.x() + qy * nb.y();
+            in[i] = xa <= reach && xb <= reach && ha > tau && hb > tau;
+            if (in[i]) count++;
+        }
+        return count;
+    }
+
+    /** Copies the marked points, in order, to the front of {@code bx}, {@code by}. */
+    private static void gather(double[] xs, double[] ys, int n, boolean[] in, double[] bx, double[] by) {
+        int k = 0;
+        for (int i = 0; i < n; i++) {
+            if (in[i]) {
+                bx[k] = xs[i];
+                by[k++] = ys[i];
+            }
+        }
+    }
+
+    /**
+     * Marks the points between the feet of the circle's perpendiculars on the legs ({@code lim},
+     * {@code limB} along them) and within {@code reach}; returns how many, or {@code -(how many) - 1}
+     * when the marks changed.
+     */
+    private static int between(double[] xs, double[] ys, int n, Point2 v, Point2 a, Point2 b, double lim, double limB,
+                               double reach, boolean[] in) {
+        int next = 0;
+        boolean changed = false;
+        for (int i = 0; i < n; i++) {
+            double qx = xs[i] - v.x(), qy = ys[i] - v.y();
+            double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
+            boolean now = xa <= lim && xb <= limB && xa <= reach && xb <= reach;
+            if (now != in[i]) changed = true;
+            in[i] = now;
+            if (now) next++;
+        }
+        return changed ? -next - 1 : next;
     }
 
     private static int[] indexes(boolean[] in, int count) {

@@ -97,62 +97,19 @@ public final class ControlledRadiusCheck {
         List<ControlledRadiusOutcome.Reversal> reversals = new ArrayList<>();
         List<ControlledRadiusOutcome.LocalWindow> open = new ArrayList<>();
         double revFrom = Double.NaN, revTo = 0, revX = 0, revY = 0;
-        double s0 = st[0], sEnd = st[n - 1];
-        double step = w / 4;
-        int lo = 0;
-        boolean last = false;
         int worstMid = -1;
         double worstEx = Double.NEGATIVE_INFINITY, worstLimit = Double.NaN;
         ControlledRadiusOutcome.LocalWindow worst = null;
         Verdict verdict = Verdict.PASS;
         // first pass: the windows' circles and scatter; the second decides with the pooled scatter as a floor
-        int cap = (int) Math.min(Integer.MAX_VALUE - 8, Math.ceil((sEnd - s0) / step) + 2);
-        int[] los = new int[Math.min(cap, 64)], his = new int[los.length];
-        Circle[] circles = new Circle[los.length];
-        double[] scatter = new double[los.length], spread = new double[los.length];
-        double pooledEe = 0;
-        int pooledDf = 0, count = 0;
-        double[] cov = new double[3];
-        for (double start = s0; !last; start += step) {
-            if (start + w >= sEnd) {
-                start = Math.max(s0, sEnd - w);
-                last = true;
-            }
-            while (lo < n && st[lo] < start) lo++;
-            int hi = lo;
-            while (hi < n && st[hi] <= start + w) hi++;
-            if (hi - lo < MIN_POINTS) {
-                hi = Math.min(n, lo + MIN_POINTS);
-                int from = Math.max(0, hi - MIN_POINTS);
-                if (hi - from < 3) continue;
-                lo = from;
-            }
-            if (count == los.length) {
-                int grown = count * 2;
-                los = java.util.Arrays.copyOf(los, grown);
-                his = java.util.Arrays.copyOf(his, grown);
-                circles = java.util.Arrays.copyOf(circles, grown);
-                scatter = java.util.Arrays.copyOf(scatter, grown);
-                spread = java.util.Arrays.copyOf(spread, grown);
-            }
-            Circle c = CircleFits.taubin(xs, ys, lo, hi);
-            los[count] = lo;
-            his[count] = hi;
-            circles[count] = c;
-            if (Double.isFinite(c.r()) && Double.isFinite(c.cx()) && Double.isFinite(c.cy())) {
-                radiusUncertainty(xs, ys, lo, hi, c, cov);
-                scatter[count] = cov[0];
-                spread[count] = cov[1];
-                if (hi - lo > 3) {
-                    pooledEe += cov[2];
-                    pooledDf += hi - lo - 3;
-                }
-            }
-            count++;
-        }
-        double pooled = pooledDf > 0 ? Math.sqrt(pooledEe / pooledDf) : 0;
+        Windows fitted = Windows.fit(xs, ys, st, n, w);
+        int count = fitted.count;
+        int[] los = fitted.los, his = fitted.his;
+        Circle[] circles = fitted.circles;
+        double[] scatter = fitted.scatter, spread = fitted.spread;
+        double pooled = fitted.pooled;
         for (int k = 0; k < count; k++) {
-            lo = los[k];
+            int lo = los[k];
             int hi = his[k];
             windows++;
             Circle c = circles[k];
@@ -220,6 +177,77 @@ public final class ControlledRadiusCheck {
         if (localMin == Double.POSITIVE_INFINITY) localMin = Double.NaN;
         return new ControlledRadiusOutcome(envelope, localMin, localMax, largestU, reversals, flats, w, windows, verdict,
                 worst, worst == null ? -1 : worstMid, worst == null ? Double.NaN : worstEx, worstLimit, open);
+    }
+
+    /** The windows along the blend and their circles: the first pass, before any decision. */
+    private static final class Windows {
+        int count;
+        int[] los, his;
+        Circle[] circles;
+        double[] scatter, spread;
+        /** The scatter pooled over all windows, {@code √(Σe²/Σ(m - 3))}. */
+        double pooled;
+
+        /** Windows of length {@code w} stepped by a quarter along the stations {@code st}, each with its Taubin circle. */
+        static Windows fit(double[] xs, double[] ys, double[] st, int n, double w) {
+            double s0 = st[0], sEnd = st[n - 1];
+            double step = w / 4;
+            int lo = 0;
+            boolean last = false;
+            int cap = (int) Math.min(Integer.MAX_VALUE - 8, Math.ceil((sEnd - s0) / step) + 2);
+            int[] los = new int[Math.min(cap, 64)], his = new int[los.length];
+            Circle[] circles = new Circle[los.length];
+            double[] scatter = new double[los.length], spread = new double[los.length];
+            double pooledEe = 0;
+            int pooledDf = 0, count = 0;
+            double[] cov = new double[3];
+            for (double start = s0; !last; start += step) {
+                if (start + w >= sEnd) {
+                    start = Math.max(s0, sEnd - w);
+                    last = true;
+                }
+                while (lo < n && st[lo] < start) lo++;
+                int hi = lo;
+                while (hi < n && st[hi] <= start + w) hi++;
+                if (hi - lo < MIN_POINTS) {
+                    hi = Math.min(n, lo + MIN_POINTS);
+                    int from = Math.max(0, hi - MIN_POINTS);
+                    if (hi - from < 3) continue;
+                    lo = from;
+                }
+                if (count == los.length) {
+                    int grown = count * 2;
+                    los = java.util.Arrays.copyOf(los, grown);
+                    his = java.util.Arrays.copyOf(his, grown);
+                    circles = java.util.Arrays.copyOf(circles, grown);
+                    scatter = java.util.Arrays.copyOf(scatter, grown);
+                    spread = java.util.Arrays.copyOf(spread, grown);
+                }
+                Circle c = CircleFits.taubin(xs, ys, lo, hi);
+                los[count] = lo;
+                his[count] = hi;
+                circles[count] = c;
+                if (Double.isFinite(c.r()) && Double.isFinite(c.cx()) && Double.isFinite(c.cy())) {
+                    radiusUncertainty(xs, ys, lo, hi, c, cov);
+                    scatter[count] = cov[0];
+                    spread[count] = cov[1];
+                    if (hi - lo > 3) {
+                        pooledEe += cov[2];
+                        pooledDf += hi - lo - 3;
+                    }
+                }
+                count++;
+            }
+            Windows out = new Windows();
+            out.count = count;
+            out.los = los;
+            out.his = his;
+            out.circles = circles;
+            out.scatter = scatter;
+            out.spread = spread;
+            out.pooled = pooledDf > 0 ? Math.sqrt(pooledEe / pooledDf) : 0;
+            return out;
+        }
     }
 
     /**

@@ -25,25 +25,39 @@ public final class Inspector {
         PointSet pts = req.points();
         if (pts.size() == 0) throw InputProblem.ofField("points", "no points given");
         if (pts.size() < 3) throw InputProblem.ofField("points", "too few points: " + pts.size() + "; need at least 3");
-        Contour contour = contourOf(req.nominal(), pts);
-        List<String> notes = new ArrayList<>();
-        InspectionResult main = judge(req, req.callout(), contour, notes, true);
+        MeasuredSection section = MeasuredSection.of(req);
+        InspectionResult main = judge(req, req.callout(), section, Detail.REPORT);
         if (!req.compare()) return main;
-        List<Comparison> rows = compare(req, contour);
+        List<Comparison> rows = compare(req, section);
         return new InspectionResult(req, main.verdict(), main.radius(), main.controlled(), main.profile(), main.tiers(),
                 main.fits(), main.surfaces(), main.worst(), main.notes(), rows);
     }
 
     /**
-     * The verdict alone: the same judgement as {@link #inspect}, without the circle fits and the
-     * comparison, for callers that judge many sections and read only the verdict (the simulation).
+     * The verdict alone: the same judgement as {@link #inspect}, for callers that judge many sections
+     * and read only the verdict (the simulation). No circle fits, no comparison, no notes; the worst
+     * point carries its excess but no text; a profile that passes may be reported at the first
+     * placement found within the zone rather than the minimax one (the verdict is the same: the
+     * minimax needs no wider zone than any placement found on the way to it).
      * @throws InputProblem for input no verdict can be given on
      */
     public InspectionResult verdict(InspectionRequest req) {
+        return verdict(req, MeasuredSection.of(req));
+    }
+
+    /**
+     * {@link #verdict(InspectionRequest)} on a section shared by several callouts, so that what they
+     * have in common (nominal contour, fitted surfaces, stations) is computed once.
+     *
+     * @param section the section of {@code req}'s points and nominal
+     * @throws IllegalArgumentException when {@code section} is not the request's
+     * @throws InputProblem for input no verdict can be given on
+     */
+    public InspectionResult verdict(InspectionRequest req, MeasuredSection section) {
+        if (!section.serves(req)) throw new IllegalArgumentException("the section is not the request's (other points or nominal)");
         PointSet pts = req.points();
         if (pts.size() < 3) throw InputProblem.ofField("points", "too few points: " + pts.size() + "; need at least 3");
-        Contour contour = contourOf(req.nominal(), pts);
-        return judge(req, req.callout(), contour, new ArrayList<>(), false);
+        return judge(req, req.callout(), section, Detail.VERDICT);
     }
 
     /** The nominal contour the request's points are measured against (legs long enough for every point). */
@@ -51,7 +65,7 @@ public final class Inspector {
         return contourOf(req.nominal(), req.points());
     }
 
-    private static Contour contourOf(Nominal nominal, PointSet pts) {
+    static Contour contourOf(Nominal nominal, PointSet pts) {
         if (nominal instanceof Nominal.CornerBlend cb) return cornerContour(cb.corner(), cb.radius(), pts);
         return ((Nominal.Chain) nominal).contour();
     }
@@ -74,104 +88,165 @@ public final class Inspector {
         return cb.radius() + zone / 2 / CrescentZone.factor(cb.corner().includedAngleDeg());
     }
 
-    private InspectionResult judge(InspectionRequest req, InspectionCallout callout, Contour contour, List<String> notes,
-                                   boolean withFits) {
-        PointSet pts = req.points();
-        double res = req.resolution(), u = req.uncertainty();
-        String unit = req.units().symbol();
-        Nominal.CornerBlend cb = req.nominal() instanceof Nominal.CornerBlend c ? c : null;
-        RadiusEnvelope env = null;
-        ControlledRadiusOutcome cr = null;
-        ProfileOutcome profile = null;
-        List<ProfileOutcome> tiers = null;
-        AdjacentSurfaces surfaces = null;
-        double[] stations = null;
-        Worst worst;
+    /** How much of a judgement to work out beyond the verdict. */
+    private enum Detail {
+        /** Everything {@link #inspect} reports: notes, worst point in words, circle fits. */
+        REPORT,
+        /** The figures a comparison row shows (minimax profile zones, envelopes), no words, no fits. */
+        FIGURES,
+        /** The verdict and the excess it rests on; a profile registration stops once within the zone. */
+        VERDICT
+    }
+
+    /** What one callout's judgement found, filled in by the judging methods below. */
+    private static final class Judged {
         Verdict verdict;
-        Blend blend = null;
+        RadiusEnvelope env;
+        ControlledRadiusOutcome cr;
+        ProfileOutcome profile;
+        List<ProfileOutcome> tiers;
+        AdjacentSurfaces surfaces;
+        Blend blend;
+        Worst worst;
+        final List<String> notes = new ArrayList<>();
+    }
+
+    private InspectionResult judge(InspectionRequest req, InspectionCallout callout, MeasuredSection section, Detail detail) {
+        Nominal.CornerBlend cb = req.nominal() instanceof Nominal.CornerBlend c ? c : null;
+        Judged j = new Judged();
         if (callout instanceof InspectionCallout.RadiusLimits rl) {
             if (cb == null) throw InputProblem.ofField("callout.type", "a radius callout needs a corner, not a general contour");
-            surfaces = AdjacentSurfaces.fit(cb.corner(), rl.max(), pts.xs(), pts.ys(), pts.size());
-            notes.addAll(surfaces.notes());
-            Corner corner = surfaces.corner();
-            RadiusZone zone = new RadiusZone(corner, rl.min(), rl.max(), res);
-            env = zone.evaluate(pts.xs(), pts.ys(), pts.size());
-            verdict = env.pass() ? Verdict.PASS : Verdict.FAIL;
-            if (u > 0) {
-                int[] counts = new int[3];
-                Boolean proven = zone.decide(pts.xs(), pts.ys(), pts.size(), u, counts);
-                Verdict byU = proven == null ? Verdict.INDETERMINATE : proven ? Verdict.PASS : Verdict.FAIL;
-                verdict = byU == verdict ? verdict : Verdict.INDETERMINATE;
-                if (counts[1] > 0) {
-                    notes.add(counts[1] + " point(s) lie within U = " + fmt(u) + " " + unit
-                            + " of a limit arc (or of a surface, beyond the resolution): neither in nor out is proven there (ISO 14253-1)");
-                }
-            }
-            stations = stationsAlong(corner, cb.radius(), pts);
-            worst = radiusWorst(pts, zone, env, stations, unit);
-            notes.add("the radius zone is two arcs tangent to the adjacent surfaces fitted to the points (ASME Y14.5-2018 radius; a ± radius locates nothing); "
-                    + "the nominal corner only seeds the fit");
-            notes.add(String.format(Locale.ROOT, "points within %s %s of a surface may be taken as on it (the zone narrows to nothing at the tangent points); limits compared with the same slack",
-                    fmt(res), unit));
-            if (env.beyond() > 0) {
-                notes.add(env.beyond() + " point(s) beyond the tangent points of the " + fmt(rl.max()) + " " + unit
-                        + " arc belong to the adjacent surfaces and are not judged by the radius zone");
-            }
-            if (env.outside() > 0) notes.add(env.outside() + " point(s) lie outside the adjacent surfaces (beyond the sharp corner): no radius allows them");
-            if (rl.kind() == RadiusKind.CR) {
-                blend = blendOf(corner, cb, pts, stations, rl.max());
-                cr = ControlledRadiusCheck.evaluate(corner, cb.radius(), rl.min(), rl.max(), env, blend, req.window(), res, u);
-                verdict = verdict.and(cr.verdict());
-                if (cr.worst() != null && (worst == null || cr.worstExcess() > worst.excess())) {
-                    worst = windowWorst(pts, cr, unit);
-                }
-                notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s %s windows along the blend, stepped by a quarter window (75 %% overlap, %d windows); "
-                        + "each with its expanded uncertainty (k = 2) from the fit's residuals and the window's arc",
-                        fmt(cr.windowLength()), unit, cr.windows()));
-                if (!cr.indeterminate().isEmpty()) {
-                    notes.add(cr.indeterminate().size() + " window(s) straddle a limit within their uncertainty: neither pass nor fail is proven there. "
-                            + "A longer window (--window, now " + fmt(cr.windowLength()) + " " + unit + "), a denser scan or a lower-noise probe would decide");
-                }
-            }
+            judgeRadius(req, rl, cb, section, detail, j);
         } else if (callout instanceof InspectionCallout.ProfileTolerance pt) {
-            profile = profileCheck(req, contour).evaluate(pts, pt.zone(), pt.free(), pt.dynamic());
-            verdict = profileVerdict(profile, u);
-            worst = profileWorst(pts, profile, unit);
-            notes.add("deviation is positive toward air (the side where added material would put the surface)");
-            if (pt.free().isEmpty() && !pt.dynamic()) notes.add("located profile: judged in the nominal (datum) frame, where the points were measured");
+            judgeProfile(req, pt, section, detail, j);
         } else {
-            InspectionCallout.CompositeProfile comp = (InspectionCallout.CompositeProfile) callout;
-            tiers = new ArrayList<>();
-            verdict = Verdict.PASS;
-            worst = null;
-            ProfileCheck check = profileCheck(req, contour);
-            for (InspectionCallout.Tier t : comp.tiers()) {
-                ProfileOutcome o = check.evaluate(pts, ProfileZone.bilateral(t.zone()), t.free(), false);
-                tiers.add(o);
-                verdict = verdict.and(profileVerdict(o, u));
-                Worst w = profileWorst(pts, o, unit);
-                if (worst == null || w.excess() > worst.excess()) worst = w;
-            }
-            tiers = List.copyOf(tiers);
-            notes.add("each tier's zone is placed on its own within the freedom it leaves; the surface must lie in every tier's zone");
+            judgeComposite(req, (InspectionCallout.CompositeProfile) callout, section, detail, j);
         }
-        if (u > 0) {
-            notes.add("verdict by the ISO 14253-1 default rule with U = " + fmt(u) + " " + unit
+        double u = req.uncertainty();
+        if (detail == Detail.REPORT && u > 0) {
+            j.notes.add("verdict by the ISO 14253-1 default rule with U = " + fmt(u) + " " + req.units().symbol()
                     + ": conformance only inside the zone reduced by U, non-conformance only outside it enlarged by U");
         }
         Fits fits = null;
-        if (withFits && cb != null) {
-            if (surfaces == null) {
-                surfaces = AdjacentSurfaces.fit(cb.corner(), largestRadius(callout, cb), pts.xs(), pts.ys(), pts.size());
-                notes.addAll(surfaces.notes());
+        if (detail == Detail.REPORT && cb != null) {
+            PointSet pts = req.points();
+            if (j.surfaces == null) {
+                j.surfaces = section.surfaces(cb.corner(), largestRadius(callout, cb));
+                j.notes.addAll(j.surfaces.notes());
             }
-            if (blend == null) {
-                if (stations == null) stations = stationsAlong(surfaces.corner(), cb.radius(), pts);
-                blend = blendOf(surfaces.corner(), cb, pts, stations, largestRadius(callout, cb));
-            }
-            fits = fitsOf(surfaces.corner(), blend);
+            Corner corner = j.surfaces.corner();
+            if (j.blend == null) j.blend = blendOf(corner, cb, pts, section.stations(corner, cb.radius()), largestRadius(callout, cb));
+            fits = fitsOf(corner, j.blend);
         }
-        return new InspectionResult(req, verdict, env, cr, profile, tiers, fits, surfaces, worst, List.copyOf(notes), List.of());
+        return new InspectionResult(req, j.verdict, j.env, j.cr, j.profile, j.tiers, fits, j.surfaces, j.worst,
+                List.copyOf(j.notes), List.of());
+    }
+
+    /** R and CR: the radius zone on the fitted surfaces, then for CR the local radius along the blend. */
+    private static void judgeRadius(InspectionRequest req, InspectionCallout.RadiusLimits rl, Nominal.CornerBlend cb,
+                                    MeasuredSection section, Detail detail, Judged j) {
+        PointSet pts = req.points();
+        double res = req.resolution(), u = req.uncertainty();
+        String unit = req.units().symbol();
+        boolean explain = detail == Detail.REPORT;
+        j.surfaces = section.surfaces(cb.corner(), rl.max());
+        if (explain) j.notes.addAll(j.surfaces.notes());
+        Corner corner = j.surfaces.corner();
+        RadiusZone zone = new RadiusZone(corner, rl.min(), rl.max(), res);
+        j.env = zone.evaluate(pts.xs(), pts.ys(), pts.size());
+        j.verdict = j.env.pass() ? Verdict.PASS : Verdict.FAIL;
+        if (u > 0) {
+            int[] counts = new int[3];
+            Boolean proven = zone.decide(pts.xs(), pts.ys(), pts.size(), u, counts);
+            Verdict byU = proven == null ? Verdict.INDETERMINATE : proven ? Verdict.PASS : Verdict.FAIL;
+            j.verdict = byU == j.verdict ? j.verdict : Verdict.INDETERMINATE;
+            if (explain && counts[1] > 0) {
+                j.notes.add(counts[1] + " point(s) lie within U = " + fmt(u) + " " + unit
+                        + " of a limit arc (or of a surface, beyond the resolution): neither in nor out is proven there (ISO 14253-1)");
+            }
+        }
+        j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), unit) : radiusExcess(pts, zone, j.env, unit);
+        if (explain) radiusNotes(rl, j.env, res, unit, j.notes);
+        if (rl.kind() != RadiusKind.CR) return;
+        j.blend = blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max());
+        // a failed zone fails the CR whatever its windows say: a verdict alone need not read them
+        // (the blend is still separated: a section without one is refused, as the full inspection refuses it)
+        if (detail == Detail.VERDICT && j.verdict == Verdict.FAIL) return;
+        ControlledRadiusOutcome cr = ControlledRadiusCheck.evaluate(corner, cb.radius(), rl.min(), rl.max(), j.env, j.blend, req.window(), res, u);
+        j.cr = cr;
+        j.verdict = j.verdict.and(cr.verdict());
+        if (cr.worst() != null && (j.worst == null || cr.worstExcess() > j.worst.excess())) {
+            int i = cr.worstIndex();
+            j.worst = explain ? windowWorst(pts, cr, unit) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, "");
+        }
+        if (explain) {
+            j.notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s %s windows along the blend, stepped by a quarter window (75 %% overlap, %d windows); "
+                    + "each with its expanded uncertainty (k = 2) from the fit's residuals and the window's arc",
+                    fmt(cr.windowLength()), unit, cr.windows()));
+            if (!cr.indeterminate().isEmpty()) {
+                j.notes.add(cr.indeterminate().size() + " window(s) straddle a limit within their uncertainty: neither pass nor fail is proven there. "
+                        + "A longer window (--window, now " + fmt(cr.windowLength()) + " " + unit + "), a denser scan or a lower-noise probe would decide");
+            }
+        }
+    }
+
+    private static void radiusNotes(InspectionCallout.RadiusLimits rl, RadiusEnvelope env, double res, String unit, List<String> notes) {
+        notes.add("the radius zone is two arcs tangent to the adjacent surfaces fitted to the points (ASME Y14.5-2018 radius; a ± radius locates nothing); "
+                + "the nominal corner only seeds the fit");
+        notes.add(String.format(Locale.ROOT, "points within %s %s of a surface may be taken as on it (the zone narrows to nothing at the tangent points); limits compared with the same slack",
+                fmt(res), unit));
+        if (env.beyond() > 0) {
+            notes.add(env.beyond() + " point(s) beyond the tangent points of the " + fmt(rl.max()) + " " + unit
+                    + " arc belong to the adjacent surfaces and are not judged by the radius zone");
+        }
+        if (env.outside() > 0) notes.add(env.outside() + " point(s) lie outside the adjacent surfaces (beyond the sharp corner): no radius allows them");
+    }
+
+    private static void judgeProfile(InspectionRequest req, InspectionCallout.ProfileTolerance pt, MeasuredSection section,
+                                     Detail detail, Judged j) {
+        double u = req.uncertainty();
+        double stop = detail == Detail.VERDICT ? acceptAt(pt.zone(), u) : Double.NEGATIVE_INFINITY;
+        j.profile = profileCheck(req, section).evaluate(req.points(), pt.zone(), pt.free(), pt.dynamic(), stop);
+        j.verdict = profileVerdict(j.profile, u);
+        j.worst = profileWorst(req.points(), j.profile, req.units().symbol(), detail == Detail.REPORT);
+        if (detail == Detail.REPORT) {
+            j.notes.add("deviation is positive toward air (the side where added material would put the surface)");
+            if (pt.free().isEmpty() && !pt.dynamic()) j.notes.add("located profile: judged in the nominal (datum) frame, where the points were measured");
+        }
+    }
+
+    private static void judgeComposite(InspectionRequest req, InspectionCallout.CompositeProfile comp, MeasuredSection section,
+                                       Detail detail, Judged j) {
+        double u = req.uncertainty();
+        List<ProfileOutcome> tiers = new ArrayList<>();
+        j.verdict = Verdict.PASS;
+        ProfileCheck check = profileCheck(req, section);
+        for (InspectionCallout.Tier t : comp.tiers()) {
+            ProfileZone tz = ProfileZone.bilateral(t.zone());
+            double stop = detail == Detail.VERDICT ? acceptAt(tz, u) : Double.NEGATIVE_INFINITY;
+            ProfileOutcome o = check.evaluate(req.points(), tz, t.free(), false, stop);
+            tiers.add(o);
+            j.verdict = j.verdict.and(profileVerdict(o, u));
+            Worst w = profileWorst(req.points(), o, req.units().symbol(), detail == Detail.REPORT);
+            if (j.worst == null || w.excess() > j.worst.excess()) j.worst = w;
+        }
+        j.tiers = List.copyOf(tiers);
+        if (detail == Detail.REPORT) j.notes.add("each tier's zone is placed on its own within the freedom it leaves; the surface must lie in every tier's zone");
+    }
+
+    /**
+     * The required zone at or below which a registration may stop with the verdict already known to
+     * be a pass. With no uncertainty: the zone's width, since the minimax needs no wider zone than a
+     * placement found on the way, and a required zone within the width puts every point within the
+     * zone. With an uncertainty {@code u} (ISO 14253-1), every excess is at most
+     * {@code min(f, 1 - f) · (required - width)} for the disposition {@code f} (each side's excess is
+     * its share of the shortfall), so {@code required <= width - u / min(f, 1 - f)} proves the pass;
+     * a one-sided zone never stops early.
+     */
+    private static double acceptAt(ProfileZone zone, double u) {
+        if (u <= 0) return zone.width();
+        double share = Math.min(zone.fraction(), 1 - zone.fraction());
+        return share > 0 ? zone.width() - u / share : Double.NEGATIVE_INFINITY;
     }
 
     /**
@@ -196,7 +271,7 @@ public final class Inspector {
      * that arc's tangent point on surface a (negative along surface a): what {@code s} means in
      * messages and what CR windows are laid along.
      */
-    private static double[] stationsAlong(Corner corner, double radius, PointSet pts) {
+    static double[] stationsAlong(Corner corner, double radius, PointSet pts) {
         Contour c = cornerContour(corner, radius, pts);
         double[] st = new double[pts.size()];
         c.measureAll(pts.xs(), pts.ys(), pts.size(), null, null, null, st);
@@ -237,6 +312,20 @@ public final class Inspector {
         return new Worst(i, x, y, e, "radius", unit, text);
     }
 
+    /** The worst point of a radius zone with its excess alone, as {@link #radiusWorst} measures it, without words. */
+    private static Worst radiusExcess(PointSet pts, RadiusZone zone, RadiusEnvelope env, String unit) {
+        int i = env.worst();
+        if (i < 0) return null;
+        double x = pts.xs()[i], y = pts.ys()[i];
+        Corner c = zone.corner();
+        Point2 v = c.vertex();
+        double qx = x - v.x(), qy = y - v.y();
+        double ha = qx * c.inwardNormalA().x() + qy * c.inwardNormalA().y();
+        double hb = qx * c.inwardNormalB().x() + qy * c.inwardNormalB().y();
+        if (Math.min(ha, hb) < -zone.resolution()) return new Worst(i, x, y, -Math.min(ha, hb), "distance beyond surface", unit, "");
+        return new Worst(i, x, y, env.worstExcess(), "radius", unit, "");
+    }
+
     private static Worst windowWorst(PointSet pts, ControlledRadiusOutcome cr, String unit) {
         ControlledRadiusOutcome.LocalWindow w = cr.worst();
         int i = cr.worstIndex();
@@ -253,16 +342,18 @@ public final class Inspector {
         return new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, text);
     }
 
-    private static Worst profileWorst(PointSet pts, ProfileOutcome o, String unit) {
+    private static Worst profileWorst(PointSet pts, ProfileOutcome o, String unit, boolean explain) {
         int i = o.worst();
         if (i < 0) return null;
         double d = o.deviations()[i], e = o.worstExcess();
+        if (!explain) return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, "");
         String text = String.format(Locale.ROOT, "point #%d lies %s %s %s the zone (deviation %s %s %s after registration)", i, fmt(Math.abs(e)),
                 unit, e > 0 ? "outside" : "inside", fmt(Math.abs(d)), unit, d >= 0 ? "toward air" : "into the material");
         return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, text);
     }
 
-    private static ProfileCheck profileCheck(InspectionRequest req, Contour contour) {
+    private static ProfileCheck profileCheck(InspectionRequest req, MeasuredSection section) {
+        Contour contour = section.contour();
         Point2 pivot = req.nominal() instanceof Nominal.CornerBlend cb ? cb.corner().vertex() : contour.segments().get(0).start();
         return new ProfileCheck(contour, pivot.x(), pivot.y(), Math.min(req.resolution(), PROFILE_SLACK));
     }
@@ -294,7 +385,7 @@ public final class Inspector {
     }
 
     /** The same points under every applicable callout; limits not stated are derived and marked so. */
-    private List<Comparison> compare(InspectionRequest req, Contour contour) {
+    private List<Comparison> compare(InspectionRequest req, MeasuredSection section) {
         InspectionCallout c = req.callout();
         List<Comparison> rows = new ArrayList<>();
         Nominal.CornerBlend cb = req.nominal() instanceof Nominal.CornerBlend x ? x : null;
@@ -341,7 +432,7 @@ public final class Inspector {
         for (InspectionCallout k : list) {
             boolean derived = !sameCallout(k, c);
             try {
-                InspectionResult r = judge(req.withCallout(k), k, contour, new ArrayList<>(), false);
+                InspectionResult r = judge(req.withCallout(k), k, section, Detail.FIGURES);
                 rows.add(row(k, derived, r));
             } catch (InputProblem p) {
                 rows.add(new Comparison(name(k), k.describe(), derived, false, "cannot judge: " + p.problem(), Double.NaN));

@@ -36,6 +36,19 @@ public final class ProfileCheck {
 
     /** Judges {@code points} against {@code zone}, moving it in {@code free} (and offsetting it if dynamic). */
     public ProfileOutcome evaluate(PointSet points, ProfileZone zone, Set<Freedom> free, boolean dynamic) {
+        return evaluate(points, zone, free, dynamic, Double.NEGATIVE_INFINITY);
+    }
+
+    /**
+     * As {@link #evaluate(PointSet, ProfileZone, Set, boolean)}, but the registration stops at the
+     * first placement whose required zone is at most {@code stopAt}: the start (the points as
+     * measured) or an accepted step. The successive programmes only ever accept a placement that
+     * needs no wider zone than the last, so the minimax needs at most {@code stopAt} too: a caller
+     * that reads only the verdict gets the same verdict sooner. The outcome then describes that
+     * placement, not the minimax one. {@code -∞}: the full registration. Sections of more than
+     * 20,000 points (thinned, then screened) always register fully.
+     */
+    ProfileOutcome evaluate(PointSet points, ProfileZone zone, Set<Freedom> free, boolean dynamic, double stopAt) {
         int n = points.size();
         double[] xs = points.xs(), ys = points.ys();
         double f = zone.fraction();
@@ -45,7 +58,7 @@ public final class ProfileCheck {
             contour.measureAll(xs, ys, n, dev, null, null, null);
             reg = Registration.none(pivotX, pivotY);
         } else {
-            reg = register(points, f, free, dynamic, dev);
+            reg = register(points, f, free, dynamic, dev, stopAt);
         }
         double required = requiredZone(dev, n, f);
         double maxOut = Double.NEGATIVE_INFINITY, maxIn = Double.NEGATIVE_INFINITY, worstEx = Double.NEGATIVE_INFINITY;
@@ -73,7 +86,7 @@ public final class ProfileCheck {
     /** Above this many points, the registration first converges on an evenly thinned subset. */
     private static final int COARSE_LIMIT = 20_000;
 
-    private Registration register(PointSet points, double f, Set<Freedom> free, boolean dynamic, double[] dev) {
+    private Registration register(PointSet points, double f, Set<Freedom> free, boolean dynamic, double[] dev, double stopAt) {
         int n = points.size();
         double[] xs = points.xs(), ys = points.ys();
         double ox = 0, oy = 0, minX = Double.POSITIVE_INFINITY, maxX = Double.NEGATIVE_INFINITY,
@@ -91,11 +104,11 @@ public final class ProfileCheck {
             int k = n / COARSE_LIMIT + 1, m = (n + k - 1) / k;
             double[] sx = new double[m], sy = new double[m];
             for (int i = 0, j = 0; i < n; i += k, j++) { sx[j] = xs[i]; sy[j] = ys[i]; }
-            State coarse = converge(sx, sy, m, ox, oy, spread, spread / 10, f, free, dynamic, start);
+            State coarse = converge(sx, sy, m, ox, oy, spread, spread / 10, f, free, dynamic, start, Double.NEGATIVE_INFINITY);
             start = new double[] {coarse.tx, coarse.ty, coarse.theta, coarse.offset};
         }
         State s = n > COARSE_LIMIT ? screened(xs, ys, n, ox, oy, spread, f, free, dynamic, start)
-                : converge(xs, ys, n, ox, oy, spread, spread / 10, f, free, dynamic, start);
+                : converge(xs, ys, n, ox, oy, spread, spread / 10, f, free, dynamic, start, stopAt);
         System.arraycopy(s.dev, 0, dev, 0, n);
         double c = Math.cos(s.theta), sn = Math.sin(s.theta);
         // report the move as a turn about the pivot: t_P = t + (I - R)(o - P)
@@ -129,7 +142,7 @@ public final class ProfileCheck {
         for (int i = 0, j = 0; i < n; i++) {
             if (full.dev[i] >= hi - band || full.dev[i] <= lo + band) { cx[j] = xs[i]; cy[j] = ys[i]; j++; }
         }
-        State sub = converge(cx, cy, m, ox, oy, spread, spread / 1000, f, free, dynamic, start);
+        State sub = converge(cx, cy, m, ox, oy, spread, spread / 1000, f, free, dynamic, start, Double.NEGATIVE_INFINITY);
         full.tx = sub.tx;
         full.ty = sub.ty;
         full.theta = sub.theta;
@@ -138,15 +151,18 @@ public final class ProfileCheck {
         double subObj = objective(sub.dev, m, f);
         if (objective(full.dev, n, f) <= subObj + 1e-15 * spread) return full;
         return converge(xs, ys, n, ox, oy, spread, spread / 1000, f, free, dynamic,
-                new double[] {sub.tx, sub.ty, sub.theta, sub.offset});
+                new double[] {sub.tx, sub.ty, sub.theta, sub.offset}, Double.NEGATIVE_INFINITY);
     }
 
     /** The band beside each extreme screened in is the spread of the deviations at the start divided by this. */
     private static final double SCREEN_BAND = 8;
 
-    /** Successive linear programmes from {@code start} (tx, ty, θ, offset) until the move vanishes. */
+    /**
+     * Successive linear programmes from {@code start} (tx, ty, θ, offset) until the move vanishes, or
+     * until a placement needs a zone of at most {@code stopAt}.
+     */
     private State converge(double[] xs, double[] ys, int n, double ox, double oy, double spread, double trust, double f,
-                           Set<Freedom> free, boolean dynamic, double[] start) {
+                           Set<Freedom> free, boolean dynamic, double[] start, double stopAt) {
         boolean fx = free.contains(Freedom.X), fy = free.contains(Freedom.Y), fr = free.contains(Freedom.ROTATION);
         State s = new State(n, ox, oy);
         s.tx = start[0];
@@ -156,6 +172,7 @@ public final class ProfileCheck {
         s.measure(xs, ys, contour);
         State spare = new State(n, ox, oy);
         double best = objective(s.dev, n, f);
+        if (best <= stopAt) return s;
         int pass = 0;
         int[] working = new int[0];
         while (pass++ < 200) {
@@ -163,7 +180,7 @@ public final class ProfileCheck {
             int[] init = initial(lp, s, n, working);
             ActiveSetLp.Result res = ActiveSetLp.solve(lp, init, 1e-14 * spread);
             if (res.z() == null) break;
-            working = java.util.Arrays.stream(res.working()).filter(j -> j < 2 * n).toArray();
+            working = pointConstraints(res.working(), 2 * n);
             double[] step = lp.moves(res.z());
             State t = s.moved(step, xs, ys, contour, spare);
             double obj = objective(t.dev, n, f);
@@ -175,7 +192,7 @@ public final class ProfileCheck {
                 boolean done = size <= 1e-7 * spread || (best - obj) <= 1e-15 * spread;
                 s = t;
                 best = obj;
-                if (done) break;
+                if (done || best <= stopAt) break;
                 trust = Math.max(trust, 4 * size);
             } else {
                 trust = size / 4;
@@ -183,6 +200,16 @@ public final class ProfileCheck {
             }
         }
         return s;
+    }
+
+    /** The constraints of {@code working} below {@code limit} (the points', not the box's), in order. */
+    private static int[] pointConstraints(int[] working, int limit) {
+        int k = 0;
+        for (int j : working) if (j < limit) k++;
+        int[] out = new int[k];
+        k = 0;
+        for (int j : working) if (j < limit) out[k++] = j;
+        return out;
     }
 
     /** The minimax objective (the zone width needed), NaN-safe. */

@@ -72,23 +72,24 @@ final class SmallLp {
     /** Simplex iterations on columns {@code [0, enterLimit)}; 0 optimal, 1 unbounded. */
     private static int iterate(double[][] t, int[] basis, double[] cost, int enterLimit, int cols, double eps) {
         int n = t.length;
-        double[] r = new double[cols];
+        boolean[] basic = new boolean[cols];
+        for (int v : basis) basic[v] = true;
+        double[] cb = new double[n];
         int degenerate = 0;
         for (int iter = 0; iter < 50_000; iter++) {
-            for (int j = 0; j < enterLimit; j++) {
-                double s = cost[j];
-                for (int k = 0; k < n; k++) s -= cost[basis[k]] * t[k][j];
-                r[j] = s;
-            }
+            for (int k = 0; k < n; k++) cb[k] = cost[basis[k]];
+            // the entering column: the most negative reduced cost (Dantzig), or the first negative one (Bland)
             int enter = -1;
             boolean bland = degenerate > 30;
             double most = -eps;
             for (int j = 0; j < enterLimit; j++) {
-                if (isBasic(basis, j)) continue;
-                if (r[j] < most) {
+                if (basic[j]) continue;
+                double r = cost[j];
+                for (int k = 0; k < n; k++) r -= cb[k] * t[k][j];
+                if (r < most) {
                     enter = j;
                     if (bland) break;
-                    most = r[j];
+                    most = r;
                 }
             }
             if (enter < 0) return 0;
@@ -106,14 +107,11 @@ final class SmallLp {
             }
             if (leave < 0) return 1;
             degenerate = ratio <= 1e-15 ? degenerate + 1 : 0;
+            basic[basis[leave]] = false;
+            basic[enter] = true;
             pivot(t, basis, leave, enter, cols);
         }
         throw new IllegalStateException("simplex did not converge");
-    }
-
-    private static boolean isBasic(int[] basis, int j) {
-        for (int v : basis) if (v == j) return true;
-        return false;
     }
 
     private static void pivot(double[][] t, int[] basis, int row, int col, int cols) {

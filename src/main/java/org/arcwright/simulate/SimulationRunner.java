@@ -19,6 +19,7 @@ import org.apache.commons.rng.simple.RandomSource;
 import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.MeasuredSection;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.io.InputProblem;
@@ -138,9 +139,12 @@ public final class SimulationRunner {
         PartGenerator.Scan scan = gen.newScan();
         gen.measure(nominal, () -> 0, scan);
         PointSet pts = new PointSet(scan.xs(), scan.ys(), scan.size(), "simulated section");
+        MeasuredSection section = new MeasuredSection(nominal(sim), pts);
+        Inspector inspector = new Inspector();
         for (int k = 0; k < sim.callouts().size(); k++) {
             try {
-                new Inspector().inspect(request(sim, sim.callouts().get(k), pts));
+                // judged as the parts will be: the same path, so what it refuses here it would refuse there
+                inspector.verdict(request(sim, sim.callouts().get(k), pts), section);
             } catch (InputProblem p) {
                 throw p.under("callouts[" + k + "]");
             }
@@ -148,15 +152,20 @@ public final class SimulationRunner {
     }
 
     static InspectionRequest request(Simulation sim, InspectionCallout callout, PointSet pts) {
-        ProcessModel m = sim.model();
-        return new InspectionRequest(m.units(), new Nominal.CornerBlend(m.corner(), m.nominalRadius()), callout, pts,
-                sim.resolution(), sim.window(), false);
+        return new InspectionRequest(sim.model().units(), nominal(sim), callout, pts, sim.resolution(), sim.window(), false);
     }
 
-    /** Judges one measured section under one callout. */
-    static Verdict judge(Inspector inspector, Simulation sim, InspectionCallout callout, PointSet pts) {
+    private static Nominal nominal(Simulation sim) {
+        return new Nominal.CornerBlend(sim.model().corner(), sim.model().nominalRadius());
+    }
+
+    /**
+     * Judges one measured section under one callout; {@code section} is shared by the part's callouts,
+     * so what they have in common is worked out once.
+     */
+    static Verdict judge(Inspector inspector, Simulation sim, InspectionCallout callout, MeasuredSection section) {
         try {
-            return Verdict.of(inspector.verdict(request(sim, callout, pts)));
+            return Verdict.of(inspector.verdict(request(sim, callout, section.points()), section));
         } catch (InputProblem p) {
             return Verdict.INDETERMINATE;
         }
@@ -167,6 +176,7 @@ public final class SimulationRunner {
             int k = sim.callouts().size();
             Tally t = new Tally(k, keepExamples);
             Inspector inspector = new Inspector();
+            Nominal nominal = nominal(sim);
             PartGenerator.Scan scan = gen.newScan();
             NormalizedGaussianSampler g = PartGenerator.gaussian(geometry);
             NormalizedGaussianSampler e = PartGenerator.gaussian(noise);
@@ -177,8 +187,9 @@ public final class SimulationRunner {
                 PointSet pts = new PointSet(scan.xs(), scan.ys(), scan.size(), "simulated section");
                 boolean good = sim.needs().metBy(part);
                 if (good) t.good++;
+                MeasuredSection section = new MeasuredSection(nominal, pts);
                 for (int c = 0; c < k; c++) {
-                    Verdict v = judge(inspector, sim, sim.callouts().get(c), pts);
+                    Verdict v = judge(inspector, sim, sim.callouts().get(c), section);
                     t.count(c, part, pts, v, good);
                 }
             }

@@ -1,14 +1,21 @@
 package org.arcwright.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.assertThatCode;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.ObjectMapper;
 import java.io.IOException;
+import java.io.PrintWriter;
+import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
+import picocli.CommandLine;
+import picocli.CommandLine.Model.OptionSpec;
 
 /** {@code arcwright simulate}: the JSON contract, the caution, and located bad input. Invented process figures. */
 class SimulateCommandTest {
@@ -71,6 +78,20 @@ class SimulateCommandTest {
         CliRun r = CliRun.of("simulate", f.toString());
         assertThat(r.exitCode()).isEqualTo(Cli.BAD_INPUT);
         assertThat(r.err()).contains(f.toString() + ":").contains("process.points").contains("at least 3");
+    }
+
+    /**
+     * picocli formats help text with {@code String.format}; a bare {@code %} ("95 % intervals") made it
+     * warn on standard error and print the raw line.
+     */
+    @Test
+    void helpTextFormatsWithoutWarning() {
+        CommandLine sim = Cli.commandLine(new PrintWriter(new StringWriter()), new PrintWriter(new StringWriter()))
+                .getSubcommands().get("simulate");
+        List<String> lines = new ArrayList<>(List.of(sim.getCommandSpec().usageMessage().description()));
+        for (OptionSpec o : sim.getCommandSpec().options()) lines.addAll(List.of(o.description()));
+        for (String line : lines) assertThatCode(() -> String.format(line)).as(line).doesNotThrowAnyException();
+        assertThat(CliRun.of("simulate", "--help").out()).contains("with 95 %").doesNotContain("%%");
     }
 
     @Test
