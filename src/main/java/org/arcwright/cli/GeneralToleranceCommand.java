@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
 import org.arcwright.tolerance.GeneralTolerance;
@@ -101,7 +102,7 @@ final class GeneralToleranceCommand implements Callable<Integer> {
             m.put("tolerance", tol);
             m.put("toleranceUnits", q == ToleranceQuantity.ANGULAR ? "deg" : u.symbol());
             // in the file's units, with its unit: a bare "±1" beside an inch tolerance reads as inches
-            m.put("formatted", q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + Numbers.plain(tol) + " " + u.symbol());
+            m.put("formatted", q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + DecimalText.significant(tol, 4) + " " + u.symbol());
             m.put("class", t.toleranceClass());
             m.put("className", table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()));
             m.put("range", t.range() + " mm");
@@ -130,15 +131,15 @@ final class GeneralToleranceCommand implements Callable<Integer> {
                 case LINEAR -> "fillet".equals(blend) ? "internal fillet radius (a linear size)" : "linear size";
                 case ANGULAR -> "angle, shorter side";
             };
-            out.printf("%s %s %s, class %s (%s): %s%s%n", what, Numbers.plain(size), u.symbol(), t.toleranceClass(),
+            out.printf("%s %s %s, class %s (%s): %s%s%n", what, DecimalText.significant(size, 4), u.symbol(), t.toleranceClass(),
                     table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()),
-                    q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + Numbers.plain(tol),
+                    q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + DecimalText.significant(tol, 4),
                     q == ToleranceQuantity.ANGULAR ? "" : " " + u.symbol());
             out.printf("  range   %s mm%n", t.range());
             out.printf("  table   %s — %s%n", table.title(), table.source());
             if (asFillet != null) {
                 out.printf("  as an internal fillet radius it is a linear size: ±%s %s (range %s mm; %s — %s)%n",
-                        Numbers.plain(asFillet.plusMinus() / u.millimetres()), u.symbol(), asFillet.range(), linear.title(),
+                        DecimalText.significant(asFillet.plusMinus() / u.millimetres(), 4), u.symbol(), asFillet.range(), linear.title(),
                         linear.source());
                 out.println("  --blend fillet|round picks one; a title block should say which table applies to radii.");
             }

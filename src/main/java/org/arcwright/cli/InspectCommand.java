@@ -15,6 +15,7 @@ import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.ProfileOutcome;
 import org.arcwright.inspect.AdjacentSurfaces;
 import org.arcwright.inspect.Verdict;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.render.ContourPlot;
@@ -95,7 +96,7 @@ final class InspectCommand implements Callable<Integer> {
     private static String n(double v) {
         if (Double.isNaN(v)) return "none";
         if (Double.isInfinite(v)) return "infinite";
-        return Numbers.plain(v);
+        return DecimalText.significant(v, 4);
     }
 
     private static void printText(PrintWriter out, InspectionResult r) {
@@ -118,7 +119,7 @@ final class InspectCommand implements Callable<Integer> {
         ControlledRadiusOutcome c = r.controlled();
         if (c != null) {
             out.printf("  local radius   %s to %s %s (expanded uncertainty up to %s %s, k = 2) over %d windows of %s %s%n", n(c.localMin()),
-                    n(c.localMax()), u, n(c.uncertainty()), u, c.windows(), Numbers.plain(c.windowLength()), u);
+                    n(c.localMax()), u, n(c.uncertainty()), u, c.windows(), DecimalText.significant(c.windowLength(), 4), u);
             int shown = 0;
             for (ControlledRadiusOutcome.LocalWindow w : c.indeterminate()) {
                 if (++shown > 4) {
@@ -170,8 +171,8 @@ final class InspectCommand implements Callable<Integer> {
 
     private static String surface(AdjacentSurfaces.Surface s, String u) {
         if (!s.fitted()) return "nominal (not fitted)";
-        return String.format(java.util.Locale.ROOT, "through [%s, %s] along [%.6f, %.6f] (%d points, rms %s %s)", n(s.point().x()), n(s.point().y()),
-                s.direction().x() + 0.0, s.direction().y() + 0.0, s.points(), Numbers.plain(Double.parseDouble(String.format(java.util.Locale.ROOT, "%.3g", s.rms()))), u);
+        return String.format(java.util.Locale.ROOT, "through [%s, %s] along [%s, %s] (%d points, rms %s %s)", n(s.point().x()), n(s.point().y()),
+                DecimalText.fixed(s.direction().x(), 6), DecimalText.fixed(s.direction().y(), 6), s.points(), DecimalText.significant(s.rms(), 3), u);
     }
 
     private static String freeText(ProfileOutcome t) {

@@ -155,7 +155,7 @@ public final class InputFiles {
     }
 
     private static String megabytes(long bytes) {
-        return bytes < (1L << 20) ? bytes + " bytes" : String.format(java.util.Locale.ROOT, "%.1f MiB", bytes / 1048576.0);
+        return bytes < (1L << 20) ? bytes + " bytes" : DecimalText.fixed(bytes / 1048576.0, 1) + " MiB";
     }
 
     private static String reason(IOException e) {

@@ -1,6 +1,7 @@
 package org.arcwright.mechanics;
 
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -53,8 +54,8 @@ public final class StressConcentration {
         String message = "";
         if (!within) {
             message = String.format(java.util.Locale.ROOT,
-                    "extrapolated: h/r = %.3g lies outside the fit's range %s..%s (%s); treat K_t as a rough estimate",
-                    hr, plain(fit.hrMin()), plain(fit.hrMax()),
+                    "extrapolated: h/r = %s lies outside the fit's range %s..%s (%s); treat K_t as a rough estimate",
+                    DecimalText.significant(hr, 3), DecimalText.exact(fit.hrMin()), DecimalText.exact(fit.hrMax()),
                     hr > fit.hrMax() ? "the fillet is sharper than the charts cover" : "the fillet is blunter than the charts cover");
         }
         if (kt < 1) {
@@ -75,9 +76,5 @@ public final class StressConcentration {
     static void positive(String field, double v) {
         if (!Double.isFinite(v)) throw InputProblem.ofField(field, "not a finite number");
         if (v <= 0) throw InputProblem.ofField(field, "must be greater than zero, got " + v);
-    }
-
-    private static String plain(double v) {
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
     }
 }

@@ -1,5 +1,6 @@
 package org.arcwright.tolerance;
 
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -107,8 +108,7 @@ public record CrescentZone(double includedAngleDeg, double factor, double width,
 
     /** An angle as typed: every digit it has, no exponent, never rounded up to 180. */
     public static String degrees(double angleDeg) {
-        if (!Double.isFinite(angleDeg)) return Double.toString(angleDeg);
-        String s = new java.math.BigDecimal(Double.toString(angleDeg)).stripTrailingZeros().toPlainString();
+        String s = DecimalText.exact(angleDeg);
         return s.length() > 24 ? new java.math.BigDecimal(Double.toString(angleDeg))
                 .round(new java.math.MathContext(10)).toString() : s;
     }

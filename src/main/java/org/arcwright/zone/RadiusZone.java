@@ -1,5 +1,6 @@
 package org.arcwright.zone;
 
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -120,7 +121,7 @@ public final class RadiusZone {
         }
         if (inside == 0) {
             throw InputProblem.ofField("points", "no point lies within the radius zone's extent (between the tangent points of the "
-                    + max + " arc, " + fmt(reach) + " from the vertex along each leg)");
+                    + max + " arc, " + DecimalText.significant(reach, 4) + " from the vertex along each leg)");
         }
         boolean pass = outside == 0 && smallest >= min - resolution && largest <= max + resolution;
         return new RadiusEnvelope(smallest, largest, inside, onLegs, outside, n - inside, pass, worst, worstExcess,
@@ -251,6 +252,4 @@ public final class RadiusZone {
         double disc = Math.max(0, s2 * qu * qu - cot2 * q2);
         return (s1 * qu + Math.sqrt(disc)) / cot2;
     }
-
-    private static String fmt(double v) { return String.format(java.util.Locale.ROOT, "%.6g", v); }
 }

@@ -51,6 +51,14 @@ class StressConcentrationTest {
         assertThat(e.message()).contains("extrapolated").contains("0.25..4");
     }
 
+    /** A very sharp fillet's h/r is written as a number a reader can type back (no 2.00e+03): common practice. */
+    @Test
+    void aVerySharpFilletsRatioIsWrittenWithoutAnExponent() {
+        KtEstimate e = sc.kt(ShoulderShape.STEPPED_SHAFT, LoadCase.BENDING, 30, 10, 0.005);
+        assertThat(e.hOverR()).isCloseTo(2000, within(1e-9));
+        assertThat(e.message()).contains("h/r = 2000 lies outside").doesNotContain("e+");
+    }
+
     /** Shigley 9th ed. Example 6-6: D = 38, d = 32, r = 3 mm in bending, K_t = 1.65 read from Fig. A-15-9. */
     @Test
     void agreesWithShigleysChartReadingForExampleSixSix() {

@@ -16,6 +16,7 @@ import java.util.Locale;
 import java.util.Objects;
 import javax.imageio.ImageIO;
 import org.arcwright.io.AtomicFiles;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.mechanics.Cautions;
 import org.arcwright.mechanics.FilletStressAnalysis;
@@ -150,7 +151,7 @@ public final class StressPlot {
             data.addSeries(kf);
             data.addSeries(kfOut);
         }
-        XYSeries marks = new XYSeries(c.hasTolerance() ? "at r min, nominal, max" : "at R " + num(c.rNominal()), false, true);
+        XYSeries marks = new XYSeries(c.hasTolerance() ? "at r min, nominal, max" : "at R " + DecimalText.significant(c.rNominal(), 4), false, true);
         StressPoint[] three = {analysis.point(c, c.rMin()), analysis.point(c, c.rNominal()), analysis.point(c, c.rMax())};
         for (StressPoint p : three) {
             marks.add(p.r(), p.kt().kt());
@@ -214,7 +215,7 @@ public final class StressPlot {
             band = new IntervalMarker(c.rMin() - (curves.rTo() - curves.rFrom()) / 600,
                     c.rMax() + (curves.rTo() - curves.rFrom()) / 600, alpha(bandInk, 90));
         }
-        band.setLabel(c.hasTolerance() ? "tolerance  R " + num(c.rMin()) + " – " + num(c.rMax()) : "R " + num(c.rNominal()));
+        band.setLabel(c.hasTolerance() ? "tolerance  R " + DecimalText.significant(c.rMin(), 4) + " – " + DecimalText.significant(c.rMax(), 4) : "R " + DecimalText.significant(c.rNominal(), 4));
         band.setLabelFont(ink.labelFont().deriveFont(Font.BOLD));
         band.setLabelPaint(ink.bandText());
         band.setLabelAnchor(RectangleAnchor.TOP);
@@ -224,9 +225,9 @@ public final class StressPlot {
         plot.addDomainMarker(band, Layer.BACKGROUND);
 
         StressPoint atMin = three[0];
-        String minText = String.format(Locale.ROOT, "at %s %s:  Kt %.2f%s", c.hasTolerance() ? "r min" : "R", num(c.rMin()),
-                atMin.kt().kt(),
-                withKf ? String.format(Locale.ROOT, ", Kf %.2f", atMin.kf()) : "");
+        String minText = String.format(Locale.ROOT, "at %s %s:  Kt %s%s", c.hasTolerance() ? "r min" : "R", DecimalText.significant(c.rMin(), 4),
+                DecimalText.fixed(atMin.kt().kt(), 2),
+                withKf ? ", Kf " + DecimalText.fixed(atMin.kf(), 2) : "");
         double dx = (curves.rTo() - curves.rFrom()) / 120;
         boolean rightHalf = c.rMin() > (curves.rFrom() + curves.rTo()) / 2;
         XYTextAnnotation label = new XYTextAnnotation(minText, c.rMin() + (rightHalf ? -dx : dx), atMin.kt().kt());
@@ -239,7 +240,7 @@ public final class StressPlot {
 
         if (target != null) {
             ValueMarker tm = new ValueMarker(target.value(), ink.target(), dashed);
-            tm.setLabel("target " + target.factor().symbol() + " ≤ " + num(target.value()));
+            tm.setLabel("target " + target.factor().symbol() + " ≤ " + DecimalText.significant(target.value(), 4));
             tm.setLabelFont(ink.markerFont());
             tm.setLabelPaint(ink.target());
             // above its line, on a background, so the dashes never run through the words
@@ -253,7 +254,7 @@ public final class StressPlot {
         if (minimum != null && minimum.found() && minimum.radius() >= curves.rFrom() && minimum.radius() <= curves.rTo()) {
             ValueMarker mm = new ValueMarker(minimum.radius(), ink.target(), new BasicStroke(1.2f));
             mm.setLabel((minimum.limitedByFit() ? "sharpest r the fit covers: " : "smallest r for target: ")
-                    + num(minimum.radius()));
+                    + DecimalText.significant(minimum.radius(), 4));
             mm.setLabelFont(ink.markerFont());
             mm.setLabelPaint(ink.target());
             boolean right = minimum.radius() > (curves.rFrom() + curves.rTo()) / 2;
@@ -272,7 +273,7 @@ public final class StressPlot {
         title.setPaint(ink.text());
         chart.setTitle(title);
         TextTitle sub = new TextTitle(String.format(Locale.ROOT, "%s in %s,  D %s / d %s %s,  h = %s %s   (%s)",
-                c.shape().description(), c.load().key(), num(c.bigD()), num(c.smallD()), u, num(c.stepHeight()), u,
+                c.shape().description(), c.load().key(), DecimalText.significant(c.bigD(), 4), DecimalText.significant(c.smallD(), 4), u, DecimalText.significant(c.stepHeight(), 4), u,
                 atMin.kt().fitName()), new Font(FONT, Font.PLAIN, 13));
         sub.setPaint(ink.text());
         chart.addSubtitle(sub);
@@ -357,10 +358,7 @@ public final class StressPlot {
 
     private static String strengthText(FilletStressCase c) {
         if (c.strength() == null) return "";
-        return num(c.strength().value()) + " " + c.strength().unit().symbol();
+        return DecimalText.significant(c.strength().value(), 4) + " " + c.strength().unit().symbol();
     }
 
-    private static String num(double v) {
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
-    }
 }
