@@ -7,13 +7,12 @@ import javax.swing.SwingUtilities;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * One feature, one truth: the Check view judges the selected feature's chosen callout, and what it
@@ -26,24 +25,19 @@ class FeatureBoundViewsGuiTest {
     private static final Path HOUSING = Path.of("examples/inspect/housing-fillet-profile.json").toAbsolutePath();
     private static final Path BRACKET_R = Path.of("examples/inspect/bracket-round-r.json").toAbsolutePath();
 
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension();
 
-    private static GuiSupport.OpenWindow opened;
+    private static Path config;
     private static MainWindow window;
     private static FrameFixture fixture;
 
     @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
+    static void windowParts() {
+        config = opened.config();
         window = opened.window();
         fixture = opened.fixture();
         GuiSupport.onEdt(() -> window.open(DECIDED));
-    }
-
-    @AfterAll
-    static void closeWindow() {
-        if (opened != null) opened.close();
     }
 
     private static void selectRow(int row) {

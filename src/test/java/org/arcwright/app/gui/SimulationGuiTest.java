@@ -10,13 +10,12 @@ import org.arcwright.app.shell.MainWindow;
 import org.arcwright.app.simulate.SimulationView;
 import org.arcwright.simulate.Outcome;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * The Simulation view as a user drives it: a process file of an invented part, a run in the
@@ -24,23 +23,16 @@ import org.junit.jupiter.api.io.TempDir;
  */
 @TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 class SimulationGuiTest {
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension();
 
-    private static GuiSupport.OpenWindow opened;
     private static MainWindow window;
     private static FrameFixture fixture;
 
     @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
+    static void windowParts() {
         window = opened.window();
         fixture = opened.fixture();
-    }
-
-    @AfterAll
-    static void closeWindow() {
-        if (opened != null) opened.close();
     }
 
     private static SimulationView view() {
