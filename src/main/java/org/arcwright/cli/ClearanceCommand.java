@@ -1,6 +1,7 @@
 package org.arcwright.cli;
 
 import java.io.PrintWriter;
+import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -14,6 +15,7 @@ import org.arcwright.mechanics.FilletMechanics;
 import org.arcwright.mechanics.MechanicsFiles;
 import org.arcwright.mechanics.PetersonFits;
 import org.arcwright.pack.PackStack;
+import org.arcwright.tolerance.Units;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -90,7 +92,7 @@ final class ClearanceCommand implements Callable<Integer> {
     private static void printText(PrintWriter out, CornerClearance r) {
         ClearanceCase c = r.input();
         String u = c.units().symbol();
-        int d = c.units() == org.arcwright.tolerance.Units.INCH ? 4 : 3;
+        int d = c.units() == Units.INCH ? 4 : 3;
         int places = Math.max(1, Math.max(scale(c.filletMin()), scale(c.filletMax())));
         String fillet = c.filletMin() == c.filletMax() ? "R " + DecimalText.significant(c.filletMax(), 4)
                 : "R " + DecimalText.fixed(c.filletMin(), places) + "–" + DecimalText.fixed(c.filletMax(), places);
@@ -121,6 +123,6 @@ final class ClearanceCommand implements Callable<Integer> {
     }
 
     private static int scale(double v) {
-        return Math.max(0, new java.math.BigDecimal(DecimalText.significant(v, 4)).scale());
+        return Math.max(0, new BigDecimal(DecimalText.significant(v, 4)).scale());
     }
 }

@@ -9,6 +9,7 @@ import java.util.Map;
 import java.util.concurrent.Callable;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.io.OutputFiles;
 import org.arcwright.mechanics.FilletStressAnalysis;
 import org.arcwright.mechanics.FilletStressCase;
 import org.arcwright.mechanics.FilletStressReport;
@@ -20,6 +21,7 @@ import org.arcwright.mechanics.StressConcentration;
 import org.arcwright.mechanics.StressPoint;
 import org.arcwright.mechanics.StressTarget;
 import org.arcwright.render.plot.StressPlot;
+import org.arcwright.tolerance.Units;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -48,7 +50,7 @@ final class FilletStressCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (plot != null) org.arcwright.io.OutputFiles.requireWritable(plot, "--plot", file);
+        if (plot != null) OutputFiles.requireWritable(plot, "--plot", file);
         PetersonFits fits = PetersonFits.published();
         FilletStressAnalysis analysis = new FilletStressAnalysis(new StressConcentration(fits), new NotchSensitivity());
         MechanicsFiles.FilletStressJob job = new MechanicsFiles(new JsonFiles(), fits).readFilletStress(file);
@@ -192,7 +194,7 @@ final class FilletStressCommand implements Callable<Integer> {
 
     /** Places for a radius in the file's units: an inch radius needs one more than a millimetre one. */
     private static int places(FilletStressCase c) {
-        return c.units() == org.arcwright.tolerance.Units.INCH ? 4 : 3;
+        return c.units() == Units.INCH ? 4 : 3;
     }
 
     private static void row(PrintWriter out, String label, StressPoint p, boolean kf, int places) {

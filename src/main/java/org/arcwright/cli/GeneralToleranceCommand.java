@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
 import org.arcwright.tolerance.GeneralTolerance;
@@ -68,13 +69,13 @@ final class GeneralToleranceCommand implements Callable<Integer> {
         ToleranceQuantity q = q0;
         double size = what.radius != null ? what.radius : what.linear != null ? what.linear : what.angleSide;
         String field = what.radius != null ? "--radius" : what.linear != null ? "--linear" : "--angle-side";
-        if (!Double.isFinite(size)) throw org.arcwright.io.InputProblem.ofField(field, "not a finite number");
-        if (size <= 0) throw org.arcwright.io.InputProblem.ofField(field, "must be greater than zero, got " + size);
+        if (!Double.isFinite(size)) throw InputProblem.ofField(field, "not a finite number");
+        if (size <= 0) throw InputProblem.ofField(field, "must be greater than zero, got " + size);
         if (blend != null && !List.of("fillet", "round").contains(blend)) {
-            throw org.arcwright.io.InputProblem.ofField("--blend", "use fillet or round, got '" + blend + "'");
+            throw InputProblem.ofField("--blend", "use fillet or round, got '" + blend + "'");
         }
         if (blend != null && what.radius == null) {
-            throw org.arcwright.io.InputProblem.ofField("--blend", "applies to --radius only");
+            throw InputProblem.ofField("--blend", "applies to --radius only");
         }
         // ISO 2768-1:1989: an internal fillet radius is a linear size (Table 1); broken edges are Table 2
         if ("fillet".equals(blend)) q = ToleranceQuantity.LINEAR;
@@ -91,7 +92,7 @@ final class GeneralToleranceCommand implements Callable<Integer> {
             linear = tables.iso(ToleranceQuantity.LINEAR);
             try {
                 asFillet = linear.lookup(toleranceClass, sizeMm);
-            } catch (org.arcwright.io.InputProblem p) {
+            } catch (InputProblem p) {
                 asFillet = null;
             }
         }
@@ -150,8 +151,8 @@ final class GeneralToleranceCommand implements Callable<Integer> {
     private GeneralTolerance lookup(GeneralToleranceTable table, double sizeMm, String field) {
         try {
             return table.lookup(toleranceClass, sizeMm);
-        } catch (org.arcwright.io.InputProblem p) {
-            throw "size".equals(p.field()) ? org.arcwright.io.InputProblem.ofField(field, p.problem()) : p;
+        } catch (InputProblem p) {
+            throw "size".equals(p.field()) ? InputProblem.ofField(field, p.problem()) : p;
         }
     }
 }

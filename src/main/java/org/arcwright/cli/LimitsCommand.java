@@ -5,6 +5,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.tolerance.CalloutParser;
 import org.arcwright.tolerance.CrescentZone;
@@ -62,7 +63,7 @@ final class LimitsCommand implements Callable<Integer> {
     private static boolean parseBlend(String text) {
         if (text.equalsIgnoreCase("fillet")) return true;
         if (text.equalsIgnoreCase("round")) return false;
-        throw org.arcwright.io.InputProblem.ofField("--blend", "use round or fillet, got '" + text + "'");
+        throw InputProblem.ofField("--blend", "use round or fillet, got '" + text + "'");
     }
 
     /** Why a figure is omitted for this form, or null when it is given. */

@@ -1,6 +1,7 @@
 package org.arcwright.mechanics;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
+import com.fasterxml.jackson.annotation.JsonIgnoreProperties;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
@@ -26,7 +27,7 @@ import org.arcwright.pack.PackStack;
  * @param units always mm
  * @param rows by ascending r<sub>s min</sub>
  */
-@com.fasterxml.jackson.annotation.JsonIgnoreProperties({"provenance"})
+@JsonIgnoreProperties({"provenance"})
 public record BearingSeatTable(String id, String title, String source, String units, List<Row> rows) {
     /** The kind of pack table this class reads. */
     public static final String KIND = "bearing-fillet";

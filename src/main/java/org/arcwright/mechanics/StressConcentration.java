@@ -1,5 +1,6 @@
 package org.arcwright.mechanics;
 
+import java.util.Locale;
 import java.util.Objects;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
@@ -53,7 +54,7 @@ public final class StressConcentration {
         boolean within = fit.covers(hr);
         String message = "";
         if (!within) {
-            message = String.format(java.util.Locale.ROOT,
+            message = String.format(Locale.ROOT,
                     "extrapolated: h/r = %s lies outside the fit's range %s..%s (%s); treat K_t as a rough estimate",
                     DecimalText.significant(hr, 3), DecimalText.exact(fit.hrMin()), DecimalText.exact(fit.hrMax()),
                     hr > fit.hrMax() ? "the fillet is sharper than the charts cover" : "the fillet is blunter than the charts cover");

@@ -1,5 +1,6 @@
 package org.arcwright.zone;
 
+import java.util.Objects;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
@@ -33,7 +34,7 @@ public final class RadiusZone {
     private final double vx, vy, bisX, bisY, s1, s2, cot2;
 
     public RadiusZone(Corner corner, double min, double max, double resolution) {
-        java.util.Objects.requireNonNull(corner, "corner");
+        Objects.requireNonNull(corner, "corner");
         if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + min);
         if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + max);
         if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + max + " < " + min + ")");

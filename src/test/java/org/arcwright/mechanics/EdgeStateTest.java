@@ -3,6 +3,10 @@ package org.arcwright.mechanics;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import java.math.BigDecimal;
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.IntRange;
 import org.arcwright.io.InputProblem;
 import org.arcwright.mechanics.EdgeState.EdgeType;
 import org.arcwright.mechanics.EdgeState.Sense;
@@ -71,16 +75,16 @@ class EdgeStateTest {
     }
 
     /** The text an edge state writes reads back as the same state. */
-    @net.jqwik.api.Property(tries = 200, seed = "20261201")
-    void isoTextReadsBackAsTheSameState(@net.jqwik.api.ForAll EdgeType type, @net.jqwik.api.ForAll Sense sense,
-                                        @net.jqwik.api.ForAll @net.jqwik.api.constraints.IntRange(min = 1, max = 2000) int most,
-                                        @net.jqwik.api.ForAll @net.jqwik.api.constraints.IntRange(min = 0, max = 1999) int least,
-                                        @net.jqwik.api.ForAll boolean twoSizes) {
+    @Property(tries = 200, seed = "20261201")
+    void isoTextReadsBackAsTheSameState(@ForAll EdgeType type, @ForAll Sense sense,
+                                        @ForAll @IntRange(min = 1, max = 2000) int most,
+                                        @ForAll @IntRange(min = 0, max = 1999) int least,
+                                        @ForAll boolean twoSizes) {
         EdgeState e;
         if (twoSizes && sense != Sense.EITHER && least < most) {
-            e = new EdgeState(type, sense, java.math.BigDecimal.valueOf(most, 3), java.math.BigDecimal.valueOf(least, 3));
+            e = new EdgeState(type, sense, BigDecimal.valueOf(most, 3), BigDecimal.valueOf(least, 3));
         } else {
-            e = new EdgeState(type, sense, java.math.BigDecimal.valueOf(most, 3), null);
+            e = new EdgeState(type, sense, BigDecimal.valueOf(most, 3), null);
         }
         EdgeState back = EdgeState.parse(type, e.isoText());
         assertThat(back.isoText()).isEqualTo(e.isoText());

@@ -3,6 +3,9 @@ package org.arcwright.mechanics;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import net.jqwik.api.ForAll;
+import net.jqwik.api.Property;
+import net.jqwik.api.constraints.DoubleRange;
 import org.junit.jupiter.api.Test;
 
 /** Neuber/Shigley notch sensitivity against Shigley's worked example. */
@@ -63,11 +66,11 @@ class NotchSensitivityTest {
     }
 
     /** Neuber: 0 < q < 1, q grows with the radius, so K_f lies between 1 and K_t. */
-    @net.jqwik.api.Property(tries = 200, seed = "20261201")
+    @Property(tries = 200, seed = "20261201")
     void sensitivityLiesBetweenZeroAndOneAndGrowsWithRadius(
-            @net.jqwik.api.ForAll @net.jqwik.api.constraints.DoubleRange(min = 350, max = 1700) double sutMpa,
-            @net.jqwik.api.ForAll @net.jqwik.api.constraints.DoubleRange(min = 0.05, max = 10) double r,
-            @net.jqwik.api.ForAll boolean torsion) {
+            @ForAll @DoubleRange(min = 350, max = 1700) double sutMpa,
+            @ForAll @DoubleRange(min = 0.05, max = 10) double r,
+            @ForAll boolean torsion) {
         LoadCase load = torsion ? LoadCase.TORSION : LoadCase.BENDING;
         double q = ns.at(UltimateStrength.ofMpa(sutMpa), load, r).q();
         double qLarger = ns.at(UltimateStrength.ofMpa(sutMpa), load, r * 1.1).q();

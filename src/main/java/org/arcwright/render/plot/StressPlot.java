@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.Rectangle;
 import java.awt.RenderingHints;
+import java.awt.geom.Ellipse2D;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -14,6 +15,8 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import java.util.function.Predicate;
+import java.util.function.ToDoubleFunction;
 import javax.imageio.ImageIO;
 import org.arcwright.io.AtomicFiles;
 import org.arcwright.io.DecimalText;
@@ -27,6 +30,7 @@ import org.arcwright.mechanics.StressTarget;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.IntervalMarker;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
@@ -34,6 +38,7 @@ import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.LengthAdjustmentType;
 import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.RectangleInsets;
@@ -196,7 +201,7 @@ public final class StressPlot {
         r.setSeriesLinesVisible(s, false);
         r.setSeriesShapesVisible(s, true);
         r.setSeriesPaint(s, ink.marks());
-        r.setSeriesShape(s, new java.awt.geom.Ellipse2D.Double(-4.5, -4.5, 9, 9));
+        r.setSeriesShape(s, new Ellipse2D.Double(-4.5, -4.5, 9, 9));
         for (int i = 0; i < data.getSeriesCount(); i++) {
             if (data.getSeries(i).getItemCount() == 0) r.setSeriesVisibleInLegend(i, false);
         }
@@ -247,7 +252,7 @@ public final class StressPlot {
             tm.setLabelAnchor(RectangleAnchor.LEFT);
             tm.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
             tm.setLabelOffset(new RectangleInsets(0, 6, 3, 0));
-            tm.setLabelOffsetType(org.jfree.chart.ui.LengthAdjustmentType.EXPAND);
+            tm.setLabelOffsetType(LengthAdjustmentType.EXPAND);
             tm.setLabelBackgroundColor(ink.labelBackground());
             plot.addRangeMarker(tm);
         }
@@ -280,7 +285,7 @@ public final class StressPlot {
         LegendTitle legend = new LegendTitle(plot);
         legend.setItemFont(new Font(FONT, Font.PLAIN, 12));
         legend.setPosition(RectangleEdge.BOTTOM);
-        legend.setFrame(org.jfree.chart.block.BlockBorder.NONE);
+        legend.setFrame(BlockBorder.NONE);
         legend.setItemPaint(ink.text());
         TextTitle caution = new TextTitle(Cautions.STRESS.get(0) + " " + Cautions.STRESS.get(1), new Font(FONT, Font.ITALIC, 11));
         caution.setPosition(RectangleEdge.BOTTOM);
@@ -337,8 +342,8 @@ public final class StressPlot {
      * the sample on each side so adjoining stretches join; a gap (null) separates stretches.
      */
     private static void stretch(List<StressPoint> pts, XYSeries series, boolean wanted,
-                                java.util.function.Predicate<StressPoint> fit,
-                                java.util.function.ToDoubleFunction<StressPoint> y) {
+                                Predicate<StressPoint> fit,
+                                ToDoubleFunction<StressPoint> y) {
         for (int i = 0; i < pts.size(); i++) {
             boolean self = fit.test(pts.get(i)) == wanted;
             boolean prev = i > 0 && fit.test(pts.get(i - 1)) == wanted;
