@@ -2,14 +2,13 @@ package org.arcwright.mechanics;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
-import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
+import org.arcwright.pack.PackTables;
 
 /**
  * The largest chamfer dimension r<sub>s max</sub> of a rolling bearing's ring for its smallest
@@ -70,18 +69,7 @@ public record BearingChamferLimits(String id, String title, String source, Strin
      * @throws InputProblem naming the file when a table is malformed, or when no table has the id
      */
     public static BearingChamferLimits load(PackStack stack, String id) {
-        JsonFiles json = new JsonFiles();
-        BearingChamferLimits found = null;
-        for (PackStack.PackFile f : stack.files("tables", ".json")) {
-            var tree = json.readTree(f.path());
-            if (!KIND.equals(tree.path("kind").asText())) continue;
-            ObjectNode obj = (ObjectNode) tree.deepCopy();
-            obj.remove("kind");
-            BearingChamferLimits t = json.convert(obj, f.path().toString(), BearingChamferLimits.class);
-            if (t.id().equals(id)) found = t;
-        }
-        if (found == null) throw InputProblem.ofField("table", "no " + KIND + " table '" + id + "' in the packs in force");
-        return found;
+        return PackTables.byId(stack, KIND, id, BearingChamferLimits.class, BearingChamferLimits::id);
     }
 
     /**
