@@ -7,7 +7,6 @@ import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Tag;
@@ -26,16 +25,10 @@ class CheckStressNotesGuiTest {
     static final OpenWindowExtension opened = new OpenWindowExtension()
             .readyWhen(w -> w.notesPanel().queryField().isEnabled());
 
+    // filled by the extension
     private static Path config;
     private static MainWindow window;
     private static FrameFixture fixture;
-
-    @BeforeAll
-    static void windowParts() {
-        config = opened.config();
-        window = opened.window();
-        fixture = opened.fixture();
-    }
 
     @Test
     @Order(1)

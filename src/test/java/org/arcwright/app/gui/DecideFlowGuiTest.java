@@ -9,7 +9,6 @@ import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
@@ -24,16 +23,10 @@ class DecideFlowGuiTest {
     static final OpenWindowExtension opened = new OpenWindowExtension()
             .readyWhen(w -> w.statusLine().message().startsWith("Ready"));
 
+    // filled by the extension
     private static MainWindow window;
     private static FrameFixture fixture;
     private static Robot robot;
-
-    @BeforeAll
-    static void windowParts() {
-        window = opened.window();
-        fixture = opened.fixture();
-        robot = opened.robot();
-    }
 
     @Test
     void aFatigueLoadedShoulderFilletIsDecidedOntoTheWorksheet() {

@@ -17,7 +17,6 @@ import org.arcwright.model.Process;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.extension.RegisterExtension;
@@ -34,14 +33,9 @@ class DecideNeedsGuiTest {
     static final OpenWindowExtension opened = new OpenWindowExtension()
             .readyWhen(w -> w.statusLine().message().startsWith("Ready"));
 
+    // filled by the extension
     private static MainWindow window;
     private static FrameFixture fixture;
-
-    @BeforeAll
-    static void windowParts() {
-        window = opened.window();
-        fixture = opened.fixture();
-    }
 
     private static DesignCase gearSeat() {
         return new DesignCase(Units.MM, DrawingStyle.ISO, "gear seat", BlendKind.FILLET, 2, BlendFunction.MATING,

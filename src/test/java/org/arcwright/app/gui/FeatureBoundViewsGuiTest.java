@@ -28,15 +28,13 @@ class FeatureBoundViewsGuiTest {
     @RegisterExtension
     static final OpenWindowExtension opened = new OpenWindowExtension();
 
+    // filled by the extension
     private static Path config;
     private static MainWindow window;
     private static FrameFixture fixture;
 
     @BeforeAll
-    static void windowParts() {
-        config = opened.config();
-        window = opened.window();
-        fixture = opened.fixture();
+    static void openTheDecidedPart() {
         GuiSupport.onEdt(() -> window.open(DECIDED));
     }
 
@@ -150,6 +148,8 @@ class FeatureBoundViewsGuiTest {
         assertThat(fixture.textBox("unkeptAnswers").target().isVisible()).isTrue();
         GuiSupport.screenshot(window.frame(), "decide-unkept-light");
         fixture.button("keepAnswers").click();
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.session().worksheet().feature("F2").orElseThrow()
+                .designCase().nominalRadius()) == 0.9, 10); // the click is handled on the event thread
         assertThat(window.session().worksheet().feature("F2").orElseThrow().designCase().nominalRadius()).isEqualTo(0.9);
         assertThat(GuiSupport.onEdt(() -> window.decidePanel().unkeptAnswers())).isEmpty();
         GuiSupport.onEdt(() -> window.session().undo());

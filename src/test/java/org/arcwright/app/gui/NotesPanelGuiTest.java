@@ -11,7 +11,6 @@ import javax.swing.SwingUtilities;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Tag;
@@ -31,16 +30,10 @@ class NotesPanelGuiTest {
     static final OpenWindowExtension opened = new OpenWindowExtension()
             .readyWhen(w -> w.notesPanel().queryField().isEnabled()).size(1024, 700);
 
+    // filled by the extension
     private static Path config;
     private static MainWindow window;
     private static FrameFixture fixture;
-
-    @BeforeAll
-    static void windowParts() {
-        config = opened.config();
-        window = opened.window();
-        fixture = opened.fixture();
-    }
 
     private static int visibleHeight(String name) {
         return GuiSupport.onEdt(() -> {

@@ -2,6 +2,8 @@ package org.arcwright.app.gui;
 
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.lang.reflect.Field;
+import java.lang.reflect.Modifier;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.Comparator;
@@ -18,10 +20,14 @@ import org.junit.jupiter.api.extension.ExtensionContext;
  * The real window a GUI test class drives, opened once before its tests over a fresh config folder and
  * closed after them, before the folder is deleted (the notes index and background writes live there).
  * Register it as a static field; its callbacks run before the class's own {@code @BeforeAll} and after
- * its {@code @AfterAll}:
+ * its {@code @AfterAll}. It fills the class's static, non-final fields of type {@link MainWindow},
+ * {@link FrameFixture}, {@link Robot} and {@link Path} (the config folder), as JUnit fills a
+ * {@code @TempDir} field:
  * <pre>{@code
  * @RegisterExtension
- * static final OpenWindowExtension opened = new OpenWindowExtension().readyWhen(w -> w.statusLine().message().startsWith("Ready"));
+ * static final OpenWindowExtension opened = new OpenWindowExtension()
+ *         .readyWhen(w -> w.statusLine().message().startsWith("Ready"));
+ * private static MainWindow window;
  * }</pre>
  * Waiting is on the window's own state ({@link GuiSupport#waitFor}), never a fixed sleep.
  */
@@ -61,6 +67,7 @@ final class OpenWindowExtension implements BeforeAllCallback, AfterAllCallback {
         open = GuiSupport.openWindow(config);
         MainWindow w = open.window();
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> ready.test(w)), READY_SECONDS);
+        inject(context.getRequiredTestClass());
         if (width > 0) {
             GuiSupport.onEdt(() -> {
                 w.frame().setExtendedState(java.awt.Frame.NORMAL);
@@ -90,6 +97,24 @@ final class OpenWindowExtension implements BeforeAllCallback, AfterAllCallback {
     FrameFixture fixture() { return open.fixture(); }
 
     Robot robot() { return open.robot(); }
+
+    private void inject(Class<?> testClass) {
+        for (Field f : testClass.getDeclaredFields()) {
+            int m = f.getModifiers();
+            if (!Modifier.isStatic(m) || Modifier.isFinal(m)) continue;
+            Object value = f.getType() == MainWindow.class ? open.window()
+                    : f.getType() == FrameFixture.class ? open.fixture()
+                    : f.getType() == Robot.class ? open.robot()
+                    : f.getType() == Path.class ? config : null;
+            if (value == null) continue;
+            try {
+                f.setAccessible(true);
+                f.set(null, value);
+            } catch (IllegalAccessException e) {
+                throw new IllegalStateException("cannot set " + f, e);
+            }
+        }
+    }
 
     private static void delete(Path root) throws IOException {
         try (Stream<Path> paths = Files.walk(root)) {

@@ -10,7 +10,6 @@ import org.arcwright.app.shell.MainWindow;
 import org.arcwright.app.simulate.SimulationView;
 import org.arcwright.simulate.Outcome;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
@@ -26,14 +25,9 @@ class SimulationGuiTest {
     @RegisterExtension
     static final OpenWindowExtension opened = new OpenWindowExtension();
 
+    // filled by the extension
     private static MainWindow window;
     private static FrameFixture fixture;
-
-    @BeforeAll
-    static void windowParts() {
-        window = opened.window();
-        fixture = opened.fixture();
-    }
 
     private static SimulationView view() {
         return (SimulationView) opened.robot().finder().findByName(window.frame(), "simulationView");
