@@ -1,11 +1,13 @@
 package org.arcwright.cli;
 
 import java.io.PrintWriter;
+import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.mechanics.ClearanceCase;
 import org.arcwright.mechanics.CornerClearance;
@@ -13,6 +15,7 @@ import org.arcwright.mechanics.FilletMechanics;
 import org.arcwright.mechanics.MechanicsFiles;
 import org.arcwright.mechanics.PetersonFits;
 import org.arcwright.pack.PackStack;
+import org.arcwright.tolerance.Units;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Model.CommandSpec;
@@ -89,26 +92,26 @@ final class ClearanceCommand implements Callable<Integer> {
     private static void printText(PrintWriter out, CornerClearance r) {
         ClearanceCase c = r.input();
         String u = c.units().symbol();
-        int d = c.units() == org.arcwright.tolerance.Units.INCH ? 4 : 3;
+        int d = c.units() == Units.INCH ? 4 : 3;
         int places = Math.max(1, Math.max(scale(c.filletMin()), scale(c.filletMax())));
-        String fillet = c.filletMin() == c.filletMax() ? "R " + Numbers.plain(c.filletMax())
-                : "R " + Numbers.fixed(c.filletMin(), places) + "–" + Numbers.fixed(c.filletMax(), places);
+        String fillet = c.filletMin() == c.filletMax() ? "R " + DecimalText.significant(c.filletMax(), 4)
+                : "R " + DecimalText.fixed(c.filletMin(), places) + "–" + DecimalText.fixed(c.filletMax(), places);
         out.printf("Fillet %s %s against the mating part's %s%n", fillet, u, c.corner().describe());
-        out.printf("  relief     %s along the seat, %s up the shoulder%n", Numbers.fixed(r.reliefAlongSeat(), d),
-                Numbers.fixed(r.reliefAlongShoulder(), d));
-        out.printf("  admits     fillets up to %s %s (%s)%n", Numbers.fixed(r.allowedFilletMax(), d), u, r.governing());
+        out.printf("  relief     %s along the seat, %s up the shoulder%n", DecimalText.fixed(r.reliefAlongSeat(), d),
+                DecimalText.fixed(r.reliefAlongShoulder(), d));
+        out.printf("  admits     fillets up to %s %s (%s)%n", DecimalText.fixed(r.allowedFilletMax(), d), u, r.governing());
         if (r.seats()) {
-            out.printf("  verdict    SEATS: margin %s %s at the largest fillet%n", Numbers.fixed(r.margin(), d), u);
+            out.printf("  verdict    SEATS: margin %s %s at the largest fillet%n", DecimalText.fixed(r.margin(), d), u);
         } else {
             out.printf("  verdict    INTERFERES: the largest fillet exceeds what the corner admits by %s %s; the part will not seat flush%n",
-                    Numbers.fixed(-r.margin(), d), u);
+                    DecimalText.fixed(-r.margin(), d), u);
         }
         CornerClearance.ShoulderSupport s = r.support();
         if (s != null) {
-            out.printf("  support    flat %s %s on the shoulder (from %s to %s)%s%n", Numbers.fixed(s.flat(), d), u,
-                    Numbers.fixed(s.contactFrom(), d), Numbers.fixed(s.contactTo(), d),
+            out.printf("  support    flat %s %s on the shoulder (from %s to %s)%s%n", DecimalText.fixed(s.flat(), d), u,
+                    DecimalText.fixed(s.contactFrom(), d), DecimalText.fixed(s.contactTo(), d),
                     s.required() == null ? "" : (s.sufficient() ? ": meets" : ": LESS THAN") + " the required "
-                            + Numbers.plain(s.required()) + " " + u);
+                            + DecimalText.significant(s.required(), 4) + " " + u);
         }
         if (s == null) {
             out.println("  support    not checked: no shoulderHeight given");
@@ -120,6 +123,6 @@ final class ClearanceCommand implements Callable<Integer> {
     }
 
     private static int scale(double v) {
-        return Math.max(0, new java.math.BigDecimal(Numbers.plain(v)).scale());
+        return Math.max(0, new BigDecimal(DecimalText.significant(v, 4)).scale());
     }
 }

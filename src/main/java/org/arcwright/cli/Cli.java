@@ -1,6 +1,11 @@
 package org.arcwright.cli;
 
+import java.io.IOException;
+import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import picocli.CommandLine;
 
@@ -29,7 +34,7 @@ public final class Cli {
     /** A number option in the one decimal syntax ({@link org.arcwright.io.DecimalText}): no 1.5f, 0x1p1 or NaN. */
     private static Double decimal(String text) {
         try {
-            return org.arcwright.io.DecimalText.parseFinite(text);
+            return DecimalText.parseFinite(text);
         } catch (NumberFormatException e) {
             throw new CommandLine.TypeConversionException(e.getMessage());
         }
@@ -51,7 +56,7 @@ public final class Cli {
                 commandLine.getErr().println(prefix(commandLine) + p.getMessage());
                 return BAD_INPUT;
             }
-            if (ex instanceof java.io.UncheckedIOException || ex instanceof java.io.IOException) {
+            if (ex instanceof UncheckedIOException || ex instanceof IOException) {
                 commandLine.getErr().println(prefix(commandLine) + ex.getMessage());
                 return BAD_INPUT;
             }
@@ -104,8 +109,8 @@ public final class Cli {
 
     /** Runs the command line on {@code args} with the process's streams; returns the exit code. */
     public static int run(String[] args) {
-        PrintWriter out = new PrintWriter(new java.io.OutputStreamWriter(System.out, java.nio.charset.StandardCharsets.UTF_8), true);
-        PrintWriter err = new PrintWriter(new java.io.OutputStreamWriter(System.err, java.nio.charset.StandardCharsets.UTF_8), true);
+        PrintWriter out = new PrintWriter(new OutputStreamWriter(System.out, StandardCharsets.UTF_8), true);
+        PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
         int code;
         try {
             code = commandLine(out, err).execute(args);

@@ -7,7 +7,9 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.io.OutputFiles;
 import org.arcwright.mechanics.FilletStressAnalysis;
 import org.arcwright.mechanics.FilletStressCase;
 import org.arcwright.mechanics.FilletStressReport;
@@ -19,6 +21,7 @@ import org.arcwright.mechanics.StressConcentration;
 import org.arcwright.mechanics.StressPoint;
 import org.arcwright.mechanics.StressTarget;
 import org.arcwright.render.plot.StressPlot;
+import org.arcwright.tolerance.Units;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -47,7 +50,7 @@ final class FilletStressCommand implements Callable<Integer> {
 
     @Override
     public Integer call() {
-        if (plot != null) org.arcwright.io.OutputFiles.requireWritable(plot, "--plot", file);
+        if (plot != null) OutputFiles.requireWritable(plot, "--plot", file);
         PetersonFits fits = PetersonFits.published();
         FilletStressAnalysis analysis = new FilletStressAnalysis(new StressConcentration(fits), new NotchSensitivity());
         MechanicsFiles.FilletStressJob job = new MechanicsFiles(new JsonFiles(), fits).readFilletStress(file);
@@ -152,11 +155,11 @@ final class FilletStressCommand implements Callable<Integer> {
         String u = c.units().symbol();
         boolean kf = c.strength() != null;
         out.printf("%s in %s, D %s / d %s %s, step h %s %s%n", capital(c.shape().description()), c.load().key(),
-                Numbers.plain(c.bigD()), Numbers.plain(c.smallD()), u, Numbers.plain(c.stepHeight()), u);
+                DecimalText.significant(c.bigD(), 4), DecimalText.significant(c.smallD(), 4), u, DecimalText.significant(c.stepHeight(), 4), u);
         out.printf("  fit        %s — %s%n", r.atNominal().kt().fitName(), r.atNominal().kt().source());
         if (kf) {
             out.printf("  material   S_ut %s MPa (%s ksi), Neuber's constant for steels (Shigley)%n",
-                    Numbers.plain(c.strength().mpa()), Numbers.plain(c.strength().ksi()));
+                    DecimalText.significant(c.strength().mpa(), 4), DecimalText.significant(c.strength().ksi(), 4));
         }
         out.printf("  %-10s %8s %7s %7s%s%n", "", "r (" + u + ")", "h/r", "Kt", kf ? String.format("%7s %7s", "q", "Kf") : "");
         if (c.hasTolerance()) {
@@ -174,13 +177,13 @@ final class FilletStressCommand implements Callable<Integer> {
         if (meets != null) {
             if (meets) {
                 out.printf("  verdict    PASS: r min %s %s is at or above %s %s, the smallest radius that meets %s%n",
-                        Numbers.plain(c.rMin()), u, Numbers.plain(g.radius()), u, minima.size() > 1 ? "every target" : "the target");
+                        DecimalText.significant(c.rMin(), 4), u, DecimalText.significant(g.radius(), 4), u, minima.size() > 1 ? "every target" : "the target");
             } else if (g.limitedByFit()) {
                 out.printf("  verdict    FAIL: r min %s %s is below %s %s, the sharpest fillet the fit covers; "
-                        + "below it the target cannot be confirmed%n", Numbers.plain(c.rMin()), u, Numbers.plain(g.radius()), u);
+                        + "below it the target cannot be confirmed%n", DecimalText.significant(c.rMin(), 4), u, DecimalText.significant(g.radius(), 4), u);
             } else if (g.found()) {
                 out.printf("  verdict    FAIL: r min %s %s is below %s %s, the smallest radius that meets %s%n",
-                        Numbers.plain(c.rMin()), u, Numbers.plain(g.radius()), u, minima.size() > 1 ? "every target" : "the target");
+                        DecimalText.significant(c.rMin(), 4), u, DecimalText.significant(g.radius(), 4), u, minima.size() > 1 ? "every target" : "the target");
             } else {
                 out.println("  verdict    FAIL: no fillet that fits the step meets the target");
             }
@@ -191,12 +194,12 @@ final class FilletStressCommand implements Callable<Integer> {
 
     /** Places for a radius in the file's units: an inch radius needs one more than a millimetre one. */
     private static int places(FilletStressCase c) {
-        return c.units() == org.arcwright.tolerance.Units.INCH ? 4 : 3;
+        return c.units() == Units.INCH ? 4 : 3;
     }
 
     private static void row(PrintWriter out, String label, StressPoint p, boolean kf, int places) {
-        out.printf("  %-10s %8s %7s %7s%s%s%n", label, Numbers.fixed(p.r(), places), Numbers.fixed(p.kt().hOverR(), 2),
-                Numbers.fixed(p.kt().kt(), 3), kf ? String.format("%7s %7s", Numbers.fixed(p.q(), 3), Numbers.fixed(p.kf(), 3)) : "",
+        out.printf("  %-10s %8s %7s %7s%s%s%n", label, DecimalText.fixed(p.r(), places), DecimalText.fixed(p.kt().hOverR(), 2),
+                DecimalText.fixed(p.kt().kt(), 3), kf ? String.format("%7s %7s", DecimalText.fixed(p.q(), 3), DecimalText.fixed(p.kf(), 3)) : "",
                 p.withinFit() ? "" : "   (extrapolated)");
     }
 

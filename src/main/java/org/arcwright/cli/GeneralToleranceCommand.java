@@ -5,6 +5,8 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
 import org.arcwright.tolerance.GeneralTolerance;
@@ -67,13 +69,13 @@ final class GeneralToleranceCommand implements Callable<Integer> {
         ToleranceQuantity q = q0;
         double size = what.radius != null ? what.radius : what.linear != null ? what.linear : what.angleSide;
         String field = what.radius != null ? "--radius" : what.linear != null ? "--linear" : "--angle-side";
-        if (!Double.isFinite(size)) throw org.arcwright.io.InputProblem.ofField(field, "not a finite number");
-        if (size <= 0) throw org.arcwright.io.InputProblem.ofField(field, "must be greater than zero, got " + size);
+        if (!Double.isFinite(size)) throw InputProblem.ofField(field, "not a finite number");
+        if (size <= 0) throw InputProblem.ofField(field, "must be greater than zero, got " + size);
         if (blend != null && !List.of("fillet", "round").contains(blend)) {
-            throw org.arcwright.io.InputProblem.ofField("--blend", "use fillet or round, got '" + blend + "'");
+            throw InputProblem.ofField("--blend", "use fillet or round, got '" + blend + "'");
         }
         if (blend != null && what.radius == null) {
-            throw org.arcwright.io.InputProblem.ofField("--blend", "applies to --radius only");
+            throw InputProblem.ofField("--blend", "applies to --radius only");
         }
         // ISO 2768-1:1989: an internal fillet radius is a linear size (Table 1); broken edges are Table 2
         if ("fillet".equals(blend)) q = ToleranceQuantity.LINEAR;
@@ -90,7 +92,7 @@ final class GeneralToleranceCommand implements Callable<Integer> {
             linear = tables.iso(ToleranceQuantity.LINEAR);
             try {
                 asFillet = linear.lookup(toleranceClass, sizeMm);
-            } catch (org.arcwright.io.InputProblem p) {
+            } catch (InputProblem p) {
                 asFillet = null;
             }
         }
@@ -101,7 +103,7 @@ final class GeneralToleranceCommand implements Callable<Integer> {
             m.put("tolerance", tol);
             m.put("toleranceUnits", q == ToleranceQuantity.ANGULAR ? "deg" : u.symbol());
             // in the file's units, with its unit: a bare "±1" beside an inch tolerance reads as inches
-            m.put("formatted", q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + Numbers.plain(tol) + " " + u.symbol());
+            m.put("formatted", q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + DecimalText.significant(tol, 4) + " " + u.symbol());
             m.put("class", t.toleranceClass());
             m.put("className", table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()));
             m.put("range", t.range() + " mm");
@@ -130,15 +132,15 @@ final class GeneralToleranceCommand implements Callable<Integer> {
                 case LINEAR -> "fillet".equals(blend) ? "internal fillet radius (a linear size)" : "linear size";
                 case ANGULAR -> "angle, shorter side";
             };
-            out.printf("%s %s %s, class %s (%s): %s%s%n", what, Numbers.plain(size), u.symbol(), t.toleranceClass(),
+            out.printf("%s %s %s, class %s (%s): %s%s%n", what, DecimalText.significant(size, 4), u.symbol(), t.toleranceClass(),
                     table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()),
-                    q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + Numbers.plain(tol),
+                    q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + DecimalText.significant(tol, 4),
                     q == ToleranceQuantity.ANGULAR ? "" : " " + u.symbol());
             out.printf("  range   %s mm%n", t.range());
             out.printf("  table   %s — %s%n", table.title(), table.source());
             if (asFillet != null) {
                 out.printf("  as an internal fillet radius it is a linear size: ±%s %s (range %s mm; %s — %s)%n",
-                        Numbers.plain(asFillet.plusMinus() / u.millimetres()), u.symbol(), asFillet.range(), linear.title(),
+                        DecimalText.significant(asFillet.plusMinus() / u.millimetres(), 4), u.symbol(), asFillet.range(), linear.title(),
                         linear.source());
                 out.println("  --blend fillet|round picks one; a title block should say which table applies to radii.");
             }
@@ -149,8 +151,8 @@ final class GeneralToleranceCommand implements Callable<Integer> {
     private GeneralTolerance lookup(GeneralToleranceTable table, double sizeMm, String field) {
         try {
             return table.lookup(toleranceClass, sizeMm);
-        } catch (org.arcwright.io.InputProblem p) {
-            throw "size".equals(p.field()) ? org.arcwright.io.InputProblem.ofField(field, p.problem()) : p;
+        } catch (InputProblem p) {
+            throw "size".equals(p.field()) ? InputProblem.ofField(field, p.problem()) : p;
         }
     }
 }

@@ -3,10 +3,12 @@ package org.arcwright.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Locale;
 import java.util.concurrent.Callable;
 import org.arcwright.inspect.Comparison;
 import org.arcwright.inspect.ControlledRadiusOutcome;
 import org.arcwright.inspect.Fits;
+import org.arcwright.inspect.Freedom;
 import org.arcwright.inspect.InspectionFiles;
 import org.arcwright.inspect.InspectionJson;
 import org.arcwright.inspect.InspectionRequest;
@@ -15,8 +17,10 @@ import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.ProfileOutcome;
 import org.arcwright.inspect.AdjacentSurfaces;
 import org.arcwright.inspect.Verdict;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.io.OutputFiles;
 import org.arcwright.render.ContourPlot;
 import org.arcwright.zone.RadiusEnvelope;
 import picocli.CommandLine.Command;
@@ -56,16 +60,16 @@ final class InspectCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (plot != null) {
-            String name = plot.getFileName().toString().toLowerCase(java.util.Locale.ROOT);
+            String name = plot.getFileName().toString().toLowerCase(Locale.ROOT);
             if (!name.endsWith(".png") && !name.endsWith(".svg")) throw InputProblem.ofField("--plot", "give a .png or .svg file name");
-            org.arcwright.io.OutputFiles.requireWritable(plot, "--plot", file);
+            OutputFiles.requireWritable(plot, "--plot", file);
         }
         if (window != null && !Double.isFinite(window)) throw InputProblem.ofField("--window", "must be a finite length, got " + window);
         if (uncertainty != null && !Double.isFinite(uncertainty)) throw InputProblem.ofField("--uncertainty", "must be a finite length, got " + uncertainty);
         InspectionRequest req = new InspectionFiles(new JsonFiles()).read(file).withCompare(compare);
         if (plot != null && !"points".equals(req.points().source())) {
             // the points came from a pointsFile: the plot must not replace it either
-            org.arcwright.io.OutputFiles.requireWritable(plot, "--plot", file, Path.of(req.points().source()));
+            OutputFiles.requireWritable(plot, "--plot", file, Path.of(req.points().source()));
         }
         try {
             if (window != null) req = req.withWindow(window);
@@ -95,13 +99,13 @@ final class InspectCommand implements Callable<Integer> {
     private static String n(double v) {
         if (Double.isNaN(v)) return "none";
         if (Double.isInfinite(v)) return "infinite";
-        return Numbers.plain(v);
+        return DecimalText.significant(v, 4);
     }
 
     private static void printText(PrintWriter out, InspectionResult r) {
         InspectionRequest q = r.request();
         String u = q.units().symbol();
-        out.printf("%s   %s, %d points (%s)%s%n", r.verdict().key().toUpperCase(java.util.Locale.ROOT), q.callout().describe(),
+        out.printf("%s   %s, %d points (%s)%s%n", r.verdict().key().toUpperCase(Locale.ROOT), q.callout().describe(),
                 q.points().size(), u, q.uncertainty() > 0 ? ", U = " + n(q.uncertainty()) + " " + u : "");
         AdjacentSurfaces sf = r.surfaces();
         if (sf != null) {
@@ -118,7 +122,7 @@ final class InspectCommand implements Callable<Integer> {
         ControlledRadiusOutcome c = r.controlled();
         if (c != null) {
             out.printf("  local radius   %s to %s %s (expanded uncertainty up to %s %s, k = 2) over %d windows of %s %s%n", n(c.localMin()),
-                    n(c.localMax()), u, n(c.uncertainty()), u, c.windows(), Numbers.plain(c.windowLength()), u);
+                    n(c.localMax()), u, n(c.uncertainty()), u, c.windows(), DecimalText.significant(c.windowLength(), 4), u);
             int shown = 0;
             for (ControlledRadiusOutcome.LocalWindow w : c.indeterminate()) {
                 if (++shown > 4) {
@@ -170,14 +174,14 @@ final class InspectCommand implements Callable<Integer> {
 
     private static String surface(AdjacentSurfaces.Surface s, String u) {
         if (!s.fitted()) return "nominal (not fitted)";
-        return String.format(java.util.Locale.ROOT, "through [%s, %s] along [%.6f, %.6f] (%d points, rms %s %s)", n(s.point().x()), n(s.point().y()),
-                s.direction().x() + 0.0, s.direction().y() + 0.0, s.points(), Numbers.plain(Double.parseDouble(String.format(java.util.Locale.ROOT, "%.3g", s.rms()))), u);
+        return String.format(Locale.ROOT, "through [%s, %s] along [%s, %s] (%d points, rms %s %s)", n(s.point().x()), n(s.point().y()),
+                DecimalText.fixed(s.direction().x(), 6), DecimalText.fixed(s.direction().y(), 6), s.points(), DecimalText.significant(s.rms(), 3), u);
     }
 
     private static String freeText(ProfileOutcome t) {
         if (t.free().isEmpty() && !t.dynamic()) return ", located";
         StringBuilder sb = new StringBuilder(", free:");
-        for (org.arcwright.inspect.Freedom fr : org.arcwright.inspect.Freedom.values()) if (t.free().contains(fr)) sb.append(' ').append(fr.key());
+        for (Freedom fr : Freedom.values()) if (t.free().contains(fr)) sb.append(' ').append(fr.key());
         if (t.dynamic()) sb.append(" offset");
         return sb.toString();
     }

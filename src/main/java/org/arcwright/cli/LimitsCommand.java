@@ -4,6 +4,8 @@ import java.io.PrintWriter;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.tolerance.CalloutParser;
 import org.arcwright.tolerance.CrescentZone;
@@ -61,7 +63,7 @@ final class LimitsCommand implements Callable<Integer> {
     private static boolean parseBlend(String text) {
         if (text.equalsIgnoreCase("fillet")) return true;
         if (text.equalsIgnoreCase("round")) return false;
-        throw org.arcwright.io.InputProblem.ofField("--blend", "use round or fillet, got '" + text + "'");
+        throw InputProblem.ofField("--blend", "use round or fillet, got '" + text + "'");
     }
 
     /** Why a figure is omitted for this form, or null when it is given. */
@@ -133,8 +135,8 @@ final class LimitsCommand implements Callable<Integer> {
 
     /** Where the crescent lies about the nominal arc, in words. */
     private static String span(CrescentZone z) {
-        String lo = Numbers.fixed(Math.abs(z.minArcOffset()), 4);
-        String hi = Numbers.fixed(Math.abs(z.maxArcOffset()), 4);
+        String lo = DecimalText.fixed(Math.abs(z.minArcOffset()), 4);
+        String hi = DecimalText.fixed(Math.abs(z.maxArcOffset()), 4);
         if (z.minArcOffset() >= 0) {
             return (lo.equals("0.0000") ? "from the nominal arc" : "from " + lo) + " to " + hi + " away from the vertex";
         }
@@ -149,31 +151,31 @@ final class LimitsCommand implements Callable<Integer> {
         int p = Math.max(2, c.places());
         String u = c.units().symbol();
         out.printf("%s   (%s, surfaces at %s°)%n", r.asme(), u, CrescentZone.degrees(r.includedAngleDeg()));
-        String min = r.min() == null ? "—" : Numbers.fixed(r.min(), p);
-        String max = r.max() == null ? "—" : Numbers.fixed(r.max(), p);
+        String min = r.min() == null ? "—" : DecimalText.fixed(r.min(), p);
+        String max = r.max() == null ? "—" : DecimalText.fixed(r.max(), p);
         out.printf("  limits         min %s   max %s%n", min, max);
         if (r.nominal() == null) {
             out.printf("  nominal        — (none drawn: a %s-only radius)%n", r.max() == null ? "MIN" : "MAX");
         } else {
-            out.printf("  nominal        %s%s%n", Numbers.fixed(r.nominal(), p),
+            out.printf("  nominal        %s%s%n", DecimalText.fixed(r.nominal(), p),
                     c.nominal().isPresent() ? "" : " (mean of the limits)");
         }
-        if (r.band() != null) out.printf("  band           %s%n", Numbers.fixed(r.band(), p));
+        if (r.band() != null) out.printf("  band           %s%n", DecimalText.fixed(r.band(), p));
         out.printf("  ASME Y14.5     %s%n", r.asme());
         out.printf("  ISO 129-1      %s%n", r.iso());
         CrescentZone z = r.crescent();
         if (z != null) {
             if (r.nominal() == null) {
                 out.printf("  crescent       %s wide on the bisector, between the sharp corner and the R%s arc%n",
-                        Numbers.fixed(z.width(), 4), Numbers.fixed(r.max(), p));
+                        DecimalText.fixed(z.width(), 4), DecimalText.fixed(r.max(), p));
                 out.printf("  profile zone   —  omitted: %s, so there is no zone about a nominal and no shortcut%n", omitted(r));
             } else {
                 out.printf("  crescent       %s wide on the bisector, %s (measured from the nominal arc)%n",
-                        Numbers.fixed(z.width(), 4), span(z));
+                        DecimalText.fixed(z.width(), 4), span(z));
                 out.printf("  profile zone   %s  geometric: the equal-bilateral zone about the nominal arc that holds the crescent%n",
-                        Numbers.fixed(r.profileZone(), 4));
+                        DecimalText.fixed(r.profileZone(), 4));
                 out.printf("                 %s  common shortcut (2 × the larger deviation): looser, allows that much along the whole blend%n",
-                        Numbers.fixed(r.shortcutProfile(), 4));
+                        DecimalText.fixed(r.shortcutProfile(), 4));
             }
             if (fillet != null && r.nominal() != null) printUnequal(out, r, fillet, p);
         }
@@ -182,24 +184,24 @@ final class LimitsCommand implements Callable<Integer> {
 
     private static void printUnequal(PrintWriter out, LimitsReport r, boolean fillet, int p) {
         CrescentZone z = r.crescent();
-        String uz = Numbers.fixed(z.isoOffset(fillet), 4);
+        String uz = DecimalText.fixed(z.isoOffset(fillet), 4);
         String iso = uz.equals("0.0000") || uz.equals("-0.0000")
                 ? "ISO: equal-bilateral about the nominal, no UZ offset"
                 : "ISO offset UZ" + (z.isoOffset(fillet) > 0 ? "+" : "") + uz;
         String asme;
         if (z.holdsNominal()) {
-            asme = "ASME unequally disposed " + Numbers.fixed(z.outwardPortion(fillet).getAsDouble(), 4) + " outward";
+            asme = "ASME unequally disposed " + DecimalText.fixed(z.outwardPortion(fillet).getAsDouble(), 4) + " outward";
         } else {
             double at = nearestLimit(r);
             double outward = CrescentZone.of(r.min(), at, r.max(), r.includedAngleDeg()).outwardPortion(fillet).getAsDouble();
-            asme = "ASME unequally disposed: not about R" + Numbers.fixed(r.nominal(), p)
-                    + " (the zone does not reach the nominal arc); with the true profile drawn at R" + Numbers.fixed(at, p)
-                    + ", " + Numbers.fixed(outward, 4) + " outward";
+            asme = "ASME unequally disposed: not about R" + DecimalText.fixed(r.nominal(), p)
+                    + " (the zone does not reach the nominal arc); with the true profile drawn at R" + DecimalText.fixed(at, p)
+                    + ", " + DecimalText.fixed(outward, 4) + " outward";
         }
         String centre = uz.equals("0.0000") || uz.equals("-0.0000") ? "centred on the nominal arc"
-                : "its centre " + Numbers.fixed(Math.abs(z.isoOffset(fillet)), 4) + " from the nominal arc toward the "
+                : "its centre " + DecimalText.fixed(Math.abs(z.isoOffset(fillet)), 4) + " from the nominal arc toward the "
                 + (z.isoOffset(fillet) > 0 ? "add-material" : "remove-material") + " side";
         out.printf("  unequal zone   %s total for a %s, %s: %s; %s%n",
-                Numbers.fixed(z.width(), 4), fillet ? "fillet" : "round", centre, iso, asme);
+                DecimalText.fixed(z.width(), 4), fillet ? "fillet" : "round", centre, iso, asme);
     }
 }

@@ -4,6 +4,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
 import java.util.concurrent.Callable;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
@@ -48,7 +49,7 @@ final class NoteCommand implements Callable<Integer> {
             Path file = Path.of(template);
             if (!Files.isRegularFile(file)) throw new InputProblem(template, 0, 0, null, "file not found");
             String name = file.getFileName().toString().replace(NoteTemplates.EXTENSION, "");
-            NoteTemplate t = NoteTemplate.compile(name, org.arcwright.io.InputFiles.readText(file), file.toString(), "command line");
+            NoteTemplate t = NoteTemplate.compile(name, InputFiles.readText(file), file.toString(), "command line");
             templates = new NoteTemplates(List.of(t));
             template = name;
         }

@@ -1,10 +1,16 @@
 package org.arcwright.cli;
 
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
+import java.nio.charset.MalformedInputException;
+import java.nio.file.Files;
+import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.arcwright.io.InputProblem;
@@ -251,13 +257,13 @@ final class NotesCommand implements Runnable {
 
         private static String readable(Path file) {
             try {
-                return java.nio.file.Files.readString(file);
-            } catch (java.nio.file.NoSuchFileException e) {
+                return Files.readString(file);
+            } catch (NoSuchFileException e) {
                 throw new InputProblem(file.toString(), 0, 0, null, "file not found");
-            } catch (java.nio.charset.MalformedInputException e) {
+            } catch (MalformedInputException e) {
                 throw new InputProblem(file.toString(), 0, 0, null, "not UTF-8 text");
-            } catch (java.io.IOException e) {
-                throw new java.io.UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
+            } catch (IOException e) {
+                throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
             }
         }
     }
@@ -282,7 +288,7 @@ final class NotesCommand implements Runnable {
                 PrintWriter out = spec.commandLine().getOut();
                 if (format == OutputFormat.json) {
                     Map<String, Object> m = new LinkedHashMap<>();
-                    m.put("kind", r.kind().name().toLowerCase(java.util.Locale.ROOT));
+                    m.put("kind", r.kind().name().toLowerCase(Locale.ROOT));
                     m.put("notes", r.notes());
                     m.put("millis", r.millis());
                     m.put("index", store.indexFolder().toString());

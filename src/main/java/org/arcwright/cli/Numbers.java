@@ -1,21 +1,22 @@
 package org.arcwright.cli;
 
-import java.math.BigDecimal;
-import java.math.RoundingMode;
+import org.arcwright.io.DecimalText;
 
-/** Number formatting for human-readable output. JSON output carries full doubles instead. */
+/**
+ * The advise and simulate commands' names for {@link DecimalText}'s rules, kept while those commands are
+ * changed on other branches; every other command calls {@code DecimalText} directly. JSON output carries
+ * full doubles.
+ */
 final class Numbers {
     private Numbers() {}
 
-    /** {@code v} to {@code places} decimals, trailing zeros kept. */
+    /** {@link DecimalText#fixed}. */
     static String fixed(double v, int places) {
-        return BigDecimal.valueOf(v).setScale(places, RoundingMode.HALF_EVEN).toPlainString();
+        return DecimalText.fixed(v, places);
     }
 
-    /** {@code v} with at least {@code minPlaces} decimals and at most 4 significant digits past them. */
+    /** {@link DecimalText#significant} to 4 digits. */
     static String plain(double v) {
-        if (v == 0) return "0";
-        BigDecimal b = new BigDecimal(v).round(new java.math.MathContext(4, RoundingMode.HALF_EVEN)).stripTrailingZeros();
-        return b.scale() < 0 ? b.setScale(0).toPlainString() : b.toPlainString();
+        return DecimalText.significant(v, 4);
     }
 }

@@ -1,8 +1,12 @@
 package org.arcwright.cli;
 
 import java.io.PrintWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.concurrent.Callable;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
@@ -65,7 +69,7 @@ final class PackCommand implements Runnable {
                 // the built-in pack itself, e.g. knowledge/ while editing it: check it alone
                 stack = new PackStack(List.of(PracticePack.open(dir, PackLayer.BUILT_IN, new JsonFiles())), List.of());
             } else {
-                List<Path> layers = new java.util.ArrayList<>(below.isEmpty() ? settingsBelow() : below);
+                List<Path> layers = new ArrayList<>(below.isEmpty() ? settingsBelow() : below);
                 layers.add(dir);
                 stack = PackStack.load(layers, null);
             }
@@ -73,7 +77,7 @@ final class PackCommand implements Runnable {
             PackCheck.Report report = new PackCheck(Advisors.standard(stack, book)).run(checked.name());
             PrintWriter out = spec.commandLine().getOut();
             if (format == OutputFormat.json) {
-                java.util.Map<String, Object> m = new java.util.LinkedHashMap<>();
+                Map<String, Object> m = new LinkedHashMap<>();
                 m.put("pack", report.pack());
                 m.put("passed", report.passed());
                 m.put("problems", report.problems().stream().map(InputProblem::getMessage).toList());
@@ -92,10 +96,10 @@ final class PackCommand implements Runnable {
             PackSettings settings = PackSettings.read(configDir != null ? configDir : ConfigDirectory.ofSystem(), new JsonFiles());
             settings.problem().ifPresent(p -> spec.commandLine().getErr().println("arcwright pack check: settings not used: " + p.getMessage()));
             Path self = dir.toAbsolutePath().normalize();
-            List<Path> out = new java.util.ArrayList<>();
+            List<Path> out = new ArrayList<>();
             for (Path p : settings.teamPacks()) {
                 if (p.toAbsolutePath().normalize().equals(self)) return out;
-                if (java.nio.file.Files.isRegularFile(p.resolve("pack.json"))) {
+                if (Files.isRegularFile(p.resolve("pack.json"))) {
                     out.add(p);
                 } else {
                     spec.commandLine().getErr().println("arcwright pack check: pack from your settings skipped: " + p + ": no pack.json");

@@ -5,6 +5,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Optional;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.notes.NotesPaths;
@@ -39,7 +40,7 @@ final class PackOptions {
     PackSettings settings() {
         if (settings == null) {
             Path dir = configDir != null ? configDir : ConfigDirectory.ofSystem();
-            settings = noSettings ? new PackSettings(dir.resolve(PackSettings.FILE_NAME), List.of(), null, java.util.Optional.empty())
+            settings = noSettings ? new PackSettings(dir.resolve(PackSettings.FILE_NAME), List.of(), null, Optional.empty())
                     : PackSettings.read(dir, new JsonFiles());
         }
         return settings;

@@ -3,7 +3,9 @@ package org.arcwright.cli;
 import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.io.OutputFiles;
 import org.arcwright.render.FrameRenderer;
 import org.arcwright.render.PngPainter;
 import org.arcwright.render.RenderRequest;
@@ -38,10 +40,10 @@ final class RenderCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         if (dpi < PngPainter.MIN_DPI || dpi > PngPainter.MAX_DPI) {
-            throw org.arcwright.io.InputProblem.ofField("--dpi", "must be between " + PngPainter.MIN_DPI + " and "
+            throw InputProblem.ofField("--dpi", "must be between " + PngPainter.MIN_DPI + " and "
                     + PngPainter.MAX_DPI + ", got " + dpi);
         }
-        if (out != null) org.arcwright.io.OutputFiles.requireWritable(out, "--out", file);
+        if (out != null) OutputFiles.requireWritable(out, "--out", file);
         RenderRequest r = RenderRequest.read(file, new JsonFiles());
         FrameRenderer renderer = FrameRenderer.withBundledFont();
         PrintWriter pw = spec.commandLine().getOut();

@@ -4,6 +4,7 @@ import java.io.PrintWriter;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.io.OutputFiles;
 import org.arcwright.pack.PackStack;
 import org.arcwright.render.SheetExporter;
 import org.arcwright.services.Practice;
@@ -42,7 +43,7 @@ final class SheetCommand implements Callable<Integer> {
     @Override
     public Integer call() {
         SheetExporter.Format.of(out);
-        org.arcwright.io.OutputFiles.requireWritable(out, "--out", part);
+        OutputFiles.requireWritable(out, "--out", part);
         PackStack stack = packs.load("sheet", spec.commandLine().getErr());
         if (!stack.problems().isEmpty()) throw stack.problems().get(0);
         PartWorksheet ws = new WorksheetFiles(new JsonFiles()).read(part);

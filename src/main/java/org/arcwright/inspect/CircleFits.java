@@ -177,8 +177,8 @@ public final class CircleFits {
      * residual of every point into three scratch arrays (allocated once per fit), which HotSpot's C2
      * compiles to SIMD square roots and divisions, then a loop summing {@code JᵀJ}, {@code Σeᵢ} and
      * the cost with fused multiply-adds in three interleaved chains, so that each sum waits on its
-     * own last addition only every third point (9 % faster than two chains; sums stop a loop from being
-     * vectorised, so they are kept out of the first loop). The other entries of {@code Jᵀe} need no
+     * own last addition only every third point (measured against two chains: docs/benchmarks/inspect.md;
+     * sums stop a loop from being vectorised, so they are kept out of the first loop). The other entries of {@code Jᵀe} need no
      * sum of their own: {@code Σuᵢeᵢ = Σ(xᵢ - x0) - n·a - r·Σuᵢ}, the first sum kept from Taubin's
      * pass.
      *

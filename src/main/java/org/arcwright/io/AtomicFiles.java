@@ -3,11 +3,24 @@ package org.arcwright.io;
 import java.io.IOException;
 import java.io.OutputStream;
 import java.io.UncheckedIOException;
+import java.nio.channels.Channels;
+import java.nio.channels.FileChannel;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AtomicMoveNotSupportedException;
+import java.nio.file.DirectoryStream;
 import java.nio.file.Files;
+import java.nio.file.LinkOption;
 import java.nio.file.Path;
 import java.nio.file.StandardCopyOption;
+import java.nio.file.StandardOpenOption;
+import java.nio.file.attribute.PosixFileAttributeView;
+import java.nio.file.attribute.PosixFilePermission;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.time.Duration;
+import java.util.ArrayList;
+import java.util.LinkedHashMap;
+import java.util.List;
+import java.util.Set;
 
 /**
  * Writes a file so that readers see either the old content or the new, never a torn mix.
@@ -20,7 +33,7 @@ import java.nio.file.StandardCopyOption;
  */
 public final class AtomicFiles {
     /** Age after which a leftover temporary file of a save is taken to belong to a save that died. */
-    public static final java.time.Duration STALE_AFTER = java.time.Duration.ofMinutes(10);
+    public static final Duration STALE_AFTER = Duration.ofMinutes(10);
 
     private AtomicFiles() {}
 
@@ -36,12 +49,12 @@ public final class AtomicFiles {
      * worksheet and exported sheet private by accident.
      */
     private static void keepPermissions(Path target, Path tmp) throws IOException {
-        if (!Files.getFileStore(tmp).supportsFileAttributeView(java.nio.file.attribute.PosixFileAttributeView.class)) {
+        if (!Files.getFileStore(tmp).supportsFileAttributeView(PosixFileAttributeView.class)) {
             return;
         }
-        java.util.Set<java.nio.file.attribute.PosixFilePermission> perms = Files.exists(target)
+        Set<PosixFilePermission> perms = Files.exists(target)
                 ? Files.getPosixFilePermissions(target)
-                : java.nio.file.attribute.PosixFilePermissions.fromString("rw-r--r--");
+                : PosixFilePermissions.fromString("rw-r--r--");
         Files.setPosixFilePermissions(tmp, perms);
     }
 
@@ -57,14 +70,14 @@ public final class AtomicFiles {
         String prefix = "." + abs.getFileName() + ".";
         long cutoff = System.currentTimeMillis() - STALE_AFTER.toMillis();
         int removed = 0;
-        try (java.nio.file.DirectoryStream<Path> s = Files.newDirectoryStream(dir, p -> {
+        try (DirectoryStream<Path> s = Files.newDirectoryStream(dir, p -> {
             String n = p.getFileName().toString();
             return n.startsWith(prefix) && n.endsWith(".tmp") && n.length() > prefix.length() + 4;
         })) {
             for (Path p : s) {
                 try {
-                    if (Files.isRegularFile(p, java.nio.file.LinkOption.NOFOLLOW_LINKS)
-                            && Files.getLastModifiedTime(p, java.nio.file.LinkOption.NOFOLLOW_LINKS).toMillis() < cutoff
+                    if (Files.isRegularFile(p, LinkOption.NOFOLLOW_LINKS)
+                            && Files.getLastModifiedTime(p, LinkOption.NOFOLLOW_LINKS).toMillis() < cutoff
                             && Files.deleteIfExists(p)) {
                         removed++;
                     }
@@ -87,10 +100,10 @@ public final class AtomicFiles {
      *
      * @param targets the files and their writers, in the order they are renamed into place
      */
-    public static void writeAll(java.util.LinkedHashMap<Path, Writer> targets) {
-        java.util.List<Path> absTargets = new java.util.ArrayList<>();
-        java.util.List<Path> temps = new java.util.ArrayList<>();
-        java.util.List<byte[]> before = new java.util.ArrayList<>();
+    public static void writeAll(LinkedHashMap<Path, Writer> targets) {
+        List<Path> absTargets = new ArrayList<>();
+        List<Path> temps = new ArrayList<>();
+        List<byte[]> before = new ArrayList<>();
         int renamed = 0;
         try {
             for (var e : targets.entrySet()) {
@@ -103,8 +116,8 @@ public final class AtomicFiles {
                 Path tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
                 temps.add(tmp);
                 keepPermissions(abs, tmp);
-                try (var ch = java.nio.channels.FileChannel.open(tmp, java.nio.file.StandardOpenOption.WRITE);
-                     OutputStream out = java.nio.channels.Channels.newOutputStream(ch)) {
+                try (var ch = FileChannel.open(tmp, StandardOpenOption.WRITE);
+                     OutputStream out = Channels.newOutputStream(ch)) {
                     e.getValue().writeTo(out);
                     out.flush();
                     ch.force(true);
@@ -167,8 +180,8 @@ public final class AtomicFiles {
             removeStaleTemporaries(abs);
             tmp = Files.createTempFile(dir, "." + abs.getFileName() + ".", ".tmp");
             keepPermissions(abs, tmp);
-            try (var ch = java.nio.channels.FileChannel.open(tmp, java.nio.file.StandardOpenOption.WRITE);
-                 OutputStream out = java.nio.channels.Channels.newOutputStream(ch)) {
+            try (var ch = FileChannel.open(tmp, StandardOpenOption.WRITE);
+                 OutputStream out = Channels.newOutputStream(ch)) {
                 writer.writeTo(out);
                 out.flush();
                 ch.force(true);

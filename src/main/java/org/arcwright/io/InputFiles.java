@@ -1,14 +1,17 @@
 package org.arcwright.io;
 
 import java.io.BufferedReader;
+import java.io.ByteArrayInputStream;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.InputStreamReader;
+import java.io.SequenceInputStream;
 import java.nio.ByteBuffer;
 import java.nio.charset.CharacterCodingException;
 import java.nio.charset.CodingErrorAction;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.AccessDeniedException;
+import java.nio.file.FileSystemLoopException;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -72,7 +75,7 @@ public final class InputFiles {
             InputStream in = Files.newInputStream(file);
             byte[] head = in.readNBytes(BOM.length);
             InputStream rest = startsWithBom(head) ? in
-                    : new java.io.SequenceInputStream(new java.io.ByteArrayInputStream(head), in);
+                    : new SequenceInputStream(new ByteArrayInputStream(head), in);
             return new BufferedReader(new InputStreamReader(rest, StandardCharsets.UTF_8.newDecoder()
                     .onMalformedInput(CodingErrorAction.REPORT)
                     .onUnmappableCharacter(CodingErrorAction.REPORT)), 1 << 16);
@@ -155,12 +158,12 @@ public final class InputFiles {
     }
 
     private static String megabytes(long bytes) {
-        return bytes < (1L << 20) ? bytes + " bytes" : String.format(java.util.Locale.ROOT, "%.1f MiB", bytes / 1048576.0);
+        return bytes < (1L << 20) ? bytes + " bytes" : DecimalText.fixed(bytes / 1048576.0, 1) + " MiB";
     }
 
     private static String reason(IOException e) {
         if (e instanceof AccessDeniedException) return "permission denied";
-        if (e instanceof java.nio.file.FileSystemLoopException) return "a loop of links";
+        if (e instanceof FileSystemLoopException) return "a loop of links";
         String m = e.getMessage();
         return m == null ? "an input/output error" : m;
     }

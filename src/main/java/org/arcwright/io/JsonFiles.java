@@ -10,8 +10,17 @@ import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.SerializationFeature;
 import com.fasterxml.jackson.databind.cfg.CoercionAction;
 import com.fasterxml.jackson.databind.cfg.CoercionInputShape;
+import com.fasterxml.jackson.databind.exc.InvalidFormatException;
+import com.fasterxml.jackson.databind.exc.InvalidTypeIdException;
+import com.fasterxml.jackson.databind.exc.MismatchedInputException;
+import com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException;
 import com.fasterxml.jackson.databind.json.JsonMapper;
+import com.fasterxml.jackson.databind.node.ArrayNode;
+import com.fasterxml.jackson.databind.node.NullNode;
+import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.math.BigDecimal;
 import java.nio.file.Path;
+import java.util.Collection;
 import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -63,12 +72,12 @@ public final class JsonFiles {
     }
 
     /** A JSON object a practice pack supplies (a table), read from inside {@code packFolder} only. */
-    public com.fasterxml.jackson.databind.node.ObjectNode readPackObject(Path file, Path packFolder) {
+    public ObjectNode readPackObject(Path file, Path packFolder) {
         JsonNode tree = readPackFile(file, packFolder, JsonNode.class);
         if (!tree.isObject()) {
             throw new InputProblem(file.toString(), 1, 1, null, "expected a JSON object {...} at the top of the file");
         }
-        return (com.fasterxml.jackson.databind.node.ObjectNode) tree;
+        return (ObjectNode) tree;
     }
 
     /** Parses text as the given type, attributing errors to {@code source}; a bare {@code null} is refused. */
@@ -82,7 +91,7 @@ public final class JsonFiles {
         } catch (JsonProcessingException e) {
             throw located(e, source);
         }
-        if (value == null || value instanceof com.fasterxml.jackson.databind.node.NullNode) {
+        if (value == null || value instanceof NullNode) {
             throw new InputProblem(source, 1, 1, null, "the file holds only null; expected " + expected(type));
         }
         return value;
@@ -159,7 +168,7 @@ public final class JsonFiles {
             if (root.getCause() instanceof NullPointerException) return "missing a required value";
             root = root.getCause();
         }
-        if (e instanceof com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException upe) {
+        if (e instanceof UnrecognizedPropertyException upe) {
             return "unknown field '" + upe.getPropertyName() + "'; known fields: "
                     + upe.getKnownPropertyIds().stream().map(Object::toString).sorted()
                             .collect(Collectors.joining(", "));
@@ -167,9 +176,9 @@ public final class JsonFiles {
         String msg = e.getOriginalMessage() == null ? "" : e.getOriginalMessage();
         int cut = msg.indexOf("\n at [Source");
         if (cut >= 0) msg = msg.substring(0, cut);
-        if (e instanceof com.fasterxml.jackson.databind.exc.MismatchedInputException mie) {
+        if (e instanceof MismatchedInputException mie) {
             if (msg.startsWith("Missing required creator property")) return "missing required field";
-            if (mie instanceof com.fasterxml.jackson.databind.exc.InvalidTypeIdException ite) {
+            if (mie instanceof InvalidTypeIdException ite) {
                 return ite.getTypeId() == null ? "missing the field that says which kind it is (\"type\")"
                         : "unknown type '" + ite.getTypeId() + "'";
             }
@@ -177,7 +186,7 @@ public final class JsonFiles {
             if (msg.startsWith("Cannot coerce empty String")) {
                 return "empty text \"\" where " + (want == null ? "a value" : want) + " is expected";
             }
-            if (mie instanceof com.fasterxml.jackson.databind.exc.InvalidFormatException ife && want != null) {
+            if (mie instanceof InvalidFormatException ife && want != null) {
                 return "expected " + want + ", got " + shown(ife.getValue());
             }
             Matcher m = FROM_VALUE.matcher(msg);
@@ -252,14 +261,14 @@ public final class JsonFiles {
     /** The user's word for what a Java type expects in JSON. */
     static String expected(Class<?> type) {
         if (type == Double.class || type == double.class || type == Float.class || type == float.class
-                || type == java.math.BigDecimal.class) {
+                || type == BigDecimal.class) {
             return "a number";
         }
         if (type == Integer.class || type == int.class || type == Long.class || type == long.class) return "a whole number";
         if (type == Boolean.class || type == boolean.class) return "true or false";
         if (type == String.class || type.isEnum()) return "text";
-        if (type.isArray() || java.util.Collection.class.isAssignableFrom(type)
-                || type == com.fasterxml.jackson.databind.node.ArrayNode.class) {
+        if (type.isArray() || Collection.class.isAssignableFrom(type)
+                || type == ArrayNode.class) {
             return "a list [...]";
         }
         return "an object {...}";

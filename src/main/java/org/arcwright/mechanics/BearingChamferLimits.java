@@ -2,13 +2,13 @@ package org.arcwright.mechanics;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
-import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
+import org.arcwright.pack.PackTables;
 
 /**
  * The largest chamfer dimension r<sub>s max</sub> of a rolling bearing's ring for its smallest
@@ -69,18 +69,7 @@ public record BearingChamferLimits(String id, String title, String source, Strin
      * @throws InputProblem naming the file when a table is malformed, or when no table has the id
      */
     public static BearingChamferLimits load(PackStack stack, String id) {
-        JsonFiles json = new JsonFiles();
-        BearingChamferLimits found = null;
-        for (PackStack.PackFile f : stack.files("tables", ".json")) {
-            var tree = json.readTree(f.path());
-            if (!KIND.equals(tree.path("kind").asText())) continue;
-            ObjectNode obj = (ObjectNode) tree.deepCopy();
-            obj.remove("kind");
-            BearingChamferLimits t = json.convert(obj, f.path().toString(), BearingChamferLimits.class);
-            if (t.id().equals(id)) found = t;
-        }
-        if (found == null) throw InputProblem.ofField("table", "no " + KIND + " table '" + id + "' in the packs in force");
-        return found;
+        return PackTables.byId(stack, KIND, id, BearingChamferLimits.class, BearingChamferLimits::id);
     }
 
     /**
@@ -102,13 +91,13 @@ public record BearingChamferLimits(String id, String title, String source, Strin
             }
         }
         if (listed == null) {
-            throw InputProblem.ofField("mating.chamferMin", "r_s min " + plain(chamferMin) + " mm is above the largest in the "
-                    + "chamfer-limit table (" + plain(rows.get(rows.size() - 1).chamferMin()) + " mm)");
+            throw InputProblem.ofField("mating.chamferMin", "r_s min " + DecimalText.exact(chamferMin) + " mm is above the largest in the "
+                    + "chamfer-limit table (" + DecimalText.exact(rows.get(rows.size() - 1).chamferMin()) + " mm)");
         }
         StringBuilder note = new StringBuilder();
         if (Math.abs(listed - chamferMin) > BearingSeatTable.ROUNDING) {
-            note.append("r_s min ").append(plain(chamferMin)).append(" mm is not a listed chamfer dimension; r_s max is taken "
-                    + "from the row for ").append(plain(listed)).append(" mm (the next larger). ");
+            note.append("r_s min ").append(DecimalText.exact(chamferMin)).append(" mm is not a listed chamfer dimension; r_s max is taken "
+                    + "from the row for ").append(DecimalText.exact(listed)).append(" mm (the next larger). ");
         }
         Row use = null;
         int ranges = 0;
@@ -129,9 +118,6 @@ public record BearingChamferLimits(String id, String title, String source, Strin
         return new Lookup(use, note.toString().strip());
     }
 
-    static String plain(double v) {
-        return new java.math.BigDecimal(Double.toString(v)).stripTrailingZeros().toPlainString();
-    }
 
     /**
      * One row.
@@ -167,15 +153,15 @@ public record BearingChamferLimits(String id, String title, String source, Strin
         /** The bore range in words, e.g. {@code "bore over 40 up to 120 mm"} or {@code "any bore"}. */
         public String boreRange() {
             if (boreOver == null && boreUpTo == null) return "any bore";
-            if (boreOver == null) return "bore up to " + plain(boreUpTo) + " mm";
-            if (boreUpTo == null) return "bore over " + plain(boreOver) + " mm";
-            return "bore over " + plain(boreOver) + " up to " + plain(boreUpTo) + " mm";
+            if (boreOver == null) return "bore up to " + DecimalText.exact(boreUpTo) + " mm";
+            if (boreUpTo == null) return "bore over " + DecimalText.exact(boreOver) + " mm";
+            return "bore over " + DecimalText.exact(boreOver) + " up to " + DecimalText.exact(boreUpTo) + " mm";
         }
 
         /** The row in words for a report. */
         public String describe() {
             return String.format(Locale.ROOT, "r_s min %s mm, %s: r_s max %s mm radial, %s mm axial",
-                    plain(chamferMin), boreRange(), plain(radialMax), plain(axialMax));
+                    DecimalText.exact(chamferMin), boreRange(), DecimalText.exact(radialMax), DecimalText.exact(axialMax));
         }
     }
 

@@ -1,14 +1,14 @@
 package org.arcwright.mechanics;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
+import com.fasterxml.jackson.annotation.JsonIgnoreProperties;
 import com.fasterxml.jackson.annotation.JsonProperty;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import org.arcwright.io.InputProblem;
-import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
+import org.arcwright.pack.PackTables;
 
 /**
  * The largest shaft or housing fillet radius for a rolling bearing's smallest chamfer dimension
@@ -26,7 +26,7 @@ import org.arcwright.pack.PackStack;
  * @param units always mm
  * @param rows by ascending r<sub>s min</sub>
  */
-@com.fasterxml.jackson.annotation.JsonIgnoreProperties({"provenance"})
+@JsonIgnoreProperties({"provenance"})
 public record BearingSeatTable(String id, String title, String source, String units, List<Row> rows) {
     /** The kind of pack table this class reads. */
     public static final String KIND = "bearing-fillet";
@@ -66,18 +66,7 @@ public record BearingSeatTable(String id, String title, String source, String un
      * @throws InputProblem naming the file when a table is malformed, or when no table has the id
      */
     public static BearingSeatTable load(PackStack stack, String id) {
-        JsonFiles json = new JsonFiles();
-        BearingSeatTable found = null;
-        for (PackStack.PackFile f : stack.files("tables", ".json")) {
-            ObjectNode tree = json.readPackObject(f.path(), f.pack().root());
-            if (!KIND.equals(tree.path("kind").asText())) continue;
-            ObjectNode obj = tree.deepCopy();
-            obj.remove("kind");
-            BearingSeatTable t = json.convert(obj, f.path().toString(), BearingSeatTable.class);
-            if (t.id().equals(id)) found = t;
-        }
-        if (found == null) throw InputProblem.ofField("table", "no " + KIND + " table '" + id + "' in the packs in force");
-        return found;
+        return PackTables.byId(stack, KIND, id, BearingSeatTable.class, BearingSeatTable::id);
     }
 
     /**

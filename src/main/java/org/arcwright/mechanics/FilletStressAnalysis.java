@@ -6,6 +6,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import java.util.Set;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -38,7 +39,7 @@ public final class FilletStressAnalysis {
         StressPoint max = point(c, c.rMax());
         Set<String> notes = new LinkedHashSet<>();
         for (StressPoint p : List.of(min, nom, max)) {
-            if (!p.kt().message().isEmpty()) notes.add(String.format(Locale.ROOT, "at r = %s: %s", fmt(p.r()), p.kt().message()));
+            if (!p.kt().message().isEmpty()) notes.add(String.format(Locale.ROOT, "at r = %s: %s", DecimalText.significant(p.r(), 4), p.kt().message()));
         }
         if (c.strength() != null) {
             NotchSensitivity.NeuberConstant a = notchSensitivity.neuberConstant(c.strength(), c.load());
@@ -84,7 +85,7 @@ public final class FilletStressAnalysis {
             return new MinimumRadius(target, false, Double.NaN, atTo, from, to, false, String.format(Locale.ROOT,
                     "no radius up to the step height h = %s keeps %s <= %s: the largest fillet gives %s = %.3f; "
                             + "a larger radius needs a taller step, an undercut or a relief groove",
-                    fmt(h), sym, fmt(target.value()), sym, atTo));
+                    DecimalText.significant(h, 4), sym, DecimalText.significant(target.value(), 4), sym, atTo));
         }
         double pass = to;
         double ratio = Math.pow(from / to, 1.0 / SCAN_POINTS);
@@ -99,15 +100,15 @@ public final class FilletStressAnalysis {
                 }
                 double v = factor(c, fit, target, hi);
                 return new MinimumRadius(target, true, hi, v, from, to, false, String.format(Locale.ROOT,
-                        "smallest radius keeping %s <= %s: r = %s (%s = %.3f there)", sym, fmt(target.value()),
-                        fmt(hi), sym, v));
+                        "smallest radius keeping %s <= %s: r = %s (%s = %s there)", sym, DecimalText.significant(target.value(), 4),
+                        DecimalText.significant(hi, 4), sym, DecimalText.significant(v, 4)));
             }
             pass = r;
         }
         double v = factor(c, fit, target, from);
         return new MinimumRadius(target, true, from, v, from, to, true, String.format(Locale.ROOT,
                 "%s stays <= %s down to r = %s, the sharp end of the fit (h/r = %s); smaller radii are outside what the fit covers",
-                sym, fmt(target.value()), fmt(from), fmt(fit.hrMax())));
+                sym, DecimalText.significant(target.value(), 4), DecimalText.significant(from, 4), DecimalText.significant(fit.hrMax(), 4)));
     }
 
     private double factor(FilletStressCase c, PetersonFit fit, StressTarget target, double r) {
@@ -116,7 +117,4 @@ public final class FilletStressAnalysis {
         return withNotch(c, r, kt).kf();
     }
 
-    private static String fmt(double v) {
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
-    }
 }

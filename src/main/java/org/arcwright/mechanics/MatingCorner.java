@@ -1,6 +1,7 @@
 package org.arcwright.mechanics;
 
 import java.util.Locale;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -42,7 +43,7 @@ public sealed interface MatingCorner permits MatingCorner.Chamfer, MatingCorner.
 
         @Override
         public String describe() {
-            return String.format(Locale.ROOT, "chamfer %s × %s°", num(leg), num(angleDeg));
+            return String.format(Locale.ROOT, "chamfer %s × %s°", DecimalText.significant(leg, 4), DecimalText.significant(angleDeg, 4));
         }
     }
 
@@ -57,7 +58,7 @@ public sealed interface MatingCorner permits MatingCorner.Chamfer, MatingCorner.
         }
 
         @Override
-        public String describe() { return "radius " + num(min) + " min"; }
+        public String describe() { return "radius " + DecimalText.significant(min, 4) + " min"; }
     }
 
     /**
@@ -82,11 +83,8 @@ public sealed interface MatingCorner permits MatingCorner.Chamfer, MatingCorner.
 
         @Override
         public String describe() {
-            return "rolling-bearing ring, r_s min " + num(chamferMin) + " mm" + (bore == null ? "" : ", bore " + num(bore) + " mm");
+            return "rolling-bearing ring, r_s min " + DecimalText.significant(chamferMin, 4) + " mm" + (bore == null ? "" : ", bore " + DecimalText.significant(bore, 4) + " mm");
         }
     }
 
-    private static String num(double v) {
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
-    }
 }

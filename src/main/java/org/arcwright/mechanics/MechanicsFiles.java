@@ -4,7 +4,9 @@ import com.fasterxml.jackson.annotation.JsonProperty;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.tolerance.CalloutParser;
@@ -148,7 +150,7 @@ public final class MechanicsFiles {
     /** The mating corner; a bearing's sizes go to mm here, at the file boundary, since its tables are metric. */
     private static MatingCorner corner(MatingDto m, Units units) {
         if (m == null) throw InputProblem.ofField("mating", "missing: the mating part's corner, e.g. {\"type\": \"chamfer\", \"leg\": 1.5, \"angle\": 45}");
-        String type = m.type() == null ? null : m.type().trim().toLowerCase(java.util.Locale.ROOT);
+        String type = m.type() == null ? null : m.type().trim().toLowerCase(Locale.ROOT);
         if (type == null) throw InputProblem.ofField("mating.type", "missing; use chamfer, radius or bearing");
         switch (type) {
             case "chamfer":
@@ -201,6 +203,6 @@ public final class MechanicsFiles {
     }
 
     private static String text(Path file) {
-        return org.arcwright.io.InputFiles.readText(file);
+        return InputFiles.readText(file);
     }
 }

@@ -1,6 +1,8 @@
 package org.arcwright.mechanics;
 
+import java.util.Locale;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -52,9 +54,9 @@ public final class StressConcentration {
         boolean within = fit.covers(hr);
         String message = "";
         if (!within) {
-            message = String.format(java.util.Locale.ROOT,
-                    "extrapolated: h/r = %.3g lies outside the fit's range %s..%s (%s); treat K_t as a rough estimate",
-                    hr, plain(fit.hrMin()), plain(fit.hrMax()),
+            message = String.format(Locale.ROOT,
+                    "extrapolated: h/r = %s lies outside the fit's range %s..%s (%s); treat K_t as a rough estimate",
+                    DecimalText.significant(hr, 3), DecimalText.exact(fit.hrMin()), DecimalText.exact(fit.hrMax()),
                     hr > fit.hrMax() ? "the fillet is sharper than the charts cover" : "the fillet is blunter than the charts cover");
         }
         if (kt < 1) {
@@ -75,9 +77,5 @@ public final class StressConcentration {
     static void positive(String field, double v) {
         if (!Double.isFinite(v)) throw InputProblem.ofField(field, "not a finite number");
         if (v <= 0) throw InputProblem.ofField(field, "must be greater than zero, got " + v);
-    }
-
-    private static String plain(double v) {
-        return v == Math.rint(v) ? String.valueOf((long) v) : String.valueOf(v);
     }
 }

@@ -2,6 +2,7 @@ package org.arcwright.render;
 
 import java.awt.image.BufferedImage;
 import java.nio.file.Path;
+import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
 import org.arcwright.callout.Callout;
@@ -68,9 +69,9 @@ public final class FrameRenderer {
      * What a reader must be told beyond the drawn callout in this style, e.g. that ISO has no
      * controlled radius and the CR is drawn as R (from {@link DrawingStyle#remarks}).
      */
-    public java.util.List<String> remarks(Callout c, DrawingStyle style, Units units) {
+    public List<String> remarks(Callout c, DrawingStyle style, Units units) {
         if (c instanceof Callout.SizeLimits s) return style.remarks(s.toRadiusCallout(units, 4));
-        return java.util.List.of();
+        return List.of();
     }
 
     /**

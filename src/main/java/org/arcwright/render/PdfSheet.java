@@ -7,6 +7,7 @@ import java.io.InputStream;
 import java.io.UncheckedIOException;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.pdmodel.PDDocumentInformation;
@@ -146,7 +147,7 @@ final class PdfSheet {
     private void subheading(String text) throws IOException {
         need(BODY * 3);
         space(3);
-        paragraph(text.toUpperCase(java.util.Locale.ROOT), BODY - 0.5f, 0);
+        paragraph(text.toUpperCase(Locale.ROOT), BODY - 0.5f, 0);
     }
 
     private void paragraph(String text, float size, float indent) throws IOException {

@@ -14,6 +14,7 @@ import javax.imageio.ImageWriter;
 import javax.imageio.metadata.IIOMetadata;
 import javax.imageio.metadata.IIOMetadataNode;
 import javax.imageio.stream.ImageOutputStream;
+import org.arcwright.io.InputProblem;
 
 /** A {@link CalloutDrawing} as a raster image at a chosen resolution, black on white. */
 public final class PngPainter {
@@ -35,7 +36,7 @@ public final class PngPainter {
     /** The drawing rendered at {@code dpi} in the palette's foreground on its background (the app's dark look). */
     public BufferedImage image(CalloutDrawing d, int dpi, Palette palette) {
         if (dpi < MIN_DPI || dpi > MAX_DPI) {
-            throw org.arcwright.io.InputProblem.ofField("dpi", "must be between " + MIN_DPI + " and " + MAX_DPI + ", got " + dpi);
+            throw InputProblem.ofField("dpi", "must be between " + MIN_DPI + " and " + MAX_DPI + ", got " + dpi);
         }
         double scale = pixelsPerMillimetre(dpi);
         int w = (int) Math.ceil(d.width() * scale);

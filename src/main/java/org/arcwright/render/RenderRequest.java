@@ -5,6 +5,7 @@ import com.fasterxml.jackson.annotation.JsonProperty;
 import java.nio.file.Path;
 import org.arcwright.callout.Callout;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.templates.CalloutText;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 
@@ -25,7 +26,7 @@ public record RenderRequest(Units units, DrawingStyle standard, Callout callout)
         this.units = units;
         this.standard = standard;
         this.callout = callout;
-        if (callout instanceof Callout.Profile p && standard != null) org.arcwright.templates.CalloutText.checkMarks(p, standard);
+        if (callout instanceof Callout.Profile p && standard != null) CalloutText.checkMarks(p, standard);
     }
 
     /** Reads a request file; errors name file, line, column and field. */

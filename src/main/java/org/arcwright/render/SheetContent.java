@@ -1,13 +1,17 @@
 package org.arcwright.render;
 
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.Set;
+import java.util.function.Function;
 import org.arcwright.callout.Callout;
 import org.arcwright.model.DesignCase;
+import org.arcwright.model.Loading;
 import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.templates.CalloutText;
@@ -137,7 +141,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
      * that nobody has chosen yet.
      */
     public static SheetContent of(PartWorksheet ws, NoteTemplates templates, String generatedBy,
-                                  java.util.function.Function<DesignCase, java.util.Optional<Recommendation>> suggest) {
+                                  Function<DesignCase, Optional<Recommendation>> suggest) {
         Objects.requireNonNull(ws, "worksheet");
         Objects.requireNonNull(templates, "templates");
         CalloutText text = new CalloutText(ws.standard(), ws.units());
@@ -166,7 +170,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
 
         List<SummaryRow> rows = new ArrayList<>();
         List<FeatureSection> sections = new ArrayList<>();
-        Map<String, List<String>> byCaution = new java.util.LinkedHashMap<>();
+        Map<String, List<String>> byCaution = new LinkedHashMap<>();
         for (RadiusFeature f : ws.features()) {
             DesignCase c = f.designCase();
             String heading = c.feature() == null ? f.id() : c.feature();
@@ -177,7 +181,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
                     r == null ? "undecided" : text.line(r.callout(), false).replace("\n", " / "), status,
                     SheetProblems.of(f, ws)));
             String caseLine = c.kind().key() + ", " + c.function().key() + ", "
-                    + (c.loading() == org.arcwright.model.Loading.NONE ? "no service load" : c.loading().key() + " loading")
+                    + (c.loading() == Loading.NONE ? "no service load" : c.loading().key() + " loading")
                     + ", "
                     + c.process().key() + ", nominal R" + text.value(c.nominalRadius()) + " " + ws.units().symbol()
                     + (c.datums().isEmpty() ? "" : ", datums " + String.join(", ", c.datums()))

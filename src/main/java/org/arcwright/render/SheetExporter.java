@@ -5,8 +5,12 @@ import java.util.LinkedHashMap;
 import java.util.Locale;
 import java.util.Map;
 import java.util.Objects;
+import java.util.Optional;
+import java.util.function.Function;
 import org.arcwright.io.AtomicFiles;
 import org.arcwright.io.InputProblem;
+import org.arcwright.model.DesignCase;
+import org.arcwright.rules.Recommendation;
 import org.arcwright.templates.NoteTemplates;
 import org.arcwright.worksheet.PartWorksheet;
 
@@ -71,10 +75,10 @@ public final class SheetExporter {
 
     /** A suggestion for an undecided feature's case, e.g. {@code c -> advisor.advise(c).first()}. */
     @FunctionalInterface
-    public interface Suggestions extends java.util.function.Function<org.arcwright.model.DesignCase,
-            java.util.Optional<org.arcwright.rules.Recommendation>> {
+    public interface Suggestions extends Function<DesignCase,
+            Optional<Recommendation>> {
         /** Suggests nothing. */
-        Suggestions NONE = c -> java.util.Optional.empty();
+        Suggestions NONE = c -> Optional.empty();
     }
 
     /**

@@ -1,6 +1,5 @@
 package org.arcwright.render;
 
-import java.math.BigDecimal;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -8,6 +7,7 @@ import java.util.Map;
 import java.util.Optional;
 import org.arcwright.callout.Callout;
 import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.io.DecimalText;
 import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.DrawingStyle;
@@ -45,17 +45,17 @@ final class SheetProblems {
         Double ktMin = number(n.get("ktAtMin"));
         Double ktTarget = number(n.get("targetKt"));
         if (ktMin != null && ktTarget != null && ktMin > ktTarget) {
-            out.add("stress target not met: Kt " + plain(ktMin) + " at the smallest radius against the target " + plain(ktTarget));
+            out.add("stress target not met: Kt " + DecimalText.exact(ktMin) + " at the smallest radius against the target " + DecimalText.exact(ktTarget));
         }
         Double kfMin = number(n.get("kfAtMin"));
         Double kfTarget = number(n.get("targetKf"));
         if (kfMin != null && kfTarget != null && kfMin > kfTarget) {
-            out.add("stress target not met: Kf " + plain(kfMin) + " at the smallest radius against the target " + plain(kfTarget));
+            out.add("stress target not met: Kf " + DecimalText.exact(kfMin) + " at the smallest radius against the target " + DecimalText.exact(kfTarget));
         }
         if (Boolean.FALSE.equals(n.get("seats"))) {
             Double margin = number(n.get("seatingMargin"));
             out.add("seating not met: the largest fillet fouls the mating corner"
-                    + (margin == null ? "" : " by " + plain(-margin) + " " + c.units().symbol()));
+                    + (margin == null ? "" : " by " + DecimalText.exact(-margin) + " " + c.units().symbol()));
         }
         if (r.demoted()) out.add("the chosen control failed one of its checks (demoted)");
         InspectionRecord i = f.inspection();
@@ -92,9 +92,9 @@ final class SheetProblems {
         if (chosen instanceof Callout.ControlledRadius r) {
             return judged.equals(new InspectionCallout.RadiusLimits(RadiusKind.CR, r.min(), r.max()).describe());
         }
-        if (chosen instanceof Callout.Profile p) return judged.startsWith("profile " + plain(p.zone()));
+        if (chosen instanceof Callout.Profile p) return judged.startsWith("profile " + DecimalText.exact(p.zone()));
         if (chosen instanceof Callout.CompositeProfile cp) {
-            return judged.startsWith("composite profile") && judged.contains(plain(cp.tiers().get(0).zone()));
+            return judged.startsWith("composite profile") && judged.contains(DecimalText.exact(cp.tiers().get(0).zone()));
         }
         return false;
     }
@@ -105,9 +105,5 @@ final class SheetProblems {
 
     private static Double number(Object o) {
         return o instanceof Number v ? v.doubleValue() : null;
-    }
-
-    private static String plain(double v) {
-        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 }

@@ -1,8 +1,7 @@
 package org.arcwright.render;
 
-import java.math.BigDecimal;
-import java.math.RoundingMode;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.jfree.svg.SVGGraphics2D;
 import org.jfree.svg.SVGUnits;
 import org.jfree.svg.ViewBox;
@@ -34,9 +33,6 @@ public final class SvgPainter {
     }
 
     private static String number(double v) {
-        if (!Double.isFinite(v)) return "0";
-        BigDecimal b = BigDecimal.valueOf(v).setScale(3, RoundingMode.HALF_EVEN).stripTrailingZeros();
-        if (b.signum() == 0) return "0";
-        return b.scale() < 0 ? b.setScale(0).toPlainString() : b.toPlainString();
+        return Double.isFinite(v) ? DecimalText.places(v, 3) : "0";
     }
 }

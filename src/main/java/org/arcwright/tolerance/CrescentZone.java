@@ -1,5 +1,9 @@
 package org.arcwright.tolerance;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.util.OptionalDouble;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -107,10 +111,9 @@ public record CrescentZone(double includedAngleDeg, double factor, double width,
 
     /** An angle as typed: every digit it has, no exponent, never rounded up to 180. */
     public static String degrees(double angleDeg) {
-        if (!Double.isFinite(angleDeg)) return Double.toString(angleDeg);
-        String s = new java.math.BigDecimal(Double.toString(angleDeg)).stripTrailingZeros().toPlainString();
-        return s.length() > 24 ? new java.math.BigDecimal(Double.toString(angleDeg))
-                .round(new java.math.MathContext(10)).toString() : s;
+        String s = DecimalText.exact(angleDeg);
+        return s.length() > 24 ? new BigDecimal(Double.toString(angleDeg))
+                .round(new MathContext(10)).toString() : s;
     }
 
     /** {@code k = 1/sin(θ/2) - 1}: bisector distance from the vertex to an arc, per unit radius. */
@@ -162,8 +165,8 @@ public record CrescentZone(double includedAngleDeg, double factor, double width,
      * between zero and the zone's value (ASME Y14.5-2018, from memory): the true profile must then be
      * drawn at a limit arc instead.
      */
-    public java.util.OptionalDouble outwardPortion(boolean fillet) {
-        if (!holdsNominal()) return java.util.OptionalDouble.empty();
-        return java.util.OptionalDouble.of(fillet ? maxArcOffset : -minArcOffset);
+    public OptionalDouble outwardPortion(boolean fillet) {
+        if (!holdsNominal()) return OptionalDouble.empty();
+        return OptionalDouble.of(fillet ? maxArcOffset : -minArcOffset);
     }
 }

@@ -1,8 +1,13 @@
 package org.arcwright.tolerance;
 
+import com.fasterxml.jackson.annotation.JsonCreator;
+import com.fasterxml.jackson.annotation.JsonValue;
 import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Locale;
+import org.arcwright.io.InputProblem;
 
 /**
  * How a radius callout is written on the drawing, following the drawing standard in force.
@@ -27,20 +32,20 @@ public enum DrawingStyle {
     ISO;
 
     /** Reads {@code asme} or {@code iso} (any case). */
-    @com.fasterxml.jackson.annotation.JsonCreator
+    @JsonCreator
     public static DrawingStyle parse(String text) {
-        if (text == null) throw org.arcwright.io.InputProblem.ofField("standard", "missing; use asme or iso");
-        return switch (text.trim().toLowerCase(java.util.Locale.ROOT)) {
+        if (text == null) throw InputProblem.ofField("standard", "missing; use asme or iso");
+        return switch (text.trim().toLowerCase(Locale.ROOT)) {
             case "asme", "asme-y14.5", "y14.5" -> ASME;
             case "iso" -> ISO;
-            default -> throw org.arcwright.io.InputProblem.ofField("standard",
+            default -> throw InputProblem.ofField("standard",
                     "unknown standard '" + text + "'; use asme or iso");
         };
     }
 
     /** The name used in files: {@code asme} or {@code iso}. */
-    @com.fasterxml.jackson.annotation.JsonValue
-    public String key() { return name().toLowerCase(java.util.Locale.ROOT); }
+    @JsonValue
+    public String key() { return name().toLowerCase(Locale.ROOT); }
 
     /** The callout text as it would be drawn. */
     public String format(RadiusCallout c) {
@@ -73,7 +78,7 @@ public enum DrawingStyle {
         }
         if (form instanceof ToleranceForm.SingleLimit f) {
             String word = f.side() == LimitSide.MAX ? "MAX" : "MIN";
-            if (this == ISO) word = word.toLowerCase(java.util.Locale.ROOT);
+            if (this == ISO) word = word.toLowerCase(Locale.ROOT);
             return (asmeInch ? value(f.value(), f.value().scale(), true) : nominal(f.value(), inch)) + " " + word;
         }
         ToleranceForm.Untoleranced f = (ToleranceForm.Untoleranced) form;
@@ -94,7 +99,7 @@ public enum DrawingStyle {
     public String formatValue(double value, Units units, int maxPlaces) {
         if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + value);
         if (maxPlaces < 0 || maxPlaces > 6) throw new IllegalArgumentException("places must be 0 to 6, got " + maxPlaces);
-        BigDecimal v = BigDecimal.valueOf(value).setScale(maxPlaces, java.math.RoundingMode.HALF_EVEN).stripTrailingZeros();
+        BigDecimal v = BigDecimal.valueOf(value).setScale(maxPlaces, RoundingMode.HALF_EVEN).stripTrailingZeros();
         if (v.signum() == 0) v = BigDecimal.ZERO;
         if (v.scale() < 0) v = v.setScale(0);
         boolean asmeInch = this == ASME && units == Units.INCH;
@@ -136,7 +141,7 @@ public enum DrawingStyle {
      */
     public static String formatFigure(double value, int places) {
         if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + value);
-        return BigDecimal.valueOf(value).setScale(places, java.math.RoundingMode.HALF_EVEN).toPlainString();
+        return BigDecimal.valueOf(value).setScale(places, RoundingMode.HALF_EVEN).toPlainString();
     }
 
     /** The text of a radius with limits as this style draws it, e.g. {@code R1.8-2.2} or {@code CR 1.8-2.2}. */
@@ -194,7 +199,7 @@ public enum DrawingStyle {
     }
 
     private String value(BigDecimal v, int places, boolean inch) {
-        String s = v.setScale(places, java.math.RoundingMode.UNNECESSARY).toPlainString();
+        String s = v.setScale(places, RoundingMode.UNNECESSARY).toPlainString();
         return leadingZero(s, inch);
     }
 

@@ -1,5 +1,7 @@
 package org.arcwright.tolerance;
 
+import org.arcwright.io.DecimalText;
+
 /**
  * One cell of a general-tolerance table: the ± value that the title block grants a size.
  *
@@ -17,7 +19,7 @@ public record GeneralTolerance(String tableId, String source, String toleranceCl
     /** The deviation as a drawing would state it: mm as a number, angles in degrees and minutes. */
     public String formatted() {
         if (quantity != ToleranceQuantity.ANGULAR) {
-            return "±" + java.math.BigDecimal.valueOf(plusMinus).stripTrailingZeros().toPlainString();
+            return "±" + DecimalText.exact(plusMinus);
         }
         int totalMinutes = (int) Math.round(plusMinus * 60);
         int deg = totalMinutes / 60;

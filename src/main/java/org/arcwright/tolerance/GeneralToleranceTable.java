@@ -3,6 +3,7 @@ package org.arcwright.tolerance;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
@@ -58,7 +59,7 @@ public record GeneralToleranceTable(String id, String title, String source, Tole
         this.quantity = quantity;
         this.units = units == null ? "mm" : units;
         this.ranges = List.copyOf(ranges);
-        this.classes = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(classes));
+        this.classes = Collections.unmodifiableMap(new LinkedHashMap<>(classes));
         this.classNames = classNames == null ? Map.of() : Map.copyOf(classNames);
         this.note = note;
     }

@@ -1,7 +1,9 @@
 package org.arcwright.tolerance;
 
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -24,7 +26,7 @@ public final class GeneralToleranceTables {
     public GeneralToleranceTables(List<GeneralToleranceTable> tables) {
         Map<String, GeneralToleranceTable> m = new LinkedHashMap<>();
         for (GeneralToleranceTable t : tables) m.put(t.id(), t);
-        this.byId = java.util.Collections.unmodifiableMap(m);
+        this.byId = Collections.unmodifiableMap(m);
     }
 
     /**
@@ -39,7 +41,7 @@ public final class GeneralToleranceTables {
             Path file = tf.file();
             var tree = json.readPackObject(file, tf.packFolder());
             if (!"general-tolerance".equals(tree.path("kind").asText())) continue;
-            var obj = ((com.fasterxml.jackson.databind.node.ObjectNode) tree.deepCopy());
+            var obj = ((ObjectNode) tree.deepCopy());
             obj.remove("kind");
             tables.add(json.convert(obj, file.toString(), GeneralToleranceTable.class));
         }

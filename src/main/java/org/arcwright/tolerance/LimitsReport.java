@@ -1,5 +1,7 @@
 package org.arcwright.tolerance;
 
+import java.math.BigDecimal;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
 
@@ -47,7 +49,7 @@ public record LimitsReport(RadiusCallout callout, double includedAngleDeg, Doubl
         }
         Double profileZone = crescent == null || nominal == null ? null : crescent.equalBilateralProfile();
         Double shortcut = crescent == null || nominal == null ? null : crescent.shortcutProfile();
-        List<String> remarks = new java.util.ArrayList<>();
+        List<String> remarks = new ArrayList<>();
         remarks.add(callout.kind() == RadiusKind.CR
                 ? "A controlled radius (CR) bounds size and requires a fair curve: no flats, no reversals, every local radius within the limits."
                 : "A ± or limit radius bounds size only: flats, dips and a step at the tangent point can still pass. Use CR or a profile tolerance where form or location matters.");
@@ -61,7 +63,7 @@ public record LimitsReport(RadiusCallout callout, double includedAngleDeg, Doubl
             remarks.add("MIN only: there is no upper limit, so no crescent width can be given.");
         }
         if (callout.form() instanceof ToleranceForm.Deviations d) {
-            java.math.BigDecimal larger = d.plus().abs().max(d.minus().abs());
+            BigDecimal larger = d.plus().abs().max(d.minus().abs());
             if (larger.compareTo(d.nominalValue()) > 0) {
                 remarks.add("Check the callout: a deviation of " + larger.toPlainString() + " is larger than the radius "
                         + d.nominalValue().toPlainString() + " itself, which is most often a typo.");

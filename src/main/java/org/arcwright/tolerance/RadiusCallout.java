@@ -1,6 +1,7 @@
 package org.arcwright.tolerance;
 
 import java.math.BigDecimal;
+import java.math.RoundingMode;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
@@ -82,7 +83,7 @@ public record RadiusCallout(RadiusKind kind, Units units, ToleranceForm form) {
 
     static BigDecimal decimal(double value, int places) {
         if (!Double.isFinite(value)) throw InputProblem.ofField("radius", "not a finite number: " + value);
-        return BigDecimal.valueOf(value).setScale(Math.max(0, places), java.math.RoundingMode.HALF_EVEN);
+        return BigDecimal.valueOf(value).setScale(Math.max(0, places), RoundingMode.HALF_EVEN);
     }
 
     private static OptionalDouble toDouble(Optional<BigDecimal> v) {

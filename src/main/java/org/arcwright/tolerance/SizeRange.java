@@ -3,6 +3,7 @@ package org.arcwright.tolerance;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
+import org.arcwright.io.DecimalText;
 
 /**
  * A nominal-size range as tolerance tables write it: "over 3 up to 6" holds 6 but not 3; the first
@@ -36,14 +37,10 @@ public record SizeRange(Double from, Double over, Double upTo) {
 
     /** The range in the table's words, e.g. "over 3 up to 6". */
     public String describe() {
-        String lo = from != null ? fmt(from) : over != null ? "over " + fmt(over) : "";
-        String hi = upTo != null ? "up to " + fmt(upTo) : "";
+        String lo = from != null ? DecimalText.exact(from) : over != null ? "over " + DecimalText.exact(over) : "";
+        String hi = upTo != null ? "up to " + DecimalText.exact(upTo) : "";
         if (lo.isEmpty()) return hi;
         if (hi.isEmpty()) return lo;
         return lo + " " + hi;
-    }
-
-    private static String fmt(double v) {
-        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 }

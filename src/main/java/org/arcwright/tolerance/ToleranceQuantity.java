@@ -1,5 +1,8 @@
 package org.arcwright.tolerance;
 
+import com.fasterxml.jackson.annotation.JsonCreator;
+import com.fasterxml.jackson.annotation.JsonValue;
+
 /**
  * What a general-tolerance table applies to. ISO 2768-1 has one table for each: linear sizes,
  * broken edges (external radii and chamfer heights), and angles by the length of the shorter side.
@@ -19,7 +22,7 @@ public enum ToleranceQuantity {
     /** The name used in table files. */
     public String key() { return key; }
 
-    @com.fasterxml.jackson.annotation.JsonCreator
+    @JsonCreator
     public static ToleranceQuantity fromKey(String key) {
         for (ToleranceQuantity q : values()) {
             if (q.key.equals(key)) return q;
@@ -27,6 +30,6 @@ public enum ToleranceQuantity {
         throw new IllegalArgumentException("unknown quantity '" + key + "'; use linear, radius-chamfer or angular");
     }
 
-    @com.fasterxml.jackson.annotation.JsonValue
+    @JsonValue
     public String toJson() { return key; }
 }

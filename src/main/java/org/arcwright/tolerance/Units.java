@@ -1,5 +1,7 @@
 package org.arcwright.tolerance;
 
+import com.fasterxml.jackson.annotation.JsonCreator;
+import com.fasterxml.jackson.annotation.JsonValue;
 import java.util.Locale;
 import org.arcwright.io.InputProblem;
 
@@ -20,7 +22,7 @@ public enum Units {
     }
 
     /** The short symbol used in files and on the command line: {@code mm} or {@code in}. */
-    @com.fasterxml.jackson.annotation.JsonValue
+    @JsonValue
     public String symbol() { return symbol; }
 
     /** Default resolution for geometric tests where a zone narrows to nothing, in this unit. */
@@ -30,7 +32,7 @@ public enum Units {
     public double millimetres() { return this == MM ? 1.0 : 25.4; }
 
     /** Reads {@code mm}, {@code in} or {@code inch} (any case). */
-    @com.fasterxml.jackson.annotation.JsonCreator
+    @JsonCreator
     public static Units parse(String text) {
         if (text == null) throw InputProblem.ofField("units", "missing; use mm or in");
         return switch (text.trim().toLowerCase(Locale.ROOT)) {

@@ -3,6 +3,8 @@ package org.arcwright.worksheet;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
+import java.util.Collections;
+import java.util.LinkedHashMap;
 import java.util.Map;
 
 /**
@@ -27,7 +29,7 @@ public record InspectionRecord(String verdict, String source, String measuredOn,
         this.verdict = verdict;
         this.source = source;
         this.measuredOn = measuredOn;
-        this.figures = figures == null ? Map.of() : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(figures));
+        this.figures = figures == null ? Map.of() : Collections.unmodifiableMap(new LinkedHashMap<>(figures));
     }
 
     public boolean passed() { return "pass".equals(verdict); }

@@ -1,6 +1,7 @@
 package org.arcwright.worksheet;
 
 import java.nio.file.Path;
+import java.util.Objects;
 import org.arcwright.io.JsonFiles;
 
 /**
@@ -14,7 +15,7 @@ public final class WorksheetFiles {
     private final JsonFiles json;
 
     public WorksheetFiles(JsonFiles json) {
-        this.json = java.util.Objects.requireNonNull(json, "json");
+        this.json = Objects.requireNonNull(json, "json");
     }
 
     public PartWorksheet read(Path file) {

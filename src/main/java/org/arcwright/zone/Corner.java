@@ -1,6 +1,7 @@
 package org.arcwright.zone;
 
 import java.util.List;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.model.BlendKind;
 
@@ -37,7 +38,7 @@ public record Corner(Point2 vertex, Point2 legA, Point2 legB, BlendKind kind) {
         double deg = Math.toDegrees(Math.acos(Math.max(-1, Math.min(1, legA.dot(legB)))));
         if (deg < MIN_ANGLE_DEG || deg > MAX_ANGLE_DEG) {
             throw InputProblem.ofField("legB", "the legs are parallel or nearly so (included angle "
-                    + String.format(java.util.Locale.ROOT, "%.3f", deg) + "°); need " + MIN_ANGLE_DEG + "° to "
+                    + DecimalText.places(deg, 3) + "°); need " + MIN_ANGLE_DEG + "° to "
                     + MAX_ANGLE_DEG + "°");
         }
     }

@@ -1,5 +1,7 @@
 package org.arcwright.zone;
 
+import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -32,7 +34,7 @@ public final class RadiusZone {
     private final double vx, vy, bisX, bisY, s1, s2, cot2;
 
     public RadiusZone(Corner corner, double min, double max, double resolution) {
-        java.util.Objects.requireNonNull(corner, "corner");
+        Objects.requireNonNull(corner, "corner");
         if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + min);
         if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + max);
         if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + max + " < " + min + ")");
@@ -120,7 +122,7 @@ public final class RadiusZone {
         }
         if (inside == 0) {
             throw InputProblem.ofField("points", "no point lies within the radius zone's extent (between the tangent points of the "
-                    + max + " arc, " + fmt(reach) + " from the vertex along each leg)");
+                    + max + " arc, " + DecimalText.significant(reach, 4) + " from the vertex along each leg)");
         }
         boolean pass = outside == 0 && smallest >= min - resolution && largest <= max + resolution;
         return new RadiusEnvelope(smallest, largest, inside, onLegs, outside, n - inside, pass, worst, worstExcess,
@@ -251,6 +253,4 @@ public final class RadiusZone {
         double disc = Math.max(0, s2 * qu * qu - cot2 * q2);
         return (s1 * qu + Math.sqrt(disc)) / cot2;
     }
-
-    private static String fmt(double v) { return String.format(java.util.Locale.ROOT, "%.6g", v); }
 }

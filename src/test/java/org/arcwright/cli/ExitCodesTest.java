@@ -2,12 +2,15 @@ package org.arcwright.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.io.IOException;
 import java.io.PrintWriter;
 import java.io.StringWriter;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.concurrent.Callable;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.DynamicTest;
 import org.junit.jupiter.api.Test;
@@ -30,8 +33,8 @@ class ExitCodesTest {
     private static Path write(String name, String text) {
         try {
             return Files.writeString(dir.resolve(name), text);
-        } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException(e);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
         }
     }
 
@@ -95,7 +98,7 @@ class ExitCodesTest {
 
     /** A command that fails by a fault of ours, as a crash would. */
     @CommandLine.Command(name = "crash")
-    static final class Crash implements java.util.concurrent.Callable<Integer> {
+    static final class Crash implements Callable<Integer> {
         @Override
         public Integer call() {
             throw new IllegalStateException("a fault in the code");

@@ -13,6 +13,7 @@ import java.math.BigDecimal;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Set;
 import net.jqwik.api.Arbitraries;
@@ -24,6 +25,7 @@ import net.jqwik.api.Provide;
 import net.jqwik.api.Tag;
 import net.jqwik.api.lifecycle.AfterContainer;
 import net.jqwik.api.lifecycle.BeforeContainer;
+import org.assertj.core.api.Assertions;
 
 /**
  * The fuzz suite: mutated files of every format and random callout text, run through the command
@@ -64,7 +66,7 @@ class FuzzedInputsTest {
     @AfterContainer
     static void removeFolder() throws IOException {
         try (var s = Files.walk(dir)) {
-            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) Files.deleteIfExists(p);
+            for (Path p : s.sorted(Comparator.reverseOrder()).toList()) Files.deleteIfExists(p);
         }
     }
 
@@ -140,9 +142,9 @@ class FuzzedInputsTest {
         assertThat(j.get("units").asText()).as(callout).isEqualTo(inch ? "in" : "mm");
         double tol = 1e-9 * Math.max(1, nominal.doubleValue());
         assertThat(j.get("min").asDouble()).as(callout).isCloseTo(nominal.subtract(minus).doubleValue(),
-                org.assertj.core.api.Assertions.within(tol));
+                Assertions.within(tol));
         assertThat(j.get("max").asDouble()).as(callout).isCloseTo(nominal.add(plus).doubleValue(),
-                org.assertj.core.api.Assertions.within(tol));
+                Assertions.within(tol));
     }
 
     @Provide

@@ -2,8 +2,11 @@ package org.arcwright.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.nio.file.FileSystems;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.PosixFilePermissions;
+import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -209,8 +212,8 @@ class HostileInputTest {
         badInput(CliRun.of("render", callout.toString(), "--out", dir.resolve("nowhere").resolve("f.svg").toString()),
                 "does not exist");
         assertThat(dir.resolve("nowhere")).doesNotExist();
-        if (java.nio.file.FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
-            Files.setPosixFilePermissions(real, java.nio.file.attribute.PosixFilePermissions.fromString("r--r--r--"));
+        if (FileSystems.getDefault().supportedFileAttributeViews().contains("posix")) {
+            Files.setPosixFilePermissions(real, PosixFilePermissions.fromString("r--r--r--"));
             badInput(CliRun.of("render", callout.toString(), "--out", real.toString()), "read-only");
             assertThat(Files.readString(real)).isEqualTo("keep");
         }
@@ -245,7 +248,7 @@ class HostileInputTest {
 
     @Test
     void aDeviceGivenAsInputIsRefusedAtOnce() {
-        org.junit.jupiter.api.Assumptions.assumeTrue(Files.exists(Path.of("/dev/zero")));
+        Assumptions.assumeTrue(Files.exists(Path.of("/dev/zero")));
         badInput(CliRun.of("inspect", "/dev/zero"), "/dev/zero", "not a regular file");
         badInput(CliRun.of("advise", "/dev/zero", "--no-notes", "--no-settings"), "not a regular file");
         badInput(CliRun.of("advise", "--batch", "/dev/zero", "--no-notes", "--no-settings"), "not a regular file");

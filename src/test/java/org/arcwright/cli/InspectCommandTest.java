@@ -9,6 +9,9 @@ import java.io.PrintWriter;
 import java.io.StringWriter;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
+import org.assertj.core.api.Assertions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -65,7 +68,7 @@ class InspectCommandTest {
         // about ± 0.2, which straddles the limits (ISO 14253-1 default rule: neither proven)
         String pts = arcPoints(2.05);
         StringBuilder noisy = new StringBuilder();
-        java.util.regex.Matcher m = java.util.regex.Pattern.compile("\\[([-0-9.E]+), ([-0-9.E]+)\\]").matcher(pts);
+        Matcher m = Pattern.compile("\\[([-0-9.E]+), ([-0-9.E]+)\\]").matcher(pts);
         int i = 0;
         while (m.find()) {
             double x = Double.parseDouble(m.group(1)), y = Double.parseDouble(m.group(2)) + 0.004 * Math.sin(i++ * 2.1);
@@ -141,7 +144,7 @@ class InspectCommandTest {
         assertThat(j.at("/registration/rotation").asDouble()).isZero();
         assertThat(j.get("maxOutward").isNumber()).isTrue();
         assertThat(j.get("maxInward").isNumber()).isTrue();
-        assertThat(j.get("isoOffset").asDouble()).isCloseTo(-0.05, org.assertj.core.api.Assertions.within(1e-12));
+        assertThat(j.get("isoOffset").asDouble()).isCloseTo(-0.05, Assertions.within(1e-12));
     }
 
     @Test

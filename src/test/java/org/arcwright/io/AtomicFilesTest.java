@@ -4,8 +4,15 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
+import java.nio.file.FileSystems;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.nio.file.attribute.FileTime;
+import java.nio.file.attribute.PosixFilePermissions;
+import java.util.LinkedHashMap;
+import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -24,17 +31,17 @@ class AtomicFilesTest {
 
     @Test
     void newFilesAreReadableByOthersAndExistingFilesKeepTheirPermissions(@TempDir Path dir) throws Exception {
-        org.junit.jupiter.api.Assumptions.assumeTrue(
-                java.nio.file.FileSystems.getDefault().supportedFileAttributeViews().contains("posix"));
+        Assumptions.assumeTrue(
+                FileSystems.getDefault().supportedFileAttributeViews().contains("posix"));
         Path fresh = dir.resolve("sheet.pdf");
         AtomicFiles.writeString(fresh, "x");
-        assertThat(java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(fresh)))
+        assertThat(PosixFilePermissions.toString(Files.getPosixFilePermissions(fresh)))
                 .isEqualTo("rw-r--r--");
         Path kept = dir.resolve("part.arcpart");
         Files.writeString(kept, "old");
-        Files.setPosixFilePermissions(kept, java.nio.file.attribute.PosixFilePermissions.fromString("rw-rw----"));
+        Files.setPosixFilePermissions(kept, PosixFilePermissions.fromString("rw-rw----"));
         AtomicFiles.writeString(kept, "new");
-        assertThat(java.nio.file.attribute.PosixFilePermissions.toString(Files.getPosixFilePermissions(kept)))
+        assertThat(PosixFilePermissions.toString(Files.getPosixFilePermissions(kept)))
                 .isEqualTo("rw-rw----");
     }
 
@@ -69,8 +76,8 @@ class AtomicFilesTest {
         Path rule = dir.resolve("rules").resolve("override-x.json");
         Path manifest = dir.resolve("pack.json");
         Files.writeString(manifest, "{\"name\": \"Personal\"}");
-        java.util.LinkedHashMap<Path, AtomicFiles.Writer> writes = new java.util.LinkedHashMap<>();
-        writes.put(rule, out -> out.write("{\"rules\": []}".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
+        LinkedHashMap<Path, AtomicFiles.Writer> writes = new LinkedHashMap<>();
+        writes.put(rule, out -> out.write("{\"rules\": []}".getBytes(StandardCharsets.UTF_8)));
         writes.put(manifest, out -> {
             throw new IOException("disk full");
         });
@@ -88,10 +95,10 @@ class AtomicFilesTest {
         Files.writeString(first, "old a");
         Path second = Files.createDirectories(dir.resolve("b.json")); // a folder: the rename over it fails
         Files.writeString(second.resolve("keep"), "x");
-        java.util.LinkedHashMap<Path, AtomicFiles.Writer> writes = new java.util.LinkedHashMap<>();
-        writes.put(first, out -> out.write("new a".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
-        writes.put(second, out -> out.write("new b".getBytes(java.nio.charset.StandardCharsets.UTF_8)));
-        assertThatThrownBy(() -> AtomicFiles.writeAll(writes)).isInstanceOf(java.io.UncheckedIOException.class);
+        LinkedHashMap<Path, AtomicFiles.Writer> writes = new LinkedHashMap<>();
+        writes.put(first, out -> out.write("new a".getBytes(StandardCharsets.UTF_8)));
+        writes.put(second, out -> out.write("new b".getBytes(StandardCharsets.UTF_8)));
+        assertThatThrownBy(() -> AtomicFiles.writeAll(writes)).isInstanceOf(UncheckedIOException.class);
         assertThat(Files.readString(first)).isEqualTo("old a");
     }
 
@@ -101,7 +108,7 @@ class AtomicFilesTest {
         Path stale = Files.createFile(dir.resolve(".part.arcpart.123456.tmp"));
         Path fresh = Files.createFile(dir.resolve(".part.arcpart.777.tmp"));
         Path other = Files.createFile(dir.resolve(".other.arcpart.1.tmp"));
-        java.nio.file.attribute.FileTime old = java.nio.file.attribute.FileTime.fromMillis(
+        FileTime old = FileTime.fromMillis(
                 System.currentTimeMillis() - AtomicFiles.STALE_AFTER.toMillis() - 60_000);
         Files.setLastModifiedTime(stale, old);
         Files.setLastModifiedTime(other, old);

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
 import java.io.BufferedReader;
+import java.io.IOException;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
@@ -31,7 +32,7 @@ class InputFilesTest {
         Process p;
         try {
             p = new ProcessBuilder("mkfifo", fifo.toString()).start();
-        } catch (java.io.IOException e) {
+        } catch (IOException e) {
             assumeTrue(false, "needs mkfifo");
             return;
         }

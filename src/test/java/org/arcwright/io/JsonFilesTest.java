@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import com.fasterxml.jackson.annotation.JsonProperty;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -43,7 +44,7 @@ class JsonFilesTest {
     @Test
     void aBomBeforeJsonIsAccepted(@TempDir Path dir) throws Exception {
         Path f = dir.resolve("case.json");
-        Files.write(f, ("\uFEFF{\"units\": \"mm\"}").getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        Files.write(f, ("\uFEFF{\"units\": \"mm\"}").getBytes(StandardCharsets.UTF_8));
         assertThat(json.read(f, Sample.class).units()).isEqualTo("mm");
     }
 

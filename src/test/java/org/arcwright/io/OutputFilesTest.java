@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThatCode;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.junit.jupiter.api.Assumptions.assumeTrue;
 
+import java.nio.file.FileSystems;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.PosixFilePermissions;
@@ -37,7 +38,7 @@ class OutputFilesTest {
 
     @Test
     void aReadOnlyFileIsRefusedEvenForRoot() throws Exception {
-        assumeTrue(java.nio.file.FileSystems.getDefault().supportedFileAttributeViews().contains("posix"));
+        assumeTrue(FileSystems.getDefault().supportedFileAttributeViews().contains("posix"));
         Path f = Files.writeString(dir.resolve("frame.svg"), "x");
         Files.setPosixFilePermissions(f, PosixFilePermissions.fromString("r--r--r--"));
         assertThatThrownBy(() -> OutputFiles.requireWritable(f, "--out")).hasMessageContaining("read-only");

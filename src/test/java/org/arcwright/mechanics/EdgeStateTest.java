@@ -69,22 +69,4 @@ class EdgeStateTest {
                 .hasMessageContaining("not a number");
         assertThatThrownBy(() -> EdgeState.parse(EdgeType.EXTERNAL, "±0.1 ±0.3")).isInstanceOf(InputProblem.class);
     }
-
-    /** The text an edge state writes reads back as the same state. */
-    @net.jqwik.api.Property(tries = 200, seed = "20261201")
-    void isoTextReadsBackAsTheSameState(@net.jqwik.api.ForAll EdgeType type, @net.jqwik.api.ForAll Sense sense,
-                                        @net.jqwik.api.ForAll @net.jqwik.api.constraints.IntRange(min = 1, max = 2000) int most,
-                                        @net.jqwik.api.ForAll @net.jqwik.api.constraints.IntRange(min = 0, max = 1999) int least,
-                                        @net.jqwik.api.ForAll boolean twoSizes) {
-        EdgeState e;
-        if (twoSizes && sense != Sense.EITHER && least < most) {
-            e = new EdgeState(type, sense, java.math.BigDecimal.valueOf(most, 3), java.math.BigDecimal.valueOf(least, 3));
-        } else {
-            e = new EdgeState(type, sense, java.math.BigDecimal.valueOf(most, 3), null);
-        }
-        EdgeState back = EdgeState.parse(type, e.isoText());
-        assertThat(back.isoText()).isEqualTo(e.isoText());
-        assertThat(back.sense()).isEqualTo(e.sense());
-        assertThat(back.limit()).isEqualByComparingTo(e.limit());
-    }
 }

@@ -4,9 +4,6 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
-import net.jqwik.api.ForAll;
-import net.jqwik.api.Property;
-import net.jqwik.api.constraints.DoubleRange;
 import org.arcwright.io.InputProblem;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
@@ -51,36 +48,19 @@ class StressConcentrationTest {
         assertThat(e.message()).contains("extrapolated").contains("0.25..4");
     }
 
+    /** A very sharp fillet's h/r is written as a number a reader can type back (no 2.00e+03): common practice. */
+    @Test
+    void aVerySharpFilletsRatioIsWrittenWithoutAnExponent() {
+        KtEstimate e = sc.kt(ShoulderShape.STEPPED_SHAFT, LoadCase.BENDING, 30, 10, 0.005);
+        assertThat(e.hOverR()).isCloseTo(2000, within(1e-9));
+        assertThat(e.message()).contains("h/r = 2000 lies outside").doesNotContain("e+");
+    }
+
     /** Shigley 9th ed. Example 6-6: D = 38, d = 32, r = 3 mm in bending, K_t = 1.65 read from Fig. A-15-9. */
     @Test
     void agreesWithShigleysChartReadingForExampleSixSix() {
         KtEstimate e = sc.kt(ShoulderShape.STEPPED_SHAFT, LoadCase.BENDING, 38, 32, 3);
         assertThat(e.kt()).isCloseTo(1.65, within(0.05));
-    }
-
-    @Property(tries = 300, seed = "20261201")
-    void ktFallsAsTheRadiusGrows(@ForAll("shapesAndLoads") PetersonFit fit,
-                                 @ForAll @DoubleRange(min = 1.02, max = 2.0) double dOverD,
-                                 @ForAll @DoubleRange(min = 0.0, max = 1.0) double u,
-                                 @ForAll @DoubleRange(min = 0.0, max = 1.0) double v) {
-        double d = 10;
-        double bigD = d * dOverD;
-        double h = (bigD - d) / 2;
-        double lo = Math.max(h / fit.hrMax(), h / 20);
-        double hi = h;
-        double r1 = lo + (hi - lo) * Math.min(u, v);
-        double r2 = lo + (hi - lo) * Math.max(u, v);
-        if (r1 <= 0 || r2 <= r1) return;
-        double k1 = sc.kt(fit.shape(), fit.load(), bigD, d, r1).kt();
-        double k2 = sc.kt(fit.shape(), fit.load(), bigD, d, r2).kt();
-        // the two branches may differ by up to 0.01 where they meet (see PetersonFitsTest)
-        assertThat(k2).isLessThanOrEqualTo(k1 + 0.01);
-        assertThat(k2).isGreaterThanOrEqualTo(1.0);
-    }
-
-    @net.jqwik.api.Provide
-    net.jqwik.api.Arbitrary<PetersonFit> shapesAndLoads() {
-        return net.jqwik.api.Arbitraries.of(PetersonFits.published().all());
     }
 
     @Test

@@ -9,6 +9,7 @@ import java.util.List;
 import java.util.Set;
 import org.arcwright.pack.PackStack;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /** The notes that ship in the built-in pack are well formed and say what they lean on. */
 class BuiltInNotesTest {
@@ -36,7 +37,7 @@ class BuiltInNotesTest {
     }
 
     @Test
-    void theBuiltInIndexBuildsWithoutProblems(@org.junit.jupiter.api.io.TempDir Path tmp) {
+    void theBuiltInIndexBuildsWithoutProblems(@TempDir Path tmp) {
         try (NotesStore store = NotesStore.open(PackStack.builtIn(), tmp)) {
             assertThat(store.problems()).isEmpty();
             assertThat(store.size()).isEqualTo(files().size());

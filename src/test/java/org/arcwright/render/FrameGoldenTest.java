@@ -3,6 +3,8 @@ package org.arcwright.render;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import org.arcwright.testing.Golden;
+import org.arcwright.tolerance.DrawingStyle;
+import org.arcwright.tolerance.Units;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -44,7 +46,7 @@ class FrameGoldenTest {
     @Test
     void svgTextIsDrawnAsOutlinesSoNoFontIsNeededToView() {
         String svg = renderer.svg(CalloutCatalogue.all().get("profile-between").callout(),
-                org.arcwright.tolerance.DrawingStyle.ASME, org.arcwright.tolerance.Units.MM);
+                DrawingStyle.ASME, Units.MM);
         assertThat(svg).doesNotContain("<text").contains("<path");
     }
 }

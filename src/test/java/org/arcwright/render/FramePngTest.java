@@ -2,6 +2,7 @@ package org.arcwright.render;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.awt.Color;
 import java.awt.geom.Rectangle2D;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
@@ -10,9 +11,13 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import javax.imageio.ImageIO;
+import javax.imageio.metadata.IIOMetadataNode;
 import org.arcwright.callout.Callout;
+import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
+import org.assertj.core.api.Assertions;
+import org.assertj.core.data.Offset;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -77,7 +82,7 @@ class FramePngTest {
         for (CalloutDrawing.Cell cell : cells) expected.add(cell.bounds().getMaxX());
         assertThat(lines).hasSize(expected.size());
         for (int i = 0; i < expected.size(); i++) {
-            assertThat((double) lines.get(i)).isCloseTo(expected.get(i) * s, org.assertj.core.data.Offset.offset(2.0));
+            assertThat((double) lines.get(i)).isCloseTo(expected.get(i) * s, Offset.offset(2.0));
         }
         // a row is 2h tall and the symbol cell square: 7 mm at 3.5 mm lettering = 82.7 px at 300 dpi
         double h = CalloutLayout.DEFAULT_LETTER_HEIGHT;
@@ -85,7 +90,7 @@ class FramePngTest {
         assertThat(sym.getWidth()).isEqualTo(sym.getHeight());
         int top = firstDarkDown(img, (int) Math.round(sym.getCenterX() * s), 0);
         int bottom = firstDarkUp(img, (int) Math.round(sym.getCenterX() * s), img.getHeight() - 1);
-        assertThat((double) (bottom - top)).isCloseTo(2 * h * s, org.assertj.core.data.Offset.offset(3.0));
+        assertThat((double) (bottom - top)).isCloseTo(2 * h * s, Offset.offset(3.0));
     }
 
     private static int firstDarkDown(BufferedImage img, int x, int y) {
@@ -135,26 +140,26 @@ class FramePngTest {
         Callout c = CalloutCatalogue.all().get("profile-no-datums").callout();
         BufferedImage low = decode(renderer.png(c, DrawingStyle.ASME, Units.MM, 150));
         BufferedImage high = decode(renderer.png(c, DrawingStyle.ASME, Units.MM, 600));
-        assertThat((double) high.getWidth() / low.getWidth()).isCloseTo(4.0, org.assertj.core.data.Offset.offset(0.05));
+        assertThat((double) high.getWidth() / low.getWidth()).isCloseTo(4.0, Offset.offset(0.05));
         var reader = ImageIO.getImageReadersByFormatName("png").next();
         reader.setInput(ImageIO.createImageInputStream(new ByteArrayInputStream(renderer.png(c, DrawingStyle.ASME, Units.MM, 600))));
-        var meta = (javax.imageio.metadata.IIOMetadataNode) reader.getImageMetadata(0).getAsTree("javax_imageio_1.0");
-        var hps = (javax.imageio.metadata.IIOMetadataNode) meta.getElementsByTagName("HorizontalPixelSize").item(0);
-        assertThat(Double.parseDouble(hps.getAttribute("value"))).isCloseTo(25.4 / 600, org.assertj.core.data.Offset.offset(1e-4));
+        var meta = (IIOMetadataNode) reader.getImageMetadata(0).getAsTree("javax_imageio_1.0");
+        var hps = (IIOMetadataNode) meta.getElementsByTagName("HorizontalPixelSize").item(0);
+        assertThat(Double.parseDouble(hps.getAttribute("value"))).isCloseTo(25.4 / 600, Offset.offset(1e-4));
     }
 
     @Test
     void anOutOfRangeResolutionIsBadInput() {
         Callout c = CalloutCatalogue.all().get("profile-no-datums").callout();
-        org.assertj.core.api.Assertions.assertThatThrownBy(() -> renderer.png(c, DrawingStyle.ASME, Units.MM, 5))
-                .isInstanceOf(org.arcwright.io.InputProblem.class).hasMessageContaining("dpi");
+        Assertions.assertThatThrownBy(() -> renderer.png(c, DrawingStyle.ASME, Units.MM, 5))
+                .isInstanceOf(InputProblem.class).hasMessageContaining("dpi");
     }
 
     @Test
     void aPaletteDrawsTheSameMarksInItsColoursAndTheDefaultStaysBlackOnWhite() {
         Callout c = CalloutCatalogue.all().get("profile-no-datums").callout();
         BufferedImage light = renderer.image(c, DrawingStyle.ASME, Units.MM, 110);
-        java.awt.Color ground = new java.awt.Color(0x3a3d40), ink = new java.awt.Color(0xdfe1e5);
+        Color ground = new Color(0x3a3d40), ink = new Color(0xdfe1e5);
         BufferedImage dark = renderer.image(c, DrawingStyle.ASME, Units.MM, 110, new Palette(ground, ink, ink));
         assertThat(light.getRGB(0, 0) & 0xffffff).isEqualTo(0xffffff);
         assertThat(dark.getRGB(0, 0) & 0xffffff).isEqualTo(0x3a3d40);
@@ -164,7 +169,7 @@ class FramePngTest {
                 if ((light.getRGB(x, y) & 0xffffff) == 0) {
                     inked++;
                     // a fully inked pixel is the ink, give or take rounding in the compositing
-                    java.awt.Color got = new java.awt.Color(dark.getRGB(x, y));
+                    Color got = new Color(dark.getRGB(x, y));
                     assertThat(Math.abs(got.getRed() - ink.getRed()) + Math.abs(got.getBlue() - ink.getBlue())).isLessThan(12);
                 }
             }

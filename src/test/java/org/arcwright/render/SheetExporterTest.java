@@ -6,13 +6,20 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.pdmodel.PDDocument;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
+import org.arcwright.rules.Advisor;
+import org.arcwright.rules.MechanicsChecks;
+import org.arcwright.rules.NoteLinker;
+import org.arcwright.rules.RuleBook;
 import org.arcwright.templates.NoteTemplates;
 import org.arcwright.testing.Golden;
+import org.arcwright.tolerance.DrawingStyle;
+import org.arcwright.worksheet.InspectionRecord;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.RadiusFeature;
 import org.arcwright.worksheet.WorksheetFiles;
@@ -141,7 +148,7 @@ class SheetExporterTest {
 
     @Test
     void anIsoSheetSaysThatIsoHasNoControlledRadius() {
-        PartWorksheet iso = new PartWorksheet(1, demo.part(), demo.units(), org.arcwright.tolerance.DrawingStyle.ISO,
+        PartWorksheet iso = new PartWorksheet(1, demo.part(), demo.units(), DrawingStyle.ISO,
                 demo.titleBlock(), demo.features());
         SheetContent content = exporter.content(iso, templates, "t");
         SheetContent.FeatureSection f1 = content.features().get(0);
@@ -154,7 +161,7 @@ class SheetExporterTest {
         String path = "cmm/" + "very-long-inspection-folder-name-".repeat(8) + "f1.csv";
         RadiusFeature f1 = demo.features().get(0);
         PartWorksheet ws = demo.withFeature(f1.withInspection(
-                new org.arcwright.worksheet.InspectionRecord("pass", path, "2026-11-20", java.util.Map.of())));
+                new InspectionRecord("pass", path, "2026-11-20", Map.of())));
         Path out = dir.resolve("long.pdf");
         exporter.export(ws, templates, "t", out, null);
         try (PDDocument doc = Loader.loadPDF(out.toFile())) {
@@ -168,8 +175,8 @@ class SheetExporterTest {
     @Test
     void undecidedFeaturesShowTheAdvisorsSuggestionMarkedAsNotChosen() {
         PackStack stack = PackStack.builtIn();
-        org.arcwright.rules.Advisor advisor = new org.arcwright.rules.Advisor(org.arcwright.rules.RuleBook.load(stack),
-                org.arcwright.rules.MechanicsChecks.standard(stack), org.arcwright.rules.NoteLinker.NONE);
+        Advisor advisor = new Advisor(RuleBook.load(stack),
+                MechanicsChecks.standard(stack), NoteLinker.NONE);
         SheetContent content = SheetContent.of(demo, templates, "t", c -> advisor.advise(c).first());
         SheetContent.FeatureSection f5 = content.features().get(4);
         assertThat(f5.decided()).isFalse();
@@ -182,8 +189,8 @@ class SheetExporterTest {
     @Test
     void aPartDecidedByTheAdvisorRendersEveryCalloutAndFigure(@TempDir Path dir) throws Exception {
         PackStack stack = PackStack.builtIn();
-        org.arcwright.rules.Advisor advisor = new org.arcwright.rules.Advisor(org.arcwright.rules.RuleBook.load(stack),
-                org.arcwright.rules.MechanicsChecks.standard(stack), org.arcwright.rules.NoteLinker.NONE);
+        Advisor advisor = new Advisor(RuleBook.load(stack),
+                MechanicsChecks.standard(stack), NoteLinker.NONE);
         PartWorksheet open = new WorksheetFiles(new JsonFiles()).read(Path.of("examples/tarnbeck-output-shaft.arcpart"));
         PartWorksheet decided = open;
         for (RadiusFeature f : open.features()) {

@@ -9,10 +9,13 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.regex.Pattern;
+import org.apache.pdfbox.Loader;
+import org.apache.pdfbox.text.PDFTextStripper;
 import org.arcwright.callout.Callout;
 import org.arcwright.callout.DatumReference;
 import org.arcwright.callout.Extent;
@@ -54,8 +57,8 @@ class StandardMarksSweepTest {
         iso.put("OZ", Pattern.compile("\\bOZ\\b"));
         iso.put("ISO 129-1 dimensioning", Pattern.compile("ISO 129-1"));
         iso.put("stacked ISO frames", Pattern.compile("(?i)stacked frames"));
-        ASME_ONLY = java.util.Collections.unmodifiableMap(asme);
-        ISO_ONLY = java.util.Collections.unmodifiableMap(iso);
+        ASME_ONLY = Collections.unmodifiableMap(asme);
+        ISO_ONLY = Collections.unmodifiableMap(iso);
     }
 
     /** Sentences that name the other standard to warn about it, which is what they are for. */
@@ -121,8 +124,8 @@ class StandardMarksSweepTest {
                 SheetContent content = exporter.content(ws, templates, "t");
                 assertOwnMarks(what + " markdown", style, exporter.markdown(content, "f"));
                 assertOwnMarks(what + " html", style, exporter.html(content, null));
-                try (var doc = org.apache.pdfbox.Loader.loadPDF(exporter.pdf(content, null))) {
-                    assertOwnMarks(what + " pdf", style, new org.apache.pdfbox.text.PDFTextStripper().getText(doc).replaceAll("\\s+", " "));
+                try (var doc = Loader.loadPDF(exporter.pdf(content, null))) {
+                    assertOwnMarks(what + " pdf", style, new PDFTextStripper().getText(doc).replaceAll("\\s+", " "));
                 }
             }
         }

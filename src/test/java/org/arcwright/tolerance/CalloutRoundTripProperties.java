@@ -3,6 +3,7 @@ package org.arcwright.tolerance;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.math.BigDecimal;
+import java.math.RoundingMode;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
 import net.jqwik.api.Combinators;
@@ -49,7 +50,7 @@ class CalloutRoundTripProperties {
     }
 
     private static RadiusCallout build(RadiusKind k, Units u, int p, int n, int t, int f) {
-        BigDecimal nominal = BigDecimal.valueOf(n, 3).setScale(Math.max(p, 0), java.math.RoundingMode.HALF_UP);
+        BigDecimal nominal = BigDecimal.valueOf(n, 3).setScale(Math.max(p, 0), RoundingMode.HALF_UP);
         BigDecimal tol = BigDecimal.valueOf(t, 3);
         if (nominal.signum() <= 0 || nominal.compareTo(tol.add(BigDecimal.valueOf(1, 3))) <= 0) return null;
         ToleranceForm form = switch (f) {

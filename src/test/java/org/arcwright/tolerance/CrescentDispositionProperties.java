@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.within;
 
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
+import net.jqwik.api.Combinators;
 import net.jqwik.api.ForAll;
 import net.jqwik.api.Property;
 import net.jqwik.api.Provide;
@@ -23,11 +24,11 @@ class CrescentDispositionProperties {
     Arbitrary<Disposition> dispositions() {
         Arbitrary<Double> dev = Arbitraries.doubles().between(0.001, 0.9).ofScale(4);
         return Arbitraries.oneOf(
-                net.jqwik.api.Combinators.combine(dev, dev).as((a, b) -> new Disposition(a + b, a)),      // both positive
-                net.jqwik.api.Combinators.combine(dev, dev).as((a, b) -> new Disposition(-a, -a - b)),    // both negative
+                Combinators.combine(dev, dev).as((a, b) -> new Disposition(a + b, a)),      // both positive
+                Combinators.combine(dev, dev).as((a, b) -> new Disposition(-a, -a - b)),    // both negative
                 dev.map(a -> new Disposition(a, 0)),                                                        // +a/0
                 dev.map(a -> new Disposition(0, -a)),                                                       // 0/-a
-                net.jqwik.api.Combinators.combine(dev, dev).as((a, b) -> new Disposition(a, -b)));        // bilateral
+                Combinators.combine(dev, dev).as((a, b) -> new Disposition(a, -b)));        // bilateral
     }
 
     @Property(tries = 300, seed = "16")

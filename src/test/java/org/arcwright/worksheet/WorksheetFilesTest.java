@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
 import org.arcwright.callout.Callout;
 import org.arcwright.callout.DatumReference;
 import org.arcwright.callout.Extent;
@@ -32,7 +33,7 @@ class WorksheetFilesTest {
         Callout profile = new Callout.Profile(0.1, null, List.of(DatumReference.parse("A"), DatumReference.parse("B(M)")),
                 false, Extent.WITH_ADJACENT);
         Recommendation rec = new Recommendation("demo", profile, "profile 0.1 A B(M)", 1.0, List.of("why"),
-                List.of(), List.of(), java.util.Map.of("zone", 0.1), List.of(), List.of(), false);
+                List.of(), List.of(), Map.of("zone", 0.1), List.of(), List.of(), false);
         w = w.withFeature(w.features().get(2).withChosen(rec));
         Path file = dir.resolve("part" + WorksheetFiles.EXTENSION);
         files.write(file, w);

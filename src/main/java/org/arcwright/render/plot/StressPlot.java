@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.awt.Font;
 import java.awt.Rectangle;
 import java.awt.RenderingHints;
+import java.awt.geom.Ellipse2D;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
@@ -14,8 +15,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import java.util.function.Predicate;
+import java.util.function.ToDoubleFunction;
 import javax.imageio.ImageIO;
 import org.arcwright.io.AtomicFiles;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.mechanics.Cautions;
 import org.arcwright.mechanics.FilletStressAnalysis;
@@ -26,6 +30,7 @@ import org.arcwright.mechanics.StressTarget;
 import org.jfree.chart.JFreeChart;
 import org.jfree.chart.annotations.XYTextAnnotation;
 import org.jfree.chart.axis.NumberAxis;
+import org.jfree.chart.block.BlockBorder;
 import org.jfree.chart.plot.IntervalMarker;
 import org.jfree.chart.plot.ValueMarker;
 import org.jfree.chart.plot.XYPlot;
@@ -33,6 +38,7 @@ import org.jfree.chart.renderer.xy.XYLineAndShapeRenderer;
 import org.jfree.chart.title.LegendTitle;
 import org.jfree.chart.title.TextTitle;
 import org.jfree.chart.ui.Layer;
+import org.jfree.chart.ui.LengthAdjustmentType;
 import org.jfree.chart.ui.RectangleAnchor;
 import org.jfree.chart.ui.RectangleEdge;
 import org.jfree.chart.ui.RectangleInsets;
@@ -150,7 +156,7 @@ public final class StressPlot {
             data.addSeries(kf);
             data.addSeries(kfOut);
         }
-        XYSeries marks = new XYSeries(c.hasTolerance() ? "at r min, nominal, max" : "at R " + num(c.rNominal()), false, true);
+        XYSeries marks = new XYSeries(c.hasTolerance() ? "at r min, nominal, max" : "at R " + DecimalText.significant(c.rNominal(), 4), false, true);
         StressPoint[] three = {analysis.point(c, c.rMin()), analysis.point(c, c.rNominal()), analysis.point(c, c.rMax())};
         for (StressPoint p : three) {
             marks.add(p.r(), p.kt().kt());
@@ -195,7 +201,7 @@ public final class StressPlot {
         r.setSeriesLinesVisible(s, false);
         r.setSeriesShapesVisible(s, true);
         r.setSeriesPaint(s, ink.marks());
-        r.setSeriesShape(s, new java.awt.geom.Ellipse2D.Double(-4.5, -4.5, 9, 9));
+        r.setSeriesShape(s, new Ellipse2D.Double(-4.5, -4.5, 9, 9));
         for (int i = 0; i < data.getSeriesCount(); i++) {
             if (data.getSeries(i).getItemCount() == 0) r.setSeriesVisibleInLegend(i, false);
         }
@@ -214,7 +220,7 @@ public final class StressPlot {
             band = new IntervalMarker(c.rMin() - (curves.rTo() - curves.rFrom()) / 600,
                     c.rMax() + (curves.rTo() - curves.rFrom()) / 600, alpha(bandInk, 90));
         }
-        band.setLabel(c.hasTolerance() ? "tolerance  R " + num(c.rMin()) + " – " + num(c.rMax()) : "R " + num(c.rNominal()));
+        band.setLabel(c.hasTolerance() ? "tolerance  R " + DecimalText.significant(c.rMin(), 4) + " – " + DecimalText.significant(c.rMax(), 4) : "R " + DecimalText.significant(c.rNominal(), 4));
         band.setLabelFont(ink.labelFont().deriveFont(Font.BOLD));
         band.setLabelPaint(ink.bandText());
         band.setLabelAnchor(RectangleAnchor.TOP);
@@ -224,9 +230,9 @@ public final class StressPlot {
         plot.addDomainMarker(band, Layer.BACKGROUND);
 
         StressPoint atMin = three[0];
-        String minText = String.format(Locale.ROOT, "at %s %s:  Kt %.2f%s", c.hasTolerance() ? "r min" : "R", num(c.rMin()),
-                atMin.kt().kt(),
-                withKf ? String.format(Locale.ROOT, ", Kf %.2f", atMin.kf()) : "");
+        String minText = String.format(Locale.ROOT, "at %s %s:  Kt %s%s", c.hasTolerance() ? "r min" : "R", DecimalText.significant(c.rMin(), 4),
+                DecimalText.fixed(atMin.kt().kt(), 2),
+                withKf ? ", Kf " + DecimalText.fixed(atMin.kf(), 2) : "");
         double dx = (curves.rTo() - curves.rFrom()) / 120;
         boolean rightHalf = c.rMin() > (curves.rFrom() + curves.rTo()) / 2;
         XYTextAnnotation label = new XYTextAnnotation(minText, c.rMin() + (rightHalf ? -dx : dx), atMin.kt().kt());
@@ -239,21 +245,21 @@ public final class StressPlot {
 
         if (target != null) {
             ValueMarker tm = new ValueMarker(target.value(), ink.target(), dashed);
-            tm.setLabel("target " + target.factor().symbol() + " ≤ " + num(target.value()));
+            tm.setLabel("target " + target.factor().symbol() + " ≤ " + DecimalText.significant(target.value(), 4));
             tm.setLabelFont(ink.markerFont());
             tm.setLabelPaint(ink.target());
             // above its line, on a background, so the dashes never run through the words
             tm.setLabelAnchor(RectangleAnchor.LEFT);
             tm.setLabelTextAnchor(TextAnchor.BOTTOM_LEFT);
             tm.setLabelOffset(new RectangleInsets(0, 6, 3, 0));
-            tm.setLabelOffsetType(org.jfree.chart.ui.LengthAdjustmentType.EXPAND);
+            tm.setLabelOffsetType(LengthAdjustmentType.EXPAND);
             tm.setLabelBackgroundColor(ink.labelBackground());
             plot.addRangeMarker(tm);
         }
         if (minimum != null && minimum.found() && minimum.radius() >= curves.rFrom() && minimum.radius() <= curves.rTo()) {
             ValueMarker mm = new ValueMarker(minimum.radius(), ink.target(), new BasicStroke(1.2f));
             mm.setLabel((minimum.limitedByFit() ? "sharpest r the fit covers: " : "smallest r for target: ")
-                    + num(minimum.radius()));
+                    + DecimalText.significant(minimum.radius(), 4));
             mm.setLabelFont(ink.markerFont());
             mm.setLabelPaint(ink.target());
             boolean right = minimum.radius() > (curves.rFrom() + curves.rTo()) / 2;
@@ -272,14 +278,14 @@ public final class StressPlot {
         title.setPaint(ink.text());
         chart.setTitle(title);
         TextTitle sub = new TextTitle(String.format(Locale.ROOT, "%s in %s,  D %s / d %s %s,  h = %s %s   (%s)",
-                c.shape().description(), c.load().key(), num(c.bigD()), num(c.smallD()), u, num(c.stepHeight()), u,
+                c.shape().description(), c.load().key(), DecimalText.significant(c.bigD(), 4), DecimalText.significant(c.smallD(), 4), u, DecimalText.significant(c.stepHeight(), 4), u,
                 atMin.kt().fitName()), new Font(FONT, Font.PLAIN, 13));
         sub.setPaint(ink.text());
         chart.addSubtitle(sub);
         LegendTitle legend = new LegendTitle(plot);
         legend.setItemFont(new Font(FONT, Font.PLAIN, 12));
         legend.setPosition(RectangleEdge.BOTTOM);
-        legend.setFrame(org.jfree.chart.block.BlockBorder.NONE);
+        legend.setFrame(BlockBorder.NONE);
         legend.setItemPaint(ink.text());
         TextTitle caution = new TextTitle(Cautions.STRESS.get(0) + " " + Cautions.STRESS.get(1), new Font(FONT, Font.ITALIC, 11));
         caution.setPosition(RectangleEdge.BOTTOM);
@@ -336,8 +342,8 @@ public final class StressPlot {
      * the sample on each side so adjoining stretches join; a gap (null) separates stretches.
      */
     private static void stretch(List<StressPoint> pts, XYSeries series, boolean wanted,
-                                java.util.function.Predicate<StressPoint> fit,
-                                java.util.function.ToDoubleFunction<StressPoint> y) {
+                                Predicate<StressPoint> fit,
+                                ToDoubleFunction<StressPoint> y) {
         for (int i = 0; i < pts.size(); i++) {
             boolean self = fit.test(pts.get(i)) == wanted;
             boolean prev = i > 0 && fit.test(pts.get(i - 1)) == wanted;
@@ -357,10 +363,7 @@ public final class StressPlot {
 
     private static String strengthText(FilletStressCase c) {
         if (c.strength() == null) return "";
-        return num(c.strength().value()) + " " + c.strength().unit().symbol();
+        return DecimalText.significant(c.strength().value(), 4) + " " + c.strength().unit().symbol();
     }
 
-    private static String num(double v) {
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
-    }
 }

@@ -7,14 +7,12 @@ import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * Walks the flows that need the core loaded after the window opens: a measured contour to its
@@ -23,26 +21,14 @@ import org.junit.jupiter.api.io.TempDir;
 @TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 @Tag("gui")
 class CheckStressNotesGuiTest {
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension()
+            .readyWhen(w -> w.notesPanel().queryField().isEnabled());
 
-    private static GuiSupport.OpenWindow opened;
+    // filled by the extension
+    private static Path config;
     private static MainWindow window;
     private static FrameFixture fixture;
-
-    @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
-        window = opened.window();
-        fixture = opened.fixture();
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.notesPanel().queryField().isEnabled()), 60);
-    }
-
-    @AfterAll
-    static void closeWindow() {
-        // before the temporary folder goes
-        if (opened != null) opened.close();
-    }
 
     @Test
     @Order(1)

@@ -2,7 +2,6 @@ package org.arcwright.app.gui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
-import java.nio.file.Path;
 import javax.swing.JFrame;
 import javax.swing.JTable;
 import org.arcwright.app.model.ThemeChoice;
@@ -10,11 +9,9 @@ import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * Walks the main decision flow through the real window: a fatigue-loaded shoulder fillet from the
@@ -22,28 +19,14 @@ import org.junit.jupiter.api.io.TempDir;
  */
 @Tag("gui")
 class DecideFlowGuiTest {
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension()
+            .readyWhen(w -> w.statusLine().message().startsWith("Ready"));
 
-    private static GuiSupport.OpenWindow opened;
+    // filled by the extension
     private static MainWindow window;
     private static FrameFixture fixture;
     private static Robot robot;
-
-    @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
-        window = opened.window();
-        robot = opened.robot();
-        fixture = opened.fixture();
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.statusLine().message().startsWith("Ready")), 60);
-    }
-
-    @AfterAll
-    static void closeWindow() {
-        // before the temporary folder goes
-        if (opened != null) opened.close();
-    }
 
     @Test
     void aFatigueLoadedShoulderFilletIsDecidedOntoTheWorksheet() {

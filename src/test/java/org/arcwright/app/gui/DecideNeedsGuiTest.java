@@ -3,7 +3,6 @@ package org.arcwright.app.gui;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.awt.Component;
-import java.nio.file.Path;
 import java.util.List;
 import javax.swing.JComponent;
 import javax.swing.SwingUtilities;
@@ -18,11 +17,9 @@ import org.arcwright.model.Process;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * The Decide cards show what the text output of {@code advise} shows: the needs with a tick or cross per
@@ -32,25 +29,13 @@ import org.junit.jupiter.api.io.TempDir;
  */
 @Tag("gui")
 class DecideNeedsGuiTest {
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension()
+            .readyWhen(w -> w.statusLine().message().startsWith("Ready"));
 
-    private static GuiSupport.OpenWindow opened;
+    // filled by the extension
     private static MainWindow window;
     private static FrameFixture fixture;
-
-    @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
-        window = opened.window();
-        fixture = opened.fixture();
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.statusLine().message().startsWith("Ready")), 60);
-    }
-
-    @AfterAll
-    static void closeWindow() {
-        if (opened != null) opened.close();
-    }
 
     private static DesignCase gearSeat() {
         return new DesignCase(Units.MM, DrawingStyle.ISO, "gear seat", BlendKind.FILLET, 2, BlendFunction.MATING,

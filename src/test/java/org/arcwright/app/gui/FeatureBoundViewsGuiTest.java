@@ -7,13 +7,12 @@ import javax.swing.SwingUtilities;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * One feature, one truth: the Check view judges the selected feature's chosen callout, and what it
@@ -26,24 +25,17 @@ class FeatureBoundViewsGuiTest {
     private static final Path HOUSING = Path.of("examples/inspect/housing-fillet-profile.json").toAbsolutePath();
     private static final Path BRACKET_R = Path.of("examples/inspect/bracket-round-r.json").toAbsolutePath();
 
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension();
 
-    private static GuiSupport.OpenWindow opened;
+    // filled by the extension
+    private static Path config;
     private static MainWindow window;
     private static FrameFixture fixture;
 
     @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
-        window = opened.window();
-        fixture = opened.fixture();
+    static void openTheDecidedPart() {
         GuiSupport.onEdt(() -> window.open(DECIDED));
-    }
-
-    @AfterAll
-    static void closeWindow() {
-        if (opened != null) opened.close();
     }
 
     private static void selectRow(int row) {
@@ -58,7 +50,7 @@ class FeatureBoundViewsGuiTest {
     private static void checkAndWait(Path file) {
         GuiSupport.onEdt(() -> window.checkPanel().check(file));
         GuiSupport.waitFor(() -> verdict().startsWith("The measured contour") || verdict().startsWith("Not checked")
-                || verdict().startsWith("Cannot check"), 30);
+                || verdict().startsWith("Cannot check"), 60); // a check took over 30 s at load 20
     }
 
     @Test
@@ -156,6 +148,8 @@ class FeatureBoundViewsGuiTest {
         assertThat(fixture.textBox("unkeptAnswers").target().isVisible()).isTrue();
         GuiSupport.screenshot(window.frame(), "decide-unkept-light");
         fixture.button("keepAnswers").click();
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.session().worksheet().feature("F2").orElseThrow()
+                .designCase().nominalRadius()) == 0.9, 10); // the click is handled on the event thread
         assertThat(window.session().worksheet().feature("F2").orElseThrow().designCase().nominalRadius()).isEqualTo(0.9);
         assertThat(GuiSupport.onEdt(() -> window.decidePanel().unkeptAnswers())).isEmpty();
         GuiSupport.onEdt(() -> window.session().undo());

@@ -11,14 +11,12 @@ import javax.swing.SwingUtilities;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.AfterAll;
-import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * The Notes panel as a user meets it at 1024x700: a note opened keeps list and reader usable (also
@@ -28,31 +26,14 @@ import org.junit.jupiter.api.io.TempDir;
 @TestMethodOrder(MethodOrderer.OrderAnnotation.class)
 @Tag("gui")
 class NotesPanelGuiTest {
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension()
+            .readyWhen(w -> w.notesPanel().queryField().isEnabled()).size(1024, 700);
 
-    private static GuiSupport.OpenWindow opened;
+    // filled by the extension
+    private static Path config;
     private static MainWindow window;
     private static FrameFixture fixture;
-
-    @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
-        window = opened.window();
-        fixture = opened.fixture();
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.notesPanel().queryField().isEnabled()), 60);
-        GuiSupport.onEdt(() -> {
-            window.frame().setExtendedState(java.awt.Frame.NORMAL);
-            window.frame().setSize(1024, 700);
-            window.frame().validate();
-        });
-        GuiSupport.settle(300);
-    }
-
-    @AfterAll
-    static void closeWindow() {
-        if (opened != null) opened.close();
-    }
 
     private static int visibleHeight(String name) {
         return GuiSupport.onEdt(() -> {

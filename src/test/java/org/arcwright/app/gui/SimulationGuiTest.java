@@ -19,14 +19,13 @@ import org.arcwright.app.simulate.SimulationView;
 import org.arcwright.services.CaseSimulations;
 import org.arcwright.simulate.Outcome;
 import org.assertj.swing.fixture.FrameFixture;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * The Simulation view as a user drives it on the invented Tarnbeck output shaft: select a feature,
@@ -38,24 +37,16 @@ import org.junit.jupiter.api.io.TempDir;
 class SimulationGuiTest {
     private static final Path DECIDED = Path.of("examples/tarnbeck-output-shaft-decided.arcpart").toAbsolutePath();
 
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension();
 
-    private static GuiSupport.OpenWindow opened;
+    // filled by the extension
     private static MainWindow window;
     private static FrameFixture fixture;
 
     @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
-        window = opened.window();
-        fixture = opened.fixture();
+    static void openDecided() {
         GuiSupport.onEdt(() -> window.open(DECIDED));
-    }
-
-    @AfterAll
-    static void closeWindow() {
-        if (opened != null) opened.close();
     }
 
     private static SimulationView view() {

@@ -2,6 +2,8 @@ package org.arcwright.render.plot;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.awt.Font;
+import java.awt.font.FontRenderContext;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
 import java.nio.charset.StandardCharsets;
@@ -21,6 +23,8 @@ import org.arcwright.mechanics.StressTarget;
 import org.arcwright.mechanics.UltimateStrength;
 import org.arcwright.tolerance.Units;
 import org.jfree.chart.JFreeChart;
+import org.jfree.data.xy.XYSeriesCollection;
+import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 
 /** The K<sub>t</sub>/K<sub>f</sub> chart: what it draws, and that both formats come out readable. */
@@ -92,15 +96,15 @@ class StressPlotTest {
             Files.writeString(golden, svg);
             Files.writeString(fonts, fontFingerprint());
         }
-        org.junit.jupiter.api.Assumptions.assumeTrue(fontFingerprint().equals(Files.readString(fonts)),
+        Assumptions.assumeTrue(fontFingerprint().equals(Files.readString(fonts)),
                 "this machine's SansSerif font differs from the one the golden SVG was drawn with");
         assertThat(svg).isEqualTo(Files.readString(golden, StandardCharsets.UTF_8));
     }
 
     private static String fontFingerprint() {
-        java.awt.Font f = new java.awt.Font("SansSerif", java.awt.Font.PLAIN, 13);
+        Font f = new Font("SansSerif", Font.PLAIN, 13);
         double w = f.getStringBounds("Kt and Kf across the fillet tolerance 0123456789 ≤ –",
-                new java.awt.font.FontRenderContext(null, true, true)).getWidth();
+                new FontRenderContext(null, true, true)).getWidth();
         return String.format(Locale.ROOT, "SansSerif 13 width %.4f%n", w);
     }
 
@@ -110,7 +114,7 @@ class StressPlotTest {
         FilletStressCase sharp = FilletStressCase.ofLimits(ShoulderShape.STEPPED_SHAFT, LoadCase.TORSION, Units.MM,
                 45, 30, 1.0, 2.0, null);
         JFreeChart chart = plot.chart(sharp, null, null);
-        var data = (org.jfree.data.xy.XYSeriesCollection) chart.getXYPlot().getDataset();
+        var data = (XYSeriesCollection) chart.getXYPlot().getDataset();
         assertThat(data.getSeries(0).getItemCount()).isPositive();
         assertThat(data.getSeries(1).getItemCount()).as("extrapolated stretch").isPositive();
     }
