@@ -2,8 +2,12 @@ package org.arcwright.cli;
 
 import java.io.PrintWriter;
 import java.nio.file.Path;
+import java.util.LinkedHashSet;
 import java.util.Locale;
+import java.util.Set;
 import java.util.concurrent.Callable;
+import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.simulate.CalloutResult;
@@ -110,7 +114,20 @@ final class SimulateCommand implements Callable<Integer> {
         out.println("  note: shares of all parts; in brackets the 95 % Wilson score interval, in %");
         out.println("  note: escape = accepted but functionally bad; false reject = not accepted but functionally good");
         out.println("  note: function judged on each part's true geometry; callouts judged on its measured section by the inspect engine");
+        out.println("  note: " + slack(s, u));
         out.println("  caution: " + SimulationResult.CAUTION);
+    }
+
+    /** The slack at the tangent points each callout was judged with, and where it came from. */
+    private static String slack(Simulation s, String u) {
+        if (!Double.isNaN(s.resolution())) {
+            return "points within " + DecimalText.significant(s.resolution(), 3) + " " + u + " of a surface taken as on it (the file's resolution)";
+        }
+        Set<String> values = new LinkedHashSet<>();
+        for (InspectionCallout c : s.callouts()) values.add(DecimalText.significant(s.resolutionFor(c), 3));
+        return "points within " + String.join(" / ", values) + " " + u + " of a surface taken as on it (the default: measuring noise "
+                + "alone puts a point of a perfect part beyond it with at most " + DecimalText.significant(100 * Simulation.NOISE_ALONE_REJECTS, 2)
+                + " % probability; never more than a tenth of a radius band)";
     }
 
     /** A one-line progress bar on the terminal's error stream. */

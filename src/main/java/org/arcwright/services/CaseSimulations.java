@@ -249,7 +249,7 @@ public final class CaseSimulations {
 
     /**
      * Judges every simulable candidate on its own population of {@code parts} parts from {@code seed}
-     * (the inspection's resolution {@link Simulation#defaultResolution}, its default CR window).
+     * (each callout judged with {@link Simulation#defaultResolution(ProcessModel, InspectionCallout) its default resolution}, the default CR window).
      *
      * @param progress told of parts done over all candidates together
      * @param cancelled polled between parts
@@ -266,8 +266,7 @@ public final class CaseSimulations {
                 out.add(new Judged(c, null, c.notSimulated()));
                 continue;
             }
-            Simulation sim = new Simulation(c.model(), needs, List.of(c.callout()), parts, seed, Simulation.defaultResolution(c.model()),
-                    Double.NaN);
+            Simulation sim = new Simulation(c.model(), needs, List.of(c.callout()), parts, seed, Double.NaN, Double.NaN);
             long before = offset;
             try {
                 out.add(new Judged(c, runner.run(sim, (done, all) -> progress.partsDone(before + done, total), cancelled), null));
@@ -293,7 +292,7 @@ public final class CaseSimulations {
         ProcessModel m = sim.model();
         PointSet pts = example.section();
         InspectionRequest q = new InspectionRequest(m.units(), new Nominal.CornerBlend(m.corner(), m.nominalRadius()),
-                sim.callouts().get(0), pts, sim.resolution(), sim.window(), false);
+                sim.callouts().get(0), pts, sim.resolutionFor(sim.callouts().get(0)), sim.window(), false);
         return new Inspector().inspect(q);
     }
 }

@@ -75,7 +75,7 @@ public final class SimulationFiles {
             if (d.callouts() == null || d.callouts().isEmpty()) throw InputProblem.ofField("callouts", "missing or empty; give at least one callout");
             List<InspectionCallout> callouts = new ArrayList<>();
             for (InspectionFiles.CalloutDto c : d.callouts()) callouts.add(c.callout());
-            double res = d.resolution() == null ? Simulation.defaultResolution(model) : d.resolution();
+            double res = d.resolution() == null ? Double.NaN : d.resolution();
             double window = d.window() == null ? Double.NaN : d.window();
             return new Simulation(model, d.needs().needs, callouts, d.parts() == null ? Simulation.DEFAULT_PARTS : d.parts(),
                     d.seed() == null ? 1 : d.seed(), res, window);

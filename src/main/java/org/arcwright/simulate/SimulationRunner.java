@@ -152,7 +152,7 @@ public final class SimulationRunner {
     }
 
     static InspectionRequest request(Simulation sim, InspectionCallout callout, PointSet pts) {
-        return new InspectionRequest(sim.model().units(), nominal(sim), callout, pts, sim.resolution(), sim.window(), false);
+        return new InspectionRequest(sim.model().units(), nominal(sim), callout, pts, sim.resolutionFor(callout), sim.window(), false);
     }
 
     private static Nominal nominal(Simulation sim) {

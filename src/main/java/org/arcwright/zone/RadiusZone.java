@@ -99,13 +99,8 @@ public final class RadiusZone {
                 double r = (k1 * qu + Math.sqrt(Math.max(0, k2 * qu * qu - kc * (qx * qx + qy * qy)))) / kc;
                 double lo, hi;
                 if (ha <= res || hb <= res) {
-                    double h = Double.POSITIVE_INFINITY;
-                    if (ha <= res) h = Math.min(h, Math.max(0, xa) * tanA);
-                    if (hb <= res) h = Math.min(h, Math.max(0, xb) * tanA);
-                    // within the resolution of a leg the point may be taken as on it, or as where it is
-                    if (ha > 0 && hb > 0) h = Math.max(h, r);
                     lo = 0;
-                    hi = h;
+                    hi = nearLeg(qx, qy, ha, hb, xa, xb, tanA, res);
                 } else {
                     lo = r;
                     hi = r;
@@ -171,13 +166,9 @@ public final class RadiusZone {
                     hiLow = Math.min(hiLow, Math.max(0, xb - u) * tanA);
                     hiHigh = Math.min(hiHigh, Math.max(0, xb + u) * tanA);
                 }
-                if (ha > 0 && hb > 0) {
-                    // or where it lies: the blend through it, read within u of it
-                    double r = blend(xs[i], ys[i]);
-                    double g = gradient(xs[i], ys[i], r);
-                    hiLow = Math.max(hiLow, r - u * g);
-                    hiHigh = Math.max(hiHigh, r + u * g);
-                }
+                // or anywhere within the resolution of where it lies, the resolution read within u
+                hiLow = Math.max(hiLow, nearLeg(qx, qy, ha, hb, xa, xb, tanA, Math.max(0, resolution - u)));
+                hiHigh = Math.max(hiHigh, nearLeg(qx, qy, ha, hb, xa, xb, tanA, resolution + u));
                 state = min <= hiLow ? 1 : min > hiHigh ? -1 : 0;
             } else {
                 double d = Math.hypot(xs[i] - cMax.x(), ys[i] - cMax.y()) - max;
@@ -196,18 +187,6 @@ public final class RadiusZone {
         return out > 0 ? Boolean.FALSE : open > 0 ? null : Boolean.TRUE;
     }
 
-    /**
-     * How fast the radius of the blend through a point changes as the point moves:
-     * {@code |∇ρ| = 1 / |1 + s·cos β|}, with {@code s = 1/sin α} and {@code β} the angle between the
-     * bisector and the direction from the blend's centre to the point (implicit differentiation of
-     * {@code |q - u ρ s| = ρ}; infinite at the tangent points, where the zone narrows to nothing).
-     */
-    private double gradient(double x, double y, double r) {
-        double cx = vx + bisX * r * s1, cy = vy + bisY * r * s1;
-        double cosB = ((x - cx) * bisX + (y - cy) * bisY) / r;
-        double den = Math.abs(1 + s1 * cosB);
-        return den > 0 ? 1 / den : Double.POSITIVE_INFINITY;
-    }
 
     /**
      * How far one point's radius lies beyond the limits (radius units; negative: inside by that
@@ -231,18 +210,44 @@ public final class RadiusZone {
     private void allowed(double x, double y, double ha, double hb, double xa, double xb, double tanA,
                          double[] lo, double[] hi) {
         if (ha <= resolution || hb <= resolution) {
-            double h = Double.POSITIVE_INFINITY;
-            if (ha <= resolution) h = Math.min(h, Math.max(0, xa) * tanA);
-            if (hb <= resolution) h = Math.min(h, Math.max(0, xb) * tanA);
-            // within the resolution of a leg the point may be taken as on it, or as where it is
-            if (ha > 0 && hb > 0) h = Math.max(h, blend(x, y));
             lo[0] = 0;
-            hi[0] = h;
+            hi[0] = nearLeg(x - vx, y - vy, ha, hb, xa, xb, tanA, resolution);
         } else {
             double r = blend(x, y);
             lo[0] = r;
             hi[0] = r;
         }
+    }
+
+    /**
+     * The largest radius a point within the resolution of a leg allows (it allows every smaller one):
+     * the point may be taken as on the leg, where every contour whose tangent point lies beyond it
+     * passes through it ({@code x·tan α}), or as anywhere within the resolution of where it lies. The
+     * contours passing within the resolution of it are those through the point moved the resolution
+     * away from the leg, into the angle; the largest of them is the blend through that moved point.
+     * Reading the point only as on the leg, or only where it lies, rejected a perfect blend whose
+     * measured point beside a tangent point fell a fraction of a micrometre on the material side of
+     * the fitted leg (the blend through it then ended before the smallest limit arc's tangent point).
+     *
+     * @param qx the point's position from the vertex, x
+     * @param qy the point's position from the vertex, y
+     * @param slack how far from where it lies the point may be read (the resolution)
+     */
+    private double nearLeg(double qx, double qy, double ha, double hb, double xa, double xb, double tanA, double slack) {
+        double h = Double.POSITIVE_INFINITY;
+        if (ha <= resolution) h = Math.min(h, Math.max(0, xa) * tanA);
+        if (hb <= resolution) h = Math.min(h, Math.max(0, xb) * tanA);
+        Point2 na = corner.inwardNormalA(), nb = corner.inwardNormalB();
+        double mx = qx, my = qy;
+        if (ha <= resolution) {
+            mx += na.x() * slack;
+            my += na.y() * slack;
+        }
+        if (hb <= resolution) {
+            mx += nb.x() * slack;
+            my += nb.y() * slack;
+        }
+        return Math.max(h, blend(vx + mx, vy + my));
     }
 
     /** {@link Corner#blendRadiusThrough} with the corner's constants computed once. */

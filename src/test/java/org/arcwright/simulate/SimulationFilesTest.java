@@ -2,6 +2,7 @@ package org.arcwright.simulate;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.assertj.core.api.Assertions.within;
 
 import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.io.InputProblem;
@@ -43,7 +44,10 @@ class SimulationFilesTest {
         assertThat(s.model().step()).isEqualTo(new ProcessModel.Steps(0.05, 0.005, 0.03));
         assertThat(s.model().points()).isEqualTo(200);
         assertThat(s.callouts()).hasSize(2).allMatch(c -> c instanceof InspectionCallout.RadiusLimits);
-        assertThat(s.resolution()).isEqualTo(0.003);
+        // no resolution in the file: each callout's default, σ·√(2 ln(2N/α)) for N = 200 points and
+        // α = 0.001 (Chernoff and union bounds on normal noise), below a tenth of either band
+        assertThat(Double.isNaN(s.resolution())).isTrue();
+        assertThat(s.resolutionFor(s.callouts().get(0))).isCloseTo(0.001 * Math.sqrt(2 * Math.log(400_000)), within(1e-12));
         assertThat(Double.isNaN(s.needs().maxStep())).isTrue();
     }
 

@@ -89,7 +89,6 @@ class VerdictPathTest {
             NormalizedGaussianSampler g = PartGenerator.gaussian(geometry), e = PartGenerator.gaussian(noise);
             PartGenerator.Scan scan = gen.newScan();
             Nominal nominal = new Nominal.CornerBlend(m.corner(), m.nominalRadius());
-            double resolution = Simulation.defaultResolution(m);
             Inspector inspector = new Inspector();
             for (int i = 0; i < 60; i++) {
                 Part part = gen.draw(i, geometry, g);
@@ -98,7 +97,8 @@ class VerdictPathTest {
                 MeasuredSection section = new MeasuredSection(nominal, pts);
                 for (double u : new double[] {0, 2 * m.noise()}) {
                     for (InspectionCallout c : CALLOUTS) {
-                        InspectionRequest req = new InspectionRequest(m.units(), nominal, c, pts, resolution, Double.NaN, false, u);
+                        InspectionRequest req = new InspectionRequest(m.units(), nominal, c, pts, Simulation.defaultResolution(m, c), Double.NaN,
+                                false, u);
                         Said want = full(req);
                         Said got = fast(inspector, req, section);
                         compared++;

@@ -30,6 +30,35 @@ class CornerAndZonesTest {
         return new double[][] {xs, ys};
     }
 
+    /**
+     * A perfect R2 blend between R1.9 and R2.1, with one point as a scan with 1 µm noise measured it:
+     * 0.12 µm on the material side of leg b, 0.011 before the R1.9 arc's tangent point, where the
+     * zone is thinner than the resolution. Within the resolution (5 µm) of where it lies, the point
+     * lies on every arc up to about R2.03 (plane geometry: the blend through the point moved 5 µm off
+     * the leg), so the part conforms. It was failed: read only as on the leg, the point allowed radii
+     * up to 1.889 alone.
+     */
+    @Test
+    void aPointWithinTheResolutionOfALegAllowsEveryArcPassingWithinTheResolutionOfIt() {
+        Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.FILLET);
+        double[][] p = arc(c, 2, 41);
+        double[] xs = java.util.Arrays.copyOf(p[0], 42), ys = java.util.Arrays.copyOf(p[1], 42);
+        xs[41] = -0.000124;
+        ys[41] = 1.889;
+        RadiusZone zone = new RadiusZone(c, 1.9, 2.1, 0.005);
+        RadiusEnvelope e = zone.evaluate(xs, ys, 42);
+        assertThat(e.pass()).isTrue();
+        // the largest radius the point allows: the blend through (0.005 - 0.000124, 1.889), by hand
+        double d = 0.005 - 0.000124, t = 1.889;
+        RadiusEnvelope alone = zone.evaluate(new double[] {-0.000124}, new double[] {1.889}, 1);
+        assertThat(alone.smallest()).isCloseTo(d + t + Math.sqrt(2 * d * t), within(1e-9));
+        assertThat(zone.excess(-0.000124, 1.889)).isNegative();
+        assertThat(zone.decide(xs, ys, 42, 0, null)).isTrue();
+        // a point beyond the leg by more than the resolution still lies beyond every contour
+        xs[41] = -0.006;
+        assertThat(zone.evaluate(xs, ys, 42).pass()).isFalse();
+    }
+
     @Test
     void limitsOutsideTheEnvelopeFail() {
         Corner c = corner(90, 0, BlendKind.ROUND);
@@ -40,11 +69,13 @@ class CornerAndZonesTest {
 
     @Test
     void pointOnALegAllowsEveryRadiusWhoseTangentPointIsBeyondIt() {
-        // 90° corner: a point on leg A at 1.5 from the vertex lies on every contour with ρ·cot45° >= 1.5.
+        // 90° corner: a point on leg A at 1.5 from the vertex lies on every contour with ρ·cot45° >= 1.5,
+        // and within the resolution (1e-6) of the arcs up to the blend through (1.5, 1e-6):
+        // ρ = t + d + √(2td) for a 90° corner (plane geometry), 1.5 + 0.0017
         Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.ROUND);
         RadiusEnvelope e = new RadiusZone(c, 1, 2, 1e-6).evaluate(new double[] {1.5}, new double[] {0}, 1);
         assertThat(e.largest()).isEqualTo(0);
-        assertThat(e.smallest()).isCloseTo(1.5, within(1e-12));
+        assertThat(e.smallest()).isCloseTo(1.5 + 1e-6 + Math.sqrt(2 * 1.5e-6), within(1e-12));
         assertThat(e.onLegs()).isEqualTo(1);
     }
 

@@ -212,7 +212,9 @@ class CheckPlotAndLayoutGuiTest {
             // the assertions below then say which side is short, and by how much
         }
         int[] decide = sides.get();
-        assertThat(decide[0]).isGreaterThanOrEqualTo(280);
+        GuiSupport.screenshot(window.frame(), "layout-decide-1024x700-light");
+        assertThat(decide[0]).as("Decide form width; columns %s", java.util.Arrays.toString(
+                GuiSupport.onEdt(() -> window.columnWidths()))).isGreaterThanOrEqualTo(280);
         assertThat(decide[1]).isGreaterThanOrEqualTo(320);
         // the Check plot keeps a usable height under the verdict and figures
         GuiSupport.onEdt(() -> window.showTab(CHECK));
