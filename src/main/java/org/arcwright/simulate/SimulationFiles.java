@@ -36,8 +36,8 @@ import org.arcwright.tolerance.Units;
  *   "callouts": [{"type": "radius", "min": 1.9, "max": 2.1}, ...],   as in the inspection file
  *   "parts": 20000, "seed": 11,                                       defaults 10000 and 1
  *   "resolution": .., "window": ..                                    as in the inspection file; the
- *                                                                     resolution defaults to 3 × noise
- *                                                                     (at least the units' resolution)
+ *                                                                     resolution defaults per callout to
+ *                                                                     Simulation.defaultResolution
  * }
  * </pre>
  */

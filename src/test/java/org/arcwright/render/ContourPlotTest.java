@@ -19,6 +19,7 @@ import org.arcwright.inspect.InspectionFiles;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.testing.Golden;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -47,29 +48,20 @@ class ContourPlotTest {
         return String.join("\n", lines) + "\n";
     }
 
-    private void assertGolden(String name, String actual) throws IOException {
-        Path golden = Path.of("src/test/resources/golden/inspect", name);
-        if (Boolean.getBoolean("golden.update") || !Files.exists(golden)) {
-            Files.createDirectories(golden.getParent());
-            Files.writeString(golden, actual, StandardCharsets.UTF_8);
-        }
-        assertThat(actual).isEqualTo(Files.readString(golden, StandardCharsets.UTF_8));
-    }
-
     @Test
     void radiusPlotShowsVerdictEnvelopeFitsWorstPointAndMagnification() throws IOException {
         Path svg = dir.resolve("r.svg");
         new ContourPlot().write(inspect("bracket-round-r.json"), svg);
         String text = Files.readString(svg);
         assertThat(text).as("no clip paths, which some SVG viewers ignore").doesNotContain("clip-path");
-        assertGolden("plot-bracket-round-r.txt", content(text));
+        Golden.assertMatches("inspect/plot-bracket-round-r.txt", content(text));
     }
 
     @Test
     void filletProfilePlotShowsZoneDispositionAndRequiredZone() throws IOException {
         Path svg = dir.resolve("p.svg");
         new ContourPlot().write(inspect("housing-fillet-profile.json"), svg);
-        assertGolden("plot-housing-fillet-profile.txt", content(Files.readString(svg)));
+        Golden.assertMatches("inspect/plot-housing-fillet-profile.txt", content(Files.readString(svg)));
     }
 
     /**
