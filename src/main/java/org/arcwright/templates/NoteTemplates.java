@@ -72,6 +72,11 @@ public final class NoteTemplates {
         if (!t.perFeature()) return t.fill(ctx.forPart());
         List<String> blocks = new ArrayList<>();
         for (RadiusFeature f : worksheet.features()) {
+            if (featureId != null && f.id().equals(featureId) && f.chosen() == null) {
+                // the same rule as for the whole part: a per-feature note is filled for decided features only
+                throw InputProblem.ofField("feature", f.id() + " has no callout chosen yet, so there is no note to fill: "
+                        + "decide it first (arcwright advise, or the Decide view)");
+            }
             if (featureId != null ? f.id().equals(featureId) : f.chosen() != null) {
                 blocks.add(t.fill(ctx.forFeature(f)).strip());
             }

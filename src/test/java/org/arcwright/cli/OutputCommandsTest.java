@@ -77,6 +77,11 @@ class OutputCommandsTest {
         assertThat(r.out()).isEqualTo("EDGES:\n- F4 Shaft end edge round: BREAK EDGE R1 ±0.2 (ISO 2768-m).\n");
         Run one = run("drawing-note", "callout-note", DEMO, "--feature", "F2");
         assertThat(one.out()).startsWith("F2 Bearing seat fillet").doesNotContain("F1 ");
+        // an undecided feature has no note: said, not printed as a dangling "F5 <label>: " line
+        Run open = run("drawing-note", "callout-note", DEMO, "--feature", "F5");
+        assertThat(open.code()).isEqualTo(Cli.BAD_INPUT);
+        assertThat(open.out()).isEmpty();
+        assertThat(open.err()).contains("F5 has no callout chosen yet");
     }
 
     @Test
