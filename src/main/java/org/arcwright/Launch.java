@@ -1,6 +1,7 @@
 package org.arcwright;
 
 import java.awt.GraphicsEnvironment;
+import org.arcwright.app.DesktopApp;
 import org.arcwright.cli.Cli;
 
 /**
@@ -13,7 +14,7 @@ public final class Launch {
     public static void main(String[] args) {
         if (args.length == 0) {
             if (!GraphicsEnvironment.isHeadless()) {
-                org.arcwright.app.DesktopApp.launch(args);
+                DesktopApp.launch(args);
                 return;
             }
             Cli.run(new String[] {"--help"});

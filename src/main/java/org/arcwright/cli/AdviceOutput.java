@@ -5,9 +5,12 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.util.List;
+import java.util.Locale;
 import java.util.Map;
+import java.util.function.IntFunction;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.model.Loading;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.DesignChange;
 import org.arcwright.rules.Need;
@@ -79,13 +82,13 @@ final class AdviceOutput {
 
     /** As above, with a block printed before the cards and extra lines per card (e.g. simulated evidence). */
     void printText(PrintWriter out, Advice advice, int limit, Runnable beforeCards,
-                   java.util.function.IntFunction<List<String>> cardExtra) {
+                   IntFunction<List<String>> cardExtra) {
         DesignCase c = advice.designCase();
         out.printf("%s%s R%s %s, %s, %s, %s, %s%s%s%n",
                 c.feature() == null ? "" : c.feature() + ": ", c.kind().key(),
                 Numbers.plain(c.nominalRadius()), c.units().symbol(), c.function().key(),
-                c.loading() == org.arcwright.model.Loading.NONE ? "no load" : c.loading().key() + " load",
-                c.process().key(), c.standard().key().toUpperCase(java.util.Locale.ROOT),
+                c.loading() == Loading.NONE ? "no load" : c.loading().key() + " load",
+                c.process().key(), c.standard().key().toUpperCase(Locale.ROOT),
                 c.hasDatums() ? ", datums " + String.join(" ", c.datums()) : ", no datums",
                 (c.formMatters() ? ", form matters" : "") + (c.locationMatters() ? ", location matters" : "")
                         + (c.cornerAngle() == null ? "" : ", " + Numbers.plain(c.cornerAngle()) + "° corner"));
@@ -155,7 +158,7 @@ final class AdviceOutput {
                 + num(m, "max", p) + " " + u);
         if (m.containsKey("zone")) append(sb, "zone", m.get("zone") + (m.containsKey("tierZones") ? " (tiers " + m.get("tierZones") + ")" : ""));
         Object angle = m.get("angle");
-        boolean square = angle instanceof Number n && n.doubleValue() == org.arcwright.model.DesignCase.SQUARE_CORNER;
+        boolean square = angle instanceof Number n && n.doubleValue() == DesignCase.SQUARE_CORNER;
         append(sb, "crescent", num(m, "crescentWidth", p + 1)
                 + (angle == null || square ? "" : " at a " + Numbers.plain(((Number) angle).doubleValue()) + "° corner"));
         append(sb, "equivalent profile zone", num(m, "equivalentProfileZone", p + 1));

@@ -2,7 +2,10 @@ package org.arcwright.cli;
 
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.Closeable;
+import java.io.IOException;
 import java.io.PrintWriter;
+import java.io.UncheckedIOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -18,6 +21,7 @@ import org.arcwright.rules.CaseTable;
 import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.rules.RuleBook;
+import org.arcwright.simulate.ProcessDefaults;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.RadiusFeature;
 import org.arcwright.worksheet.WorksheetFiles;
@@ -84,10 +88,10 @@ final class AdviseCommand implements Callable<Integer> {
         for (InputProblem p : book.problems()) err.println("arcwright advise: pack problem, skipped: " + p.getMessage());
         Advisors.WithNotes wn = noNotes ? new Advisors.WithNotes(Advisors.standard(stack, book), () -> { })
                 : Advisors.withNotes(stack, book, notesIndex, w -> err.println("arcwright advise: " + w));
-        try (java.io.Closeable store = wn.store()) {
+        try (Closeable store = wn.store()) {
             return advise(wn.advisor(), stack, book, out);
-        } catch (java.io.IOException e) {
-            throw new java.io.UncheckedIOException(e);
+        } catch (IOException e) {
+            throw new UncheckedIOException(e);
         }
     }
 
@@ -128,7 +132,7 @@ final class AdviseCommand implements Callable<Integer> {
         }
         List<AdviceSimulation.Report> sims = new ArrayList<>();
         if (simulate) {
-            var defaults = org.arcwright.simulate.ProcessDefaults.load(stack);
+            var defaults = ProcessDefaults.load(stack);
             int n = simulateParts == null ? AdviceSimulation.DEFAULT_PARTS : simulateParts;
             long seed = simulateSeed == null ? AdviceSimulation.DEFAULT_SEED : simulateSeed;
             for (int i = 0; i < advice.size(); i++) {

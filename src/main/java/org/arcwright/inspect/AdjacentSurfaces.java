@@ -1,5 +1,7 @@
 package org.arcwright.inspect;
 
+import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
 import org.arcwright.io.InputProblem;
@@ -100,7 +102,7 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
             work = next;
         }
         double t = nominal.tangentDistance(largestRadius);
-        java.util.ArrayList<String> notes = new java.util.ArrayList<>();
+        ArrayList<String> notes = new ArrayList<>();
         Surface sa = surface(fa, nominal.vertex(), nominal.legA(), nominal.legA(), t, "a", largestRadius, notes);
         Surface sb = surface(fb, nominal.vertex(), nominal.legB(), nominal.legB(), t, "b", largestRadius, notes);
         Corner c = cornerOf(nominal, sa, sb);
@@ -181,8 +183,8 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
         void ensure(int size) {
             if (x.length >= size) return;
             int grown = Math.max(size, 2 * x.length);
-            x = java.util.Arrays.copyOf(x, grown);
-            y = java.util.Arrays.copyOf(y, grown);
+            x = Arrays.copyOf(x, grown);
+            y = Arrays.copyOf(y, grown);
             r = new double[grown];
         }
     }

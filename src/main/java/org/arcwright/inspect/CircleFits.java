@@ -1,5 +1,6 @@
 package org.arcwright.inspect;
 
+import java.util.Arrays;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -427,12 +428,12 @@ public final class CircleFits {
     }
 
     private static int[] dedupe(int[] v) {
-        return java.util.Arrays.stream(v).distinct().toArray();
+        return Arrays.stream(v).distinct().toArray();
     }
 
     /** Keeps the point constraints of a working set, dropping the box. */
     private static int[] pointConstraints(int[] working, int n) {
-        return java.util.Arrays.stream(working).filter(j -> j < 2 * n).toArray();
+        return Arrays.stream(working).filter(j -> j < 2 * n).toArray();
     }
 
     private static double distances(double[] xs, double[] ys, int n, double cx, double cy, double[] d, double[] ux,
@@ -454,8 +455,8 @@ public final class CircleFits {
     private static int[] initialSectors(double[] xs, double[] ys, int n, double cx, double cy, double[] d) {
         int sectors = 16;
         int[] far = new int[sectors], near = new int[sectors];
-        java.util.Arrays.fill(far, -1);
-        java.util.Arrays.fill(near, -1);
+        Arrays.fill(far, -1);
+        Arrays.fill(near, -1);
         for (int i = 0; i < n; i++) {
             // pseudo-angle in [0, 4), monotonic in the true angle, without trigonometry
             double dx = xs[i] - cx, dy = ys[i] - cy;
@@ -473,7 +474,7 @@ public final class CircleFits {
             if (far[s] >= 0) out[k++] = far[s];
             if (near[s] >= 0) out[k++] = n + near[s];
         }
-        return java.util.Arrays.copyOf(out, k);
+        return Arrays.copyOf(out, k);
     }
 
     /**
@@ -497,7 +498,7 @@ public final class CircleFits {
 
         @Override
         public double row(int j, double[] row) {
-            java.util.Arrays.fill(row, 0);
+            Arrays.fill(row, 0);
             if (j < n) {
                 row[0] = -ux[j]; row[1] = -uy[j]; row[3] = -1;
                 return -d[j];

@@ -1,6 +1,7 @@
 package org.arcwright.inspect;
 
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
 import org.arcwright.io.InputProblem;
 import org.arcwright.zone.Corner;
@@ -217,11 +218,11 @@ public final class ControlledRadiusCheck {
                 }
                 if (count == los.length) {
                     int grown = count * 2;
-                    los = java.util.Arrays.copyOf(los, grown);
-                    his = java.util.Arrays.copyOf(his, grown);
-                    circles = java.util.Arrays.copyOf(circles, grown);
-                    scatter = java.util.Arrays.copyOf(scatter, grown);
-                    spread = java.util.Arrays.copyOf(spread, grown);
+                    los = Arrays.copyOf(los, grown);
+                    his = Arrays.copyOf(his, grown);
+                    circles = Arrays.copyOf(circles, grown);
+                    scatter = Arrays.copyOf(scatter, grown);
+                    spread = Arrays.copyOf(spread, grown);
                 }
                 Circle c = CircleFits.taubin(xs, ys, lo, hi);
                 los[count] = lo;

@@ -1,5 +1,6 @@
 package org.arcwright.inspect;
 
+import java.math.BigDecimal;
 import java.util.List;
 import java.util.Set;
 import org.arcwright.io.InputProblem;
@@ -102,6 +103,6 @@ public sealed interface InspectionCallout {
     }
 
     private static String num(double v) {
-        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 }

@@ -1,15 +1,20 @@
 package org.arcwright.inspect;
 
+import com.fasterxml.jackson.annotation.JsonCreator;
+import com.fasterxml.jackson.annotation.JsonProperty;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonToken;
 import com.fasterxml.jackson.databind.DeserializationContext;
 import com.fasterxml.jackson.databind.JsonDeserializer;
+import com.fasterxml.jackson.databind.JsonMappingException;
 import com.fasterxml.jackson.databind.annotation.JsonDeserialize;
 import java.io.IOException;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.EnumSet;
 import java.util.List;
+import java.util.Objects;
 import java.util.Set;
 import java.util.function.Supplier;
 import org.arcwright.io.InputProblem;
@@ -54,7 +59,7 @@ public final class InspectionFiles {
     private final JsonFiles json;
 
     public InspectionFiles(JsonFiles json) {
-        this.json = java.util.Objects.requireNonNull(json, "json");
+        this.json = Objects.requireNonNull(json, "json");
     }
 
     /** Reads {@code file}; a {@code pointsFile} is resolved against its folder. */
@@ -128,11 +133,11 @@ public final class InspectionFiles {
     public static final class CornerDto {
         final Corner corner;
 
-        @com.fasterxml.jackson.annotation.JsonCreator
-        CornerDto(@com.fasterxml.jackson.annotation.JsonProperty("vertex") double[] vertex,
-                  @com.fasterxml.jackson.annotation.JsonProperty("legA") double[] legA,
-                  @com.fasterxml.jackson.annotation.JsonProperty("legB") double[] legB,
-                  @com.fasterxml.jackson.annotation.JsonProperty("kind") String kind) {
+        @JsonCreator
+        CornerDto(@JsonProperty("vertex") double[] vertex,
+                  @JsonProperty("legA") double[] legA,
+                  @JsonProperty("legB") double[] legB,
+                  @JsonProperty("kind") String kind) {
             Point2 v = point(vertex, "vertex"), a = point(legA, "legA"), b = point(legB, "legB");
             if (kind == null) throw new IllegalArgumentException("kind: missing; use round or fillet");
             BlendKind k = null;
@@ -150,9 +155,9 @@ public final class InspectionFiles {
     public static final class ContourDto {
         final Contour contour;
 
-        @com.fasterxml.jackson.annotation.JsonCreator
-        ContourDto(@com.fasterxml.jackson.annotation.JsonProperty("air") String air,
-                   @com.fasterxml.jackson.annotation.JsonProperty("segments") List<SegmentDto> segments) {
+        @JsonCreator
+        ContourDto(@JsonProperty("air") String air,
+                   @JsonProperty("segments") List<SegmentDto> segments) {
             if (air == null) throw new IllegalArgumentException("air: missing; use left or right");
             Side side = "left".equalsIgnoreCase(air) ? Side.LEFT : "right".equalsIgnoreCase(air) ? Side.RIGHT : null;
             if (side == null) throw new IllegalArgumentException("air: unknown side '" + air + "'; use left or right");
@@ -167,12 +172,12 @@ public final class InspectionFiles {
     public static final class SegmentDto {
         final Segment segment;
 
-        @com.fasterxml.jackson.annotation.JsonCreator
-        SegmentDto(@com.fasterxml.jackson.annotation.JsonProperty("type") String type,
-                   @com.fasterxml.jackson.annotation.JsonProperty("from") double[] from,
-                   @com.fasterxml.jackson.annotation.JsonProperty("to") double[] to,
-                   @com.fasterxml.jackson.annotation.JsonProperty("centre") double[] centre,
-                   @com.fasterxml.jackson.annotation.JsonProperty("turn") String turn) {
+        @JsonCreator
+        SegmentDto(@JsonProperty("type") String type,
+                   @JsonProperty("from") double[] from,
+                   @JsonProperty("to") double[] to,
+                   @JsonProperty("centre") double[] centre,
+                   @JsonProperty("turn") String turn) {
             Point2 a = point(from, "from"), b = point(to, "to");
             if ("line".equals(type)) {
                 if (centre != null || turn != null) throw new IllegalArgumentException("a line takes only from and to");
@@ -203,16 +208,16 @@ public final class InspectionFiles {
     public static final class CalloutDto {
         final InspectionCallout callout;
 
-        @com.fasterxml.jackson.annotation.JsonCreator
-        CalloutDto(@com.fasterxml.jackson.annotation.JsonProperty("type") String type,
-                   @com.fasterxml.jackson.annotation.JsonProperty("min") Double min,
-                   @com.fasterxml.jackson.annotation.JsonProperty("max") Double max,
-                   @com.fasterxml.jackson.annotation.JsonProperty("zone") Double zone,
-                   @com.fasterxml.jackson.annotation.JsonProperty("outward") Double outward,
-                   @com.fasterxml.jackson.annotation.JsonProperty("offset") Double offset,
-                   @com.fasterxml.jackson.annotation.JsonProperty("free") List<String> free,
-                   @com.fasterxml.jackson.annotation.JsonProperty("dynamic") Boolean dynamic,
-                   @com.fasterxml.jackson.annotation.JsonProperty("tiers") List<TierDto> tiers) {
+        @JsonCreator
+        CalloutDto(@JsonProperty("type") String type,
+                   @JsonProperty("min") Double min,
+                   @JsonProperty("max") Double max,
+                   @JsonProperty("zone") Double zone,
+                   @JsonProperty("outward") Double outward,
+                   @JsonProperty("offset") Double offset,
+                   @JsonProperty("free") List<String> free,
+                   @JsonProperty("dynamic") Boolean dynamic,
+                   @JsonProperty("tiers") List<TierDto> tiers) {
             if (type == null) throw new IllegalArgumentException("type: missing; use radius, controlled-radius, profile or composite-profile");
             switch (type) {
                 case "radius", "controlled-radius" -> {
@@ -257,9 +262,9 @@ public final class InspectionFiles {
     public static final class TierDto {
         final InspectionCallout.Tier tier;
 
-        @com.fasterxml.jackson.annotation.JsonCreator
-        TierDto(@com.fasterxml.jackson.annotation.JsonProperty("zone") Double zone,
-                @com.fasterxml.jackson.annotation.JsonProperty("free") List<String> free) {
+        @JsonCreator
+        TierDto(@JsonProperty("zone") Double zone,
+                @JsonProperty("free") List<String> free) {
             if (zone == null) throw new IllegalArgumentException("zone: missing");
             Set<Freedom> f = freedoms(free, "free");
             tier = wrap(null, () -> new InspectionCallout.Tier(zone, f));
@@ -282,22 +287,22 @@ public final class InspectionFiles {
         @Override
         public PointSet deserialize(JsonParser p, DeserializationContext ctxt) throws IOException {
             if (p.currentToken() != JsonToken.START_ARRAY) {
-                throw com.fasterxml.jackson.databind.JsonMappingException.from(p, "expected an array of [x, y] pairs");
+                throw JsonMappingException.from(p, "expected an array of [x, y] pairs");
             }
             double[] xs = new double[256], ys = new double[256];
             int n = 0;
             JsonToken t;
             while ((t = p.nextToken()) != JsonToken.END_ARRAY) {
                 if (t != JsonToken.START_ARRAY) {
-                    throw com.fasterxml.jackson.databind.JsonMappingException.from(p, "[" + n + "]: expected [x, y], got " + t.asString());
+                    throw JsonMappingException.from(p, "[" + n + "]: expected [x, y], got " + t.asString());
                 }
                 double x = coordinate(p, n, "x"), y = coordinate(p, n, "y");
                 if (p.nextToken() != JsonToken.END_ARRAY) {
-                    throw com.fasterxml.jackson.databind.JsonMappingException.from(p, "[" + n + "]: expected exactly two numbers [x, y]");
+                    throw JsonMappingException.from(p, "[" + n + "]: expected exactly two numbers [x, y]");
                 }
                 if (n == xs.length) {
-                    xs = java.util.Arrays.copyOf(xs, 2 * n);
-                    ys = java.util.Arrays.copyOf(ys, 2 * n);
+                    xs = Arrays.copyOf(xs, 2 * n);
+                    ys = Arrays.copyOf(ys, 2 * n);
                 }
                 xs[n] = x;
                 ys[n] = y;
@@ -309,12 +314,12 @@ public final class InspectionFiles {
         private static double coordinate(JsonParser p, int i, String which) throws IOException {
             JsonToken t = p.nextToken();
             if (t != JsonToken.VALUE_NUMBER_INT && t != JsonToken.VALUE_NUMBER_FLOAT) {
-                throw com.fasterxml.jackson.databind.JsonMappingException.from(p, "[" + i + "]: " + which
+                throw JsonMappingException.from(p, "[" + i + "]: " + which
                         + " must be a number, got " + (t == JsonToken.END_ARRAY ? "]" : p.getText()));
             }
             double v = p.getDoubleValue();
             if (!Double.isFinite(v)) {
-                throw com.fasterxml.jackson.databind.JsonMappingException.from(p, "[" + i + "]: " + which + " is not a finite number");
+                throw JsonMappingException.from(p, "[" + i + "]: " + which + " is not a finite number");
             }
             return v;
         }

@@ -1,6 +1,7 @@
 package org.arcwright.inspect;
 
 import java.util.List;
+import java.util.Objects;
 import org.arcwright.zone.RadiusEnvelope;
 
 /**
@@ -29,7 +30,7 @@ public record InspectionResult(InspectionRequest request, Verdict verdict, Radiu
                                Fits fits, AdjacentSurfaces surfaces, Worst worst, List<String> notes,
                                List<Comparison> comparisons) {
     public InspectionResult {
-        java.util.Objects.requireNonNull(verdict, "verdict");
+        Objects.requireNonNull(verdict, "verdict");
         if (verdict == Verdict.PASS && worst != null && worst.excess() > request.resolution()) {
             throw new IllegalStateException("a pass whose worst point lies " + worst.excess() + " beyond the limits ("
                     + worst.measure() + ")");

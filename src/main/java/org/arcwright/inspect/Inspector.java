@@ -1,5 +1,8 @@
 package org.arcwright.inspect;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
@@ -484,31 +487,31 @@ public final class Inspector {
      * passes, since the verdict allows the same slack.
      */
     public static String down(double v, double slack) {
-        String near = rounded(v, java.math.RoundingMode.HALF_EVEN);
-        return Double.isFinite(v) && Double.parseDouble(near) - v <= slack ? near : rounded(v, java.math.RoundingMode.FLOOR);
+        String near = rounded(v, RoundingMode.HALF_EVEN);
+        return Double.isFinite(v) && Double.parseDouble(near) - v <= slack ? near : rounded(v, RoundingMode.FLOOR);
     }
 
     /** {@code v} to 5 significant digits for the largest radius or a zone needed: up, unless the nearest is within {@code slack} below. */
     public static String up(double v, double slack) {
-        String near = rounded(v, java.math.RoundingMode.HALF_EVEN);
-        return Double.isFinite(v) && v - Double.parseDouble(near) <= slack ? near : rounded(v, java.math.RoundingMode.CEILING);
+        String near = rounded(v, RoundingMode.HALF_EVEN);
+        return Double.isFinite(v) && v - Double.parseDouble(near) <= slack ? near : rounded(v, RoundingMode.CEILING);
     }
 
-    private static String rounded(double v, java.math.RoundingMode mode) {
+    private static String rounded(double v, RoundingMode mode) {
         if (Double.isNaN(v)) return "none";
         if (Double.isInfinite(v)) return "infinite (flat)";
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(5, mode)).stripTrailingZeros().toPlainString();
+        return new BigDecimal(v).round(new MathContext(5, mode)).stripTrailingZeros().toPlainString();
     }
 
     /** Derived limits are shown and judged to 4 significant digits, as a drawing would state them. */
     private static double round4(double v) {
         if (!Double.isFinite(v) || v == 0) return v;
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).doubleValue();
+        return new BigDecimal(v).round(new MathContext(4)).doubleValue();
     }
 
     static String fmt(double v) {
         if (Double.isNaN(v)) return "none";
         if (Double.isInfinite(v)) return "infinite (flat)";
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(5)).stripTrailingZeros().toPlainString();
+        return new BigDecimal(v).round(new MathContext(5)).stripTrailingZeros().toPlainString();
     }
 }

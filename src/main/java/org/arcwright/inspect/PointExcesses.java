@@ -1,5 +1,6 @@
 package org.arcwright.inspect;
 
+import org.arcwright.zone.Corner;
 import org.arcwright.zone.RadiusZone;
 
 /**
@@ -34,7 +35,7 @@ public final class PointExcesses {
         if (q.callout() instanceof InspectionCallout.RadiusLimits && q.nominal() instanceof Nominal.CornerBlend) {
             InspectionCallout.RadiusLimits rl = (InspectionCallout.RadiusLimits) q.callout();
             // the zone the verdict read: tangent to the fitted adjacent surfaces
-            org.arcwright.zone.Corner corner = r.surfaces() != null ? r.surfaces().corner() : ((Nominal.CornerBlend) q.nominal()).corner();
+            Corner corner = r.surfaces() != null ? r.surfaces().corner() : ((Nominal.CornerBlend) q.nominal()).corner();
             rz = new RadiusZone(corner, rl.min(), rl.max(), q.resolution());
         }
         return new PointExcesses(q, rz, po);

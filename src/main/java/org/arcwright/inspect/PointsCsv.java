@@ -3,6 +3,7 @@ package org.arcwright.inspect;
 import java.io.BufferedReader;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.nio.charset.MalformedInputException;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.Arrays;
@@ -61,7 +62,7 @@ public final class PointsCsv {
             }
         } catch (NoSuchFileException e) {
             throw new InputProblem(src, 0, 0, "pointsFile", "file not found");
-        } catch (java.nio.charset.MalformedInputException e) {
+        } catch (MalformedInputException e) {
             throw new InputProblem(src, lineNo + 1, 0, null, "not UTF-8 text");
         } catch (IOException e) {
             throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);

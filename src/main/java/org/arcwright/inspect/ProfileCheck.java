@@ -1,5 +1,7 @@
 package org.arcwright.inspect;
 
+import java.util.Arrays;
+import java.util.Objects;
 import java.util.Set;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.ProfileZone;
@@ -28,7 +30,7 @@ public final class ProfileCheck {
      * @param resolution slack in the verdict, drawing units
      */
     public ProfileCheck(Contour contour, double pivotX, double pivotY, double resolution) {
-        this.contour = java.util.Objects.requireNonNull(contour, "contour");
+        this.contour = Objects.requireNonNull(contour, "contour");
         this.pivotX = pivotX;
         this.pivotY = pivotY;
         this.resolution = resolution;
@@ -245,7 +247,7 @@ public final class ProfileCheck {
                 out[k++] = out[i];
             }
         }
-        return java.util.Arrays.copyOf(out, k);
+        return Arrays.copyOf(out, k);
     }
 
     /** Current registration and the measured deviations under it. */
@@ -329,7 +331,7 @@ public final class ProfileCheck {
 
         @Override
         public double row(int j, double[] row) {
-            java.util.Arrays.fill(row, 0);
+            Arrays.fill(row, 0);
             if (j < 2 * n) {
                 int i = j < n ? j : j - n;
                 gradient(i, row);

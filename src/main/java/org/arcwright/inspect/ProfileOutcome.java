@@ -1,5 +1,6 @@
 package org.arcwright.inspect;
 
+import java.util.Set;
 import org.arcwright.zone.ProfileZone;
 
 /**
@@ -18,7 +19,7 @@ import org.arcwright.zone.ProfileZone;
  * @param worstExcess how far it lies outside (negative: inside by that much)
  * @param deviations signed deviation of each point after registration (positive toward air)
  */
-public record ProfileOutcome(ProfileZone zone, java.util.Set<Freedom> free, boolean dynamic, double requiredZone,
+public record ProfileOutcome(ProfileZone zone, Set<Freedom> free, boolean dynamic, double requiredZone,
                              Registration registration, double maxOutward, double maxInward, boolean pass, int worst,
                              double worstExcess, double[] deviations) {
 }

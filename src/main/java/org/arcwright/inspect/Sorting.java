@@ -1,5 +1,7 @@
 package org.arcwright.inspect;
 
+import java.util.Arrays;
+
 /** Sorting of point indices by a primitive key, without boxing (a million points sort in place). */
 final class Sorting {
     private Sorting() {}
@@ -11,7 +13,7 @@ final class Sorting {
         boolean sorted = true;
         for (int i = 1; i < n && sorted; i++) if (key[i] < key[i - 1]) sorted = false;
         if (sorted) return idx;
-        double[] k = java.util.Arrays.copyOf(key, n);
+        double[] k = Arrays.copyOf(key, n);
         sort(k, idx, 0, n - 1);
         return idx;
     }

@@ -1,5 +1,7 @@
 package org.arcwright.inspect;
 
+import java.util.Locale;
+
 /**
  * The point (or CR window) that exceeds its callout most, or, on a pass, comes nearest to doing so.
  *
@@ -19,7 +21,7 @@ package org.arcwright.inspect;
 public record Worst(int index, double x, double y, double excess, String measure, String unit, String text) {
     /** A worst point without unit or text (described from its fields). */
     public Worst(int index, double x, double y, double excess, String measure) {
-        this(index, x, y, excess, measure, "", String.format(java.util.Locale.ROOT, "point #%d: %s %s (%s)", index,
+        this(index, x, y, excess, measure, "", String.format(Locale.ROOT, "point #%d: %s %s (%s)", index,
                 excess > 0 ? "outside by" : "inside by", Inspector.fmt(Math.abs(excess)), measure));
     }
 }

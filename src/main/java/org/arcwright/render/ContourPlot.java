@@ -10,10 +10,13 @@ import java.awt.geom.AffineTransform;
 import java.awt.geom.Ellipse2D;
 import java.awt.geom.Line2D;
 import java.awt.geom.Path2D;
+import java.awt.geom.PathIterator;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
+import java.math.BigDecimal;
+import java.math.MathContext;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -38,6 +41,7 @@ import org.arcwright.zone.Point2;
 import org.arcwright.zone.ProfileZone;
 import org.arcwright.zone.RadiusZone;
 import org.arcwright.zone.Segment;
+import org.jfree.svg.SVGGraphics2D;
 
 /**
  * Plots a measured section against its zone: the nominal contour, the zone's boundaries, the points
@@ -75,7 +79,7 @@ public final class ContourPlot {
     public void write(InspectionResult r, Path out) {
         String name = out.getFileName().toString().toLowerCase(Locale.ROOT);
         if (name.endsWith(".svg")) {
-            org.jfree.svg.SVGGraphics2D g = new org.jfree.svg.SVGGraphics2D(WIDTH, HEIGHT);
+            SVGGraphics2D g = new SVGGraphics2D(WIDTH, HEIGHT);
             g.setDefsKeyPrefix("arcwright-");
             draw(r, g);
             AtomicFiles.writeString(out, g.getSVGDocument());
@@ -514,7 +518,7 @@ public final class ContourPlot {
     private static Path2D reverse(Path2D p) {
         List<double[]> pts = new ArrayList<>();
         double[] c = new double[6];
-        for (java.awt.geom.PathIterator it = p.getPathIterator(null); !it.isDone(); it.next()) {
+        for (PathIterator it = p.getPathIterator(null); !it.isDone(); it.next()) {
             it.currentSegment(c);
             pts.add(new double[] {c[0], c[1]});
         }
@@ -530,7 +534,7 @@ public final class ContourPlot {
         if (Double.isNaN(v)) return "none";
         if (Double.isInfinite(v)) return "infinite";
         if (v == 0) return "0";
-        return new java.math.BigDecimal(v).round(new java.math.MathContext(4)).stripTrailingZeros().toPlainString();
+        return new BigDecimal(v).round(new MathContext(4)).stripTrailingZeros().toPlainString();
     }
 
     /** World to screen, with deviations from the nominal magnified. */

@@ -3,9 +3,12 @@ package org.arcwright.rules;
 import java.math.BigDecimal;
 import java.math.RoundingMode;
 import java.util.ArrayList;
+import java.util.EnumSet;
+import java.util.HashMap;
 import java.util.HashSet;
 import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
@@ -66,7 +69,7 @@ public final class Advisor {
         this.designChanges = new DesignChanges(checks);
         this.entries = book.entries().toArray(new RuleBook.Entry[0]);
         this.whens = new When[entries.length];
-        java.util.EnumSet<Fact> used = java.util.EnumSet.noneOf(Fact.class);
+        EnumSet<Fact> used = EnumSet.noneOf(Fact.class);
         for (int i = 0; i < entries.length; i++) {
             whens[i] = entries[i].rule().when();
             used.addAll(whens[i].conditions().keySet());
@@ -112,7 +115,7 @@ public final class Advisor {
         Needs needs = Needs.derive(c, checks, warnings, added);
         int places = Sizer.places(c);
         List<Recommendation> recs = new ArrayList<>();
-        java.util.Map<Double, String> capabilitySources = new java.util.HashMap<>(4);
+        Map<Double, String> capabilitySources = new HashMap<>(4);
         for (RuleBook.Entry e : firing) {
             if (e.rule().recommend() == null) continue;
             Recommendation r = fromRule(e, needs, facts, places, warnings, capabilitySources, preference);
@@ -223,7 +226,7 @@ public final class Advisor {
     }
 
     private Recommendation fromRule(RuleBook.Entry e, Needs needs, Object[] facts, int places, List<String> warnings,
-                                    java.util.Map<Double, String> capabilitySources, Preference preference) {
+                                    Map<Double, String> capabilitySources, Preference preference) {
         Rule rule = e.rule();
         CalloutPlan plan = rule.recommend();
         DesignCase c = needs.designCase();

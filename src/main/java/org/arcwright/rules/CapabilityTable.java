@@ -1,5 +1,6 @@
 package org.arcwright.rules;
 
+import java.util.Collections;
 import org.arcwright.model.Process;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
@@ -53,7 +54,7 @@ public record CapabilityTable(String id, String title, String source, Map<String
         this.id = id;
         this.title = title;
         this.source = source;
-        this.processes = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(processes));
+        this.processes = Collections.unmodifiableMap(new LinkedHashMap<>(processes));
         if (rowSources != null) rowSources.keySet().forEach(Process::fromKey);
         this.rowSources = rowSources == null ? Map.of() : Map.copyOf(rowSources);
     }

@@ -1,5 +1,8 @@
 package org.arcwright.rules;
 
+import java.util.Locale;
+import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputFiles;
 import org.arcwright.model.DesignCase;
 import org.arcwright.model.BlendKind;
 import org.arcwright.model.Process;
@@ -50,7 +53,7 @@ public final class CaseTable {
         mapper.enable(CsvParser.Feature.SKIP_EMPTY_LINES);
         CsvSchema schema = CsvSchema.emptySchema().withHeader().withComments();
         List<Row> rows = new ArrayList<>();
-        try (Reader reader = org.arcwright.io.InputFiles.openText(file, org.arcwright.io.InputFiles.CSV_LIMIT);
+        try (Reader reader = InputFiles.openText(file, InputFiles.CSV_LIMIT);
              MappingIterator<Map<String, String>> it = mapper.readerFor(Map.class).with(schema).readValues(reader)) {
             CsvSchema header = null;
             while (true) {
@@ -191,7 +194,7 @@ public final class CaseTable {
 
     private static double number(String s) {
         try {
-            return org.arcwright.io.DecimalText.parseFinite(s);
+            return DecimalText.parseFinite(s);
         } catch (NumberFormatException e) {
             throw new IllegalArgumentException(e.getMessage());
         }
@@ -199,7 +202,7 @@ public final class CaseTable {
 
     private static boolean bool(String s) {
         if (s == null) return false;
-        return switch (s.toLowerCase(java.util.Locale.ROOT)) {
+        return switch (s.toLowerCase(Locale.ROOT)) {
             case "true", "yes", "y", "1" -> true;
             case "false", "no", "n", "0" -> false;
             default -> throw new IllegalArgumentException("expected true or false, got '" + s + "'");

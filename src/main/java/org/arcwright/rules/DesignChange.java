@@ -1,6 +1,7 @@
 package org.arcwright.rules;
 
 import com.fasterxml.jackson.annotation.JsonValue;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
@@ -18,7 +19,7 @@ public record DesignChange(Kind kind, String text, Map<String, Double> numbers) 
     public DesignChange {
         Objects.requireNonNull(kind, "kind");
         Objects.requireNonNull(text, "text");
-        numbers = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(numbers));
+        numbers = Collections.unmodifiableMap(new LinkedHashMap<>(numbers));
     }
 
     /** The design changes the advisor can propose, as the JSON contract names them. */

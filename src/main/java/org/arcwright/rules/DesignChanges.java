@@ -1,5 +1,6 @@
 package org.arcwright.rules;
 
+import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
@@ -36,7 +37,7 @@ final class DesignChanges {
         if (roomForBand && nominal >= floor - 1e-9 && nominal <= ceiling + 1e-9) return out;
         if (roomForBand) {
             double suggested = Advisor.roundTo(Math.min(Math.max(nominal, floor + band / 2), ceiling - band / 2), places,
-                    java.math.RoundingMode.HALF_UP);
+                    RoundingMode.HALF_UP);
             out.add(new DesignChange(DesignChange.Kind.CHANGE_NOMINAL, "Change the nominal to R" + Advisor.fmt(suggested, places)
                     + u + ": R" + Advisor.plain(nominal) + " lies outside the room the needs leave (" + Advisor.fmt(floor, places)
                     + " to " + (Double.isFinite(ceiling) ? Advisor.fmt(ceiling, places) : "any") + u + ").",
@@ -48,7 +49,7 @@ final class DesignChanges {
         }
         double needFor = needs.floorUnreachable() ? Double.NaN : floor + band;
         if (c.stress() != null && Double.isFinite(h)) {
-            double grooveR = Double.isNaN(needFor) ? h : Math.min(h, Advisor.roundTo(needFor, places, java.math.RoundingMode.CEILING));
+            double grooveR = Double.isNaN(needFor) ? h : Math.min(h, Advisor.roundTo(needFor, places, RoundingMode.CEILING));
             String fl = needs.governingFloor().map(Need::why).orElse("the stress floor");
             out.add(new DesignChange(DesignChange.Kind.RELIEF_GROOVE, "Cut a relief groove into the shoulder face so the "
                     + "mating part seats on the face beyond it: the groove's radius may then be as large as the step allows, h = "
@@ -97,7 +98,7 @@ final class DesignChanges {
             if (largest(c, mid) >= filletMax) hi = mid;
             else lo = mid;
         }
-        return Optional.of(Advisor.roundTo(hi, 3, java.math.RoundingMode.CEILING));
+        return Optional.of(Advisor.roundTo(hi, 3, RoundingMode.CEILING));
     }
 
     private double largest(DesignCase c, double size) {
@@ -128,7 +129,7 @@ final class DesignChanges {
             double h = (bigD - s.smallD()) / 2;
             floor = Math.max(floor, radius - band);
             if (found && h >= floor + band - 1e-9 && bigD > s.bigD()) {
-                double rounded = Advisor.roundTo(bigD, Math.max(0, places - 1), java.math.RoundingMode.CEILING);
+                double rounded = Advisor.roundTo(bigD, Math.max(0, places - 1), RoundingMode.CEILING);
                 return Optional.of(new DesignChange(DesignChange.Kind.LARGER_STEP, "Make the step larger: D = "
                         + Advisor.plain(rounded) + " " + c.units().symbol() + " (with d = " + Advisor.plain(s.smallD())
                         + ") gives h = " + Advisor.fmt((rounded - s.smallD()) / 2, places) + ", room for radii from "
@@ -168,7 +169,7 @@ final class DesignChanges {
                 + "smallest radius the ceiling leaves room for, R" + Advisor.fmt(rMin, places) + " " + c.units().symbol()
                 + ", " + sym + " = " + Advisor.fmt(value, 2) + " against the target " + Advisor.plain(target) + "; the "
                 + "fatigue strength must then be about " + Advisor.fmt(value / target, 2) + " times what the target assumed.",
-                numbers("radius", rMin, kf ? "targetKf" : "targetKt", Advisor.roundTo(value, 2, java.math.RoundingMode.CEILING),
+                numbers("radius", rMin, kf ? "targetKf" : "targetKt", Advisor.roundTo(value, 2, RoundingMode.CEILING),
                         "strengthRatio", value / target)));
     }
 

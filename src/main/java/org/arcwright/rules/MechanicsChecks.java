@@ -1,5 +1,6 @@
 package org.arcwright.rules;
 
+import org.arcwright.mechanics.BearingChamferLimits;
 import org.arcwright.model.DesignCase;
 import java.util.ArrayList;
 import java.util.List;
@@ -45,7 +46,7 @@ public final class MechanicsChecks implements FilletChecks {
         return new MechanicsChecks(
                 new FilletStressAnalysis(new StressConcentration(PetersonFits.published()), new NotchSensitivity()),
                 new ClearanceAnalysis(BearingSeatTable.load(stack, BearingSeatTable.BUILT_IN_ID),
-                        org.arcwright.mechanics.BearingChamferLimits.load(stack, org.arcwright.mechanics.BearingChamferLimits.BUILT_IN_ID)));
+                        BearingChamferLimits.load(stack, BearingChamferLimits.BUILT_IN_ID)));
     }
 
     @Override

@@ -1,9 +1,11 @@
 package org.arcwright.rules;
 
+import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonIgnore;
 import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonValue;
 import java.util.Objects;
+import org.arcwright.model.Keys;
 
 /**
  * One thing the feature needs from its tolerance, with its numbers and where it came from. The advisor
@@ -50,9 +52,9 @@ public record Need(Kind id, Double min, Double max, String why, String source, @
         @JsonValue
         public String key() { return key; }
 
-        @com.fasterxml.jackson.annotation.JsonCreator
+        @JsonCreator
         public static Kind fromKey(String key) {
-            return org.arcwright.model.Keys.fromKey(Kind.class, values(), key, Kind::key);
+            return Keys.fromKey(Kind.class, values(), key, Kind::key);
         }
     }
 }

@@ -1,6 +1,7 @@
 package org.arcwright.rules;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -24,7 +25,7 @@ record Preference(List<CalloutKind> order, Map<CalloutKind, String> by) {
 
     Preference {
         order = List.copyOf(order);
-        by = java.util.Collections.unmodifiableMap(new LinkedHashMap<>(by));
+        by = Collections.unmodifiableMap(new LinkedHashMap<>(by));
     }
 
     boolean isEmpty() { return order.isEmpty(); }

@@ -1,6 +1,7 @@
 package org.arcwright.rules;
 
 import java.util.ArrayList;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -27,8 +28,8 @@ public record Proof(Map<String, Boolean> meets, boolean meetsAll, List<String> u
     private static final double SLACK = 1e-9;
 
     public Proof {
-        meets = java.util.Collections.unmodifiableMap(meets);
-        unmet = java.util.Collections.unmodifiableList(unmet);
+        meets = Collections.unmodifiableMap(meets);
+        unmet = Collections.unmodifiableList(unmet);
     }
 
     /**

@@ -2,6 +2,7 @@ package org.arcwright.rules;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonInclude;
+import java.util.Collections;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
@@ -49,7 +50,7 @@ public record Recommendation(String ruleId, Callout callout, Callout.Radius refi
         numbers = numbers == null ? AdviceFigures.NONE : numbers;
         trace = List.copyOf(trace);
         notes = List.copyOf(notes);
-        meets = meets == null ? Map.of() : java.util.Collections.unmodifiableMap(new LinkedHashMap<>(meets));
+        meets = meets == null ? Map.of() : Collections.unmodifiableMap(new LinkedHashMap<>(meets));
     }
 
     /** A card not proven against needs (an engineer's own callout), figures given by key. */

@@ -2,6 +2,7 @@ package org.arcwright.rules;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
+import java.util.HashSet;
 import java.util.List;
 
 /**
@@ -65,7 +66,7 @@ public record Rule(String id, String summary, When when, CalloutPlan recommend, 
             throw new IllegalArgumentException("a rule must recommend a control (\"recommend\"), add needs (\"needs\") "
                     + "or state a preference (\"prefer\")");
         }
-        if (prefer.size() != new java.util.HashSet<>(prefer).size()) {
+        if (prefer.size() != new HashSet<>(prefer).size()) {
             throw new IllegalArgumentException("prefer lists a control twice: " + prefer);
         }
         boolean ranks = recommend != null || !prefer.isEmpty();

@@ -2,6 +2,8 @@ package org.arcwright.rules;
 
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.Comparator;
@@ -11,6 +13,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
+import java.util.regex.Pattern;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackLayer;
@@ -148,17 +151,17 @@ public final class RuleBook {
      * {@code last}, else its first), or 0 when it cannot be found; for pointing at duplicates.
      */
     private static int lineOfId(Path file, String id, boolean last) {
-        java.util.regex.Pattern p = java.util.regex.Pattern.compile("\"id\"\\s*:\\s*\"" + java.util.regex.Pattern.quote(id) + "\"");
+        Pattern p = Pattern.compile("\"id\"\\s*:\\s*\"" + Pattern.quote(id) + "\"");
         int found = 0;
         try {
-            List<String> lines = java.nio.file.Files.readAllLines(file);
+            List<String> lines = Files.readAllLines(file);
             for (int i = 0; i < lines.size(); i++) {
                 if (p.matcher(lines.get(i)).find()) {
                     found = i + 1;
                     if (!last) break;
                 }
             }
-        } catch (java.io.IOException e) {
+        } catch (IOException e) {
             return 0;
         }
         return found;

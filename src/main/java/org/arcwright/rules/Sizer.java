@@ -2,6 +2,7 @@ package org.arcwright.rules;
 
 import java.math.BigDecimal;
 import java.util.List;
+import java.util.Map;
 import java.util.Optional;
 import org.arcwright.io.InputProblem;
 import org.arcwright.model.BlendKind;
@@ -66,7 +67,7 @@ final class Sizer {
      *
      * @param capabilitySources the capability wording already built for this case, by factor (built once per case)
      */
-    void size(Draft d, List<String> cautions, java.util.Map<Double, String> capabilitySources) {
+    void size(Draft d, List<String> cautions, Map<Double, String> capabilitySources) {
         DesignCase c = d.c;
         CalloutPlan plan = d.plan;
         double mmPer = c.units().millimetres();

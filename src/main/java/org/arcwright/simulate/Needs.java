@@ -1,5 +1,6 @@
 package org.arcwright.simulate;
 
+import java.math.BigDecimal;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -40,6 +41,6 @@ public record Needs(double minRadius, double maxRadius, double maxPositionError,
     }
 
     static String num(double v) {
-        return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
     }
 }

@@ -1,5 +1,7 @@
 package org.arcwright.simulate;
 
+import java.util.Locale;
+
 /**
  * One simulated part's true geometry: the truth the function is judged on.
  *
@@ -26,10 +28,10 @@ public record Part(int index, double radius, double dx, double dy, double flatFr
     /** A short description for example lists, in the given unit. */
     public String describe(String unit) {
         StringBuilder sb = new StringBuilder("part ").append(index + 1).append(": R ")
-                .append(String.format(java.util.Locale.ROOT, "%.4f", radius)).append(' ').append(unit);
-        if (hasFlat()) sb.append(String.format(java.util.Locale.ROOT, ", flat %.0f-%.0f %% of the sweep", 100 * flatFrom, 100 * flatTo));
-        if (step > 0) sb.append(String.format(java.util.Locale.ROOT, ", step %.4f %s at leg %s", step, unit, stepOnB ? "B" : "A"));
-        if (positionError() > 0) sb.append(String.format(java.util.Locale.ROOT, ", off place %.4f %s", positionError(), unit));
+                .append(String.format(Locale.ROOT, "%.4f", radius)).append(' ').append(unit);
+        if (hasFlat()) sb.append(String.format(Locale.ROOT, ", flat %.0f-%.0f %% of the sweep", 100 * flatFrom, 100 * flatTo));
+        if (step > 0) sb.append(String.format(Locale.ROOT, ", step %.4f %s at leg %s", step, unit, stepOnB ? "B" : "A"));
+        if (positionError() > 0) sb.append(String.format(Locale.ROOT, ", off place %.4f %s", positionError(), unit));
         return sb.toString();
     }
 }

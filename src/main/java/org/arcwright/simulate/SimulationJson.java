@@ -4,8 +4,10 @@ import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import java.util.Set;
 import org.arcwright.inspect.Freedom;
 import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.tolerance.RadiusKind;
 
 /**
  * The JSON form of a {@link SimulationResult}:
@@ -56,7 +58,7 @@ public final class SimulationJson {
     static Map<String, Object> callout(InspectionCallout c) {
         Map<String, Object> m = new LinkedHashMap<>();
         if (c instanceof InspectionCallout.RadiusLimits rl) {
-            m.put("type", rl.kind() == org.arcwright.tolerance.RadiusKind.CR ? "controlled-radius" : "radius");
+            m.put("type", rl.kind() == RadiusKind.CR ? "controlled-radius" : "radius");
             m.put("min", rl.min());
             m.put("max", rl.max());
         } else if (c instanceof InspectionCallout.ProfileTolerance pt) {
@@ -75,7 +77,7 @@ public final class SimulationJson {
         return m;
     }
 
-    private static List<String> keys(java.util.Set<Freedom> free) {
+    private static List<String> keys(Set<Freedom> free) {
         List<String> out = new ArrayList<>();
         for (Freedom f : Freedom.values()) if (free.contains(f)) out.add(f.key());
         return out;

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import org.arcwright.tolerance.DrawingStyle;
 
 /**
@@ -55,7 +56,7 @@ public final class Figures {
             new Known("largestSeatingRadius", "largest fillet that still seats", Kind.LENGTH));
 
     /** Keys that are context, not figures: left out of the list. */
-    private static final java.util.Set<String> SKIPPED = java.util.Set.of("units");
+    private static final Set<String> SKIPPED = Set.of("units");
 
     /** The figures of {@code numbers}, in its order, formatted by {@code text}'s style and units. */
     public static List<Figure> of(Map<String, Object> numbers, CalloutText text) {

@@ -3,6 +3,8 @@ package org.arcwright.templates;
 import com.samskivert.mustache.Mustache;
 import com.samskivert.mustache.MustacheException;
 import com.samskivert.mustache.Template;
+import java.io.StringWriter;
+import java.io.Writer;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Set;
@@ -61,7 +63,7 @@ public final class NoteTemplate {
 
     /** Fills the template from a context made by {@link NoteContext}. */
     public String fill(Map<String, Object> context) {
-        java.io.StringWriter out = new java.io.StringWriter();
+        StringWriter out = new StringWriter();
         try {
             compiled.execute(context, new BoundedWriter(out));
             return out.toString();
@@ -78,11 +80,11 @@ public final class NoteTemplate {
     }
 
     /** A writer that stops a note growing past {@link #MAX_OUTPUT}. */
-    private static final class BoundedWriter extends java.io.Writer {
-        private final java.io.StringWriter out;
+    private static final class BoundedWriter extends Writer {
+        private final StringWriter out;
         private long written;
 
-        BoundedWriter(java.io.StringWriter out) { this.out = out; }
+        BoundedWriter(StringWriter out) { this.out = out; }
 
         @Override
         public void write(char[] buf, int off, int len) {

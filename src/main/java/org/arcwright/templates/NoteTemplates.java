@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import java.util.TreeMap;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackStack;
 import org.arcwright.worksheet.PartWorksheet;
@@ -39,7 +40,7 @@ public final class NoteTemplates {
             String file = f.path().getFileName().toString();
             String name = file.substring(0, file.length() - EXTENSION.length());
             String text;
-            text = org.arcwright.io.InputFiles.readPackText(f.path(), f.pack().root());
+            text = InputFiles.readPackText(f.path(), f.pack().root());
             out.add(NoteTemplate.compile(name, text, f.path().toString(), f.pack().name()));
         }
         return new NoteTemplates(out);

@@ -1,6 +1,7 @@
 package org.arcwright.templates;
 
 import java.util.ArrayDeque;
+import java.util.Arrays;
 import java.util.Deque;
 import java.util.LinkedHashSet;
 import java.util.Set;
@@ -158,7 +159,7 @@ final class TemplateChecker {
         for (int k = 1; k < parts.length; k++) {
             FieldSchema next = found.field(parts[k]);
             if (next == null) {
-                String prefix = String.join(".", java.util.Arrays.copyOfRange(parts, 0, k));
+                String prefix = String.join(".", Arrays.copyOfRange(parts, 0, k));
                 throw new InputProblem(source, line, column, name, "unknown field '" + parts[k] + "' in " + prefix
                         + (found.fields().isEmpty() ? ", which has no fields"
                                 : "; known: " + String.join(", ", found.fields().keySet())));

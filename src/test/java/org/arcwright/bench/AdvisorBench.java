@@ -1,8 +1,11 @@
 package org.arcwright.bench;
 
 import java.io.IOException;
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Comparator;
 import java.util.List;
 import java.util.Random;
 import java.util.concurrent.TimeUnit;
@@ -59,7 +62,7 @@ public class AdvisorBench {
     @TearDown(Level.Trial)
     public void tearDown() throws IOException {
         try (var s = Files.walk(packDir)) {
-            for (Path p : s.sorted(java.util.Comparator.reverseOrder()).toList()) Files.delete(p);
+            for (Path p : s.sorted(Comparator.reverseOrder()).toList()) Files.delete(p);
         }
     }
 
@@ -139,7 +142,7 @@ public class AdvisorBench {
      * the CPU time is the better estimate of what one free core does.
      */
     public static void main(String[] args) throws IOException {
-        java.lang.management.ThreadMXBean mx = java.lang.management.ManagementFactory.getThreadMXBean();
+        ThreadMXBean mx = ManagementFactory.getThreadMXBean();
         AdvisorBench b = new AdvisorBench();
         b.setUp();
         for (int k = 0; k < 5; k++) {

@@ -1,6 +1,7 @@
 package org.arcwright.bench;
 
 import java.awt.Graphics;
+import java.time.Duration;
 import javax.swing.JComponent;
 import javax.swing.JFrame;
 import javax.swing.JLabel;
@@ -32,7 +33,7 @@ public final class BareFrame {
                     if (painted || !f.isShowing()) return;
                     painted = true;
                     String cpu = " cpu=" + ProcessHandle.current().info().totalCpuDuration()
-                            .map(java.time.Duration::toMillis).orElse(-1L);
+                            .map(Duration::toMillis).orElse(-1L);
                     System.out.println(StartupProbe.USABLE_MARKER + cpu);
                     System.out.println(StartupProbe.COMPLETE_MARKER + cpu);
                     System.out.flush();

@@ -8,6 +8,7 @@ import java.lang.management.MemoryType;
 import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Comparator;
 import java.util.Random;
 import org.arcwright.cli.Cli;
 
@@ -45,7 +46,7 @@ public final class LargeCsvHarness {
             long ms = (System.nanoTime() - t0) / 1_000_000;
             System.err.printf("%s: exit %d in %d ms (sum of the heap pools' peaks so far %d MB)%n", f, code, ms, peakHeapMb());
         }
-        Files.walk(dir).sorted(java.util.Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
+        Files.walk(dir).sorted(Comparator.reverseOrder()).forEach(p -> p.toFile().delete());
     }
 
     private static long peakHeapMb() {

@@ -6,17 +6,27 @@ import java.awt.Robot;
 import java.awt.Toolkit;
 import java.awt.event.InvocationEvent;
 import java.awt.event.KeyEvent;
+import java.lang.management.ManagementFactory;
+import java.lang.management.ThreadMXBean;
+import java.lang.reflect.Field;
 import java.lang.reflect.InvocationTargetException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.Collections;
+import java.util.HashSet;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
+import java.util.TreeMap;
+import java.util.concurrent.Callable;
+import java.util.concurrent.ConcurrentHashMap;
 import java.util.concurrent.atomic.AtomicReference;
 import java.util.function.BooleanSupplier;
 import javax.swing.SwingUtilities;
+import javax.swing.Timer;
 import org.arcwright.app.shell.AppServices;
 import org.arcwright.app.DesktopApp;
 import org.arcwright.app.model.Settings;
@@ -139,7 +149,7 @@ public final class TypingStallHarness {
         final List<Double> dispatchMs = new ArrayList<>();
         final List<Double> keyLagMs = new ArrayList<>();
         final List<Double> cpuMs = new ArrayList<>();
-        final Map<String, Integer> kinds = new java.util.TreeMap<>();
+        final Map<String, Integer> kinds = new TreeMap<>();
         double longestMs = -1;
         String longest = "";
         long durationMs;
@@ -168,13 +178,13 @@ public final class TypingStallHarness {
 
     /** Times each dispatch on the event thread and each key event's wait in the queue. */
     static final class TimingQueue extends EventQueue {
-        private final java.lang.management.ThreadMXBean threads = java.lang.management.ManagementFactory.getThreadMXBean();
+        private final ThreadMXBean threads = ManagementFactory.getThreadMXBean();
         private Stats current;
         volatile long dispatchStart;
-        final Map<String, Integer> perEvent = new java.util.concurrent.ConcurrentHashMap<>();
-        final Map<Long, StackTraceElement[]> lastSample = new java.util.concurrent.ConcurrentHashMap<>();
+        final Map<String, Integer> perEvent = new ConcurrentHashMap<>();
+        final Map<Long, StackTraceElement[]> lastSample = new ConcurrentHashMap<>();
         volatile Thread edt;
-        final Map<String, Integer> slowFrames = new java.util.concurrent.ConcurrentHashMap<>();
+        final Map<String, Integer> slowFrames = new ConcurrentHashMap<>();
 
         /** While an event has run over 20 ms, samples the event thread's stack every 5 ms (diagnosis). */
         void sampleSlowDispatches() {
@@ -188,7 +198,7 @@ public final class TypingStallHarness {
                     long st = dispatchStart;
                     Thread et = edt;
                     if (st == 0 || et == null || System.nanoTime() - st < 20_000_000L) continue;
-                    java.util.Set<String> seen = new java.util.HashSet<>();
+                    Set<String> seen = new HashSet<>();
                     StackTraceElement[] stack = et.getStackTrace();
                     if (st == dispatchStart) {
                         lastSample.put(st, stack);
@@ -232,7 +242,7 @@ public final class TypingStallHarness {
                     }
                 }
                 System.out.println(b);
-                System.out.println("      in samples: " + new java.util.TreeMap<>(perEvent));
+                System.out.println("      in samples: " + new TreeMap<>(perEvent));
             }
             perEvent.clear();
             Stats s = current;
@@ -269,13 +279,13 @@ public final class TypingStallHarness {
 
         private static String timerOf(AWTEvent e) {
             try {
-                java.lang.reflect.Field f = InvocationEvent.class.getDeclaredField("runnable");
+                Field f = InvocationEvent.class.getDeclaredField("runnable");
                 f.setAccessible(true);
                 Object r = f.get(e);
-                java.lang.reflect.Field outer = r.getClass().getDeclaredField("this$0");
+                Field outer = r.getClass().getDeclaredField("this$0");
                 outer.setAccessible(true);
-                javax.swing.Timer t = (javax.swing.Timer) outer.get(r);
-                return " " + t.getDelay() + " " + java.util.Arrays.toString(t.getActionListeners());
+                Timer t = (Timer) outer.get(r);
+                return " " + t.getDelay() + " " + Arrays.toString(t.getActionListeners());
             } catch (ReflectiveOperationException | RuntimeException x) {
                 return "";
             }
@@ -296,7 +306,7 @@ public final class TypingStallHarness {
         }
     }
 
-    private static <T> T onEdt(java.util.concurrent.Callable<T> c) {
+    private static <T> T onEdt(Callable<T> c) {
         AtomicReference<T> out = new AtomicReference<>();
         AtomicReference<Exception> err = new AtomicReference<>();
         try {

@@ -6,6 +6,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.util.List;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.assertj.core.data.Offset;
 import org.junit.jupiter.api.Test;
 
 class CalloutJsonTest {
@@ -40,8 +41,8 @@ class CalloutJsonTest {
         // ISO 1101:2017 UZ (offset zone) vs ASME Y14.5-2018 unequally disposed profile, from memory:
         // a 0.1 zone with 0.03 outward has its centre 0.02 inside the material: UZ-0.02.
         Callout.Profile p = new Callout.Profile(0.1, 0.03, List.of(), false, null);
-        assertThat(p.isoOffset()).isCloseTo(-0.02, org.assertj.core.data.Offset.offset(1e-12));
-        assertThat(Callout.Profile.outwardFromIsoOffset(0.1, -0.02)).isCloseTo(0.03, org.assertj.core.data.Offset.offset(1e-12));
+        assertThat(p.isoOffset()).isCloseTo(-0.02, Offset.offset(1e-12));
+        assertThat(Callout.Profile.outwardFromIsoOffset(0.1, -0.02)).isCloseTo(0.03, Offset.offset(1e-12));
     }
 
     @Test

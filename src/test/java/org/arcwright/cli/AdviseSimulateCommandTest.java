@@ -13,6 +13,7 @@ import org.arcwright.callout.ProfileTier;
 import org.arcwright.inspect.Freedom;
 import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.tolerance.RadiusKind;
+import org.arcwright.zone.ProfileZone;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -119,9 +120,9 @@ class AdviseSimulateCommandTest {
         // a lower composite tier repeating datums refines orientation, not location
         List<DatumReference> a = List.of(new DatumReference("A", null));
         assertThat(AdviceSimulation.toInspection(new Callout.Profile(0.1, null, List.of(), false, null)))
-                .isEqualTo(new InspectionCallout.ProfileTolerance(org.arcwright.zone.ProfileZone.bilateral(0.1), EnumSet.allOf(Freedom.class), false));
+                .isEqualTo(new InspectionCallout.ProfileTolerance(ProfileZone.bilateral(0.1), EnumSet.allOf(Freedom.class), false));
         assertThat(AdviceSimulation.toInspection(new Callout.Profile(0.1, null, a, false, null)))
-                .isEqualTo(new InspectionCallout.ProfileTolerance(org.arcwright.zone.ProfileZone.bilateral(0.1), EnumSet.noneOf(Freedom.class), false));
+                .isEqualTo(new InspectionCallout.ProfileTolerance(ProfileZone.bilateral(0.1), EnumSet.noneOf(Freedom.class), false));
         InspectionCallout cp = AdviceSimulation.toInspection(new Callout.CompositeProfile(
                 List.of(new ProfileTier(0.2, a), new ProfileTier(0.1, a), new ProfileTier(0.05, List.of())), null));
         assertThat(cp).isEqualTo(new InspectionCallout.CompositeProfile(List.of(

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
 import java.util.EnumSet;
+import java.util.List;
 import java.util.Set;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.RadiusKind;
@@ -215,7 +216,7 @@ class FittedSurfacesTest {
     @Test
     void inconsistentCalloutsAreRefused() {
         PointSet pts = Sections.section(SQUARE, 2, 40, 400, 0, 1, f -> 0);
-        assertThatThrownBy(() -> new InspectionCallout.CompositeProfile(java.util.List.of(
+        assertThatThrownBy(() -> new InspectionCallout.CompositeProfile(List.of(
                 new InspectionCallout.Tier(0.02, Set.of()), new InspectionCallout.Tier(0.05, EnumSet.allOf(Freedom.class)))))
                 .isInstanceOf(InputProblem.class).hasMessageContaining("larger than tier 1");
         assertThatThrownBy(() -> new InspectionCallout.RadiusLimits(RadiusKind.R, 2, 2)).isInstanceOf(InputProblem.class)

@@ -4,9 +4,12 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.EnumSet;
 import java.util.List;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.RadiusKind;
+import org.arcwright.tolerance.Units;
+import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
 import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
@@ -106,7 +109,7 @@ class InspectorTest {
         assertThat(inspector.inspect(Sections.request(Sections.SQUARE, 2, iso, pts)).profile().requiredZone())
                 .isCloseTo(0.0125, within(1e-12));
         // floating in x and y with the same disposition: the zone can move, so it needs no more
-        var floatingXy = new InspectionCallout.ProfileTolerance(new ProfileZone(0.02, 0.016), java.util.EnumSet.of(Freedom.X, Freedom.Y), false);
+        var floatingXy = new InspectionCallout.ProfileTolerance(new ProfileZone(0.02, 0.016), EnumSet.of(Freedom.X, Freedom.Y), false);
         assertThat(inspector.inspect(Sections.request(Sections.SQUARE, 2, floatingXy, pts)).profile().requiredZone())
                 .isLessThanOrEqualTo(0.0125 + 1e-12);
     }
@@ -116,11 +119,11 @@ class InspectorTest {
         PointSet pts = Sections.section(Sections.SQUARE, 2, 30, 150, 0.002, 4, f -> 0.005 * Math.sin(2 * Math.PI * f));
         var floating = new InspectionCallout.ProfileTolerance(ProfileZone.bilateral(0.05), Freedom.all(), false);
         double viaCorner = inspector.inspect(Sections.request(Sections.SQUARE, 2, floating, pts)).profile().requiredZone();
-        org.arcwright.zone.Contour chain = Sections.SQUARE.contour(2, 20);
-        InspectionRequest req = new InspectionRequest(org.arcwright.tolerance.Units.MM, new Nominal.Chain(chain), floating, pts, 1e-6,
+        Contour chain = Sections.SQUARE.contour(2, 20);
+        InspectionRequest req = new InspectionRequest(Units.MM, new Nominal.Chain(chain), floating, pts, 1e-6,
                 Double.NaN, false);
         assertThat(inspector.inspect(req).profile().requiredZone()).isCloseTo(viaCorner, within(1e-9));
-        InspectionRequest radius = new InspectionRequest(org.arcwright.tolerance.Units.MM, new Nominal.Chain(chain), R, pts, 1e-6,
+        InspectionRequest radius = new InspectionRequest(Units.MM, new Nominal.Chain(chain), R, pts, 1e-6,
                 Double.NaN, false);
         assertThatThrownBy(() -> inspector.inspect(radius)).isInstanceOf(InputProblem.class).hasMessageContaining("needs a corner");
     }

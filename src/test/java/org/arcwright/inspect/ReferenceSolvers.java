@@ -8,6 +8,7 @@ import org.apache.commons.math3.fitting.leastsquares.LevenbergMarquardtOptimizer
 import org.apache.commons.math3.fitting.leastsquares.MultivariateJacobianFunction;
 import org.apache.commons.math3.linear.Array2DRowRealMatrix;
 import org.apache.commons.math3.linear.ArrayRealVector;
+import org.apache.commons.math3.linear.RealMatrix;
 import org.apache.commons.math3.linear.RealVector;
 import org.apache.commons.math3.optim.MaxIter;
 import org.apache.commons.math3.optim.PointValuePair;
@@ -42,7 +43,7 @@ public final class ReferenceSolvers {
                 j[i][1] = -dy / d;
                 j[i][2] = -1;
             }
-            return new Pair<RealVector, org.apache.commons.math3.linear.RealMatrix>(new ArrayRealVector(v, false),
+            return new Pair<RealVector, RealMatrix>(new ArrayRealVector(v, false),
                     new Array2DRowRealMatrix(j, false));
         };
         LeastSquaresOptimizer.Optimum o = new LevenbergMarquardtOptimizer()

@@ -1,6 +1,7 @@
 package org.arcwright.inspect;
 
 import java.util.Random;
+import java.util.function.DoubleUnaryOperator;
 import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Corner;
 import org.arcwright.model.BlendKind;
@@ -17,7 +18,7 @@ final class Sections {
      * radial deviation as a function of the blend fraction 0..1), then leg B; noise σ.
      */
     static PointSet section(Corner c, double r, int perLeg, int onArc, double noise, long seed,
-                            java.util.function.DoubleUnaryOperator shape) {
+                            DoubleUnaryOperator shape) {
         Random rnd = new Random(seed);
         int n = 2 * perLeg + onArc;
         double[] xs = new double[n], ys = new double[n];

@@ -2,6 +2,9 @@ package org.arcwright.render;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.awt.Color;
+import java.awt.Font;
+import java.awt.Graphics2D;
 import java.awt.image.BufferedImage;
 import java.io.ByteArrayInputStream;
 import java.io.IOException;
@@ -20,6 +23,7 @@ import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.testing.Golden;
+import org.jfree.svg.SVGGraphics2D;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -74,23 +78,23 @@ class ContourPlotTest {
         int w = 420, h = 360, margin = 60;
         for (boolean summary : new boolean[] {false, true}) {
             BufferedImage img = new BufferedImage(w + 2 * margin, h + 2 * margin, BufferedImage.TYPE_INT_RGB);
-            java.awt.Graphics2D g = img.createGraphics();
-            g.setColor(java.awt.Color.MAGENTA);
+            Graphics2D g = img.createGraphics();
+            g.setColor(Color.MAGENTA);
             g.fillRect(0, 0, img.getWidth(), img.getHeight());
             g.translate(margin, margin);
-            new ContourPlot().draw(r, g, w, h, new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 15), summary);
+            new ContourPlot().draw(r, g, w, h, new Font(Font.SANS_SERIF, Font.PLAIN, 15), summary);
             g.dispose();
             int outside = 0;
             for (int y = 0; y < img.getHeight(); y++) {
                 for (int x = 0; x < img.getWidth(); x++) {
                     boolean in = x >= margin && x < margin + w && y >= margin && y < margin + h;
-                    if (!in && img.getRGB(x, y) != java.awt.Color.MAGENTA.getRGB()) outside++;
+                    if (!in && img.getRGB(x, y) != Color.MAGENTA.getRGB()) outside++;
                 }
             }
             assertThat(outside).as("pixels drawn outside %d x %d (summary %s)", w, h, summary).isZero();
         }
-        org.jfree.svg.SVGGraphics2D svg = new org.jfree.svg.SVGGraphics2D(w, h);
-        new ContourPlot().draw(r, svg, w, h, new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.PLAIN, 15), false);
+        SVGGraphics2D svg = new SVGGraphics2D(w, h);
+        new ContourPlot().draw(r, svg, w, h, new Font(Font.SANS_SERIF, Font.PLAIN, 15), false);
         String text = content(svg.getSVGDocument());
         // the same magnification as the file's plot (golden plot-bracket-round-r.txt), no summary
         assertThat(text).contains("text: deviations from nominal magnified ×5").doesNotContain("text: PASS")

@@ -2,6 +2,7 @@ package org.arcwright.rules;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.util.ArrayList;
 import java.util.List;
 import net.jqwik.api.Arbitraries;
 import net.jqwik.api.Arbitrary;
@@ -14,6 +15,7 @@ import org.arcwright.model.BlendKind;
 import org.arcwright.model.DesignCase;
 import org.arcwright.model.Loading;
 import org.arcwright.model.Process;
+import org.arcwright.pack.PackLayer;
 import org.arcwright.pack.PackStack;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
@@ -32,8 +34,8 @@ class AdvisorNeedsPropertyTest {
     private static Advisor withRuleNeed(RuleNeed need) {
         Rule rule = new Rule("team.company-need", "an invented company need", When.ALWAYS, null, 0,
                 List.of("the works standard says so"), null, null, null, null, List.of(need), null);
-        List<RuleBook.Entry> entries = new java.util.ArrayList<>(BUILT_IN.entries());
-        entries.add(new RuleBook.Entry(rule, "team", org.arcwright.pack.PackLayer.TEAM, "team/rules/r.json", null));
+        List<RuleBook.Entry> entries = new ArrayList<>(BUILT_IN.entries());
+        entries.add(new RuleBook.Entry(rule, "team", PackLayer.TEAM, "team/rules/r.json", null));
         return new Advisor(new RuleBook(entries, List.of(), BUILT_IN.capability(), BUILT_IN.generalTables()),
                 new AdvisorChecksTest.StandIn(), NoteLinker.NONE);
     }

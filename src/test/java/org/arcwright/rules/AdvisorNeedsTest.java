@@ -3,6 +3,8 @@ package org.arcwright.rules;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.offset;
 
+import java.math.RoundingMode;
+import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.stream.Collectors;
@@ -228,7 +230,7 @@ class AdvisorNeedsTest {
         DesignCase c = new DesignCase(Units.MM, DrawingStyle.ASME, null, BlendKind.FILLET, 2.0, BlendFunction.STRESS_RELIEF,
                 Loading.FATIGUE, false, false, List.of(), Process.MACHINED,
                 new DesignCase.StressInputs("stepped-shaft", "bending", 42, 35, null, 1.3581), null, null);
-        Needs needs = Needs.derive(c, new AdvisorChecksTest.StandIn(), new java.util.ArrayList<>());
+        Needs needs = Needs.derive(c, new AdvisorChecksTest.StandIn(), new ArrayList<>());
         Candidates.Built profile = new Candidates(new Sizer(RuleBook.load(STACK))).build(needs, 2).stream()
                 .filter(b -> b.id().equals("needs.profile")).findFirst().orElseThrow();
         Callout callout = profile.draft().callout(List.of());
@@ -259,7 +261,7 @@ class AdvisorNeedsTest {
 
     @Test
     void aRoundingOfNothingIsNotACrash() {
-        assertThat(Advisor.roundTo(Double.NaN, 2, java.math.RoundingMode.HALF_EVEN)).isNaN();
+        assertThat(Advisor.roundTo(Double.NaN, 2, RoundingMode.HALF_EVEN)).isNaN();
         assertThat(Advisor.fmt(Double.NaN, 2)).isEqualTo("n/a");
     }
 

@@ -14,6 +14,7 @@ import org.arcwright.callout.Extent;
 import org.arcwright.pack.PackStack;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
+import org.assertj.core.data.Offset;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
@@ -175,7 +176,7 @@ class AdvisorScenarioTest {
         assertThat(cr.max()).isEqualTo(2.2);
         assertThat(r.text()).isEqualTo("CR2 +0.2/0");
         // crescent at 90°: (rmax - rmin)(1/sin 45° - 1) = 0.2 × 0.41421 (the CrescentZone construction)
-        assertThat((Double) r.numbers().asMap().get("crescentWidth")).isCloseTo(0.2 * (Math.sqrt(2) - 1), org.assertj.core.data.Offset.offset(1e-6));
+        assertThat((Double) r.numbers().asMap().get("crescentWidth")).isCloseTo(0.2 * (Math.sqrt(2) - 1), Offset.offset(1e-6));
     }
 
     @Test

@@ -20,9 +20,11 @@ import org.arcwright.mechanics.ShoulderShape;
 import org.arcwright.mechanics.StressConcentration;
 import org.arcwright.mechanics.UltimateStrength;
 import org.arcwright.pack.PackStack;
+import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.WorksheetFiles;
+import org.assertj.core.data.Offset;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -65,7 +67,7 @@ class MechanicsChecksTest {
                 new NotchSensitivity());
         var point = a.point(FilletStressCase.of(ShoulderShape.STEPPED_SHAFT, LoadCase.BENDING, Units.MM, 42, 35, min,
                 UltimateStrength.ofMpa(900)), min);
-        assertThat((Double) r.numbers().asMap().get("ktAtMin")).isCloseTo(point.kt().kt(), org.assertj.core.data.Offset.offset(1e-6));
+        assertThat((Double) r.numbers().asMap().get("ktAtMin")).isCloseTo(point.kt().kt(), Offset.offset(1e-6));
     }
 
     @Test
@@ -75,19 +77,19 @@ class MechanicsChecksTest {
         Recommendation r = a.recommendations().stream().filter(x -> x.ruleId().equals("mating.fillet.max-radius"))
                 .findFirst().orElseThrow();
         assertThat(r.numbers().asMap()).containsEntry("seats", true);
-        assertThat((Double) r.numbers().asMap().get("seatingMargin")).isCloseTo(0.3, org.assertj.core.data.Offset.offset(1e-9));
+        assertThat((Double) r.numbers().asMap().get("seatingMargin")).isCloseTo(0.3, Offset.offset(1e-9));
         // F2's location matters and it has datums A B: the located profile ranks first, its largest admitted radius
         // checked the same way (margin 1.1 minus that radius)
         Recommendation first = a.first().orElseThrow();
         assertThat(first.ruleId()).isEqualTo("mating.located.profile-datums");
         assertThat(first.meetsAll()).isTrue();
         assertThat(first.numbers().seatingMargin()).isCloseTo(1.1 - first.numbers().max(),
-                org.assertj.core.data.Offset.offset(1e-6));
+                Offset.offset(1e-6));
     }
 
     @Test
     void aFilletThatWouldFoulAFortyFiveDegreeChamferHasItsMaximumLoweredToTheLeg() {
-        DesignCase c = new DesignCase(Units.MM, org.arcwright.tolerance.DrawingStyle.ISO, null, BlendKind.FILLET, 1.0,
+        DesignCase c = new DesignCase(Units.MM, DrawingStyle.ISO, null, BlendKind.FILLET, 1.0,
                 BlendFunction.MATING, Loading.STATIC, false, false, List.of(), Process.MACHINED, null,
                 new DesignCase.MatingCorner("chamfer", 0.9, null), null);
         Recommendation r = advisor.advise(c).first().orElseThrow();

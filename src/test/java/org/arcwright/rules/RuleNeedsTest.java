@@ -2,6 +2,7 @@ package org.arcwright.rules;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
@@ -105,7 +106,7 @@ class RuleNeedsTest {
         Advisor a = advisor(needRule("{\"id\": \"radius-floor\", \"min\": 0.8, \"units\": \"mm\", \"why\": \"works "
                 + "standard\", \"source\": \"TD-STD-114 (invented)\"}"));
         Advice advice = a.advise(shaft(Units.MM, DrawingStyle.ISO, 0.5, Loading.FATIGUE, List.of()));
-        String json = new com.fasterxml.jackson.databind.ObjectMapper().writeValueAsString(advice.needs());
+        String json = new ObjectMapper().writeValueAsString(advice.needs());
         assertThat(json).contains("\"id\":\"radius-floor\"", "\"min\":0.8", "rule team.need (team)");
     }
 

@@ -5,6 +5,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import java.util.List;
 import org.apache.commons.math3.distribution.NormalDistribution;
 import org.arcwright.tolerance.CrescentZone;
+import org.assertj.core.data.Offset;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.Test;
 
@@ -46,7 +47,7 @@ class ClosedFormTest {
     static void near(Share s, double expected, String what) {
         double se = Math.sqrt(expected * (1 - expected) / N);
         assertThat(s.share()).as(what + " (expected %.4f, 4 SE = %.4f)", expected, 4 * se)
-                .isCloseTo(expected, org.assertj.core.data.Offset.offset(4 * se + 1.0 / N));
+                .isCloseTo(expected, Offset.offset(4 * se + 1.0 / N));
     }
 
     @Test

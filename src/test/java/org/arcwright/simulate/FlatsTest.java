@@ -3,6 +3,7 @@ package org.arcwright.simulate;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.util.List;
+import org.arcwright.tolerance.Units;
 import org.junit.jupiter.api.Test;
 
 /**
@@ -17,7 +18,7 @@ import org.junit.jupiter.api.Test;
 class FlatsTest {
     @Test
     void radiusAcceptsEveryFlatAsAnEscapeAndControlledRadiusCatchesThem() {
-        ProcessModel m = new ProcessModel(org.arcwright.tolerance.Units.MM, Models.FILLET_90, 2.0,
+        ProcessModel m = new ProcessModel(Units.MM, Models.FILLET_90, 2.0,
                 new ProcessModel.Scatter(2.0, 0), 0, new ProcessModel.Flats(1, 0.1, 0.15, 0.45, 0.55), null, 0, 200);
         Simulation sim = Models.simulation(m, new Needs(1.95, 2.2, Double.NaN, Double.NaN),
                 List.of(Models.r(1.9, 2.1), Models.cr(1.9, 2.1)), 300, 7);

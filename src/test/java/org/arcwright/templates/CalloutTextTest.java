@@ -2,6 +2,7 @@ package org.arcwright.templates;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.util.Arrays;
 import java.util.List;
 import org.arcwright.callout.Callout;
 import org.arcwright.callout.DatumReference;
@@ -16,7 +17,7 @@ class CalloutTextTest {
     private final CalloutText iso = new CalloutText(DrawingStyle.ISO, Units.MM);
 
     private static List<DatumReference> datums(String... d) {
-        return java.util.Arrays.stream(d).map(DatumReference::parse).toList();
+        return Arrays.stream(d).map(DatumReference::parse).toList();
     }
 
     @Test

@@ -10,6 +10,7 @@ import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
 import org.arcwright.testing.Golden;
+import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.WorksheetFiles;
 import org.junit.jupiter.api.Test;
@@ -116,7 +117,7 @@ class NoteTemplatesTest {
                 "n", "t");
         String asme = new NoteTemplates(List.of(t)).fill("n", demo, "F3", "t");
         assertThat(asme).isEqualTo("0.06 0.02 -0.01\n");
-        PartWorksheet inch = new PartWorksheet(1, demo.part(), org.arcwright.tolerance.Units.INCH, demo.standard(),
+        PartWorksheet inch = new PartWorksheet(1, demo.part(), Units.INCH, demo.standard(),
                 demo.titleBlock(), demo.features());
         assertThat(new NoteTemplates(List.of(t)).fill("n", inch, "F3", "t")).isEqualTo(".060 .020 -.010\n");
     }

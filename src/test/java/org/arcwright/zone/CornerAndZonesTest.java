@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.Arrays;
 import org.arcwright.io.InputProblem;
 import org.arcwright.model.BlendKind;
 import org.junit.jupiter.api.Test;
@@ -42,7 +43,7 @@ class CornerAndZonesTest {
     void aPointWithinTheResolutionOfALegAllowsEveryArcPassingWithinTheResolutionOfIt() {
         Corner c = new Corner(new Point2(0, 0), new Point2(1, 0), new Point2(0, 1), BlendKind.FILLET);
         double[][] p = arc(c, 2, 41);
-        double[] xs = java.util.Arrays.copyOf(p[0], 42), ys = java.util.Arrays.copyOf(p[1], 42);
+        double[] xs = Arrays.copyOf(p[0], 42), ys = Arrays.copyOf(p[1], 42);
         xs[41] = -0.000124;
         ys[41] = 1.889;
         RadiusZone zone = new RadiusZone(c, 1.9, 2.1, 0.005);

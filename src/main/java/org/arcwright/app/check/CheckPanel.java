@@ -1,18 +1,28 @@
 package org.arcwright.app.check;
 
+import java.awt.Dimension;
 import java.awt.Graphics;
 import java.awt.Cursor;
 import java.awt.Graphics2D;
+import java.awt.Point;
+import java.awt.datatransfer.UnsupportedFlavorException;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
+import java.awt.event.ComponentListener;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
 import java.awt.geom.AffineTransform;
+import java.awt.geom.NoninvertibleTransformException;
+import java.awt.geom.Point2D;
 import java.awt.image.BufferedImage;
 import java.awt.datatransfer.DataFlavor;
 import java.io.File;
+import java.io.IOException;
 import java.nio.file.Path;
 import java.time.Clock;
 import java.time.LocalDate;
 import java.util.List;
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
@@ -21,6 +31,7 @@ import java.util.function.Consumer;
 import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JFileChooser;
+import javax.swing.JLabel;
 import javax.swing.JPanel;
 import javax.swing.JProgressBar;
 import javax.swing.JScrollPane;
@@ -49,6 +60,7 @@ import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.inspect.PointsCsv;
+import org.arcwright.io.InputProblem;
 import org.arcwright.render.ContourPlot;
 import org.arcwright.worksheet.InspectionRecord;
 import org.arcwright.zone.Point2;
@@ -147,7 +159,7 @@ public final class CheckPanel extends JPanel {
         confirm.setVisible(false);
         confirm.addActionListener(e -> confirmed());
         table.setName("checkComparisons");
-        table.setPreferredScrollableViewportSize(new java.awt.Dimension(10, table.getRowHeight() * 5));
+        table.setPreferredScrollableViewportSize(new Dimension(10, table.getRowHeight() * 5));
         add(Cautions.box(Cautions.VERDICT), "growx, wmin 10");
         add(target, "growx, wmin 10");
         JPanel buttons = new JPanel(new MigLayout("insets 2, gap 8, hidemode 3", "[][][][]", ""));
@@ -170,17 +182,17 @@ public final class CheckPanel extends JPanel {
         JScrollPane detailsScroll = new JScrollPane(details);
         detailsScroll.setBorder(null);
         detailsScroll.getVerticalScrollBar().setUnitIncrement(16);
-        detailsScroll.setMinimumSize(new java.awt.Dimension(10, 80));
-        plot.setMinimumSize(new java.awt.Dimension(10, 160));
+        detailsScroll.setMinimumSize(new Dimension(10, 80));
+        plot.setMinimumSize(new Dimension(10, 160));
         split.setTopComponent(detailsScroll);
         split.setBottomComponent(plot);
         split.setName("checkSplit");
         split.setResizeWeight(DETAILS_SHARE);
         split.setContinuousLayout(true);
         split.setBorder(null);
-        split.addComponentListener(new java.awt.event.ComponentAdapter() {
+        split.addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) { splitFirstSized(this); }
+            public void componentResized(ComponentEvent e) { splitFirstSized(this); }
         });
         add(split, "grow, wmin 10, hmin 260");
         setTransferHandler(new FileDrop());
@@ -190,7 +202,7 @@ public final class CheckPanel extends JPanel {
     }
 
     /** Puts the divider at its share the first time the split has a size; the user moves it after that. */
-    private void splitFirstSized(java.awt.event.ComponentListener self) {
+    private void splitFirstSized(ComponentListener self) {
         if (split.getHeight() <= 0) return;
         split.setDividerLocation(DETAILS_SHARE);
         split.removeComponentListener(self);
@@ -209,18 +221,18 @@ public final class CheckPanel extends JPanel {
         p.setOpaque(false);
         String tip = "A CSV holds points only: say where the corner's vertex is (x, y, in the feature's units) and which "
                 + "way its two legs run (degrees from +x, counter-clockwise), in the CSV's own coordinates";
-        javax.swing.JLabel l = new javax.swing.JLabel("CSV vertex x");
+        JLabel l = new JLabel("CSV vertex x");
         l.setToolTipText(tip);
         p.setToolTipText(tip);
         p.add(l);
         p.add(vertexX);
-        p.add(new javax.swing.JLabel("y"));
+        p.add(new JLabel("y"));
         p.add(vertexY);
-        p.add(new javax.swing.JLabel("  legs at"));
+        p.add(new JLabel("  legs at"));
         p.add(legA);
-        p.add(new javax.swing.JLabel("° and"));
+        p.add(new JLabel("° and"));
         p.add(legB);
-        p.add(new javax.swing.JLabel("°"));
+        p.add(new JLabel("°"));
         JButton pick = new JButton("Pick on the plot…");
         pick.setName("checkPickFrame");
         pick.setToolTipText("Plot a CSV's points and click the vertex, then a point along each leg");
@@ -232,7 +244,7 @@ public final class CheckPanel extends JPanel {
 
     /** Checks the contour in {@code file} for the selected feature in the background (also used by drag and drop and tests). */
     public void check(Path file) {
-        if (file.getFileName().toString().toLowerCase(java.util.Locale.ROOT).endsWith(".csv")) lastCsv = file;
+        if (file.getFileName().toString().toLowerCase(Locale.ROOT).endsWith(".csv")) lastCsv = file;
         RadiusFeature f = session.selected().orElse(null);
         CheckRequests.Binding binding;
         try {
@@ -271,7 +283,7 @@ public final class CheckPanel extends JPanel {
     }
 
     private static double number(JTextField f, String name) {
-        return Numbers.parse(f.getText()).orElseThrow(() -> org.arcwright.io.InputProblem.ofField(name,
+        return Numbers.parse(f.getText()).orElseThrow(() -> InputProblem.ofField(name,
                 "the CSV frame's " + name + " is not a number: '" + f.getText() + "'"));
     }
 
@@ -346,7 +358,7 @@ public final class CheckPanel extends JPanel {
     public String pickPrompt() { return picking == null ? "" : picking.prompt(); }
 
     /** Where the plot draws the CSV point {@code (x, y)} while a frame is picked, in the plot's pixels (tests). */
-    public java.awt.Point plotPointOf(double x, double y) { return plot.screenOf(x, y); }
+    public Point plotPointOf(double x, double y) { return plot.screenOf(x, y); }
 
     /** The fields of the CSV frame as typed or picked: vertex x, y, legs A and B in degrees (tests). */
     public List<String> frameText() {
@@ -578,7 +590,7 @@ public final class CheckPanel extends JPanel {
         TipTable(DefaultTableModel m) { super(m); }
 
         @Override
-        public String getToolTipText(java.awt.event.MouseEvent e) {
+        public String getToolTipText(MouseEvent e) {
             int row = rowAtPoint(e.getPoint()), col = columnAtPoint(e.getPoint());
             if (row < 0 || col < 0) return null;
             Object v = getValueAt(row, col);
@@ -604,7 +616,7 @@ public final class CheckPanel extends JPanel {
                         return true;
                     }
                 }
-            } catch (java.awt.datatransfer.UnsupportedFlavorException | java.io.IOException e) {
+            } catch (UnsupportedFlavorException | IOException e) {
                 status.accept("Could not read the dropped file: " + e.getMessage());
             }
             return false;
@@ -652,10 +664,10 @@ public final class CheckPanel extends JPanel {
         }
 
         /** Where {@code (x, y)} of the points is drawn; the transform is the one painting uses at this size. */
-        java.awt.Point screenOf(double x, double y) {
+        Point screenOf(double x, double y) {
             if (points == null) throw new IllegalStateException("no frame is being picked");
-            java.awt.geom.Point2D s = transform().transform(new java.awt.geom.Point2D.Double(x, y), null);
-            return new java.awt.Point((int) Math.round(s.getX()), (int) Math.round(s.getY()));
+            Point2D s = transform().transform(new Point2D.Double(x, y), null);
+            return new Point((int) Math.round(s.getX()), (int) Math.round(s.getY()));
         }
 
         private AffineTransform transform() {
@@ -675,9 +687,9 @@ public final class CheckPanel extends JPanel {
             if (points == null) return;
             try {
                 AffineTransform t = transform();
-                java.awt.geom.Point2D w = t.inverseTransform(new java.awt.geom.Point2D.Double(x, y), null);
+                Point2D w = t.inverseTransform(new Point2D.Double(x, y), null);
                 plotClicked(new Point2(w.getX(), w.getY()), 1 / t.getScaleX());
-            } catch (java.awt.geom.NoninvertibleTransformException e) {
+            } catch (NoninvertibleTransformException e) {
                 status.accept("The plot has no room to pick on; enlarge the window");
             }
         }

@@ -1,20 +1,36 @@
 package org.arcwright.app.decide;
 
 import com.formdev.flatlaf.FlatClientProperties;
+import java.awt.Component;
+import java.awt.Dimension;
+import java.awt.Font;
+import java.awt.KeyboardFocusManager;
+import java.awt.Point;
 import java.awt.Toolkit;
 import java.awt.datatransfer.StringSelection;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
+import java.awt.event.ComponentListener;
+import java.awt.image.BufferedImage;
+import java.util.ArrayList;
 import java.util.EnumMap;
+import java.util.HashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
+import java.util.function.BiFunction;
 import java.util.function.Consumer;
+import java.util.function.Function;
+import javax.swing.DefaultListCellRenderer;
+import javax.swing.JButton;
 import javax.swing.JCheckBox;
 import javax.swing.JComboBox;
 import javax.swing.JComponent;
 import javax.swing.JLabel;
+import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
@@ -27,6 +43,7 @@ import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.AdviceSource;
 import org.arcwright.app.model.NeedsSummary;
+import org.arcwright.app.widgets.ImageSelection;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.Need;
 import org.arcwright.app.model.AnswerDrafts;
@@ -63,8 +80,8 @@ public final class DecidePanel extends JPanel {
     private final transient Executor background;
     private final transient Consumer<String> status;
     private transient AdviceSource advice;
-    private transient java.util.function.BiFunction<Recommendation, Palette, java.awt.image.BufferedImage> frames = (r, p) -> null;
-    private transient Map<Recommendation, java.awt.image.BufferedImage> frameImages = Map.of();
+    private transient BiFunction<Recommendation, Palette, BufferedImage> frames = (r, p) -> null;
+    private transient Map<Recommendation, BufferedImage> frameImages = Map.of();
     private final Map<Question, JComponent> fields = new EnumMap<>(Question.class);
     private final Map<Question, WrapLabel> notes = new EnumMap<>(Question.class);
     private final JPanel figures = new JPanel(new MigLayout("insets 0, wrap 2, gap 12 2", "[][grow,fill]", ""));
@@ -73,7 +90,7 @@ public final class DecidePanel extends JPanel {
     private final JScrollPane resultsScroll;
     private final JPanel cards = new JPanel(new MigLayout("insets 0, wrap 1, gap 0 10", "[grow,fill]", ""));
     private final Timer adviseLater = new Timer(250, e -> adviseNow());
-    private final javax.swing.JButton keep = new javax.swing.JButton("Keep these answers");
+    private final JButton keep = new JButton("Keep these answers");
     private final WrapLabel unkeptNote = new WrapLabel("", "Arcwright.help.font", "Arcwright.error.foreground");
     private transient List<Recommendation> shown = List.of();
     /** The advice the cards came from; null when none is shown. */
@@ -108,13 +125,13 @@ public final class DecidePanel extends JPanel {
         split.setName("decideSplit");
         // neither side can be dragged narrower than its fields and cards stay readable at; a window
         // too narrow for both still shares the width by the weight
-        formScroll.setMinimumSize(new java.awt.Dimension(FORM_MIN_WIDTH, 0));
-        resultsScroll.setMinimumSize(new java.awt.Dimension(RESULTS_MIN_WIDTH, 0));
+        formScroll.setMinimumSize(new Dimension(FORM_MIN_WIDTH, 0));
+        resultsScroll.setMinimumSize(new Dimension(RESULTS_MIN_WIDTH, 0));
         split.setResizeWeight(0.45);
         split.setContinuousLayout(true);
-        split.addComponentListener(new java.awt.event.ComponentAdapter() {
+        split.addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) { splitFirstSized(split, this); }
+            public void componentResized(ComponentEvent e) { splitFirstSized(split, this); }
         });
         split.setBorder(null);
         add(split);
@@ -127,7 +144,7 @@ public final class DecidePanel extends JPanel {
      * Sets how feature control frames are drawn for the cards (once the frame renderer is
      * available), in the colours of the current look.
      */
-    public void setFrames(java.util.function.BiFunction<Recommendation, Palette, java.awt.image.BufferedImage> renderer) {
+    public void setFrames(BiFunction<Recommendation, Palette, BufferedImage> renderer) {
         this.frames = Objects.requireNonNull(renderer, "renderer");
         adviseNow();
     }
@@ -141,10 +158,29 @@ public final class DecidePanel extends JPanel {
     }
 
     /** Puts the divider at 45% the first time the split has a size; the user moves it after that. */
-    private static void splitFirstSized(JSplitPane split, java.awt.event.ComponentListener self) {
+    private static void splitFirstSized(JSplitPane split, ComponentListener self) {
         if (split.getWidth() <= 0) return;
         split.setDividerLocation(0.45);
         split.removeComponentListener(self);
+        split.addComponentListener(new java.awt.event.ComponentAdapter() {
+            @Override
+            public void componentResized(java.awt.event.ComponentEvent e) { keepMinimums(split); }
+        });
+    }
+
+    /**
+     * Moves the divider back between the two sides' minimum widths after the split was resized: the
+     * resize weight shares a change of width without looking at them, so a window opened wide and
+     * made narrow left the form narrower than it stays readable at.
+     */
+    private static void keepMinimums(JSplitPane split) {
+        int left = split.getLeftComponent().getMinimumSize().width;
+        int right = split.getRightComponent().getMinimumSize().width;
+        int room = split.getWidth() - split.getDividerSize();
+        if (room < left + right) return;
+        int at = split.getDividerLocation();
+        if (at < left) split.setDividerLocation(left);
+        else if (at > room - right) split.setDividerLocation(room - right);
     }
 
     /** Replaces where recommendations come from (when the practice packs have loaded). */
@@ -325,7 +361,7 @@ public final class DecidePanel extends JPanel {
             });
             // a feature's form opens at its first question; filling the text fields moved their carets,
             // and a caret scrolls its field into view after the event that moved it
-            SwingUtilities.invokeLater(() -> formScroll.getViewport().setViewPosition(new java.awt.Point(0, 0)));
+            SwingUtilities.invokeLater(() -> formScroll.getViewport().setViewPosition(new Point(0, 0)));
         } else if (!f.designCase().equals(loadedCase)) {
             loadedCase = f.designCase();
             form.load(f.designCase());
@@ -350,7 +386,7 @@ public final class DecidePanel extends JPanel {
 
     /** The features with answers typed but not kept on the worksheet: the one shown, then any left behind. */
     public List<String> unkeptAnswers() {
-        List<String> out = new java.util.ArrayList<>();
+        List<String> out = new ArrayList<>();
         if (featureId != null && hasUnkeptAnswers()) out.add(featureId);
         for (String id : drafts.features()) if (!out.contains(id)) out.add(id);
         return out;
@@ -481,7 +517,7 @@ public final class DecidePanel extends JPanel {
         figures.add(l, "wmin 10, top");
         JLabel v = new JLabel(value);
         v.setName("figure." + label);
-        v.setFont(Themes.font("Arcwright.figure.font").deriveFont(java.awt.Font.BOLD));
+        v.setFont(Themes.font("Arcwright.figure.font").deriveFont(Font.BOLD));
         figures.add(v, "top");
     }
 
@@ -494,7 +530,7 @@ public final class DecidePanel extends JPanel {
     /** The figures shown for the tolerance intent, as label and value pairs, for tests. */
     public String figuresText() {
         StringBuilder sb = new StringBuilder();
-        for (java.awt.Component c : figures.getComponents()) {
+        for (Component c : figures.getComponents()) {
             if (c instanceof JLabel) sb.append(((JLabel) c).getText()).append('\n');
             if (c instanceof WrapLabel) sb.append(((WrapLabel) c).getText()).append('\n');
         }
@@ -509,21 +545,21 @@ public final class DecidePanel extends JPanel {
             return;
         }
         AdviceSource source = advice;
-        java.util.function.BiFunction<Recommendation, Palette, java.awt.image.BufferedImage> frameDrawer = frames;
+        BiFunction<Recommendation, Palette, BufferedImage> frameDrawer = frames;
         Palette ink = Themes.drawingPalette("Arcwright.card.background");
-        java.util.function.Function<Recommendation, java.awt.image.BufferedImage> draw = r -> frameDrawer.apply(r, ink);
+        Function<Recommendation, BufferedImage> draw = r -> frameDrawer.apply(r, ink);
         CompletableFuture.supplyAsync(() -> withFrames(source.advise(c.get()), draw), background)
                 .whenComplete((list, error) -> SwingUtilities.invokeLater(() -> advised(g, list, error)));
     }
 
-    private record Advised(Advice advice, Map<Recommendation, java.awt.image.BufferedImage> frames) {}
+    private record Advised(Advice advice, Map<Recommendation, BufferedImage> frames) {}
 
     private static Advised withFrames(Advice advice,
-                                      java.util.function.Function<Recommendation, java.awt.image.BufferedImage> draw) {
-        Map<Recommendation, java.awt.image.BufferedImage> images = new java.util.HashMap<>();
+                                      Function<Recommendation, BufferedImage> draw) {
+        Map<Recommendation, BufferedImage> images = new HashMap<>();
         for (Recommendation r : advice.recommendations()) {
             try {
-                java.awt.image.BufferedImage img = draw.apply(r);
+                BufferedImage img = draw.apply(r);
                 if (img != null) images.put(r, img);
             } catch (RuntimeException e) {
                 // a frame that cannot be drawn is left out; the callout text still shows
@@ -548,7 +584,7 @@ public final class DecidePanel extends JPanel {
      * advice, a callout put on the worksheet and a change of look all open at the top.
      */
     private void showBestCard() {
-        SwingUtilities.invokeLater(() -> resultsScroll.getViewport().setViewPosition(new java.awt.Point(0, 0)));
+        SwingUtilities.invokeLater(() -> resultsScroll.getViewport().setViewPosition(new Point(0, 0)));
     }
 
     /** How far the recommendations are scrolled down, in pixels (tests: 0 shows the best card first). */
@@ -561,8 +597,8 @@ public final class DecidePanel extends JPanel {
     }
 
     private void renderCards() {
-        java.awt.Component focus = java.awt.KeyboardFocusManager.getCurrentKeyboardFocusManager().getFocusOwner();
-        boolean focusInCards = focus != null && javax.swing.SwingUtilities.isDescendingFrom(focus, cards);
+        Component focus = KeyboardFocusManager.getCurrentKeyboardFocusManager().getFocusOwner();
+        boolean focusInCards = focus != null && SwingUtilities.isDescendingFrom(focus, cards);
         cards.removeAll();
         Recommendation chosen = session.selected().map(RadiusFeature::chosen).orElse(null);
         if (shown.isEmpty()) {
@@ -591,7 +627,7 @@ public final class DecidePanel extends JPanel {
 
     /** After the cards are rebuilt, the keyboard focus stays on them instead of falling out of the window. */
     private void keepFocusInCards() {
-        for (java.awt.Component c : cards.getComponents()) {
+        for (Component c : cards.getComponents()) {
             if (c instanceof RecommendationCard) {
                 ((RecommendationCard) c).focusFirstButton();
                 return;
@@ -610,9 +646,9 @@ public final class DecidePanel extends JPanel {
     }
 
     private void copyFrame(Recommendation r) {
-        java.awt.image.BufferedImage img = frameImages.get(r);
+        BufferedImage img = frameImages.get(r);
         if (img == null) return;
-        Toolkit.getDefaultToolkit().getSystemClipboard().setContents(new org.arcwright.app.widgets.ImageSelection(img), null);
+        Toolkit.getDefaultToolkit().getSystemClipboard().setContents(new ImageSelection(img), null);
         status.accept("Copied the frame of " + r.text() + " as an image");
     }
 
@@ -622,11 +658,11 @@ public final class DecidePanel extends JPanel {
     }
 
     /** Shows enum values by their file key, as the trade writes them. */
-    private static final class KeyRenderer extends javax.swing.DefaultListCellRenderer {
+    private static final class KeyRenderer extends DefaultListCellRenderer {
         private static final long serialVersionUID = 1L;
 
         @Override
-        public java.awt.Component getListCellRendererComponent(javax.swing.JList<?> list, Object value, int index,
+        public Component getListCellRendererComponent(JList<?> list, Object value, int index,
                                                                boolean selected, boolean focus) {
             String text = value instanceof Enum ? keyOf(value) : String.valueOf(value);
             return super.getListCellRendererComponent(list, text, index, selected, focus);

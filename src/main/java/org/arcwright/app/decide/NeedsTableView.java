@@ -1,10 +1,12 @@
 package org.arcwright.app.decide;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import javax.swing.JLabel;
 import javax.swing.SwingConstants;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.NeedsSummary;
 import org.arcwright.app.widgets.Card;
+import org.arcwright.app.widgets.Themes;
 import org.arcwright.app.widgets.WrapLabel;
 
 /**
@@ -35,7 +37,7 @@ final class NeedsTableView extends Card {
                 mark.setToolTipText("Card " + card + ": " + r.key() + " " + m.words());
                 mark.getAccessibleContext().setAccessibleName("Card " + card + " " + m.words());
                 if (m != NeedsSummary.Mark.NOT_PROVEN) {
-                    mark.setForeground(org.arcwright.app.widgets.Themes.color(
+                    mark.setForeground(Themes.color(
                             m == NeedsSummary.Mark.MET ? "Arcwright.pass.foreground" : "Arcwright.fail.foreground"));
                 }
                 add(mark, "top");
@@ -49,7 +51,7 @@ final class NeedsTableView extends Card {
 
     private static JLabel help(String text) {
         JLabel l = new JLabel(text);
-        l.putClientProperty(com.formdev.flatlaf.FlatClientProperties.STYLE_CLASS, "small");
+        l.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
         return l;
     }
 }

@@ -1,5 +1,6 @@
 package org.arcwright.app.decide;
 
+import javax.swing.JLabel;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.NeedsSummary;
 import org.arcwright.app.widgets.Card;
@@ -18,7 +19,7 @@ final class NothingMeetsBlock extends Card {
         super(new MigLayout("insets 10 12 10 12, wrap 2, gap 6 3", "[][grow,fill]", ""), "caution");
         setName("nothingMeets");
         if (s.nothingMeets()) {
-            add(new javax.swing.JLabel(Icons.get("caution")), "top");
+            add(new JLabel(Icons.get("caution")), "top");
             WrapLabel statement = new WrapLabel(s.statement(), "Arcwright.heading.font", "Arcwright.fail.foreground");
             statement.setName("nothingMeetsStatement");
             add(statement, "growx, wmin 10");

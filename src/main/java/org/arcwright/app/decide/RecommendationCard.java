@@ -1,5 +1,7 @@
 package org.arcwright.app.decide;
 
+import java.awt.Component;
+import java.awt.image.BufferedImage;
 import java.util.List;
 import java.util.function.Consumer;
 import javax.swing.JButton;
@@ -18,7 +20,7 @@ import org.arcwright.tolerance.DrawingStyle;
 final class RecommendationCard extends Card {
     private static final long serialVersionUID = 1L;
 
-    RecommendationCard(int rank, Recommendation r, String verdict, DrawingStyle style, java.awt.image.BufferedImage frame,
+    RecommendationCard(int rank, Recommendation r, String verdict, DrawingStyle style, BufferedImage frame,
                        Consumer<Recommendation> onChoose,
                        Consumer<Recommendation> onCopy, Consumer<Recommendation> onCopyFrame, boolean chosen) {
         super(new MigLayout("insets 10 12 10 12, wrap 2, gap 6 3", "[][grow,fill]", ""), "card");
@@ -88,7 +90,7 @@ final class RecommendationCard extends Card {
 
     /** Gives the keyboard focus to the card's first enabled button. */
     void focusFirstButton() {
-        for (java.awt.Component c : getComponents()) {
+        for (Component c : getComponents()) {
             if (c instanceof JButton && c.isEnabled()) {
                 c.requestFocusInWindow();
                 return;

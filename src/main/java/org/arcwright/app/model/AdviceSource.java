@@ -1,6 +1,8 @@
 package org.arcwright.app.model;
 
+import java.util.ArrayList;
 import java.util.List;
+import java.util.function.Function;
 import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.Recommendation;
@@ -18,10 +20,10 @@ public interface AdviceSource {
      * The advisor's ranked recommendations, followed by the engineer's own tolerance intent as
      * written when no recommendation already proposes that callout.
      */
-    static AdviceSource advisor(java.util.function.Function<DesignCase, Advice> advise, double angleDeg) {
+    static AdviceSource advisor(Function<DesignCase, Advice> advise, double angleDeg) {
         return c -> {
             Advice a = advise.apply(c);
-            List<Recommendation> out = new java.util.ArrayList<>(a.recommendations());
+            List<Recommendation> out = new ArrayList<>(a.recommendations());
             IntentCard.of(c, angleDeg).ifPresent(intent -> {
                 boolean proposed = out.stream().anyMatch(r -> r.callout().equals(intent.callout()));
                 if (!proposed) out.add(intent);

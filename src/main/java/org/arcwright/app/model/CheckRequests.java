@@ -1,5 +1,6 @@
 package org.arcwright.app.model;
 
+import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -239,5 +240,5 @@ public final class CheckRequests {
 
     private static double round(double v) { return Math.round(v * 1e6) / 1e6; }
 
-    private static String num(double v) { return java.math.BigDecimal.valueOf(v).stripTrailingZeros().toPlainString(); }
+    private static String num(double v) { return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString(); }
 }

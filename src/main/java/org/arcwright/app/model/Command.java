@@ -1,5 +1,6 @@
 package org.arcwright.app.model;
 
+import java.util.Locale;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.function.Supplier;
@@ -38,8 +39,8 @@ public record Command(String id, String title, String group, String shortcut, Su
         for (String part : shortcut.trim().split("\\s+")) {
             if (part.equals("pressed") || part.equals("typed")) continue;
             if (sb.length() > 0) sb.append('+');
-            String p = part.length() <= 1 ? part.toUpperCase(java.util.Locale.ROOT)
-                    : part.substring(0, 1).toUpperCase(java.util.Locale.ROOT) + part.substring(1).toLowerCase(java.util.Locale.ROOT);
+            String p = part.length() <= 1 ? part.toUpperCase(Locale.ROOT)
+                    : part.substring(0, 1).toUpperCase(Locale.ROOT) + part.substring(1).toLowerCase(Locale.ROOT);
             sb.append(p.replace("_", " "));
         }
         return sb.toString();

@@ -10,7 +10,9 @@ import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointExcesses;
 import org.arcwright.inspect.Registration;
+import org.arcwright.io.InputProblem;
 import org.arcwright.model.BlendKind;
+import org.arcwright.worksheet.RadiusFeature;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.Point2;
@@ -138,11 +140,11 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
      * chosen callout judged by {@code chosen}; empty when they agree. The grades are the
      * inspection's, so a changed callout or nominal makes them stale.
      */
-    public String mismatch(ZoneSpec spec, org.arcwright.worksheet.RadiusFeature feature) {
+    public String mismatch(ZoneSpec spec, RadiusFeature feature) {
         InspectionCallout chosen;
         try {
             chosen = CheckRequests.callout(feature);
-        } catch (org.arcwright.io.InputProblem e) {
+        } catch (InputProblem e) {
             chosen = null;
         }
         return mismatch(spec, chosen);

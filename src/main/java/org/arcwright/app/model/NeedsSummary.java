@@ -1,7 +1,12 @@
 package org.arcwright.app.model;
 
+import java.math.BigDecimal;
+import java.math.MathContext;
+import java.math.RoundingMode;
 import java.util.ArrayList;
+import java.util.LinkedHashSet;
 import java.util.List;
+import java.util.Set;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.DesignChange;
 import org.arcwright.rules.Need;
@@ -104,7 +109,7 @@ public record NeedsSummary(boolean nothingMeets, String statement, String change
             return "Not proven against the needs: taken as written; check it against every need below.";
         }
         if (r.meetsAll()) return "Meets every need (" + needs.size() + " of " + needs.size() + ").";
-        java.util.Set<String> missed = new java.util.LinkedHashSet<>();
+        Set<String> missed = new LinkedHashSet<>();
         for (Need n : needs) if (mark(r, n) != Mark.MET) missed.add(n.key());
         return "Does not meet every need: misses " + String.join(", ", missed) + ". Not a usable answer as it stands.";
     }
@@ -112,8 +117,8 @@ public record NeedsSummary(boolean nothingMeets, String statement, String change
     /** Four significant digits, as the text output of {@code advise} prints a need's limit. */
     static String fourDigits(double v) {
         if (v == 0 || !Double.isFinite(v)) return Numbers.trim(v);
-        java.math.BigDecimal b = new java.math.BigDecimal(v)
-                .round(new java.math.MathContext(4, java.math.RoundingMode.HALF_EVEN)).stripTrailingZeros();
+        BigDecimal b = new BigDecimal(v)
+                .round(new MathContext(4, RoundingMode.HALF_EVEN)).stripTrailingZeros();
         return b.scale() < 0 ? b.setScale(0).toPlainString() : b.toPlainString();
     }
 }

@@ -1,5 +1,8 @@
 package org.arcwright.app.model;
 
+import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Path;
 import java.util.Objects;
 import java.util.Optional;
 import org.arcwright.io.InputProblem;
@@ -28,13 +31,13 @@ public final class RuleDraft {
      * A draft of rule {@code id} as written in its pack file {@code file}: the rule's own JSON object,
      * re-indented, so the editor shows what the lead engineer wrote rather than a re-serialisation.
      */
-    public static RuleDraft fromFile(JsonFiles json, java.nio.file.Path file, String id) {
-        com.fasterxml.jackson.databind.JsonNode tree = json.readTree(file);
-        for (com.fasterxml.jackson.databind.JsonNode r : tree.path("rules")) {
+    public static RuleDraft fromFile(JsonFiles json, Path file, String id) {
+        JsonNode tree = json.readTree(file);
+        for (JsonNode r : tree.path("rules")) {
             if (id.equals(r.path("id").asText())) {
                 try {
                     return new RuleDraft(json, file.toString(), json.mapper().writerWithDefaultPrettyPrinter().writeValueAsString(r));
-                } catch (com.fasterxml.jackson.core.JsonProcessingException e) {
+                } catch (JsonProcessingException e) {
                     throw new IllegalStateException(e);
                 }
             }

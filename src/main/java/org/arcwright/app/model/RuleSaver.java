@@ -4,12 +4,19 @@ import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.JsonNode;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
+import java.io.UncheckedIOException;
+import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Collection;
+import java.util.LinkedHashMap;
 import java.util.Objects;
 import org.arcwright.io.AtomicFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.PackLayer;
+import org.arcwright.rules.RuleBook;
 
 /**
  * Saves a rule edited in the Practice editor. A rule of a team or personal pack is written back in
@@ -66,7 +73,7 @@ public final class RuleSaver {
         ObjectNode content = json.mapper().createObjectNode();
         content.putArray("rules").add(rule);
         // one transaction: the rule file and the manifest listing it are both saved, or neither
-        java.util.LinkedHashMap<Path, AtomicFiles.Writer> writes = new java.util.LinkedHashMap<>();
+        LinkedHashMap<Path, AtomicFiles.Writer> writes = new LinkedHashMap<>();
         writes.put(file, utf8(pretty(content)));
         if (!listed) {
             overrides.add(id);
@@ -77,7 +84,7 @@ public final class RuleSaver {
     }
 
     /** The first id of the form {@code my.rule-N} that is not in {@code taken}. */
-    public static String freshId(java.util.Collection<String> taken) {
+    public static String freshId(Collection<String> taken) {
         for (int n = 1; ; n++) {
             String id = "my.rule-" + n;
             if (!taken.contains(id)) return id;
@@ -115,7 +122,7 @@ public final class RuleSaver {
      * @param inForce the ids of the rules in force: a new rule may not take one (that would be an override)
      * @throws InputProblem when the draft does not read, its id is taken or its file exists already
      */
-    public Path saveNew(RuleDraft draft, Path personalPack, java.util.Collection<String> inForce) {
+    public Path saveNew(RuleDraft draft, Path personalPack, Collection<String> inForce) {
         if (draft.problem().isPresent()) throw draft.problem().get();
         String id = draft.rule().orElseThrow().id();
         if (inForce.contains(id)) {
@@ -146,9 +153,9 @@ public final class RuleSaver {
      * @return the rule file changed or removed
      * @throws InputProblem for a built-in rule, or when the file no longer holds the rule
      */
-    public Path remove(org.arcwright.rules.RuleBook.Entry e) {
+    public Path remove(RuleBook.Entry e) {
         String id = e.rule().id();
-        if (e.layer() == org.arcwright.pack.PackLayer.BUILT_IN) {
+        if (e.layer() == PackLayer.BUILT_IN) {
             throw new InputProblem(e.file(), 0, 0, "id", "rule '" + id + "' is built in and cannot be deleted; "
                     + "list its id under \"disables\" in a pack's pack.json to switch it off");
         }
@@ -166,8 +173,8 @@ public final class RuleSaver {
         if (rules.isEmpty()) {
             try {
                 Files.delete(file);
-            } catch (java.io.IOException ex) {
-                throw new java.io.UncheckedIOException("could not delete " + file + ": " + ex.getMessage(), ex);
+            } catch (IOException ex) {
+                throw new UncheckedIOException("could not delete " + file + ": " + ex.getMessage(), ex);
             }
         } else {
             AtomicFiles.writeString(file, pretty(tree));
@@ -201,7 +208,7 @@ public final class RuleSaver {
     }
 
     private static AtomicFiles.Writer utf8(String text) {
-        return out -> out.write(text.getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        return out -> out.write(text.getBytes(StandardCharsets.UTF_8));
     }
 
     private String pretty(JsonNode tree) {

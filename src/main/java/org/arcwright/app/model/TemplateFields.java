@@ -1,9 +1,12 @@
 package org.arcwright.app.model;
 
 import java.util.ArrayList;
+import java.util.Collections;
+import java.util.IdentityHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import java.util.Set;
 import org.arcwright.templates.FieldSchema;
 import org.arcwright.templates.NoteFields;
 
@@ -50,7 +53,7 @@ public final class TemplateFields {
     public static List<Field> all() {
         List<Field> part = new ArrayList<>();
         List<Field> feature = new ArrayList<>();
-        java.util.Set<FieldSchema> listed = java.util.Collections.newSetFromMap(new java.util.IdentityHashMap<>());
+        Set<FieldSchema> listed = Collections.newSetFromMap(new IdentityHashMap<>());
         for (Map.Entry<String, FieldSchema> e : NoteFields.ROOT.fields().entrySet()) {
             walk(e.getKey(), e.getKey(), e.getValue(), List.of(), e.getKey().equals("feature") ? feature : part, listed);
         }
@@ -72,7 +75,7 @@ public final class TemplateFields {
      * is listed alone; its description says whose fields it has.
      */
     private static void walk(String path, String name, FieldSchema schema, List<String> within, List<Field> out,
-                             java.util.Set<FieldSchema> listed) {
+                             Set<FieldSchema> listed) {
         switch (schema.kind()) {
             case TEXT -> out.add(new Field(path, schema.kind(), schema.doc(), "{{" + name + "}}", within));
             case FLAG -> out.add(new Field(path, schema.kind(), schema.doc(), "{{#" + name + "}}{{/" + name + "}}", within));

@@ -5,6 +5,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.TreeMap;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackLayer;
 import org.arcwright.pack.PackStack;
@@ -64,7 +65,7 @@ public final class TemplatePreview {
     /** The text of {@code e} as written in its pack. */
     public static String text(Entry e) {
         // PACK/templates/NAME.mustache: read only from inside PACK, as the CLI does
-        return org.arcwright.io.InputFiles.readPackText(e.file(), e.file().getParent().getParent());
+        return InputFiles.readPackText(e.file(), e.file().getParent().getParent());
     }
 
     /**

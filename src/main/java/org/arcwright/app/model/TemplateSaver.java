@@ -4,6 +4,7 @@ import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.Collection;
 import org.arcwright.io.AtomicFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackLayer;
@@ -62,7 +63,7 @@ public final class TemplateSaver {
     }
 
     /** The first name of the form {@code my-note-N} that is not in {@code taken}. */
-    public static String freshName(java.util.Collection<String> taken) {
+    public static String freshName(Collection<String> taken) {
         for (int n = 1; ; n++) {
             String name = "my-note-" + n;
             if (!taken.contains(name)) return name;
@@ -83,7 +84,7 @@ public final class TemplateSaver {
      *     a built-in one is an override, made by editing that template)
      * @throws InputProblem when the name is not usable or taken, the text does not check, or the file exists
      */
-    public static Path saveNew(String name, String text, Path personalPack, java.util.Collection<String> inForce) {
+    public static Path saveNew(String name, String text, Path personalPack, Collection<String> inForce) {
         if (name == null || !name.matches("[a-z0-9][a-z0-9-]*")) {
             throw InputProblem.ofField("name", "a template name is lower-case letters, digits and hyphens, e.g. "
                     + "bench-note; got '" + name + "'");

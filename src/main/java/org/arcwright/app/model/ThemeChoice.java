@@ -2,6 +2,7 @@ package org.arcwright.app.model;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonValue;
+import java.util.Locale;
 
 /** Which look the window wears: follow the operating system, or always light or dark. */
 public enum ThemeChoice {
@@ -34,6 +35,6 @@ public enum ThemeChoice {
     public static boolean systemPrefersDark(String gtkThemeVariable, Object gtkThemeName) {
         String a = gtkThemeVariable == null ? "" : gtkThemeVariable;
         String b = gtkThemeName == null ? "" : gtkThemeName.toString();
-        return (a + " " + b).toLowerCase(java.util.Locale.ROOT).contains("dark");
+        return (a + " " + b).toLowerCase(Locale.ROOT).contains("dark");
     }
 }

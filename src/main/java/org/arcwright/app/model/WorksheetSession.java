@@ -2,10 +2,16 @@ package org.arcwright.app.model;
 
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.HashMap;
 import java.util.List;
+import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import org.arcwright.model.BlendFunction;
+import org.arcwright.model.BlendKind;
 import org.arcwright.model.DesignCase;
+import org.arcwright.model.Loading;
+import org.arcwright.model.Process;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
@@ -30,7 +36,7 @@ public final class WorksheetSession {
     private long revision;
     private long document;
     /** Points of the inspections run in this window, by feature id: the worksheet keeps only verdicts. */
-    private final java.util.Map<String, MeasuredPoints> measured = new java.util.HashMap<>();
+    private final Map<String, MeasuredPoints> measured = new HashMap<>();
 
     public WorksheetSession(WorksheetFiles files, PartWorksheet initial, Path file) {
         this.files = Objects.requireNonNull(files, "files");
@@ -78,9 +84,9 @@ public final class WorksheetSession {
     /** Adds a new open feature after the selection (or at the end) and selects it. */
     public RadiusFeature addFeature() {
         String id = worksheet.nextFeatureId();
-        DesignCase c = new DesignCase(worksheet.units(), worksheet.standard(), "New fillet", org.arcwright.model.BlendKind.FILLET,
-                worksheet.units() == Units.INCH ? 0.06 : 1.0, org.arcwright.model.BlendFunction.COSMETIC,
-                org.arcwright.model.Loading.NONE, false, false, List.of(), org.arcwright.model.Process.MACHINED,
+        DesignCase c = new DesignCase(worksheet.units(), worksheet.standard(), "New fillet", BlendKind.FILLET,
+                worksheet.units() == Units.INCH ? 0.06 : 1.0, BlendFunction.COSMETIC,
+                Loading.NONE, false, false, List.of(), Process.MACHINED,
                 null, null, null);
         RadiusFeature f = new RadiusFeature(id, c, null, null);
         edit("Add " + id, worksheet.withFeatureAt(insertionIndex(), f));
@@ -139,7 +145,7 @@ public final class WorksheetSession {
      */
     public void choose(String id, DesignCase c, Recommendation r) {
         RadiusFeature f = require(id);
-        boolean sameCallout = f.chosen() != null && r != null && java.util.Objects.equals(f.chosen().callout(), r.callout())
+        boolean sameCallout = f.chosen() != null && r != null && Objects.equals(f.chosen().callout(), r.callout())
                 && f.designCase().equals(c);
         RadiusFeature next = new RadiusFeature(f.id(), c, r, sameCallout ? f.inspection() : null);
         edit("Choose " + (r.text() == null ? r.ruleId() : r.text()) + " for " + id, worksheet.withFeature(next));

@@ -6,6 +6,7 @@ import org.arcwright.model.BlendKind;
 import org.arcwright.model.DesignCase;
 import org.arcwright.tolerance.CalloutParser;
 import org.arcwright.tolerance.RadiusCallout;
+import org.arcwright.tolerance.RadiusKind;
 
 /**
  * What the Zone view draws for one feature: the nominal blend at its corner and the zone its control
@@ -95,7 +96,7 @@ public sealed interface ZoneSpec {
             double min = r.min().orElse(0);
             double max = r.max().getAsDouble();
             double nom = Math.min(Math.max(r.nominalOrMean(), min), max);
-            return new LimitArcs(nom, min, max, angleDeg, c.kind(), r.kind() == org.arcwright.tolerance.RadiusKind.CR);
+            return new LimitArcs(nom, min, max, angleDeg, c.kind(), r.kind() == RadiusKind.CR);
         }
         return new NominalOnly(c.nominalRadius(), angleDeg, c.kind());
     }

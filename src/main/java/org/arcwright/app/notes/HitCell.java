@@ -14,7 +14,9 @@ import java.awt.font.TextAttribute;
 import java.awt.font.TextLayout;
 import java.text.AttributedString;
 import java.util.ArrayList;
+import java.util.LinkedHashMap;
 import java.util.List;
+import java.util.Map;
 import javax.swing.JComponent;
 import javax.swing.JList;
 import javax.swing.ListCellRenderer;
@@ -35,11 +37,11 @@ final class HitCell extends JComponent implements ListCellRenderer<NoteHit> {
     private Color background;
     private Color foreground;
     /** Laid-out snippets of the hits listed lately; a few screens' worth is plenty. */
-    private final transient java.util.Map<LayoutKey, List<TextLayout>> layouts = new java.util.LinkedHashMap<>(64, 0.75f, true) {
+    private final transient Map<LayoutKey, List<TextLayout>> layouts = new LinkedHashMap<>(64, 0.75f, true) {
         private static final long serialVersionUID = 1L;
 
         @Override
-        protected boolean removeEldestEntry(java.util.Map.Entry<LayoutKey, List<TextLayout>> eldest) { return size() > 200; }
+        protected boolean removeEldestEntry(Map.Entry<LayoutKey, List<TextLayout>> eldest) { return size() > 200; }
     };
 
     @Override

@@ -5,6 +5,8 @@ import java.time.LocalDate;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
+import java.util.Optional;
+import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
 import java.util.concurrent.ExecutorService;
 import java.util.function.Consumer;
@@ -217,7 +219,7 @@ public final class NotesPanel extends JPanel {
         NoteHit h = list.getSelectedValue();
         if (adjusting || h == null || store == null) return;
         NoteLibrary s = store;
-        java.util.concurrent.CompletableFuture.supplyAsync(() -> s.get(h.id()), background)
+        CompletableFuture.supplyAsync(() -> s.get(h.id()), background)
                 .whenComplete((n, e) -> SwingUtilities.invokeLater(() -> read(n.orElse(null))));
     }
 
@@ -266,7 +268,7 @@ public final class NotesPanel extends JPanel {
             edit(purpose, editor, heading, opened);
             return;
         }
-        java.util.Optional<String> refused = NoteDrafts.refusal(purpose, note, store.get(note.id()), opened);
+        Optional<String> refused = NoteDrafts.refusal(purpose, note, store.get(note.id()), opened);
         if (refused.isPresent()) {
             status.accept("Note not saved: " + refused.get());
             JOptionPane.showMessageDialog(this, "Not saved yet: " + refused.get() + ".", heading, JOptionPane.WARNING_MESSAGE);
@@ -274,7 +276,7 @@ public final class NotesPanel extends JPanel {
             return;
         }
         NoteLibrary s = store;
-        java.util.concurrent.CompletableFuture.supplyAsync(() -> s.save(note), background)
+        CompletableFuture.supplyAsync(() -> s.save(note), background)
                 .whenComplete((f, e) -> SwingUtilities.invokeLater(() -> saved(f, e)));
     }
 

@@ -2,6 +2,10 @@ package org.arcwright.app.part;
 
 import com.formdev.flatlaf.FlatClientProperties;
 import java.awt.Component;
+import java.awt.Font;
+import java.awt.Insets;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
 import java.util.List;
 import javax.swing.Action;
 import javax.swing.JButton;
@@ -11,6 +15,7 @@ import javax.swing.JScrollPane;
 import javax.swing.JTable;
 import javax.swing.JToolBar;
 import javax.swing.ListSelectionModel;
+import javax.swing.SwingConstants;
 import javax.swing.table.DefaultTableCellRenderer;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.FeatureColumn;
@@ -54,17 +59,17 @@ public final class PartPanel extends JPanel {
         for (Action a : rowActions) {
             JButton b = bar.add(a);
             b.setHideActionText(false);
-            b.setHorizontalTextPosition(javax.swing.SwingConstants.RIGHT);
-            b.setVerticalTextPosition(javax.swing.SwingConstants.CENTER);
+            b.setHorizontalTextPosition(SwingConstants.RIGHT);
+            b.setVerticalTextPosition(SwingConstants.CENTER);
             b.setName("part." + a.getValue(Action.NAME));
         }
         add(partNumber, "wmin 10");
         add(partName, "wmin 10");
         add(material, "wmin 10");
         add(bar, "wmin 10");
-        addComponentListener(new java.awt.event.ComponentAdapter() {
+        addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) { fitBar(); }
+            public void componentResized(ComponentEvent e) { fitBar(); }
         });
         add(new JScrollPane(table));
         session.listeners().add(this::sessionChanged);
@@ -79,10 +84,10 @@ public final class PartPanel extends JPanel {
      * (each action's tooltip names it), so no button is cut off in a narrow column.
      */
     private void fitBar() {
-        java.awt.Insets in = getInsets();
+        Insets in = getInsets();
         int room = getWidth() - in.left - in.right - 16;
         boolean iconsOnly = fullBarWidth() > room;
-        for (java.awt.Component c : bar.getComponents()) {
+        for (Component c : bar.getComponents()) {
             if (c instanceof JButton b && b.getHideActionText() != iconsOnly) {
                 b.setHideActionText(iconsOnly);
                 bar.revalidate();
@@ -93,13 +98,13 @@ public final class PartPanel extends JPanel {
     /** The bar's width with every button's words shown. */
     private int fullBarWidth() {
         int w = bar.getInsets().left + bar.getInsets().right;
-        for (java.awt.Component c : bar.getComponents()) {
+        for (Component c : bar.getComponents()) {
             if (!(c instanceof JButton b)) {
                 w += c.getPreferredSize().width;
                 continue;
             }
             String text = (String) b.getAction().getValue(Action.NAME);
-            java.awt.Insets bi = b.getInsets();
+            Insets bi = b.getInsets();
             int icon = b.getIcon() == null ? 0 : b.getIcon().getIconWidth() + b.getIconTextGap();
             w += bi.left + bi.right + icon + b.getFontMetrics(b.getFont()).stringWidth(text);
         }
@@ -164,7 +169,7 @@ public final class PartPanel extends JPanel {
             } else if (!selected) {
                 c.setForeground(t.getForeground());
             }
-            c.setFont(col == FeatureColumn.ID ? t.getFont().deriveFont(java.awt.Font.BOLD) : t.getFont());
+            c.setFont(col == FeatureColumn.ID ? t.getFont().deriveFont(Font.BOLD) : t.getFont());
             if (c instanceof JLabel) {
                 ((JLabel) c).setToolTipText(col == FeatureColumn.ID ? f.designCase().feature() : null);
             }

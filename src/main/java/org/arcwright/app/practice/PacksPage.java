@@ -1,6 +1,7 @@
 package org.arcwright.app.practice;
 
 import java.nio.file.Path;
+import java.util.Collections;
 import java.util.List;
 import java.util.function.Supplier;
 import javax.swing.DefaultListModel;
@@ -157,6 +158,6 @@ final class PacksPage extends JPanel {
 
     /** The packs in force as listed (tests). */
     List<String> inForceLines() {
-        return java.util.Collections.list(inForce.elements());
+        return Collections.list(inForce.elements());
     }
 }

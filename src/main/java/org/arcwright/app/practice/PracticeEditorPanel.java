@@ -1,18 +1,27 @@
 package org.arcwright.app.practice;
 
+import com.formdev.flatlaf.util.UIScale;
+import java.awt.Component;
+import java.awt.Dimension;
+import java.awt.Font;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Objects;
+import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
 import java.util.function.Supplier;
+import javax.swing.DefaultListCellRenderer;
 import javax.swing.DefaultListModel;
 import javax.swing.JButton;
 import javax.swing.JLabel;
 import javax.swing.JList;
+import javax.swing.JOptionPane;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JSplitPane;
+import javax.swing.JTabbedPane;
 import javax.swing.JTable;
 import javax.swing.JTextArea;
 import javax.swing.SwingUtilities;
@@ -20,16 +29,21 @@ import javax.swing.Timer;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 import javax.swing.table.DefaultTableModel;
+import javax.swing.text.JTextComponent;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.RuleDraft;
+import org.arcwright.app.model.RuleForm;
 import org.arcwright.app.model.RuleSaver;
 import org.arcwright.app.model.TeamPacks;
+import org.arcwright.app.model.TemplateFields;
 import org.arcwright.app.model.TemplatePreview;
 import org.arcwright.app.model.TemplateSaver;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.widgets.WrapLabel;
+import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackLayer;
+import org.arcwright.pack.PackStack;
 import org.arcwright.rules.Advisor;
 import org.arcwright.rules.PackCheck;
 import org.arcwright.rules.RuleBook;
@@ -47,7 +61,7 @@ public final class PracticeEditorPanel extends JPanel {
     private final transient JsonFiles json;
     private final transient Executor background;
     private transient RuleBook book;
-    private transient org.arcwright.pack.PackStack stack;
+    private transient PackStack stack;
     private transient Advisor advisor;
     private transient RuleDraft draft;
     /** The rule shown in the editor and its text as opened or last saved: anything else is an unsaved edit. */
@@ -88,7 +102,7 @@ public final class PracticeEditorPanel extends JPanel {
     private final Timer validateLater = new Timer(250, e -> validateNow());
     private boolean loading;
     private final RuleFormView form = new RuleFormView(this::formEdited);
-    private final javax.swing.JTabbedPane ruleViews = new javax.swing.JTabbedPane();
+    private final JTabbedPane ruleViews = new JTabbedPane();
     private final JButton newRule = new JButton("New rule");
     private final JButton deleteRule = new JButton("Delete…");
     private final JButton revertRule = new JButton("Revert to built-in…");
@@ -103,9 +117,9 @@ public final class PracticeEditorPanel extends JPanel {
     private String selectAfterReload;
     private String selectTemplateAfterReload;
     /** What a form field said last when its text could not be written into the rule, or null. */
-    private transient org.arcwright.io.InputProblem formProblem;
+    private transient InputProblem formProblem;
     private final transient PacksPage packsPage;
-    private final javax.swing.JTabbedPane pages = new javax.swing.JTabbedPane();
+    private final JTabbedPane pages = new JTabbedPane();
 
     public PracticeEditorPanel(JsonFiles json, Executor background, WorksheetSession session, Supplier<Path> personalPack,
                                Runnable reloadRules, TeamPackSettings teamPacks) {
@@ -129,22 +143,22 @@ public final class PracticeEditorPanel extends JPanel {
         run.setEnabled(false);
         run.setToolTipText("Unavailable: select a rule first");
         run.addActionListener(e -> runExamples());
-        list.setCellRenderer(new javax.swing.DefaultListCellRenderer() {
+        list.setCellRenderer(new DefaultListCellRenderer() {
             private static final long serialVersionUID = 1L;
 
             @Override
-            public java.awt.Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
+            public Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
                 RuleBook.Entry e = (RuleBook.Entry) v;
                 // the pack only where it is not the built-in one, so the ids stay readable in a narrow list
                 String where = e.layer() == PackLayer.BUILT_IN ? "" : "   (" + e.pack()
                         + (e.replaces() == null ? "" : ", overrides " + lowerWord(e.replaces())) + ")";
-                java.awt.Component c = super.getListCellRendererComponent(l, e.rule().id() + where, i, s, f);
+                Component c = super.getListCellRendererComponent(l, e.rule().id() + where, i, s, f);
                 setToolTipText(e.describe());
                 return c;
             }
         });
         list.addListSelectionListener(e -> selected(e.getValueIsAdjusting()));
-        editor.setFont(new java.awt.Font(java.awt.Font.MONOSPACED, java.awt.Font.PLAIN, editor.getFont().getSize()));
+        editor.setFont(new Font(Font.MONOSPACED, Font.PLAIN, editor.getFont().getSize()));
         editor.setTabSize(2);
         editor.getDocument().addDocumentListener(new DocumentListener() {
             public void insertUpdate(DocumentEvent e) { typed(); }
@@ -172,9 +186,9 @@ public final class PracticeEditorPanel extends JPanel {
         right.add(actions, "left, growx 0, wmin 10");
         JScrollPane ruleScroll = new JScrollPane(list);
         // Long rule ids must not push the form off the page: the list starts narrow, and folds away with the arrows.
-        ruleScroll.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(230),
+        ruleScroll.setPreferredSize(new Dimension(UIScale.scale(230),
                 ruleScroll.getPreferredSize().height));
-        ruleScroll.setMinimumSize(new java.awt.Dimension(0, 0));
+        ruleScroll.setMinimumSize(new Dimension(0, 0));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, ruleScroll, right);
         split.setResizeWeight(0.25);
         split.setOneTouchExpandable(true);
@@ -237,29 +251,29 @@ public final class PracticeEditorPanel extends JPanel {
         centre.add(new JScrollPane(templatePreview), "wmin 10, hmin 10");
         centre.add(templateSave, "left, growx 0, wmin 10");
         TemplateFieldsView fields = new TemplateFieldsView(this::insertField);
-        fields.setMinimumSize(new java.awt.Dimension(0, 0));
+        fields.setMinimumSize(new Dimension(0, 0));
         JScrollPane listScroll = new JScrollPane(templateList);
-        listScroll.setMinimumSize(new java.awt.Dimension(0, 0));
+        listScroll.setMinimumSize(new Dimension(0, 0));
         // the templates above the fields they may use, so the text and its preview keep the width
         JSplitPane left = new JSplitPane(JSplitPane.VERTICAL_SPLIT, listScroll, fields);
         left.setName("templateFieldsSplit");
         left.setResizeWeight(0.3);
         left.setBorder(null);
-        left.setPreferredSize(new java.awt.Dimension(com.formdev.flatlaf.util.UIScale.scale(220), 10));
-        left.setMinimumSize(new java.awt.Dimension(0, 0));
+        left.setPreferredSize(new Dimension(UIScale.scale(220), 10));
+        left.setMinimumSize(new Dimension(0, 0));
         JSplitPane split = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, left, centre);
         split.setResizeWeight(0.2);
         split.setOneTouchExpandable(true);
         split.setBorder(null);
-        templateList.setCellRenderer(new javax.swing.DefaultListCellRenderer() {
+        templateList.setCellRenderer(new DefaultListCellRenderer() {
             private static final long serialVersionUID = 1L;
 
             @Override
-            public java.awt.Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
+            public Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
                 TemplatePreview.Entry e = (TemplatePreview.Entry) v;
                 String where = e.layer() == PackLayer.BUILT_IN ? "" : "   (" + e.pack()
                         + (e.isOverride() ? ", overrides " + lowerWord(e.replaces()) : "") + ")";
-                java.awt.Component c = super.getListCellRendererComponent(l, e.name() + where, i, s, f);
+                Component c = super.getListCellRendererComponent(l, e.name() + where, i, s, f);
                 setToolTipText(e.name() + " from " + e.pack() + ": " + e.file());
                 return c;
             }
@@ -282,7 +296,7 @@ public final class PracticeEditorPanel extends JPanel {
     }
 
     /** Puts {@code f} at the caret, with the caret inside a section it opens. */
-    private void insertField(org.arcwright.app.model.TemplateFields.Field f) {
+    private void insertField(TemplateFields.Field f) {
         if (shownTemplate == null) {
             templateVerdict.show("Select or start a template first, then insert fields into it.", "Arcwright.error.foreground");
             return;
@@ -376,7 +390,7 @@ public final class PracticeEditorPanel extends JPanel {
     }
 
     private List<String> templateNames() {
-        List<String> names = new java.util.ArrayList<>();
+        List<String> names = new ArrayList<>();
         for (int i = 0; i < templates.size(); i++) names.add(templates.get(i).name());
         return names;
     }
@@ -403,9 +417,9 @@ public final class PracticeEditorPanel extends JPanel {
     private void newTemplate() {
         if (shownTemplate != null && templateEdited() && !letGo(templateWhat())) return;
         String fresh = TemplateSaver.freshName(templateNames());
-        Object answer = javax.swing.JOptionPane.showInputDialog(this, "Name of the new template (lower-case letters, "
+        Object answer = JOptionPane.showInputDialog(this, "Name of the new template (lower-case letters, "
                 + "digits and hyphens; the file is NAME.mustache in your personal pack):", "New template",
-                javax.swing.JOptionPane.PLAIN_MESSAGE, null, null, fresh);
+                JOptionPane.PLAIN_MESSAGE, null, null, fresh);
         if (answer == null) return;
         String name = answer.toString().strip();
         if (!name.matches("[a-z0-9][a-z0-9-]*") || templateNames().contains(name)) {
@@ -495,8 +509,8 @@ public final class PracticeEditorPanel extends JPanel {
     /** Asks before something is deleted; true only when the user presses {@code yes}. */
     private boolean confirm(String question, String consequence, String yes) {
         Object[] options = {"Cancel", yes};
-        int answer = javax.swing.JOptionPane.showOptionDialog(this, question + "\n" + consequence, question,
-                javax.swing.JOptionPane.DEFAULT_OPTION, javax.swing.JOptionPane.WARNING_MESSAGE, null, options, options[0]);
+        int answer = JOptionPane.showOptionDialog(this, question + "\n" + consequence, question,
+                JOptionPane.DEFAULT_OPTION, JOptionPane.WARNING_MESSAGE, null, options, options[0]);
         return answer == 1;
     }
 
@@ -513,7 +527,7 @@ public final class PracticeEditorPanel extends JPanel {
     public JTextArea templateEditor() { return templateText; }
 
     /** Called once the packs have loaded (and after each reload). */
-    public void setRules(org.arcwright.pack.PackStack packs, RuleBook b, Advisor a) {
+    public void setRules(PackStack packs, RuleBook b, Advisor a) {
         stack = packs;
         packsPage.packsLoaded(packs);
         String keepTemplate = selectTemplateAfterReload != null ? selectTemplateAfterReload
@@ -608,7 +622,7 @@ public final class PracticeEditorPanel extends JPanel {
     }
 
     /** Selects {@code value} in {@code l} without treating it as the user's choice (null clears the selection). */
-    private <T> void reselect(javax.swing.JList<T> l, T value) {
+    private <T> void reselect(JList<T> l, T value) {
         reselecting = true;
         try {
             if (value == null) {
@@ -660,8 +674,8 @@ public final class PracticeEditorPanel extends JPanel {
      */
     private boolean letGo(String what) {
         Object[] options = {"Keep editing", "Discard the changes"};
-        int answer = javax.swing.JOptionPane.showOptionDialog(this, "The changes to " + what + " are not saved.",
-                "Changes not saved", javax.swing.JOptionPane.DEFAULT_OPTION, javax.swing.JOptionPane.WARNING_MESSAGE, null,
+        int answer = JOptionPane.showOptionDialog(this, "The changes to " + what + " are not saved.",
+                "Changes not saved", JOptionPane.DEFAULT_OPTION, JOptionPane.WARNING_MESSAGE, null,
                 options, options[0]);
         return answer == 1;
     }
@@ -684,8 +698,8 @@ public final class PracticeEditorPanel extends JPanel {
             }
             return;
         }
-        java.nio.file.Path file = null;
-        for (org.arcwright.pack.PackStack.PackFile f : stack.files("rules", ".json")) {
+        Path file = null;
+        for (PackStack.PackFile f : stack.files("rules", ".json")) {
             if (f.path().toString().equals(e.file())) file = f.path();
         }
         if (file == null) {
@@ -713,7 +727,7 @@ public final class PracticeEditorPanel extends JPanel {
     /** Starts a new rule from the skeleton, after asking about an unsaved edit; nothing is written until Save. */
     private void newRule() {
         if ((shownRule != null || creatingRule) && ruleEdited() && !letGo(ruleWhat())) return;
-        List<String> ids = new java.util.ArrayList<>();
+        List<String> ids = new ArrayList<>();
         for (int i = 0; i < entries.size(); i++) ids.add(entries.get(i).rule().id());
         String text = RuleSaver.skeleton(RuleSaver.freshId(ids));
         creatingRule = true;
@@ -733,7 +747,7 @@ public final class PracticeEditorPanel extends JPanel {
         run.setToolTipText("Unavailable: save the new rule first; its examples then run with the personal pack's");
         ruleButtons();
         showVerdict();
-        form.control(org.arcwright.app.model.RuleForm.Field.SUMMARY).requestFocusInWindow();
+        form.control(RuleForm.Field.SUMMARY).requestFocusInWindow();
     }
 
     private void deleteRule() {
@@ -789,10 +803,10 @@ public final class PracticeEditorPanel extends JPanel {
     }
 
     /** A form field was edited: its text goes into the JSON, or the field is marked with what is wrong. */
-    private void formEdited(org.arcwright.app.model.RuleForm.Field f, String text) {
+    private void formEdited(RuleForm.Field f, String text) {
         if (draft == null) return;
         try {
-            String next = org.arcwright.app.model.RuleForm.write(editor.getText(), f, text);
+            String next = RuleForm.write(editor.getText(), f, text);
             formProblem = null;
             loading = true;
             editor.setText(next);
@@ -800,7 +814,7 @@ public final class PracticeEditorPanel extends JPanel {
             validateLater.stop();
             draft.setText(next);
             showVerdict();
-        } catch (org.arcwright.io.InputProblem p) {
+        } catch (InputProblem p) {
             formProblem = p;
             showVerdict();
         }
@@ -820,7 +834,7 @@ public final class PracticeEditorPanel extends JPanel {
     }
 
     private void showVerdict() {
-        java.util.Optional<org.arcwright.io.InputProblem> problem = formProblem != null ? java.util.Optional.of(formProblem)
+        Optional<InputProblem> problem = formProblem != null ? Optional.of(formProblem)
                 : draft.problem();
         boolean reads = problem.isEmpty();
         save.setEnabled(reads);
@@ -828,9 +842,9 @@ public final class PracticeEditorPanel extends JPanel {
                 : save.getText().equals("Save") ? "Write the rule back into its pack file"
                 : "The built-in pack cannot change: write the rule into your personal pack as an override")
                 : "Unavailable: the rule does not read; fix what the message under the form says");
-        form.mark(problem.flatMap(org.arcwright.app.model.RuleForm::fieldOf));
+        form.mark(problem.flatMap(RuleForm::fieldOf));
         if (problem.isPresent()) {
-            String where = problem.flatMap(org.arcwright.app.model.RuleForm::fieldOf)
+            String where = problem.flatMap(RuleForm::fieldOf)
                     .map(f -> "Form field " + f.label() + ": ").orElse("");
             verdict.show(where + problem.get().getMessage(), "Arcwright.error.foreground");
         } else {
@@ -849,7 +863,7 @@ public final class PracticeEditorPanel extends JPanel {
         savedRuleText = editor.getText();
         Path personal = personalPack.get();
         if (creatingRule) {
-            List<String> ids = new java.util.ArrayList<>();
+            List<String> ids = new ArrayList<>();
             for (int i = 0; i < entries.size(); i++) ids.add(entries.get(i).rule().id());
             String id = d.rule().orElseThrow().id();
             CompletableFuture.supplyAsync(() -> saver.saveNew(d, personal, ids), background)
@@ -891,7 +905,7 @@ public final class PracticeEditorPanel extends JPanel {
     public String saveLabel() { return save.getText(); }
 
     /** The form's control for {@code f} (tests). */
-    public javax.swing.text.JTextComponent formControl(org.arcwright.app.model.RuleForm.Field f) { return form.control(f); }
+    public JTextComponent formControl(RuleForm.Field f) { return form.control(f); }
 
     /** The packs in force as the Packs page lists them, and what it said last (tests). */
     public List<String> packsInForce() { return packsPage.inForceLines(); }
@@ -900,7 +914,7 @@ public final class PracticeEditorPanel extends JPanel {
 
     /** The ids of the rules listed, in list order (tests). */
     public List<String> ruleIds() {
-        List<String> ids = new java.util.ArrayList<>();
+        List<String> ids = new ArrayList<>();
         for (int i = 0; i < entries.size(); i++) ids.add(entries.get(i).rule().id());
         return ids;
     }

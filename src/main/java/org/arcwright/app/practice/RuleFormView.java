@@ -6,10 +6,12 @@ import java.util.EnumMap;
 import java.util.Map;
 import java.util.Optional;
 import java.util.function.BiConsumer;
+import javax.swing.JComponent;
 import javax.swing.JLabel;
 import javax.swing.JScrollPane;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
+import javax.swing.JViewport;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 import javax.swing.text.JTextComponent;
@@ -133,8 +135,8 @@ final class RuleFormView extends JScrollPane {
         for (Map.Entry<RuleForm.Field, JTextComponent> e : controls.entrySet()) {
             boolean bad = problem.isPresent() && problem.get() == e.getKey();
             JTextComponent c = e.getValue();
-            Object target = c.getParent() instanceof javax.swing.JViewport v && v.getParent() instanceof JScrollPane s ? s : c;
-            ((javax.swing.JComponent) target).putClientProperty(FlatClientProperties.OUTLINE,
+            Object target = c.getParent() instanceof JViewport v && v.getParent() instanceof JScrollPane s ? s : c;
+            ((JComponent) target).putClientProperty(FlatClientProperties.OUTLINE,
                     bad ? FlatClientProperties.OUTLINE_ERROR : null);
         }
     }

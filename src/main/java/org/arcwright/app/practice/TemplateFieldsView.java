@@ -1,6 +1,10 @@
 package org.arcwright.app.practice;
 
+import com.formdev.flatlaf.FlatClientProperties;
 import java.awt.Component;
+import java.awt.event.MouseAdapter;
+import java.awt.event.MouseEvent;
+import java.util.Locale;
 import java.util.function.Consumer;
 import javax.swing.DefaultListCellRenderer;
 import javax.swing.DefaultListModel;
@@ -34,7 +38,7 @@ final class TemplateFieldsView extends JPanel {
         list.setName("templateFieldList");
         filter.setName("templateFieldFilter");
         insert.setName("templateFieldInsert");
-        filter.putClientProperty(com.formdev.flatlaf.FlatClientProperties.PLACEHOLDER_TEXT, "Filter, e.g. datum");
+        filter.putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT, "Filter, e.g. datum");
         filter.getDocument().addDocumentListener(new DocumentListener() {
             public void insertUpdate(DocumentEvent e) { refilter(); }
             public void removeUpdate(DocumentEvent e) { refilter(); }
@@ -47,15 +51,15 @@ final class TemplateFieldsView extends JPanel {
             public Component getListCellRendererComponent(JList<?> l, Object v, int i, boolean s, boolean f) {
                 TemplateFields.Field field = (TemplateFields.Field) v;
                 JLabel c = (JLabel) super.getListCellRendererComponent(l, field.path(), i, s, f);
-                c.setToolTipText("<html><b>" + field.path() + "</b> (" + field.kind().name().toLowerCase(java.util.Locale.ROOT)
+                c.setToolTipText("<html><b>" + field.path() + "</b> (" + field.kind().name().toLowerCase(Locale.ROOT)
                         + "): " + escape(field.doc()) + "<br>Inserts <code>" + escape(field.insert()) + "</code>, "
                         + escape(field.where()) + "</html>");
                 return c;
             }
         });
-        list.addMouseListener(new java.awt.event.MouseAdapter() {
+        list.addMouseListener(new MouseAdapter() {
             @Override
-            public void mouseClicked(java.awt.event.MouseEvent e) {
+            public void mouseClicked(MouseEvent e) {
                 if (e.getClickCount() == 2) insertSelected();
             }
         });

@@ -5,6 +5,7 @@ import java.time.Clock;
 import java.util.concurrent.ExecutorService;
 import java.util.concurrent.Executors;
 import java.util.concurrent.ThreadFactory;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.arcwright.app.model.RecoveryStore;
 import org.arcwright.app.model.SettingsStore;
@@ -42,9 +43,9 @@ public record AppServices(Path configDir, JsonFiles json, WorksheetFiles files, 
         search.shutdownNow();
         io.shutdown();
         try {
-            io.awaitTermination(5, java.util.concurrent.TimeUnit.SECONDS);
-            background.awaitTermination(5, java.util.concurrent.TimeUnit.SECONDS);
-            search.awaitTermination(5, java.util.concurrent.TimeUnit.SECONDS);
+            io.awaitTermination(5, TimeUnit.SECONDS);
+            background.awaitTermination(5, TimeUnit.SECONDS);
+            search.awaitTermination(5, TimeUnit.SECONDS);
         } catch (InterruptedException e) {
             Thread.currentThread().interrupt();
         }

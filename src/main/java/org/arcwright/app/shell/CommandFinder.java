@@ -1,8 +1,10 @@
 package org.arcwright.app.shell;
 
 import com.formdev.flatlaf.FlatClientProperties;
+import java.awt.Color;
 import java.awt.Component;
 import java.awt.Frame;
+import java.awt.event.ActionEvent;
 import java.awt.event.KeyEvent;
 import java.awt.event.MouseAdapter;
 import java.awt.event.MouseEvent;
@@ -18,6 +20,7 @@ import javax.swing.JScrollPane;
 import javax.swing.JTextField;
 import javax.swing.KeyStroke;
 import javax.swing.ListCellRenderer;
+import javax.swing.UIManager;
 import javax.swing.event.DocumentEvent;
 import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
@@ -81,7 +84,7 @@ public final class CommandFinder extends JDialog {
         getRootPane().getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW).put(key, name);
         getRootPane().getActionMap().put(name, new AbstractAction() {
             private static final long serialVersionUID = 1L;
-            public void actionPerformed(java.awt.event.ActionEvent e) { r.run(); }
+            public void actionPerformed(ActionEvent e) { r.run(); }
         });
     }
 
@@ -104,7 +107,7 @@ public final class CommandFinder extends JDialog {
         Command c = list.getSelectedValue();
         if (c == null || !c.isEnabled()) return;
         close();
-        actions.get(c.id()).actionPerformed(new java.awt.event.ActionEvent(this, 0, c.id()));
+        actions.get(c.id()).actionPerformed(new ActionEvent(this, 0, c.id()));
     }
 
     private void close() { setVisible(false); }
@@ -131,8 +134,8 @@ public final class CommandFinder extends JDialog {
             group.setText(enabled ? c.group() : c.group() + " · " + c.whyDisabled().get().orElse(""));
             key.setText(c.shortcutLabel());
             panel.setBackground(selected ? l.getSelectionBackground() : l.getBackground());
-            java.awt.Color fg = selected ? l.getSelectionForeground() : l.getForeground();
-            java.awt.Color dim = javax.swing.UIManager.getColor("Label.disabledForeground");
+            Color fg = selected ? l.getSelectionForeground() : l.getForeground();
+            Color dim = UIManager.getColor("Label.disabledForeground");
             title.setForeground(enabled ? fg : dim);
             group.setForeground(selected ? fg : dim);
             key.setForeground(selected ? fg : dim);

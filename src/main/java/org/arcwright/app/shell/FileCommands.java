@@ -1,5 +1,6 @@
 package org.arcwright.app.shell;
 
+import java.io.File;
 import java.io.IOException;
 import java.io.InputStream;
 import java.io.UncheckedIOException;
@@ -94,7 +95,7 @@ final class FileCommands {
 
     void saveAs() {
         JFileChooser chooser = chooser();
-        chooser.setSelectedFile(new java.io.File(session.worksheet().part().number() + WorksheetFiles.EXTENSION));
+        chooser.setSelectedFile(new File(session.worksheet().part().number() + WorksheetFiles.EXTENSION));
         if (chooser.showSaveDialog(frame) == JFileChooser.APPROVE_OPTION) saveTo(chooser.getSelectedFile().toPath());
     }
 
@@ -175,7 +176,7 @@ final class FileCommands {
     void exportSheet() {
         JFileChooser c = new JFileChooser(session.file().map(p -> p.toAbsolutePath().getParent().toFile()).orElse(null));
         c.setFileFilter(new FileNameExtensionFilter("Sheets (*.pdf, *.html, *.md)", "pdf", "html", "md"));
-        c.setSelectedFile(new java.io.File(session.worksheet().part().number() + ".pdf"));
+        c.setSelectedFile(new File(session.worksheet().part().number() + ".pdf"));
         if (c.showSaveDialog(frame) == JFileChooser.APPROVE_OPTION) export(c.getSelectedFile().toPath());
     }
 

@@ -1,9 +1,15 @@
 package org.arcwright.app.shell;
 
+import com.formdev.flatlaf.extras.FlatSVGIcon;
 import java.awt.BorderLayout;
 import java.awt.Component;
+import java.awt.Dimension;
+import java.awt.GraphicsEnvironment;
+import java.awt.Rectangle;
 import java.awt.Toolkit;
 import java.awt.datatransfer.StringSelection;
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
 import java.awt.event.WindowAdapter;
 import java.awt.event.WindowEvent;
 import java.nio.file.Path;
@@ -16,7 +22,9 @@ import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.ExecutionException;
 import java.util.function.Supplier;
 import javax.swing.Action;
+import javax.swing.ActionMap;
 import javax.swing.Icon;
+import javax.swing.InputMap;
 import javax.swing.JButton;
 import javax.swing.JComponent;
 import javax.swing.JFrame;
@@ -27,9 +35,13 @@ import javax.swing.JPanel;
 import javax.swing.JSplitPane;
 import javax.swing.JTabbedPane;
 import javax.swing.JToolBar;
+import javax.swing.KeyStroke;
 import javax.swing.SwingUtilities;
 import javax.swing.SwingWorker;
+import javax.swing.Timer;
 import javax.swing.WindowConstants;
+import javax.swing.event.MenuEvent;
+import javax.swing.event.MenuListener;
 import org.arcwright.app.decide.DecidePanel;
 import org.arcwright.app.model.AdviceSource;
 import org.arcwright.app.model.AnswerDrafts;
@@ -43,6 +55,7 @@ import org.arcwright.app.model.TeamPacks;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.part.PartPanel;
+import org.arcwright.app.simulate.SimulationView;
 import org.arcwright.app.zoneview.ZoneViewPanel;
 import org.arcwright.app.check.CheckPanel;
 import org.arcwright.app.model.CheckRequests;
@@ -165,12 +178,12 @@ public final class MainWindow {
         frame.addWindowListener(new WindowAdapter() {
             @Override
             public void windowOpened(WindowEvent e) {
-                javax.swing.Timer fallback = new javax.swing.Timer(PACKS_AT_THE_LATEST_MS, t -> loadPacksOnce());
+                Timer fallback = new Timer(PACKS_AT_THE_LATEST_MS, t -> loadPacksOnce());
                 fallback.setRepeats(false);
                 fallback.start();
             }
         });
-        decideTab.whenBuilt(p -> javax.swing.SwingUtilities.invokeLater(() -> {
+        decideTab.whenBuilt(p -> SwingUtilities.invokeLater(() -> {
             setWindowIcon();
             loadPacksOnce();
         }));
@@ -184,7 +197,7 @@ public final class MainWindow {
     /** The taskbar icon, drawn from its SVG after the first frame rather than before it. */
     private void setWindowIcon() {
         if (frame.getIconImages().isEmpty()) {
-            frame.setIconImages(List.of(((com.formdev.flatlaf.extras.FlatSVGIcon) Icons.get("zone", 32)).getImage()));
+            frame.setIconImages(List.of(((FlatSVGIcon) Icons.get("zone", 32)).getImage()));
         }
     }
 
@@ -236,15 +249,15 @@ public final class MainWindow {
                     public void setTeamPacks(List<String> folders) { changeTeamPacks(folders); }
                 }));
         work.addTab("Practice editor", Icons.get("practice"), practiceTab, "Rules of the practice packs (Alt+7)");
-        work.addTab("Simulation", null, new LazyTab<>("simulation", () -> new org.arcwright.app.simulate.SimulationView(session,
+        work.addTab("Simulation", null, new LazyTab<>("simulation", () -> new SimulationView(session,
                 () -> core == null ? null : core.practice())), "What each candidate callout of the selected feature lets through");
         notesPanel = new NotesPanel(services.search(), services.background(), status::show);
         // the side panels collapse with the divider's arrows, and each column keeps its share of any
         // window width: the weights equal the initial shares (Part 24 %, Notes 20 %, the work area the rest)
         work.setTabLayoutPolicy(JTabbedPane.SCROLL_TAB_LAYOUT);
-        work.setMinimumSize(new java.awt.Dimension(440, 0));
-        partPanel.setMinimumSize(new java.awt.Dimension(0, 0));
-        notesPanel.setMinimumSize(new java.awt.Dimension(0, 0));
+        work.setMinimumSize(new Dimension(440, 0));
+        partPanel.setMinimumSize(new Dimension(0, 0));
+        notesPanel.setMinimumSize(new Dimension(0, 0));
         right = new JSplitPane(JSplitPane.HORIZONTAL_SPLIT, work, notesPanel);
         right.setName("notesSplit");
         right.setResizeWeight(1 - NOTES_SHARE / (1 - PART_SHARE));
@@ -265,15 +278,15 @@ public final class MainWindow {
         content.add(main, BorderLayout.CENTER);
         content.add(status, BorderLayout.SOUTH);
         frame.setContentPane(content);
-        java.awt.Rectangle screen = java.awt.GraphicsEnvironment.getLocalGraphicsEnvironment().getMaximumWindowBounds();
+        Rectangle screen = GraphicsEnvironment.getLocalGraphicsEnvironment().getMaximumWindowBounds();
         int w = Math.min(1480, screen.width);
         frame.setSize(w, Math.min(900, screen.height));
         int partWidth = (int) Math.round(w * PART_SHARE);
         main.setDividerLocation(partWidth);
         right.setDividerLocation(w - partWidth - (int) Math.round(w * NOTES_SHARE));
-        main.addComponentListener(new java.awt.event.ComponentAdapter() {
+        main.addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) { fitColumns(); }
+            public void componentResized(ComponentEvent e) { fitColumns(); }
         });
         frame.setLocationRelativeTo(null);
         rebuildRecent();
@@ -326,13 +339,13 @@ public final class MainWindow {
             menu.setName("menu." + group);
             Character m = mnemonics.get(group);
             if (m != null) menu.setMnemonic(m);
-            menu.addMenuListener(new javax.swing.event.MenuListener() {
-                public void menuSelected(javax.swing.event.MenuEvent e) {
+            menu.addMenuListener(new MenuListener() {
+                public void menuSelected(MenuEvent e) {
                     if (menu.getMenuComponentCount() == 0) fillMenu(menu, group);
                     actions.refresh();
                 }
-                public void menuDeselected(javax.swing.event.MenuEvent e) { }
-                public void menuCanceled(javax.swing.event.MenuEvent e) { }
+                public void menuDeselected(MenuEvent e) { }
+                public void menuCanceled(MenuEvent e) { }
             });
             bar.add(menu);
         }
@@ -350,11 +363,11 @@ public final class MainWindow {
 
     /** Every command's shortcut, bound on the root pane so it works before any menu was opened. */
     private void bindShortcuts() {
-        javax.swing.InputMap keys = frame.getRootPane().getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW);
-        javax.swing.ActionMap map = frame.getRootPane().getActionMap();
+        InputMap keys = frame.getRootPane().getInputMap(JComponent.WHEN_IN_FOCUSED_WINDOW);
+        ActionMap map = frame.getRootPane().getActionMap();
         for (Command c : catalog.all()) {
             if (c.shortcut() == null) continue;
-            keys.put(javax.swing.KeyStroke.getKeyStroke(c.shortcut()), c.id());
+            keys.put(KeyStroke.getKeyStroke(c.shortcut()), c.id());
             map.put(c.id(), actions.get(c.id()));
         }
     }
@@ -717,9 +730,9 @@ public final class MainWindow {
     private void openNotesInBackground(PackStack stack) {
         status.progress("Opening the notes index…", -1, null);
         PackStack s = stack;
-        java.util.concurrent.CompletableFuture
+        CompletableFuture
                 .supplyAsync(() -> NotesStore.open(s, NotesStore.indexFolderFor(services.notesIndexRoot(), s)), services.background())
-                .whenComplete((store, e) -> javax.swing.SwingUtilities.invokeLater(() -> notesOpened(store, e)));
+                .whenComplete((store, e) -> SwingUtilities.invokeLater(() -> notesOpened(store, e)));
     }
 
     private void notesOpened(NotesStore store, Throwable e) {

@@ -1,6 +1,7 @@
 package org.arcwright.app.stress;
 
 import com.formdev.flatlaf.FlatClientProperties;
+import java.awt.Font;
 import java.util.Objects;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
@@ -130,7 +131,7 @@ public final class StressViewPanel extends JPanel {
      * thread, before the chart is made in the background.
      */
     private static StressPlot.Inks inks() {
-        java.awt.Font label = Themes.font("Arcwright.stress.label.font");
+        Font label = Themes.font("Arcwright.stress.label.font");
         return new StressPlot.Inks(Themes.color("Panel.background"), Themes.color("Arcwright.zone.background"),
                 Themes.color("Label.foreground"), Themes.color("Arcwright.help.foreground"),
                 Themes.color("Arcwright.stress.axis"), Themes.color("Arcwright.zone.grid"), Themes.color("Arcwright.stress.outline"),

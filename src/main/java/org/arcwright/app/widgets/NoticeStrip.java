@@ -1,6 +1,9 @@
 package org.arcwright.app.widgets;
 
+import java.awt.event.ComponentAdapter;
+import java.awt.event.ComponentEvent;
 import javax.swing.JButton;
+import javax.swing.JComponent;
 import javax.swing.JPanel;
 import net.miginfocom.swing.MigLayout;
 
@@ -29,9 +32,9 @@ public final class NoticeStrip extends JPanel {
         add(second, "aligny top");
         setVisible(false);
         updateUI();
-        addComponentListener(new java.awt.event.ComponentAdapter() {
+        addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) { refit(); }
+            public void componentResized(ComponentEvent e) { refit(); }
         });
     }
 
@@ -42,7 +45,7 @@ public final class NoticeStrip extends JPanel {
         // which sets this strip's height from them
         invalidate();
         getParent().invalidate();
-        if (getParent() instanceof javax.swing.JComponent p) p.revalidate();
+        if (getParent() instanceof JComponent p) p.revalidate();
     }
 
     /** Whether the whole message shows: the strip is as high as its wrapped lines need (tests). */

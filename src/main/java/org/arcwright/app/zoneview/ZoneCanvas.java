@@ -1,6 +1,8 @@
 package org.arcwright.app.zoneview;
 
 import java.awt.BasicStroke;
+import java.awt.Color;
+import java.awt.FontMetrics;
 import java.awt.Graphics;
 import java.awt.Graphics2D;
 import java.awt.Point;
@@ -13,6 +15,7 @@ import java.awt.geom.Ellipse2D;
 import java.awt.geom.NoninvertibleTransformException;
 import java.awt.geom.Path2D;
 import java.awt.geom.Point2D;
+import java.util.ArrayList;
 import java.util.List;
 import javax.swing.JComponent;
 import org.arcwright.app.model.MeasuredPoints;
@@ -20,6 +23,7 @@ import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.ZonePicture;
 import org.arcwright.app.model.ZoneScene;
 import org.arcwright.app.widgets.Themes;
+import org.arcwright.model.BlendKind;
 import org.arcwright.zone.Point2;
 
 /**
@@ -38,7 +42,7 @@ final class ZoneCanvas extends JComponent {
     private double panY;
     private Point dragFrom;
     private String units = "mm";
-    private org.arcwright.model.BlendKind kind = org.arcwright.model.BlendKind.FILLET;
+    private BlendKind kind = BlendKind.FILLET;
     private double angle = 90;
 
     ZoneCanvas() {
@@ -54,7 +58,7 @@ final class ZoneCanvas extends JComponent {
         addMouseWheelListener(m);
     }
 
-    void show(ZoneScene s, String unitSymbol, org.arcwright.model.BlendKind blendKind) {
+    void show(ZoneScene s, String unitSymbol, BlendKind blendKind) {
         this.scene = s;
         this.picture = s == null ? null : s.picture();
         this.kind = blendKind;
@@ -165,7 +169,7 @@ final class ZoneCanvas extends JComponent {
     }
 
     /** The theme colour of a grade of point. */
-    private static java.awt.Color gradeColour(MeasuredPoints.Grade g) {
+    private static Color gradeColour(MeasuredPoints.Grade g) {
         switch (g) {
             case WITHIN:
                 return Themes.color("Arcwright.zone.pointOk");
@@ -199,13 +203,13 @@ final class ZoneCanvas extends JComponent {
 
     /** The colours of the grades present, bottom left, wrapping onto more rows when narrow. */
     private void paintLegend(Graphics2D g2) {
-        java.awt.FontMetrics fm = g2.getFontMetrics();
+        FontMetrics fm = g2.getFontMetrics();
         int d = fm.getAscent() * 2 / 3;
-        List<MeasuredPoints.Grade> shown = new java.util.ArrayList<>();
+        List<MeasuredPoints.Grade> shown = new ArrayList<>();
         for (MeasuredPoints.Grade grade : MeasuredPoints.Grade.values()) {
             if (scene.measured().count(grade) > 0) shown.add(grade);
         }
-        List<int[]> at = new java.util.ArrayList<>();
+        List<int[]> at = new ArrayList<>();
         int x = 10;
         int row = 0;
         for (MeasuredPoints.Grade grade : shown) {
@@ -221,8 +225,8 @@ final class ZoneCanvas extends JComponent {
         // on the view's own background, so the shading under it never muddles the words
         int right = 0;
         for (int i = 0; i < shown.size(); i++) right = Math.max(right, at.get(i)[0] + d + 5 + fm.stringWidth(shown.get(i).words()));
-        java.awt.Color bg = Themes.color("Arcwright.zone.background");
-        g2.setColor(new java.awt.Color(bg.getRed(), bg.getGreen(), bg.getBlue(), 225));
+        Color bg = Themes.color("Arcwright.zone.background");
+        g2.setColor(new Color(bg.getRed(), bg.getGreen(), bg.getBlue(), 225));
         g2.fillRoundRect(4, bottom - fm.getAscent() - 4, right + 2, (row + 1) * fm.getHeight() + 6, 8, 8);
         for (int i = 0; i < shown.size(); i++) {
             int y = bottom + at.get(i)[1] * fm.getHeight();

@@ -11,16 +11,21 @@ import java.awt.Rectangle;
 import java.awt.event.MouseEvent;
 import java.nio.file.Path;
 import java.util.ArrayList;
+import java.util.Arrays;
 import java.util.List;
+import java.util.function.Supplier;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.swing.AbstractButton;
 import javax.swing.JComponent;
+import javax.swing.JMenuItem;
+import javax.swing.JSplitPane;
 import javax.swing.JViewport;
 import javax.swing.SwingUtilities;
 import javax.swing.UIManager;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
+import org.arcwright.app.widgets.NoticeStrip;
 import org.assertj.swing.fixture.FrameFixture;
 import org.jfree.svg.SVGGraphics2D;
 import org.junit.jupiter.api.AfterAll;
@@ -192,7 +197,7 @@ class CheckPlotAndLayoutGuiTest {
         }
         assertThat(cut).isEmpty();
         // the first-run notice wraps its words over two lines and shows all of them
-        org.arcwright.app.widgets.NoticeStrip notice = (org.arcwright.app.widgets.NoticeStrip) fixture.robot().finder()
+        NoticeStrip notice = (NoticeStrip) fixture.robot().finder()
                 .findByName(window.frame(), "notice", true);
         Component toolbar = fixture.robot().finder().findByName(window.frame(), "toolbar", true);
         assertThat(GuiSupport.onEdt(() -> notice.isShowing() && notice.messageFullyShown())).isTrue();
@@ -200,8 +205,8 @@ class CheckPlotAndLayoutGuiTest {
         assertThat(GuiSupport.onEdt(() -> notice.getY() >= toolbar.getY() + toolbar.getHeight())).isTrue();
         // the Decide form and its results side by side, each at least as wide as it stays readable at
         GuiSupport.onEdt(() -> window.showTab(0));
-        java.util.function.Supplier<int[]> sides = () -> GuiSupport.onEdt(() -> {
-            javax.swing.JSplitPane split = (javax.swing.JSplitPane) fixture.robot().finder()
+        Supplier<int[]> sides = () -> GuiSupport.onEdt(() -> {
+            JSplitPane split = (JSplitPane) fixture.robot().finder()
                     .findByName(window.frame(), "decideSplit", true);
             return new int[] {split.getLeftComponent().getWidth(), split.getRightComponent().getWidth()};
         });
@@ -213,7 +218,7 @@ class CheckPlotAndLayoutGuiTest {
         }
         int[] decide = sides.get();
         GuiSupport.screenshot(window.frame(), "layout-decide-1024x700-light");
-        assertThat(decide[0]).as("Decide form width; columns %s", java.util.Arrays.toString(
+        assertThat(decide[0]).as("Decide form width; columns %s", Arrays.toString(
                 GuiSupport.onEdt(() -> window.columnWidths()))).isGreaterThanOrEqualTo(280);
         assertThat(decide[1]).isGreaterThanOrEqualTo(320);
         // the Check plot keeps a usable height under the verdict and figures
@@ -272,7 +277,7 @@ class CheckPlotAndLayoutGuiTest {
 
     private static List<AbstractButton> buttons(Container c, List<AbstractButton> into) {
         for (Component k : c.getComponents()) {
-            if (k instanceof AbstractButton b && !(k instanceof javax.swing.JMenuItem)) into.add(b);
+            if (k instanceof AbstractButton b && !(k instanceof JMenuItem)) into.add(b);
             if (k instanceof Container kc) buttons(kc, into);
         }
         return into;

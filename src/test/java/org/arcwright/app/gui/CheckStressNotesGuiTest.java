@@ -2,9 +2,23 @@ package org.arcwright.app.gui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Locale;
+import java.util.Map;
+import java.util.regex.Pattern;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
+import org.arcwright.app.zoneview.ZoneViewPanel;
+import org.arcwright.callout.Callout;
+import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.inspect.InspectionFiles;
+import org.arcwright.inspect.Inspector;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.rules.Recommendation;
+import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.fixture.FrameFixture;
 import org.junit.jupiter.api.MethodOrderer;
@@ -37,16 +51,16 @@ class CheckStressNotesGuiTest {
         GuiSupport.onEdt(() -> {
             window.session().select("F1");
             RadiusFeature f1 = window.session().selected().orElseThrow();
-            window.session().choose("F1", f1.designCase(), new org.arcwright.rules.Recommendation("demo",
-                    new org.arcwright.callout.Callout.ControlledRadius(1.8, 2.2, 2.0), "CR 1.8-2.2", 0, java.util.List.of(),
-                    java.util.List.of(), java.util.List.of(), java.util.Map.of(), java.util.List.of(), java.util.List.of(), false));
+            window.session().choose("F1", f1.designCase(), new Recommendation("demo",
+                    new Callout.ControlledRadius(1.8, 2.2, 2.0), "CR 1.8-2.2", 0, List.of(),
+                    List.of(), List.of(), Map.of(), List.of(), List.of(), false));
         });
         GuiSupport.onEdt(() -> window.showTab(3));
         Path example = Path.of("examples/inspect/housing-fillet-profile.json").toAbsolutePath();
-        boolean corePass = new org.arcwright.inspect.Inspector()
-                .inspect(new org.arcwright.inspect.InspectionFiles(new org.arcwright.io.JsonFiles()).read(example)
-                        .withCallout(new org.arcwright.inspect.InspectionCallout.RadiusLimits(
-                                org.arcwright.tolerance.RadiusKind.CR, 1.8, 2.2))).pass();
+        boolean corePass = new Inspector()
+                .inspect(new InspectionFiles(new JsonFiles()).read(example)
+                        .withCallout(new InspectionCallout.RadiusLimits(
+                                RadiusKind.CR, 1.8, 2.2))).pass();
         GuiSupport.onEdt(() -> window.checkPanel().check(example));
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.checkPanel().verdictText().startsWith("The measured")), 30);
         // the panel shows the inspection core's verdict for F1's chosen callout
@@ -72,26 +86,26 @@ class CheckStressNotesGuiTest {
         GuiSupport.onEdt(() -> {
             window.session().select("F1");
             RadiusFeature f1 = window.session().selected().orElseThrow();
-            window.session().choose("F1", f1.designCase(), new org.arcwright.rules.Recommendation("demo",
-                    new org.arcwright.callout.Callout.ControlledRadius(1.8, 2.2, 2.0), "CR 1.8-2.2", 0, java.util.List.of(),
-                    java.util.List.of(), java.util.List.of(), java.util.Map.of(), java.util.List.of(), java.util.List.of(), false));
+            window.session().choose("F1", f1.designCase(), new Recommendation("demo",
+                    new Callout.ControlledRadius(1.8, 2.2, 2.0), "CR 1.8-2.2", 0, List.of(),
+                    List.of(), List.of(), Map.of(), List.of(), List.of(), false));
         });
         Path csv = config.resolve("shoulder-section.csv");
-        java.nio.file.Files.writeString(csv, dippedSection());
+        Files.writeString(csv, dippedSection());
         GuiSupport.onEdt(() -> window.showTab(3));
         GuiSupport.onEdt(() -> window.checkPanel().check(csv));
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.checkPanel().verdictText().startsWith("The measured")), 30);
         GuiSupport.onEdt(() -> window.showTab(1));
-        org.arcwright.app.zoneview.ZoneViewPanel zone =
-                (org.arcwright.app.zoneview.ZoneViewPanel) fixture.panel("zoneView").target();
+        ZoneViewPanel zone =
+                (ZoneViewPanel) fixture.panel("zoneView").target();
         GuiSupport.waitFor(() -> GuiSupport.onEdt(zone::plottedPoints) > 0, 10);
         assertThat(GuiSupport.onEdt(zone::plottedPoints)).isEqualTo(dippedSection().split("\n").length - 1);
         // ×5: the dip shows inside the drawing (at ×10 this band's lower limit arc shrinks to the sharp corner)
         fixture.slider("magnification").slideTo(35);
         GuiSupport.settle(200);
         // hovering a point gives its deviation and its excess; the dip's points are outside
-        java.util.List<String> tips = GuiSupport.onEdt(() -> {
-            java.util.List<String> t = new java.util.ArrayList<>();
+        List<String> tips = GuiSupport.onEdt(() -> {
+            List<String> t = new ArrayList<>();
             for (int i = 0; i < zone.plottedPoints(); i++) t.add(zone.pointTooltip(i));
             return t;
         });
@@ -111,13 +125,13 @@ class CheckStressNotesGuiTest {
      */
     private static String dippedSection() {
         StringBuilder sb = new StringBuilder("x,y\n");
-        for (double x = 4; x > 2.05; x -= 0.25) sb.append(String.format(java.util.Locale.ROOT, "%.5f,%.5f%n", x, 0.0));
+        for (double x = 4; x > 2.05; x -= 0.25) sb.append(String.format(Locale.ROOT, "%.5f,%.5f%n", x, 0.0));
         for (int deg = 0; deg <= 90; deg += 3) {
             double phi = Math.toRadians(deg);
             double rho = 2.0 - 0.28 * Math.exp(-Math.pow((deg - 55) / 12.0, 2));
-            sb.append(String.format(java.util.Locale.ROOT, "%.5f,%.5f%n", rho - rho * Math.cos(phi), rho - rho * Math.sin(phi)));
+            sb.append(String.format(Locale.ROOT, "%.5f,%.5f%n", rho - rho * Math.cos(phi), rho - rho * Math.sin(phi)));
         }
-        for (double y = 2.25; y <= 4.01; y += 0.25) sb.append(String.format(java.util.Locale.ROOT, "%.5f,%.5f%n", 0.0, y));
+        for (double y = 2.25; y <= 4.01; y += 0.25) sb.append(String.format(Locale.ROOT, "%.5f,%.5f%n", 0.0, y));
         return sb.toString();
     }
 
@@ -187,7 +201,7 @@ class CheckStressNotesGuiTest {
         GuiSupport.onEdt(() -> window.showTab(4));
         fixture.tabbedPane("practicePages").selectTab("Note templates");
         GuiSupport.waitFor(() -> fixture.list("templateList").contents().length > 0, 20);
-        fixture.list("templateList").selectItem(java.util.regex.Pattern.compile("callout-note.*"));
+        fixture.list("templateList").selectItem(Pattern.compile("callout-note.*"));
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.practicePanel().templatePreviewText()).contains("F1"), 10);
         GuiSupport.screenshot(window.frame(), "templates-light");
         String original = GuiSupport.onEdt(() -> window.practicePanel().templateEditor().getText());

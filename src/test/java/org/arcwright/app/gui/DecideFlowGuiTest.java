@@ -2,10 +2,15 @@ package org.arcwright.app.gui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.awt.event.KeyEvent;
+import java.util.List;
 import javax.swing.JFrame;
+import javax.swing.JMenuItem;
 import javax.swing.JTable;
+import javax.swing.KeyStroke;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
+import org.arcwright.rules.Recommendation;
 import org.arcwright.worksheet.RadiusFeature;
 import org.assertj.swing.core.Robot;
 import org.assertj.swing.fixture.FrameFixture;
@@ -38,7 +43,7 @@ class DecideFlowGuiTest {
         fixture.textBox("q.TOLERANCE").deleteText().enterText("R2 +0.3/-0.1");
         GuiSupport.settle(1500);
         assertThat(GuiSupport.onEdt(() -> window.decidePanel().figuresText())).contains("1.9000 mm").contains("2.3000 mm");
-        java.util.List<org.arcwright.rules.Recommendation> shown =
+        List<Recommendation> shown =
                 GuiSupport.onEdt(() -> window.decidePanel().shownRecommendations());
         assertThat(shown).isNotEmpty();
         // the engineer's own intent is offered as written too (last, unless the advisor proposes it)
@@ -51,7 +56,7 @@ class DecideFlowGuiTest {
         assertThat(f1.status()).isEqualTo(RadiusFeature.Status.DECIDED);
         JTable table = (JTable) fixture.table("featureTable").target();
         assertThat(GuiSupport.onEdt(() -> table.getValueAt(0, 4))).isEqualTo(shown.get(0).text());
-        GuiSupport.chord(robot, java.awt.event.KeyEvent.VK_Z);
+        GuiSupport.chord(robot, KeyEvent.VK_Z);
         GuiSupport.settle(100);
         assertThat(window.session().worksheet().feature("F1").orElseThrow().chosen()).isNull();
         GuiSupport.onEdt(() -> window.session().redo());
@@ -72,12 +77,12 @@ class DecideFlowGuiTest {
     @Test
     void aMenuShowsItsCommandsAndShortcutsWhenOpened() {
         fixture.menuItem("menu.Edit").click();
-        javax.swing.JMenuItem undo = (javax.swing.JMenuItem) fixture.menuItem("item.edit.undo").target();
-        assertThat(undo.getAccelerator()).isEqualTo(javax.swing.KeyStroke.getKeyStroke("ctrl Z"));
+        JMenuItem undo = (JMenuItem) fixture.menuItem("item.edit.undo").target();
+        assertThat(undo.getAccelerator()).isEqualTo(KeyStroke.getKeyStroke("ctrl Z"));
         assertThat(GuiSupport.onEdt(() -> window.frame().getJMenuBar().getMenu(1).getItemCount()))
                 .isEqualTo(GuiSupport.onEdt(() -> window.catalog().group("Edit").size()));
-        robot.pressAndReleaseKey(java.awt.event.KeyEvent.VK_ESCAPE);
-        robot.pressAndReleaseKey(java.awt.event.KeyEvent.VK_ESCAPE);
+        robot.pressAndReleaseKey(KeyEvent.VK_ESCAPE);
+        robot.pressAndReleaseKey(KeyEvent.VK_ESCAPE);
         robot.waitForIdle();
     }
 }

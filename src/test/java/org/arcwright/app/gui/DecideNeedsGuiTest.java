@@ -3,17 +3,26 @@ package org.arcwright.app.gui;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.awt.Component;
+import java.awt.Container;
+import java.awt.Dimension;
+import java.awt.Rectangle;
 import java.util.List;
+import java.util.Locale;
 import javax.swing.JComponent;
+import javax.swing.JLabel;
 import javax.swing.SwingUtilities;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.app.widgets.WrapLabel;
+import org.arcwright.app.zoneview.ZoneViewPanel;
 import org.arcwright.model.BlendFunction;
 import org.arcwright.model.BlendKind;
 import org.arcwright.model.DesignCase;
 import org.arcwright.model.Loading;
 import org.arcwright.model.Process;
+import org.arcwright.rules.Advice;
+import org.arcwright.rules.Need;
+import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 import org.assertj.swing.fixture.FrameFixture;
@@ -63,13 +72,13 @@ class DecideNeedsGuiTest {
         assertThat(GuiSupport.onEdt(() -> yOf(find("needsTable")))).isLessThan(GuiSupport.onEdt(() -> yOf(find("card1"))));
 
         // the table has one mark per need and card, as the advisor proved them
-        org.arcwright.rules.Advice advice = GuiSupport.onEdt(() -> window.decidePanel().shownAdvice());
+        Advice advice = GuiSupport.onEdt(() -> window.decidePanel().shownAdvice());
         assertThat(advice.anyUsable()).isFalse();
-        for (org.arcwright.rules.Need n : advice.needs()) {
+        for (Need n : advice.needs()) {
             for (int i = 0; i < advice.recommendations().size(); i++) {
-                org.arcwright.rules.Recommendation r = advice.recommendations().get(i);
+                Recommendation r = advice.recommendations().get(i);
                 String name = "need." + n.key() + "." + (i + 1);
-                String mark = GuiSupport.onEdt(() -> ((javax.swing.JLabel) find(name)).getText());
+                String mark = GuiSupport.onEdt(() -> ((JLabel) find(name)).getText());
                 Boolean ok = r.meets().get(n.key());
                 assertThat(mark).as(name).isEqualTo(ok == null ? "?" : ok ? "✓" : "✗");
             }
@@ -88,7 +97,7 @@ class DecideNeedsGuiTest {
         GuiSupport.settle(400);
         GuiSupport.onEdt(() -> {
             JComponent t = find("needsTable");
-            t.scrollRectToVisible(new java.awt.Rectangle(0, 0, t.getWidth(), t.getHeight()));
+            t.scrollRectToVisible(new Rectangle(0, 0, t.getWidth(), t.getHeight()));
         });
         GuiSupport.settle(300);
         GuiSupport.screenshot(window.frame(), "decide-needs-table-light-1600");
@@ -106,8 +115,8 @@ class DecideNeedsGuiTest {
         GuiSupport.onEdt(() -> window.session().updateCase("F1", c));
         GuiSupport.onEdt(() -> window.showTab(1));
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> find(window.frame(), "zoneView") != null), 30);
-        org.arcwright.app.zoneview.ZoneViewPanel zone =
-                GuiSupport.onEdt(() -> (org.arcwright.app.zoneview.ZoneViewPanel) find(window.frame(), "zoneView"));
+        ZoneViewPanel zone =
+                GuiSupport.onEdt(() -> (ZoneViewPanel) find(window.frame(), "zoneView"));
         GuiSupport.onEdt(() -> zone.setMagnification(100));
         GuiSupport.settle(300);
         assertThat(GuiSupport.onEdt(zone::distortionWarning)).contains("×100", "R1.8 mm", "sharp corner");
@@ -125,13 +134,13 @@ class DecideNeedsGuiTest {
         GuiSupport.onEdt(() -> window.showTab(0));
     }
 
-    private static void shootZone(String name, org.arcwright.app.zoneview.ZoneViewPanel zone) {
+    private static void shootZone(String name, ZoneViewPanel zone) {
         for (ThemeChoice theme : List.of(ThemeChoice.LIGHT, ThemeChoice.DARK)) {
             GuiSupport.onEdt(() -> window.setTheme(theme));
-            for (java.awt.Dimension d : List.of(new java.awt.Dimension(1024, 700), new java.awt.Dimension(1600, 1000))) {
+            for (Dimension d : List.of(new Dimension(1024, 700), new Dimension(1600, 1000))) {
                 GuiSupport.onEdt(() -> window.frame().setSize(d));
                 GuiSupport.settle(600);
-                GuiSupport.screenshot(window.frame(), name + "-" + theme.name().toLowerCase(java.util.Locale.ROOT)
+                GuiSupport.screenshot(window.frame(), name + "-" + theme.name().toLowerCase(Locale.ROOT)
                         + "-" + d.width);
             }
         }
@@ -141,10 +150,10 @@ class DecideNeedsGuiTest {
     private static void shoot(String name) {
         for (ThemeChoice theme : List.of(ThemeChoice.LIGHT, ThemeChoice.DARK)) {
             GuiSupport.onEdt(() -> window.setTheme(theme));
-            for (java.awt.Dimension d : List.of(new java.awt.Dimension(1024, 700), new java.awt.Dimension(1600, 1000))) {
+            for (Dimension d : List.of(new Dimension(1024, 700), new Dimension(1600, 1000))) {
                 GuiSupport.onEdt(() -> window.frame().setSize(d));
                 GuiSupport.settle(600);
-                GuiSupport.screenshot(window.frame(), name + "-" + theme.name().toLowerCase(java.util.Locale.ROOT)
+                GuiSupport.screenshot(window.frame(), name + "-" + theme.name().toLowerCase(Locale.ROOT)
                         + "-" + d.width);
             }
         }
@@ -157,8 +166,8 @@ class DecideNeedsGuiTest {
 
     private static JComponent find(Component c, String name) {
         if (c instanceof JComponent && name.equals(c.getName()) && c.isShowing()) return (JComponent) c;
-        if (c instanceof java.awt.Container) {
-            for (Component k : ((java.awt.Container) c).getComponents()) {
+        if (c instanceof Container) {
+            for (Component k : ((Container) c).getComponents()) {
                 JComponent f = find(k, name);
                 if (f != null) return f;
             }
@@ -178,8 +187,8 @@ class DecideNeedsGuiTest {
     private static String texts(Component c) {
         StringBuilder sb = new StringBuilder();
         if (c instanceof WrapLabel) sb.append(((WrapLabel) c).getText()).append('\n');
-        else if (c instanceof javax.swing.JLabel) sb.append(((javax.swing.JLabel) c).getText()).append('\n');
-        if (c instanceof java.awt.Container) for (Component k : ((java.awt.Container) c).getComponents()) sb.append(texts(k));
+        else if (c instanceof JLabel) sb.append(((JLabel) c).getText()).append('\n');
+        if (c instanceof Container) for (Component k : ((Container) c).getComponents()) sb.append(texts(k));
         return sb.toString();
     }
 }

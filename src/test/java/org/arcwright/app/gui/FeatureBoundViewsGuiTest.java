@@ -2,10 +2,24 @@ package org.arcwright.app.gui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.awt.Frame;
+import java.awt.event.KeyEvent;
+import java.io.PrintWriter;
+import java.io.StringWriter;
+import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import javax.swing.Action;
+import javax.swing.JMenu;
 import javax.swing.SwingUtilities;
+import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
+import org.arcwright.cli.Cli;
+import org.arcwright.io.JsonFiles;
+import org.arcwright.rules.RuleBook;
 import org.arcwright.worksheet.RadiusFeature;
+import org.arcwright.worksheet.WorksheetFiles;
 import org.assertj.swing.fixture.FrameFixture;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
@@ -122,8 +136,8 @@ class FeatureBoundViewsGuiTest {
         selectRow(0);
         checkAndWait(HOUSING);
         assertThat(verdict()).startsWith("The measured contour of F1");
-        GuiSupport.onEdt(() -> window.session().showFresh(MainWindow.readDemo(new org.arcwright.worksheet.WorksheetFiles(
-                new org.arcwright.io.JsonFiles()))));
+        GuiSupport.onEdt(() -> window.session().showFresh(MainWindow.readDemo(new WorksheetFiles(
+                new JsonFiles()))));
         GuiSupport.settle(100);
         assertThat(verdict()).isEqualTo("No contour checked for F1 yet.");
         assertThat(GuiSupport.onEdt(() -> window.checkPanel().targetText())).contains("no callout chosen yet");
@@ -167,11 +181,11 @@ class FeatureBoundViewsGuiTest {
         fixture.button("choose1").click();
         GuiSupport.settle(500);
         assertThat(GuiSupport.onEdt(() -> window.decidePanel().resultsScrolledBy())).isZero();
-        GuiSupport.onEdt(() -> window.setTheme(org.arcwright.app.model.ThemeChoice.DARK));
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.DARK));
         GuiSupport.settle(800);
         assertThat(GuiSupport.onEdt(() -> window.decidePanel().resultsScrolledBy())).isZero();
         GuiSupport.screenshot(window.frame(), "decide-cards-dark");
-        GuiSupport.onEdt(() -> window.setTheme(org.arcwright.app.model.ThemeChoice.LIGHT));
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
         GuiSupport.onEdt(() -> window.session().undo());
     }
 
@@ -212,18 +226,18 @@ class FeatureBoundViewsGuiTest {
         GuiSupport.onEdt(() -> window.saveTo(saved));
         // the same file name in two folders: a Markdown sheet names its frames folder after itself
         Path desk = config.resolve("desk").resolve("sheet.md");
-        java.nio.file.Files.createDirectories(desk.getParent());
+        Files.createDirectories(desk.getParent());
         GuiSupport.onEdt(() -> window.export(desk));
-        GuiSupport.waitFor(() -> java.nio.file.Files.exists(desk)
+        GuiSupport.waitFor(() -> Files.exists(desk)
                 && GuiSupport.onEdt(() -> window.statusLine().message()).startsWith("Exported"), 60);
         Path cli = config.resolve("cli").resolve("sheet.md");
-        java.nio.file.Files.createDirectories(cli.getParent());
-        java.io.StringWriter out = new java.io.StringWriter();
-        int code = org.arcwright.cli.Cli.commandLine(new java.io.PrintWriter(out, true), new java.io.PrintWriter(out, true))
+        Files.createDirectories(cli.getParent());
+        StringWriter out = new StringWriter();
+        int code = Cli.commandLine(new PrintWriter(out, true), new PrintWriter(out, true))
                 .execute("sheet", saved.toString(), "--out", cli.toString(), "--no-settings",
                         "--personal", config.resolve("personal-pack").toString());
         assertThat(code).as(out.toString()).isZero();
-        String a = java.nio.file.Files.readString(desk), b = java.nio.file.Files.readString(cli);
+        String a = Files.readString(desk), b = Files.readString(cli);
         // the undecided F5 shows the advisor's suggestion in both, and both name the same producer
         assertThat(a).contains("F5");
         assertThat(a).isEqualTo(b);
@@ -236,19 +250,19 @@ class FeatureBoundViewsGuiTest {
         // F1 has a chosen callout: Copy is available (it said "no feature is selected")
         assertThat(GuiSupport.onEdt(() -> window.action("edit.copyCallout").isEnabled())).isTrue();
         selectRow(4);
-        assertThat(GuiSupport.onEdt(() -> (String) window.action("edit.copyCallout").getValue(javax.swing.Action.SHORT_DESCRIPTION)))
+        assertThat(GuiSupport.onEdt(() -> (String) window.action("edit.copyCallout").getValue(Action.SHORT_DESCRIPTION)))
                 .contains("F5 has no callout chosen yet");
         // import measured points is a command: in the File menu and so in the command finder
         assertThat(GuiSupport.onEdt(() -> window.catalog().group("File").stream().map(c -> c.id()).toList()))
                 .contains("file.importPoints");
         fixture.menuItemWithPath("View").click();
-        java.util.List<String> view = GuiSupport.onEdt(() -> {
-            java.util.List<String> names = new java.util.ArrayList<>();
-            javax.swing.JMenu m = window.frame().getJMenuBar().getMenu(3);
+        List<String> view = GuiSupport.onEdt(() -> {
+            List<String> names = new ArrayList<>();
+            JMenu m = window.frame().getJMenuBar().getMenu(3);
             for (int i = 0; i < m.getItemCount(); i++) if (m.getItem(i) != null) names.add(m.getItem(i).getText());
             return names;
         });
-        fixture.pressAndReleaseKeys(java.awt.event.KeyEvent.VK_ESCAPE, java.awt.event.KeyEvent.VK_ESCAPE);
+        fixture.pressAndReleaseKeys(KeyEvent.VK_ESCAPE, KeyEvent.VK_ESCAPE);
         assertThat(view.indexOf("Go to Check")).isLessThan(view.indexOf("Go to Notes"));
         assertThat(view.indexOf("Go to Notes")).isLessThan(view.indexOf("Go to Practice editor"));
         assertThat(GuiSupport.onEdt(() -> window.catalog().group("Help").stream().map(c -> c.title()).toList()))
@@ -266,7 +280,7 @@ class FeatureBoundViewsGuiTest {
         int[] small = null;
         for (int[] size : new int[][] {{1024, 700}, {1600, 1000}}) {
             GuiSupport.onEdt(() -> {
-                window.frame().setExtendedState(java.awt.Frame.NORMAL);
+                window.frame().setExtendedState(Frame.NORMAL);
                 window.frame().setSize(size[0], size[1]);
                 window.frame().validate();
             });
@@ -282,9 +296,9 @@ class FeatureBoundViewsGuiTest {
                 assertThat(widths[0]).isGreaterThan(small[0]);
                 assertThat(widths[2]).isGreaterThan(small[2]);
             }
-            for (org.arcwright.app.model.ThemeChoice theme : new org.arcwright.app.model.ThemeChoice[] {
-                org.arcwright.app.model.ThemeChoice.LIGHT, org.arcwright.app.model.ThemeChoice.DARK}) {
-                String look = theme == org.arcwright.app.model.ThemeChoice.LIGHT ? "light" : "dark";
+            for (ThemeChoice theme : new ThemeChoice[] {
+                ThemeChoice.LIGHT, ThemeChoice.DARK}) {
+                String look = theme == ThemeChoice.LIGHT ? "light" : "dark";
                 GuiSupport.onEdt(() -> window.setTheme(theme));
                 GuiSupport.onEdt(() -> window.showTab(3));
                 checkAndWait(HOUSING);
@@ -298,11 +312,11 @@ class FeatureBoundViewsGuiTest {
                 GuiSupport.screenshot(window.frame(), "practice-" + size[0] + "x" + size[1] + "-" + look);
             }
         }
-        GuiSupport.onEdt(() -> window.setTheme(org.arcwright.app.model.ThemeChoice.LIGHT));
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
     }
 
     private static String firstRuleId() {
-        return GuiSupport.onEdt(() -> ((org.arcwright.rules.RuleBook.Entry) fixture.list("ruleList").target().getModel()
+        return GuiSupport.onEdt(() -> ((RuleBook.Entry) fixture.list("ruleList").target().getModel()
                 .getElementAt(0)).rule().id());
     }
 }

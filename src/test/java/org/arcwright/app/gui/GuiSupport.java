@@ -3,14 +3,18 @@ package org.arcwright.app.gui;
 import static org.junit.jupiter.api.Assertions.fail;
 
 import java.awt.Component;
+import java.awt.Graphics2D;
 import java.awt.GraphicsEnvironment;
+import java.awt.event.KeyEvent;
 import java.awt.image.BufferedImage;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.concurrent.Callable;
+import java.util.concurrent.TimeUnit;
 import java.util.concurrent.atomic.AtomicReference;
+import java.util.function.BooleanSupplier;
 import javax.imageio.ImageIO;
 import javax.swing.SwingUtilities;
 import org.arcwright.app.shell.AppServices;
@@ -93,8 +97,8 @@ final class GuiSupport {
     }
 
     /** Waits until {@code condition} holds, failing the test after {@code seconds}. */
-    static void waitFor(java.util.function.BooleanSupplier condition, int seconds) {
-        long end = System.nanoTime() + java.util.concurrent.TimeUnit.SECONDS.toNanos(seconds);
+    static void waitFor(BooleanSupplier condition, int seconds) {
+        long end = System.nanoTime() + TimeUnit.SECONDS.toNanos(seconds);
         while (System.nanoTime() < end) {
             if (condition.getAsBoolean()) return;
             settle(100);
@@ -103,10 +107,10 @@ final class GuiSupport {
     }
 
     /** Presses Ctrl with {@code key}, as a user would. */
-    static void chord(org.assertj.swing.core.Robot robot, int key) {
-        robot.pressKey(java.awt.event.KeyEvent.VK_CONTROL);
+    static void chord(Robot robot, int key) {
+        robot.pressKey(KeyEvent.VK_CONTROL);
         robot.pressAndReleaseKey(key);
-        robot.releaseKey(java.awt.event.KeyEvent.VK_CONTROL);
+        robot.releaseKey(KeyEvent.VK_CONTROL);
         robot.waitForIdle();
     }
 
@@ -116,7 +120,7 @@ final class GuiSupport {
         Path file = dir.resolve(name + ".png");
         BufferedImage img = onEdt(() -> {
             BufferedImage i = new BufferedImage(c.getWidth(), c.getHeight(), BufferedImage.TYPE_INT_RGB);
-            java.awt.Graphics2D g = i.createGraphics();
+            Graphics2D g = i.createGraphics();
             c.paint(g);
             g.dispose();
             return i;

@@ -3,13 +3,20 @@ package org.arcwright.app.gui;
 import static org.assertj.core.api.Assertions.assertThat;
 
 import java.awt.Component;
+import java.io.IOException;
+import java.io.UncheckedIOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import javax.swing.JButton;
+import javax.swing.JDialog;
 import javax.swing.JList;
 import javax.swing.JTextField;
+import javax.swing.JViewport;
 import javax.swing.SwingUtilities;
+import javax.swing.text.Document;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
+import org.arcwright.notes.NoteHit;
 import org.assertj.swing.fixture.FrameFixture;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
@@ -38,7 +45,7 @@ class NotesPanelGuiTest {
     private static int visibleHeight(String name) {
         return GuiSupport.onEdt(() -> {
             Component c = fixture.robot().finder().findByName(window.frame(), name, true);
-            return SwingUtilities.getAncestorOfClass(javax.swing.JViewport.class, c).getHeight();
+            return SwingUtilities.getAncestorOfClass(JViewport.class, c).getHeight();
         });
     }
 
@@ -50,7 +57,7 @@ class NotesPanelGuiTest {
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> window.notesPanel().listedTitles().size() > 0
                 && fixture.label("notesCount").target().getText().contains(words)), 20);
         @SuppressWarnings("unchecked")
-        JList<org.arcwright.notes.NoteHit> list = (JList<org.arcwright.notes.NoteHit>) fixture.list("notesHits").target();
+        JList<NoteHit> list = (JList<NoteHit>) fixture.list("notesHits").target();
         GuiSupport.onEdt(() -> {
             for (int i = 0; i < list.getModel().getSize(); i++) {
                 if (list.getModel().getElementAt(i).id().equals(id)) list.setSelectedIndex(i);
@@ -61,7 +68,7 @@ class NotesPanelGuiTest {
 
     /** Presses the button as a click would; the modal form it opens is then driven through its fixture. */
     private static void press(String name) {
-        javax.swing.JButton b = fixture.button(name).target();
+        JButton b = fixture.button(name).target();
         SwingUtilities.invokeLater(b::doClick);
     }
 
@@ -73,7 +80,7 @@ class NotesPanelGuiTest {
         assertThat(visibleHeight("notesReader")).as("reader height at 1024x700").isGreaterThanOrEqualTo(100);
         assertThat(visibleHeight("notesHits")).as("list height at 1024x700").isGreaterThanOrEqualTo(90);
         String plain = GuiSupport.onEdt(() -> {
-            javax.swing.text.Document d = window.notesPanel().reader().getDocument();
+            Document d = window.notesPanel().reader().getDocument();
             return d.getText(0, d.getLength());
         });
         // the note's source says *Peterson's Stress Concentration Factors*: emphasis, not asterisks
@@ -109,11 +116,11 @@ class NotesPanelGuiTest {
                     .anyMatch(p -> {
                         try {
                             return Files.readString(p).contains("Hollowmere Valves");
-                        } catch (java.io.IOException e) {
+                        } catch (IOException e) {
                             return false;
                         }
                     });
-        } catch (java.io.IOException | java.io.UncheckedIOException e) {
+        } catch (IOException | UncheckedIOException e) {
             return false;
         }
     }
@@ -144,7 +151,7 @@ class NotesPanelGuiTest {
         JTextField id = (JTextField) fixture.robot().finder().findByName(pane.target(), "noteId", true);
         assertThat(GuiSupport.onEdt(() -> id.getText())).isEqualTo("notch-sensitivity-neuber-peterson");
         assertThat(GuiSupport.onEdt(() -> id.isEditable())).isFalse();
-        assertThat(GuiSupport.onEdt(() -> ((javax.swing.JDialog) SwingUtilities.getWindowAncestor(pane.target())).getTitle()))
+        assertThat(GuiSupport.onEdt(() -> ((JDialog) SwingUtilities.getWindowAncestor(pane.target())).getTitle()))
                 .contains("Override");
         fixture.robot().finder().findByName(pane.target(), "noteAuthor", true);
         GuiSupport.onEdt(() -> ((JTextField) fixture.robot().finder().findByName(pane.target(), "noteAuthor", true))

@@ -1,5 +1,6 @@
 package org.arcwright.app.gui;
 
+import java.awt.Frame;
 import java.io.IOException;
 import java.io.UncheckedIOException;
 import java.lang.reflect.Field;
@@ -70,7 +71,7 @@ final class OpenWindowExtension implements BeforeAllCallback, AfterAllCallback {
         inject(context.getRequiredTestClass());
         if (width > 0) {
             GuiSupport.onEdt(() -> {
-                w.frame().setExtendedState(java.awt.Frame.NORMAL);
+                w.frame().setExtendedState(Frame.NORMAL);
                 w.frame().setSize(width, height);
                 w.frame().validate();
             });

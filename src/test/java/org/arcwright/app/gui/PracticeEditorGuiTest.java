@@ -2,10 +2,15 @@ package org.arcwright.app.gui;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.awt.Frame;
+import java.awt.event.ActionEvent;
+import java.io.IOException;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.regex.Pattern;
 import javax.swing.JButton;
+import javax.swing.JList;
 import javax.swing.SwingUtilities;
 import org.arcwright.app.model.RuleForm;
 import org.arcwright.app.model.ThemeChoice;
@@ -13,6 +18,7 @@ import org.arcwright.app.practice.PracticeEditorPanel;
 import org.arcwright.app.shell.MainWindow;
 import org.assertj.swing.fixture.FrameFixture;
 import org.assertj.swing.fixture.JOptionPaneFixture;
+import org.assertj.swing.timing.Timeout;
 import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
@@ -47,7 +53,7 @@ class PracticeEditorGuiTest {
         window = opened.window();
         fixture = opened.fixture();
         GuiSupport.onEdt(() -> {
-            window.frame().setExtendedState(java.awt.Frame.NORMAL);
+            window.frame().setExtendedState(Frame.NORMAL);
             window.frame().setSize(1600, 1000);
             window.open(DECIDED);
         });
@@ -72,7 +78,7 @@ class PracticeEditorGuiTest {
 
     /** Selects row {@code index} of list {@code name} as a click would; a dialog it leads to opens afterwards. */
     private static void select(String name, int index) {
-        javax.swing.JList<?> l = fixture.list(name).target();
+        JList<?> l = fixture.list(name).target();
         GuiSupport.onEdt(() -> l.setSelectedIndex(index));
     }
 
@@ -84,8 +90,8 @@ class PracticeEditorGuiTest {
 
     /** Presses the dialog's button {@code text} once the dialog with {@code message} shows. */
     private static void answer(String message, String text) {
-        JOptionPaneFixture pane = fixture.optionPane(org.assertj.swing.timing.Timeout.timeout(10_000));
-        pane.requireMessage(java.util.regex.Pattern.compile("(?s).*" + java.util.regex.Pattern.quote(message) + ".*"));
+        JOptionPaneFixture pane = fixture.optionPane(Timeout.timeout(10_000));
+        pane.requireMessage(Pattern.compile("(?s).*" + Pattern.quote(message) + ".*"));
         JButton b = pane.buttonWithText(text).target();
         SwingUtilities.invokeLater(b::doClick);
         GuiSupport.waitFor(() -> !GuiSupport.onEdt(b::isShowing), 10);
@@ -200,7 +206,7 @@ class PracticeEditorGuiTest {
         GuiSupport.onEdt(() -> panel().showPage("Note templates"));
         GuiSupport.waitFor(() -> fixture.list("templateList").contents().length > 0, 20);
         press("templateNew");
-        JOptionPaneFixture name = fixture.optionPane(org.assertj.swing.timing.Timeout.timeout(10_000));
+        JOptionPaneFixture name = fixture.optionPane(Timeout.timeout(10_000));
         GuiSupport.onEdt(() -> name.textBox().target().setText("bench-note"));
         JButton ok = name.okButton().target();
         SwingUtilities.invokeLater(ok::doClick);
@@ -229,7 +235,7 @@ class PracticeEditorGuiTest {
     @Order(6)
     void anOverriddenBuiltInTemplateRevertsAfterAskingAndAnUndecidedFeatureIsNotADanglingLine() {
         GuiSupport.onEdt(() -> {
-            javax.swing.JList<?> l = fixture.list("templateList").target();
+            JList<?> l = fixture.list("templateList").target();
             for (int i = 0; i < l.getModel().getSize(); i++) {
                 if (l.getModel().getElementAt(i).toString().startsWith("callout-note ")) l.setSelectedIndex(i);
             }
@@ -266,7 +272,7 @@ class PracticeEditorGuiTest {
         // found where a user looks for settings: a View command (and so the command finder) opens the page
         GuiSupport.onEdt(() -> panel().showPage("Rules"));
         GuiSupport.onEdt(() -> window.action("view.packs").actionPerformed(
-                new java.awt.event.ActionEvent(window.frame(), java.awt.event.ActionEvent.ACTION_PERFORMED, "packs")));
+                new ActionEvent(window.frame(), ActionEvent.ACTION_PERFORMED, "packs")));
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> fixture.button("teamPackAdd").target().isShowing()), 10);
         press("teamPackAdd");
         chooseFolder(notAPack);
@@ -291,14 +297,14 @@ class PracticeEditorGuiTest {
     private static String read(Path file) {
         try {
             return Files.readString(file);
-        } catch (java.io.IOException e) {
+        } catch (IOException e) {
             return "";
         }
     }
 
     /** Picks {@code folder} in the open folder chooser and approves it, pressed rather than clicked. */
     private static void chooseFolder(Path folder) {
-        var chooser = fixture.fileChooser(org.assertj.swing.timing.Timeout.timeout(10_000)).target();
+        var chooser = fixture.fileChooser(Timeout.timeout(10_000)).target();
         GuiSupport.onEdt(() -> chooser.setSelectedFile(folder.toFile()));
         SwingUtilities.invokeLater(chooser::approveSelection);
         GuiSupport.waitFor(() -> !GuiSupport.onEdt(chooser::isShowing), 10);

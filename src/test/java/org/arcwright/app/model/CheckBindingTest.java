@@ -6,12 +6,14 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
+import java.util.Map;
 import org.arcwright.callout.Callout;
 import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionFiles;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.Verdict;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.model.BlendFunction;
@@ -45,7 +47,7 @@ class CheckBindingTest {
     }
 
     private static Recommendation chosen(Callout c, String text) {
-        return new Recommendation("test", c, text, 0, List.of(), List.of(), List.of(), java.util.Map.of(), List.of(),
+        return new Recommendation("test", c, text, 0, List.of(), List.of(), List.of(), Map.of(), List.of(),
                 List.of(), false);
     }
 
@@ -120,8 +122,8 @@ class CheckBindingTest {
         CheckRequests.Ready csv = (CheckRequests.Ready) requests.read(HOUSING_CSV, crShoulder(), stated);
         CheckRequests.Ready json = (CheckRequests.Ready) requests.read(HOUSING, crShoulder(), CheckRequests.Frame.STANDARD);
         // the stated frame places the same corner as the file, within rounding of the legs' directions
-        var a = (org.arcwright.inspect.Nominal.CornerBlend) csv.request().nominal();
-        var b = (org.arcwright.inspect.Nominal.CornerBlend) json.request().nominal();
+        var a = (Nominal.CornerBlend) csv.request().nominal();
+        var b = (Nominal.CornerBlend) json.request().nominal();
         assertThat(a.radius()).isEqualTo(b.radius());
         assertThat(a.corner().vertex()).isEqualTo(b.corner().vertex());
         assertThat(a.corner().legA().minus(b.corner().legA()).length()).isLessThan(1e-12);
@@ -129,7 +131,7 @@ class CheckBindingTest {
         assertThat(csv.request().points().size()).isEqualTo(json.request().points().size());
         // and the standard frame (vertex at the origin) does not: the points would lie far from the corner
         CheckRequests.Ready origin = (CheckRequests.Ready) requests.read(HOUSING_CSV, crShoulder(), CheckRequests.Frame.STANDARD);
-        assertThat(((org.arcwright.inspect.Nominal.CornerBlend) origin.request().nominal()).corner().vertex())
+        assertThat(((Nominal.CornerBlend) origin.request().nominal()).corner().vertex())
                 .isNotEqualTo(b.corner().vertex());
     }
 
@@ -138,7 +140,7 @@ class CheckBindingTest {
         PartWorksheet ws = PartWorksheet.empty(new PartWorksheet.PartInfo("QX-1", "Invented shaft", null, "Invented Co", "A"),
                 Units.MM, DrawingStyle.ASME).withFeature(crShoulder()).withFeature(new RadiusFeature("F2", fillet(Units.MM, 1), null, null));
         WorksheetSession s = new WorksheetSession(Fixtures.files(), ws, null);
-        InspectionRecord rec = new InspectionRecord("pass", "a.csv", "2026-12-05", java.util.Map.of("callout", "CR 1.8-2.2"));
+        InspectionRecord rec = new InspectionRecord("pass", "a.csv", "2026-12-05", Map.of("callout", "CR 1.8-2.2"));
         assertThatThrownBy(() -> s.recordInspection("F2", rec)).isInstanceOf(IllegalStateException.class)
                 .hasMessageContaining("undecided");
         s.recordInspection("F1", rec);

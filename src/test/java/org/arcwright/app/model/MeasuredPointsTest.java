@@ -5,10 +5,13 @@ import static org.assertj.core.api.Assertions.within;
 
 import java.util.ArrayList;
 import java.util.List;
+import java.util.Map;
+import java.util.Optional;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.arcwright.callout.Callout;
 import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionRequest;
+import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointSet;
@@ -28,7 +31,7 @@ import org.junit.jupiter.api.Test;
  */
 class MeasuredPointsTest {
     private static Recommendation chosen(Callout c) {
-        return new Recommendation("test", c, "text", 0, List.of(), List.of(), List.of(), java.util.Map.of(), List.of(),
+        return new Recommendation("test", c, "text", 0, List.of(), List.of(), List.of(), Map.of(), List.of(),
                 List.of(), false);
     }
 
@@ -153,9 +156,9 @@ class MeasuredPointsTest {
                 new InspectionCallout.RadiusLimits(RadiusKind.R, 1.8, 2.2),
                 PointSet.of(new double[][] {{5, 5}, {4, 3}, {5 - 0.5, 3 + 0.5}}), 0.001, Double.NaN, false);
         // only the request matters to the frame: a bare result stands in for the inspection
-        var result = new org.arcwright.inspect.InspectionResult(q, true, null, null, null, null, null, null, List.of(), List.of());
+        var result = new InspectionResult(q, true, null, null, null, null, null, null, List.of(), List.of());
         MeasuredPoints m = MeasuredPoints.of(result, "rotated.json").orElseThrow();
-        assertThat(m.kind()).isEqualTo(org.arcwright.model.BlendKind.ROUND);
+        assertThat(m.kind()).isEqualTo(BlendKind.ROUND);
         // leg A onto +x, leg B onto +y, the bisector onto 45°; distances from the vertex kept
         assertThat(m.points().get(0).x()).isEqualTo(2, within(1e-12));
         assertThat(m.points().get(0).y()).isEqualTo(0, within(1e-12));
@@ -178,7 +181,7 @@ class MeasuredPointsTest {
     void theSceneDescribesAPointByItsDeviationAndExcess() {
         RadiusFeature f = fillet(new Callout.Radius(1.8, 2.2, 2.0));
         MeasuredPoints m = measured(f, onBlend(1.75, 45));
-        ZoneScene scene = ZoneScene.of(f, java.util.Optional.of(m), 10);
+        ZoneScene scene = ZoneScene.of(f, Optional.of(m), 10);
         assertThat(scene.placed()).hasSize(12);
         assertThat(scene.pointsCaption()).startsWith("12 measured points").contains("1 outside");
         // a fillet's blend of 1.75 lies on the material side of the nominal 2, by (2 - 1.75)(√2 - 1) on the bisector

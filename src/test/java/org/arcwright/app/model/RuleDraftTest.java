@@ -2,8 +2,11 @@ package org.arcwright.app.model;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.nio.file.Files;
+import java.nio.file.Path;
 import org.arcwright.io.JsonFiles;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 class RuleDraftTest {
     private static final String RULE = "{\n  \"id\": \"demo.rule\",\n  \"summary\": \"A demo rule\",\n"
@@ -29,9 +32,9 @@ class RuleDraftTest {
     }
 
     @Test
-    void aRuleOpensAsWrittenInItsPackFile(@org.junit.jupiter.api.io.TempDir java.nio.file.Path dir) throws Exception {
-        java.nio.file.Path file = dir.resolve("demo.json");
-        java.nio.file.Files.writeString(file, "{\"rules\": [" + RULE + "]}");
+    void aRuleOpensAsWrittenInItsPackFile(@TempDir Path dir) throws Exception {
+        Path file = dir.resolve("demo.json");
+        Files.writeString(file, "{\"rules\": [" + RULE + "]}");
         RuleDraft d = RuleDraft.fromFile(new JsonFiles(), file, "demo.rule");
         assertThat(d.text()).contains("\"function\" : \"cosmetic\"");
         assertThat(d.rule()).isEqualTo(new RuleDraft(new JsonFiles(), "x", RULE).rule());

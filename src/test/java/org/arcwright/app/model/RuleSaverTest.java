@@ -9,6 +9,7 @@ import java.util.List;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.notes.NotesPaths;
+import org.arcwright.pack.PackLayer;
 import org.arcwright.pack.PackStack;
 import org.arcwright.rules.RuleBook;
 import org.junit.jupiter.api.Test;
@@ -105,7 +106,7 @@ class RuleSaverTest {
         assertThat(reverted.problems()).isEmpty();
         assertThat(reverted.entries()).anySatisfy(e -> {
             assertThat(e.rule().id()).isEqualTo(id);
-            assertThat(e.layer()).isEqualTo(org.arcwright.pack.PackLayer.BUILT_IN);
+            assertThat(e.layer()).isEqualTo(PackLayer.BUILT_IN);
             assertThat(e.rule().summary()).isEqualTo(builtIn.rule().summary());
         });
         // the built-in pack itself is never written

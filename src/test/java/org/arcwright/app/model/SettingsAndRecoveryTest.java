@@ -9,6 +9,7 @@ import java.time.Instant;
 import java.time.ZoneOffset;
 import java.util.Map;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.pack.ConfigDirectory;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -60,12 +61,12 @@ class SettingsAndRecoveryTest {
 
     @Test
     void theConfigDirectoryFollowsEachOperatingSystemsConvention() {
-        assertThat(org.arcwright.pack.ConfigDirectory.resolve(null, "Linux", "/home/u", Map.of())).isEqualTo(Path.of("/home/u/.config/arcwright"));
-        assertThat(org.arcwright.pack.ConfigDirectory.resolve(null, "Linux", "/home/u", Map.of("XDG_CONFIG_HOME", "/x")))
+        assertThat(ConfigDirectory.resolve(null, "Linux", "/home/u", Map.of())).isEqualTo(Path.of("/home/u/.config/arcwright"));
+        assertThat(ConfigDirectory.resolve(null, "Linux", "/home/u", Map.of("XDG_CONFIG_HOME", "/x")))
                 .isEqualTo(Path.of("/x/arcwright"));
-        assertThat(org.arcwright.pack.ConfigDirectory.resolve(null, "Mac OS X", "/Users/u", Map.of()))
+        assertThat(ConfigDirectory.resolve(null, "Mac OS X", "/Users/u", Map.of()))
                 .isEqualTo(Path.of("/Users/u/Library/Application Support/Arcwright"));
-        assertThat(org.arcwright.pack.ConfigDirectory.resolve("/tmp/c", "Linux", "/home/u", Map.of())).isEqualTo(Path.of("/tmp/c"));
+        assertThat(ConfigDirectory.resolve("/tmp/c", "Linux", "/home/u", Map.of())).isEqualTo(Path.of("/tmp/c"));
     }
 
     @Test

@@ -3,11 +3,16 @@ package org.arcwright.app.model;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
+import java.util.Map;
 import org.arcwright.callout.Callout;
 import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.inspect.InspectionFiles;
+import org.arcwright.inspect.Inspector;
 import org.arcwright.io.InputProblem;
+import org.arcwright.io.JsonFiles;
 import org.arcwright.mechanics.StressTarget;
 import org.arcwright.model.BlendFunction;
 import org.arcwright.model.BlendKind;
@@ -19,6 +24,7 @@ import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.RadiusFeature;
+import org.assertj.core.api.Assertions;
 import org.junit.jupiter.api.Test;
 
 class StressAndCheckMappingTest {
@@ -29,7 +35,7 @@ class StressAndCheckMappingTest {
     }
 
     private static Recommendation chosen(Callout c) {
-        return new Recommendation("test", c, "text", 0, List.of(), List.of(), List.of(), java.util.Map.of(), List.of(),
+        return new Recommendation("test", c, "text", 0, List.of(), List.of(), List.of(), Map.of(), List.of(),
                 List.of(), false);
     }
 
@@ -47,7 +53,7 @@ class StressAndCheckMappingTest {
     void withAStrengthTheTargetIsOnKf() {
         RadiusFeature f = new RadiusFeature("F1", shoulder("R2 ±0.2", new DesignCase.Strength(900, "MPa")), null, null);
         StressCases.Assessment a = StressCases.of(f);
-        assertThat(a.stressCase().rMin()).isEqualTo(1.8, org.assertj.core.api.Assertions.within(1e-12));
+        assertThat(a.stressCase().rMin()).isEqualTo(1.8, Assertions.within(1e-12));
         assertThat(a.target().factor()).isEqualTo(StressTarget.Factor.KF);
     }
 
@@ -72,9 +78,9 @@ class StressAndCheckMappingTest {
 
     @Test
     void anInspectionRecordKeepsTheVerdictAndDate() throws Exception {
-        var req = new org.arcwright.inspect.InspectionFiles(new org.arcwright.io.JsonFiles())
-                .read(java.nio.file.Path.of("examples/inspect/bracket-round-cr-flat.json"));
-        var result = new org.arcwright.inspect.Inspector().inspect(req);
+        var req = new InspectionFiles(new JsonFiles())
+                .read(Path.of("examples/inspect/bracket-round-cr-flat.json"));
+        var result = new Inspector().inspect(req);
         var rec = CheckRequests.record(result, "cr-flat.json", LocalDate.of(2026, 12, 1));
         assertThat(rec.verdict()).isEqualTo(result.pass() ? "pass" : "fail");
         assertThat(rec.measuredOn()).isEqualTo("2026-12-01");

@@ -2,9 +2,12 @@ package org.arcwright.app.model;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.nio.file.Path;
 import java.util.List;
 import org.arcwright.pack.PackStack;
+import org.arcwright.templates.NoteTemplates;
 import org.arcwright.worksheet.PartWorksheet;
+import org.arcwright.worksheet.RadiusFeature;
 import org.junit.jupiter.api.Test;
 
 class TemplatePreviewTest {
@@ -16,7 +19,7 @@ class TemplatePreviewTest {
 
     /** The repository's invented example: F1 to F4 decided, F5 undecided. */
     private static PartWorksheet decided() {
-        return Fixtures.files().read(java.nio.file.Path.of("examples/tarnbeck-output-shaft-decided.arcpart"));
+        return Fixtures.files().read(Path.of("examples/tarnbeck-output-shaft-decided.arcpart"));
     }
 
     @Test
@@ -33,7 +36,7 @@ class TemplatePreviewTest {
     @Test
     void anUndecidedFeatureIsSkippedAsTheSheetDoesNotPreviewedAsADanglingLine() {
         PartWorksheet ws = decided();
-        org.arcwright.worksheet.RadiusFeature f5 = ws.features().get(4);
+        RadiusFeature f5 = ws.features().get(4);
         assertThat(f5.chosen()).isNull();
         TemplatePreview.Entry e = named("callout-note");
         TemplatePreview.Result r = TemplatePreview.fill(e, TemplatePreview.text(e), ws, f5);
@@ -42,7 +45,7 @@ class TemplatePreviewTest {
         assertThat(r.note()).doesNotContain("F5").startsWith("F1 ");
         assertThat(r.notice()).contains("F5 has no callout chosen yet").contains("shown for F1");
         // the command line skips it the same way: every decided feature, F5 not among them
-        String cli = org.arcwright.templates.NoteTemplates.load(PackStack.builtIn()).fill("callout-note", ws, null, "test");
+        String cli = NoteTemplates.load(PackStack.builtIn()).fill("callout-note", ws, null, "test");
         assertThat(cli).contains("F1 ").doesNotContain("F5 ");
     }
 

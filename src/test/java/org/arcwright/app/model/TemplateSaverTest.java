@@ -10,6 +10,7 @@ import org.arcwright.io.InputProblem;
 import org.arcwright.notes.NotesPaths;
 import org.arcwright.pack.PackLayer;
 import org.arcwright.pack.PackStack;
+import org.arcwright.rules.RuleBook;
 import org.arcwright.templates.NoteTemplates;
 import org.arcwright.worksheet.PartWorksheet;
 import org.junit.jupiter.api.Test;
@@ -62,13 +63,14 @@ class TemplateSaverTest {
         PackStack reloaded = PackStack.load(List.of(), personal);
         TemplatePreview.Entry now = named(reloaded, "callout-note");
         assertThat(now.layer()).isEqualTo(PackLayer.PERSONAL);
-        PartWorksheet ws = Fixtures.twoFeatures();
+        // a per-feature note is filled for a decided feature (the invented demo part's F1)
+        PartWorksheet ws = Fixtures.files().read(Path.of("examples/tarnbeck-output-shaft-decided.arcpart"));
         String id = ws.features().get(0).id();
         assertThat(NoteTemplates.load(reloaded).fill("callout-note", ws, id, "test")).startsWith("OVERRIDDEN " + id);
         // the built-in template itself is untouched, read afresh
         assertThat(TemplatePreview.text(named(PackStack.builtIn(), "callout-note"))).doesNotContain("OVERRIDDEN");
         // the pack still loads its rules: no rule override was declared for a template
-        assertThat(org.arcwright.rules.RuleBook.load(reloaded).problems()).isEmpty();
+        assertThat(RuleBook.load(reloaded).problems()).isEmpty();
     }
 
     @Test

@@ -3,8 +3,10 @@ package org.arcwright.app.model;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.util.List;
 import org.arcwright.callout.Callout;
 import org.arcwright.model.BlendKind;
+import org.arcwright.zone.Corner;
 import org.arcwright.zone.Point2;
 import org.junit.jupiter.api.Test;
 
@@ -18,7 +20,7 @@ class ZonePictureTest {
     void theLimitArcsAreTheZonePackagesBlendsOfTheMagnifiedRadii() {
         ZoneSpec spec = new ZoneSpec.LimitArcs(2, 1.8, 2.2, 60, BlendKind.ROUND, false);
         ZonePicture p = ZonePicture.of(spec, 3);
-        org.arcwright.zone.Corner k = ZonePicture.viewCorner(60, BlendKind.ROUND);
+        Corner k = ZonePicture.viewCorner(60, BlendKind.ROUND);
         double lo = 2 + 3 * (1.8 - 2), hi = 2 + 3 * (2.2 - 2);
         for (Point2 pt : p.lower().subList(1, p.lower().size() - 1)) {
             assertThat(pt.distance(k.centre(lo))).isEqualTo(lo, within(1e-9));
@@ -58,7 +60,7 @@ class ZonePictureTest {
 
     @Test
     void aProfileBandOfAFilletPutsItsOutwardPartAwayFromTheVertex() {
-        ZoneSpec spec = ZoneSpec.of(Fixtures.fillet(2, null), new Callout.Profile(0.2, 0.15, java.util.List.of(), false, null), 90);
+        ZoneSpec spec = ZoneSpec.of(Fixtures.fillet(2, null), new Callout.Profile(0.2, 0.15, List.of(), false, null), 90);
         ZonePicture p = ZonePicture.of(spec, 1);
         Point2 nomMid = p.nominal().get(p.nominal().size() / 2);
         Point2 lowMid = p.lower().get(p.lower().size() / 2);

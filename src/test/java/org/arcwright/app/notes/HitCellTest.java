@@ -9,6 +9,7 @@ import java.awt.image.BufferedImage;
 import java.util.List;
 import javax.swing.JList;
 import org.arcwright.notes.NoteHit;
+import org.arcwright.pack.PackLayer;
 import org.junit.jupiter.api.Test;
 
 /** A title too long for the list is cut with an ellipsis, and the tooltip carries it whole. */
@@ -31,7 +32,7 @@ class HitCellTest {
     @Test
     void theTooltipIsTheWholeTitle() {
         NoteHit hit = new NoteHit("long-title", "A title far longer than any side panel is wide, for sure", 1f, "snippet",
-                "Built-in notes", org.arcwright.pack.PackLayer.BUILT_IN, List.of(), List.of(), List.of(), List.of());
+                "Built-in notes", PackLayer.BUILT_IN, List.of(), List.of(), List.of(), List.of());
         HitCell cell = new HitCell();
         cell.getListCellRendererComponent(new JList<>(), hit, 0, false, false);
         assertThat(cell.getToolTipText()).contains("A title far longer than any side panel is wide, for sure");
