@@ -1,6 +1,9 @@
 package org.arcwright.pack;
 
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
 import java.util.function.Function;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
@@ -20,17 +23,36 @@ public final class PackTables {
      *         the field {@code table} when no pack in force has one with the id
      */
     public static <T> T byId(PackStack stack, String kind, String id, Class<T> type, Function<T, String> idOf) {
-        JsonFiles json = new JsonFiles();
         T found = null;
+        for (T t : all(stack, kind, type)) {
+            if (idOf.apply(t).equals(id)) found = t;
+        }
+        if (found == null) throw InputProblem.ofField("table", "no " + kind + " table '" + id + "' in the packs in force");
+        return found;
+    }
+
+    /**
+     * The table of {@code kind} from the highest layer that has one, whatever its id; empty when no
+     * pack in force has one.
+     *
+     * @throws InputProblem naming the file when a table of the kind is malformed or outside its pack
+     */
+    public static <T> Optional<T> highest(PackStack stack, String kind, Class<T> type) {
+        List<T> tables = all(stack, kind, type);
+        return tables.isEmpty() ? Optional.empty() : Optional.of(tables.get(tables.size() - 1));
+    }
+
+    /** Every table of {@code kind}, lowest layer first. */
+    private static <T> List<T> all(PackStack stack, String kind, Class<T> type) {
+        JsonFiles json = new JsonFiles();
+        List<T> tables = new ArrayList<>();
         for (PackStack.PackFile f : stack.files("tables", ".json")) {
             ObjectNode tree = json.readPackObject(f.path(), f.pack().root());
             if (!kind.equals(tree.path("kind").asText())) continue;
             ObjectNode obj = tree.deepCopy();
             obj.remove("kind");
-            T t = json.convert(obj, f.path().toString(), type);
-            if (idOf.apply(t).equals(id)) found = t;
+            tables.add(json.convert(obj, f.path().toString(), type));
         }
-        if (found == null) throw InputProblem.ofField("table", "no " + kind + " table '" + id + "' in the packs in force");
-        return found;
+        return tables;
     }
 }

@@ -2,15 +2,13 @@ package org.arcwright.simulate;
 
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
-import com.fasterxml.jackson.databind.JsonNode;
-import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
 import org.arcwright.io.InputProblem;
-import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
+import org.arcwright.pack.PackTables;
 import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Corner;
 
@@ -37,16 +35,9 @@ public record ProcessDefaults(String id, String source, double radiusSdDivisor, 
 
     /** The table from the packs in force, the highest layer winning; empty when no pack has one. */
     public static Optional<ProcessDefaults> load(PackStack stack) {
-        JsonFiles json = new JsonFiles();
-        ProcessDefaults found = null;
-        for (PackStack.PackFile f : stack.files("tables", ".json")) {
-            JsonNode tree = json.readTree(f.path());
-            if (!KIND.equals(tree.path("kind").asText())) continue;
-            ObjectNode obj = (ObjectNode) tree.deepCopy();
-            obj.remove("kind");
-            found = json.convert(obj, f.path().toString(), FileDto.class).toDefaults();
-        }
-        return Optional.ofNullable(found);
+        // read as every pack table is (PackTables): from inside its own pack only; it read a table
+        // linked from outside the pack before
+        return PackTables.highest(stack, KIND, FileDto.class).map(FileDto::toDefaults);
     }
 
     /**
