@@ -8,13 +8,14 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.IntFunction;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.model.DesignCase;
 import org.arcwright.model.Loading;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.DesignChange;
 import org.arcwright.rules.Need;
-import org.arcwright.model.DesignCase;
 import org.arcwright.rules.NoteLink;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.rules.RuleBook;
@@ -86,12 +87,12 @@ final class AdviceOutput {
         DesignCase c = advice.designCase();
         out.printf("%s%s R%s %s, %s, %s, %s, %s%s%s%n",
                 c.feature() == null ? "" : c.feature() + ": ", c.kind().key(),
-                Numbers.plain(c.nominalRadius()), c.units().symbol(), c.function().key(),
+                DecimalText.significant(c.nominalRadius(), 4), c.units().symbol(), c.function().key(),
                 c.loading() == Loading.NONE ? "no load" : c.loading().key() + " load",
                 c.process().key(), c.standard().key().toUpperCase(Locale.ROOT),
                 c.hasDatums() ? ", datums " + String.join(" ", c.datums()) : ", no datums",
                 (c.formMatters() ? ", form matters" : "") + (c.locationMatters() ? ", location matters" : "")
-                        + (c.cornerAngle() == null ? "" : ", " + Numbers.plain(c.cornerAngle()) + "° corner"));
+                        + (c.cornerAngle() == null ? "" : ", " + DecimalText.significant(c.cornerAngle(), 4) + "° corner"));
         List<Recommendation> recs = advice.recommendations();
         for (String w : advice.warnings()) out.println("warning   " + w);
         if (!advice.designChanges().isEmpty()) {
@@ -105,7 +106,7 @@ final class AdviceOutput {
             Recommendation r = recs.get(i);
             out.println();
             out.printf("%d. %s%n", i + 1, r.text());
-            out.printf("   %s, score %s%s%s, rule %s%n", r.callout().typeName(), Numbers.plain(r.score()),
+            out.printf("   %s, score %s%s%s, rule %s%n", r.callout().typeName(), DecimalText.significant(r.score(), 4),
                     r.demoted() ? " (DEMOTED)" : "", Boolean.FALSE.equals(r.meetsAll()) ? " (MISSES A NEED)" : "", r.ruleId());
             for (String b : r.because()) out.println("   because   " + b);
             out.println("   numbers   " + numbersLine(r.numbers().asMap()));
@@ -138,8 +139,8 @@ final class AdviceOutput {
         out.println("  " + head);
         String u = advice.designCase().units().symbol();
         for (Need n : advice.needs()) {
-            String limit = n.min() != null ? "r ≥ " + Numbers.plain(n.min()) + " " + u
-                    : n.max() != null ? "r ≤ " + Numbers.plain(n.max()) + " " + u : n.reachable() ? "" : "none reaches it";
+            String limit = n.min() != null ? "r ≥ " + DecimalText.significant(n.min(), 4) + " " + u
+                    : n.max() != null ? "r ≤ " + DecimalText.significant(n.max(), 4) + " " + u : n.reachable() ? "" : "none reaches it";
             StringBuilder row = new StringBuilder(String.format("%-16s %-36s", n.key(), limit));
             for (int i = 0; i < cards; i++) {
                 Boolean ok = advice.recommendations().get(i).meets().get(n.key());
@@ -160,7 +161,7 @@ final class AdviceOutput {
         Object angle = m.get("angle");
         boolean square = angle instanceof Number n && n.doubleValue() == DesignCase.SQUARE_CORNER;
         append(sb, "crescent", num(m, "crescentWidth", p + 1)
-                + (angle == null || square ? "" : " at a " + Numbers.plain(((Number) angle).doubleValue()) + "° corner"));
+                + (angle == null || square ? "" : " at a " + DecimalText.significant(((Number) angle).doubleValue(), 4) + "° corner"));
         append(sb, "equivalent profile zone", num(m, "equivalentProfileZone", p + 1));
         if (m.containsKey("ktAtMin")) append(sb, "Kt at min/max", num(m, "ktAtMin", 2) + "/" + num(m, "ktAtMax", 2));
         if (m.containsKey("kfAtMin")) append(sb, "Kf at min/max", num(m, "kfAtMin", 2) + "/" + num(m, "kfAtMax", 2));
@@ -172,7 +173,7 @@ final class AdviceOutput {
 
     private static String num(Map<String, Object> m, String key, int places) {
         Object v = m.get(key);
-        return v instanceof Double d ? Numbers.fixed(d, places) : String.valueOf(v);
+        return v instanceof Double d ? DecimalText.fixed(d, places) : String.valueOf(v);
     }
 
     private static void append(StringBuilder sb, String k, String v) {

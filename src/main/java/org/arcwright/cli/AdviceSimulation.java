@@ -9,6 +9,7 @@ import java.util.Locale;
 import java.util.Optional;
 import org.arcwright.callout.Callout;
 import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Advice;
@@ -84,8 +85,8 @@ final class AdviceSimulation {
             return empty(advice, c, u, seed, parts, notJudged, notes, "no table");
         }
         if (judged.contradictory()) {
-            notes.add("not simulated: the radius floor " + Numbers.plain(judged.floor()) + " " + u + " lies above the ceiling "
-                    + Numbers.plain(judged.ceiling()) + " " + u + "; no part can be functionally good");
+            notes.add("not simulated: the radius floor " + DecimalText.significant(judged.floor(), 4) + " " + u + " lies above the ceiling "
+                    + DecimalText.significant(judged.ceiling(), 4) + " " + u + "; no part can be functionally good");
             return empty(advice, c, u, seed, parts, notJudged, notes, defaults.get().id());
         }
         if (judged.none()) {
@@ -100,7 +101,7 @@ final class AdviceSimulation {
             return empty(advice, c, u, seed, parts, notJudged, notes, d.id());
         }
         double pm = process.plusMinus();
-        String sdFrom = "process capability ±" + Numbers.plain(pm) + " " + u + " / " + Numbers.plain(d.radiusSdDivisor())
+        String sdFrom = "process capability ±" + DecimalText.significant(pm, 4) + " " + u + " / " + DecimalText.significant(d.radiusSdDivisor(), 4)
                 + (process.fromCapability() ? " (capability table, " + c.process().key() + ")" : " (no capability entry: ±10 % of the nominal assumed)");
         ProcessModel caseModel = process.model();
         List<CaseSimulations.Candidate> candidates = CaseSimulations.candidates(advice.recommendations(), null, caseModel, true);
@@ -119,7 +120,7 @@ final class AdviceSimulation {
         }
         if (centred) {
             notes.add("radius limits off the nominal: the process aims at the middle of each card's limits (a shop centres on the "
-                    + "drawn band, common practice); other cards at the nominal R" + Numbers.plain(c.nominalRadius()) + " " + u);
+                    + "drawn band, common practice); other cards at the nominal R" + DecimalText.significant(c.nominalRadius(), 4) + " " + u);
         }
         if (!ran) notes.add("no card's callout could be simulated");
         return new Report(ran, c.process().key(), process.source(), process.radiusSd(), sdFrom,
@@ -203,8 +204,8 @@ final class AdviceSimulation {
         if (r.ran()) {
             out.printf("Simulated (evidence only, ranking unchanged): %d parts, seed %d, default %s process model, "
                             + "%d points per section, measuring noise %s %s; radius sd %s %s from %s%n",
-                    r.parts(), r.seed(), r.process(), r.points(), Numbers.plain(r.noise()), r.units(),
-                    Numbers.fixed(r.radiusSd(), 4), r.units(), r.radiusSdFrom());
+                    r.parts(), r.seed(), r.process(), r.points(), DecimalText.significant(r.noise(), 4), r.units(),
+                    DecimalText.fixed(r.radiusSd(), 4), r.units(), r.radiusSdFrom());
             out.println("  table     " + r.modelSource());
             out.println("  needs     " + r.needs());
         } else {

@@ -11,14 +11,15 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
+import org.arcwright.model.DesignCase;
 import org.arcwright.pack.PackStack;
 import org.arcwright.pack.PracticePack;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.Advisor;
 import org.arcwright.rules.CaseTable;
-import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.rules.RuleBook;
 import org.arcwright.simulate.ProcessDefaults;
@@ -200,11 +201,11 @@ final class AdviseCommand implements Callable<Integer> {
                 cells.add(r.ruleId());
                 cells.add(r.callout().typeName());
                 cells.add(r.text());
-                cells.add(Numbers.plain(r.score()));
+                cells.add(DecimalText.significant(r.score(), 4));
                 cells.add(Boolean.toString(r.demoted()));
                 for (String k : List.of("min", "max", "zone", "ktAtMin", "kfAtMin", "minRadiusForTarget", "seats", "seatingMargin")) {
                     Object v = n.get(k);
-                    cells.add(v == null ? "" : v instanceof Double d ? Numbers.plain(d) : v.toString());
+                    cells.add(v == null ? "" : v instanceof Double d ? DecimalText.significant(d, 4) : v.toString());
                 }
                 cells.add(a.recommendations().size() > 1 ? a.recommendations().get(1).ruleId() : "");
                 cells.add(String.join(" | ", r.cautions()));

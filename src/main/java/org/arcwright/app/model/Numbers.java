@@ -1,22 +1,20 @@
 package org.arcwright.app.model;
 
-import java.math.BigDecimal;
-import java.util.Locale;
 import java.util.Optional;
+import org.arcwright.io.DecimalText;
 
 /** Reading and showing numbers the way an engineer types and reads them. */
 public final class Numbers {
     private Numbers() {}
 
-    /** A value without trailing zeros: 2.0 → "2", 0.550 → "0.55". */
+    /** A value without trailing zeros: 2.0 → "2", 0.550 → "0.55" ({@link DecimalText#exact}, the one rule for this). */
     public static String trim(double v) {
-        if (!Double.isFinite(v)) return String.valueOf(v);
-        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+        return DecimalText.exact(v);
     }
 
-    /** A figure to {@code places} decimals. */
+    /** A figure to {@code places} decimals ({@link DecimalText#fixed}: half to even, never "-0.00"). */
     public static String fixed(double v, int places) {
-        return String.format(Locale.ROOT, "%." + places + "f", v);
+        return DecimalText.fixed(v, places);
     }
 
     /** Parses a decimal typed with a point or a comma; empty when the text is not a finite number. */
