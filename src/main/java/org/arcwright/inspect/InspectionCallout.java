@@ -1,8 +1,8 @@
 package org.arcwright.inspect;
 
-import java.math.BigDecimal;
 import java.util.List;
 import java.util.Set;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.zone.ProfileZone;
@@ -103,6 +103,6 @@ public sealed interface InspectionCallout {
     }
 
     private static String num(double v) {
-        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+        return DecimalText.exact(v);
     }
 }

@@ -15,8 +15,6 @@ import java.awt.image.BufferedImage;
 import java.io.ByteArrayOutputStream;
 import java.io.IOException;
 import java.io.UncheckedIOException;
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
@@ -26,13 +24,14 @@ import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
-import org.arcwright.inspect.Verdict;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointExcesses;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.inspect.ProfileOutcome;
 import org.arcwright.inspect.Registration;
+import org.arcwright.inspect.Verdict;
 import org.arcwright.io.AtomicFiles;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.CrescentZone;
 import org.arcwright.zone.Contour;
@@ -533,8 +532,7 @@ public final class ContourPlot {
     private static String fmt(double v) {
         if (Double.isNaN(v)) return "none";
         if (Double.isInfinite(v)) return "infinite";
-        if (v == 0) return "0";
-        return new BigDecimal(v).round(new MathContext(4)).stripTrailingZeros().toPlainString();
+        return DecimalText.significant(v, 4);
     }
 
     /** World to screen, with deviations from the nominal magnified. */

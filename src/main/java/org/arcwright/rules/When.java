@@ -14,6 +14,7 @@ import java.util.EnumMap;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
+import org.arcwright.io.DecimalText;
 
 /**
  * A rule's {@code when} block: conditions on case facts, all of which must hold. An empty block
@@ -78,7 +79,7 @@ public final class When {
     public int hashCode() { return conditions.hashCode(); }
 
     private static String plain(double d) {
-        return d == Math.rint(d) && Math.abs(d) < 1e15 ? Long.toString((long) d) : Double.toString(d);
+        return DecimalText.exact(d);
     }
 
     /** Reads a {@code when} object field by field, so that errors point at the fact at fault. */

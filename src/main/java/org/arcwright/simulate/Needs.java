@@ -1,6 +1,6 @@
 package org.arcwright.simulate;
 
-import java.math.BigDecimal;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -41,6 +41,6 @@ public record Needs(double minRadius, double maxRadius, double maxPositionError,
     }
 
     static String num(double v) {
-        return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString();
+        return DecimalText.exact(v);
     }
 }

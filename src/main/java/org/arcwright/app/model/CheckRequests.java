@@ -1,6 +1,5 @@
 package org.arcwright.app.model;
 
-import java.math.BigDecimal;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.ArrayList;
@@ -21,6 +20,7 @@ import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.inspect.PointsCsv;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.model.BlendKind;
@@ -240,5 +240,5 @@ public final class CheckRequests {
 
     private static double round(double v) { return Math.round(v * 1e6) / 1e6; }
 
-    private static String num(double v) { return BigDecimal.valueOf(v).stripTrailingZeros().toPlainString(); }
+    private static String num(double v) { return DecimalText.exact(v); }
 }

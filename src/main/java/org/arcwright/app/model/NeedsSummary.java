@@ -1,12 +1,10 @@
 package org.arcwright.app.model;
 
-import java.math.BigDecimal;
-import java.math.MathContext;
-import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Set;
+import org.arcwright.io.DecimalText;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.DesignChange;
 import org.arcwright.rules.Need;
@@ -116,9 +114,6 @@ public record NeedsSummary(boolean nothingMeets, String statement, String change
 
     /** Four significant digits, as the text output of {@code advise} prints a need's limit. */
     static String fourDigits(double v) {
-        if (v == 0 || !Double.isFinite(v)) return Numbers.trim(v);
-        BigDecimal b = new BigDecimal(v)
-                .round(new MathContext(4, RoundingMode.HALF_EVEN)).stripTrailingZeros();
-        return b.scale() < 0 ? b.setScale(0).toPlainString() : b.toPlainString();
+        return DecimalText.significant(v, 4);
     }
 }
