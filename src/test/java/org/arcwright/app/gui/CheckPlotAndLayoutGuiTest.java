@@ -28,14 +28,13 @@ import org.arcwright.app.shell.MainWindow;
 import org.arcwright.app.widgets.NoticeStrip;
 import org.assertj.swing.fixture.FrameFixture;
 import org.jfree.svg.SVGGraphics2D;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * The Check view's plot drawn at the panel's size with the window's type, the CSV frame picked on
@@ -52,27 +51,20 @@ class CheckPlotAndLayoutGuiTest {
     private static final int CHECK = 3;
     private static final List<String> OTHER_AREAS = List.of();
 
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension();
 
-    private static GuiSupport.OpenWindow opened;
+    // filled by the extension
     private static MainWindow window;
     private static FrameFixture fixture;
 
     @BeforeAll
-    static void openWindow() {
-        // a fresh config: the first-run notice with its two buttons stays above the views
-        opened = GuiSupport.openWindow(config);
-        window = opened.window();
-        fixture = opened.fixture();
+    static void openTheDecidedPart() {
+        // a fresh config (the extension's): the first-run notice with its two buttons stays above the views
         GuiSupport.onEdt(() -> window.open(DECIDED));
         resize(1024, 700);
     }
 
-    @AfterAll
-    static void closeWindow() {
-        if (opened != null) opened.close();
-    }
 
     private static void resize(int w, int h) {
         GuiSupport.onEdt(() -> {

@@ -19,14 +19,13 @@ import org.arcwright.app.shell.MainWindow;
 import org.assertj.swing.fixture.FrameFixture;
 import org.assertj.swing.fixture.JOptionPaneFixture;
 import org.assertj.swing.timing.Timeout;
-import org.junit.jupiter.api.AfterAll;
 import org.junit.jupiter.api.BeforeAll;
 import org.junit.jupiter.api.MethodOrderer;
 import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Tag;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
-import org.junit.jupiter.api.io.TempDir;
+import org.junit.jupiter.api.extension.RegisterExtension;
 
 /**
  * The Practice editor as a lead engineer uses it: a new rule written in the form and saved, deleted
@@ -40,18 +39,16 @@ import org.junit.jupiter.api.io.TempDir;
 class PracticeEditorGuiTest {
     private static final Path DECIDED = Path.of("examples/tarnbeck-output-shaft-decided.arcpart").toAbsolutePath();
 
-    @TempDir
-    static Path config;
+    @RegisterExtension
+    static final OpenWindowExtension opened = new OpenWindowExtension();
 
-    private static GuiSupport.OpenWindow opened;
+    // filled by the extension
+    private static Path config;
     private static MainWindow window;
     private static FrameFixture fixture;
 
     @BeforeAll
-    static void openWindow() {
-        opened = GuiSupport.openWindow(config);
-        window = opened.window();
-        fixture = opened.fixture();
+    static void openTheDecidedPart() {
         GuiSupport.onEdt(() -> {
             window.frame().setExtendedState(Frame.NORMAL);
             window.frame().setSize(1600, 1000);
@@ -61,10 +58,6 @@ class PracticeEditorGuiTest {
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> panel().isShowing()) && fixture.list("ruleList").contents().length > 1, 60);
     }
 
-    @AfterAll
-    static void closeWindow() {
-        if (opened != null) opened.close();
-    }
 
     private static PracticeEditorPanel panel() { return window.practicePanel(); }
 
