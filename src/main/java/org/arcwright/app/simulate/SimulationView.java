@@ -6,8 +6,6 @@ import java.awt.Point;
 import java.awt.event.ComponentAdapter;
 import java.awt.event.ComponentEvent;
 import java.awt.event.HierarchyEvent;
-import java.math.BigDecimal;
-import java.math.MathContext;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
@@ -34,6 +32,7 @@ import org.arcwright.app.model.Numbers;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.widgets.Cautions;
 import org.arcwright.app.widgets.WrapLabel;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
@@ -398,8 +397,7 @@ public final class SimulationView extends JPanel {
 
     /** Four significant figures, no trailing zeros. */
     private static String sig(double v) {
-        if (v == 0 || !Double.isFinite(v)) return Numbers.trim(v);
-        return new BigDecimal(v).round(new MathContext(4)).stripTrailingZeros().toPlainString();
+        return DecimalText.significant(v, 4);
     }
 
     private FeatureSimulation.Figures readFigures() {
