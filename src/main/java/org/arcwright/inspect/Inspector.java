@@ -288,10 +288,8 @@ public final class Inspector {
         if (i < 0) return null;
         double x = pts.xs()[i], y = pts.ys()[i];
         Corner c = zone.corner();
-        Point2 v = c.vertex();
-        double qx = x - v.x(), qy = y - v.y();
-        double ha = qx * c.inwardNormalA().x() + qy * c.inwardNormalA().y();
-        double hb = qx * c.inwardNormalB().x() + qy * c.inwardNormalB().y();
+        double[] h = legOffsets(c, x, y);
+        double ha = h[0], hb = h[1];
         String where = String.format(Locale.ROOT, "point #%d (s = %s %s along the contour from the tangent point on surface a)", i,
                 fmt(stations[i]), unit);
         if (Math.min(ha, hb) < -zone.resolution()) {
@@ -320,13 +318,18 @@ public final class Inspector {
         int i = env.worst();
         if (i < 0) return null;
         double x = pts.xs()[i], y = pts.ys()[i];
-        Corner c = zone.corner();
+        double[] h = legOffsets(zone.corner(), x, y);
+        double nearest = Math.min(h[0], h[1]);
+        if (nearest < -zone.resolution()) return new Worst(i, x, y, -nearest, "distance beyond surface", unit, "");
+        return new Worst(i, x, y, env.worstExcess(), "radius", unit, "");
+    }
+
+    /** The signed distances of (x, y) from legs a and b, positive into the angle between them. */
+    private static double[] legOffsets(Corner c, double x, double y) {
         Point2 v = c.vertex();
         double qx = x - v.x(), qy = y - v.y();
-        double ha = qx * c.inwardNormalA().x() + qy * c.inwardNormalA().y();
-        double hb = qx * c.inwardNormalB().x() + qy * c.inwardNormalB().y();
-        if (Math.min(ha, hb) < -zone.resolution()) return new Worst(i, x, y, -Math.min(ha, hb), "distance beyond surface", unit, "");
-        return new Worst(i, x, y, env.worstExcess(), "radius", unit, "");
+        return new double[] {qx * c.inwardNormalA().x() + qy * c.inwardNormalA().y(),
+                qx * c.inwardNormalB().x() + qy * c.inwardNormalB().y()};
     }
 
     private static Worst windowWorst(PointSet pts, ControlledRadiusOutcome cr, String unit) {
