@@ -3,6 +3,8 @@ package org.arcwright.notes;
 import java.io.EOFException;
 import java.io.FileNotFoundException;
 import java.io.UncheckedIOException;
+import java.nio.file.AccessDeniedException;
+import java.nio.file.FileSystemException;
 import java.nio.file.NoSuchFileException;
 import java.util.concurrent.CompletionException;
 import java.util.concurrent.ExecutionException;
@@ -39,14 +41,29 @@ final class IndexDamage {
         return false;
     }
 
-    /** A short name of the damage for the index report, e.g. {@code CorruptIndexException}. */
+    /**
+     * What went wrong, in words for the index report ("a file of the index is missing"), never a Java
+     * class name: the report reaches the user in the status line and {@code notes status}.
+     */
     static String name(Throwable t) {
         for (Throwable c = t; c != null; c = c.getCause()) {
             if (!(c instanceof UncheckedIOException || c instanceof ExecutionException
                     || c instanceof CompletionException)) {
-                return c.getClass().getSimpleName();
+                return words(c);
             }
         }
-        return t.getClass().getSimpleName();
+        return words(t);
+    }
+
+    private static String words(Throwable c) {
+        if (c instanceof CorruptIndexException) return "its files are damaged";
+        if (c instanceof IndexFormatTooOldException) return "it was written in an older index format";
+        if (c instanceof IndexFormatTooNewException) return "it was written in a newer index format";
+        if (c instanceof NoSuchFileException || c instanceof FileNotFoundException) return "a file of the index is missing";
+        if (c instanceof EOFException) return "a file of the index ends early";
+        if (c instanceof AlreadyClosedException) return "its lock was lost";
+        if (c instanceof AccessDeniedException) return "permission denied";
+        if (c instanceof FileSystemException f && f.getReason() != null) return f.getReason();
+        return "a read or write failed";
     }
 }

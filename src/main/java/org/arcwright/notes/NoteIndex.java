@@ -164,7 +164,7 @@ final class NoteIndex implements Closeable {
             if (IndexDamage.isDamage(e)) {
                 rebuild("index corrupt: " + IndexDamage.name(e), t0, scan, false);
             } else {
-                buildInMemory("index folder not writable: " + e.getClass().getSimpleName(), t0);
+                buildInMemory("index folder not writable: " + IndexDamage.name(e), t0);
             }
         }
     }
@@ -202,7 +202,7 @@ final class NoteIndex implements Closeable {
             }
         } catch (IOException e) {
             closeQuietly();
-            buildInMemory(reason + "; index folder not writable: " + e.getClass().getSimpleName(), t0);
+            buildInMemory(reason + "; index folder not writable: " + IndexDamage.name(e), t0);
             return;
         }
         try {
@@ -212,7 +212,7 @@ final class NoteIndex implements Closeable {
             opened(IndexReport.Kind.REBUILT, reason, c, t0);
         } catch (IOException e) {
             closeQuietly();
-            buildInMemory(reason + "; index folder not writable: " + e.getClass().getSimpleName(), t0);
+            buildInMemory(reason + "; index folder not writable: " + IndexDamage.name(e), t0);
         }
     }
 

@@ -542,8 +542,9 @@ public final class MainWindow {
 
     private void sessionChanged() {
         frame.setTitle(session.title() + " — Arcwright");
-        status.feature(session.selected().map(f -> f.id() + " · " + (f.inspection() != null ? f.inspection().describe()
-                : f.status().label())).orElse("no feature"));
+        // the short state in the line (it must fit at 1024 px); what a kept verdict judged, against which callout, in the tooltip
+        status.feature(session.selected().map(f -> f.id() + " · " + f.status().label()).orElse("no feature"),
+                session.selected().map(f -> f.inspection() == null ? null : f.id() + " " + f.inspection().describe()).orElse(null));
         actions.refresh();
         autosaver.sessionChanged(session);
     }

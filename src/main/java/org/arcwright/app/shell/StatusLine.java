@@ -47,7 +47,16 @@ public final class StatusLine extends JPanel {
 
     public String message() { return message.getText(); }
 
-    public void feature(String text) { feature.setText(text); }
+    public void feature(String text) { feature(text, null); }
+
+    /** What a kept verdict of the selected feature judged (the feature field's tooltip), or null. */
+    public String featureDetail() { return feature.getToolTipText(); }
+
+    /** The selected feature's state in a few words, and the whole sentence (what a kept verdict judged) as its tooltip. */
+    public void feature(String text, String detail) {
+        feature.setText(text);
+        feature.setToolTipText(detail);
+    }
 
     /** What the status line says about the packs in force. */
     public String packsText() { return packs.getText(); }

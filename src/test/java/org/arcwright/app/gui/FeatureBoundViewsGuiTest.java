@@ -85,6 +85,9 @@ class FeatureBoundViewsGuiTest {
         RadiusFeature f1 = window.session().worksheet().feature("F1").orElseThrow();
         assertThat(f1.inspection().figures()).containsEntry("callout", "CR 1.8-2.2");
         assertThat(f1.inspection().passed()).isEqualTo(v.contains(" conforms to "));
+        // the status line says against what the kept verdict was judged, in which units
+        GuiSupport.waitFor(() -> String.valueOf(GuiSupport.onEdt(() -> window.statusLine().featureDetail()))
+                .contains("against CR 1.8-2.2 (mm)"), 10);
         assertThat(GuiSupport.onEdt(() -> window.checkPanel().canKeep())).isFalse();
     }
 
