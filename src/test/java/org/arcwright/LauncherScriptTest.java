@@ -51,6 +51,21 @@ class LauncherScriptTest {
               record) echo recorded > "$conf" ;;
               create) [ -n "${FAKE_CREATE_FAILS:-}" ] && exit 1; echo cache > "$cache" ;;
             esac
+            # the class-data archive of a command: the list of loaded classes, then the static dump
+            dump=; list=; archive=
+            for a in "$@"; do
+              case "$a" in
+                -Xshare:dump) dump=yes ;;
+                -XX:DumpLoadedClassList=*) printf 'java/lang/Object id: 0\n@lambda-proxy org/Some 1\n' > "${a#*=}" ;;
+                -XX:SharedClassListFile=*) list="${a#*=}" ;;
+                -XX:SharedArchiveFile=*) archive="${a#*=}" ;;
+              esac
+            done
+            if [ -n "$dump" ]; then
+              [ -n "${FAKE_CREATE_FAILS:-}" ] && exit 1
+              grep -q '^@' "$list" && exit 1
+              cat "$list" > "$archive"
+            fi
             exit 0
             """;
 
@@ -253,6 +268,40 @@ class LauncherScriptTest {
         assertThat(launch()).isZero();
         assertThat(calls()).singleElement().asString().startsWith(jdk25.resolve("bin/java").toString()).doesNotContain("AOT");
         assertThat(aotFiles(".aotconf")).isEmpty();
+    }
+
+    @Test
+    void theFirstSimulationAfterABuildListsItsClassesTheArchiveIsMadeInTheBackgroundAndLaterRunsStartFromIt() throws Exception {
+        Path java = tmp.resolve("path-java/bin/java");
+        Path target = jar.getParent();
+        Path list = target.resolve("arcwright-simulate.classlist");
+        Path archive = target.resolve("arcwright-simulate.jsa");
+        assertThat(launch("simulate", "part.json")).isZero();
+        assertThat(calls().get(0)).startsWith(java.toString())
+                .contains("-XX:TieredStopAtLevel=1", "-XX:DumpLoadedClassList=").endsWith("-jar " + jar + " simulate part.json");
+        waitUntil(() -> Files.exists(archive) && !Files.exists(target.resolve("arcwright-simulate.jsa.lock")));
+        assertThat(Files.readString(archive)).as("dumped from the list without its lambda-proxy lines")
+                .isEqualTo("java/lang/Object id: 0\n");
+        assertThat(calls()).anySatisfy(c -> assertThat(c).contains("-Xshare:dump", "-XX:SharedArchiveFile=" + archive + ".",
+                "-XX:+UseSerialGC", "-cp " + jar));
+        assertThat(list).exists();
+
+        Files.write(log, new byte[0]);
+        assertThat(launch("simulate", "part.json")).isZero();
+        assertThat(calls()).singleElement().asString().contains("-XX:SharedArchiveFile=" + archive, "-jar " + jar)
+                .doesNotContain("DumpLoadedClassList");
+
+        // A rebuilt jar records again; an archive that cannot be made is not retried at every run.
+        Files.writeString(jar, "not really a jar, version 2");
+        env.put("FAKE_CREATE_FAILS", "yes");
+        Files.write(log, new byte[0]);
+        assertThat(launch("simulate", "part.json")).isZero();
+        assertThat(calls().get(0)).contains("-XX:DumpLoadedClassList=").doesNotContain("SharedArchiveFile");
+        waitUntil(() -> Files.exists(target.resolve("arcwright-simulate.jsa.failed"))
+                && !Files.exists(target.resolve("arcwright-simulate.jsa.lock")));
+        Files.write(log, new byte[0]);
+        assertThat(launch("simulate", "part.json")).isZero();
+        assertThat(calls()).singleElement().asString().doesNotContain("SharedArchiveFile", "DumpLoadedClassList");
     }
 
     // ---- helpers ----
