@@ -75,9 +75,12 @@ public final class Inspector {
 
     private static Contour cornerContour(Corner corner, double radius, PointSet pts) {
         Point2 v = corner.vertex();
-        double reach = 0;
-        for (int i = 0; i < pts.size(); i++) reach = Math.max(reach, Math.hypot(pts.xs()[i] - v.x(), pts.ys()[i] - v.y()));
-        return corner.contour(radius, 2 * reach + 2 * corner.tangentDistance(radius) + 1);
+        double reach2 = 0;
+        for (int i = 0; i < pts.size(); i++) {
+            double dx = pts.xs()[i] - v.x(), dy = pts.ys()[i] - v.y();
+            reach2 = Math.max(reach2, dx * dx + dy * dy);
+        }
+        return corner.contour(radius, 2 * Math.sqrt(reach2) + 2 * corner.tangentDistance(radius) + 1);
     }
 
     /**

@@ -47,7 +47,20 @@ public record Corner(Point2 vertex, Point2 legA, Point2 legB, BlendKind kind) {
     public double includedAngleDeg() { return Math.toDegrees(2 * halfAngle()); }
 
     /** Half the included angle, radians. */
-    public double halfAngle() { return Math.acos(Math.max(-1, Math.min(1, legA.dot(legB)))) / 2; }
+    public double halfAngle() { return Math.acos(cosIncluded()) / 2; }
+
+    /**
+     * The sine of half the included angle, from {@code cos 2α = legA·legB} by the half-angle identity
+     * {@code sin α = √((1 - cos 2α)/2)}: the blend's lengths need only this and the cosine, and the
+     * identities spare an inverse cosine and a tangent on every call (a simulation makes several per
+     * part).
+     */
+    private double sinHalf() { return Math.sqrt((1 - cosIncluded()) / 2); }
+
+    /** The cosine of half the included angle, {@code √((1 + cos 2α)/2)}. */
+    private double cosHalf() { return Math.sqrt((1 + cosIncluded()) / 2); }
+
+    private double cosIncluded() { return Math.max(-1, Math.min(1, legA.dot(legB))); }
 
     /** Unit bisector, pointing into the angle. */
     public Point2 bisector() { return legA.plus(legB).unit(); }
@@ -65,25 +78,25 @@ public record Corner(Point2 vertex, Point2 legA, Point2 legB, BlendKind kind) {
     }
 
     /** Centre of the blend of radius {@code r}. */
-    public Point2 centre(double r) { return vertex.plus(bisector().times(r / Math.sin(halfAngle()))); }
+    public Point2 centre(double r) { return vertex.plus(bisector().times(r / sinHalf())); }
 
     /** Where the blend of radius {@code r} touches leg A. */
-    public Point2 tangentA(double r) { return vertex.plus(legA.times(r / Math.tan(halfAngle()))); }
+    public Point2 tangentA(double r) { return vertex.plus(legA.times(tangentDistance(r))); }
 
     /** Where the blend of radius {@code r} touches leg B. */
-    public Point2 tangentB(double r) { return vertex.plus(legB.times(r / Math.tan(halfAngle()))); }
+    public Point2 tangentB(double r) { return vertex.plus(legB.times(tangentDistance(r))); }
 
     /** Distance from the vertex to the tangent points of the blend of radius {@code r}. */
-    public double tangentDistance(double r) { return r / Math.tan(halfAngle()); }
+    public double tangentDistance(double r) { return r * cosHalf() / sinHalf(); }
 
     /**
      * Radius of the blend through the point {@code (x, y)}, which must lie strictly inside the angle
      * (see the class comment for the formula).
      */
     public double blendRadiusThrough(double x, double y) {
-        double a = halfAngle();
-        double s = 1 / Math.sin(a);
-        double cot2 = 1 / (Math.tan(a) * Math.tan(a));
+        double sin = sinHalf(), cos = cosHalf();
+        double s = 1 / sin;
+        double cot2 = cos * cos / (sin * sin);
         Point2 u = bisector();
         double qx = x - vertex.x(), qy = y - vertex.y();
         double qu = qx * u.x() + qy * u.y();
