@@ -187,7 +187,7 @@ public final class CircleFits {
      * distance from the middle point of the set), i.e. at rounding. Gauss-Newton converges linearly
      * at about rate = this step / the last one; when that rate is below 0.1 and rate × step (what
      * remains after this step) is below 1e-11 of the scale, a hundredth of the 1e-9 agreement with
-     * the reference solver that issue 3 asks for, the step is taken without a trial pass and the cost
+     * the reference solver that its tests hold it to, the step is taken without a trial pass and the cost
      * comes from the linear model (exact to second order in the step).
      */
     public static LeastSquaresCircle leastSquares(double[] xs, double[] ys, int n) {
