@@ -3,14 +3,17 @@ package org.arcwright.app.model;
 import java.util.function.Function;
 import org.arcwright.worksheet.RadiusFeature;
 
-/** The columns of the Part table, each with how its value is read from a feature. */
+/**
+ * The columns of the Part table, each with how its value is read from a feature, in the order they
+ * show: what a narrow column must still show first (which feature, its state, its callout).
+ */
 public enum FeatureColumn {
     ID("Id", f -> f.id()),
-    KIND("Kind", f -> f.designCase().kind().key()),
-    FUNCTION("Function", f -> f.designCase().function().key()),
-    NOMINAL("Nominal", f -> Numbers.trim(f.designCase().nominalRadius()) + " " + f.designCase().units().symbol()),
+    STATUS("Status", f -> f.status().label()),
     CALLOUT("Chosen callout", f -> f.chosen() == null ? "—" : f.chosen().text()),
-    STATUS("Status", f -> f.status().label());
+    NOMINAL("Nominal", f -> Numbers.trim(f.designCase().nominalRadius()) + " " + f.designCase().units().symbol()),
+    KIND("Kind", f -> f.designCase().kind().key()),
+    FUNCTION("Function", f -> f.designCase().function().key());
 
     private final String title;
     private final Function<RadiusFeature, String> value;

@@ -44,7 +44,19 @@ public final class PartPanel extends JPanel {
         super(new MigLayout("insets 8, wrap 1, gap 4", "[grow,fill]", "[][][][][grow,fill]"));
         this.session = session;
         this.model = new FeatureTableModel(session);
-        this.table = new JTable(model);
+        this.table = new JTable(model) {
+            private static final long serialVersionUID = 1L;
+
+            /**
+             * Fills the column's width when every column fits at its readable width; in a narrower
+             * column the table keeps those widths and scrolls sideways, rather than cutting every
+             * cell to an ellipsis.
+             */
+            @Override
+            public boolean getScrollableTracksViewportWidth() {
+                return getParent() == null || getPreferredSize().width <= getParent().getWidth();
+            }
+        };
         setName("partPanel");
         table.setName("featureTable");
         table.setSelectionMode(ListSelectionModel.SINGLE_SELECTION);
@@ -74,7 +86,6 @@ public final class PartPanel extends JPanel {
         add(new JScrollPane(table));
         session.listeners().add(this::sessionChanged);
         sessionChanged();
-        sizeColumns();
     }
 
     public JTable table() { return table; }
@@ -111,10 +122,23 @@ public final class PartPanel extends JPanel {
         return w;
     }
 
+    /** Widest a column is sized to by its content; longer cells end in an ellipsis and show their text as a tooltip. */
+    private static final int WIDEST_COLUMN = 220;
+
+    /**
+     * Sizes each column to its header and its longest cell (up to {@link #WIDEST_COLUMN}), so that at
+     * its preferred width every column is readable.
+     */
     private void sizeColumns() {
-        int[] widths = {34, 56, 100, 66, 130, 110};
-        for (int i = 0; i < widths.length && i < table.getColumnCount(); i++) {
-            table.getColumnModel().getColumn(i).setPreferredWidth(widths[i]);
+        for (int c = 0; c < table.getColumnCount(); c++) {
+            var column = table.getColumnModel().getColumn(c);
+            var header = table.getTableHeader().getDefaultRenderer()
+                    .getTableCellRendererComponent(table, column.getHeaderValue(), false, false, -1, c);
+            int width = header.getPreferredSize().width;
+            for (int r = 0; r < table.getRowCount(); r++) {
+                width = Math.max(width, table.prepareRenderer(table.getCellRenderer(r, c), r, c).getPreferredSize().width);
+            }
+            column.setPreferredWidth(Math.min(WIDEST_COLUMN, width + 2 * table.getIntercellSpacing().width + 6));
         }
     }
 
@@ -129,6 +153,7 @@ public final class PartPanel extends JPanel {
             partName.setToolTipText(ws.part().name());
             material.setToolTipText(ws.part().material());
             model.fireTableDataChanged();
+            sizeColumns();
             session.selected().ifPresent(this::selectRow);
         } finally {
             syncing = false;
@@ -170,8 +195,14 @@ public final class PartPanel extends JPanel {
                 c.setForeground(t.getForeground());
             }
             c.setFont(col == FeatureColumn.ID ? t.getFont().deriveFont(Font.BOLD) : t.getFont());
-            if (c instanceof JLabel) {
-                ((JLabel) c).setToolTipText(col == FeatureColumn.ID ? f.designCase().feature() : null);
+            if (c instanceof JLabel label) {
+                // the id's tooltip names the feature; a cell too narrow for its text shows it whole
+                String tip = col == FeatureColumn.ID ? f.designCase().feature() : null;
+                if (tip == null && value != null
+                        && label.getPreferredSize().width > t.getColumnModel().getColumn(column).getWidth()) {
+                    tip = value.toString();
+                }
+                label.setToolTipText(tip);
             }
             return c;
         }

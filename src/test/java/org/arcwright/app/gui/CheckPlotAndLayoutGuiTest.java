@@ -20,6 +20,7 @@ import javax.swing.AbstractButton;
 import javax.swing.JComponent;
 import javax.swing.JMenuItem;
 import javax.swing.JSplitPane;
+import javax.swing.JTable;
 import javax.swing.JViewport;
 import javax.swing.SwingUtilities;
 import javax.swing.UIManager;
@@ -273,6 +274,35 @@ class CheckPlotAndLayoutGuiTest {
             if (k instanceof Container kc) buttons(kc, into);
         }
         return into;
+    }
+
+    @Test
+    @Order(6)
+    void at1024x700ThePartTableKeepsItsCellsReadableAndScrollsSideways() {
+        resize(1024, 700);
+        JTable table = (JTable) fixture.robot().finder().findByName(window.frame(), "featureTable", true);
+        // every cell of the first three columns whole (they had been cut to "…" when squeezed into the column)
+        List<String> cut = GuiSupport.onEdt(() -> {
+            List<String> out = new ArrayList<>();
+            for (int r = 0; r < table.getRowCount(); r++) {
+                for (int c = 0; c < 3; c++) {
+                    Component cell = table.prepareRenderer(table.getCellRenderer(r, c), r, c);
+                    int room = table.getColumnModel().getColumn(c).getWidth();
+                    if (cell.getPreferredSize().width > room) out.add("row " + r + " column " + c + ": " + table.getValueAt(r, c));
+                }
+            }
+            return out;
+        });
+        assertThat(cut).isEmpty();
+        JViewport view = (JViewport) SwingUtilities.getAncestorOfClass(JViewport.class, table);
+        assertThat(GuiSupport.onEdt(() -> table.getWidth() > view.getWidth())).as("the table scrolls sideways in a narrow column").isTrue();
+        GuiSupport.screenshot(window.frame(), "part-table-1024x700-light");
+        // what matters most in a narrow column comes first: which feature, its state, its callout
+        assertThat(GuiSupport.onEdt(() -> List.of(table.getColumnName(0), table.getColumnName(1), table.getColumnName(2))))
+                .containsExactly("Id", "Status", "Chosen callout");
+        resize(1600, 1000);
+        GuiSupport.screenshot(window.frame(), "part-table-1600x1000-light");
+        resize(1024, 700);
     }
 
     @Test

@@ -55,7 +55,7 @@ class DecideFlowGuiTest {
         assertThat(f1.chosen()).isEqualTo(shown.get(0));
         assertThat(f1.status()).isEqualTo(RadiusFeature.Status.DECIDED);
         JTable table = (JTable) fixture.table("featureTable").target();
-        assertThat(GuiSupport.onEdt(() -> table.getValueAt(0, 4))).isEqualTo(shown.get(0).text());
+        assertThat(GuiSupport.onEdt(() -> table.getValueAt(0, 2))).isEqualTo(shown.get(0).text());
         GuiSupport.chord(robot, KeyEvent.VK_Z);
         GuiSupport.settle(100);
         assertThat(window.session().worksheet().feature("F1").orElseThrow().chosen()).isNull();
