@@ -540,8 +540,10 @@ public final class CheckPanel extends JPanel {
         revalidate();
         plot.show(r);
         refreshKeep();
-        status.accept("Checked " + Path.of(src).getFileName() + " for " + ready.featureId() + ": "
-                + (r.pass() ? "conforms" : "does not conform"));
+        // what was judged against what, and that the feature's kept verdict stays until Keep is pressed
+        status.accept("Checked " + Path.of(src).getFileName() + " for " + ready.featureId() + " against "
+                + r.request().callout().describe() + " " + u + ": " + (r.pass() ? "conforms" : "does not conform")
+                + " (not kept)");
     }
 
     /** The verdict as a whole sentence: which feature, against what, in which units. */

@@ -49,13 +49,34 @@ public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints meas
     }
 
     /**
-     * Everything drawn, for fitting the view: the zone, the nominal, the shaded material and the
-     * measured points as placed, so that Fit never leaves a point outside the view.
+     * Everything drawn: the zone, the nominal, the shaded material and every measured point as
+     * placed, so that framing it leaves no point outside the view.
      */
     public List<Point2> extent() {
         List<Point2> all = new ArrayList<>(picture.allPoints());
         all.addAll(picture.material(picture.spec().kind(), picture.spec().angleDeg()));
         all.addAll(placed);
+        return all;
+    }
+
+    /**
+     * The zone, the nominal, the shaded material and the points the zone judged: what the view
+     * frames first. Points along the surfaces beyond the zone's extent are left out, since a scan
+     * that runs far along the legs would otherwise shrink the zone to a corner of the view; with no
+     * judged point at all, every point is framed.
+     */
+    public List<Point2> zoneExtent() {
+        List<Point2> all = new ArrayList<>(picture.allPoints());
+        all.addAll(picture.material(picture.spec().kind(), picture.spec().angleDeg()));
+        if (measured == null) return all;
+        boolean anyJudged = false;
+        for (int i = 0; i < placed.size(); i++) {
+            if (measured.points().get(i).grade() != MeasuredPoints.Grade.NOT_JUDGED) {
+                all.add(placed.get(i));
+                anyJudged = true;
+            }
+        }
+        if (!anyJudged) all.addAll(placed);
         return all;
     }
 

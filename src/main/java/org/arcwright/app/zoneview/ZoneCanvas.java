@@ -44,6 +44,8 @@ final class ZoneCanvas extends JComponent {
     private String units = "mm";
     private BlendKind kind = BlendKind.FILLET;
     private double angle = 90;
+    /** True when the view frames every measured point, false when the zone and the points it judges. */
+    private boolean everyPoint;
 
     ZoneCanvas() {
         setName("zoneCanvas");
@@ -76,11 +78,40 @@ final class ZoneCanvas extends JComponent {
                 (int) Math.round(s.getY()), 0, false));
     }
 
+    /** Frames the zone and the points it judges; undoes zoom and pan. */
     void fit() {
+        frame(false);
+    }
+
+    /** Frames every measured point, those along the surfaces too; undoes zoom and pan. */
+    void fitEveryPoint() {
+        frame(true);
+    }
+
+    private void frame(boolean every) {
+        everyPoint = every;
         zoom = 1;
         panX = 0;
         panY = 0;
         repaint();
+    }
+
+    /** Width and height of the part-coordinate box the view frames at zoom 1, for tests. */
+    double[] framedSize() {
+        double[] box = box(everyPoint ? scene.extent() : scene.zoneExtent());
+        return new double[] {box[2] - box[0], box[3] - box[1]};
+    }
+
+    /** minX, minY, maxX, maxY of {@code pts} and the origin. */
+    private static double[] box(List<Point2> pts) {
+        double minX = 0, minY = 0, maxX = 0, maxY = 0;
+        for (Point2 p : pts) {
+            minX = Math.min(minX, p.x());
+            minY = Math.min(minY, p.y());
+            maxX = Math.max(maxX, p.x());
+            maxY = Math.max(maxY, p.y());
+        }
+        return new double[] {minX, minY, maxX, maxY};
     }
 
     void zoomBy(double factor) {
@@ -113,14 +144,8 @@ final class ZoneCanvas extends JComponent {
 
     /** Part coordinates to screen: fit the drawing, then zoom and pan; y up. */
     private AffineTransform transform() {
-        List<Point2> pts = scene.extent();
-        double minX = 0, minY = 0, maxX = 0, maxY = 0;
-        for (Point2 p : pts) {
-            minX = Math.min(minX, p.x());
-            minY = Math.min(minY, p.y());
-            maxX = Math.max(maxX, p.x());
-            maxY = Math.max(maxY, p.y());
-        }
+        double[] box = box(everyPoint ? scene.extent() : scene.zoneExtent());
+        double minX = box[0], minY = box[1], maxX = box[2], maxY = box[3];
         double w = Math.max(1e-9, maxX - minX);
         double h = Math.max(1e-9, maxY - minY);
         double margin = 40;

@@ -48,8 +48,13 @@ public final class ZoneViewPanel extends JPanel {
         magnification.setLabelTable(labels);
         magnification.setPaintLabels(true);
         JButton fit = new JButton("Fit");
-        fit.setToolTipText("Undo zoom and pan (wheel zooms, drag pans)");
+        fit.setName("zoneFit");
+        fit.setToolTipText("Frame the zone and the points it judges; undo zoom and pan (wheel zooms, drag pans)");
         fit.addActionListener(e -> canvas.fit());
+        JButton all = new JButton("All points");
+        all.setName("zoneAllPoints");
+        all.setToolTipText("Frame every measured point, those along the surfaces too");
+        all.addActionListener(e -> canvas.fitEveryPoint());
         JButton in = new JButton("+");
         in.setToolTipText("Zoom in");
         in.addActionListener(e -> canvas.zoomBy(1.5));
@@ -65,9 +70,10 @@ public final class ZoneViewPanel extends JPanel {
         bar.add(new JLabel("Deviation magnification"));
         bar.add(magnification, "wmin 5sp, w 14sp");
         bar.add(magnificationText, "w 3sp!");
-        bar.add(in, "split 3");
+        bar.add(in, "split 4");
         bar.add(out);
         bar.add(fit);
+        bar.add(all);
         add(bar, "wmin 10, hmin pref");
         caption.setName("zoneCaption");
         width.setName("zoneWidth");
@@ -146,4 +152,7 @@ public final class ZoneViewPanel extends JPanel {
 
     /** What hovering over plotted point {@code i} shows (tests). */
     public String pointTooltip(int i) { return canvas.tooltipOfPoint(i); }
+
+    /** Width and height, in part units, of what the view frames at zoom 1 (tests). */
+    public double[] framedSize() { return canvas.framedSize(); }
 }

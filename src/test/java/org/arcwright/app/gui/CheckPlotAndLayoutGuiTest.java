@@ -18,6 +18,7 @@ import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.swing.AbstractButton;
 import javax.swing.JComponent;
+import javax.swing.JLabel;
 import javax.swing.JMenuItem;
 import javax.swing.JSplitPane;
 import javax.swing.JTable;
@@ -27,6 +28,7 @@ import javax.swing.UIManager;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.app.widgets.NoticeStrip;
+import org.arcwright.app.zoneview.ZoneViewPanel;
 import org.assertj.swing.fixture.FrameFixture;
 import org.jfree.svg.SVGGraphics2D;
 import org.junit.jupiter.api.BeforeAll;
@@ -303,6 +305,38 @@ class CheckPlotAndLayoutGuiTest {
         resize(1600, 1000);
         GuiSupport.screenshot(window.frame(), "part-table-1600x1000-light");
         resize(1024, 700);
+    }
+
+    @Test
+    @Order(7)
+    void theZoneViewFramesTheZoneAndItsJudgedPointsAndAllPointsOnRequest() {
+        resize(1024, 700);
+        selectRow(0);
+        GuiSupport.onEdt(() -> window.showTab(CHECK));
+        checkAndWait(HOUSING);
+        // the status line says what was judged against what, and that the feature's kept verdict stands
+        JLabel message = (JLabel) fixture.robot().finder().findByName(window.frame(), "statusMessage", true);
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> message.getText().startsWith("Checked housing-fillet-profile.json")), 10);
+        assertThat(GuiSupport.onEdt(message::getText))
+                .isEqualTo("Checked housing-fillet-profile.json for F1 against CR 1.8-2.2 mm: does not conform (not kept)");
+        GuiSupport.onEdt(() -> window.showTab(1));
+        ZoneViewPanel zone = (ZoneViewPanel) fixture.robot().finder().findByName(window.frame(), "zoneView", true);
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> zone.plottedPoints() > 0), 10);
+        AbstractButton fit = (AbstractButton) fixture.robot().finder().findByName(window.frame(), "zoneFit", true);
+        AbstractButton all = (AbstractButton) fixture.robot().finder().findByName(window.frame(), "zoneAllPoints", true);
+        SwingUtilities.invokeLater(fit::doClick);
+        GuiSupport.settle(300);
+        double[] zoneOnly = GuiSupport.onEdt(zone::framedSize);
+        GuiSupport.screenshot(window.frame(), "zone-fit-1024x700-light");
+        SwingUtilities.invokeLater(all::doClick);
+        GuiSupport.settle(300);
+        double[] every = GuiSupport.onEdt(zone::framedSize);
+        GuiSupport.screenshot(window.frame(), "zone-all-points-1024x700-light");
+        // the scan runs far along the legs: framing it all had left the zone a corner of the view
+        assertThat(Math.max(every[0], every[1])).isGreaterThan(2 * Math.max(zoneOnly[0], zoneOnly[1]));
+        SwingUtilities.invokeLater(fit::doClick);
+        GuiSupport.settle(300);
+        assertThat(GuiSupport.onEdt(zone::framedSize)).containsExactly(zoneOnly);
     }
 
     @Test
