@@ -57,6 +57,7 @@ final class NoteIndex implements Closeable {
     }
 
     NoteIndex(PackStack stack, Path indexFolder, TradeAnalyzer indexAnalyzer, FacetsConfig facetsConfig) {
+        LuceneNotices.quiet();
         this.stack = Objects.requireNonNull(stack, "stack");
         this.indexFolder = Objects.requireNonNull(indexFolder, "indexFolder");
         this.indexAnalyzer = Objects.requireNonNull(indexAnalyzer, "indexAnalyzer");

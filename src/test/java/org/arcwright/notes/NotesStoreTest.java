@@ -6,6 +6,8 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.logging.Level;
+import java.util.logging.Logger;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackLayer;
 import org.arcwright.pack.PackStack;
@@ -42,6 +44,21 @@ class NotesStoreTest {
             assertThat(top.pack()).isEqualTo("Base");
             assertThat(top.snippet()).contains("**");
             assertThat(r.facets().get(NoteFacet.FUNCTION)).extracting(FacetCount::value).contains("sealing");
+        }
+    }
+
+    @Test
+    void lucenesNoticesAboutTheJdkAreQuietedOnceAStoreIsOpenedAndItsErrorsStillShow() {
+        // on JDK 21 and later Lucene wrote two notices (its file access; the vector API) to standard
+        // error at every notes command and window start
+        try (NotesStore store = open(TestPacks.stack(base()))) {
+            assertThat(store.search("groove", NoteFilters.none(), 1).hits()).isNotEmpty();
+        }
+        for (String name : List.of("org.apache.lucene.store.MemorySegmentIndexInputProvider",
+                "org.apache.lucene.internal.vectorization.VectorizationProvider")) {
+            Logger logger = Logger.getLogger(name);
+            assertThat(logger.isLoggable(Level.WARNING)).as(name).isFalse();
+            assertThat(logger.isLoggable(Level.SEVERE)).as(name).isTrue();
         }
     }
 
