@@ -37,7 +37,8 @@ public final class RuleForm {
     /** The fields of the form, in the order shown, with the JSON field each one edits. */
     public enum Field {
         ID("id", "Id"), SUMMARY("summary", "Summary"), WEIGHT("weight", "Weight"), WHEN("when", "When"),
-        RECOMMEND("recommend", "Recommends"), BECAUSE("because", "Because"), CAUTIONS("cautions", "Cautions"),
+        RECOMMEND("recommend", "Recommends"), NEEDS("needs", "Adds needs"), PREFER("prefer", "Prefers"),
+        BECAUSE("because", "Because"), CAUTIONS("cautions", "Cautions"),
         REFERENCES("references", "References"), NOTE_TAGS("noteTags", "Note tags"), EXAMPLES("examples", "Examples");
 
         private final String key;
@@ -57,6 +58,12 @@ public final class RuleForm {
         boolean isLines() { return this == BECAUSE || this == CAUTIONS || this == REFERENCES; }
 
         boolean isPairs() { return this == WHEN || this == RECOMMEND; }
+
+        /** Written as a comma-separated list of words. */
+        boolean isWords() { return this == NOTE_TAGS || this == PREFER; }
+
+        /** Written as JSON: a list of objects with fields of their own. */
+        boolean isJson() { return this == NEEDS || this == EXAMPLES; }
     }
 
     /** The form text of every field of {@code json}; empty when the text is not a JSON object. */
@@ -120,9 +127,9 @@ public final class RuleForm {
 
     private static String text(Field f, JsonNode v) {
         if (v == null || v.isNull()) return "";
-        if (f.isLines() || f == Field.NOTE_TAGS) {
+        if (f.isLines() || f.isWords()) {
             StringBuilder b = new StringBuilder();
-            String sep = f == Field.NOTE_TAGS ? ", " : "\n";
+            String sep = f.isWords() ? ", " : "\n";
             for (JsonNode item : v) {
                 if (b.length() > 0) b.append(sep);
                 b.append(item.isTextual() ? item.asText() : item.toString());
@@ -138,7 +145,7 @@ public final class RuleForm {
             }
             return b.toString();
         }
-        if (f == Field.EXAMPLES) {
+        if (f.isJson()) {
             try {
                 return MAPPER.writerWithDefaultPrettyPrinter().writeValueAsString(v);
             } catch (JsonProcessingException e) {
@@ -172,6 +179,7 @@ public final class RuleForm {
             case SUMMARY:
                 return nodes.textNode(text.strip());
             case WEIGHT:
+                if (text.isBlank() && before == null) return null;
                 try {
                     return nodes.numberNode(Integer.parseInt(text.strip()));
                 } catch (NumberFormatException e) {
@@ -179,13 +187,14 @@ public final class RuleForm {
                 }
             case WHEN:
             case RECOMMEND:
-                return pairs(f, text);
+                return text.isBlank() && before == null ? null : pairs(f, text);
+            case NEEDS:
             case EXAMPLES: {
                 if (text.isBlank()) return before == null ? null : nodes.arrayNode();
                 try {
                     JsonNode n = MAPPER.readTree(text);
                     if (!(n instanceof ArrayNode)) {
-                        throw InputProblem.ofField(f.key(), "a JSON list [ ... ] of examples");
+                        throw InputProblem.ofField(f.key(), "a JSON list [ ... ] of " + (f == Field.NEEDS ? "needs" : "examples"));
                     }
                     return n;
                 } catch (JsonProcessingException e) {
@@ -195,7 +204,7 @@ public final class RuleForm {
             }
             default: {
                 ArrayNode list = nodes.arrayNode();
-                List<String> items = f == Field.NOTE_TAGS ? List.of(text.split(",")) : text.lines().toList();
+                List<String> items = f.isWords() ? List.of(text.split(",")) : text.lines().toList();
                 for (String item : items) if (!item.isBlank()) list.add(item.strip());
                 return list.isEmpty() && before == null && f != Field.BECAUSE ? null : list;
             }

@@ -48,6 +48,13 @@ final class RuleFormView extends JScrollPane {
         line(form, RuleForm.Field.RECOMMEND, area(3), "callout, then size, datums, extent…",
                 "callout: general, radius, controlled-radius, profile or composite-profile; then size, datums, extent, tiers… "
                 + "one a line");
+        line(form, RuleForm.Field.NEEDS, area(4), "needs every card must meet, JSON",
+                "needs the rule adds to every case it fires on, as JSON: [{\"id\": \"radius-floor\", \"min\": 0.8, "
+                + "\"units\": \"mm\", \"why\": \"…\", \"source\": \"…\"}]; id is radius-floor, radius-ceiling, form or "
+                + "location; each card then says whether it meets them");
+        line(form, RuleForm.Field.PREFER, new JTextField(), null, "callouts the company prefers, first first, separated by "
+                + "commas (general, radius, controlled-radius, profile, composite-profile); orders only cards that meet the "
+                + "same needs");
         line(form, RuleForm.Field.BECAUSE, area(3), "one sentence a line", "the reasoning, one sentence a line, in the words "
                 + "you would use with a colleague");
         line(form, RuleForm.Field.CAUTIONS, area(2), null, "what to watch, one a line");
@@ -79,7 +86,8 @@ final class RuleFormView extends JScrollPane {
         label.setLabelFor(c);
         c.setName("ruleForm." + f.key());
         c.setToolTipText(help);
-        if (f == RuleForm.Field.EXAMPLES || f == RuleForm.Field.WHEN || f == RuleForm.Field.RECOMMEND) {
+        if (f == RuleForm.Field.EXAMPLES || f == RuleForm.Field.NEEDS || f == RuleForm.Field.WHEN
+                || f == RuleForm.Field.RECOMMEND) {
             c.setFont(new Font(Font.MONOSPACED, Font.PLAIN, c.getFont().getSize()));
         }
         c.getDocument().addDocumentListener(new DocumentListener() {

@@ -129,6 +129,13 @@ class PracticeEditorGuiTest {
         setField(RuleForm.Field.WHEN, "function: cosmetic\nkind: round\nprocess: cast");
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> panel().editor().getText()).contains("\"process\" : \"cast\"")
                 && verdict().startsWith("The rule reads: Cast cover rounds"), 10);
+        // the rule's needs and preferences have fields of their own on the form
+        setField(RuleForm.Field.NEEDS, "[{\"id\": \"radius-floor\", \"min\": 1, \"units\": \"mm\", "
+                + "\"why\": \"the foundry's smallest reliable round\", \"source\": \"Kestrel Works foundry note (invented)\"}]");
+        setField(RuleForm.Field.PREFER, "general, radius");
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> panel().editor().getText()).contains("\"radius-floor\"")
+                && GuiSupport.onEdt(() -> panel().editor().getText()).contains("\"prefer\" : [ \"general\", \"radius\" ]")
+                && verdict().startsWith("The rule reads: Cast cover rounds"), 10);
         shots("practice-rule-form");
         click("ruleSave");
         GuiSupport.waitFor(() -> ruleIds().contains("my.rule-1") && "my.rule-1".equals(GuiSupport.onEdt(() -> panel().shownRuleId())), 30);

@@ -4,6 +4,7 @@ import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
 import com.fasterxml.jackson.databind.JsonNode;
+import java.nio.file.Path;
 import java.util.Map;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
@@ -33,6 +34,42 @@ class RuleFormTest {
             }
         }
         assertThat(rules).isGreaterThan(10);
+    }
+
+    @Test
+    void theExampleTeamPacksRulesWithNeedsAndPreferencesRoundTripThroughTheForm() {
+        // the Practice editor's form had no fields for a rule's needs and preferences: they could be
+        // edited only on the JSON tab
+        JsonNode rules = json.readTree(Path.of("shared/rules/tarnbeck-needs.json")).path("rules");
+        assertThat(rules).isNotEmpty();
+        for (JsonNode r : rules) {
+            String text = r.toPrettyString();
+            Map<RuleForm.Field, String> form = RuleForm.read(text).orElseThrow();
+            String rewritten = text;
+            for (RuleForm.Field field : RuleForm.Field.values()) rewritten = RuleForm.write(rewritten, field, form.get(field));
+            assertThat(json.parse(rewritten, "x", JsonNode.class)).as(r.path("id").asText()).isEqualTo(r);
+            assertThat(new RuleDraft(json, "x", rewritten).problem()).as(r.path("id").asText()).isEmpty();
+        }
+        Map<RuleForm.Field, String> floor = RuleForm.read(rules.get(0).toPrettyString()).orElseThrow();
+        assertThat(floor.get(RuleForm.Field.NEEDS)).contains("\"id\" : \"radius-floor\"", "\"min\" : 0.8");
+        assertThat(floor.get(RuleForm.Field.RECOMMEND)).isEmpty();
+        Map<RuleForm.Field, String> prefer = RuleForm.read(rules.get(1).toPrettyString()).orElseThrow();
+        assertThat(prefer.get(RuleForm.Field.PREFER)).isEqualTo("profile, composite-profile");
+    }
+
+    @Test
+    void needsAndPreferencesWrittenOnTheFormReadAsARule() {
+        String withNeeds = RuleForm.write(RULE, RuleForm.Field.NEEDS, "[{\"id\": \"radius-ceiling\", \"max\": 3, "
+                + "\"units\": \"mm\", \"why\": \"the seal's groove\", \"source\": \"common practice\"}]");
+        String both = RuleForm.write(withNeeds, RuleForm.Field.PREFER, "profile, radius");
+        JsonNode tree = json.parse(both, "x", JsonNode.class);
+        assertThat(tree.path("needs").get(0).path("max").asDouble()).isEqualTo(3.0);
+        assertThat(tree.path("prefer").get(1).asText()).isEqualTo("radius");
+        assertThat(new RuleDraft(json, "x", both).problem()).isEmpty();
+        RuleDraft badKind = new RuleDraft(json, "x", RuleForm.write(RULE, RuleForm.Field.PREFER, "a round one"));
+        assertThat(badKind.problem()).isPresent();
+        assertThatThrownBy(() -> RuleForm.write(RULE, RuleForm.Field.NEEDS, "{\"id\": \"form\"}"))
+                .isInstanceOfSatisfying(InputProblem.class, p -> assertThat(p.field()).isEqualTo("needs"));
     }
 
     @Test
