@@ -5,6 +5,7 @@ import java.io.OutputStreamWriter;
 import java.io.PrintWriter;
 import java.io.UncheckedIOException;
 import java.nio.charset.StandardCharsets;
+import java.util.List;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import picocli.CommandLine;
@@ -40,9 +41,31 @@ public final class Cli {
         }
     }
 
-    /** A configured command line writing to the given streams. */
+    /** A configured command line with every command, writing to the given streams. */
     public static CommandLine commandLine(PrintWriter out, PrintWriter err) {
+        return configured(out, err, ArcwrightCommand.SUBCOMMANDS);
+    }
+
+    /**
+     * A configured command line for {@code args}: with only the command they name when their first
+     * word is a command's name, so that picocli reads the options of that command alone; with every
+     * command otherwise (top-level help, {@code help}, an option first, a misspelt command that needs
+     * the others to suggest from). Parsing, help and errors of the named command are as with every
+     * command registered.
+     */
+    public static CommandLine commandLine(PrintWriter out, PrintWriter err, String[] args) {
+        if (args.length > 0 && !args[0].equals("help")) {
+            for (Class<?> c : ArcwrightCommand.SUBCOMMANDS) {
+                CommandLine.Command command = c.getAnnotation(CommandLine.Command.class);
+                if (command != null && command.name().equals(args[0])) return configured(out, err, List.of(c));
+            }
+        }
+        return commandLine(out, err);
+    }
+
+    private static CommandLine configured(PrintWriter out, PrintWriter err, List<Class<?>> commands) {
         CommandLine cl = new CommandLine(new ArcwrightCommand());
+        for (Class<?> c : commands) cl.addSubcommand(c);
         cl.setOut(out);
         cl.setErr(err);
         cl.setCaseInsensitiveEnumValuesAllowed(true);
@@ -113,7 +136,7 @@ public final class Cli {
         PrintWriter err = new PrintWriter(new OutputStreamWriter(System.err, StandardCharsets.UTF_8), true);
         int code;
         try {
-            code = commandLine(out, err).execute(args);
+            code = commandLine(out, err, args).execute(args);
         } catch (OutOfMemoryError e) {
             err.println("arcwright: out of memory; no result was produced. Give Java more memory (java -Xmx...), or fewer "
                     + "points (the README states what a heap holds).");

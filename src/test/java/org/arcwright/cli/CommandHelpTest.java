@@ -41,6 +41,33 @@ class CommandHelpTest {
         assertThat(broken).as("commands whose help does not render").isEmpty();
     }
 
+    @Test
+    void aCommandLineBuiltForOneCommandHelpsAndRefusesAsTheWholeOneDoes() {
+        StringWriter sink = new StringWriter();
+        CommandLine whole = Cli.commandLine(new PrintWriter(sink, true), new PrintWriter(sink, true));
+        for (String name : whole.getSubcommands().keySet()) {
+            if (name.equals("help")) continue;
+            String[] args = {name, "--help"};
+            CommandLine lean = Cli.commandLine(new PrintWriter(sink, true), new PrintWriter(sink, true), args);
+            assertThat(lean.getSubcommands().keySet()).as(name).containsExactly(name);
+            assertThat(lean.getSubcommands().get(name).getUsageMessage(CommandLine.Help.Ansi.OFF)).as(name)
+                    .isEqualTo(whole.getSubcommands().get(name).getUsageMessage(CommandLine.Help.Ansi.OFF));
+        }
+        // the same refusal, word for word, for an option the command does not have
+        assertThat(CliRun.of("simulate", "--partz", "3").err())
+                .isEqualTo(wholeRun("simulate", "--partz", "3")).contains("arcwright simulate: Unknown option: '--partz'");
+        // a misspelt command, top-level help and `help NAME` get every command
+        assertThat(CliRun.of("simulte", "x.json").err()).contains("Did you mean", "simulate");
+        assertThat(CliRun.of("--help").out()).contains("simulate", "inspect", "advise");
+        assertThat(CliRun.of("help", "simulate").out()).startsWith("Usage: arcwright simulate");
+    }
+
+    private static String wholeRun(String... args) {
+        StringWriter err = new StringWriter();
+        Cli.commandLine(new PrintWriter(new StringWriter(), true), new PrintWriter(err, true)).execute(args);
+        return err.toString();
+    }
+
     private static void collect(CommandLine c, List<CommandLine> into) {
         into.add(c);
         for (CommandLine sub : c.getSubcommands().values()) {
