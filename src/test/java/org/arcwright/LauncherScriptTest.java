@@ -304,6 +304,31 @@ class LauncherScriptTest {
         assertThat(calls()).singleElement().asString().doesNotContain("SharedArchiveFile", "DumpLoadedClassList");
     }
 
+    @Test
+    void notesCommandsGetAStaticArchiveTooNeverOneWrittenAtExit() throws Exception {
+        // JDK 17 crashed (exit 134, an hs_err file in the working folder) writing an archive at the exit
+        // of every notes command: the launcher had asked for one with -XX:ArchiveClassesAtExit
+        Path archive = jar.getParent().resolve("arcwright-notes.jsa");
+        assertThat(launch("notes", "search", "fillet")).isZero();
+        assertThat(calls().get(0)).contains("-XX:DumpLoadedClassList=").doesNotContain("ArchiveClassesAtExit")
+                .endsWith("notes search fillet");
+        waitUntil(() -> Files.exists(archive) && !Files.exists(jar.getParent().resolve("arcwright-notes.jsa.lock")));
+        Files.write(log, new byte[0]);
+        assertThat(launch("notes", "search", "fillet")).isZero();
+        assertThat(calls()).singleElement().asString().contains("-XX:SharedArchiveFile=" + archive);
+    }
+
+    @Test
+    void anInstallationTheUserCannotWriteToRecordsNoArchive() throws Exception {
+        // the tests may run as root, who can write anywhere: the folder's check is stood in for
+        String plan = sourced("here=\"$1\"; jar=\"$2\"; target_writable() { return 1; }; "
+                + "command_archive_plan simulate; echo \"$cds_plan\"", app.toString(), jar.toString()).strip();
+        assertThat(plan).isEqualTo("plain");
+        String writable = sourced("here=\"$1\"; jar=\"$2\"; command_archive_plan simulate; echo \"$cds_plan\"",
+                app.toString(), jar.toString()).strip();
+        assertThat(writable).isEqualTo("record");
+    }
+
     // ---- helpers ----
 
     private String key(Path jdkHome) throws Exception {
