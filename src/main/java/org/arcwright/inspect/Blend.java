@@ -31,6 +31,25 @@ public record Blend(PointSet points, double[] stations, int[] indices, Circle ci
      * @throws InputProblem when fewer than three points lie on the blend
      */
     public static Blend of(Corner corner, double nominalRadius, PointSet all, double[] stations, double reach) {
+        return of(corner, nominalRadius, all, (idx, count) -> {
+            double[] st = new double[count];
+            for (int k = 0; k < count; k++) st[k] = stations[idx[k]];
+            return st;
+        }, reach);
+    }
+
+    /** The stations of some of a section's points, asked for once the blend's points are known. */
+    @FunctionalInterface
+    public interface Stations {
+        /** The station of each of the points {@code indices[0..count-1]}, in that order. */
+        double[] of(int[] indices, int count);
+    }
+
+    /**
+     * As {@link #of(Corner, double, PointSet, double[], double)}, with the stations worked out for the
+     * blend's points only: a verdict needs no station of a point on the legs.
+     */
+    public static Blend of(Corner corner, double nominalRadius, PointSet all, Stations stations, double reach) {
         int n = all.size();
         double[] xs = all.xs(), ys = all.ys();
         Point2 v = corner.vertex(), a = corner.legA(), b = corner.legB();
@@ -56,8 +75,7 @@ public record Blend(PointSet points, double[] stations, int[] indices, Circle ci
         }
         if (count < 3) throw InputProblem.ofField("points", "only " + count + " point(s) lie on the blend; need at least 3");
         int[] idx = indexes(in, count);
-        double[] st = new double[count];
-        for (int k = 0; k < count; k++) st[k] = stations[idx[k]];
+        double[] st = stations.of(idx, count);
         int[] order = Sorting.order(st, count);
         int[] sortedIdx = new int[count];
         double[] sortedSt = new double[count];

@@ -174,7 +174,8 @@ public final class Inspector {
         j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), unit) : radiusExcess(pts, zone, j.env, unit);
         if (explain) radiusNotes(rl, j.env, res, unit, j.notes);
         if (rl.kind() != RadiusKind.CR) return;
-        j.blend = blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max());
+        j.blend = explain ? blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max())
+                : blendOf(corner, cb, pts, (idx, count) -> section.stationsOf(corner, cb.radius(), idx, count), rl.max());
         // a failed zone fails the CR whatever its windows say: a verdict alone need not read them
         // (the blend is still separated: a section without one is refused, as the full inspection refuses it)
         if (detail == Detail.VERDICT && j.verdict == Verdict.FAIL) return;
@@ -286,6 +287,18 @@ public final class Inspector {
         return st;
     }
 
+    /** As {@link #stationsAlong(Corner, double, PointSet)} for the points {@code indices[0..count-1]} alone, into {@code into}. */
+    static void stationsAlong(Corner corner, double radius, PointSet pts, int[] indices, int count, double[] into) {
+        Contour c = cornerContour(corner, radius, pts);
+        double offset = c.segments().get(0).length();
+        double[] out = new double[4], work = new double[5];
+        for (int k = 0; k < count; k++) {
+            int i = indices[k];
+            c.measure(pts.xs()[i], pts.ys()[i], out, work);
+            into[k] = out[3] - offset;
+        }
+    }
+
     private static Worst radiusWorst(PointSet pts, RadiusZone zone, RadiusEnvelope env, double[] stations, String unit) {
         int i = env.worst();
         if (i < 0) return null;
@@ -368,6 +381,11 @@ public final class Inspector {
     }
 
     private static Blend blendOf(Corner corner, Nominal.CornerBlend cb, PointSet pts, double[] stations, double limit) {
+        double reach = corner.tangentDistance(Math.max(limit, 3 * cb.radius()));
+        return Blend.of(corner, cb.radius(), pts, stations, reach);
+    }
+
+    private static Blend blendOf(Corner corner, Nominal.CornerBlend cb, PointSet pts, Blend.Stations stations, double limit) {
         double reach = corner.tangentDistance(Math.max(limit, 3 * cb.radius()));
         return Blend.of(corner, cb.radius(), pts, stations, reach);
     }

@@ -70,6 +70,23 @@ public final class MeasuredSection {
         return s;
     }
 
+    /**
+     * The stations of the points {@code indices[0..count-1]} along the contour of {@code radius} on
+     * {@code corner}: read from the whole array when it was worked out already, else measured for
+     * these points alone, on the same contour, so each is the very value {@link #stations} gives.
+     */
+    double[] stationsOf(Corner corner, double radius, int[] indices, int count) {
+        double[] st = new double[count];
+        for (int k = 0; k < stationCount; k++) {
+            if (stationRadius[k] == radius && stationCorner[k].equals(corner)) {
+                for (int i = 0; i < count; i++) st[i] = stations[k][indices[i]];
+                return st;
+            }
+        }
+        Inspector.stationsAlong(corner, radius, points, indices, count, st);
+        return st;
+    }
+
     /** Each point's station along the contour of {@code radius} on {@code corner} (see {@link Inspector}). */
     double[] stations(Corner corner, double radius) {
         for (int k = 0; k < stationCount; k++) {
