@@ -7,6 +7,7 @@ import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.CrescentZone;
 import org.arcwright.tolerance.RadiusKind;
@@ -512,9 +513,15 @@ public final class Inspector {
         return new BigDecimal(v).round(new MathContext(4)).doubleValue();
     }
 
+    /**
+     * A computed length or count in the report's words, to 5 significant digits: one more than
+     * {@link DecimalText#significant}'s usual 4, since a deviation is read against a limit a few
+     * micrometres away. Rounded as the value prints ({@link DecimalText}), so a figure the user typed
+     * (a window, a tolerance) reads back as typed. NaN and infinity are states of the fit, said in words.
+     */
     static String fmt(double v) {
         if (Double.isNaN(v)) return "none";
         if (Double.isInfinite(v)) return "infinite (flat)";
-        return new BigDecimal(v).round(new MathContext(5)).stripTrailingZeros().toPlainString();
+        return DecimalText.significant(v, 5);
     }
 }

@@ -29,6 +29,17 @@ class InspectorTest {
     }
 
     @Test
+    void reportFiguresRoundTheDecimalAsPrintedNotItsBinaryValue() {
+        // half to even on the printed decimal: ISO 80000-1:2009 Annex B, rule A (from memory); the
+        // binary values are 0.00123434999... and 1.00005000...01, which rounded the other way before
+        assertThat(Inspector.fmt(0.00123435)).isEqualTo("0.0012344");
+        assertThat(Inspector.fmt(1.00005)).isEqualTo("1");
+        assertThat(Inspector.fmt(0.0086175)).isEqualTo("0.0086175");
+        assertThat(Inspector.fmt(Double.NaN)).isEqualTo("none");
+        assertThat(Inspector.fmt(Double.POSITIVE_INFINITY)).isEqualTo("infinite (flat)");
+    }
+
+    @Test
     void flatInsideTheZonePassesRadiusButFailsControlledRadius() {
         // ASME Y14.5-2018 controlled radius (from memory): no flats or reversals; the R zone alone
         // accepts any contour between the limit arcs.
