@@ -64,8 +64,8 @@ final class InspectCommand implements Callable<Integer> {
             if (!name.endsWith(".png") && !name.endsWith(".svg")) throw InputProblem.ofField("--plot", "give a .png or .svg file name");
             OutputFiles.requireWritable(plot, "--plot", file);
         }
-        if (window != null && !Double.isFinite(window)) throw InputProblem.ofField("--window", "must be a finite length, got " + window);
-        if (uncertainty != null && !Double.isFinite(uncertainty)) throw InputProblem.ofField("--uncertainty", "must be a finite length, got " + uncertainty);
+        if (window != null && !Double.isFinite(window)) throw InputProblem.ofField("--window", "must be a finite length, got " + DecimalText.exact(window));
+        if (uncertainty != null && !Double.isFinite(uncertainty)) throw InputProblem.ofField("--uncertainty", "must be a finite length, got " + DecimalText.exact(uncertainty));
         InspectionRequest req = new InspectionFiles(new JsonFiles()).read(file).withCompare(compare);
         if (plot != null && !"points".equals(req.points().source())) {
             // the points came from a pointsFile: the plot must not replace it either

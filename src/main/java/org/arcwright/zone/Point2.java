@@ -1,12 +1,13 @@
 package org.arcwright.zone;
 
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /** A point or vector of the section plane, in drawing units. Immutable. */
 public record Point2(double x, double y) {
     public Point2 {
         if (!Double.isFinite(x) || !Double.isFinite(y)) {
-            throw InputProblem.ofField(null, "coordinates must be finite numbers, got [" + x + ", " + y + "]");
+            throw InputProblem.ofField(null, "coordinates must be finite numbers, got [" + DecimalText.exact(x) + ", " + DecimalText.exact(y) + "]");
         }
     }
 
