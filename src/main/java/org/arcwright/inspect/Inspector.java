@@ -11,6 +11,7 @@ import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.CrescentZone;
 import org.arcwright.tolerance.RadiusKind;
+import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.Point2;
@@ -511,6 +512,25 @@ public final class Inspector {
     private static double round4(double v) {
         if (!Double.isFinite(v) || v == 0) return v;
         return new BigDecimal(v).round(new MathContext(4)).doubleValue();
+    }
+
+    /** Decimal places of a coordinate in millimetres: 0.1 µm. */
+    public static final int MM_COORDINATE_PLACES = 4;
+    /** Decimal places of a coordinate in inches: 0.00001 in (0.25 µm), the same reach as in millimetres. */
+    public static final int INCH_COORDINATE_PLACES = 5;
+
+    /**
+     * A coordinate of a point, a centre or a surface's position in a report: fixed places by unit, as a
+     * CMM report lists its points (common practice), so coordinates side by side line up and read at one
+     * resolution: {@code [4.1310, 0.0002]}, not {@code [4.131, 0.0002465]}. Significant digits would make
+     * a coordinate near the origin look a thousand times more precise than one across the part. A tenth
+     * of a micrometre (mm) or a hundred-thousandth of an inch lies below any probe's uncertainty, so the
+     * rounding hides nothing a verdict rests on; deviations and radii keep their significant digits.
+     * NaN (no fit) reads {@code none}.
+     */
+    public static String coordinate(double v, Units units) {
+        if (Double.isNaN(v)) return "none";
+        return DecimalText.fixed(v, units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES);
     }
 
     /**

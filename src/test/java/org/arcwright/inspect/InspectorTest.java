@@ -40,6 +40,16 @@ class InspectorTest {
     }
 
     @Test
+    void coordinatesHaveFixedPlacesByUnit() {
+        // fixed places per unit, as a CMM report lists points (common practice); ties half to even
+        assertThat(Inspector.coordinate(0.0002465, Units.MM)).isEqualTo("0.0002");
+        assertThat(Inspector.coordinate(4.131, Units.MM)).isEqualTo("4.1310");
+        assertThat(Inspector.coordinate(-0.00003862, Units.MM)).isEqualTo("0.0000");
+        assertThat(Inspector.coordinate(0.0002465, Units.INCH)).isEqualTo("0.00025");
+        assertThat(Inspector.coordinate(Double.NaN, Units.INCH)).isEqualTo("none");
+    }
+
+    @Test
     void flatInsideTheZonePassesRadiusButFailsControlledRadius() {
         // ASME Y14.5-2018 controlled radius (from memory): no flats or reversals; the R zone alone
         // accepts any contour between the limit arcs.
