@@ -138,11 +138,11 @@ public enum DrawingStyle {
 
     /**
      * A dimensionless figure (a stress concentration factor, a ratio) with exactly {@code places}
-     * decimals, rounded half-even: the same in both styles.
+     * decimals, rounded half-even ({@link DecimalText#fixed}): the same in both styles.
      */
     public static String formatFigure(double value, int places) {
         if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + DecimalText.exact(value));
-        return BigDecimal.valueOf(value).setScale(places, RoundingMode.HALF_EVEN).toPlainString();
+        return DecimalText.fixed(value, places);
     }
 
     /** The text of a radius with limits as this style draws it, e.g. {@code R1.8-2.2} or {@code CR 1.8-2.2}. */
