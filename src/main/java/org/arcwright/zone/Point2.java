@@ -37,5 +37,5 @@ public record Point2(double x, double y) {
     public double distance(Point2 o) { return Math.hypot(x - o.x, y - o.y); }
 
     @Override
-    public String toString() { return "[" + x + ", " + y + "]"; }
+    public String toString() { return "[" + DecimalText.exact(x) + ", " + DecimalText.exact(y) + "]"; }
 }
