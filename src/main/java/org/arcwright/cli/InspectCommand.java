@@ -131,11 +131,13 @@ final class InspectCommand implements Callable<Integer> {
                     break;
                 }
                 out.printf("  undecided      window %d (s = %s to %s %s): local radius %s ± %s %s straddles a limit%n", w.number(),
-                        n(w.fromStation()), n(w.toStation()), u, n(w.radius()), n(w.uncertainty()), u);
+                        Inspector.coordinate(w.fromStation(), q.units()), Inspector.coordinate(w.toStation(), q.units()), u, n(w.radius()),
+                        n(w.uncertainty()), u);
             }
             out.printf("  reversals      %d%s%n", c.reversals().size(), c.flats() > 0 ? "   flat windows " + c.flats() : "");
             for (ControlledRadiusOutcome.Reversal v : c.reversals()) {
-                out.printf("                 s = %s to %s, near %s%n", n(v.fromStation()), n(v.toStation()), at(v.x(), v.y(), q.units()));
+                out.printf("                 s = %s to %s, near %s%n", Inspector.coordinate(v.fromStation(), q.units()),
+                        Inspector.coordinate(v.toStation(), q.units()), at(v.x(), v.y(), q.units()));
             }
         }
         if (r.profile() != null) printProfile(out, "", r.profile(), q.units());

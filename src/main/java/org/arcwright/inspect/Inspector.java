@@ -170,7 +170,7 @@ public final class Inspector {
                         + " of a limit arc (or of a surface, beyond the resolution): neither in nor out is proven there (ISO 14253-1)");
             }
         }
-        j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), unit) : radiusExcess(pts, zone, j.env, unit);
+        j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), req.units()) : radiusExcess(pts, zone, j.env, unit);
         if (explain) radiusNotes(rl, j.env, res, unit, j.notes);
         if (rl.kind() != RadiusKind.CR) return;
         j.blend = blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max());
@@ -182,7 +182,7 @@ public final class Inspector {
         j.verdict = j.verdict.and(cr.verdict());
         if (cr.worst() != null && (j.worst == null || cr.worstExcess() > j.worst.excess())) {
             int i = cr.worstIndex();
-            j.worst = explain ? windowWorst(pts, cr, unit) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, "");
+            j.worst = explain ? windowWorst(pts, cr, req.units()) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, "");
         }
         if (explain) {
             j.notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s %s windows along the blend, stepped by a quarter window (75 %% overlap, %d windows); "
@@ -285,7 +285,8 @@ public final class Inspector {
         return st;
     }
 
-    private static Worst radiusWorst(PointSet pts, RadiusZone zone, RadiusEnvelope env, double[] stations, String unit) {
+    private static Worst radiusWorst(PointSet pts, RadiusZone zone, RadiusEnvelope env, double[] stations, Units units) {
+        String unit = units.symbol();
         int i = env.worst();
         if (i < 0) return null;
         double x = pts.xs()[i], y = pts.ys()[i];
@@ -293,7 +294,7 @@ public final class Inspector {
         double[] h = legOffsets(c, x, y);
         double ha = h[0], hb = h[1];
         String where = String.format(Locale.ROOT, "point #%d (s = %s %s along the contour from the tangent point on surface a)", i,
-                fmt(stations[i]), unit);
+                coordinate(stations[i], units), unit);
         if (Math.min(ha, hb) < -zone.resolution()) {
             double depth = -Math.min(ha, hb);
             String text = String.format(Locale.ROOT, "%s %s beyond surface %s (outside the sharp corner: no radius allows it) at %s",
@@ -334,10 +335,12 @@ public final class Inspector {
                 qx * c.inwardNormalB().x() + qy * c.inwardNormalB().y()};
     }
 
-    private static Worst windowWorst(PointSet pts, ControlledRadiusOutcome cr, String unit) {
+    private static Worst windowWorst(PointSet pts, ControlledRadiusOutcome cr, Units units) {
+        String unit = units.symbol();
         ControlledRadiusOutcome.LocalWindow w = cr.worst();
         int i = cr.worstIndex();
-        String span = String.format(Locale.ROOT, "window %d (s = %s to %s %s from the tangent point on surface a)", w.number(), fmt(w.fromStation()), fmt(w.toStation()), unit);
+        String span = String.format(Locale.ROOT, "window %d (s = %s to %s %s from the tangent point on surface a)", w.number(),
+                coordinate(w.fromStation(), units), coordinate(w.toStation(), units), unit);
         String text;
         if (w.reversed()) {
             text = span + " curves against the blend (a reversal, local radius " + fmt(Math.abs(w.radius())) + " " + unit + " the wrong way)";
@@ -520,9 +523,9 @@ public final class Inspector {
     public static final int INCH_COORDINATE_PLACES = 5;
 
     /**
-     * A coordinate of a point, a centre or a surface's position in a report: fixed places by unit, as a
-     * CMM report lists its points (common practice), so coordinates side by side line up and read at one
-     * resolution: {@code [4.1310, 0.0002]}, not {@code [4.131, 0.0002465]}. Significant digits would make
+     * A coordinate of a point, a centre or a surface's position in a report, or a station s along the
+     * contour: fixed places by unit, as a CMM report lists its points (common practice), so positions
+     * side by side line up and read at one resolution: {@code [4.1310, 0.0002]}, not {@code [4.131, 0.0002465]}. Significant digits would make
      * a coordinate near the origin look a thousand times more precise than one across the part. A tenth
      * of a micrometre (mm) or a hundred-thousandth of an inch lies below any probe's uncertainty, so the
      * rounding hides nothing a verdict rests on; deviations and radii keep their significant digits.

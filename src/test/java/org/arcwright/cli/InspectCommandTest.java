@@ -239,5 +239,16 @@ class InspectCommandTest {
         out.getBuffer().setLength(0);
         run("inspect", "examples/inspect/bracket-round-r.json");
         assertThat(out.toString()).contains("a through [4.1306, 0.0002]").contains("b through [-0.0001, 4.2078]");
+        // stations along the contour are positions too
+        out.getBuffer().setLength(0);
+        run("inspect", "examples/inspect/bracket-round-cr-flat.json");
+        Matcher s = Pattern.compile("s = (\\S+) to (\\S+) mm").matcher(out.toString());
+        int stations = 0;
+        while (s.find()) {
+            stations++;
+            assertThat(s.group(1) + " " + s.group(2)).as(s.group()).matches("\\d+\\.\\d{4} \\d+\\.\\d{4}");
+        }
+        assertThat(stations).isGreaterThanOrEqualTo(5);
+        assertThat(out.toString()).contains("window 1 (s = 0.0002 to 0.5763 mm)");
     }
 }
