@@ -9,6 +9,7 @@ import com.fasterxml.jackson.annotation.JsonTypeInfo;
 import java.util.HashSet;
 import java.util.List;
 import java.util.Set;
+import org.arcwright.io.DecimalText;
 import org.arcwright.tolerance.RadiusCallout;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
@@ -128,7 +129,7 @@ public sealed interface Callout permits Callout.General, Callout.SizeLimits, Cal
                        @JsonProperty("extent") Extent extent) {
             requirePositive("zone", zone);
             if (outward != null && !(Double.isFinite(outward) && outward >= 0 && outward <= zone)) {
-                throw new IllegalArgumentException("outward must lie between 0 and the zone " + zone + ", got " + outward);
+                throw new IllegalArgumentException("outward must lie between 0 and the zone " + DecimalText.exact(zone) + ", got " + DecimalText.exact(outward));
             }
             this.zone = zone;
             this.outward = outward;
@@ -175,8 +176,8 @@ public sealed interface Callout permits Callout.General, Callout.SizeLimits, Cal
             }
             for (int i = 1; i < tiers.size(); i++) {
                 if (!(tiers.get(i).zone() < tiers.get(i - 1).zone())) {
-                    throw new IllegalArgumentException("tier " + (i + 1) + " zone " + tiers.get(i).zone()
-                            + " must be smaller than tier " + i + " zone " + tiers.get(i - 1).zone());
+                    throw new IllegalArgumentException("tier " + (i + 1) + " zone " + DecimalText.exact(tiers.get(i).zone())
+                            + " must be smaller than tier " + i + " zone " + DecimalText.exact(tiers.get(i - 1).zone()));
                 }
                 List<DatumReference> upper = tiers.get(i - 1).datums();
                 List<DatumReference> lower = tiers.get(i).datums();
@@ -197,16 +198,16 @@ public sealed interface Callout permits Callout.General, Callout.SizeLimits, Cal
 
     static void requirePositive(String field, double v) {
         if (!(Double.isFinite(v) && v > 0)) {
-            throw new IllegalArgumentException(field + " must be a number greater than zero, got " + v);
+            throw new IllegalArgumentException(field + " must be a number greater than zero, got " + DecimalText.exact(v));
         }
     }
 
     private static void requireLimits(double min, double max, Double nominal) {
         requirePositive("min", min);
         requirePositive("max", max);
-        if (!(min < max)) throw new IllegalArgumentException("min " + min + " must be smaller than max " + max);
+        if (!(min < max)) throw new IllegalArgumentException("min " + DecimalText.exact(min) + " must be smaller than max " + DecimalText.exact(max));
         if (nominal != null && !(nominal >= min && nominal <= max)) {
-            throw new IllegalArgumentException("nominal " + nominal + " must lie between min and max");
+            throw new IllegalArgumentException("nominal " + DecimalText.exact(nominal) + " must lie between min and max");
         }
     }
 

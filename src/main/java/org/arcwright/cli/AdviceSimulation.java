@@ -5,7 +5,6 @@ import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.io.PrintWriter;
 import java.util.ArrayList;
 import java.util.List;
-import java.util.Locale;
 import java.util.Optional;
 import org.arcwright.callout.Callout;
 import org.arcwright.inspect.InspectionCallout;
@@ -231,7 +230,8 @@ final class AdviceSimulation {
         return lines;
     }
 
-    private static String cell(Share s) {
-        return String.format(Locale.ROOT, "%.2f %% [%.2f-%.2f %%]", 100 * s.share(), 100 * s.low(), 100 * s.high());
+    /** A share and its 95 % interval, in percent to 2 places. */
+    static String cell(Share s) {
+        return DecimalText.percent(s.share(), 2) + " % [" + DecimalText.percent(s.low(), 2) + "-" + DecimalText.percent(s.high(), 2) + " %]";
     }
 }

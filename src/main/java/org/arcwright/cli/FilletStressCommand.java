@@ -166,8 +166,8 @@ final class FilletStressCommand implements Callable<Integer> {
             row(out, "r min", r.atMin(), kf, places(c));
             row(out, "nominal", r.atNominal(), kf, places(c));
             row(out, "r max", r.atMax(), kf, places(c));
-            out.printf("  r min costs Kt %+.3f%s against nominal (%s %+.1f%%)%n", r.ktCostOfMinimum(),
-                    kf ? String.format(" and Kf %+.3f", r.kfCostOfMinimum()) : "", kf ? "Kf" : "Kt", r.costPercent());
+            out.printf("  r min costs Kt %s%s against nominal (%s %s%%)%n", signed(r.ktCostOfMinimum(), 3),
+                    kf ? " and Kf " + signed(r.kfCostOfMinimum(), 3) : "", kf ? "Kf" : "Kt", signed(r.costPercent(), 1));
         } else {
             row(out, "r", r.atNominal(), kf, places(c));
         }
@@ -204,4 +204,10 @@ final class FilletStressCommand implements Callable<Integer> {
     }
 
     private static String capital(String s) { return Character.toUpperCase(s.charAt(0)) + s.substring(1); }
+
+    /** A change at fixed places with its sign, as a cost reads: +0.157, -0.020 ({@link DecimalText#fixed} writes no "-0.000"). */
+    private static String signed(double v, int places) {
+        String f = DecimalText.fixed(v, places);
+        return f.startsWith("-") ? f : "+" + f;
+    }
 }

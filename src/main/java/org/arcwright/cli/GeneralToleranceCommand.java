@@ -70,7 +70,7 @@ final class GeneralToleranceCommand implements Callable<Integer> {
         double size = what.radius != null ? what.radius : what.linear != null ? what.linear : what.angleSide;
         String field = what.radius != null ? "--radius" : what.linear != null ? "--linear" : "--angle-side";
         if (!Double.isFinite(size)) throw InputProblem.ofField(field, "not a finite number");
-        if (size <= 0) throw InputProblem.ofField(field, "must be greater than zero, got " + size);
+        if (size <= 0) throw InputProblem.ofField(field, "must be greater than zero, got " + DecimalText.exact(size));
         if (blend != null && !List.of("fillet", "round").contains(blend)) {
             throw InputProblem.ofField("--blend", "use fillet or round, got '" + blend + "'");
         }

@@ -22,6 +22,7 @@ import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.io.OutputFiles;
 import org.arcwright.render.ContourPlot;
+import org.arcwright.tolerance.Units;
 import org.arcwright.zone.RadiusEnvelope;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -64,8 +65,8 @@ final class InspectCommand implements Callable<Integer> {
             if (!name.endsWith(".png") && !name.endsWith(".svg")) throw InputProblem.ofField("--plot", "give a .png or .svg file name");
             OutputFiles.requireWritable(plot, "--plot", file);
         }
-        if (window != null && !Double.isFinite(window)) throw InputProblem.ofField("--window", "must be a finite length, got " + window);
-        if (uncertainty != null && !Double.isFinite(uncertainty)) throw InputProblem.ofField("--uncertainty", "must be a finite length, got " + uncertainty);
+        if (window != null && !Double.isFinite(window)) throw InputProblem.ofField("--window", "must be a finite length, got " + DecimalText.exact(window));
+        if (uncertainty != null && !Double.isFinite(uncertainty)) throw InputProblem.ofField("--uncertainty", "must be a finite length, got " + DecimalText.exact(uncertainty));
         InspectionRequest req = new InspectionFiles(new JsonFiles()).read(file).withCompare(compare);
         if (plot != null && !"points".equals(req.points().source())) {
             // the points came from a pointsFile: the plot must not replace it either
@@ -109,7 +110,7 @@ final class InspectCommand implements Callable<Integer> {
                 q.points().size(), u, q.uncertainty() > 0 ? ", U = " + n(q.uncertainty()) + " " + u : "");
         AdjacentSurfaces sf = r.surfaces();
         if (sf != null) {
-            out.printf("  surfaces       a %s, b %s; angle %s°%n", surface(sf.a(), u), surface(sf.b(), u), n(sf.includedAngleDeg()));
+            out.printf("  surfaces       a %s, b %s; angle %s°%n", surface(sf.a(), q.units()), surface(sf.b(), q.units()), n(sf.includedAngleDeg()));
         }
         RadiusEnvelope e = r.radius();
         if (e != null) {
@@ -130,32 +131,34 @@ final class InspectCommand implements Callable<Integer> {
                     break;
                 }
                 out.printf("  undecided      window %d (s = %s to %s %s): local radius %s ± %s %s straddles a limit%n", w.number(),
-                        n(w.fromStation()), n(w.toStation()), u, n(w.radius()), n(w.uncertainty()), u);
+                        Inspector.coordinate(w.fromStation(), q.units()), Inspector.coordinate(w.toStation(), q.units()), u, n(w.radius()),
+                        n(w.uncertainty()), u);
             }
             out.printf("  reversals      %d%s%n", c.reversals().size(), c.flats() > 0 ? "   flat windows " + c.flats() : "");
             for (ControlledRadiusOutcome.Reversal v : c.reversals()) {
-                out.printf("                 s = %s to %s, near [%s, %s]%n", n(v.fromStation()), n(v.toStation()), n(v.x()), n(v.y()));
+                out.printf("                 s = %s to %s, near %s%n", Inspector.coordinate(v.fromStation(), q.units()),
+                        Inspector.coordinate(v.toStation(), q.units()), at(v.x(), v.y(), q.units()));
             }
         }
-        if (r.profile() != null) printProfile(out, "", r.profile(), u);
+        if (r.profile() != null) printProfile(out, "", r.profile(), q.units());
         if (r.tiers() != null) {
             for (int i = 0; i < r.tiers().size(); i++) {
                 ProfileOutcome t = r.tiers().get(i);
                 out.printf("  tier %d         %s   zone %s %s%s%n", i + 1, Inspector.profileVerdict(t, q.uncertainty()).key(), n(t.zone().width()), u, freeText(t));
-                printProfile(out, "  ", t, u);
+                printProfile(out, "  ", t, q.units());
             }
         }
         Fits f = r.fits();
         if (f != null) {
-            out.printf("  least squares  R %s at [%s, %s], rms %s " + u + "  (%d blend points)%n", n(f.leastSquares().circle().r()),
-                    n(f.leastSquares().circle().cx()), n(f.leastSquares().circle().cy()), n(f.leastSquares().rms()), f.blendPoints());
-            out.printf("  minimum zone   R %s to %s (width %s) at [%s, %s]%n", n(f.minimumZone().inner()), n(f.minimumZone().outer()),
-                    n(f.minimumZone().width()), n(f.minimumZone().cx()), n(f.minimumZone().cy()));
+            out.printf("  least squares  R %s at %s, rms %s " + u + "  (%d blend points)%n", n(f.leastSquares().circle().r()),
+                    at(f.leastSquares().circle().cx(), f.leastSquares().circle().cy(), q.units()), n(f.leastSquares().rms()), f.blendPoints());
+            out.printf("  minimum zone   R %s to %s (width %s) at %s%n", n(f.minimumZone().inner()), n(f.minimumZone().outer()),
+                    n(f.minimumZone().width()), at(f.minimumZone().cx(), f.minimumZone().cy(), q.units()));
             out.printf("  tangency       step at surface a %s %s, at surface b %s %s  (gap between each fitted surface and the arc; a radius gauge does not see these)%n",
                     n(f.stepA()), u, n(f.stepB()), u);
         }
         if (r.worst() != null) {
-            out.printf("  worst          %s, at [%s, %s]%n", r.worst().text(), n(r.worst().x()), n(r.worst().y()));
+            out.printf("  worst          %s, at %s%n", r.worst().text(), at(r.worst().x(), r.worst().y(), q.units()));
         }
         if (!r.comparisons().isEmpty()) {
             out.println();
@@ -172,10 +175,16 @@ final class InspectCommand implements Callable<Integer> {
         out.println("  standard, your company's inspection practice and the responsible engineer's judgement.");
     }
 
-    private static String surface(AdjacentSurfaces.Surface s, String u) {
+    private static String surface(AdjacentSurfaces.Surface s, Units units) {
         if (!s.fitted()) return "nominal (not fitted)";
-        return String.format(Locale.ROOT, "through [%s, %s] along [%s, %s] (%d points, rms %s %s)", n(s.point().x()), n(s.point().y()),
-                DecimalText.fixed(s.direction().x(), 6), DecimalText.fixed(s.direction().y(), 6), s.points(), DecimalText.significant(s.rms(), 3), u);
+        return String.format(Locale.ROOT, "through %s along [%s, %s] (%d points, rms %s %s)", at(s.point().x(), s.point().y(), units),
+                DecimalText.fixed(s.direction().x(), 6), DecimalText.fixed(s.direction().y(), 6), s.points(), DecimalText.significant(s.rms(), 3),
+                units.symbol());
+    }
+
+    /** A point as {@code [x, y]}, both coordinates at the report's one resolution ({@link Inspector#coordinate}). */
+    private static String at(double x, double y, Units units) {
+        return "[" + Inspector.coordinate(x, units) + ", " + Inspector.coordinate(y, units) + "]";
     }
 
     private static String freeText(ProfileOutcome t) {
@@ -186,13 +195,15 @@ final class InspectCommand implements Callable<Integer> {
         return sb.toString();
     }
 
-    private static void printProfile(PrintWriter out, String indent, ProfileOutcome p, String u) {
+    private static void printProfile(PrintWriter out, String indent, ProfileOutcome p, Units units) {
+        String u = units.symbol();
         out.printf("%s  needs zone     %s %s (same disposition and freedom)%n", indent, Inspector.up(p.requiredZone(), Inspector.PROFILE_SLACK), u);
         out.printf("%s  deviation      %s %s outward, %s %s inward (after registration)%n", indent, n(p.maxOutward()), u, n(p.maxInward()), u);
         if (!p.free().isEmpty() || p.dynamic()) {
-            out.printf("%s  registration   x %s, y %s, rotation %s° about [%s, %s], offset %s%n", indent, n(p.registration().x()),
-                    n(p.registration().y()), n(p.registration().rotationDeg()), n(p.registration().pivotX()),
-                    n(p.registration().pivotY()), n(p.registration().offset()));
+            out.printf("%s  registration   x %s, y %s, rotation %s° about %s, offset %s%n", indent,
+                    Inspector.coordinate(p.registration().x(), units), Inspector.coordinate(p.registration().y(), units),
+                    n(p.registration().rotationDeg()), at(p.registration().pivotX(), p.registration().pivotY(), units),
+                    n(p.registration().offset()));
         }
     }
 }

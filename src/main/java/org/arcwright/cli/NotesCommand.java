@@ -13,6 +13,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.notes.FacetCount;
@@ -139,8 +140,8 @@ final class NotesCommand implements Runnable {
             int i = 1;
             for (NoteHit h : r.hits()) {
                 out.printf("%n%2d. %s%n", i++, h.title());
-                out.printf("    %s · %s · %s · score %.2f%n", h.id(), h.pack(),
-                        h.standards().isEmpty() ? "no source named" : String.join("; ", h.standards()), h.score());
+                out.printf("    %s · %s · %s · score %s%n", h.id(), h.pack(),
+                        h.standards().isEmpty() ? "no source named" : String.join("; ", h.standards()), DecimalText.fixed(h.score(), 2));
                 out.println("    " + h.snippet());
             }
             List<FacetCount> fn = r.facets().getOrDefault(NoteFacet.FUNCTION, List.of());

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Locale;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.Point2;
@@ -107,7 +108,7 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
         Surface sb = surface(fb, nominal.vertex(), nominal.legB(), nominal.legB(), t, "b", largestRadius, notes);
         Corner c = cornerOf(nominal, sa, sb);
         if (c == null) {
-            notes.add("the fitted surfaces make an angle outside " + Corner.MIN_ANGLE_DEG + "° to " + Corner.MAX_ANGLE_DEG
+            notes.add("the fitted surfaces make an angle outside " + DecimalText.exact(Corner.MIN_ANGLE_DEG) + "° to " + DecimalText.exact(Corner.MAX_ANGLE_DEG)
                     + "°: the nominal surfaces are used instead");
             return new AdjacentSurfaces(new Surface(nominal.vertex(), nominal.legA(), 0, 0, false),
                     new Surface(nominal.vertex(), nominal.legB(), 0, 0, false), nominal, notes);

@@ -3,6 +3,7 @@ package org.arcwright.inspect;
 import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.Point2;
@@ -67,7 +68,7 @@ public final class ControlledRadiusCheck {
         double least = minWindow(corner, r);
         if (!(window >= least)) {
             throw InputProblem.ofField("window", "must be at least " + Inspector.fmt(least)
-                    + " (the nominal blend's length / " + (MAX_WINDOWS / 4) + "), got " + window
+                    + " (the nominal blend's length / " + (MAX_WINDOWS / 4) + "), got " + DecimalText.exact(window)
                     + "; a shorter window sees little but measurement noise");
         }
     }

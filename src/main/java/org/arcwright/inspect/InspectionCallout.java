@@ -25,10 +25,10 @@ public sealed interface InspectionCallout {
     record RadiusLimits(RadiusKind kind, double min, double max) implements InspectionCallout {
         public RadiusLimits {
             if (kind == null) throw InputProblem.ofField("callout.type", "missing");
-            if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + min);
-            if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + max);
-            if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + max + " < " + min + ")");
-            if (max == min) throw InputProblem.ofField("callout.max", "equals min (" + max + "); a radius tolerance needs max above min");
+            if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + DecimalText.exact(min));
+            if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + DecimalText.exact(max));
+            if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + DecimalText.exact(max) + " < " + DecimalText.exact(min) + ")");
+            if (max == min) throw InputProblem.ofField("callout.max", "equals min (" + DecimalText.exact(max) + "); a radius tolerance needs max above min");
         }
 
         @Override
@@ -66,8 +66,8 @@ public sealed interface InspectionCallout {
             if (tiers.size() < 2) throw InputProblem.ofField("callout.tiers", "a composite profile needs at least 2 tiers, got " + tiers.size());
             for (int i = 1; i < tiers.size(); i++) {
                 if (tiers.get(i).zone() > tiers.get(i - 1).zone()) {
-                    throw InputProblem.ofField("callout.tiers[" + i + "].zone", "tier " + (i + 1) + "'s zone " + tiers.get(i).zone()
-                            + " is larger than tier " + i + "'s " + tiers.get(i - 1).zone()
+                    throw InputProblem.ofField("callout.tiers[" + i + "].zone", "tier " + (i + 1) + "'s zone " + DecimalText.exact(tiers.get(i).zone())
+                            + " is larger than tier " + i + "'s " + DecimalText.exact(tiers.get(i - 1).zone())
                             + "; each lower tier refines the one above it (ASME Y14.5-2018 composite profile, from memory)");
                 }
             }
@@ -89,7 +89,7 @@ public sealed interface InspectionCallout {
      */
     record Tier(double zone, Set<Freedom> free) {
         public Tier {
-            if (!Double.isFinite(zone) || zone <= 0) throw InputProblem.ofField("zone", "must be above zero, got " + zone);
+            if (!Double.isFinite(zone) || zone <= 0) throw InputProblem.ofField("zone", "must be above zero, got " + DecimalText.exact(zone));
             free = Set.copyOf(free);
         }
     }

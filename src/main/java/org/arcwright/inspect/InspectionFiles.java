@@ -17,6 +17,7 @@ import java.util.List;
 import java.util.Objects;
 import java.util.Set;
 import java.util.function.Supplier;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.tolerance.RadiusKind;
@@ -190,7 +191,7 @@ public final class InspectionFiles {
                 else throw new IllegalArgumentException("turn: use ccw or cw, got " + turn);
                 double r = c.distance(a);
                 if (Math.abs(c.distance(b) - r) > 1e-6 * Math.max(1, r)) {
-                    throw new IllegalArgumentException("to: not on the arc's circle (from is " + r + " from the centre, to is " + c.distance(b) + ")");
+                    throw new IllegalArgumentException("to: not on the arc's circle (from is " + DecimalText.significant(r, 7) + " from the centre, to is " + DecimalText.significant(c.distance(b), 7) + ")");
                 }
                 double s = Math.atan2(a.y() - c.y(), a.x() - c.x()), e = Math.atan2(b.y() - c.y(), b.x() - c.x());
                 double sweep = ccw ? e - s : s - e;

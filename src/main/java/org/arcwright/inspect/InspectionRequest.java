@@ -1,6 +1,7 @@
 package org.arcwright.inspect;
 
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.Units;
 
@@ -37,26 +38,26 @@ public record InspectionRequest(Units units, Nominal nominal, InspectionCallout 
         Objects.requireNonNull(callout, "callout");
         Objects.requireNonNull(points, "points");
         if (!(resolution > 0) || !Double.isFinite(resolution)) {
-            throw InputProblem.ofField("resolution", "must be above zero, got " + resolution);
+            throw InputProblem.ofField("resolution", "must be above zero, got " + DecimalText.exact(resolution));
         }
         if (!Double.isNaN(window) && !(window > 0 && Double.isFinite(window))) {
-            throw InputProblem.ofField("window", "must be above zero, got " + window);
+            throw InputProblem.ofField("window", "must be above zero, got " + DecimalText.exact(window));
         }
         if (!(uncertainty >= 0) || !Double.isFinite(uncertainty)) {
             throw InputProblem.ofField("uncertainty", "must be zero or more (the expanded uncertainty U, in "
-                    + units.symbol() + "), got " + uncertainty);
+                    + units.symbol() + "), got " + DecimalText.exact(uncertainty));
         }
         double tol = tolerance(callout);
         if (callout instanceof InspectionCallout.RadiusLimits && resolution > RESOLUTION_SHARE * tol) {
-            throw InputProblem.ofField("resolution", "is " + resolution + " " + units.symbol() + ", more than a tenth of the tolerance ("
+            throw InputProblem.ofField("resolution", "is " + DecimalText.exact(resolution) + " " + units.symbol() + ", more than a tenth of the tolerance ("
                     + Inspector.fmt(tol) + " " + units.symbol() + "); the resolution is only the slack at the tangent points, "
                     + "where the radius zone narrows to nothing, and must not widen the zone: give at most "
                     + Inspector.fmt(RESOLUTION_SHARE * tol));
         }
         if (nominal instanceof Nominal.CornerBlend cb) {
             if (callout instanceof InspectionCallout.RadiusLimits rl && (cb.radius() < rl.min() || cb.radius() > rl.max())) {
-                throw InputProblem.ofField("nominalRadius", "is " + cb.radius() + " " + units.symbol() + ", outside the callout's limits "
-                        + rl.min() + " to " + rl.max() + "; the nominal must lie within its own limits");
+                throw InputProblem.ofField("nominalRadius", "is " + DecimalText.exact(cb.radius()) + " " + units.symbol() + ", outside the callout's limits "
+                        + DecimalText.exact(rl.min()) + " to " + DecimalText.exact(rl.max()) + "; the nominal must lie within its own limits");
             }
             ControlledRadiusCheck.requireWindow(cb.corner(), cb.radius(), window);
         }

@@ -2,6 +2,7 @@ package org.arcwright.inspect;
 
 import java.util.List;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.zone.RadiusEnvelope;
 
 /**
@@ -32,7 +33,7 @@ public record InspectionResult(InspectionRequest request, Verdict verdict, Radiu
     public InspectionResult {
         Objects.requireNonNull(verdict, "verdict");
         if (verdict == Verdict.PASS && worst != null && worst.excess() > request.resolution()) {
-            throw new IllegalStateException("a pass whose worst point lies " + worst.excess() + " beyond the limits ("
+            throw new IllegalStateException("a pass whose worst point lies " + DecimalText.significant(worst.excess(), 4) + " beyond the limits ("
                     + worst.measure() + ")");
         }
     }

@@ -7,9 +7,11 @@ import java.util.ArrayList;
 import java.util.EnumSet;
 import java.util.List;
 import java.util.Locale;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.CrescentZone;
 import org.arcwright.tolerance.RadiusKind;
+import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
 import org.arcwright.zone.Point2;
@@ -171,7 +173,7 @@ public final class Inspector {
                         + " of a limit arc (or of a surface, beyond the resolution): neither in nor out is proven there (ISO 14253-1)");
             }
         }
-        j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), unit) : radiusExcess(pts, zone, j.env, unit);
+        j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), req.units()) : radiusExcess(pts, zone, j.env, unit);
         if (explain) radiusNotes(rl, j.env, res, unit, j.notes);
         if (rl.kind() != RadiusKind.CR) return;
         j.blend = explain ? blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max())
@@ -184,7 +186,7 @@ public final class Inspector {
         j.verdict = j.verdict.and(cr.verdict());
         if (cr.worst() != null && (j.worst == null || cr.worstExcess() > j.worst.excess())) {
             int i = cr.worstIndex();
-            j.worst = explain ? windowWorst(pts, cr, unit) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, "");
+            j.worst = explain ? windowWorst(pts, cr, req.units()) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, "");
         }
         if (explain) {
             j.notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s %s windows along the blend, stepped by a quarter window (75 %% overlap, %d windows); "
@@ -299,7 +301,8 @@ public final class Inspector {
         }
     }
 
-    private static Worst radiusWorst(PointSet pts, RadiusZone zone, RadiusEnvelope env, double[] stations, String unit) {
+    private static Worst radiusWorst(PointSet pts, RadiusZone zone, RadiusEnvelope env, double[] stations, Units units) {
+        String unit = units.symbol();
         int i = env.worst();
         if (i < 0) return null;
         double x = pts.xs()[i], y = pts.ys()[i];
@@ -307,7 +310,7 @@ public final class Inspector {
         double[] h = legOffsets(c, x, y);
         double ha = h[0], hb = h[1];
         String where = String.format(Locale.ROOT, "point #%d (s = %s %s along the contour from the tangent point on surface a)", i,
-                fmt(stations[i]), unit);
+                coordinate(stations[i], units), unit);
         if (Math.min(ha, hb) < -zone.resolution()) {
             double depth = -Math.min(ha, hb);
             String text = String.format(Locale.ROOT, "%s %s beyond surface %s (outside the sharp corner: no radius allows it) at %s",
@@ -348,10 +351,12 @@ public final class Inspector {
                 qx * c.inwardNormalB().x() + qy * c.inwardNormalB().y()};
     }
 
-    private static Worst windowWorst(PointSet pts, ControlledRadiusOutcome cr, String unit) {
+    private static Worst windowWorst(PointSet pts, ControlledRadiusOutcome cr, Units units) {
+        String unit = units.symbol();
         ControlledRadiusOutcome.LocalWindow w = cr.worst();
         int i = cr.worstIndex();
-        String span = String.format(Locale.ROOT, "window %d (s = %s to %s %s from the tangent point on surface a)", w.number(), fmt(w.fromStation()), fmt(w.toStation()), unit);
+        String span = String.format(Locale.ROOT, "window %d (s = %s to %s %s from the tangent point on surface a)", w.number(),
+                coordinate(w.fromStation(), units), coordinate(w.toStation(), units), unit);
         String text;
         if (w.reversed()) {
             text = span + " curves against the blend (a reversal, local radius " + fmt(Math.abs(w.radius())) + " " + unit + " the wrong way)";
@@ -533,9 +538,34 @@ public final class Inspector {
         return new BigDecimal(v).round(new MathContext(4)).doubleValue();
     }
 
+    /** Decimal places of a coordinate in millimetres: 0.1 µm. */
+    public static final int MM_COORDINATE_PLACES = 4;
+    /** Decimal places of a coordinate in inches: 0.00001 in (0.25 µm), the same reach as in millimetres. */
+    public static final int INCH_COORDINATE_PLACES = 5;
+
+    /**
+     * A coordinate of a point, a centre or a surface's position in a report, or a station s along the
+     * contour: fixed places by unit, as a CMM report lists its points (common practice), so positions
+     * side by side line up and read at one resolution: {@code [4.1310, 0.0002]}, not {@code [4.131, 0.0002465]}. Significant digits would make
+     * a coordinate near the origin look a thousand times more precise than one across the part. A tenth
+     * of a micrometre (mm) or a hundred-thousandth of an inch lies below any probe's uncertainty, so the
+     * rounding hides nothing a verdict rests on; deviations and radii keep their significant digits.
+     * NaN (no fit) reads {@code none}.
+     */
+    public static String coordinate(double v, Units units) {
+        if (Double.isNaN(v)) return "none";
+        return DecimalText.fixed(v, units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES);
+    }
+
+    /**
+     * A computed length or count in the report's words, to 5 significant digits: one more than
+     * {@link DecimalText#significant}'s usual 4, since a deviation is read against a limit a few
+     * micrometres away. Rounded as the value prints ({@link DecimalText}), so a figure the user typed
+     * (a window, a tolerance) reads back as typed. NaN and infinity are states of the fit, said in words.
+     */
     static String fmt(double v) {
         if (Double.isNaN(v)) return "none";
         if (Double.isInfinite(v)) return "infinite (flat)";
-        return new BigDecimal(v).round(new MathContext(5)).stripTrailingZeros().toPlainString();
+        return DecimalText.significant(v, 5);
     }
 }

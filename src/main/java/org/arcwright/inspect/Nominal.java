@@ -1,5 +1,6 @@
 package org.arcwright.inspect;
 
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.zone.Contour;
 import org.arcwright.zone.Corner;
@@ -15,7 +16,7 @@ public sealed interface Nominal {
     record CornerBlend(Corner corner, double radius) implements Nominal {
         public CornerBlend {
             if (corner == null) throw InputProblem.ofField("corner", "missing");
-            if (!Double.isFinite(radius) || radius <= 0) throw InputProblem.ofField("nominalRadius", "must be above zero, got " + radius);
+            if (!Double.isFinite(radius) || radius <= 0) throw InputProblem.ofField("nominalRadius", "must be above zero, got " + DecimalText.exact(radius));
         }
     }
 

@@ -1,6 +1,7 @@
 package org.arcwright.inspect;
 
 import java.util.Arrays;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -18,7 +19,7 @@ public record PointSet(double[] xs, double[] ys, int size, String source) {
         if (xs.length < size || ys.length < size) throw new IllegalArgumentException("arrays shorter than size");
         for (int i = 0; i < size; i++) {
             if (!Double.isFinite(xs[i]) || !Double.isFinite(ys[i])) {
-                throw new InputProblem(source, 0, 0, "points[" + i + "]", "not a finite number: [" + xs[i] + ", " + ys[i] + "]");
+                throw new InputProblem(source, 0, 0, "points[" + i + "]", "not a finite number: [" + DecimalText.exact(xs[i]) + ", " + DecimalText.exact(ys[i]) + "]");
             }
         }
     }

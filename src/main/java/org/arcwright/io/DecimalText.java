@@ -15,7 +15,7 @@ import java.util.regex.Pattern;
  * letter) or not sizes at all. Every reader of numbers checks the text here first, so a typo is
  * refused rather than read as a value.
  *
- * <p>Writing: every number a report, a message or a drawing file shows comes from one of four methods,
+ * <p>Writing: every number a report, a message or a drawing file shows comes from one of five methods,
  * chosen by what the number is, so the same value reads the same everywhere and can be typed back:
  * <table>
  * <caption>Which method for which number</caption>
@@ -30,6 +30,8 @@ import java.util.regex.Pattern;
  *     <td>1 µm is far below a line's width; trimmed so files stay small and stable</td></tr>
  * <tr><td>a figure whose places are part of a layout: a column, limits at the drawing's places, a
  *     chart label</td><td>{@link #fixed}</td><td>figures side by side read alike</td></tr>
+ * <tr><td>a share shown as a percentage (simulated acceptance, escapes)</td><td>{@link #percent}</td>
+ *     <td>as {@code fixed}, with the point moved rather than the share multiplied by 100 in binary</td></tr>
  * </table>
  * Trailing zeros are trimmed except by {@code fixed}: on a report a trailing zero claims a precision.
  * No method writes an exponent ({@code 1E-5}); non-finite values are written as Java names them
@@ -89,7 +91,22 @@ public final class DecimalText {
     public static String fixed(double v, int places) {
         if (places < 0) throw new IllegalArgumentException("places must not be negative, got " + places);
         if (!Double.isFinite(v)) return Double.toString(v);
-        BigDecimal b = BigDecimal.valueOf(v).setScale(places, RoundingMode.HALF_EVEN);
+        return fixedPlaces(BigDecimal.valueOf(v), places);
+    }
+
+    /**
+     * The share {@code share} (0.0725) as a percentage to exactly {@code places} decimals, without the
+     * sign: "7.25" at 2, "7.2" at 1 (a tie, half to even). The decimal point is moved rather than the
+     * share multiplied by 100, which in binary makes 0.0725 into 7.249999999999999 and hides a tie.
+     */
+    public static String percent(double share, int places) {
+        if (places < 0) throw new IllegalArgumentException("places must not be negative, got " + places);
+        if (!Double.isFinite(share)) return Double.toString(share);
+        return fixedPlaces(BigDecimal.valueOf(share).movePointRight(2), places);
+    }
+
+    private static String fixedPlaces(BigDecimal v, int places) {
+        BigDecimal b = v.setScale(places, RoundingMode.HALF_EVEN);
         return b.signum() == 0 ? BigDecimal.ZERO.setScale(places).toPlainString() : b.toPlainString();
     }
 

@@ -110,7 +110,7 @@ public record BearingChamferLimits(String id, String title, String source, Strin
                 use = r;
             }
         }
-        if (use == null) throw new IllegalStateException("no bore range for r_s min " + listed + " holds " + bore);
+        if (use == null) throw new IllegalStateException("no bore range for r_s min " + DecimalText.exact(listed) + " holds " + (bore == null ? "any bore" : DecimalText.exact(bore)));
         if (bore == null && ranges > 1) {
             note.append("No bore given: the largest r_s max for this r_s min (").append(use.boreRange())
                     .append(") is used; give mating.bore for the ring's own row.");

@@ -6,6 +6,7 @@ import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackStack;
 import org.arcwright.pack.PackTables;
@@ -82,13 +83,13 @@ public record BearingSeatTable(String id, String title, String source, String un
             if (r.chamferMin() <= chamferMin + ROUNDING) use = r;
         }
         if (use == null) {
-            throw InputProblem.ofField("mating.chamferMin", "r_s min " + chamferMin + " mm is below the table's smallest, "
-                    + rows.get(0).chamferMin() + " mm");
+            throw InputProblem.ofField("mating.chamferMin", "r_s min " + DecimalText.exact(chamferMin) + " mm is below the table's smallest, "
+                    + DecimalText.exact(rows.get(0).chamferMin()) + " mm");
         }
         boolean exact = Math.abs(use.chamferMin() - chamferMin) <= ROUNDING;
         String note = exact ? "" : String.format(Locale.ROOT,
                 "r_s min %s mm is not a listed chamfer dimension; using the row for %s mm (the next smaller)",
-                chamferMin, use.chamferMin());
+                DecimalText.exact(chamferMin), DecimalText.exact(use.chamferMin()));
         return new Lookup(use, exact, note);
     }
 

@@ -4,6 +4,7 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 
 /**
  * Mating-corner clearance: does the largest fillet let the mating part seat flush against the
@@ -53,7 +54,7 @@ public final class ClearanceAnalysis {
             alongSeat = b.chamferMin() / perMm;
             alongShoulder = alongSeat;
             governing = String.format(Locale.ROOT, "the bearing-seat table (%s): r_s min %s mm admits fillets up to %s mm",
-                    bearingTable.id(), found.row().chamferMin(), found.row().filletMax());
+                    bearingTable.id(), DecimalText.exact(found.row().chamferMin()), DecimalText.exact(found.row().filletMax()));
             notes.add("source: " + bearingTable.source());
             // The ring's face starts beyond its chamfer, which may reach r_s max (radial), not r_s min.
             BearingChamferLimits.Lookup limit = chamferLimits.lookup(b.chamferMin(), b.bore());

@@ -1,6 +1,7 @@
 package org.arcwright.mechanics;
 
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.Units;
 
@@ -23,11 +24,11 @@ public record ClearanceCase(Units units, double filletMin, double filletMax, Mat
         StressConcentration.positive("fillet.rMin", filletMin);
         StressConcentration.positive("fillet.rMax", filletMax);
         if (filletMin > filletMax) {
-            throw InputProblem.ofField("fillet.rMin", "rMin = " + filletMin + " exceeds rMax = " + filletMax);
+            throw InputProblem.ofField("fillet.rMin", "rMin = " + DecimalText.exact(filletMin) + " exceeds rMax = " + DecimalText.exact(filletMax));
         }
         if (shoulderHeight != null) StressConcentration.positive("shoulderHeight", shoulderHeight);
         if (!Double.isFinite(shoulderEdgeBreak) || shoulderEdgeBreak < 0) {
-            throw InputProblem.ofField("shoulderEdgeBreak", "must be zero or more, got " + shoulderEdgeBreak);
+            throw InputProblem.ofField("shoulderEdgeBreak", "must be zero or more, got " + DecimalText.exact(shoulderEdgeBreak));
         }
         if (requiredSupport != null) {
             StressConcentration.positive("requiredSupport", requiredSupport);
@@ -36,8 +37,8 @@ public record ClearanceCase(Units units, double filletMin, double filletMax, Mat
             }
         }
         if (shoulderHeight != null && filletMax > shoulderHeight) {
-            throw InputProblem.ofField("fillet.rMax", "fillet radius " + filletMax + " is larger than the shoulder height "
-                    + shoulderHeight);
+            throw InputProblem.ofField("fillet.rMax", "fillet radius " + DecimalText.exact(filletMax) + " is larger than the shoulder height "
+                    + DecimalText.exact(shoulderHeight));
         }
     }
 }

@@ -83,9 +83,9 @@ public final class FilletStressAnalysis {
         String sym = target.factor().symbol();
         if (atTo > target.value()) {
             return new MinimumRadius(target, false, Double.NaN, atTo, from, to, false, String.format(Locale.ROOT,
-                    "no radius up to the step height h = %s keeps %s <= %s: the largest fillet gives %s = %.3f; "
+                    "no radius up to the step height h = %s keeps %s <= %s: the largest fillet gives %s = %s; "
                             + "a larger radius needs a taller step, an undercut or a relief groove",
-                    DecimalText.significant(h, 4), sym, DecimalText.significant(target.value(), 4), sym, atTo));
+                    DecimalText.significant(h, 4), sym, DecimalText.significant(target.value(), 4), sym, DecimalText.fixed(atTo, 3)));
         }
         double pass = to;
         double ratio = Math.pow(from / to, 1.0 / SCAN_POINTS);

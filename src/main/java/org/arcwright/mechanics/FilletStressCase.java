@@ -1,6 +1,7 @@
 package org.arcwright.mechanics;
 
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.Units;
 
@@ -29,14 +30,14 @@ public record FilletStressCase(ShoulderShape shape, LoadCase load, Units units, 
         StressConcentration.positive(single ? "r" : "rMin", rMin);
         StressConcentration.positive("r", rNominal);
         StressConcentration.positive(single ? "r" : "rMax", rMax);
-        if (rMin > rMax) throw InputProblem.ofField("rMin", "rMin = " + rMin + " exceeds rMax = " + rMax);
+        if (rMin > rMax) throw InputProblem.ofField("rMin", "rMin = " + DecimalText.exact(rMin) + " exceeds rMax = " + DecimalText.exact(rMax));
         if (rNominal < rMin || rNominal > rMax) {
-            throw InputProblem.ofField("r", "nominal r = " + rNominal + " lies outside the limits " + rMin + ".." + rMax);
+            throw InputProblem.ofField("r", "nominal r = " + DecimalText.exact(rNominal) + " lies outside the limits " + DecimalText.exact(rMin) + ".." + DecimalText.exact(rMax));
         }
         double h = (bigD - smallD) / 2;
         if (rMax > h * (1 + 1e-12)) {
-            throw InputProblem.ofField(rMax == rMin ? "r" : "rMax", "fillet radius " + rMax
-                    + " is larger than the step h = (D - d)/2 = " + h + "; a fillet tangent to both the diameter and "
+            throw InputProblem.ofField(rMax == rMin ? "r" : "rMax", "fillet radius " + DecimalText.exact(rMax)
+                    + " is larger than the step h = (D - d)/2 = " + DecimalText.significant(h, 6) + "; a fillet tangent to both the diameter and "
                     + "the shoulder face needs r <= h");
         }
     }

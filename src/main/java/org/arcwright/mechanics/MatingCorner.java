@@ -31,7 +31,7 @@ public sealed interface MatingCorner permits MatingCorner.Chamfer, MatingCorner.
         public Chamfer {
             StressConcentration.positive("mating.leg", leg);
             if (!Double.isFinite(angleDeg) || angleDeg <= 0 || angleDeg >= 90) {
-                throw InputProblem.ofField("mating.angle", "must lie between 0 and 90 degrees (exclusive), got " + angleDeg);
+                throw InputProblem.ofField("mating.angle", "must lie between 0 and 90 degrees (exclusive), got " + DecimalText.exact(angleDeg));
             }
         }
 

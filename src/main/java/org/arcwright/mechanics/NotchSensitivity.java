@@ -2,6 +2,7 @@ package org.arcwright.mechanics;
 
 import java.util.Locale;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 
 /**
  * Notch sensitivity of steels by Neuber's equation, with Neuber's constant from the cubic fits in
@@ -38,15 +39,16 @@ public final class NotchSensitivity {
                 : 0.246 - 3.08e-3 * used + 1.51e-5 * used * used - 2.67e-8 * used * used * used;
         boolean within = used == s;
         String message = within ? "" : String.format(Locale.ROOT,
-                "S_ut = %.0f MPa (%.1f ksi) lies outside the fit's range %.0f..%.0f ksi; Neuber's constant is taken at %.0f ksi",
-                strength.mpa(), s, SUT_MIN_KSI, SUT_MAX_KSI, used);
+                "S_ut = %s MPa (%s ksi) lies outside the fit's range %s..%s ksi; Neuber's constant is taken at %s ksi",
+                DecimalText.fixed(strength.mpa(), 0), DecimalText.fixed(s, 1), DecimalText.exact(SUT_MIN_KSI), DecimalText.exact(SUT_MAX_KSI),
+                DecimalText.fixed(used, 0));
         if (sqrtA < 0) {
             // the torsion cubic crosses zero near 234 ksi: a negative √a would give q > 1
             sqrtA = 0;
             within = false;
             message = (message.isEmpty() ? "" : message + "; ") + String.format(Locale.ROOT,
-                    "the %s fit gives no positive Neuber constant at %.0f ksi; q is taken as 1 (fully notch-sensitive)",
-                    load.isShear() ? "torsion" : "bending", used);
+                    "the %s fit gives no positive Neuber constant at %s ksi; q is taken as 1 (fully notch-sensitive)",
+                    load.isShear() ? "torsion" : "bending", DecimalText.fixed(used, 0));
         }
         return new NeuberConstant(sqrtA, sqrtA * SQRT_MM_PER_SQRT_IN, used, within, message);
     }

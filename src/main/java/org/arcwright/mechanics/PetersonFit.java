@@ -2,6 +2,7 @@ package org.arcwright.mechanics;
 
 import java.util.List;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 
 /**
  * One of Peterson's curve fits for a shoulder fillet:
@@ -27,7 +28,7 @@ public record PetersonFit(ShoulderShape shape, LoadCase load, String name, Strin
         for (int i = 1; i < branches.size(); i++) {
             if (branches.get(i - 1).hrMax() != branches.get(i).hrMin()) {
                 throw new IllegalArgumentException("branches of " + name + " do not meet at h/r = "
-                        + branches.get(i - 1).hrMax());
+                        + DecimalText.exact(branches.get(i - 1).hrMax()));
             }
         }
     }

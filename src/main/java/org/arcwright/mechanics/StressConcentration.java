@@ -38,7 +38,7 @@ public final class StressConcentration {
         positive("r", r);
         double h = (bigD - smallD) / 2;
         if (r > h * (1 + 1e-12)) {
-            throw InputProblem.ofField("r", "fillet radius " + r + " is larger than the step h = (D - d)/2 = " + h
+            throw InputProblem.ofField("r", "fillet radius " + DecimalText.exact(r) + " is larger than the step h = (D - d)/2 = " + DecimalText.significant(h, 6)
                     + "; a fillet tangent to both the diameter and the shoulder face needs r <= h");
         }
         PetersonFit fit = fits.require(shape, load);
@@ -70,12 +70,12 @@ public final class StressConcentration {
         positive("D", bigD);
         positive("d", smallD);
         if (bigD <= smallD) {
-            throw InputProblem.ofField("D", "the larger size D = " + bigD + " must exceed the smaller size d = " + smallD);
+            throw InputProblem.ofField("D", "the larger size D = " + DecimalText.exact(bigD) + " must exceed the smaller size d = " + DecimalText.exact(smallD));
         }
     }
 
     static void positive(String field, double v) {
         if (!Double.isFinite(v)) throw InputProblem.ofField(field, "not a finite number");
-        if (v <= 0) throw InputProblem.ofField(field, "must be greater than zero, got " + v);
+        if (v <= 0) throw InputProblem.ofField(field, "must be greater than zero, got " + DecimalText.exact(v));
     }
 }

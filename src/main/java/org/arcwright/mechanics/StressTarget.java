@@ -1,6 +1,7 @@
 package org.arcwright.mechanics;
 
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -14,7 +15,7 @@ public record StressTarget(Factor factor, double value) {
         Objects.requireNonNull(factor, "factor");
         String field = factor == Factor.KT ? "targetKt" : "targetKf";
         if (!Double.isFinite(value)) throw InputProblem.ofField(field, "not a finite number");
-        if (value <= 1) throw InputProblem.ofField(field, "must be greater than 1 (no notch), got " + value);
+        if (value <= 1) throw InputProblem.ofField(field, "must be greater than 1 (no notch), got " + DecimalText.exact(value));
     }
 
     public static StressTarget kt(double value) { return new StressTarget(Factor.KT, value); }

@@ -6,6 +6,7 @@ import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.List;
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 
@@ -69,7 +70,7 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
         Objects.requireNonNull(function, "function");
         Objects.requireNonNull(process, "process");
         if (!(Double.isFinite(nominalRadius) && nominalRadius > 0)) {
-            throw new IllegalArgumentException("nominalRadius must be a number greater than zero, got " + nominalRadius);
+            throw new IllegalArgumentException("nominalRadius must be a number greater than zero, got " + DecimalText.exact(nominalRadius));
         }
         this.units = units;
         this.standard = standard;
@@ -91,7 +92,7 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
         this.mating = mating;
         this.tolerance = tolerance == null || tolerance.isBlank() ? null : tolerance.trim();
         if (cornerAngle != null && !(Double.isFinite(cornerAngle) && cornerAngle > 0 && cornerAngle < 180)) {
-            throw new IllegalArgumentException("cornerAngle must be between 0 and 180 degrees (exclusive), got " + cornerAngle);
+            throw new IllegalArgumentException("cornerAngle must be between 0 and 180 degrees (exclusive), got " + DecimalText.exact(cornerAngle));
         }
         this.cornerAngle = cornerAngle;
     }
@@ -147,13 +148,13 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
                 throw new IllegalArgumentException("load must be tension, bending or torsion, got '" + load + "'");
             }
             if (!(Double.isFinite(bigD) && Double.isFinite(smallD) && smallD > 0 && bigD > smallD)) {
-                throw new IllegalArgumentException("need D > d > 0, got D=" + bigD + ", d=" + smallD);
+                throw new IllegalArgumentException("need D > d > 0, got D=" + DecimalText.exact(bigD) + ", d=" + DecimalText.exact(smallD));
             }
             if (targetKt != null && !(Double.isFinite(targetKt) && targetKt >= 1)) {
-                throw new IllegalArgumentException("targetKt must be at least 1, got " + targetKt);
+                throw new IllegalArgumentException("targetKt must be at least 1, got " + DecimalText.exact(targetKt));
             }
             if (targetKf != null && !(Double.isFinite(targetKf) && targetKf >= 1)) {
-                throw new IllegalArgumentException("targetKf must be at least 1, got " + targetKf);
+                throw new IllegalArgumentException("targetKf must be at least 1, got " + DecimalText.exact(targetKf));
             }
             if (targetKf != null && ultimateStrength == null) {
                 throw new IllegalArgumentException("targetKf needs the material's ultimateStrength (for the notch sensitivity)");
@@ -189,7 +190,7 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
         public Strength(@JsonProperty(value = "value", required = true) double value,
                         @JsonProperty(value = "units", required = true) String units) {
             if (!(Double.isFinite(value) && value > 0)) {
-                throw new IllegalArgumentException("strength must be greater than zero, got " + value);
+                throw new IllegalArgumentException("strength must be greater than zero, got " + DecimalText.exact(value));
             }
             if (!"MPa".equals(units) && !"ksi".equals(units)) {
                 throw new IllegalArgumentException("strength units must be MPa or ksi, got '" + units + "'");
@@ -224,10 +225,10 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
                 throw new IllegalArgumentException("angle applies only to a chamfer corner");
             }
             if (!(Double.isFinite(size) && size > 0)) {
-                throw new IllegalArgumentException("size must be greater than zero, got " + size);
+                throw new IllegalArgumentException("size must be greater than zero, got " + DecimalText.exact(size));
             }
             if (angle != null && !(angle > 0 && angle < 90)) {
-                throw new IllegalArgumentException("angle must be between 0 and 90 degrees, got " + angle);
+                throw new IllegalArgumentException("angle must be between 0 and 90 degrees, got " + DecimalText.exact(angle));
             }
             this.corner = corner;
             this.size = size;

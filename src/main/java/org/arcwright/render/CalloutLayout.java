@@ -10,6 +10,7 @@ import org.arcwright.callout.Callout;
 import org.arcwright.callout.DatumReference;
 import org.arcwright.callout.Extent;
 import org.arcwright.callout.ProfileTier;
+import org.arcwright.io.DecimalText;
 import org.arcwright.templates.CalloutText;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
@@ -31,7 +32,7 @@ public final class CalloutLayout {
 
     public CalloutLayout(DrawingFont font, double letterHeight) {
         this.font = Objects.requireNonNull(font, "font");
-        if (!(letterHeight > 0)) throw new IllegalArgumentException("letter height must be > 0, got " + letterHeight);
+        if (!(letterHeight > 0)) throw new IllegalArgumentException("letter height must be > 0, got " + DecimalText.exact(letterHeight));
         this.h = letterHeight;
     }
 

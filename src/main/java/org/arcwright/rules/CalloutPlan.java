@@ -1,5 +1,6 @@
 package org.arcwright.rules;
 
+import org.arcwright.io.DecimalText;
 import org.arcwright.model.Keys;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonInclude;
@@ -154,7 +155,7 @@ public record CalloutPlan(CalloutKind callout, DatumChoice datums, Extent.Kind e
 
         public Sizing {
             if (!(Double.isFinite(factor) && factor > 0 && factor <= 10)) {
-                throw new IllegalArgumentException("factor must be greater than 0 and at most 10, got " + factor);
+                throw new IllegalArgumentException("factor must be greater than 0 and at most 10, got " + DecimalText.exact(factor));
             }
         }
     }

@@ -1,6 +1,7 @@
 package org.arcwright.rules;
 
 import java.util.Collections;
+import org.arcwright.io.DecimalText;
 import org.arcwright.model.Process;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonProperty;
@@ -86,7 +87,7 @@ public record CapabilityTable(String id, String title, String source, Map<String
                     @JsonProperty(value = "plusMinus", required = true) double plusMinus) {
             if (upTo != null && !(upTo > 0)) throw new IllegalArgumentException("upTo must be greater than zero");
             if (!(Double.isFinite(plusMinus) && plusMinus > 0)) {
-                throw new IllegalArgumentException("plusMinus must be greater than zero, got " + plusMinus);
+                throw new IllegalArgumentException("plusMinus must be greater than zero, got " + DecimalText.exact(plusMinus));
             }
             this.upTo = upTo;
             this.plusMinus = plusMinus;

@@ -7,6 +7,7 @@ import java.util.LinkedHashSet;
 import java.util.List;
 import java.util.Map;
 import java.util.Set;
+import org.arcwright.io.DecimalText;
 
 /**
  * A test on one fact's value. In a rule file a condition is written as:
@@ -65,10 +66,10 @@ public sealed interface Condition {
         @Override
         public String toString() {
             List<String> parts = new ArrayList<>();
-            if (min != null) parts.add(">= " + min);
-            if (above != null) parts.add("> " + above);
-            if (max != null) parts.add("<= " + max);
-            if (below != null) parts.add("< " + below);
+            if (min != null) parts.add(">= " + DecimalText.exact(min));
+            if (above != null) parts.add("> " + DecimalText.exact(above));
+            if (max != null) parts.add("<= " + DecimalText.exact(max));
+            if (below != null) parts.add("< " + DecimalText.exact(below));
             return String.join(" and ", parts);
         }
     }

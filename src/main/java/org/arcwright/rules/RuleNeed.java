@@ -3,6 +3,7 @@ package org.arcwright.rules;
 import com.fasterxml.jackson.annotation.JsonCreator;
 import com.fasterxml.jackson.annotation.JsonInclude;
 import com.fasterxml.jackson.annotation.JsonProperty;
+import org.arcwright.io.DecimalText;
 import org.arcwright.tolerance.Units;
 
 /**
@@ -58,7 +59,7 @@ public record RuleNeed(Need.Kind id, Double min, Double max, Units units, String
         Double v = min != null ? min : max;
         if (v != null) {
             if (!(Double.isFinite(v) && v > 0)) {
-                throw new IllegalArgumentException((min != null ? "min" : "max") + " must be a positive length, got " + v);
+                throw new IllegalArgumentException((min != null ? "min" : "max") + " must be a positive length, got " + DecimalText.exact(v));
             }
             if (units == null) throw new IllegalArgumentException("units (mm or in) must be given with min or max");
         }

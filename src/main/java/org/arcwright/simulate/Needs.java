@@ -15,11 +15,11 @@ import org.arcwright.io.InputProblem;
  */
 public record Needs(double minRadius, double maxRadius, double maxPositionError, double maxStep) {
     public Needs {
-        if (!(minRadius >= 0) || !Double.isFinite(minRadius)) throw InputProblem.ofField("minRadius", "must be zero or more, got " + minRadius);
-        if (!(maxRadius > 0)) throw InputProblem.ofField("maxRadius", "must be above zero, got " + maxRadius);
-        if (maxRadius < minRadius) throw InputProblem.ofField("maxRadius", "is smaller than minRadius (" + maxRadius + " < " + minRadius + ")");
-        if (!Double.isNaN(maxPositionError) && !(maxPositionError >= 0)) throw InputProblem.ofField("maxPositionError", "must be zero or more, got " + maxPositionError);
-        if (!Double.isNaN(maxStep) && !(maxStep >= 0)) throw InputProblem.ofField("maxStep", "must be zero or more, got " + maxStep);
+        if (!(minRadius >= 0) || !Double.isFinite(minRadius)) throw InputProblem.ofField("minRadius", "must be zero or more, got " + DecimalText.exact(minRadius));
+        if (!(maxRadius > 0)) throw InputProblem.ofField("maxRadius", "must be above zero, got " + DecimalText.exact(maxRadius));
+        if (maxRadius < minRadius) throw InputProblem.ofField("maxRadius", "is smaller than minRadius (" + DecimalText.exact(maxRadius) + " < " + DecimalText.exact(minRadius) + ")");
+        if (!Double.isNaN(maxPositionError) && !(maxPositionError >= 0)) throw InputProblem.ofField("maxPositionError", "must be zero or more, got " + DecimalText.exact(maxPositionError));
+        if (!Double.isNaN(maxStep) && !(maxStep >= 0)) throw InputProblem.ofField("maxStep", "must be zero or more, got " + DecimalText.exact(maxStep));
     }
 
     /** Whether the true part meets every need. */

@@ -1,6 +1,6 @@
 package org.arcwright.simulate;
 
-import java.util.Locale;
+import org.arcwright.io.DecimalText;
 
 /**
  * One simulated part's true geometry: the truth the function is judged on.
@@ -28,10 +28,10 @@ public record Part(int index, double radius, double dx, double dy, double flatFr
     /** A short description for example lists, in the given unit. */
     public String describe(String unit) {
         StringBuilder sb = new StringBuilder("part ").append(index + 1).append(": R ")
-                .append(String.format(Locale.ROOT, "%.4f", radius)).append(' ').append(unit);
-        if (hasFlat()) sb.append(String.format(Locale.ROOT, ", flat %.0f-%.0f %% of the sweep", 100 * flatFrom, 100 * flatTo));
-        if (step > 0) sb.append(String.format(Locale.ROOT, ", step %.4f %s at leg %s", step, unit, stepOnB ? "B" : "A"));
-        if (positionError() > 0) sb.append(String.format(Locale.ROOT, ", off place %.4f %s", positionError(), unit));
+                .append(DecimalText.fixed(radius, 4)).append(' ').append(unit);
+        if (hasFlat()) sb.append(", flat ").append(DecimalText.percent(flatFrom, 0)).append('-').append(DecimalText.percent(flatTo, 0)).append(" % of the sweep");
+        if (step > 0) sb.append(", step ").append(DecimalText.fixed(step, 4)).append(' ').append(unit).append(" at leg ").append(stepOnB ? "B" : "A");
+        if (positionError() > 0) sb.append(", off place ").append(DecimalText.fixed(positionError(), 4)).append(' ').append(unit);
         return sb.toString();
     }
 }

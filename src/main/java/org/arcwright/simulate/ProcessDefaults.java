@@ -6,6 +6,7 @@ import java.util.LinkedHashMap;
 import java.util.Map;
 import java.util.Objects;
 import java.util.Optional;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.pack.PackStack;
 import org.arcwright.pack.PackTables;
@@ -29,7 +30,7 @@ public record ProcessDefaults(String id, String source, double radiusSdDivisor, 
 
     public ProcessDefaults {
         Objects.requireNonNull(id, "id");
-        if (!(radiusSdDivisor > 0)) throw InputProblem.ofField("radiusSdDivisor", "must be above zero, got " + radiusSdDivisor);
+        if (!(radiusSdDivisor > 0)) throw InputProblem.ofField("radiusSdDivisor", "must be above zero, got " + DecimalText.exact(radiusSdDivisor));
         processes = Map.copyOf(processes);
     }
 

@@ -1,6 +1,7 @@
 package org.arcwright.simulate;
 
 import java.util.Objects;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.Units;
 import org.arcwright.zone.Corner;
@@ -27,7 +28,7 @@ public record ProcessModel(Units units, Corner corner, double nominalRadius, Sca
     public ProcessModel {
         Objects.requireNonNull(units, "units");
         if (corner == null) throw InputProblem.ofField("corner", "missing");
-        if (!(nominalRadius > 0) || !Double.isFinite(nominalRadius)) throw InputProblem.ofField("nominalRadius", "must be above zero, got " + nominalRadius);
+        if (!(nominalRadius > 0) || !Double.isFinite(nominalRadius)) throw InputProblem.ofField("nominalRadius", "must be above zero, got " + DecimalText.exact(nominalRadius));
         if (radius == null) throw InputProblem.ofField("process.radius", "missing; give {\"mean\": .., \"sd\": ..}");
         nonNegative(positionSd, "process.position.sd");
         nonNegative(noise, "process.noise");
@@ -42,11 +43,11 @@ public record ProcessModel(Units units, Corner corner, double nominalRadius, Sca
     }
 
     static void nonNegative(double v, String field) {
-        if (!(v >= 0) || !Double.isFinite(v)) throw InputProblem.ofField(field, "must be zero or more, got " + v);
+        if (!(v >= 0) || !Double.isFinite(v)) throw InputProblem.ofField(field, "must be zero or more, got " + DecimalText.exact(v));
     }
 
     static void fraction(double v, String field) {
-        if (!(v >= 0 && v <= 1)) throw InputProblem.ofField(field, "must be a fraction from 0 to 1, got " + v);
+        if (!(v >= 0 && v <= 1)) throw InputProblem.ofField(field, "must be a fraction from 0 to 1, got " + DecimalText.exact(v));
     }
 
     /**
@@ -57,7 +58,7 @@ public record ProcessModel(Units units, Corner corner, double nominalRadius, Sca
      */
     public record Scatter(double mean, double sd) {
         public Scatter {
-            if (!(mean > 0) || !Double.isFinite(mean)) throw InputProblem.ofField("mean", "must be above zero, got " + mean);
+            if (!(mean > 0) || !Double.isFinite(mean)) throw InputProblem.ofField("mean", "must be above zero, got " + DecimalText.exact(mean));
             nonNegative(sd, "sd");
         }
     }
@@ -78,8 +79,8 @@ public record ProcessModel(Units units, Corner corner, double nominalRadius, Sca
             fraction(widthMax, "width");
             fraction(centreMin, "centre");
             fraction(centreMax, "centre");
-            if (widthMax < widthMin) throw InputProblem.ofField("width", "[min, max] out of order: " + widthMin + " > " + widthMax);
-            if (centreMax < centreMin) throw InputProblem.ofField("centre", "[min, max] out of order: " + centreMin + " > " + centreMax);
+            if (widthMax < widthMin) throw InputProblem.ofField("width", "[min, max] out of order: " + DecimalText.exact(widthMin) + " > " + DecimalText.exact(widthMax));
+            if (centreMax < centreMin) throw InputProblem.ofField("centre", "[min, max] out of order: " + DecimalText.exact(centreMin) + " > " + DecimalText.exact(centreMax));
             if (rate > 0 && !(widthMax > 0)) throw InputProblem.ofField("width", "a flat needs a width above zero");
         }
     }
@@ -97,7 +98,7 @@ public record ProcessModel(Units units, Corner corner, double nominalRadius, Sca
             fraction(rate, "rate");
             nonNegative(sizeMin, "size");
             nonNegative(sizeMax, "size");
-            if (sizeMax < sizeMin) throw InputProblem.ofField("size", "[min, max] out of order: " + sizeMin + " > " + sizeMax);
+            if (sizeMax < sizeMin) throw InputProblem.ofField("size", "[min, max] out of order: " + DecimalText.exact(sizeMin) + " > " + DecimalText.exact(sizeMax));
         }
     }
 }

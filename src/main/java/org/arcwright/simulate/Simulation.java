@@ -4,6 +4,7 @@ import java.util.List;
 import java.util.Objects;
 import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionRequest;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -30,9 +31,9 @@ public record Simulation(ProcessModel model, Needs needs, List<InspectionCallout
         callouts = List.copyOf(callouts);
         if (parts < 1) throw InputProblem.ofField("parts", "must be at least 1, got " + parts);
         if (!Double.isNaN(resolution) && (!(resolution > 0) || !Double.isFinite(resolution))) {
-            throw InputProblem.ofField("resolution", "must be above zero, got " + resolution);
+            throw InputProblem.ofField("resolution", "must be above zero, got " + DecimalText.exact(resolution));
         }
-        if (!Double.isNaN(window) && !(window > 0 && Double.isFinite(window))) throw InputProblem.ofField("window", "must be above zero, got " + window);
+        if (!Double.isNaN(window) && !(window > 0 && Double.isFinite(window))) throw InputProblem.ofField("window", "must be above zero, got " + DecimalText.exact(window));
     }
 
     /** Chance, at most, that measuring noise alone puts any point of a perfect section beyond the default slack. */

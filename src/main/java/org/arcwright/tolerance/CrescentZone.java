@@ -80,8 +80,8 @@ public record CrescentZone(double includedAngleDeg, double factor, double width,
             throw InputProblem.ofField("radius", "radii must be finite numbers");
         }
         if (rMin < 0 || rNominal < 0 || rMin > rMax) {
-            throw InputProblem.ofField("radius", "need 0 <= min <= max and a nominal of 0 or more, got " + rMin
-                    + ", " + rNominal + ", " + rMax);
+            throw InputProblem.ofField("radius", "need 0 <= min <= max and a nominal of 0 or more, got " + DecimalText.exact(rMin)
+                    + ", " + DecimalText.exact(rNominal) + ", " + DecimalText.exact(rMax));
         }
         double k = factor(includedAngleDeg);
         double lo = (rMin - rNominal) * k;

@@ -7,6 +7,7 @@ import java.math.RoundingMode;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Locale;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -97,7 +98,7 @@ public enum DrawingStyle {
      * @param maxPlaces decimals kept at most, 0 to 6
      */
     public String formatValue(double value, Units units, int maxPlaces) {
-        if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + value);
+        if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + DecimalText.exact(value));
         if (maxPlaces < 0 || maxPlaces > 6) throw new IllegalArgumentException("places must be 0 to 6, got " + maxPlaces);
         BigDecimal v = BigDecimal.valueOf(value).setScale(maxPlaces, RoundingMode.HALF_EVEN).stripTrailingZeros();
         if (v.signum() == 0) v = BigDecimal.ZERO;
@@ -137,11 +138,11 @@ public enum DrawingStyle {
 
     /**
      * A dimensionless figure (a stress concentration factor, a ratio) with exactly {@code places}
-     * decimals, rounded half-even: the same in both styles.
+     * decimals, rounded half-even ({@link DecimalText#fixed}): the same in both styles.
      */
     public static String formatFigure(double value, int places) {
-        if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + value);
-        return BigDecimal.valueOf(value).setScale(places, RoundingMode.HALF_EVEN).toPlainString();
+        if (!Double.isFinite(value)) throw new IllegalArgumentException("not a finite number: " + DecimalText.exact(value));
+        return DecimalText.fixed(value, places);
     }
 
     /** The text of a radius with limits as this style draws it, e.g. {@code R1.8-2.2} or {@code CR 1.8-2.2}. */

@@ -8,6 +8,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Locale;
 import java.util.Map;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -39,7 +40,7 @@ public record GeneralToleranceTable(String id, String title, String source, Tole
             SizeRange r = ranges.get(i);
             if (prevHi == null || r.over() == null || !prevHi.equals(r.over())) {
                 throw new IllegalArgumentException("ranges[" + i + "] must start 'over' where the previous one ends ("
-                        + prevHi + ")");
+                        + (prevHi == null ? "it has no upTo" : DecimalText.exact(prevHi)) + ")");
             }
         }
         for (var e : classes.entrySet()) {
@@ -49,7 +50,7 @@ public record GeneralToleranceTable(String id, String title, String source, Tole
             }
             for (Double v : e.getValue()) {
                 if (v != null && !(Double.isFinite(v) && v > 0)) {
-                    throw new IllegalArgumentException("class '" + e.getKey() + "' has a value that is not a positive number: " + v);
+                    throw new IllegalArgumentException("class '" + e.getKey() + "' has a value that is not a positive number: " + DecimalText.exact(v));
                 }
             }
         }
@@ -76,8 +77,8 @@ public record GeneralToleranceTable(String id, String title, String source, Tole
             throw InputProblem.ofField("class", "unknown tolerance class '" + toleranceClass + "' for " + title
                     + "; known classes: " + String.join(", ", classes.keySet()));
         }
-        if (!Double.isFinite(size)) throw InputProblem.ofField("size", "not a finite number: " + size);
-        if (size <= 0) throw InputProblem.ofField("size", "must be greater than zero, got " + size);
+        if (!Double.isFinite(size)) throw InputProblem.ofField("size", "not a finite number: " + DecimalText.exact(size));
+        if (size <= 0) throw InputProblem.ofField("size", "must be greater than zero, got " + DecimalText.exact(size));
         for (int i = 0; i < ranges.size(); i++) {
             SizeRange r = ranges.get(i);
             if (r.contains(size)) {
@@ -89,7 +90,7 @@ public record GeneralToleranceTable(String id, String title, String source, Tole
                 return new GeneralTolerance(id, source, cls, quantity, size, r.describe(), v);
             }
         }
-        throw InputProblem.ofField("size", size + " " + units + " lies outside every range of " + title + " ("
+        throw InputProblem.ofField("size", DecimalText.exact(size) + " " + units + " lies outside every range of " + title + " ("
                 + ranges.get(0).describe() + " to " + ranges.get(ranges.size() - 1).describe()
                 + "): tolerance it individually" + (note == null ? "" : "; " + note));
     }

@@ -5,6 +5,7 @@ import java.math.RoundingMode;
 import java.util.Objects;
 import java.util.Optional;
 import java.util.OptionalDouble;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -82,7 +83,7 @@ public record RadiusCallout(RadiusKind kind, Units units, ToleranceForm form) {
     }
 
     static BigDecimal decimal(double value, int places) {
-        if (!Double.isFinite(value)) throw InputProblem.ofField("radius", "not a finite number: " + value);
+        if (!Double.isFinite(value)) throw InputProblem.ofField("radius", "not a finite number: " + DecimalText.exact(value));
         return BigDecimal.valueOf(value).setScale(Math.max(0, places), RoundingMode.HALF_EVEN);
     }
 

@@ -22,7 +22,7 @@ public record SizeRange(Double from, Double over, Double upTo) {
         if (from != null && over != null) throw new IllegalArgumentException("give 'from' or 'over', not both");
         if (upTo != null && !Double.isFinite(upTo)) throw new IllegalArgumentException("upTo must be finite");
         double lo = from != null ? from : over != null ? over : Double.NEGATIVE_INFINITY;
-        if (upTo != null && upTo <= lo) throw new IllegalArgumentException("upTo " + upTo + " must exceed " + lo);
+        if (upTo != null && upTo <= lo) throw new IllegalArgumentException("upTo " + DecimalText.exact(upTo) + " must exceed " + DecimalText.exact(lo));
         this.from = from;
         this.over = over;
         this.upTo = upTo;

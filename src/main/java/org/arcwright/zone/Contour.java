@@ -1,6 +1,7 @@
 package org.arcwright.zone;
 
 import java.util.List;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -42,7 +43,7 @@ public final class Contour {
         for (int i = 1; i < segments.size(); i++) {
             if (segments.get(i - 1).end().distance(segments.get(i).start()) > 1e-9 * Math.max(1, scale)) {
                 throw InputProblem.ofField("contour.segments[" + i + "]", "does not start where the previous segment ends ("
-                        + segments.get(i - 1).end() + ")");
+                        + where(segments.get(i - 1).end()) + ")");
             }
         }
         this.segments = segments;
@@ -230,5 +231,10 @@ public final class Contour {
             out[3] = k * (px - cx[i]) / r;
             out[4] = k * (py - cy[i]) / r;
         }
+    }
+
+    /** A computed point in a message: at most 6 places, so an arc's end reads 2, not 2.0000000000000004 or 1.2E-16. */
+    private static String where(Point2 p) {
+        return "[" + DecimalText.places(p.x(), 6) + ", " + DecimalText.places(p.y(), 6) + "]";
     }
 }

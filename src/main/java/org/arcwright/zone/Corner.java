@@ -38,8 +38,8 @@ public record Corner(Point2 vertex, Point2 legA, Point2 legB, BlendKind kind) {
         double deg = Math.toDegrees(Math.acos(Math.max(-1, Math.min(1, legA.dot(legB)))));
         if (deg < MIN_ANGLE_DEG || deg > MAX_ANGLE_DEG) {
             throw InputProblem.ofField("legB", "the legs are parallel or nearly so (included angle "
-                    + DecimalText.places(deg, 3) + "°); need " + MIN_ANGLE_DEG + "° to "
-                    + MAX_ANGLE_DEG + "°");
+                    + DecimalText.places(deg, 3) + "°); need " + DecimalText.exact(MIN_ANGLE_DEG) + "° to "
+                    + DecimalText.exact(MAX_ANGLE_DEG) + "°");
         }
     }
 
@@ -113,7 +113,7 @@ public record Corner(Point2 vertex, Point2 legA, Point2 legB, BlendKind kind) {
      *     distance
      */
     public Contour contour(double r, double reach) {
-        if (!(r >= 0) || !Double.isFinite(r)) throw InputProblem.ofField("nominalRadius", "must be zero or more, got " + r);
+        if (!(r >= 0) || !Double.isFinite(r)) throw InputProblem.ofField("nominalRadius", "must be zero or more, got " + DecimalText.exact(r));
         double t = tangentDistance(r);
         double far = Math.max(reach, 2 * t + 1e-9);
         Point2 farA = vertex.plus(legA.times(far));

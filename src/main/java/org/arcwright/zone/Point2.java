@@ -1,12 +1,13 @@
 package org.arcwright.zone;
 
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /** A point or vector of the section plane, in drawing units. Immutable. */
 public record Point2(double x, double y) {
     public Point2 {
         if (!Double.isFinite(x) || !Double.isFinite(y)) {
-            throw InputProblem.ofField(null, "coordinates must be finite numbers, got [" + x + ", " + y + "]");
+            throw InputProblem.ofField(null, "coordinates must be finite numbers, got [" + DecimalText.exact(x) + ", " + DecimalText.exact(y) + "]");
         }
     }
 
@@ -36,5 +37,5 @@ public record Point2(double x, double y) {
     public double distance(Point2 o) { return Math.hypot(x - o.x, y - o.y); }
 
     @Override
-    public String toString() { return "[" + x + ", " + y + "]"; }
+    public String toString() { return "[" + DecimalText.exact(x) + ", " + DecimalText.exact(y) + "]"; }
 }

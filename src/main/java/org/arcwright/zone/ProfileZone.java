@@ -1,5 +1,6 @@
 package org.arcwright.zone;
 
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /**
@@ -17,9 +18,9 @@ import org.arcwright.io.InputProblem;
  */
 public record ProfileZone(double width, double outward) {
     public ProfileZone {
-        if (!Double.isFinite(width) || width <= 0) throw InputProblem.ofField("zone", "must be above zero, got " + width);
+        if (!Double.isFinite(width) || width <= 0) throw InputProblem.ofField("zone", "must be above zero, got " + DecimalText.exact(width));
         if (!Double.isFinite(outward) || outward < 0 || outward > width) {
-            throw InputProblem.ofField("outward", "must be between 0 and the zone (" + width + "), got " + outward);
+            throw InputProblem.ofField("outward", "must be between 0 and the zone (" + DecimalText.exact(width) + "), got " + DecimalText.exact(outward));
         }
     }
 
@@ -29,7 +30,7 @@ public record ProfileZone(double width, double outward) {
     /** From the ISO offset-zone form: centre offset {@code offset}, positive out of the material. */
     public static ProfileZone isoOffset(double width, double offset) {
         if (!Double.isFinite(offset) || Math.abs(offset) > width / 2) {
-            throw InputProblem.ofField("offset", "must lie within ±half the zone (" + width / 2 + "), got " + offset);
+            throw InputProblem.ofField("offset", "must lie within ±half the zone (" + DecimalText.exact(width / 2) + "), got " + DecimalText.exact(offset));
         }
         return new ProfileZone(width, offset + width / 2);
     }

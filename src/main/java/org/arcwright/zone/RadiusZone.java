@@ -35,9 +35,9 @@ public final class RadiusZone {
 
     public RadiusZone(Corner corner, double min, double max, double resolution) {
         Objects.requireNonNull(corner, "corner");
-        if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + min);
-        if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + max);
-        if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + max + " < " + min + ")");
+        if (!Double.isFinite(min) || min < 0) throw InputProblem.ofField("callout.min", "must be zero or more, got " + DecimalText.exact(min));
+        if (!Double.isFinite(max) || max <= 0) throw InputProblem.ofField("callout.max", "must be above zero, got " + DecimalText.exact(max));
+        if (max < min) throw InputProblem.ofField("callout.max", "is smaller than min (" + DecimalText.exact(max) + " < " + DecimalText.exact(min) + ")");
         if (!(resolution > 0)) throw InputProblem.ofField("resolution", "must be above zero");
         this.corner = corner;
         this.min = min;
@@ -117,7 +117,7 @@ public final class RadiusZone {
         }
         if (inside == 0) {
             throw InputProblem.ofField("points", "no point lies within the radius zone's extent (between the tangent points of the "
-                    + max + " arc, " + DecimalText.significant(reach, 4) + " from the vertex along each leg)");
+                    + DecimalText.exact(max) + " arc, " + DecimalText.significant(reach, 4) + " from the vertex along each leg)");
         }
         boolean pass = outside == 0 && smallest >= min - resolution && largest <= max + resolution;
         return new RadiusEnvelope(smallest, largest, inside, onLegs, outside, n - inside, pass, worst, worstExcess,

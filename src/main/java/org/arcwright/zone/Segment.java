@@ -1,5 +1,6 @@
 package org.arcwright.zone;
 
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 
 /** One piece of a nominal contour: a straight line or a circular arc, traversed in a direction. */
@@ -49,7 +50,7 @@ public sealed interface Segment permits Segment.Line, Segment.Arc {
      */
     record Arc(Point2 centre, double radius, double startAngle, double sweep) implements Segment {
         public Arc {
-            if (!(radius > 0) || !Double.isFinite(radius)) throw InputProblem.ofField("radius", "an arc needs a radius above zero, got " + radius);
+            if (!(radius > 0) || !Double.isFinite(radius)) throw InputProblem.ofField("radius", "an arc needs a radius above zero, got " + DecimalText.exact(radius));
             if (!(Math.abs(sweep) > 0) || Math.abs(sweep) >= 2 * Math.PI) throw InputProblem.ofField("segment", "arc sweep must be non-zero and below a full turn");
         }
 

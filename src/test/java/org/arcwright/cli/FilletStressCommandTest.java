@@ -107,7 +107,7 @@ class FilletStressCommandTest {
                  "D": 30, "d": 32, "r": 1}
                 """);
         assertThat(run("fillet-stress", f.toString())).isEqualTo(Cli.BAD_INPUT);
-        assertThat(err.toString()).contains("fillet.json:2:").contains("D: the larger size D = 30.0 must exceed");
+        assertThat(err.toString()).contains("fillet.json:2:").contains("D: the larger size D = 30 must exceed");
     }
 
     @Test
@@ -159,7 +159,7 @@ class FilletStressCommandTest {
                  "rMin": 2, "rMax": 4}
                 """);
         assertThat(run("fillet-stress", f.toString())).isEqualTo(Cli.BAD_INPUT);
-        assertThat(err.toString()).contains("fillet.json:2:").contains("rMax: fillet radius 4.0 is larger than the step");
+        assertThat(err.toString()).contains("fillet.json:2:").contains("rMax: fillet radius 4 is larger than the step");
     }
 
     @Test

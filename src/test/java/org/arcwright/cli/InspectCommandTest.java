@@ -220,4 +220,35 @@ class InspectCommandTest {
             assertThat(err.toString()).as(c[0]).contains(c[1]).contains("bad.json");
         }
     }
+
+    @Test
+    void coordinatesInOneReportReadAtOneResolution() {
+        // a CMM report lists coordinates at fixed places per unit (common practice): 0.0001 mm here
+        Pattern pair = Pattern.compile("(through|at|near|about) \\[([^\\]]*)\\]");
+        for (String example : new String[] {"bracket-round-r", "bracket-round-profile", "bracket-round-composite", "housing-fillet-profile"}) {
+            out.getBuffer().setLength(0);
+            run("inspect", "examples/inspect/" + example + ".json");
+            Matcher m = pair.matcher(out.toString());
+            int pairs = 0;
+            while (m.find()) {
+                pairs++;
+                assertThat(m.group(2)).as(example + ": " + m.group()).matches("-?\\d+\\.\\d{4}, -?\\d+\\.\\d{4}");
+            }
+            assertThat(pairs).as(example).isGreaterThanOrEqualTo(4);
+        }
+        out.getBuffer().setLength(0);
+        run("inspect", "examples/inspect/bracket-round-r.json");
+        assertThat(out.toString()).contains("a through [4.1306, 0.0002]").contains("b through [-0.0001, 4.2078]");
+        // stations along the contour are positions too
+        out.getBuffer().setLength(0);
+        run("inspect", "examples/inspect/bracket-round-cr-flat.json");
+        Matcher s = Pattern.compile("s = (\\S+) to (\\S+) mm").matcher(out.toString());
+        int stations = 0;
+        while (s.find()) {
+            stations++;
+            assertThat(s.group(1) + " " + s.group(2)).as(s.group()).matches("\\d+\\.\\d{4} \\d+\\.\\d{4}");
+        }
+        assertThat(stations).isGreaterThanOrEqualTo(5);
+        assertThat(out.toString()).contains("window 1 (s = 0.0002 to 0.5763 mm)");
+    }
 }

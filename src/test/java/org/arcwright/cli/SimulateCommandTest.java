@@ -12,6 +12,7 @@ import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import org.arcwright.simulate.Share;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
@@ -99,5 +100,16 @@ class SimulateCommandTest {
         CliRun r = CliRun.of("simulate", write(FILE).toString(), "--parts", "0");
         assertThat(r.exitCode()).isEqualTo(Cli.BAD_INPUT);
         assertThat(r.err()).contains("--parts");
+    }
+
+    @Test
+    void sharesOnATieRoundHalfToEvenLikeEveryOtherFigure() {
+        // 16,633 of 20,000 parts is 83.165 %: half to even, ISO 80000-1:2009 Annex B, rule A (from memory);
+        // the Wilson bounds are the closed form of Share, checked in ShareTest
+        Share tie = Share.of(16_633, 20_000);
+        assertThat(SimulateCommand.pct(tie.share())).isEqualTo("83.16 %");
+        assertThat(SimulateCommand.cell(tie)).startsWith(" 83.16 % (");
+        assertThat(AdviceSimulation.cell(tie)).startsWith("83.16 % [");
+        assertThat(SimulateCommand.cell(Share.of(0, 20_000))).startsWith("  0.00 % (0.00-0.02)");
     }
 }

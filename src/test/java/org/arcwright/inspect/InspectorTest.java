@@ -29,6 +29,27 @@ class InspectorTest {
     }
 
     @Test
+    void reportFiguresRoundTheDecimalAsPrintedNotItsBinaryValue() {
+        // half to even on the printed decimal: ISO 80000-1:2009 Annex B, rule A (from memory); the
+        // binary values are 0.00123434999... and 1.00005000...01, which rounded the other way before
+        assertThat(Inspector.fmt(0.00123435)).isEqualTo("0.0012344");
+        assertThat(Inspector.fmt(1.00005)).isEqualTo("1");
+        assertThat(Inspector.fmt(0.0086175)).isEqualTo("0.0086175");
+        assertThat(Inspector.fmt(Double.NaN)).isEqualTo("none");
+        assertThat(Inspector.fmt(Double.POSITIVE_INFINITY)).isEqualTo("infinite (flat)");
+    }
+
+    @Test
+    void coordinatesHaveFixedPlacesByUnit() {
+        // fixed places per unit, as a CMM report lists points (common practice); ties half to even
+        assertThat(Inspector.coordinate(0.0002465, Units.MM)).isEqualTo("0.0002");
+        assertThat(Inspector.coordinate(4.131, Units.MM)).isEqualTo("4.1310");
+        assertThat(Inspector.coordinate(-0.00003862, Units.MM)).isEqualTo("0.0000");
+        assertThat(Inspector.coordinate(0.0002465, Units.INCH)).isEqualTo("0.00025");
+        assertThat(Inspector.coordinate(Double.NaN, Units.INCH)).isEqualTo("none");
+    }
+
+    @Test
     void flatInsideTheZonePassesRadiusButFailsControlledRadius() {
         // ASME Y14.5-2018 controlled radius (from memory): no flats or reversals; the R zone alone
         // accepts any contour between the limit arcs.

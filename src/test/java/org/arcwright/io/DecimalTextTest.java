@@ -9,7 +9,7 @@ import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
 /**
- * The four ways a number is written. Expected texts are worked by hand; the tie rule (half to even)
+ * The ways a number is written. Expected texts are worked by hand; the tie rule (half to even)
  * is ISO 80000-1:2009 Annex B, rule A (from memory); no exponent and no trailing zeros on a report
  * are common practice.
  */
@@ -76,6 +76,21 @@ class DecimalTextTest {
     })
     void fixedKeepsThePlacesForAColumn(double v, int places, String expected) {
         assertEquals(expected, DecimalText.fixed(v, places));
+    }
+
+    @ParameterizedTest(name = "percent({0}, {1}) = {2}")
+    @CsvSource({
+            "0.0725, 2, 7.25",      // 100 * 0.0725 is 7.249999999999999 in binary; the share is not
+            "0.0725, 1, 7.2",       // a tie: half to even
+            "0.0735, 1, 7.4",
+            "0.83165, 2, 83.16",    // 16,633 of 20,000 parts: a tie
+            "0.5, 2, 50.00",
+            "1, 0, 100",
+            "0, 2, 0.00",
+            "0.00001, 2, 0.00",
+    })
+    void percentMovesThePointOfTheShare(double share, int places, String expected) {
+        assertEquals(expected, DecimalText.percent(share, places));
     }
 
     @Test

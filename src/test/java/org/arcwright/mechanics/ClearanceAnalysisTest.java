@@ -92,7 +92,7 @@ class ClearanceAnalysisTest {
         assertThatThrownBy(() -> new MatingCorner.Radius(-1)).isInstanceOf(InputProblem.class)
                 .hasMessageContaining("mating.rMin");
         assertThatThrownBy(() -> check(1.2, 1.0, new MatingCorner.Radius(2))).isInstanceOf(InputProblem.class)
-                .hasMessageContaining("fillet.rMin");
+                .hasMessageContaining("fillet.rMin").hasMessageEndingWith("rMin = 1.2 exceeds rMax = 1"); // as typed, not 1.0
         assertThatThrownBy(() -> check(0.01, 0.02, new MatingCorner.Bearing(0.01))).isInstanceOf(InputProblem.class)
                 .hasMessageContaining("below the table's smallest");
     }

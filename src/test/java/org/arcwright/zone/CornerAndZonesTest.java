@@ -133,4 +133,20 @@ class CornerAndZonesTest {
         assertThat(ProfileZone.bilateral(0.1).isoOffset()).isZero();
         assertThatThrownBy(() -> ProfileZone.isoOffset(0.2, 0.15)).isInstanceOf(InputProblem.class);
     }
+
+    @Test
+    void badValuesAreEchoedAsTyped() {
+        // a message shows what the user typed, every digit and no more (DecimalText.exact): common practice
+        Corner c = corner(90, 0, BlendKind.FILLET);
+        assertThatThrownBy(() -> c.contour(-2.0, 10)).isInstanceOf(InputProblem.class)
+                .hasMessageEndingWith("must be zero or more, got -2");
+        assertThatThrownBy(() -> new RadiusZone(c, -1e-5, 2, 1e-6)).isInstanceOf(InputProblem.class)
+                .hasMessageEndingWith("must be zero or more, got -0.00001");
+        assertThatThrownBy(() -> new RadiusZone(c, 2.0, 1.0, 1e-6)).isInstanceOf(InputProblem.class)
+                .hasMessageEndingWith("is smaller than min (1 < 2)");
+        assertThatThrownBy(() -> new ProfileZone(0.1, 0.2)).isInstanceOf(InputProblem.class)
+                .hasMessageEndingWith("must be between 0 and the zone (0.1), got 0.2");
+        assertThatThrownBy(() -> ProfileZone.isoOffset(1e-4, 1.0)).isInstanceOf(InputProblem.class)
+                .hasMessageEndingWith("must lie within ±half the zone (0.00005), got 1");
+    }
 }

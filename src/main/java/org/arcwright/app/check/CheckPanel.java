@@ -60,6 +60,7 @@ import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.inspect.PointsCsv;
+import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.render.ContourPlot;
 import org.arcwright.worksheet.InspectionRecord;
@@ -552,31 +553,36 @@ public final class CheckPanel extends JPanel {
                 + "its chosen callout, " + callout.describe() + " (" + units + ").";
     }
 
-    private static String describe(InspectionResult r) {
+    /**
+     * The figures beside the plot, written as {@code arcwright inspect} writes them: the envelope rounded
+     * outward and the zone the points need rounded up ({@link Inspector#down}, {@link Inspector#up}), so
+     * a callout at a figure shown still passes; the least-squares radius to 4 significant digits.
+     */
+    static String describe(InspectionResult r) {
         String u = " " + r.request().units().symbol();
+        double res = r.request().resolution();
         StringBuilder sb = new StringBuilder();
         sb.append(r.request().points().size()).append(" points; lengths in").append(u).append('\n');
         if (r.worst() != null) {
             sb.append("Worst: ").append(r.worst().text()).append("\n");
         }
         if (r.radius() != null) {
-            sb.append("Radius envelope: ").append(length(r.radius().smallest(), u)).append(" to ")
-                    .append(length(r.radius().largest(), u)).append('\n');
+            sb.append("Radius envelope: ").append(length(Inspector.down(r.radius().smallest(), res), u)).append(" to ")
+                    .append(length(Inspector.up(r.radius().largest(), res), u)).append('\n');
         }
         if (r.fits() != null && r.fits().leastSquares() != null) {
-            sb.append("Least-squares radius: ").append(fmt(r.fits().leastSquares().circle().r())).append(u).append('\n');
+            double ls = r.fits().leastSquares().circle().r();
+            sb.append("Least-squares radius: ").append(length(Double.isNaN(ls) ? "none" : DecimalText.significant(ls, 4), u)).append('\n');
         }
-        if (r.profile() != null) sb.append("Zone the points need: ").append(fmt(r.profile().requiredZone())).append(u).append('\n');
+        if (r.profile() != null) {
+            sb.append("Zone the points need: ").append(length(Inspector.up(r.profile().requiredZone(), Inspector.PROFILE_SLACK), u)).append('\n');
+        }
         for (String n : r.notes()) sb.append("• ").append(n).append('\n');
         return sb.toString().strip();
     }
 
-    /** A length with its unit, or "none" (no unit) where the core found none. */
-    private static String length(double v, String unit) { return Double.isNaN(v) ? "none" : fmt(v) + unit; }
-
-    private static String fmt(double v) {
-        return Double.isNaN(v) ? "none" : Numbers.fixed(v, 4);
-    }
+    /** A figure with its unit, or "none" (no unit) where the core found none. */
+    private static String length(String figure, String unit) { return "none".equals(figure) ? figure : figure + unit; }
 
     private void keepVerdict() {
         RadiusFeature f = session.selected().orElse(null);

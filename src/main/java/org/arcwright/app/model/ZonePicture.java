@@ -2,6 +2,7 @@ package org.arcwright.app.model;
 
 import java.util.ArrayList;
 import java.util.List;
+import org.arcwright.io.DecimalText;
 import org.arcwright.model.BlendKind;
 import org.arcwright.tolerance.CrescentZone;
 import org.arcwright.zone.Corner;
@@ -42,7 +43,7 @@ public record ZonePicture(List<Point2> nominal, List<Point2> lower, List<Point2>
     /** The picture of {@code spec} at {@code magnification}, its figures in {@code units} (a symbol, e.g. mm). */
     public static ZonePicture of(ZoneSpec spec, double magnification, String units) {
         String u = units.isEmpty() ? "" : " " + units;
-        if (!(magnification >= 1)) throw new IllegalArgumentException("magnification must be at least 1, got " + magnification);
+        if (!(magnification >= 1)) throw new IllegalArgumentException("magnification must be at least 1, got " + DecimalText.exact(magnification));
         Corner k = viewCorner(spec.angleDeg(), spec.kind());
         double r = spec.nominal();
         double reach = 1.35 * k.tangentDistance(extentRadius(spec, magnification)) + 0.5 * r;

@@ -11,6 +11,8 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.concurrent.CompletableFuture;
 import java.util.concurrent.Executor;
+import java.util.function.BooleanSupplier;
+import java.util.function.Predicate;
 import java.util.function.Supplier;
 import javax.swing.DefaultListCellRenderer;
 import javax.swing.DefaultListModel;
@@ -119,6 +121,11 @@ public final class PracticeEditorPanel extends JPanel {
     /** What a form field said last when its text could not be written into the rule, or null. */
     private transient InputProblem formProblem;
     private final transient PacksPage packsPage;
+    private final transient ReloadingPage<RuleBook.Entry> rulePage = new ReloadingPage<>(entries, list, editor, this::ruleEdited,
+            () -> shownRule != null, () -> shownRule = null, this::validateNow, this::clearRule);
+    private final transient ReloadingPage<TemplatePreview.Entry> templatePage = new ReloadingPage<>(templates, templateList,
+            templateText, this::templateEdited, () -> shownTemplate != null, () -> shownTemplate = null, this::refreshPreview,
+            this::clearTemplate);
     private final JTabbedPane pages = new JTabbedPane();
 
     public PracticeEditorPanel(JsonFiles json, Executor background, WorksheetSession session, Supplier<Path> personalPack,
@@ -534,65 +541,57 @@ public final class PracticeEditorPanel extends JPanel {
                 : shownTemplate == null || creatingTemplate ? null : shownTemplate.name();
         selectTemplateAfterReload = null;
         // edits typed while the packs reloaded stay in the editor; only the list and the file behind it change
-        String typed = templateText.getText();
-        boolean edited = templateEdited();
-        reselecting = true;
-        try {
-            templates.clear();
-            for (TemplatePreview.Entry t : TemplatePreview.entries(packs)) templates.addElement(t);
-        } finally {
-            reselecting = false;
-        }
-        if (!creatingTemplate) {
-            shownTemplate = null;
-            TemplatePreview.Entry again = null;
-            for (int i = 0; i < templates.size(); i++) if (templates.get(i).name().equals(keepTemplate)) again = templates.get(i);
-            if (again != null) {
-                templateList.setSelectedValue(again, true);
-                if (edited) {
-                    loading = true;
-                    templateText.setText(typed);
-                    loading = false;
-                    refreshPreview();
-                }
-            } else {
-                clearTemplate();
-            }
-        }
+        refill(templatePage, TemplatePreview.entries(packs), t -> t.name().equals(keepTemplate), creatingTemplate);
         templateButtons();
         book = b;
         advisor = a;
         String keep = selectAfterReload != null ? selectAfterReload : shownRule == null || creatingRule ? null : shownRule.rule().id();
         selectAfterReload = null;
-        // as for templates, a rule edit typed while the packs reloaded stays in the editor
-        String typedRule = editor.getText();
-        boolean ruleEdited = ruleEdited();
+        refill(rulePage, b.entries(), e -> e.rule().id().equals(keep), creatingRule);
+        ruleButtons();
+    }
+
+    /**
+     * Refills a page's list from the reloaded packs and keeps the user's place: the entry {@code kept}
+     * names is selected again, which opens it from its (perhaps changed) file, and an edit typed before
+     * the reload is put back over it, so a reload never loses typing; when the entry is gone, the editor
+     * is cleared. A page holding a new entry not yet on disk ({@code creating}) keeps it untouched.
+     */
+    private <T> void refill(ReloadingPage<T> page, List<? extends T> fresh, Predicate<T> kept, boolean creating) {
+        String typed = page.text().getText();
+        boolean edited = page.edited().getAsBoolean();
         reselecting = true;
         try {
-            entries.clear();
-            for (RuleBook.Entry e : b.entries()) entries.addElement(e);
+            page.model().clear();
+            for (T t : fresh) page.model().addElement(t);
         } finally {
             reselecting = false;
         }
-        if (!creatingRule) {
-            shownRule = null;
-            int at = -1;
-            for (int i = 0; i < entries.size(); i++) if (entries.get(i).rule().id().equals(keep)) at = i;
-            if (at >= 0) {
-                list.setSelectedIndex(at);
-                list.ensureIndexIsVisible(at);
-                if (ruleEdited && shownRule != null) {
-                    loading = true;
-                    editor.setText(typedRule);
-                    loading = false;
-                    validateNow();
-                }
-            } else {
-                clearRule();
-            }
+        if (creating) return;
+        page.forget().run();
+        int at = -1;
+        for (int i = 0; i < page.model().size(); i++) if (kept.test(page.model().get(i))) at = i;
+        if (at < 0) {
+            page.clear().run();
+            return;
         }
-        ruleButtons();
+        page.view().setSelectedIndex(at);
+        page.view().ensureIndexIsVisible(at);
+        if (edited && page.opened().getAsBoolean()) {
+            loading = true;
+            page.text().setText(typed);
+            loading = false;
+            page.recheck().run();
+        }
     }
+
+    /**
+     * What the rule page and the template page share when the packs reload (see {@link #refill}): the
+     * list and its model, the editor whose typing must survive, and what each page means by an edit, an
+     * entry shown, forgetting it, checking the text again and clearing the editor.
+     */
+    private record ReloadingPage<T>(DefaultListModel<T> model, JList<T> view, JTextArea text, BooleanSupplier edited,
+                                    BooleanSupplier opened, Runnable forget, Runnable recheck, Runnable clear) {}
 
     /** Empties the rule editor when the rule it showed is gone (deleted). */
     private void clearRule() {

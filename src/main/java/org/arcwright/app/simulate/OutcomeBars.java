@@ -28,6 +28,7 @@ import org.arcwright.app.model.Numbers;
 import org.arcwright.app.widgets.ScrollablePanel;
 import org.arcwright.app.widgets.Themes;
 import org.arcwright.app.widgets.WrapLabel;
+import org.arcwright.io.DecimalText;
 import org.arcwright.services.CaseSimulations;
 import org.arcwright.simulate.CalloutResult;
 import org.arcwright.simulate.Outcome;
@@ -102,7 +103,7 @@ final class OutcomeBars {
             said.add("escapes " + pct(r.escapeShare()));
             said.add("false rejects " + pct(r.falseRejectShare()));
             if (r.indeterminate() > 0) said.add("no verdict " + pct(r.indeterminateShare()));
-            said.add(String.format(Locale.ROOT, "%.1f %% of the parts good", 100 * j.good().share()));
+            said.add(DecimalText.percent(j.good().share(), 1) + " % of the parts good");
             WrapLabel figures = new WrapLabel(String.join(" · ", said), "Label.font", "Arcwright.help.foreground");
             figures.setName("simulate.figures." + i);
             panel.add(figures, "wmin 10");
@@ -182,7 +183,7 @@ final class OutcomeBars {
     }
 
     static String pct(Share s) {
-        return String.format(Locale.ROOT, "%.1f %% [%.1f-%.1f]", 100 * s.share(), 100 * s.low(), 100 * s.high());
+        return DecimalText.percent(s.share(), 1) + " % [" + DecimalText.percent(s.low(), 1) + "-" + DecimalText.percent(s.high(), 1) + "]";
     }
 
     /** One callout's stacked bar. */
@@ -235,9 +236,9 @@ final class OutcomeBars {
             if (o == null) return null;
             long n = count(result, o);
             Share s = Share.of(n, result.parts());
-            return String.format(Locale.ROOT, "<html><b>%s</b>: %,d of %,d parts, %.2f %% (95 %% Wilson interval %.2f-%.2f %%)<br>%s."
-                    + "<br>Click to see example parts.</html>", capital(o.label()), n, result.parts(), 100 * s.share(), 100 * s.low(),
-                    100 * s.high(), capital(meaning(o)));
+            return String.format(Locale.ROOT, "<html><b>%s</b>: %,d of %,d parts, %s %% (95 %% Wilson interval %s-%s %%)<br>%s."
+                    + "<br>Click to see example parts.</html>", capital(o.label()), n, result.parts(), DecimalText.percent(s.share(), 2),
+                    DecimalText.percent(s.low(), 2), DecimalText.percent(s.high(), 2), capital(meaning(o)));
         }
 
         private static String capital(String s) { return Character.toUpperCase(s.charAt(0)) + s.substring(1); }

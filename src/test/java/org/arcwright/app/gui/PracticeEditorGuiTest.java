@@ -269,8 +269,23 @@ class PracticeEditorGuiTest {
                 + "\"summary\": \"Kestrel cover rounds\", \"when\": {\"function\": \"cosmetic\", \"process\": \"cast\"}, "
                 + "\"recommend\": {\"callout\": \"general\"}, \"weight\": 30, \"because\": [\"Invented for the test.\"]}]}");
         Path notAPack = Files.createDirectories(config.resolve("just-a-folder"));
-        // found where a user looks for settings: a View command (and so the command finder) opens the page
+        // an edit typed on each page before the packs reload stays in its editor, over the entry opened again
+        GuiSupport.onEdt(() -> panel().showPage("Note templates"));
+        select("templateList", 0);
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> panel().shownTemplateName()) != null, 10);
+        String template = GuiSupport.onEdt(() -> panel().shownTemplateName());
+        String templateOpened = GuiSupport.onEdt(() -> panel().templateEditor().getText());
+        String templateTyped = templateOpened + "\nTyped before the packs reloaded.";
+        GuiSupport.onEdt(() -> panel().templateEditor().setText(templateTyped));
         GuiSupport.onEdt(() -> panel().showPage("Rules"));
+        select("ruleList", 0);
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> panel().shownRuleId()) != null, 10);
+        String rule = GuiSupport.onEdt(() -> panel().shownRuleId());
+        String ruleOpened = GuiSupport.onEdt(() -> panel().editor().getText());
+        String ruleTyped = ruleOpened.replaceFirst("\\{", "{\n  ");
+        GuiSupport.onEdt(() -> panel().editor().setText(ruleTyped));
+        assertThat(GuiSupport.onEdt(() -> panel().ruleEdited() && panel().templateEdited())).isTrue();
+        // found where a user looks for settings: a View command (and so the command finder) opens the page
         GuiSupport.onEdt(() -> window.action("view.packs").actionPerformed(
                 new ActionEvent(window.frame(), ActionEvent.ACTION_PERFORMED, "packs")));
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> fixture.button("teamPackAdd").target().isShowing()), 10);
@@ -283,6 +298,13 @@ class PracticeEditorGuiTest {
         GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> panel().packsInForce()).stream().anyMatch(l -> l.startsWith("Team: Kestrel Works"))
                 && ruleIds().contains("kestrel.covers"), 30);
         assertThat(GuiSupport.onEdt(() -> window.statusLine().packsText())).isEqualTo("Packs: built-in + 1 team + personal");
+        assertThat(GuiSupport.onEdt(() -> panel().shownRuleId())).isEqualTo(rule);
+        assertThat(GuiSupport.onEdt(() -> panel().editor().getText())).isEqualTo(ruleTyped);
+        assertThat(GuiSupport.onEdt(() -> panel().shownTemplateName())).isEqualTo(template);
+        assertThat(GuiSupport.onEdt(() -> panel().templateEditor().getText())).isEqualTo(templateTyped);
+        GuiSupport.onEdt(() -> panel().editor().setText(ruleOpened));
+        GuiSupport.onEdt(() -> panel().templateEditor().setText(templateOpened));
+        assertThat(GuiSupport.onEdt(() -> panel().ruleEdited() || panel().templateEdited())).isFalse();
         Path settings = config.resolve("settings.json");
         GuiSupport.waitFor(() -> Files.exists(settings) && read(settings).contains("kestrel-team-pack"), 10);
         shots("practice-packs");
