@@ -9,7 +9,6 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
 import java.util.stream.Stream;
-import org.junit.jupiter.api.BeforeEach;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -25,18 +24,16 @@ class LauncherSmokeIT {
 
     @TempDir Path work;
 
-    @BeforeEach
-    void freshArchives() throws IOException {
-        // start from no archive of this build, so the first run records
-        for (String name : List.of("simulate", "notes")) {
-            Files.deleteIfExists(PROJECT.resolve("target/arcwright-" + name + ".jsa"));
-            Files.deleteIfExists(PROJECT.resolve("target/arcwright-" + name + ".classlist"));
-            Files.deleteIfExists(PROJECT.resolve("target/arcwright-" + name + ".jsa.failed"));
+    /** Starts from no archive of this build for the command {@code name}, so that its first run records. */
+    private static void noArchive(String name) throws IOException {
+        for (String suffix : List.of(".jsa", ".classlist", ".jsa.failed")) {
+            Files.deleteIfExists(PROJECT.resolve("target/arcwright-" + name + suffix));
         }
     }
 
     @Test
     void simulateRunsCleanlyBeforeAndAfterItsArchiveIsMade() throws Exception {
+        noArchive("simulate");
         String file = PROJECT.resolve("examples/simulate/pump-bracket.json").toString();
         Result first = launch("simulate", file, "--parts", "300");
         assertThat(first.status()).as(first.err()).isZero();
@@ -51,6 +48,7 @@ class LauncherSmokeIT {
 
     @Test
     void notesSearchRunsCleanlyBeforeAndAfterItsArchiveIsMade() throws Exception {
+        noArchive("notes");
         Result first = launch("notes", "search", "fillet");
         assertThat(first.status()).as(first.err()).isZero();
         assertThat(first.out()).contains("notes for \"fillet\"");
