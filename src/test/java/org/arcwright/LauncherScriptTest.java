@@ -274,12 +274,13 @@ class LauncherScriptTest {
     void theFirstSimulationAfterABuildListsItsClassesTheArchiveIsMadeInTheBackgroundAndLaterRunsStartFromIt() throws Exception {
         Path java = tmp.resolve("path-java/bin/java");
         Path target = jar.getParent();
-        Path list = target.resolve("arcwright-simulate.classlist");
-        Path archive = target.resolve("arcwright-simulate.jsa");
+        String name = "arcwright-simulate-" + javaKey();
+        Path list = target.resolve(name + ".classlist");
+        Path archive = target.resolve(name + ".jsa");
         assertThat(launch("simulate", "part.json")).isZero();
         assertThat(calls().get(0)).startsWith(java.toString())
                 .contains("-XX:TieredStopAtLevel=1", "-XX:DumpLoadedClassList=").endsWith("-jar " + jar + " simulate part.json");
-        waitUntil(() -> Files.exists(archive) && !Files.exists(target.resolve("arcwright-simulate.jsa.lock")));
+        waitUntil(() -> Files.exists(archive) && !Files.exists(target.resolve(name + ".jsa.lock")));
         assertThat(Files.readString(archive)).as("dumped from the list without its lambda-proxy lines")
                 .isEqualTo("java/lang/Object id: 0\n");
         assertThat(calls()).anySatisfy(c -> assertThat(c).contains("-Xshare:dump", "-XX:SharedArchiveFile=" + archive + ".",
@@ -291,14 +292,25 @@ class LauncherScriptTest {
         assertThat(calls()).singleElement().asString().contains("-XX:SharedArchiveFile=" + archive, "-jar " + jar)
                 .doesNotContain("DumpLoadedClassList");
 
+        // An updated JDK (another build in the same home) refuses the old archive: it gets one of its own,
+        // and the old one goes once the new one is made.
+        fakeJdk(tmp.resolve("path-java"), "17.0.16", "17.0.16+8");
+        String updated = "arcwright-simulate-" + javaKey();
+        assertThat(updated).isNotEqualTo(name);
+        Files.write(log, new byte[0]);
+        assertThat(launch("simulate", "part.json")).isZero();
+        assertThat(calls().get(0)).contains("-XX:DumpLoadedClassList=").doesNotContain("SharedArchiveFile");
+        waitUntil(() -> Files.exists(target.resolve(updated + ".jsa")) && !Files.exists(archive)
+                && !Files.exists(target.resolve(updated + ".jsa.lock")));
+
         // A rebuilt jar records again; an archive that cannot be made is not retried at every run.
         Files.writeString(jar, "not really a jar, version 2");
         env.put("FAKE_CREATE_FAILS", "yes");
         Files.write(log, new byte[0]);
         assertThat(launch("simulate", "part.json")).isZero();
         assertThat(calls().get(0)).contains("-XX:DumpLoadedClassList=").doesNotContain("SharedArchiveFile");
-        waitUntil(() -> Files.exists(target.resolve("arcwright-simulate.jsa.failed"))
-                && !Files.exists(target.resolve("arcwright-simulate.jsa.lock")));
+        waitUntil(() -> Files.exists(target.resolve(updated + ".jsa.failed"))
+                && !Files.exists(target.resolve(updated + ".jsa.lock")));
         Files.write(log, new byte[0]);
         assertThat(launch("simulate", "part.json")).isZero();
         assertThat(calls()).singleElement().asString().doesNotContain("SharedArchiveFile", "DumpLoadedClassList");
@@ -308,11 +320,12 @@ class LauncherScriptTest {
     void notesCommandsGetAStaticArchiveTooNeverOneWrittenAtExit() throws Exception {
         // JDK 17 crashed (exit 134, an hs_err file in the working folder) writing an archive at the exit
         // of every notes command: the launcher had asked for one with -XX:ArchiveClassesAtExit
-        Path archive = jar.getParent().resolve("arcwright-notes.jsa");
+        String name = "arcwright-notes-" + javaKey();
+        Path archive = jar.getParent().resolve(name + ".jsa");
         assertThat(launch("notes", "search", "fillet")).isZero();
         assertThat(calls().get(0)).contains("-XX:DumpLoadedClassList=").doesNotContain("ArchiveClassesAtExit")
                 .endsWith("notes search fillet");
-        waitUntil(() -> Files.exists(archive) && !Files.exists(jar.getParent().resolve("arcwright-notes.jsa.lock")));
+        waitUntil(() -> Files.exists(archive) && !Files.exists(jar.getParent().resolve(name + ".jsa.lock")));
         Files.write(log, new byte[0]);
         assertThat(launch("notes", "search", "fillet")).isZero();
         assertThat(calls()).singleElement().asString().contains("-XX:SharedArchiveFile=" + archive);
@@ -330,6 +343,11 @@ class LauncherScriptTest {
     }
 
     // ---- helpers ----
+
+    /** The launcher's name for the JDK that `java` on the test's PATH runs. */
+    private String javaKey() throws Exception {
+        return sourced("java_key; echo \"$REPLY\"").strip();
+    }
 
     private String key(Path jdkHome) throws Exception {
         return sourced("aot_key \"$1\" \"$2\" \"$3\"; echo \"$REPLY\"", jar.toString(), jdkHome.toString(), aotDir.toString()).strip();

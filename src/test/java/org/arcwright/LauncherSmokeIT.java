@@ -8,6 +8,7 @@ import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.concurrent.TimeUnit;
+import java.util.regex.Pattern;
 import java.util.stream.Stream;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -26,8 +27,10 @@ class LauncherSmokeIT {
 
     /** Starts from no archive of this build for the command {@code name}, so that its first run records. */
     private static void noArchive(String name) throws IOException {
-        for (String suffix : List.of(".jsa", ".classlist", ".jsa.failed")) {
-            Files.deleteIfExists(PROJECT.resolve("target/arcwright-" + name + suffix));
+        try (Stream<Path> files = Files.list(PROJECT.resolve("target"))) {
+            for (Path f : files.filter(f -> f.getFileName().toString().startsWith("arcwright-" + name + "-")).toList()) {
+                Files.deleteIfExists(f);
+            }
         }
     }
 
@@ -83,14 +86,21 @@ class LauncherSmokeIT {
 
     /** Waits for the background step to leave the archive (or its failure mark) and let go of its lock. */
     private static void awaitArchive(String name) throws Exception {
-        Path target = PROJECT.resolve("target");
         long end = System.nanoTime() + TimeUnit.SECONDS.toNanos(120);
-        while (!(Files.exists(target.resolve("arcwright-" + name + ".jsa")) || Files.exists(target.resolve("arcwright-" + name + ".jsa.failed")))
-                || Files.exists(target.resolve("arcwright-" + name + ".jsa.lock"))) {
+        while (!(has(name, ".jsa") || has(name, ".jsa.failed")) || has(name, ".jsa.lock")) {
             if (System.nanoTime() > end) throw new AssertionError("no archive for " + name + " after 120 s");
             Thread.sleep(100);
         }
-        assertThat(target.resolve("arcwright-" + name + ".jsa")).as("made, not failed").exists();
+        assertThat(has(name, ".jsa")).as("made, not failed").isTrue();
+    }
+
+    /** Whether the command's file ending in {@code suffix} (for whichever JDK) is in the target folder. */
+    private static boolean has(String name, String suffix) throws IOException {
+        try (Stream<Path> files = Files.list(PROJECT.resolve("target"))) {
+            // arcwright-NAME-KEY.SUFFIX, KEY the launcher's eight hex digits for the JDK
+            Pattern file = Pattern.compile("arcwright-" + Pattern.quote(name) + "-[0-9a-f]{8}" + Pattern.quote(suffix));
+            return files.anyMatch(f -> file.matcher(f.getFileName().toString()).matches());
+        }
     }
 
     private List<Path> crashLogs() throws IOException {
