@@ -19,14 +19,10 @@ final class LuceneNotices {
             Logger.getLogger("org.apache.lucene.store.MemorySegmentIndexInputProvider"),
             Logger.getLogger("org.apache.lucene.internal.vectorization.VectorizationProvider"));
 
-    static {
-        for (Logger l : QUIETED) l.setLevel(Level.SEVERE);
-    }
-
     private LuceneNotices() {}
 
-    /** Sets the levels, once per JVM (the class's initialisation does it); call before Lucene's first use. */
+    /** Lets only Lucene's errors through these loggers; call before Lucene's first use (again is harmless). */
     static void quiet() {
-        // the work is in the static initialiser, which the JVM runs once whatever the thread
+        for (Logger l : QUIETED) l.setLevel(Level.SEVERE);
     }
 }

@@ -38,8 +38,6 @@ import javax.swing.JTextField;
 import javax.swing.ScrollPaneConstants;
 import javax.swing.SwingUtilities;
 import javax.swing.Timer;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.AdviceSource;
 import org.arcwright.app.model.NeedsSummary;
@@ -55,6 +53,7 @@ import org.arcwright.app.widgets.Cautions;
 import org.arcwright.app.widgets.ScrollablePanel;
 import org.arcwright.app.widgets.WrapLabel;
 import org.arcwright.app.widgets.Themes;
+import org.arcwright.app.widgets.TextEdits;
 import org.arcwright.render.Palette;
 import org.arcwright.model.BlendFunction;
 import org.arcwright.model.BlendKind;
@@ -268,11 +267,7 @@ public final class DecidePanel extends JPanel {
 
     private void text(JPanel p, Question q) {
         JTextField f = new JTextField(form.text(q), 14);
-        f.getDocument().addDocumentListener(new DocumentListener() {
-            public void insertUpdate(DocumentEvent e) { typed(q, f); }
-            public void removeUpdate(DocumentEvent e) { typed(q, f); }
-            public void changedUpdate(DocumentEvent e) { typed(q, f); }
-        });
+        TextEdits.onEdit(f.getDocument(), () -> typed(q, f));
         row(p, q, f);
     }
 

@@ -24,12 +24,11 @@ import javax.swing.JScrollPane;
 import javax.swing.JTextField;
 import javax.swing.SwingUtilities;
 import javax.swing.Timer;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.NoteSearch;
 import org.arcwright.app.widgets.Icons;
 import org.arcwright.app.widgets.Themes;
+import org.arcwright.app.widgets.TextEdits;
 import org.arcwright.notes.FacetCount;
 import org.arcwright.notes.FiledNote;
 import org.arcwright.notes.Note;
@@ -113,11 +112,7 @@ public final class NotesPanel extends JPanel {
         reader.putClientProperty(JEditorPane.HONOR_DISPLAY_PROPERTIES, Boolean.TRUE);
         facets.setOpaque(false);
         debounce.setRepeats(false);
-        query.getDocument().addDocumentListener(new DocumentListener() {
-            public void insertUpdate(DocumentEvent e) { typed(); }
-            public void removeUpdate(DocumentEvent e) { typed(); }
-            public void changedUpdate(DocumentEvent e) { typed(); }
-        });
+        TextEdits.onEdit(query.getDocument(), () -> typed());
         JLabel title = new JLabel("Notes");
         title.putClientProperty(FlatClientProperties.STYLE_CLASS, "h4");
         add(title, "split 2");

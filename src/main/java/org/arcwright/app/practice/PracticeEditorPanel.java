@@ -28,8 +28,6 @@ import javax.swing.JTable;
 import javax.swing.JTextArea;
 import javax.swing.SwingUtilities;
 import javax.swing.Timer;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import javax.swing.table.DefaultTableModel;
 import javax.swing.text.JTextComponent;
 import net.miginfocom.swing.MigLayout;
@@ -42,6 +40,7 @@ import org.arcwright.app.model.TemplatePreview;
 import org.arcwright.app.model.TemplateSaver;
 import org.arcwright.app.model.WorksheetSession;
 import org.arcwright.app.widgets.WrapLabel;
+import org.arcwright.app.widgets.TextEdits;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackLayer;
@@ -167,11 +166,7 @@ public final class PracticeEditorPanel extends JPanel {
         list.addListSelectionListener(e -> selected(e.getValueIsAdjusting()));
         editor.setFont(new Font(Font.MONOSPACED, Font.PLAIN, editor.getFont().getSize()));
         editor.setTabSize(2);
-        editor.getDocument().addDocumentListener(new DocumentListener() {
-            public void insertUpdate(DocumentEvent e) { typed(); }
-            public void removeUpdate(DocumentEvent e) { typed(); }
-            public void changedUpdate(DocumentEvent e) { typed(); }
-        });
+        TextEdits.onEdit(editor.getDocument(), () -> typed());
         validateLater.setRepeats(false);
         ruleViews.setName("ruleViews");
         ruleViews.addTab("Form", form);
@@ -245,11 +240,7 @@ public final class PracticeEditorPanel extends JPanel {
         templatePreview.setFont(editor.getFont());
         templatePreview.setEditable(false);
         templateList.addListSelectionListener(e -> templateSelected(e.getValueIsAdjusting()));
-        templateText.getDocument().addDocumentListener(new DocumentListener() {
-            public void insertUpdate(DocumentEvent e) { templateTyped(); }
-            public void removeUpdate(DocumentEvent e) { templateTyped(); }
-            public void changedUpdate(DocumentEvent e) { templateTyped(); }
-        });
+        TextEdits.onEdit(templateText.getDocument(), () -> templateTyped());
         previewLater.setRepeats(false);
         JPanel centre = new JPanel(new MigLayout("insets 0 6 0 0, wrap 1, gap 4", "[grow,fill]",
                 "[grow 55,fill][][grow 45,fill][]"));

@@ -12,13 +12,12 @@ import javax.swing.JScrollPane;
 import javax.swing.JTextArea;
 import javax.swing.JTextField;
 import javax.swing.JViewport;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import javax.swing.text.JTextComponent;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.RuleForm;
 import org.arcwright.app.widgets.ScrollablePanel;
 import org.arcwright.app.widgets.WrapLabel;
+import org.arcwright.app.widgets.TextEdits;
 
 /**
  * The rule as a form: one control per field of the rule ({@link RuleForm.Field}), labelled, with
@@ -90,11 +89,7 @@ final class RuleFormView extends JScrollPane {
                 || f == RuleForm.Field.RECOMMEND) {
             c.setFont(new Font(Font.MONOSPACED, Font.PLAIN, c.getFont().getSize()));
         }
-        c.getDocument().addDocumentListener(new DocumentListener() {
-            public void insertUpdate(DocumentEvent e) { changed(f); }
-            public void removeUpdate(DocumentEvent e) { changed(f); }
-            public void changedUpdate(DocumentEvent e) { changed(f); }
-        });
+        TextEdits.onEdit(c.getDocument(), () -> changed(f));
         controls.put(f, c);
         form.add(label, "top, gaptop 4");
         if (c instanceof JTextArea) {

@@ -14,10 +14,9 @@ import javax.swing.JList;
 import javax.swing.JPanel;
 import javax.swing.JScrollPane;
 import javax.swing.JTextField;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.TemplateFields;
+import org.arcwright.app.widgets.TextEdits;
 
 /**
  * The fields a template may use, from the template model, beside the template: filtered as you type,
@@ -39,11 +38,7 @@ final class TemplateFieldsView extends JPanel {
         filter.setName("templateFieldFilter");
         insert.setName("templateFieldInsert");
         filter.putClientProperty(FlatClientProperties.PLACEHOLDER_TEXT, "Filter, e.g. datum");
-        filter.getDocument().addDocumentListener(new DocumentListener() {
-            public void insertUpdate(DocumentEvent e) { refilter(); }
-            public void removeUpdate(DocumentEvent e) { refilter(); }
-            public void changedUpdate(DocumentEvent e) { refilter(); }
-        });
+        TextEdits.onEdit(filter.getDocument(), () -> refilter());
         list.setCellRenderer(new DefaultListCellRenderer() {
             private static final long serialVersionUID = 1L;
 

@@ -21,11 +21,10 @@ import javax.swing.JTextField;
 import javax.swing.KeyStroke;
 import javax.swing.ListCellRenderer;
 import javax.swing.UIManager;
-import javax.swing.event.DocumentEvent;
-import javax.swing.event.DocumentListener;
 import net.miginfocom.swing.MigLayout;
 import org.arcwright.app.model.Command;
 import org.arcwright.app.widgets.Icons;
+import org.arcwright.app.widgets.TextEdits;
 
 /**
  * The command finder: type a few letters of any command, see its shortcut, press Enter to run it.
@@ -55,11 +54,7 @@ public final class CommandFinder extends JDialog {
         hint.putClientProperty(FlatClientProperties.STYLE_CLASS, "small");
         p.add(hint);
         setContentPane(p);
-        query.getDocument().addDocumentListener(new DocumentListener() {
-            public void insertUpdate(DocumentEvent e) { filter(); }
-            public void removeUpdate(DocumentEvent e) { filter(); }
-            public void changedUpdate(DocumentEvent e) { filter(); }
-        });
+        TextEdits.onEdit(query.getDocument(), () -> filter());
         bind(KeyStroke.getKeyStroke(KeyEvent.VK_ESCAPE, 0), "close", this::close);
         bind(KeyStroke.getKeyStroke(KeyEvent.VK_ENTER, 0), "run", this::runSelected);
         bind(KeyStroke.getKeyStroke(KeyEvent.VK_DOWN, 0), "down", () -> move(1));

@@ -79,20 +79,11 @@ class CheckPlotAndLayoutGuiTest {
         GuiSupport.settle(300);
     }
 
-    private static void selectRow(int row) {
-        var table = fixture.table("featureTable");
-        table.selectRows(row);
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> table.target().getSelectedRow()) == row, 10);
-        GuiSupport.settle(100);
-    }
+    private static void selectRow(int row) { GuiSupport.selectFeatureRow(fixture, row); }
 
-    private static String verdict() { return GuiSupport.onEdt(() -> window.checkPanel().verdictText()); }
+    private static String verdict() { return GuiSupport.checkVerdict(window); }
 
-    private static void checkAndWait(Path file) {
-        GuiSupport.onEdt(() -> window.checkPanel().check(file));
-        GuiSupport.waitFor(() -> verdict().startsWith("The measured contour") || verdict().startsWith("Not checked")
-                || verdict().startsWith("Cannot check"), 30);
-    }
+    private static void checkAndWait(Path file) { GuiSupport.checkAndWait(window, file); }
 
     private static JComponent plot() {
         return (JComponent) fixture.robot().finder().findByName(window.frame(), "checkPlot", true);

@@ -52,20 +52,11 @@ class FeatureBoundViewsGuiTest {
         GuiSupport.onEdt(() -> window.open(DECIDED));
     }
 
-    private static void selectRow(int row) {
-        var table = fixture.table("featureTable");
-        table.selectRows(row);
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> table.target().getSelectedRow()) == row, 10);
-        GuiSupport.settle(100);
-    }
+    private static void selectRow(int row) { GuiSupport.selectFeatureRow(fixture, row); }
 
-    private static String verdict() { return GuiSupport.onEdt(() -> window.checkPanel().verdictText()); }
+    private static String verdict() { return GuiSupport.checkVerdict(window); }
 
-    private static void checkAndWait(Path file) {
-        GuiSupport.onEdt(() -> window.checkPanel().check(file));
-        GuiSupport.waitFor(() -> verdict().startsWith("The measured contour") || verdict().startsWith("Not checked")
-                || verdict().startsWith("Cannot check"), 60); // a check took over 30 s at load 20
-    }
+    private static void checkAndWait(Path file) { GuiSupport.checkAndWait(window, file); }
 
     @Test
     @Order(1)

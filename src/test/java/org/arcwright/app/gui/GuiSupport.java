@@ -52,6 +52,27 @@ final class GuiSupport {
         return new OpenWindow(window, robot, new FrameFixture(robot, window.frame()));
     }
 
+    /** Selects row {@code row} of the Part table and waits until the selection shows. */
+    static void selectFeatureRow(FrameFixture fixture, int row) {
+        var table = fixture.table("featureTable");
+        table.selectRows(row);
+        waitFor(() -> onEdt(() -> table.target().getSelectedRow()) == row, 10);
+        settle(100);
+    }
+
+    /** The Check panel's verdict line. */
+    static String checkVerdict(MainWindow window) {
+        return onEdt(() -> window.checkPanel().verdictText());
+    }
+
+    /** Checks {@code file} for the selected feature and waits for a verdict or a refusal. */
+    static void checkAndWait(MainWindow window, Path file) {
+        onEdt(() -> window.checkPanel().check(file));
+        // 60 s: a check took over 30 s at load 20
+        waitFor(() -> checkVerdict(window).startsWith("The measured contour") || checkVerdict(window).startsWith("Not checked")
+                || checkVerdict(window).startsWith("Cannot check"), 60);
+    }
+
     /** Fails under CI without a display; skips on a developer machine without one. */
     static void requireDisplay() {
         if (!GraphicsEnvironment.isHeadless()) return;

@@ -60,11 +60,7 @@ class SimulationGuiTest {
         });
     }
 
-    private static void selectRow(int row) {
-        var table = fixture.table("featureTable");
-        table.selectRows(row);
-        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> table.target().getSelectedRow()) == row, 10);
-    }
+    private static void selectRow(int row) { GuiSupport.selectFeatureRow(fixture, row); }
 
     private static JButton button(String name) {
         return (JButton) opened.robot().finder().findByName(window.frame(), name);
