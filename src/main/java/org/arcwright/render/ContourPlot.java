@@ -204,14 +204,16 @@ public final class ContourPlot {
             for (double[] p : drawn) if ((int) p[3] == r.worst().index()) w = p;
             if (w != null) {
                 double[] s = map.screen(w[0], w[1]);
-                g.setColor(r.worst().excess() > 0 ? OUT : nominalInk);
+                // beyond a limit but within the uncertainty is not a proven excess (ISO 14253-1): not drawn as one
+                boolean unproven = r.worst().excess() > 0 && r.verdict() == Verdict.INDETERMINATE;
+                g.setColor(unproven ? NEAR : r.worst().excess() > 0 ? OUT : nominalInk);
                 g.setStroke(new BasicStroke(1.5f));
                 g.draw(new Ellipse2D.Double(s[0] - 9, s[1] - 9, 18, 18));
                 g.draw(new Line2D.Double(s[0] + 7, s[1] - 7, s[0] + 30, s[1] - 30));
                 g.setFont(type.body);
-                String t = String.format(Locale.ROOT, "worst #%d: %s by %s %s (%s)", r.worst().index(),
+                String t = String.format(Locale.ROOT, "worst #%d: %s by %s %s (%s)%s", r.worst().index(),
                         r.worst().excess() > 0 ? "outside" : "inside", fmt(Math.abs(r.worst().excess())), r.worst().unit(),
-                        r.worst().measure());
+                        r.worst().measure(), unproven ? ", within the uncertainty: not proven" : "");
                 float tx = (float) Math.max(8, Math.min(s[0] + 32, width - 10 - g.getFontMetrics().stringWidth(t)));
                 float ty = (float) Math.max(s[1] - 32, summary ? 110 * type.k : top + g.getFontMetrics().getAscent());
                 g.drawString(t, tx, ty);

@@ -228,7 +228,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
 
     private static String inspection(InspectionRecord i, NoteContext ctx) {
         if (i == null) return "";
-        StringBuilder sb = new StringBuilder(i.passed() ? "PASS" : "FAIL");
+        StringBuilder sb = new StringBuilder(i.passed() ? "PASS" : i.undecided() ? "INDETERMINATE (neither conformance nor non-conformance proven)" : "FAIL");
         if (i.measuredOn() != null) sb.append(", measured ").append(i.measuredOn());
         if (i.source() != null) sb.append(" (").append(i.source()).append(')');
         List<Map<String, Object>> figs = ctx.figures(i.figures());

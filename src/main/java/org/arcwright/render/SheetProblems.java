@@ -60,6 +60,9 @@ final class SheetProblems {
         if (r.demoted()) out.add("the chosen control failed one of its checks (demoted)");
         InspectionRecord i = f.inspection();
         if (i != null) {
+            if (i.undecided()) {
+                out.add("measured, but no verdict: the measurement's uncertainty straddles a limit (ISO 14253-1); measure again");
+            }
             Object judged = i.figures().get("callout");
             if (judged == null) {
                 out.add("the inspection does not record which callout it judged: re-inspect against the chosen one");

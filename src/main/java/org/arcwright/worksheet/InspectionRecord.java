@@ -10,7 +10,9 @@ import java.util.Map;
 /**
  * The outcome of inspecting one measured contour of a feature, kept with the worksheet.
  *
- * @param verdict {@code pass} or {@code fail}
+ * @param verdict {@code pass}, {@code fail} or {@code indeterminate}: the ISO 14253-1 default decision
+ *     rule proves neither conformance nor non-conformance when the measurement uncertainty straddles a
+ *     limit, and a kept record must not turn that into either
  * @param source the points file or inspection file it came from
  * @param measuredOn ISO date of the measurement, or null
  * @param figures the key figures (envelope, required zone, fitted radius...)
@@ -18,13 +20,16 @@ import java.util.Map;
 @JsonInclude(JsonInclude.Include.NON_NULL)
 public record InspectionRecord(String verdict, String source, String measuredOn, Map<String, Object> figures) {
 
+    /** The word kept for a verdict that the data could not decide. */
+    public static final String INDETERMINATE = "indeterminate";
+
     @JsonCreator
     public InspectionRecord(@JsonProperty(value = "verdict", required = true) String verdict,
                             @JsonProperty("source") String source,
                             @JsonProperty("measuredOn") String measuredOn,
                             @JsonProperty("figures") Map<String, Object> figures) {
-        if (!"pass".equals(verdict) && !"fail".equals(verdict)) {
-            throw new IllegalArgumentException("verdict must be pass or fail, got '" + verdict + "'");
+        if (!"pass".equals(verdict) && !"fail".equals(verdict) && !INDETERMINATE.equals(verdict)) {
+            throw new IllegalArgumentException("verdict must be pass, fail or indeterminate, got '" + verdict + "'");
         }
         this.verdict = verdict;
         this.source = source;
@@ -33,6 +38,9 @@ public record InspectionRecord(String verdict, String source, String measuredOn,
     }
 
     public boolean passed() { return "pass".equals(verdict); }
+
+    /** Whether the measurement decided nothing: neither conformance nor non-conformance is proven. */
+    public boolean undecided() { return INDETERMINATE.equals(verdict); }
 
     /**
      * What was judged and against what, for a status line: "measured: pass against CR 1.8-2.2 (mm),

@@ -39,6 +39,7 @@ public record RadiusFeature(String id, DesignCase designCase, Recommendation cho
     public Status status() {
         if (chosen == null) return Status.OPEN;
         if (inspection == null) return Status.DECIDED;
+        if (inspection.undecided()) return Status.MEASURED_INDETERMINATE;
         return inspection.passed() ? Status.MEASURED_PASS : Status.MEASURED_FAIL;
     }
 
@@ -59,7 +60,9 @@ public record RadiusFeature(String id, DesignCase designCase, Recommendation cho
         /** A measured contour conforms to the chosen control. */
         MEASURED_PASS("measured: pass"),
         /** A measured contour does not conform. */
-        MEASURED_FAIL("measured: fail");
+        MEASURED_FAIL("measured: fail"),
+        /** A measured contour was judged, but its uncertainty straddles a limit: neither proven. */
+        MEASURED_INDETERMINATE("measured: indeterminate");
 
         private final String label;
 

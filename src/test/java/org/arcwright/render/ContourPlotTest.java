@@ -18,11 +18,15 @@ import java.util.TreeMap;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
 import javax.imageio.ImageIO;
+import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionFiles;
+import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.Verdict;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.testing.Golden;
+import org.arcwright.tolerance.RadiusKind;
 import org.jfree.svg.SVGGraphics2D;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -99,6 +103,23 @@ class ContourPlotTest {
         // the same magnification as the file's plot (golden plot-bracket-round-r.txt), no summary
         assertThat(text).contains("text: deviations from nominal magnified ×5").doesNotContain("text: PASS")
                 .contains("text: zone boundary");
+    }
+
+    /**
+     * A worst window beyond a limit by less than its uncertainty is not a proven excess (ISO 14253-1
+     * default decision rule): the label says so, where it read as a plain "outside" before.
+     */
+    @Test
+    void anUnprovenExcessIsLabelledAsSuch() throws IOException {
+        InspectionRequest file = new InspectionFiles(new JsonFiles()).read(Path.of("examples/inspect/housing-fillet-profile.json"));
+        InspectionResult r = new Inspector().inspect(file.withCompare(false)
+                .withCallout(new InspectionCallout.RadiusLimits(RadiusKind.CR, 1.8, 2.2)).withUncertainty(0.01));
+        assertThat(r.verdict()).isEqualTo(Verdict.INDETERMINATE);
+        assertThat(r.worst().excess()).isPositive();
+        Path svg = dir.resolve("u.svg");
+        new ContourPlot().write(r, svg);
+        assertThat(content(Files.readString(svg))).containsPattern(
+                "text: worst #\\d+: outside by [0-9.]+ mm \\(local radius\\), within the uncertainty: not proven");
     }
 
     @Test

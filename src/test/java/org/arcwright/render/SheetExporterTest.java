@@ -156,6 +156,22 @@ class SheetExporterTest {
         assertThat(f1.cautions().get(0)).contains("no ISO equivalent");
     }
 
+    /**
+     * A kept verdict the measurement could not decide (ISO 14253-1 default decision rule) reads as such
+     * on the sheet, in the summary's status and among the feature's open problems: never as a pass or a fail.
+     */
+    @Test
+    void anIndeterminateMeasurementIsAnOpenProblemNotAPassOrAFail() {
+        RadiusFeature f1 = demo.features().get(0);
+        PartWorksheet ws = demo.withFeature(f1.withInspection(new InspectionRecord("indeterminate", "cmm/f1.csv", "2026-12-05",
+                Map.of("callout", "CR 1.8-2.2", "units", "mm", "uncertainty", 0.01))));
+        SheetContent content = exporter.content(ws, templates, "t");
+        SheetContent.SummaryRow row = content.summary().get(0);
+        assertThat(row.status()).isEqualTo("measured: indeterminate");
+        assertThat(row.problems()).anySatisfy(p -> assertThat(p).contains("no verdict").contains("ISO 14253-1"));
+        assertThat(exporter.markdown(content, "x")).contains("INDETERMINATE").doesNotContain("FAIL, measured 2026-12-05");
+    }
+
     @Test
     void aLongUnbrokenPathIsWrappedInsideThePage(@TempDir Path dir) throws Exception {
         String path = "cmm/" + "very-long-inspection-folder-name-".repeat(8) + "f1.csv";

@@ -60,6 +60,7 @@ import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.inspect.PointsCsv;
+import org.arcwright.inspect.Verdict;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.render.ContourPlot;
@@ -530,12 +531,12 @@ public final class CheckPanel extends JPanel {
             session.keepMeasured(ready.featureId(), c.points().get());
         }
         judged = new Judged(s, r, CheckRequests.record(r, src, LocalDate.now(clock)));
-        verdict.show(sentence(ready.featureId(), r.pass(), r.request().callout(), u),
-                r.pass() ? "Arcwright.pass.foreground" : "Arcwright.fail.foreground");
+        verdict.show(sentence(ready.featureId(), r.verdict(), r.request().callout(), u, r.request().uncertainty()),
+                ink(r.verdict()));
         figures.show(describe(r), "Label.foreground");
         comparisons.setRowCount(0);
         for (Comparison k : r.comparisons()) {
-            comparisons.addRow(new Object[] {k.name(), k.callout(), k.pass() ? "conforms" : "does not conform", k.figure()});
+            comparisons.addRow(new Object[] {k.name(), k.callout(), word(k.verdict()), k.figure()});
         }
         tableScroll.setVisible(comparisons.getRowCount() > 0);
         revalidate();
@@ -543,14 +544,41 @@ public final class CheckPanel extends JPanel {
         refreshKeep();
         // what was judged against what, and that the feature's kept verdict stays until Keep is pressed
         status.accept("Checked " + Path.of(src).getFileName() + " for " + ready.featureId() + " against "
-                + r.request().callout().describe() + " " + u + ": " + (r.pass() ? "conforms" : "does not conform")
-                + " (not kept)");
+                + r.request().callout().describe() + " " + u + ": " + word(r.verdict()) + " (not kept)");
     }
 
-    /** The verdict as a whole sentence: which feature, against what, in which units. */
-    static String sentence(String featureId, boolean pass, InspectionCallout callout, String units) {
-        return "The measured contour of " + featureId + (pass ? " conforms to " : " does not conform to ")
-                + "its chosen callout, " + callout.describe() + " (" + units + ").";
+    /**
+     * The verdict as a whole sentence: which feature, against what, in which units. An indeterminate
+     * verdict says that neither conformance nor non-conformance is proven (ISO 14253-1 default
+     * decision rule) and so is never shown as a pass or a fail.
+     */
+    static String sentence(String featureId, Verdict v, InspectionCallout callout, String units, double uncertainty) {
+        String against = "its chosen callout, " + callout.describe() + " (" + units + ")";
+        return switch (v) {
+            case PASS -> "The measured contour of " + featureId + " conforms to " + against + ".";
+            case FAIL -> "The measured contour of " + featureId + " does not conform to " + against + ".";
+            case INDETERMINATE -> "The measured contour of " + featureId + " can be neither accepted nor rejected against "
+                    + against + ": " + (uncertainty > 0 ? "with U = " + DecimalText.exact(uncertainty) + " " + units + ", " : "")
+                    + "the measurement's uncertainty straddles a limit (ISO 14253-1). Measure again more densely or "
+                    + "with a lower-noise probe; the notes say what would decide.";
+        };
+    }
+
+    /** A verdict in the words of the comparison table and the status line. */
+    static String word(Verdict v) {
+        return switch (v) {
+            case PASS -> "conforms";
+            case FAIL -> "does not conform";
+            case INDETERMINATE -> "no verdict (indeterminate)";
+        };
+    }
+
+    private static String ink(Verdict v) {
+        return switch (v) {
+            case PASS -> "Arcwright.pass.foreground";
+            case FAIL -> "Arcwright.fail.foreground";
+            case INDETERMINATE -> "Arcwright.undecided.foreground";
+        };
     }
 
     /**

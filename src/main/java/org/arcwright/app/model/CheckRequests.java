@@ -158,7 +158,7 @@ public final class CheckRequests {
         }
         Corner corner = new Corner(blend.corner().vertex(), blend.corner().legA(), blend.corner().legB(), kind);
         InspectionRequest req = new InspectionRequest(c.units(), new Nominal.CornerBlend(corner, c.nominalRadius()),
-                callout(feature), fromFile.points(), fromFile.resolution(), fromFile.window(), true);
+                callout(feature), fromFile.points(), fromFile.resolution(), fromFile.window(), true, fromFile.uncertainty());
         Ready ready = new Ready(id, feature.chosen(), req, fileSays);
         return mismatches.isEmpty() ? ready : new NeedsConfirmation(id, mismatches, ready);
     }
@@ -235,7 +235,8 @@ public final class CheckRequests {
             figures.put("fittedRadius", round(r.fits().leastSquares().circle().r()));
         }
         if (r.profile() != null) figures.put("requiredZone", round(r.profile().requiredZone()));
-        return new InspectionRecord(r.pass() ? "pass" : "fail", source, on.toString(), figures);
+        if (r.request().uncertainty() > 0) figures.put("uncertainty", r.request().uncertainty());
+        return new InspectionRecord(r.verdict().key(), source, on.toString(), figures);
     }
 
     private static double round(double v) { return Math.round(v * 1e6) / 1e6; }

@@ -19,7 +19,8 @@ import org.arcwright.zone.Point2;
 
 /**
  * The measured points of an inspection as the Zone view plots them: moved into the view's frame
- * (vertex at the origin, bisector at 45°; a rigid move, so distances stay true), placed as the
+ * (vertex at the origin, bisector at 45°; a rigid move, so distances stay true) from the corner the
+ * verdict read (for R and CR the one the fitted adjacent surfaces make), placed as the
  * inspection placed them (after any registration of a profile zone), each with its excess over the
  * limits the inspection judged (as {@code ContourPlot} colours them) and a grade for its colour.
  *
@@ -91,8 +92,10 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
         InspectionRequest q = r.request();
         if (!(q.nominal() instanceof Nominal.CornerBlend)) return Optional.empty();
         Nominal.CornerBlend cb = (Nominal.CornerBlend) q.nominal();
-        Corner corner = cb.corner();
         PointExcesses excesses = PointExcesses.of(r);
+        // R and CR are judged on the adjacent surfaces fitted to the points, not on the nominal corner:
+        // the view's zone is drawn tangent to its legs, so the points go into the frame of the fitted corner
+        Corner corner = excesses.radiusZone() != null ? excesses.radiusZone().corner() : cb.corner();
         Registration reg = excesses.registration();
         double band = excesses.allowance();
         Frame frame = new Frame(corner);

@@ -188,6 +188,7 @@ public final class PartPanel extends JPanel {
                 switch (f.status()) {
                     case MEASURED_PASS: c.setForeground(Themes.color("Arcwright.pass.foreground")); break;
                     case MEASURED_FAIL: c.setForeground(Themes.color("Arcwright.fail.foreground")); break;
+                    case MEASURED_INDETERMINATE: c.setForeground(Themes.color("Arcwright.undecided.foreground")); break;
                     case OPEN: c.setForeground(Themes.color("Arcwright.help.foreground")); break;
                     default: c.setForeground(t.getForeground());
                 }

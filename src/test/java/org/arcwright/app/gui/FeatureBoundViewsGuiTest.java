@@ -13,6 +13,7 @@ import java.util.List;
 import javax.swing.Action;
 import javax.swing.JMenu;
 import javax.swing.SwingUtilities;
+import org.arcwright.app.model.Sections;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
 import org.arcwright.cli.Cli;
@@ -27,6 +28,7 @@ import org.junit.jupiter.api.Order;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.TestMethodOrder;
 import org.junit.jupiter.api.extension.RegisterExtension;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * One feature, one truth: the Check view judges the selected feature's chosen callout, and what it
@@ -307,6 +309,37 @@ class FeatureBoundViewsGuiTest {
             }
         }
         GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
+    }
+
+    /**
+     * A file stating its uncertainty U, checked for F1 (CR 1.8-2.2): the command line calls it
+     * indeterminate (ISO 14253-1 default decision rule), so the Check view must too, and Keep must keep
+     * "indeterminate", never "fail" or "pass". Before the fix the view dropped U and said "does not conform".
+     */
+    @Test
+    @Order(12)
+    void aVerdictTheUncertaintyCannotDecideIsShownAndKeptAsIndeterminate(@TempDir Path dir) throws Exception {
+        Path file = Sections.uncertainHousing(dir, 0.01);
+        selectRow(0);
+        GuiSupport.onEdt(() -> window.showTab(3));
+        checkAndWait(file);
+        assertThat(verdict()).startsWith("The measured contour of F1 can be neither accepted nor rejected against its chosen "
+                + "callout, CR 1.8-2.2 (mm)").contains("U = 0.01 mm").doesNotContain("does not conform");
+        GuiSupport.settle(200);
+        GuiSupport.screenshot(window.frame(), "check-indeterminate");
+        fixture.button("checkKeep").click();
+        GuiSupport.waitFor(() -> window.session().worksheet().feature("F1").orElseThrow().inspection().undecided(), 10);
+        RadiusFeature f1 = window.session().worksheet().feature("F1").orElseThrow();
+        assertThat(f1.inspection().verdict()).isEqualTo("indeterminate");
+        assertThat(f1.status()).isEqualTo(RadiusFeature.Status.MEASURED_INDETERMINATE);
+        // the Part table says so in the feature's row
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> {
+            var t = fixture.table("featureTable").target();
+            for (int c = 0; c < t.getColumnCount(); c++) {
+                if ("measured: indeterminate".equals(String.valueOf(t.getValueAt(0, c)))) return true;
+            }
+            return false;
+        }), 10);
     }
 
     private static String firstRuleId() {

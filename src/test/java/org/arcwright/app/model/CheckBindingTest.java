@@ -3,6 +3,9 @@ package org.arcwright.app.model;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
 
+import com.fasterxml.jackson.databind.ObjectMapper;
+import java.io.IOException;
+import java.nio.file.Files;
 import java.nio.file.Path;
 import java.time.LocalDate;
 import java.util.List;
@@ -29,6 +32,7 @@ import org.arcwright.worksheet.InspectionRecord;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.RadiusFeature;
 import org.junit.jupiter.api.Test;
+import org.junit.jupiter.api.io.TempDir;
 
 /**
  * Points are judged against the selected feature's chosen callout, never the file's; a file that
@@ -151,5 +155,43 @@ class CheckBindingTest {
         s.updateCase("F1", fillet(Units.MM, 2.5));
         assertThat(s.worksheet().feature("F1").orElseThrow().inspection()).isNull();
         assertThat(s.worksheet().feature("F1").orElseThrow().status()).isEqualTo(RadiusFeature.Status.OPEN);
+    }
+
+    /**
+     * A file that states its expanded uncertainty U is judged by the ISO 14253-1 default decision rule
+     * in the desktop as in {@code arcwright inspect}: the same file, the same verdict. The housing section
+     * against CR 1.8-2.2 fails without U and is indeterminate with U = 0.01 mm (the command line's
+     * verdict on the same file is the reference). Before the fix the desktop dropped U and kept "fail".
+     */
+    @Test
+    void aFileStatingItsUncertaintyIsJudgedByTheDecisionRuleAndAnIndeterminateVerdictIsKeptAsSuch(
+            @TempDir Path dir) throws Exception {
+        Path file = Sections.uncertainHousing(dir, 0.01);
+        CheckRequests.Ready ready = (CheckRequests.Ready) requests.read(file, crShoulder(), CheckRequests.Frame.STANDARD);
+        assertThat(ready.request().uncertainty()).isEqualTo(0.01);
+        InspectionResult r = new Inspector().inspect(ready.request());
+        InspectionRequest asTheCommandLineReadsIt = new InspectionFiles(new JsonFiles()).read(file);
+        assertThat(r.verdict()).isEqualTo(new Inspector().inspect(asTheCommandLineReadsIt).verdict())
+                .isEqualTo(Verdict.INDETERMINATE);
+        InspectionRecord rec = CheckRequests.record(r, file.toString(), LocalDate.of(2026, 12, 5));
+        assertThat(rec.verdict()).isEqualTo("indeterminate");
+        assertThat(rec.passed()).isFalse();
+        assertThat(rec.undecided()).isTrue();
+        assertThat(rec.figures()).containsEntry("uncertainty", 0.01).containsEntry("callout", "CR 1.8-2.2");
+        RadiusFeature kept = crShoulder().withInspection(rec);
+        assertThat(kept.status()).isEqualTo(RadiusFeature.Status.MEASURED_INDETERMINATE);
+        assertThat(kept.status().label()).isEqualTo("measured: indeterminate");
+        assertThat(rec.describe()).startsWith("measured: indeterminate against CR 1.8-2.2 (mm)");
+    }
+
+    /** A worksheet keeping an indeterminate verdict reads back as written (it was refused as "not pass or fail"). */
+    @Test
+    void anIndeterminateRecordSurvivesTheWorksheetFile() throws Exception {
+        var mapper = new ObjectMapper();
+        InspectionRecord rec = new InspectionRecord("indeterminate", "s.csv", "2026-12-05", Map.of("callout", "CR 1.8-2.2"));
+        InspectionRecord back = mapper.readValue(mapper.writeValueAsString(rec), InspectionRecord.class);
+        assertThat(back).isEqualTo(rec);
+        assertThatThrownBy(() -> new InspectionRecord("maybe", null, null, null))
+                .hasMessageContaining("pass, fail or indeterminate");
     }
 }

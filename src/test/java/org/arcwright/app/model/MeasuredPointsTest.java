@@ -230,4 +230,35 @@ class MeasuredPointsTest {
         }
         return best;
     }
+
+    /**
+     * A perfect R2 corner moved 0.03/0.02 as a whole passes R 1.9-2.1 (a ± radius locates nothing: its
+     * zone is tangent to the part's own surfaces). The view draws the zone tangent to its legs, so the
+     * blend's points must land on the view's R2 arc, as the verdict read them; before the fix they were
+     * placed from the nominal corner, 0.02 to 0.03 off the arc they were graded against.
+     */
+    @Test
+    void aMovedCornerIsDrawnOnTheZoneItWasJudgedOn() {
+        RadiusFeature f = fillet(new Callout.Radius(1.9, 2.1, 2.0));
+        List<double[]> pts = new ArrayList<>();
+        for (double x = 8; x > 2; x -= 0.25) pts.add(new double[] {x + 0.03, 0.02});
+        for (int i = 0; i <= 40; i++) {
+            double[] p = onBlend(2.0, 90.0 * i / 40);
+            pts.add(new double[] {p[0] + 0.03, p[1] + 0.02});
+        }
+        for (double y = 2.25; y < 8; y += 0.25) pts.add(new double[] {0.03, y + 0.02});
+        InspectionResult r = new Inspector().inspect(CheckRequests.forFeature(f, PointSet.of(pts.toArray(new double[0][]))));
+        assertThat(r.pass()).isTrue();
+        MeasuredPoints m = MeasuredPoints.of(r, "moved.csv").orElseThrow();
+        Point2 centre = ZonePicture.viewCorner(m.angleDeg(), BlendKind.FILLET).centre(2.0);
+        int onBlend = 0;
+        for (MeasuredPoints.Point p : m.points()) {
+            if (p.index() < 24 || p.index() > 64) continue;
+            onBlend++;
+            assertThat(Math.hypot(p.x() - centre.x(), p.y() - centre.y())).as("point #%d", p.index())
+                    .isEqualTo(2.0, within(1e-6));
+            assertThat(p.grade()).isNotIn(MeasuredPoints.Grade.OUTSIDE, MeasuredPoints.Grade.FAR_OUTSIDE);
+        }
+        assertThat(onBlend).isEqualTo(41);
+    }
 }
