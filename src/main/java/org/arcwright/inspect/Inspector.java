@@ -24,6 +24,9 @@ import org.arcwright.zone.RadiusZone;
  * desktop app's check panel. A request in, a result out; nothing printed, nothing written.
  */
 public final class Inspector {
+    /** What a worst point measures when it lies beyond an adjacent surface (outside the sharp corner). */
+    static final String BEYOND_SURFACE = "distance beyond surface";
+
 
     /** Runs the inspection. @throws InputProblem for input no verdict can be given on */
     public InspectionResult inspect(InspectionRequest req) {
@@ -174,7 +177,10 @@ public final class Inspector {
             }
         }
         j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), req.units()) : radiusExcess(pts, zone, j.env, unit);
-        if (explain) radiusNotes(rl, j.env, res, unit, j.notes);
+        if (explain) {
+            radiusNotes(rl, j.env, res, unit, j.notes);
+            noiseNote(j, u, unit);
+        }
         if (rl.kind() != RadiusKind.CR) return;
         j.blend = explain ? blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max())
                 : blendOf(corner, cb, pts, (idx, count) -> section.stationsOf(corner, cb.radius(), idx, count), rl.max());
@@ -183,8 +189,9 @@ public final class Inspector {
         if (detail == Detail.VERDICT && j.verdict == Verdict.FAIL) return;
         ControlledRadiusOutcome cr = ControlledRadiusCheck.evaluate(corner, cb.radius(), rl.min(), rl.max(), j.env, j.blend, req.window(), res, u);
         j.cr = cr;
+        Verdict byZone = j.verdict;
         j.verdict = j.verdict.and(cr.verdict());
-        if (cr.worst() != null && (j.worst == null || cr.worstExcess() > j.worst.excess())) {
+        if (cr.worst() != null && windowIsWorse(cr, byZone, j.worst)) {
             int i = cr.worstIndex();
             j.worst = explain ? windowWorst(pts, cr, req.units()) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, "");
         }
@@ -197,6 +204,44 @@ public final class Inspector {
                         + "A longer window (--window, now " + fmt(cr.windowLength()) + " " + unit + "), a denser scan or a lower-noise probe would decide");
             }
         }
+    }
+
+    /**
+     * Whether the CR's worst window, rather than the radius zone's worst point, is the finding to report:
+     * the one that decides the verdict comes first (a proven failure before an open question before a
+     * pass), so a verdict never points at a finding weaker than itself. Between findings of the same
+     * standing, a point beyond an adjacent surface (which no radius allows) stays, else the larger
+     * excess: both are then radii, so they compare.
+     */
+    private static boolean windowIsWorse(ControlledRadiusOutcome cr, Verdict byZone, Worst zoneWorst) {
+        if (zoneWorst == null) return true;
+        int window = standing(cr.verdict()), zone = standing(byZone);
+        if (window != zone) return window > zone;
+        return !BEYOND_SURFACE.equals(zoneWorst.measure()) && cr.worstExcess() > zoneWorst.excess();
+    }
+
+    /**
+     * A failure that rests on a point beyond a fitted surface by less than twice the scatter of the
+     * surfaces' own points is one the measurement's noise alone can produce. The verdict stands (it
+     * takes the points as exact when no uncertainty is stated), but it says so and what would judge it:
+     * the expanded uncertainty U under the ISO 14253-1 default decision rule.
+     */
+    private static void noiseNote(Judged j, double u, String unit) {
+        if (u > 0 || j.verdict != Verdict.FAIL || j.worst == null || !BEYOND_SURFACE.equals(j.worst.measure())) return;
+        double scatter = 0;
+        if (j.surfaces.a().fitted()) scatter = Math.max(scatter, j.surfaces.a().rms());
+        if (j.surfaces.b().fitted()) scatter = Math.max(scatter, j.surfaces.b().rms());
+        if (scatter > 0 && j.worst.excess() <= 2 * scatter) {
+            j.notes.add("the worst point lies beyond a fitted surface by " + fmt(j.worst.excess()) + " " + unit
+                    + ", less than twice the scatter of the surfaces' own points (rms up to " + fmt(scatter) + " " + unit
+                    + "): measurement noise alone can put a point there. This verdict takes the points as exact; state the "
+                    + "expanded measurement uncertainty U (\"uncertainty\" in the file, --uncertainty) to have it judged by the "
+                    + "ISO 14253-1 decision rule");
+        }
+    }
+
+    private static int standing(Verdict v) {
+        return v == Verdict.FAIL ? 2 : v == Verdict.INDETERMINATE ? 1 : 0;
     }
 
     private static void radiusNotes(InspectionCallout.RadiusLimits rl, RadiusEnvelope env, double res, String unit, List<String> notes) {
@@ -315,7 +360,7 @@ public final class Inspector {
             double depth = -Math.min(ha, hb);
             String text = String.format(Locale.ROOT, "%s %s beyond surface %s (outside the sharp corner: no radius allows it) at %s",
                     fmt(depth), unit, ha < hb ? "a" : "b", where);
-            return new Worst(i, x, y, depth, "distance beyond surface", unit, text);
+            return new Worst(i, x, y, depth, BEYOND_SURFACE, unit, text);
         }
         double e = env.worstExcess();
         double r = c.blendRadiusThrough(x, y);
@@ -339,7 +384,7 @@ public final class Inspector {
         double x = pts.xs()[i], y = pts.ys()[i];
         double[] h = legOffsets(zone.corner(), x, y);
         double nearest = Math.min(h[0], h[1]);
-        if (nearest < -zone.resolution()) return new Worst(i, x, y, -nearest, "distance beyond surface", unit, "");
+        if (nearest < -zone.resolution()) return new Worst(i, x, y, -nearest, BEYOND_SURFACE, unit, "");
         return new Worst(i, x, y, env.worstExcess(), "radius", unit, "");
     }
 

@@ -119,7 +119,7 @@ class ContourPlotTest {
         Path svg = dir.resolve("u.svg");
         new ContourPlot().write(r, svg);
         assertThat(content(Files.readString(svg))).containsPattern(
-                "text: worst #\\d+: outside by [0-9.]+ mm \\(local radius\\), within the uncertainty: not proven");
+                "text: worst #\\d+: outside by [0-9.]+ mm \\([a-z ]+\\), within the uncertainty: not proven");
     }
 
     @Test
