@@ -137,6 +137,7 @@ public final class NoteContext {
             Map<String, Object> im = map("verdict", ins.verdict(), "source", nz(ins.source()),
                     "measuredOn", nz(ins.measuredOn()));
             im.put("passed", ins.passed());
+            im.put("indeterminate", ins.undecided());
             im.put("figures", figures(ins.figures()));
             m.put("inspection", im);
         }

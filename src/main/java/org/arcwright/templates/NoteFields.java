@@ -73,8 +73,9 @@ public final class NoteFields {
                     "id", text("note id"), "title", text("note title"), "pack", text("pack it comes from"))),
             "inspected", flag("true when a measured contour was checked"),
             "inspection", object("the latest inspection",
-                    "verdict", text("pass or fail"),
+                    "verdict", text("pass, fail or indeterminate (ISO 14253-1: the stated uncertainty straddles a limit)"),
                     "passed", flag("true for pass"),
+                    "indeterminate", flag("true when neither conformance nor non-conformance is proven"),
                     "source", text("the points or inspection file"),
                     "measuredOn", text("ISO date of the measurement"),
                     "figures", list("the inspection's key figures", FIGURE)));
