@@ -48,6 +48,18 @@ public final class PointExcesses {
         return Double.NaN;
     }
 
+    /**
+     * What {@link #excess} measures at point {@code i}, as a {@link Worst} names it: {@code radius} for
+     * R and CR, {@code distance beyond surface} for a point outside the sharp corner, {@code distance}
+     * for a profile.
+     */
+    public String measure(int i) {
+        if (radiusZone != null) {
+            return radiusZone.beyondSurface(request.points().xs()[i], request.points().ys()[i]) ? Inspector.BEYOND_SURFACE : "radius";
+        }
+        return "distance";
+    }
+
     /** The width the excess is read against: the radius band for R and CR, the zone for a profile. */
     public double allowance() {
         if (request.callout() instanceof InspectionCallout.RadiusLimits) {

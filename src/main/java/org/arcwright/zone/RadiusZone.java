@@ -190,7 +190,9 @@ public final class RadiusZone {
 
     /**
      * How far one point's radius lies beyond the limits (radius units; negative: inside by that
-     * much); NaN for a point beyond the zone's extent.
+     * much); for a point beyond an adjacent surface (outside the sharp corner, which no radius
+     * allows), how far beyond that surface it lies, a distance (see {@link #beyondSurface}); NaN for
+     * a point beyond the zone's extent.
      */
     public double excess(double x, double y) {
         double tanA = Math.tan(corner.halfAngle());
@@ -201,10 +203,20 @@ public final class RadiusZone {
         double xa = qx * a.x() + qy * a.y(), xb = qx * b.x() + qy * b.y();
         if (xa > reach || xb > reach) return Double.NaN;
         double ha = qx * na.x() + qy * na.y(), hb = qx * nb.x() + qy * nb.y();
-        if (ha < -resolution || hb < -resolution) return min - Math.min(ha, hb);
+        if (ha < -resolution || hb < -resolution) return -Math.min(ha, hb);
         double[] lo = new double[1], hi = new double[1];
         allowed(x, y, ha, hb, xa, xb, tanA, lo, hi);
         return Math.max(min - hi[0], lo[0] - max);
+    }
+
+    /**
+     * Whether a point lies beyond an adjacent surface by more than the resolution (outside the sharp
+     * corner), where {@link #excess} is a distance beyond that surface rather than a radius.
+     */
+    public boolean beyondSurface(double x, double y) {
+        double qx = x - corner.vertex().x(), qy = y - corner.vertex().y();
+        Point2 na = corner.inwardNormalA(), nb = corner.inwardNormalB();
+        return qx * na.x() + qy * na.y() < -resolution || qx * nb.x() + qy * nb.y() < -resolution;
     }
 
     private void allowed(double x, double y, double ha, double hb, double xa, double xb, double tanA,

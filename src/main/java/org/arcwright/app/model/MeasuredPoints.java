@@ -73,8 +73,10 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
      * @param y where it lies in the view's frame, true size
      * @param excess how far beyond the limits (negative: inside by that much), NaN when not judged
      * @param grade its grade
+     * @param measure what the excess measures ({@code radius}, {@code distance beyond surface},
+     *     {@code distance}), so that it is never read as a length it is not
      */
-    public record Point(int index, double x, double y, double excess, Grade grade) {
+    public record Point(int index, double x, double y, double excess, Grade grade, String measure) {
         public Point2 at() { return new Point2(x, y); }
     }
 
@@ -125,7 +127,7 @@ public record MeasuredPoints(List<Point> points, int total, double angleDeg, Ble
             }
             double excess = excesses.excess(i);
             Point2 p = frame.toView(x, y);
-            out.add(new Point(i, p.x(), p.y(), excess, grade(excess, band)));
+            out.add(new Point(i, p.x(), p.y(), excess, grade(excess, band), excesses.measure(i)));
         }
         BlendKind kind = corner.kind();
         return Optional.of(new MeasuredPoints(out, n, corner.includedAngleDeg(), kind, cb.radius(), q.callout(), band, source));

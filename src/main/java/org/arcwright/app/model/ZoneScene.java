@@ -85,7 +85,8 @@ public record ZoneScene(ZonePicture picture, String heading, MeasuredPoints meas
         MeasuredPoints.Point p = measured.points().get(i);
         double dev = picture.deviationTowardAir(p.at());
         String excess = Double.isNaN(p.excess()) ? "not judged (beyond the zone's extent)"
-                : (p.excess() > 0 ? "outside by " : "inside by ") + Numbers.fixed(Math.abs(p.excess()), 4) + " " + units;
+                : (p.excess() > 0 ? "outside by " : "inside by ") + Numbers.fixed(Math.abs(p.excess()), 4) + " " + units
+                        + " (" + p.measure() + ")";
         return "point #" + p.index() + " · deviation " + (dev >= 0 ? "+" : "") + Numbers.fixed(dev, 4) + " " + units
                 + (dev >= 0 ? " (air side)" : " (material side)") + " · " + excess;
     }

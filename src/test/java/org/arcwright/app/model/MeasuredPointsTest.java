@@ -3,6 +3,7 @@ package org.arcwright.app.model;
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.within;
 
+import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
@@ -10,11 +11,13 @@ import java.util.Optional;
 import java.util.concurrent.atomic.AtomicInteger;
 import org.arcwright.callout.Callout;
 import org.arcwright.inspect.InspectionCallout;
+import org.arcwright.inspect.InspectionFiles;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointSet;
+import org.arcwright.io.JsonFiles;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.RadiusKind;
 import org.arcwright.tolerance.Units;
@@ -260,5 +263,26 @@ class MeasuredPointsTest {
             assertThat(p.grade()).isNotIn(MeasuredPoints.Grade.OUTSIDE, MeasuredPoints.Grade.FAR_OUTSIDE);
         }
         assertThat(onBlend).isEqualTo(41);
+    }
+
+    /**
+     * A point a hair beyond a fitted surface (the repository's housing section, point #15, 0.00086 mm
+     * beyond surface a) is outside by that distance, named as a distance beyond the surface. Before
+     * the fix its excess was the lower limit plus that depth (1.8009 "mm"), graded far outside and shown
+     * in the Zone view's tooltip as "outside by 1.8009 mm": read as a length it is not.
+     */
+    @Test
+    void aPointBeyondASurfaceIsOutsideByItsDistanceBeyondIt() throws Exception {
+        var request = new InspectionFiles(new JsonFiles())
+                .read(Path.of("examples/inspect/housing-fillet-profile.json"))
+                .withCompare(false).withCallout(new InspectionCallout.RadiusLimits(RadiusKind.CR, 1.8, 2.2));
+        InspectionResult r = new Inspector().inspect(request);
+        MeasuredPoints m = MeasuredPoints.of(r, "housing.csv").orElseThrow();
+        MeasuredPoints.Point p15 = m.points().stream().filter(p -> p.index() == 15).findFirst().orElseThrow();
+        assertThat(p15.measure()).isEqualTo("distance beyond surface");
+        assertThat(p15.excess()).isEqualTo(r.worst().excess(), within(1e-9)).isLessThan(0.001);
+        assertThat(p15.grade()).isEqualTo(MeasuredPoints.Grade.OUTSIDE);
+        assertThat(m.points()).filteredOn(p -> p.grade() != MeasuredPoints.Grade.NOT_JUDGED && p.index() != 15)
+                .allSatisfy(p -> assertThat(p.measure()).isEqualTo("radius"));
     }
 }
