@@ -16,6 +16,7 @@ import javax.swing.SwingUtilities;
 import org.arcwright.app.model.Sections;
 import org.arcwright.app.model.ThemeChoice;
 import org.arcwright.app.shell.MainWindow;
+import org.arcwright.app.zoneview.ZoneViewPanel;
 import org.arcwright.cli.Cli;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.rules.RuleBook;
@@ -340,6 +341,30 @@ class FeatureBoundViewsGuiTest {
             }
             return false;
         }), 10);
+    }
+
+    /**
+     * The Zone view after checking the housing section for F1 (CR 1.8-2.2): point #15 lies 0.00086 mm
+     * beyond fitted surface a, and its tooltip says so in those words. Before the fix it read
+     * "outside by 1.8009 mm", the lower limit plus that depth, which an inspector reads as 1.8 mm out.
+     */
+    @Test
+    @Order(13)
+    void aPointBeyondASurfaceIsDescribedByItsDistanceInTheZoneView() {
+        selectRow(0);
+        GuiSupport.onEdt(() -> window.showTab(3));
+        checkAndWait(HOUSING);
+        GuiSupport.onEdt(() -> window.showTab(1));
+        ZoneViewPanel zone = (ZoneViewPanel) fixture.panel("zoneView").target();
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(zone::plottedPoints) > 0, 10);
+        List<String> tips = GuiSupport.onEdt(() -> {
+            List<String> t = new ArrayList<>();
+            for (int i = 0; i < zone.plottedPoints(); i++) t.add(zone.pointTooltip(i));
+            return t;
+        });
+        assertThat(tips).filteredOn(t -> t.startsWith("point #15 "))
+                .singleElement().asString().contains("outside by 0.0009 mm (distance beyond surface)");
+        assertThat(tips).noneSatisfy(t -> assertThat(t).contains("outside by 1.8"));
     }
 
     private static String firstRuleId() {
