@@ -427,8 +427,9 @@ public final class Inspector {
         if (c instanceof InspectionCallout.RadiusLimits rl) {
             rMin = rl.min();
             rMax = rl.max();
-            double nom = Math.max(rMin, Math.min(rMax, cb.radius()));
-            zone = CrescentZone.of(rMin, nom, rMax, cb.corner().includedAngleDeg()).equalBilateralProfile();
+            // about the drawn nominal, the true profile of the derived profile rows, even when it lies
+            // outside the limits (deviations of the same sign: R3 +0.3/+0.1 needs 0.2485 at 90°)
+            zone = CrescentZone.of(rMin, cb.radius(), rMax, cb.corner().includedAngleDeg()).equalBilateralProfile();
         } else if (c instanceof InspectionCallout.ProfileTolerance pt) {
             zone = pt.zone().width();
         } else {

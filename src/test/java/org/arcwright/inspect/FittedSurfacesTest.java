@@ -222,7 +222,29 @@ class FittedSurfacesTest {
         assertThatThrownBy(() -> new InspectionCallout.RadiusLimits(RadiusKind.R, 2, 2)).isInstanceOf(InputProblem.class)
                 .hasMessageContaining("equals min");
         assertThatThrownBy(() -> request(SQUARE, 5, R, pts, 1e-6)).isInstanceOf(InputProblem.class)
-                .hasMessageContaining("nominalRadius").hasMessageContaining("outside the callout's limits");
+                .hasMessageContaining("nominalRadius").hasMessageContaining("outside the callout's limits")
+                .hasMessageContaining("farther than the band is wide");
+    }
+
+    @Test
+    void sameSignLimitsAreJudgedAboutTheDrawnNominal() {
+        // R3 +0.3/+0.1 is drawn: limit arcs R3.1 and R3.3, the nominal R3 outside them (deviations of
+        // the same sign). Before: refused, "the nominal must lie within its own limits" (exit 2).
+        // The equal-bilateral profile zone about the drawn R3 that holds the crescent is
+        // 2 · 0.3 · (1/sin 45° - 1) = 0.2485 at 90° (plane geometry; CrescentZone), not the 0.0828
+        // about a nominal clamped to R3.1.
+        InspectionCallout sameSign = new InspectionCallout.RadiusLimits(RadiusKind.R, 3.1, 3.3);
+        PointSet pts = Sections.section(SQUARE, 3.2, 40, 400, 0, 1, f -> 0);
+        InspectionResult r = inspector.inspect(Sections.request(SQUARE, 3, sameSign, pts).withCompare(true));
+        assertThat(r.verdict()).isEqualTo(Verdict.PASS);
+        assertThat(r.radius().smallest()).isCloseTo(3.2, within(1e-6));
+        Comparison located = r.comparisons().stream().filter(c -> c.name().equals("profile, located")).findFirst().orElseThrow();
+        assertThat(located.callout()).isEqualTo("profile 0.2485 located");
+        assertThat(located.verdict()).isEqualTo(Verdict.PASS);
+        // R3 -0.1/-0.3 mirrored: limit arcs R2.7 and R2.9; a part at R3 lies outside them
+        InspectionCallout below = new InspectionCallout.RadiusLimits(RadiusKind.CR, 2.7, 2.9);
+        PointSet nominalPart = Sections.section(SQUARE, 3, 40, 400, 0, 1, f -> 0);
+        assertThat(inspector.inspect(Sections.request(SQUARE, 3, below, nominalPart)).verdict()).isEqualTo(Verdict.FAIL);
     }
 
     @Test
