@@ -10,6 +10,7 @@ import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
 import org.arcwright.testing.Golden;
+import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.WorksheetFiles;
@@ -127,6 +128,29 @@ class NoteTemplatesTest {
         NoteTemplate t = NoteTemplate.compile("ids", "{{feature.id}}:{{feature.status}}", "ids", "t");
         assertThat(new NoteTemplates(List.of(t)).fill("ids", demo, null, "t"))
                 .isEqualTo("F1:measured: pass\n\nF2:decided\n\nF3:decided\n\nF4:decided\n");
+    }
+
+    @Test
+    void radiusAndControlledRadiusNotesSayWhatEachCalloutRequires() {
+        // ASME Y14.5-2018 radius and controlled radius (from memory): both zones are two arcs tangent
+        // to the adjacent surfaces; R leaves form inside the zone free (flats and reversals pass), CR
+        // adds a fair curve without flats or reversals and every radius along it within the limits.
+        // Before: the R note read "SIZE ONLY: FORM AND LOCATION ARE NOT CONTROLLED" and the CR note
+        // did not ask for the local radii.
+        NoteTemplates t = NoteTemplates.load(PackStack.builtIn());
+        for (DrawingStyle style : DrawingStyle.values()) {
+            PartWorksheet part = new PartWorksheet(1, demo.part(), demo.units(), style, demo.titleBlock(), demo.features());
+            for (String name : List.of("callout-note", "inspection-plan")) {
+                String cr = t.fill(name, part, "F1", "t").toUpperCase(java.util.Locale.ROOT);
+                String r = t.fill(name, part, "F2", "t").toUpperCase(java.util.Locale.ROOT);
+                assertThat(r).as(name + " R, " + style).contains("TANGENT TO THE ADJACENT SURFACES").contains("FLATS AND REVERSALS")
+                        .doesNotContain("SIZE ONLY").doesNotContain("FAIR CURVE").doesNotContain("EVERY POINT BETWEEN");
+                assertThat(cr).as(name + " CR, " + style).containsAnyOf("WITHOUT FLATS OR REVERSALS", "NO FLATS, NO REVERSALS").containsAnyOf("EVERY LOCAL RADIUS", "AT EVERY POINT BETWEEN");
+                if (style == DrawingStyle.ASME || name.equals("inspection-plan")) {
+                    assertThat(cr).as(name + " CR, " + style).contains("TANGENT TO THE ADJACENT SURFACES");
+                }
+            }
+        }
     }
 
     @Test
