@@ -217,7 +217,7 @@ public final class Inspector {
         double stop = detail == Detail.VERDICT ? acceptAt(pt.zone(), u) : Double.NEGATIVE_INFINITY;
         j.profile = profileCheck(req, section).evaluate(req.points(), pt.zone(), pt.free(), pt.dynamic(), stop);
         j.verdict = profileVerdict(j.profile, u);
-        j.worst = profileWorst(req.points(), j.profile, req.units().symbol(), detail == Detail.REPORT);
+        j.worst = profileWorst(req.points(), j.profile, req.units(), detail == Detail.REPORT);
         if (detail == Detail.REPORT) {
             j.notes.add("deviation is positive toward air (the side where added material would put the surface)");
             if (pt.free().isEmpty() && !pt.dynamic()) j.notes.add("located profile: judged in the nominal (datum) frame, where the points were measured");
@@ -236,7 +236,7 @@ public final class Inspector {
             ProfileOutcome o = check.evaluate(req.points(), tz, t.free(), false, stop);
             tiers.add(o);
             j.verdict = j.verdict.and(profileVerdict(o, u));
-            Worst w = profileWorst(req.points(), o, req.units().symbol(), detail == Detail.REPORT);
+            Worst w = profileWorst(req.points(), o, req.units(), detail == Detail.REPORT);
             if (j.worst == null || w.excess() > j.worst.excess()) j.worst = w;
         }
         j.tiers = List.copyOf(tiers);
@@ -363,19 +363,20 @@ public final class Inspector {
         } else if (Double.isInfinite(w.radius()) || w.radius() < 0) {
             text = span + " is flat: no measurable curvature; largest limit " + fmt(cr.worstLimit()) + " " + unit;
         } else {
-            text = String.format(Locale.ROOT, "local radius %s %s ± %s %s over %s; limit %s %s", fmt(w.radius()), unit, fmt(w.uncertainty()),
+            text = String.format(Locale.ROOT, "local radius %s %s ± %s %s over %s; limit %s %s", fmt(w.radius()), unit, length(w.uncertainty(), units),
                     unit, span, fmt(cr.worstLimit()), unit);
         }
         return new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, text);
     }
 
-    private static Worst profileWorst(PointSet pts, ProfileOutcome o, String unit, boolean explain) {
+    private static Worst profileWorst(PointSet pts, ProfileOutcome o, Units units, boolean explain) {
+        String unit = units.symbol();
         int i = o.worst();
         if (i < 0) return null;
         double d = o.deviations()[i], e = o.worstExcess();
         if (!explain) return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, "");
         String text = String.format(Locale.ROOT, "point #%d lies %s %s %s the zone (deviation %s %s %s after registration)", i, fmt(Math.abs(e)),
-                unit, e > 0 ? "outside" : "inside", fmt(Math.abs(d)), unit, d >= 0 ? "toward air" : "into the material");
+                unit, e > 0 ? "outside" : "inside", length(Math.abs(d), units), unit, d >= 0 ? "toward air" : "into the material");
         return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, text);
     }
 
@@ -491,10 +492,11 @@ public final class Inspector {
     private static Comparison row(InspectionCallout k, boolean derived, InspectionResult r) {
         String figure;
         double required = Double.NaN;
-        String u = " " + r.request().units().symbol();
+        Units units = r.request().units();
+        String u = " " + units.symbol();
         if (r.controlled() != null) {
             ControlledRadiusOutcome cr = r.controlled();
-            figure = "local radius " + fmt(cr.localMin()) + " to " + fmt(cr.localMax()) + u + " (± up to " + fmt(cr.uncertainty()) + u + "), "
+            figure = "local radius " + fmt(cr.localMin()) + " to " + fmt(cr.localMax()) + u + " (± up to " + length(cr.uncertainty(), units) + u + "), "
                     + cr.reversals().size() + " reversal(s), " + cr.flats() + " flat window(s)"
                     + (cr.indeterminate().isEmpty() ? "" : ", " + cr.indeterminate().size() + " window(s) undecided");
         } else if (r.radius() != null) {
@@ -502,10 +504,10 @@ public final class Inspector {
             figure = "envelope " + down(r.radius().smallest(), res) + " to " + up(r.radius().largest(), res) + u;
         } else if (r.profile() != null) {
             required = r.profile().requiredZone();
-            figure = "needs zone " + up(required, PROFILE_SLACK) + u;
+            figure = "needs zone " + lengthUp(required, PROFILE_SLACK, units) + u;
         } else {
             StringBuilder sb = new StringBuilder("needs zones");
-            for (ProfileOutcome t : r.tiers()) sb.append(' ').append(up(t.requiredZone(), PROFILE_SLACK));
+            for (ProfileOutcome t : r.tiers()) sb.append(' ').append(lengthUp(t.requiredZone(), PROFILE_SLACK, units));
             figure = sb.append(u).toString();
         }
         return new Comparison(name(k), k.describe(), derived, r.verdict(), figure, required);
@@ -556,6 +558,34 @@ public final class Inspector {
     public static String coordinate(double v, Units units) {
         if (Double.isNaN(v)) return "none";
         return DecimalText.fixed(v, units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES);
+    }
+
+    /**
+     * A computed length in the report's words (a residual, a deviation, a width, a step, an
+     * uncertainty): {@link #fmt}'s 5 significant digits, except that a length below half the last
+     * place of a coordinate ({@link #coordinate}: 0.0001 mm, 0.00001 in) reads as zero at that place,
+     * {@code 0.0000}. The residual of a perfect fit (1e-17) or a solver's round-off (1e-9) lies far
+     * below any probe's uncertainty, and a report states lengths no finer than its coordinates
+     * (common practice). Not for an excess a verdict rests on: that keeps {@link #fmt}, so that a
+     * point failing by less than the last place still says by how much.
+     */
+    public static String length(double v, Units units) {
+        if (!Double.isFinite(v)) return fmt(v);
+        int places = units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES;
+        if (Math.abs(v) < 0.5 * Math.pow(10, -places)) return DecimalText.fixed(0, places);
+        return fmt(v);
+    }
+
+    /**
+     * A length needed (a profile zone) in words, rounded outward as {@link #up} rounds it, and never
+     * below the last place of a coordinate: a need of 5e-9 mm reads {@code 0.0001}, a zone that would
+     * pass, where {@link #length} would print a zone of nothing.
+     */
+    public static String lengthUp(double v, double slack, Units units) {
+        if (!Double.isFinite(v) || v <= 0) return up(v, slack);
+        int places = units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES;
+        double last = Math.pow(10, -places);
+        return v < last ? DecimalText.fixed(last, places) : up(v, slack);
     }
 
     /**
