@@ -174,7 +174,10 @@ public final class Inspector {
             }
         }
         j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), req.units()) : radiusExcess(pts, zone, j.env, unit);
-        if (explain) radiusNotes(rl, j.env, res, unit, j.notes);
+        if (explain) {
+            radiusNotes(rl, j.env, res, unit, j.notes);
+            noiseNote(j.worst, j.surfaces, zone, rl, u, unit, j.notes);
+        }
         if (rl.kind() != RadiusKind.CR) return;
         j.blend = explain ? blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max())
                 : blendOf(corner, cb, pts, (idx, count) -> section.stationsOf(corner, cb.radius(), idx, count), rl.max());
@@ -197,6 +200,37 @@ public final class Inspector {
                         + "A longer window (--window, now " + fmt(cr.windowLength()) + " " + unit + "), a denser scan or a lower-noise probe would decide");
             }
         }
+    }
+
+    /** How many times a surface's rms a point may lie beyond it and still be read as its scatter (a normal scatter passes 4σ once in about 16,000 points). */
+    static final double SCATTER_SPAN = 4;
+
+    /**
+     * When the worst point lies beyond a fitted surface by no more than {@value #SCATTER_SPAN} times
+     * the rms of that surface's own points, says so: a least-squares line leaves about half its
+     * points on each side, so scatter of that size alone puts points beyond it near the tangent
+     * points, where the zone has no width. The verdict stands (the points as measured); the note says
+     * what would judge the scatter: a stated U (ISO 14253-1 default rule) or a resolution of the order
+     * of the scatter, which the request caps at a tenth of the band. A stated U covers one point at
+     * about 95 %, so among hundreds of points near the tangent points a few still lie beyond it.
+     */
+    private static void noiseNote(Worst worst, AdjacentSurfaces surfaces, RadiusZone zone, InspectionCallout.RadiusLimits rl,
+                                  double u, String unit, List<String> notes) {
+        if (worst == null || !"distance beyond surface".equals(worst.measure())) return;
+        double[] h = legOffsets(zone.corner(), worst.x(), worst.y());
+        AdjacentSurfaces.Surface s = h[0] < h[1] ? surfaces.a() : surfaces.b();
+        if (!s.fitted() || !(s.rms() > 0) || worst.excess() > SCATTER_SPAN * s.rms()) return;
+        double cap = InspectionRequest.RESOLUTION_SHARE * (rl.max() - rl.min());
+        notes.add(String.format(Locale.ROOT, "the worst point lies %s %s beyond surface %s, within the scatter of the points fitted to surface %s "
+                        + "(rms %s %s; %s times that is %s %s): noise of that size alone puts points beyond a fitted surface near the tangent points, "
+                        + "where the zone has no width. %s a resolution of the order of the scatter (at most %s %s, a tenth of the band)",
+                fmt(worst.excess()), unit, h[0] < h[1] ? "a" : "b", h[0] < h[1] ? "a" : "b", DecimalText.significant(s.rms(), 3), unit,
+                fmt(SCATTER_SPAN), fmt(SCATTER_SPAN * s.rms()), unit,
+                u > 0 ? "The stated U covers one point at about 95 %, so among hundreds of points a few still lie beyond it: to judge the part "
+                        + "rather than the scatter, give"
+                        : "To judge the part rather than the scatter, state the probe's expanded uncertainty (--uncertainty or \"uncertainty\": "
+                        + "ISO 14253-1 default rule), or give",
+                fmt(cap), unit));
     }
 
     private static void radiusNotes(InspectionCallout.RadiusLimits rl, RadiusEnvelope env, double res, String unit, List<String> notes) {
@@ -501,7 +535,10 @@ public final class Inspector {
                     + (cr.indeterminate().isEmpty() ? "" : ", " + cr.indeterminate().size() + " window(s) undecided");
         } else if (r.radius() != null) {
             double res = r.request().resolution();
-            figure = "envelope " + down(r.radius().smallest(), res) + " to " + up(r.radius().largest(), res) + u;
+            RadiusEnvelope e = r.radius();
+            figure = e.outside() > 0 && r.worst() != null && "distance beyond surface".equals(r.worst().measure())
+                    ? e.outside() + " point(s) beyond the fitted surfaces, up to " + fmt(r.worst().excess()) + u + "; largest radius " + up(e.largest(), res) + u
+                    : "envelope " + down(e.smallest(), res) + " to " + up(e.largest(), res) + u;
         } else if (r.profile() != null) {
             required = r.profile().requiredZone();
             figure = "needs zone " + lengthUp(required, PROFILE_SLACK, units) + u;

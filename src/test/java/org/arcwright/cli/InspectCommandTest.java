@@ -283,4 +283,13 @@ class InspectCommandTest {
         assertThat(run("inspect", "examples/inspect/bracket-round-r.json", "--compare")).isZero();
         assertThat(out.toString()).containsPattern("\\n    indeterminate +controlled radius");
     }
+
+    @Test
+    void aComparisonRowFailedByPointsBeyondTheSurfacesSaysSo() {
+        // the housing's derived R row fails on points beyond the fitted surfaces, where no radius
+        // allows them; before, its figure read "envelope none to 2.113 mm"
+        run("inspect", "examples/inspect/housing-fillet-profile.json", "--compare");
+        String row = out.toString().lines().filter(l -> l.contains(" radius  ") && l.contains("R 1.879-2.121")).findFirst().orElseThrow();
+        assertThat(row).doesNotContain("none").containsPattern("\\d+ point\\(s\\) beyond the fitted surfaces, up to [0-9.]+ mm; largest radius [0-9.]+ mm");
+    }
 }

@@ -101,6 +101,27 @@ class FittedSurfacesTest {
     }
 
     @Test
+    void aFailureWithinTheNoiseOfAFittedSurfaceSaysSoAndWhatWouldDecide() {
+        // the same noisy part at the default resolution (1e-6 mm): about half the points near the
+        // tangent points fall beyond the least-squares line fitted through them, by up to ~3σ. The
+        // verdict reads the points as measured (no U stated), so it fails; the note says the excess
+        // is within the scatter of that surface's own points and what would judge it.
+        PointSet pts = Sections.section(SQUARE, 2, 400, 1600, 0.001, 7, f -> 0);
+        InspectionResult r = inspector.inspect(request(SQUARE, 2, R, pts, 1e-6));
+        assertThat(r.verdict()).isEqualTo(Verdict.FAIL);
+        assertThat(r.worst().measure()).isEqualTo("distance beyond surface");
+        assertThat(r.notes()).anyMatch(n -> n.contains("within the scatter of the points fitted to surface")
+                && n.contains("rms") && n.contains("mm") && n.contains("--uncertainty") && n.contains("resolution"));
+        // a real excess, far beyond the scatter, gets no such note
+        PointSet base = Sections.section(SQUARE, 2, 40, 400, 0, 1, f -> 0);
+        double[] xs = base.x(), ys = base.y();
+        xs[39] = 2.05;
+        ys[39] = -0.0009;
+        InspectionResult real = inspector.inspect(Sections.request(SQUARE, 2, R, new PointSet(xs, ys, xs.length, "test")));
+        assertThat(real.notes()).noneMatch(n -> n.contains("within the scatter"));
+    }
+
+    @Test
     void sparseNoisyScanIsIndeterminateNotFail() {
         // the same part scanned every 25 µm: the windows cannot resolve the radius to the band, so
         // neither pass nor fail is proven; the note says what would decide.
