@@ -184,6 +184,9 @@ class FittedSurfacesTest {
         InspectionResult r = inspector.inspect(Sections.request(SQUARE, 2, R, pts));
         assertThat(r.surfaces().a().fitted()).isFalse();
         assertThat(r.notes()).anyMatch(n -> n.contains("surface a") && n.contains("nominal surface"));
+        // the note says what to do and states no length without its unit (before: "need 5 spanning at least 0.21 of 2.1")
+        String note = r.notes().stream().filter(n -> n.contains("nominal surface")).findFirst().orElseThrow();
+        assertThat(note).contains("measure further along surface a").doesNotContainPattern("\\d\\.\\d");
         assertThat(r.verdict()).isEqualTo(Verdict.PASS);
     }
 
