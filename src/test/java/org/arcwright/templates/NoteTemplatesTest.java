@@ -6,9 +6,15 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
+import org.arcwright.callout.Callout;
+import org.arcwright.callout.DatumReference;
+import org.arcwright.callout.Extent;
+import org.arcwright.callout.ProfileTier;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
+import org.arcwright.rules.Recommendation;
 import org.arcwright.testing.Golden;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
@@ -151,6 +157,23 @@ class NoteTemplatesTest {
                 }
             }
         }
+    }
+
+    @Test
+    void aCompositeProfilePlanSaysWhatEachTierRequires() {
+        // ASME Y14.5-2018 composite profile (from memory): every tier's zone holds the surface; the
+        // upper tier is located by its datums, a lower tier only oriented by the datums it repeats.
+        // Before: "upper tier in the datum reference frame — zone 0.5 to A, B — zone 0.1 to A".
+        Callout comp = new Callout.CompositeProfile(List.of(
+                new ProfileTier(0.5, List.of(DatumReference.parse("A"), DatumReference.parse("B"))),
+                new ProfileTier(0.1, List.of(DatumReference.parse("A"))), new ProfileTier(0.05, List.of())), Extent.THIS_RADIUS);
+        Recommendation rec = new Recommendation("demo", comp, "composite", 1.0, List.of("why"), List.of(), List.of(),
+                Map.of("zone", 0.5), List.of(), List.of(), false);
+        PartWorksheet w = demo.withFeature(demo.features().get(2).withChosen(rec));
+        String plan = NoteTemplates.load(PackStack.builtIn()).fill("inspection-plan", w, "F3", "t");
+        assertThat(plan).contains("every point within each tier's zone about the true profile")
+                .contains("0.5 mm to A, B; 0.1 mm to A; 0.05 mm with no datums;")
+                .contains("the upper tier located and oriented by its datums").contains("free in location");
     }
 
     @Test
