@@ -15,6 +15,7 @@ import org.arcwright.inspect.InspectionJson;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.ProfileOutcome;
 import org.arcwright.inspect.AdjacentSurfaces;
 import org.arcwright.inspect.Verdict;
@@ -24,6 +25,7 @@ import org.arcwright.io.JsonFiles;
 import org.arcwright.io.OutputFiles;
 import org.arcwright.render.ContourPlot;
 import org.arcwright.tolerance.Units;
+import org.arcwright.zone.Point2;
 import org.arcwright.zone.RadiusEnvelope;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -128,7 +130,13 @@ final class InspectCommand implements Callable<Integer> {
                 q.points().size(), u, q.uncertainty() > 0 ? ", U = " + n(q.uncertainty()) + " " + u : "");
         AdjacentSurfaces sf = r.surfaces();
         if (sf != null) {
-            out.printf("  surfaces       a %s, b %s; angle %s°%n", surface(sf.a(), q.units()), surface(sf.b(), q.units()), n(sf.includedAngleDeg()));
+            String beside = "";
+            if (q.nominal() instanceof Nominal.CornerBlend cb) {
+                Point2 v = sf.corner().vertex(), nv = cb.corner().vertex();
+                beside = String.format(Locale.ROOT, " (nominal %s°), corner at %s (nominal %s)", n(cb.corner().includedAngleDeg()),
+                        at(v.x(), v.y(), q.units()), at(nv.x(), nv.y(), q.units()));
+            }
+            out.printf("  surfaces       a %s, b %s; angle %s°%s%n", surface(sf.a(), q.units()), surface(sf.b(), q.units()), n(sf.includedAngleDeg()), beside);
         }
         RadiusEnvelope e = r.radius();
         if (e != null) {

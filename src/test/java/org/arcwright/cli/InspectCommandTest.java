@@ -292,4 +292,23 @@ class InspectCommandTest {
         String row = out.toString().lines().filter(l -> l.contains(" radius  ") && l.contains("R 1.879-2.121")).findFirst().orElseThrow();
         assertThat(row).doesNotContain("none").containsPattern("\\d+ point\\(s\\) beyond the fitted surfaces, up to [0-9.]+ mm; largest radius [0-9.]+ mm");
     }
+
+    @Test
+    void theFittedSurfacesAreReportedBesideTheNominal() throws IOException {
+        // a perfect R2 moved 0.03 along x: the surfaces' corner sits at [0.03, 0] against the nominal [0, 0]
+        StringBuilder moved = new StringBuilder();
+        Matcher m = Pattern.compile("\\[([-0-9.E]+), ([-0-9.E]+)\\]").matcher(arcPoints(2.0));
+        while (m.find()) {
+            moved.append(moved.length() == 0 ? "[" : ", ").append("[").append(Double.parseDouble(m.group(1)) + 0.03).append(", ").append(m.group(2)).append("]");
+        }
+        Path f = file("moved.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": " + moved + "]}");
+        assertThat(run("inspect", f.toString())).isZero();
+        assertThat(out.toString()).contains("angle 90° (nominal 90°), corner at [0.0300, 0.0000] (nominal [0.0000, 0.0000])");
+        out.getBuffer().setLength(0);
+        assertThat(run("inspect", f.toString(), "--format", "json")).isZero();
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertThat(j.at("/surfaces/nominal/angle").asDouble()).isEqualTo(90.0);
+        assertThat(j.at("/surfaces/nominal/vertex/0").asDouble()).isZero();
+        assertThat(j.at("/surfaces/vertex/0").asDouble()).isBetween(0.03 - 1e-9, 0.03 + 1e-9);
+    }
 }
