@@ -197,8 +197,7 @@ final class InspectCommand implements Callable<Integer> {
         }
         List<String> notes = r.notes();
         for (String s : notes) out.println("  note: " + s);
-        out.println("  The verdict reads the standard's zone definitions; it is not an acceptance. Check it against the governing");
-        out.println("  standard, your company's inspection practice and the responsible engineer's judgement.");
+        for (String line : InspectionResult.CAUTION.replace("governing standard", "governing\nstandard").split("\n")) out.println("  " + line);
     }
 
     private static String surface(AdjacentSurfaces.Surface s, Units units) {
@@ -210,8 +209,7 @@ final class InspectCommand implements Callable<Integer> {
 
     /** A computed length to 4 significant digits, as the report's other figures, and zero below its last place ({@link Inspector#length}). */
     private static String len(double v, Units units) {
-        String zero = Inspector.length(0, units);
-        return Inspector.length(v, units).equals(zero) ? zero : n(v);
+        return Inspector.length(v, units, 4);
     }
 
     /** A surface's rms: three significant digits are enough for a scatter, and zero below the report's last place. */

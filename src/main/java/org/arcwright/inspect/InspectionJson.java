@@ -136,6 +136,7 @@ public final class InspectionJson {
             w.put("text", r.worst().text());
             m.put("worst", w);
         }
+        m.put("caution", InspectionResult.CAUTION);
         if (!r.comparisons().isEmpty()) {
             List<Object> rows = new ArrayList<>();
             for (Comparison c : r.comparisons()) {

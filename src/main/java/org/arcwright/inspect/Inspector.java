@@ -366,6 +366,40 @@ public final class Inspector {
         return new Worst(i, x, y, e, "radius", unit, text);
     }
 
+    /**
+     * The worst point in a few words, for a label beside it on a plot or a view: what its figure
+     * measures and against what, with the unit, never a bare excess that reads as a distance from
+     * the part ({@code outside by 4.665 mm (local radius)} read as a point 4.7 mm out, when the
+     * window's local radius was 6.765 mm against a 2.1 mm limit). Empty when there is no worst point.
+     */
+    public static String worstLabel(InspectionResult r) {
+        Worst w = r.worst();
+        if (w == null) return "";
+        String u = w.unit().isEmpty() ? "" : " " + w.unit();
+        double e = w.excess();
+        switch (w.measure()) {
+            case "local radius": {
+                ControlledRadiusOutcome cr = r.controlled();
+                ControlledRadiusOutcome.LocalWindow lw = cr == null ? null : cr.worst();
+                if (lw == null) break;
+                String head = "worst window " + lw.number() + " (#" + w.index() + "): ";
+                if (lw.reversed()) return head + "curves against the blend (a reversal)";
+                if (!Double.isFinite(lw.radius()) || lw.radius() < 0) return head + "flat, limit " + fmt(cr.worstLimit()) + u;
+                return head + "local radius " + fmt(lw.radius()) + u + " ± " + length(lw.uncertainty(), r.request().units()) + u
+                        + ", limit " + fmt(cr.worstLimit()) + u;
+            }
+            case "radius":
+                return "worst #" + w.index() + ": " + (e > 0 ? "beyond a limit" : "within the limits") + " by " + fmt(Math.abs(e)) + u + " of radius";
+            case "distance beyond surface":
+                return "worst #" + w.index() + ": " + fmt(e) + u + " beyond a fitted surface (no radius allows it)";
+            case "distance":
+                return "worst #" + w.index() + ": " + fmt(Math.abs(e)) + u + (e > 0 ? " outside" : " inside") + " the zone";
+            default:
+                break;
+        }
+        return "worst #" + w.index() + ": " + (e > 0 ? "beyond" : "within") + " by " + fmt(Math.abs(e)) + u + " (" + w.measure() + ")";
+    }
+
     /** The worst point of a radius zone with its excess alone, as {@link #radiusWorst} measures it, without words. */
     private static Worst radiusExcess(PointSet pts, RadiusZone zone, RadiusEnvelope env, String unit) {
         int i = env.worst();
@@ -607,10 +641,15 @@ public final class Inspector {
      * point failing by less than the last place still says by how much.
      */
     public static String length(double v, Units units) {
+        return length(v, units, 5);
+    }
+
+    /** {@link #length(double, Units)} to {@code digits} significant digits above the last place (a plot's 4). */
+    public static String length(double v, Units units, int digits) {
         if (!Double.isFinite(v)) return fmt(v);
         int places = units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES;
         if (Math.abs(v) < 0.5 * Math.pow(10, -places)) return DecimalText.fixed(0, places);
-        return fmt(v);
+        return DecimalText.significant(v, digits);
     }
 
     /**

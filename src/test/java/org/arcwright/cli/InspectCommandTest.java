@@ -311,4 +311,17 @@ class InspectCommandTest {
         assertThat(j.at("/surfaces/nominal/vertex/0").asDouble()).isZero();
         assertThat(j.at("/surfaces/vertex/0").asDouble()).isBetween(0.03 - 1e-9, 0.03 + 1e-9);
     }
+
+    @Test
+    void everyVerdictCarriesTheReminderInTextAndJson() {
+        // the project's rule: every verdict says it reads the standard's definitions and is not an
+        // acceptance, deferring to the standard, company practice and the responsible engineer.
+        // Before: the JSON verdict had no such field.
+        for (String format : new String[] {"text", "json"}) {
+            out.getBuffer().setLength(0);
+            run("inspect", "examples/inspect/bracket-round-r.json", "--format", format);
+            String all = out.toString().replaceAll("\\s+", " ");
+            assertThat(all).as(format).contains("it is not an acceptance").contains("company's inspection practice");
+        }
+    }
 }
