@@ -480,11 +480,6 @@ public final class Inspector {
         return new Fits(ls, mz, Math.abs(da - ls.circle().r()), Math.abs(db - ls.circle().r()), b.size());
     }
 
-    private static Worst worstOf(PointSet pts, int i, double excess, String measure) {
-        if (i < 0) return null;
-        return new Worst(i, pts.xs()[i], pts.ys()[i], excess, measure);
-    }
-
     /** The same points under every applicable callout; limits not stated are derived and marked so. */
     private List<Comparison> compare(InspectionRequest req, MeasuredSection section) {
         InspectionCallout c = req.callout();
