@@ -382,7 +382,7 @@ public final class Inspector {
                 ControlledRadiusOutcome cr = r.controlled();
                 ControlledRadiusOutcome.LocalWindow lw = cr == null ? null : cr.worst();
                 if (lw == null) break;
-                String head = "worst window " + lw.number() + " (#" + w.index() + "): ";
+                String head = "worst #" + w.index() + " (window " + lw.number() + "): ";
                 if (lw.reversed()) return head + "curves against the blend (a reversal)";
                 if (!Double.isFinite(lw.radius()) || lw.radius() < 0) return head + "flat, limit " + fmt(cr.worstLimit()) + u;
                 return head + "local radius " + fmt(lw.radius()) + u + " ± " + length(lw.uncertainty(), r.request().units()) + u

@@ -300,4 +300,30 @@ class FittedSurfacesTest {
         PointSet big = Sections.section(SQUARE, 2.3, 40, 400, 0, 1, f -> 0);
         assertThat(inspector.inspect(Sections.request(SQUARE, 2, R, big).withUncertainty(0.005)).verdict()).isEqualTo(Verdict.FAIL);
     }
+
+    @Test
+    void statedUncertaintyOnAControlledRadiusAndACompositeProfile() {
+        // ISO 14253-1 (from memory), the same rule for every callout. CR: the radius zone as for R
+        // (a perfect R2 comes within 0.0024 of the 2.1 arc near its tangent points, plane geometry),
+        // and each window's σ is at least U/2, so a large U leaves the local radii undecided.
+        PointSet perfect = Sections.section(SQUARE, 2, 40, 400, 0, 1, f -> 0);
+        InspectionRequest cr = Sections.request(SQUARE, 2, CR, perfect);
+        assertThat(inspector.inspect(cr.withUncertainty(0.001)).verdict()).isEqualTo(Verdict.PASS);
+        assertThat(inspector.inspect(cr.withUncertainty(0.005)).verdict()).isEqualTo(Verdict.INDETERMINATE);
+        assertThat(inspector.inspect(cr.withUncertainty(0.05)).controlled().indeterminate()).isNotEmpty();
+        // composite: the part moved 0.03/0.02 needs 2·√(0.03² + 0.02²) = 0.0721 located (the bisector
+        // point moves by the whole offset, plane geometry) and nothing floating
+        PointSet moved = moved(perfect, 0.03, 0.02, 0, 0, 0);
+        InspectionCallout fits = new InspectionCallout.CompositeProfile(List.of(new InspectionCallout.Tier(0.08, Set.of()),
+                new InspectionCallout.Tier(0.01, EnumSet.allOf(Freedom.class))));
+        InspectionRequest q = Sections.request(SQUARE, 2, fits, moved);
+        assertThat(inspector.inspect(q).tiers().get(0).requiredZone()).isCloseTo(2 * Math.hypot(0.03, 0.02), within(1e-4));
+        assertThat(inspector.inspect(q.withUncertainty(0.001)).verdict()).isEqualTo(Verdict.PASS);
+        assertThat(inspector.inspect(q.withUncertainty(0.005)).verdict()).isEqualTo(Verdict.INDETERMINATE);
+        InspectionCallout tooTight = new InspectionCallout.CompositeProfile(List.of(new InspectionCallout.Tier(0.06, Set.of()),
+                new InspectionCallout.Tier(0.01, EnumSet.allOf(Freedom.class))));
+        InspectionRequest t = Sections.request(SQUARE, 2, tooTight, moved);
+        assertThat(inspector.inspect(t.withUncertainty(0.003)).verdict()).isEqualTo(Verdict.FAIL);
+        assertThat(inspector.inspect(t.withUncertainty(0.008)).verdict()).isEqualTo(Verdict.INDETERMINATE);
+    }
 }
