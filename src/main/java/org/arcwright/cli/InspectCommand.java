@@ -9,11 +9,13 @@ import org.arcwright.inspect.Comparison;
 import org.arcwright.inspect.ControlledRadiusOutcome;
 import org.arcwright.inspect.Fits;
 import org.arcwright.inspect.Freedom;
+import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionFiles;
 import org.arcwright.inspect.InspectionJson;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
 import org.arcwright.inspect.Inspector;
+import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.ProfileOutcome;
 import org.arcwright.inspect.AdjacentSurfaces;
 import org.arcwright.inspect.Verdict;
@@ -23,6 +25,7 @@ import org.arcwright.io.JsonFiles;
 import org.arcwright.io.OutputFiles;
 import org.arcwright.render.ContourPlot;
 import org.arcwright.tolerance.Units;
+import org.arcwright.zone.Point2;
 import org.arcwright.zone.RadiusEnvelope;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Option;
@@ -103,6 +106,23 @@ final class InspectCommand implements Callable<Integer> {
         return DecimalText.significant(v, 4);
     }
 
+    /**
+     * A rotation of a registration, degrees: 4 significant digits, and 0 below a millionth of a
+     * degree (the round-off of a registration that needed none; 0.0001 mm across a 100 mm part is
+     * 0.00006°).
+     */
+    private static String degrees(double v) {
+        return Math.abs(v) < 1e-6 ? "0" : n(v);
+    }
+
+    /** Which limit an undecided window's interval reaches across, in words with the unit. */
+    private static String straddled(ControlledRadiusOutcome.LocalWindow w, InspectionCallout.RadiusLimits limits, String unit) {
+        List<Double> l = w.limitsStraddled(limits.min(), limits.max());
+        if (l.size() == 2) return "both limits, " + n(l.get(0)) + " and " + n(l.get(1)) + " " + unit;
+        if (l.size() == 1) return "the " + n(l.get(0)) + " " + unit + " limit";
+        return "a limit";
+    }
+
     private static void printText(PrintWriter out, InspectionResult r) {
         InspectionRequest q = r.request();
         String u = q.units().symbol();
@@ -110,7 +130,13 @@ final class InspectCommand implements Callable<Integer> {
                 q.points().size(), u, q.uncertainty() > 0 ? ", U = " + n(q.uncertainty()) + " " + u : "");
         AdjacentSurfaces sf = r.surfaces();
         if (sf != null) {
-            out.printf("  surfaces       a %s, b %s; angle %s°%n", surface(sf.a(), q.units()), surface(sf.b(), q.units()), n(sf.includedAngleDeg()));
+            String beside = "";
+            if (q.nominal() instanceof Nominal.CornerBlend cb) {
+                Point2 v = sf.corner().vertex(), nv = cb.corner().vertex();
+                beside = String.format(Locale.ROOT, " (nominal %s°), corner at %s (nominal %s)", n(cb.corner().includedAngleDeg()),
+                        at(v.x(), v.y(), q.units()), at(nv.x(), nv.y(), q.units()));
+            }
+            out.printf("  surfaces       a %s, b %s; angle %s°%s%n", surface(sf.a(), q.units()), surface(sf.b(), q.units()), n(sf.includedAngleDeg()), beside);
         }
         RadiusEnvelope e = r.radius();
         if (e != null) {
@@ -123,16 +149,16 @@ final class InspectCommand implements Callable<Integer> {
         ControlledRadiusOutcome c = r.controlled();
         if (c != null) {
             out.printf("  local radius   %s to %s %s (expanded uncertainty up to %s %s, k = 2) over %d windows of %s %s%n", n(c.localMin()),
-                    n(c.localMax()), u, n(c.uncertainty()), u, c.windows(), DecimalText.significant(c.windowLength(), 4), u);
+                    n(c.localMax()), u, len(c.uncertainty(), q.units()), u, c.windows(), DecimalText.significant(c.windowLength(), 4), u);
             int shown = 0;
             for (ControlledRadiusOutcome.LocalWindow w : c.indeterminate()) {
                 if (++shown > 4) {
                     out.printf("                 and %d more window(s) undecided (all in --format json)%n", c.indeterminate().size() - 4);
                     break;
                 }
-                out.printf("  undecided      window %d (s = %s to %s %s): local radius %s ± %s %s straddles a limit%n", w.number(),
+                out.printf("  undecided      window %d (s = %s to %s %s): local radius %s ± %s %s straddles %s%n", w.number(),
                         Inspector.coordinate(w.fromStation(), q.units()), Inspector.coordinate(w.toStation(), q.units()), u, n(w.radius()),
-                        n(w.uncertainty()), u);
+                        len(w.uncertainty(), q.units()), u, straddled(w, (InspectionCallout.RadiusLimits) q.callout(), u));
             }
             out.printf("  reversals      %d%s%n", c.reversals().size(), c.flats() > 0 ? "   flat windows " + c.flats() : "");
             for (ControlledRadiusOutcome.Reversal v : c.reversals()) {
@@ -151,11 +177,11 @@ final class InspectCommand implements Callable<Integer> {
         Fits f = r.fits();
         if (f != null) {
             out.printf("  least squares  R %s at %s, rms %s " + u + "  (%d blend points)%n", n(f.leastSquares().circle().r()),
-                    at(f.leastSquares().circle().cx(), f.leastSquares().circle().cy(), q.units()), n(f.leastSquares().rms()), f.blendPoints());
+                    at(f.leastSquares().circle().cx(), f.leastSquares().circle().cy(), q.units()), len(f.leastSquares().rms(), q.units()), f.blendPoints());
             out.printf("  minimum zone   R %s to %s (width %s) at %s%n", n(f.minimumZone().inner()), n(f.minimumZone().outer()),
-                    n(f.minimumZone().width()), at(f.minimumZone().cx(), f.minimumZone().cy(), q.units()));
+                    len(f.minimumZone().width(), q.units()), at(f.minimumZone().cx(), f.minimumZone().cy(), q.units()));
             out.printf("  tangency       step at surface a %s %s, at surface b %s %s  (gap between each fitted surface and the arc; a radius gauge does not see these)%n",
-                    n(f.stepA()), u, n(f.stepB()), u);
+                    len(f.stepA(), q.units()), u, len(f.stepB(), q.units()), u);
         }
         if (r.worst() != null) {
             out.printf("  worst          %s, at %s%n", r.worst().text(), at(r.worst().x(), r.worst().y(), q.units()));
@@ -164,22 +190,32 @@ final class InspectCommand implements Callable<Integer> {
             out.println();
             out.println("  compare (same points; * = limits derived from the file's callout)");
             for (Comparison cmp : r.comparisons()) {
-                out.printf("    %-5s %-19s %-44s %s%n", cmp.verdict() == Verdict.FAIL ? "FAIL" : cmp.verdict() == Verdict.PASS ? "pass" : "undec",
+                out.printf("    %-13s %-19s %-44s %s%n", cmp.verdict() == Verdict.FAIL ? "FAIL" : cmp.verdict().key(),
                         cmp.name(), cmp.callout() + (cmp.derived() ? " *" : ""),
                         cmp.figure());
             }
         }
         List<String> notes = r.notes();
         for (String s : notes) out.println("  note: " + s);
-        out.println("  The verdict reads the standard's zone definitions; it is not an acceptance. Check it against the governing");
-        out.println("  standard, your company's inspection practice and the responsible engineer's judgement.");
+        for (String line : InspectionResult.CAUTION.replace("governing standard", "governing\nstandard").split("\n")) out.println("  " + line);
     }
 
     private static String surface(AdjacentSurfaces.Surface s, Units units) {
         if (!s.fitted()) return "nominal (not fitted)";
         return String.format(Locale.ROOT, "through %s along [%s, %s] (%d points, rms %s %s)", at(s.point().x(), s.point().y(), units),
-                DecimalText.fixed(s.direction().x(), 6), DecimalText.fixed(s.direction().y(), 6), s.points(), DecimalText.significant(s.rms(), 3),
+                DecimalText.fixed(s.direction().x(), 6), DecimalText.fixed(s.direction().y(), 6), s.points(), rms(s.rms(), units),
                 units.symbol());
+    }
+
+    /** A computed length to 4 significant digits, as the report's other figures, and zero below its last place ({@link Inspector#length}). */
+    private static String len(double v, Units units) {
+        return Inspector.length(v, units, 4);
+    }
+
+    /** A surface's rms: three significant digits are enough for a scatter, and zero below the report's last place. */
+    private static String rms(double v, Units units) {
+        String zero = Inspector.length(0, units);
+        return Inspector.length(v, units).equals(zero) ? zero : DecimalText.significant(v, 3);
     }
 
     /** A point as {@code [x, y]}, both coordinates at the report's one resolution ({@link Inspector#coordinate}). */
@@ -197,13 +233,13 @@ final class InspectCommand implements Callable<Integer> {
 
     private static void printProfile(PrintWriter out, String indent, ProfileOutcome p, Units units) {
         String u = units.symbol();
-        out.printf("%s  needs zone     %s %s (same disposition and freedom)%n", indent, Inspector.up(p.requiredZone(), Inspector.PROFILE_SLACK), u);
-        out.printf("%s  deviation      %s %s outward, %s %s inward (after registration)%n", indent, n(p.maxOutward()), u, n(p.maxInward()), u);
+        out.printf("%s  needs zone     %s %s (same disposition and freedom)%n", indent, Inspector.lengthUp(p.requiredZone(), Inspector.PROFILE_SLACK, units), u);
+        out.printf("%s  deviation      %s %s outward, %s %s inward (after registration)%n", indent, len(p.maxOutward(), units), u, len(p.maxInward(), units), u);
         if (!p.free().isEmpty() || p.dynamic()) {
             out.printf("%s  registration   x %s, y %s, rotation %s° about %s, offset %s%n", indent,
                     Inspector.coordinate(p.registration().x(), units), Inspector.coordinate(p.registration().y(), units),
-                    n(p.registration().rotationDeg()), at(p.registration().pivotX(), p.registration().pivotY(), units),
-                    n(p.registration().offset()));
+                    degrees(p.registration().rotationDeg()), at(p.registration().pivotX(), p.registration().pivotY(), units),
+                    len(p.registration().offset(), units));
         }
     }
 }

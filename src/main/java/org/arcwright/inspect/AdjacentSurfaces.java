@@ -104,8 +104,8 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
         }
         double t = nominal.tangentDistance(largestRadius);
         ArrayList<String> notes = new ArrayList<>();
-        Surface sa = surface(fa, nominal.vertex(), nominal.legA(), nominal.legA(), t, "a", largestRadius, notes);
-        Surface sb = surface(fb, nominal.vertex(), nominal.legB(), nominal.legB(), t, "b", largestRadius, notes);
+        Surface sa = surface(fa, nominal.vertex(), nominal.legA(), nominal.legA(), t, "a", notes);
+        Surface sb = surface(fb, nominal.vertex(), nominal.legB(), nominal.legB(), t, "b", notes);
         Corner c = cornerOf(nominal, sa, sb);
         if (c == null) {
             notes.add("the fitted surfaces make an angle outside " + DecimalText.exact(Corner.MIN_ANGLE_DEG) + "° to " + DecimalText.exact(Corner.MAX_ANGLE_DEG)
@@ -117,11 +117,13 @@ public record AdjacentSurfaces(Surface a, Surface b, Corner corner, List<String>
     }
 
     private static Surface surface(LineFit f, Point2 vertex, Point2 nominalDir, Point2 orient, double t, String name,
-                                   double largest, List<String> notes) {
+                                   List<String> notes) {
         if (f == null || !f.usable(t)) {
             int k = f == null ? 0 : f.count;
-            notes.add(String.format(Locale.ROOT, "surface %s: %d point(s) beyond the tangent point of the %s arc (need %d spanning at least %s of %s): judged against the nominal surface %s",
-                    name, k, Inspector.fmt(largest), MIN_POINTS, Inspector.fmt(MIN_SPAN * t), Inspector.fmt(t), name));
+            notes.add(String.format(Locale.ROOT, "surface %s: %d point(s) on it beyond the tangent point of the largest arc (a line is fitted to "
+                            + "at least %d, spanning at least a tenth of that arc's tangent distance): judged against the nominal surface %s, "
+                            + "so a corner moved or turned as a whole reads as a step there; measure further along surface %s",
+                    name, k, MIN_POINTS, name, name));
             return new Surface(vertex, nominalDir, 0, 0, false);
         }
         Point2 d = new Point2(f.dx, f.dy);

@@ -1,5 +1,6 @@
 package org.arcwright.inspect;
 
+import java.util.ArrayList;
 import java.util.List;
 import org.arcwright.zone.RadiusEnvelope;
 
@@ -59,5 +60,20 @@ public record ControlledRadiusOutcome(RadiusEnvelope envelope, double localMin, 
      * @param verdict this window's verdict against the limits
      */
     public record LocalWindow(int number, double fromStation, double toStation, double radius, double uncertainty,
-                              boolean reversed, Verdict verdict) {}
+                              boolean reversed, Verdict verdict) {
+        /**
+         * The limits among {@code min} and {@code max} that this window's interval reaches across,
+         * read in curvature as its verdict is: {@code κ ± Uκ} with {@code κ = 1/r} and
+         * {@code Uκ = U/r²} (first-order propagation, GUM JCGM 100:2008 clause 5), against
+         * {@code 1/max} and {@code 1/min}. Empty for a window whose interval lies on one side of both.
+         */
+        public List<Double> limitsStraddled(double min, double max) {
+            if (!(radius > 0) || !Double.isFinite(radius)) return List.of();
+            double k = (reversed ? -1 : 1) / radius, uk = uncertainty / (radius * radius);
+            ArrayList<Double> out = new ArrayList<>(2);
+            if (min > 0 && k - uk <= 1 / min && k + uk >= 1 / min) out.add(min);
+            if (k - uk <= 1 / max && k + uk >= 1 / max) out.add(max);
+            return List.copyOf(out);
+        }
+    }
 }

@@ -117,6 +117,13 @@ public final class InspectionJson {
             sf.put("b", surface(s.b()));
             sf.put("angle", s.includedAngleDeg());
             sf.put("vertex", List.of(s.corner().vertex().x(), s.corner().vertex().y()));
+            if (r.request().nominal() instanceof Nominal.CornerBlend cb) {
+                // beside the nominal: how far the part's own corner sits from the drawn one
+                Map<String, Object> nom = new LinkedHashMap<>();
+                nom.put("vertex", List.of(cb.corner().vertex().x(), cb.corner().vertex().y()));
+                nom.put("angle", cb.corner().includedAngleDeg());
+                sf.put("nominal", nom);
+            }
             m.put("surfaces", sf);
         }
         if (r.worst() != null) {
@@ -129,6 +136,7 @@ public final class InspectionJson {
             w.put("text", r.worst().text());
             m.put("worst", w);
         }
+        m.put("caution", InspectionResult.CAUTION);
         if (!r.comparisons().isEmpty()) {
             List<Object> rows = new ArrayList<>();
             for (Comparison c : r.comparisons()) {

@@ -12,7 +12,8 @@ import org.arcwright.tolerance.Units;
  * <p>Refused here, as input no verdict can be given on: for R and CR, a resolution above
  * {@value #RESOLUTION_SHARE} of the radius band (the rule of ten, common practice: the slack at the
  * tangent points must not widen the zone a verdict reads; a profile's verdict does not use it), a CR window below its least length
- * ({@link ControlledRadiusCheck#minWindow}), a nominal radius outside the R or CR limits, and a
+ * ({@link ControlledRadiusCheck#minWindow}), a nominal radius farther outside the R or CR limits than the band is
+ * wide (one just outside them is a same-sign tolerance, judged), and a
  * negative or non-finite uncertainty.
  *
  * @param units drawing units of every length
@@ -55,11 +56,27 @@ public record InspectionRequest(Units units, Nominal nominal, InspectionCallout 
                     + Inspector.fmt(RESOLUTION_SHARE * tol));
         }
         if (nominal instanceof Nominal.CornerBlend cb) {
-            if (callout instanceof InspectionCallout.RadiusLimits rl && (cb.radius() < rl.min() || cb.radius() > rl.max())) {
-                throw InputProblem.ofField("nominalRadius", "is " + DecimalText.exact(cb.radius()) + " " + units.symbol() + ", outside the callout's limits "
-                        + DecimalText.exact(rl.min()) + " to " + DecimalText.exact(rl.max()) + "; the nominal must lie within its own limits");
-            }
+            if (callout instanceof InspectionCallout.RadiusLimits rl) requireNominalNear(cb.radius(), rl, units);
             ControlledRadiusCheck.requireWindow(cb.corner(), cb.radius(), window);
+        }
+    }
+
+    /**
+     * Refuses a nominal radius farther outside its R or CR limits than the band is wide. A nominal
+     * outside its limits is how deviations of the same sign are drawn ({@code R3 +0.3/+0.1}: limit
+     * arcs R3.1 and R3.3, nominal R3), and the radius zone reads only the limits, so it is judged.
+     * A nearer deviation larger than the band itself ({@code 5} with limits 1.9 to 2.1) is read as a
+     * slip, since such a band would be drawn about a nominal inside it: a judgement of this tool, not
+     * a rule of ASME Y14.5 or ISO 129-1.
+     */
+    private static void requireNominalNear(double nominal, InspectionCallout.RadiusLimits rl, Units units) {
+        double band = rl.max() - rl.min();
+        double nearer = nominal < rl.min() ? rl.min() - nominal : nominal > rl.max() ? nominal - rl.max() : 0;
+        if (nearer > band * (1 + 1e-9)) {
+            throw InputProblem.ofField("nominalRadius", "is " + DecimalText.exact(nominal) + " " + units.symbol() + ", "
+                    + Inspector.fmt(nearer) + " " + units.symbol() + " outside the callout's limits " + DecimalText.exact(rl.min()) + " to "
+                    + DecimalText.exact(rl.max()) + ", farther than the band is wide (" + Inspector.fmt(band) + " " + units.symbol()
+                    + "); deviations of the same sign (R3 +0.3/+0.1) are accepted, a nominal this far from its band is taken for a slip");
         }
     }
 

@@ -30,6 +30,13 @@ public record InspectionResult(InspectionRequest request, Verdict verdict, Radiu
                                ControlledRadiusOutcome controlled, ProfileOutcome profile, List<ProfileOutcome> tiers,
                                Fits fits, AdjacentSurfaces surfaces, Worst worst, List<String> notes,
                                List<Comparison> comparisons) {
+    /**
+     * What every verdict carries wherever it is shown (text, JSON, plot): it reads the standard's
+     * zone definitions and is not an acceptance.
+     */
+    public static final String CAUTION = "The verdict reads the standard's zone definitions; it is not an acceptance. Check it against the governing "
+            + "standard, your company's inspection practice and the responsible engineer's judgement.";
+
     public InspectionResult {
         Objects.requireNonNull(verdict, "verdict");
         if (verdict == Verdict.PASS && worst != null && worst.excess() > request.resolution()) {

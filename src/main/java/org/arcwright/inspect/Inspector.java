@@ -179,7 +179,7 @@ public final class Inspector {
         j.worst = explain ? radiusWorst(pts, zone, j.env, section.stations(corner, cb.radius()), req.units()) : radiusExcess(pts, zone, j.env, unit);
         if (explain) {
             radiusNotes(rl, j.env, res, unit, j.notes);
-            noiseNote(j, u, unit);
+            noiseNote(j.worst, j.surfaces, zone, rl, u, unit, j.notes);
         }
         if (rl.kind() != RadiusKind.CR) return;
         j.blend = explain ? blendOf(corner, cb, pts, section.stations(corner, cb.radius()), rl.max())
@@ -220,28 +220,39 @@ public final class Inspector {
         return !BEYOND_SURFACE.equals(zoneWorst.measure()) && cr.worstExcess() > zoneWorst.excess();
     }
 
-    /**
-     * A failure that rests on a point beyond a fitted surface by less than twice the scatter of the
-     * surfaces' own points is one the measurement's noise alone can produce. The verdict stands (it
-     * takes the points as exact when no uncertainty is stated), but it says so and what would judge it:
-     * the expanded uncertainty U under the ISO 14253-1 default decision rule.
-     */
-    private static void noiseNote(Judged j, double u, String unit) {
-        if (u > 0 || j.verdict != Verdict.FAIL || j.worst == null || !BEYOND_SURFACE.equals(j.worst.measure())) return;
-        double scatter = 0;
-        if (j.surfaces.a().fitted()) scatter = Math.max(scatter, j.surfaces.a().rms());
-        if (j.surfaces.b().fitted()) scatter = Math.max(scatter, j.surfaces.b().rms());
-        if (scatter > 0 && j.worst.excess() <= 2 * scatter) {
-            j.notes.add("the worst point lies beyond a fitted surface by " + fmt(j.worst.excess()) + " " + unit
-                    + ", less than twice the scatter of the surfaces' own points (rms up to " + fmt(scatter) + " " + unit
-                    + "): measurement noise alone can put a point there. This verdict takes the points as exact; state the "
-                    + "expanded measurement uncertainty U (\"uncertainty\" in the file, --uncertainty) to have it judged by the "
-                    + "ISO 14253-1 decision rule");
-        }
-    }
-
     private static int standing(Verdict v) {
         return v == Verdict.FAIL ? 2 : v == Verdict.INDETERMINATE ? 1 : 0;
+    }
+
+    /** How many times a surface's rms a point may lie beyond it and still be read as its scatter (a normal scatter passes 4σ once in about 16,000 points). */
+    static final double SCATTER_SPAN = 4;
+
+    /**
+     * When the worst point lies beyond a fitted surface by no more than {@value #SCATTER_SPAN} times
+     * the rms of that surface's own points, says so: a least-squares line leaves about half its
+     * points on each side, so scatter of that size alone puts points beyond it near the tangent
+     * points, where the zone has no width. The verdict stands (the points as measured); the note says
+     * what would judge the scatter: a stated U (ISO 14253-1 default rule) or a resolution of the order
+     * of the scatter, which the request caps at a tenth of the band. A stated U covers one point at
+     * about 95 %, so among hundreds of points near the tangent points a few still lie beyond it.
+     */
+    private static void noiseNote(Worst worst, AdjacentSurfaces surfaces, RadiusZone zone, InspectionCallout.RadiusLimits rl,
+                                  double u, String unit, List<String> notes) {
+        if (worst == null || !BEYOND_SURFACE.equals(worst.measure())) return;
+        double[] h = legOffsets(zone.corner(), worst.x(), worst.y());
+        AdjacentSurfaces.Surface s = h[0] < h[1] ? surfaces.a() : surfaces.b();
+        if (!s.fitted() || !(s.rms() > 0) || worst.excess() > SCATTER_SPAN * s.rms()) return;
+        double cap = InspectionRequest.RESOLUTION_SHARE * (rl.max() - rl.min());
+        notes.add(String.format(Locale.ROOT, "the worst point lies %s %s beyond surface %s, within the scatter of the points fitted to surface %s "
+                        + "(rms %s %s; %s times that is %s %s): noise of that size alone puts points beyond a fitted surface near the tangent points, "
+                        + "where the zone has no width. %s a resolution of the order of the scatter (at most %s %s, a tenth of the band)",
+                fmt(worst.excess()), unit, h[0] < h[1] ? "a" : "b", h[0] < h[1] ? "a" : "b", DecimalText.significant(s.rms(), 3), unit,
+                fmt(SCATTER_SPAN), fmt(SCATTER_SPAN * s.rms()), unit,
+                u > 0 ? "The stated U covers one point at about 95 %, so among hundreds of points a few still lie beyond it: to judge the part "
+                        + "rather than the scatter, give"
+                        : "To judge the part rather than the scatter, state the probe's expanded uncertainty (--uncertainty or \"uncertainty\": "
+                        + "ISO 14253-1 default rule), or give",
+                fmt(cap), unit));
     }
 
     private static void radiusNotes(InspectionCallout.RadiusLimits rl, RadiusEnvelope env, double res, String unit, List<String> notes) {
@@ -262,7 +273,7 @@ public final class Inspector {
         double stop = detail == Detail.VERDICT ? acceptAt(pt.zone(), u) : Double.NEGATIVE_INFINITY;
         j.profile = profileCheck(req, section).evaluate(req.points(), pt.zone(), pt.free(), pt.dynamic(), stop);
         j.verdict = profileVerdict(j.profile, u);
-        j.worst = profileWorst(req.points(), j.profile, req.units().symbol(), detail == Detail.REPORT);
+        j.worst = profileWorst(req.points(), j.profile, req.units(), detail == Detail.REPORT);
         if (detail == Detail.REPORT) {
             j.notes.add("deviation is positive toward air (the side where added material would put the surface)");
             if (pt.free().isEmpty() && !pt.dynamic()) j.notes.add("located profile: judged in the nominal (datum) frame, where the points were measured");
@@ -281,7 +292,7 @@ public final class Inspector {
             ProfileOutcome o = check.evaluate(req.points(), tz, t.free(), false, stop);
             tiers.add(o);
             j.verdict = j.verdict.and(profileVerdict(o, u));
-            Worst w = profileWorst(req.points(), o, req.units().symbol(), detail == Detail.REPORT);
+            Worst w = profileWorst(req.points(), o, req.units(), detail == Detail.REPORT);
             if (j.worst == null || w.excess() > j.worst.excess()) j.worst = w;
         }
         j.tiers = List.copyOf(tiers);
@@ -377,6 +388,40 @@ public final class Inspector {
         return new Worst(i, x, y, e, "radius", unit, text);
     }
 
+    /**
+     * The worst point in a few words, for a label beside it on a plot or a view: what its figure
+     * measures and against what, with the unit, never a bare excess that reads as a distance from
+     * the part ({@code outside by 4.665 mm (local radius)} read as a point 4.7 mm out, when the
+     * window's local radius was 6.765 mm against a 2.1 mm limit). Empty when there is no worst point.
+     */
+    public static String worstLabel(InspectionResult r) {
+        Worst w = r.worst();
+        if (w == null) return "";
+        String u = w.unit().isEmpty() ? "" : " " + w.unit();
+        double e = w.excess();
+        switch (w.measure()) {
+            case "local radius": {
+                ControlledRadiusOutcome cr = r.controlled();
+                ControlledRadiusOutcome.LocalWindow lw = cr == null ? null : cr.worst();
+                if (lw == null) break;
+                String head = "worst #" + w.index() + " (window " + lw.number() + "): ";
+                if (lw.reversed()) return head + "curves against the blend (a reversal)";
+                if (!Double.isFinite(lw.radius()) || lw.radius() < 0) return head + "flat, limit " + fmt(cr.worstLimit()) + u;
+                return head + "local radius " + fmt(lw.radius()) + u + " ± " + length(lw.uncertainty(), r.request().units()) + u
+                        + ", limit " + fmt(cr.worstLimit()) + u;
+            }
+            case "radius":
+                return "worst #" + w.index() + ": " + (e > 0 ? "beyond a limit" : "within the limits") + " by " + fmt(Math.abs(e)) + u + " of radius";
+            case "distance beyond surface":
+                return "worst #" + w.index() + ": " + fmt(e) + u + " beyond a fitted surface (no radius allows it)";
+            case "distance":
+                return "worst #" + w.index() + ": " + fmt(Math.abs(e)) + u + (e > 0 ? " outside" : " inside") + " the zone";
+            default:
+                break;
+        }
+        return "worst #" + w.index() + ": " + (e > 0 ? "beyond" : "within") + " by " + fmt(Math.abs(e)) + u + " (" + w.measure() + ")";
+    }
+
     /** The worst point of a radius zone with its excess alone, as {@link #radiusWorst} measures it, without words. */
     private static Worst radiusExcess(PointSet pts, RadiusZone zone, RadiusEnvelope env, String unit) {
         int i = env.worst();
@@ -408,19 +453,20 @@ public final class Inspector {
         } else if (Double.isInfinite(w.radius()) || w.radius() < 0) {
             text = span + " is flat: no measurable curvature; largest limit " + fmt(cr.worstLimit()) + " " + unit;
         } else {
-            text = String.format(Locale.ROOT, "local radius %s %s ± %s %s over %s; limit %s %s", fmt(w.radius()), unit, fmt(w.uncertainty()),
+            text = String.format(Locale.ROOT, "local radius %s %s ± %s %s over %s; limit %s %s", fmt(w.radius()), unit, length(w.uncertainty(), units),
                     unit, span, fmt(cr.worstLimit()), unit);
         }
         return new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, text);
     }
 
-    private static Worst profileWorst(PointSet pts, ProfileOutcome o, String unit, boolean explain) {
+    private static Worst profileWorst(PointSet pts, ProfileOutcome o, Units units, boolean explain) {
+        String unit = units.symbol();
         int i = o.worst();
         if (i < 0) return null;
         double d = o.deviations()[i], e = o.worstExcess();
         if (!explain) return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, "");
         String text = String.format(Locale.ROOT, "point #%d lies %s %s %s the zone (deviation %s %s %s after registration)", i, fmt(Math.abs(e)),
-                unit, e > 0 ? "outside" : "inside", fmt(Math.abs(d)), unit, d >= 0 ? "toward air" : "into the material");
+                unit, e > 0 ? "outside" : "inside", length(Math.abs(d), units), unit, d >= 0 ? "toward air" : "into the material");
         return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, text);
     }
 
@@ -456,11 +502,6 @@ public final class Inspector {
         return new Fits(ls, mz, Math.abs(da - ls.circle().r()), Math.abs(db - ls.circle().r()), b.size());
     }
 
-    private static Worst worstOf(PointSet pts, int i, double excess, String measure) {
-        if (i < 0) return null;
-        return new Worst(i, pts.xs()[i], pts.ys()[i], excess, measure);
-    }
-
     /** The same points under every applicable callout; limits not stated are derived and marked so. */
     private List<Comparison> compare(InspectionRequest req, MeasuredSection section) {
         InspectionCallout c = req.callout();
@@ -472,8 +513,9 @@ public final class Inspector {
         if (c instanceof InspectionCallout.RadiusLimits rl) {
             rMin = rl.min();
             rMax = rl.max();
-            double nom = Math.max(rMin, Math.min(rMax, cb.radius()));
-            zone = CrescentZone.of(rMin, nom, rMax, cb.corner().includedAngleDeg()).equalBilateralProfile();
+            // about the drawn nominal, the true profile of the derived profile rows, even when it lies
+            // outside the limits (deviations of the same sign: R3 +0.3/+0.1 needs 0.2485 at 90°)
+            zone = CrescentZone.of(rMin, cb.radius(), rMax, cb.corner().includedAngleDeg()).equalBilateralProfile();
         } else if (c instanceof InspectionCallout.ProfileTolerance pt) {
             zone = pt.zone().width();
         } else {
@@ -535,21 +577,25 @@ public final class Inspector {
     private static Comparison row(InspectionCallout k, boolean derived, InspectionResult r) {
         String figure;
         double required = Double.NaN;
-        String u = " " + r.request().units().symbol();
+        Units units = r.request().units();
+        String u = " " + units.symbol();
         if (r.controlled() != null) {
             ControlledRadiusOutcome cr = r.controlled();
-            figure = "local radius " + fmt(cr.localMin()) + " to " + fmt(cr.localMax()) + u + " (± up to " + fmt(cr.uncertainty()) + u + "), "
+            figure = "local radius " + fmt(cr.localMin()) + " to " + fmt(cr.localMax()) + u + " (± up to " + length(cr.uncertainty(), units) + u + "), "
                     + cr.reversals().size() + " reversal(s), " + cr.flats() + " flat window(s)"
                     + (cr.indeterminate().isEmpty() ? "" : ", " + cr.indeterminate().size() + " window(s) undecided");
         } else if (r.radius() != null) {
             double res = r.request().resolution();
-            figure = "envelope " + down(r.radius().smallest(), res) + " to " + up(r.radius().largest(), res) + u;
+            RadiusEnvelope e = r.radius();
+            figure = e.outside() > 0 && r.worst() != null && "distance beyond surface".equals(r.worst().measure())
+                    ? e.outside() + " point(s) beyond the fitted surfaces, up to " + fmt(r.worst().excess()) + u + "; largest radius " + up(e.largest(), res) + u
+                    : "envelope " + down(e.smallest(), res) + " to " + up(e.largest(), res) + u;
         } else if (r.profile() != null) {
             required = r.profile().requiredZone();
-            figure = "needs zone " + up(required, PROFILE_SLACK) + u;
+            figure = "needs zone " + lengthUp(required, PROFILE_SLACK, units) + u;
         } else {
             StringBuilder sb = new StringBuilder("needs zones");
-            for (ProfileOutcome t : r.tiers()) sb.append(' ').append(up(t.requiredZone(), PROFILE_SLACK));
+            for (ProfileOutcome t : r.tiers()) sb.append(' ').append(lengthUp(t.requiredZone(), PROFILE_SLACK, units));
             figure = sb.append(u).toString();
         }
         return new Comparison(name(k), k.describe(), derived, r.verdict(), figure, required);
@@ -600,6 +646,39 @@ public final class Inspector {
     public static String coordinate(double v, Units units) {
         if (Double.isNaN(v)) return "none";
         return DecimalText.fixed(v, units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES);
+    }
+
+    /**
+     * A computed length in the report's words (a residual, a deviation, a width, a step, an
+     * uncertainty): {@link #fmt}'s 5 significant digits, except that a length below half the last
+     * place of a coordinate ({@link #coordinate}: 0.0001 mm, 0.00001 in) reads as zero at that place,
+     * {@code 0.0000}. The residual of a perfect fit (1e-17) or a solver's round-off (1e-9) lies far
+     * below any probe's uncertainty, and a report states lengths no finer than its coordinates
+     * (common practice). Not for an excess a verdict rests on: that keeps {@link #fmt}, so that a
+     * point failing by less than the last place still says by how much.
+     */
+    public static String length(double v, Units units) {
+        return length(v, units, 5);
+    }
+
+    /** {@link #length(double, Units)} to {@code digits} significant digits above the last place (a plot's 4). */
+    public static String length(double v, Units units, int digits) {
+        if (!Double.isFinite(v)) return fmt(v);
+        int places = units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES;
+        if (Math.abs(v) < 0.5 * Math.pow(10, -places)) return DecimalText.fixed(0, places);
+        return DecimalText.significant(v, digits);
+    }
+
+    /**
+     * A length needed (a profile zone) in words, rounded outward as {@link #up} rounds it, and never
+     * below the last place of a coordinate: a need of 5e-9 mm reads {@code 0.0001}, a zone that would
+     * pass, where {@link #length} would print a zone of nothing.
+     */
+    public static String lengthUp(double v, double slack, Units units) {
+        if (!Double.isFinite(v) || v <= 0) return up(v, slack);
+        int places = units == Units.INCH ? INCH_COORDINATE_PLACES : MM_COORDINATE_PLACES;
+        double last = Math.pow(10, -places);
+        return v < last ? DecimalText.fixed(last, places) : up(v, slack);
     }
 
     /**

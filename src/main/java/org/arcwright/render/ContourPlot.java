@@ -211,9 +211,7 @@ public final class ContourPlot {
                 g.draw(new Ellipse2D.Double(s[0] - 9, s[1] - 9, 18, 18));
                 g.draw(new Line2D.Double(s[0] + 7, s[1] - 7, s[0] + 30, s[1] - 30));
                 g.setFont(type.body);
-                String t = String.format(Locale.ROOT, "worst #%d: %s by %s %s (%s)%s", r.worst().index(),
-                        r.worst().excess() > 0 ? "outside" : "inside", fmt(Math.abs(r.worst().excess())), r.worst().unit(),
-                        r.worst().measure(), unproven ? ", within the uncertainty: not proven" : "");
+                String t = Inspector.worstLabel(r) + (unproven ? ", within the uncertainty: not proven" : "");
                 float tx = (float) Math.max(8, Math.min(s[0] + 32, width - 10 - g.getFontMetrics().stringWidth(t)));
                 float ty = (float) Math.max(s[1] - 32, summary ? 110 * type.k : top + g.getFontMetrics().getAscent());
                 g.drawString(t, tx, ty);
@@ -409,12 +407,13 @@ public final class ContourPlot {
         }
         if (r.controlled() != null) {
             lines.add("local radius " + fmt(r.controlled().localMin()) + " to " + fmt(r.controlled().localMax()) + " " + units + " (± up to "
-                    + fmt(r.controlled().uncertainty()) + "), reversals " + r.controlled().reversals().size() + ", flat windows "
+                    + Inspector.length(r.controlled().uncertainty(), q.units(), 4) + " " + units + "), reversals " + r.controlled().reversals().size() + ", flat windows "
                     + r.controlled().flats() + ", undecided windows " + r.controlled().indeterminate().size());
         }
         if (r.profile() != null) {
-            lines.add("needs zone " + Inspector.up(r.profile().requiredZone(), Inspector.PROFILE_SLACK) + " " + units + "; deviation "
-                    + fmt(r.profile().maxOutward()) + " outward, " + fmt(r.profile().maxInward()) + " inward (after registration)");
+            lines.add("needs zone " + Inspector.lengthUp(r.profile().requiredZone(), Inspector.PROFILE_SLACK, q.units()) + " " + units + "; deviation "
+                    + Inspector.length(r.profile().maxOutward(), q.units(), 4) + " outward, " + Inspector.length(r.profile().maxInward(), q.units(), 4)
+                    + " inward (after registration)");
         }
         if (r.tiers() != null) {
             StringBuilder sb = new StringBuilder("tiers:");
@@ -422,15 +421,16 @@ public final class ContourPlot {
                 ProfileOutcome t = r.tiers().get(i);
                 Verdict tv = Inspector.profileVerdict(t, q.uncertainty());
                 sb.append(String.format(Locale.ROOT, "  %d) %s zone %s needs %s", i + 1, tv == Verdict.FAIL ? "FAIL" : tv.key(),
-                        fmt(t.zone().width()), Inspector.up(t.requiredZone(), Inspector.PROFILE_SLACK)));
+                        fmt(t.zone().width()), Inspector.lengthUp(t.requiredZone(), Inspector.PROFILE_SLACK, q.units())));
             }
             lines.add(sb + " " + units + "   (tier 1 zone drawn)");
         }
         if (r.fits() != null) {
             lines.add("least-squares R " + fmt(r.fits().leastSquares().circle().r()) + ", minimum zone " + fmt(r.fits().minimumZone().inner())
-                    + " to " + fmt(r.fits().minimumZone().outer()) + ", steps at the fitted surfaces " + fmt(r.fits().stepA()) + " / "
-                    + fmt(r.fits().stepB()) + " " + units);
+                    + " to " + fmt(r.fits().minimumZone().outer()) + ", steps at the fitted surfaces " + Inspector.length(r.fits().stepA(), q.units(), 4)
+                    + " / " + Inspector.length(r.fits().stepB(), q.units(), 4) + " " + units);
         }
+        lines.add(InspectionResult.CAUTION);
         return lines;
     }
 
@@ -456,7 +456,7 @@ public final class ContourPlot {
         InspectionRequest q = r.request();
         g.setColor(r.verdict() == Verdict.PASS ? OK : r.verdict() == Verdict.FAIL ? OUT : NEAR);
         g.setFont(type.word);
-        String word = r.verdict() == Verdict.INDETERMINATE ? "UNDECIDED" : r.verdict().key().toUpperCase(Locale.ROOT);
+        String word = r.verdict().key().toUpperCase(Locale.ROOT);
         g.drawString(word, (float) type.margin, (float) (38 * type.k));
         float titleX = (float) (type.margin + g.getFontMetrics().stringWidth(word) + 16 * type.k);
         g.setColor(nominalInk);

@@ -83,6 +83,11 @@ class InspectCommandTest {
         assertThat(j.get("indeterminate").size()).isPositive();
         assertThat(j.at("/surfaces/a/fitted").asBoolean()).isTrue();
         assertThat(j.at("/surfaces/angle").asDouble()).isBetween(89.0, 91.0);
+        // the text names the limit each undecided window reaches across, with its unit (before: "a limit")
+        out.getBuffer().setLength(0);
+        assertThat(run("inspect", f.toString())).isEqualTo(Cli.INDETERMINATE);
+        assertThat(out.toString()).containsPattern("undecided +window \\d+ \\(s = [^)]*\\): local radius [0-9.]+ ± [0-9.]+ mm straddles "
+                + "(the (1\\.9|2\\.1) mm limit|both limits, 1\\.9 and 2\\.1 mm)\\n").doesNotContain("straddles a limit");
     }
 
     @Test
@@ -250,5 +255,73 @@ class InspectCommandTest {
         }
         assertThat(stations).isGreaterThanOrEqualTo(5);
         assertThat(out.toString()).contains("window 1 (s = 0.0002 to 0.5763 mm)");
+    }
+
+    @Test
+    void roundOffOfAPerfectSectionReadsAsZeroAtTheReportsResolution() throws IOException {
+        // A perfect blend leaves residuals of 1e-17 and solver round-off of 1e-9: a CMM report states
+        // lengths no finer than its coordinates, 0.0001 mm (common practice). Before:
+        // "rms 0.0000000000000000671 mm", "width 0.000000005257", "step ... 0.0000000000007794 mm",
+        // "needs zone 0.000000005281 mm", "(± up to 0.000000035526 mm)".
+        String[] callouts = {"{\"type\": \"controlled-radius\", \"min\": 1.9, \"max\": 2.1}",
+                "{\"type\": \"profile\", \"zone\": 0.1, \"free\": [\"x\", \"y\", \"rotation\"]}"};
+        for (String callout : callouts) {
+            Path f = file("perfect.json", "{" + CORNER + ", \"callout\": " + callout + ", \"points\": " + arcPoints(2.0) + "}");
+            out.getBuffer().setLength(0);
+            assertThat(run("inspect", f.toString(), "--compare")).isZero();
+            // the notes echo the resolution as given (1e-6 by default): not a computed length
+            String text = out.toString().lines().filter(l -> !l.startsWith("  note:")).collect(java.util.stream.Collectors.joining("\n"));
+            assertThat(text).as(text).doesNotContainPattern("0\\.00000\\d*[1-9]");
+            assertThat(text).contains("width 0.0000)").contains("step at surface a 0.0000 mm");
+        }
+        assertThat(out.toString()).contains("needs zone 0.0001 mm");
+    }
+
+    @Test
+    void anUndecidedRowOfTheComparisonSaysSoInFull() {
+        // the bracket's CR row is undecided (its windows' uncertainty straddles a limit); before: "undec"
+        assertThat(run("inspect", "examples/inspect/bracket-round-r.json", "--compare")).isZero();
+        assertThat(out.toString()).containsPattern("\\n    indeterminate +controlled radius");
+    }
+
+    @Test
+    void aComparisonRowFailedByPointsBeyondTheSurfacesSaysSo() {
+        // the housing's derived R row fails on points beyond the fitted surfaces, where no radius
+        // allows them; before, its figure read "envelope none to 2.113 mm"
+        run("inspect", "examples/inspect/housing-fillet-profile.json", "--compare");
+        String row = out.toString().lines().filter(l -> l.contains(" radius  ") && l.contains("R 1.879-2.121")).findFirst().orElseThrow();
+        assertThat(row).doesNotContain("none").containsPattern("\\d+ point\\(s\\) beyond the fitted surfaces, up to [0-9.]+ mm; largest radius [0-9.]+ mm");
+    }
+
+    @Test
+    void theFittedSurfacesAreReportedBesideTheNominal() throws IOException {
+        // a perfect R2 moved 0.03 along x: the surfaces' corner sits at [0.03, 0] against the nominal [0, 0]
+        StringBuilder moved = new StringBuilder();
+        Matcher m = Pattern.compile("\\[([-0-9.E]+), ([-0-9.E]+)\\]").matcher(arcPoints(2.0));
+        while (m.find()) {
+            moved.append(moved.length() == 0 ? "[" : ", ").append("[").append(Double.parseDouble(m.group(1)) + 0.03).append(", ").append(m.group(2)).append("]");
+        }
+        Path f = file("moved.json", "{" + CORNER + ", \"callout\": {\"type\": \"radius\", \"min\": 1.9, \"max\": 2.1}, \"points\": " + moved + "]}");
+        assertThat(run("inspect", f.toString())).isZero();
+        assertThat(out.toString()).contains("angle 90° (nominal 90°), corner at [0.0300, 0.0000] (nominal [0.0000, 0.0000])");
+        out.getBuffer().setLength(0);
+        assertThat(run("inspect", f.toString(), "--format", "json")).isZero();
+        JsonNode j = new ObjectMapper().readTree(out.toString());
+        assertThat(j.at("/surfaces/nominal/angle").asDouble()).isEqualTo(90.0);
+        assertThat(j.at("/surfaces/nominal/vertex/0").asDouble()).isZero();
+        assertThat(j.at("/surfaces/vertex/0").asDouble()).isBetween(0.03 - 1e-9, 0.03 + 1e-9);
+    }
+
+    @Test
+    void everyVerdictCarriesTheReminderInTextAndJson() {
+        // the project's rule: every verdict says it reads the standard's definitions and is not an
+        // acceptance, deferring to the standard, company practice and the responsible engineer.
+        // Before: the JSON verdict had no such field.
+        for (String format : new String[] {"text", "json"}) {
+            out.getBuffer().setLength(0);
+            run("inspect", "examples/inspect/bracket-round-r.json", "--format", format);
+            String all = out.toString().replaceAll("\\s+", " ");
+            assertThat(all).as(format).contains("it is not an acceptance").contains("company's inspection practice");
+        }
     }
 }

@@ -101,6 +101,27 @@ class FittedSurfacesTest {
     }
 
     @Test
+    void aFailureWithinTheNoiseOfAFittedSurfaceSaysSoAndWhatWouldDecide() {
+        // the same noisy part at the default resolution (1e-6 mm): about half the points near the
+        // tangent points fall beyond the least-squares line fitted through them, by up to ~3σ. The
+        // verdict reads the points as measured (no U stated), so it fails; the note says the excess
+        // is within the scatter of that surface's own points and what would judge it.
+        PointSet pts = Sections.section(SQUARE, 2, 400, 1600, 0.001, 7, f -> 0);
+        InspectionResult r = inspector.inspect(request(SQUARE, 2, R, pts, 1e-6));
+        assertThat(r.verdict()).isEqualTo(Verdict.FAIL);
+        assertThat(r.worst().measure()).isEqualTo("distance beyond surface");
+        assertThat(r.notes()).anyMatch(n -> n.contains("within the scatter of the points fitted to surface")
+                && n.contains("rms") && n.contains("mm") && n.contains("--uncertainty") && n.contains("resolution"));
+        // a real excess, far beyond the scatter, gets no such note
+        PointSet base = Sections.section(SQUARE, 2, 40, 400, 0, 1, f -> 0);
+        double[] xs = base.x(), ys = base.y();
+        xs[39] = 2.05;
+        ys[39] = -0.0009;
+        InspectionResult real = inspector.inspect(Sections.request(SQUARE, 2, R, new PointSet(xs, ys, xs.length, "test")));
+        assertThat(real.notes()).noneMatch(n -> n.contains("within the scatter"));
+    }
+
+    @Test
     void sparseNoisyScanIsIndeterminateNotFail() {
         // the same part scanned every 25 µm: the windows cannot resolve the radius to the band, so
         // neither pass nor fail is proven; the note says what would decide.
@@ -163,6 +184,9 @@ class FittedSurfacesTest {
         InspectionResult r = inspector.inspect(Sections.request(SQUARE, 2, R, pts));
         assertThat(r.surfaces().a().fitted()).isFalse();
         assertThat(r.notes()).anyMatch(n -> n.contains("surface a") && n.contains("nominal surface"));
+        // the note says what to do and states no length without its unit (before: "need 5 spanning at least 0.21 of 2.1")
+        String note = r.notes().stream().filter(n -> n.contains("nominal surface")).findFirst().orElseThrow();
+        assertThat(note).contains("measure further along surface a").doesNotContainPattern("\\d\\.\\d");
         assertThat(r.verdict()).isEqualTo(Verdict.PASS);
     }
 
@@ -222,7 +246,29 @@ class FittedSurfacesTest {
         assertThatThrownBy(() -> new InspectionCallout.RadiusLimits(RadiusKind.R, 2, 2)).isInstanceOf(InputProblem.class)
                 .hasMessageContaining("equals min");
         assertThatThrownBy(() -> request(SQUARE, 5, R, pts, 1e-6)).isInstanceOf(InputProblem.class)
-                .hasMessageContaining("nominalRadius").hasMessageContaining("outside the callout's limits");
+                .hasMessageContaining("nominalRadius").hasMessageContaining("outside the callout's limits")
+                .hasMessageContaining("farther than the band is wide");
+    }
+
+    @Test
+    void sameSignLimitsAreJudgedAboutTheDrawnNominal() {
+        // R3 +0.3/+0.1 is drawn: limit arcs R3.1 and R3.3, the nominal R3 outside them (deviations of
+        // the same sign). Before: refused, "the nominal must lie within its own limits" (exit 2).
+        // The equal-bilateral profile zone about the drawn R3 that holds the crescent is
+        // 2 · 0.3 · (1/sin 45° - 1) = 0.2485 at 90° (plane geometry; CrescentZone), not the 0.0828
+        // about a nominal clamped to R3.1.
+        InspectionCallout sameSign = new InspectionCallout.RadiusLimits(RadiusKind.R, 3.1, 3.3);
+        PointSet pts = Sections.section(SQUARE, 3.2, 40, 400, 0, 1, f -> 0);
+        InspectionResult r = inspector.inspect(Sections.request(SQUARE, 3, sameSign, pts).withCompare(true));
+        assertThat(r.verdict()).isEqualTo(Verdict.PASS);
+        assertThat(r.radius().smallest()).isCloseTo(3.2, within(1e-6));
+        Comparison located = r.comparisons().stream().filter(c -> c.name().equals("profile, located")).findFirst().orElseThrow();
+        assertThat(located.callout()).isEqualTo("profile 0.2485 located");
+        assertThat(located.verdict()).isEqualTo(Verdict.PASS);
+        // R3 -0.1/-0.3 mirrored: limit arcs R2.7 and R2.9; a part at R3 lies outside them
+        InspectionCallout below = new InspectionCallout.RadiusLimits(RadiusKind.CR, 2.7, 2.9);
+        PointSet nominalPart = Sections.section(SQUARE, 3, 40, 400, 0, 1, f -> 0);
+        assertThat(inspector.inspect(Sections.request(SQUARE, 3, below, nominalPart)).verdict()).isEqualTo(Verdict.FAIL);
     }
 
     @Test
@@ -253,5 +299,31 @@ class FittedSurfacesTest {
         assertThat(inspector.inspect(q.withUncertainty(0.005)).verdict()).isEqualTo(Verdict.INDETERMINATE);
         PointSet big = Sections.section(SQUARE, 2.3, 40, 400, 0, 1, f -> 0);
         assertThat(inspector.inspect(Sections.request(SQUARE, 2, R, big).withUncertainty(0.005)).verdict()).isEqualTo(Verdict.FAIL);
+    }
+
+    @Test
+    void statedUncertaintyOnAControlledRadiusAndACompositeProfile() {
+        // ISO 14253-1 (from memory), the same rule for every callout. CR: the radius zone as for R
+        // (a perfect R2 comes within 0.0024 of the 2.1 arc near its tangent points, plane geometry),
+        // and each window's σ is at least U/2, so a large U leaves the local radii undecided.
+        PointSet perfect = Sections.section(SQUARE, 2, 40, 400, 0, 1, f -> 0);
+        InspectionRequest cr = Sections.request(SQUARE, 2, CR, perfect);
+        assertThat(inspector.inspect(cr.withUncertainty(0.001)).verdict()).isEqualTo(Verdict.PASS);
+        assertThat(inspector.inspect(cr.withUncertainty(0.005)).verdict()).isEqualTo(Verdict.INDETERMINATE);
+        assertThat(inspector.inspect(cr.withUncertainty(0.05)).controlled().indeterminate()).isNotEmpty();
+        // composite: the part moved 0.03/0.02 needs 2·√(0.03² + 0.02²) = 0.0721 located (the bisector
+        // point moves by the whole offset, plane geometry) and nothing floating
+        PointSet moved = moved(perfect, 0.03, 0.02, 0, 0, 0);
+        InspectionCallout fits = new InspectionCallout.CompositeProfile(List.of(new InspectionCallout.Tier(0.08, Set.of()),
+                new InspectionCallout.Tier(0.01, EnumSet.allOf(Freedom.class))));
+        InspectionRequest q = Sections.request(SQUARE, 2, fits, moved);
+        assertThat(inspector.inspect(q).tiers().get(0).requiredZone()).isCloseTo(2 * Math.hypot(0.03, 0.02), within(1e-4));
+        assertThat(inspector.inspect(q.withUncertainty(0.001)).verdict()).isEqualTo(Verdict.PASS);
+        assertThat(inspector.inspect(q.withUncertainty(0.005)).verdict()).isEqualTo(Verdict.INDETERMINATE);
+        InspectionCallout tooTight = new InspectionCallout.CompositeProfile(List.of(new InspectionCallout.Tier(0.06, Set.of()),
+                new InspectionCallout.Tier(0.01, EnumSet.allOf(Freedom.class))));
+        InspectionRequest t = Sections.request(SQUARE, 2, tooTight, moved);
+        assertThat(inspector.inspect(t.withUncertainty(0.003)).verdict()).isEqualTo(Verdict.FAIL);
+        assertThat(inspector.inspect(t.withUncertainty(0.008)).verdict()).isEqualTo(Verdict.INDETERMINATE);
     }
 }

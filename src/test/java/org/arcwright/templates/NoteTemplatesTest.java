@@ -6,10 +6,17 @@ import static org.assertj.core.api.Assertions.assertThatThrownBy;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.List;
+import java.util.Map;
+import org.arcwright.callout.Callout;
+import org.arcwright.callout.DatumReference;
+import org.arcwright.callout.Extent;
+import org.arcwright.callout.ProfileTier;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.PackStack;
+import org.arcwright.rules.Recommendation;
 import org.arcwright.testing.Golden;
+import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 import org.arcwright.worksheet.PartWorksheet;
 import org.arcwright.worksheet.WorksheetFiles;
@@ -127,6 +134,46 @@ class NoteTemplatesTest {
         NoteTemplate t = NoteTemplate.compile("ids", "{{feature.id}}:{{feature.status}}", "ids", "t");
         assertThat(new NoteTemplates(List.of(t)).fill("ids", demo, null, "t"))
                 .isEqualTo("F1:measured: pass\n\nF2:decided\n\nF3:decided\n\nF4:decided\n");
+    }
+
+    @Test
+    void radiusAndControlledRadiusNotesSayWhatEachCalloutRequires() {
+        // ASME Y14.5-2018 radius and controlled radius (from memory): both zones are two arcs tangent
+        // to the adjacent surfaces; R leaves form inside the zone free (flats and reversals pass), CR
+        // adds a fair curve without flats or reversals and every radius along it within the limits.
+        // Before: the R note read "SIZE ONLY: FORM AND LOCATION ARE NOT CONTROLLED" and the CR note
+        // did not ask for the local radii.
+        NoteTemplates t = NoteTemplates.load(PackStack.builtIn());
+        for (DrawingStyle style : DrawingStyle.values()) {
+            PartWorksheet part = new PartWorksheet(1, demo.part(), demo.units(), style, demo.titleBlock(), demo.features());
+            for (String name : List.of("callout-note", "inspection-plan")) {
+                String cr = t.fill(name, part, "F1", "t").toUpperCase(java.util.Locale.ROOT);
+                String r = t.fill(name, part, "F2", "t").toUpperCase(java.util.Locale.ROOT);
+                assertThat(r).as(name + " R, " + style).contains("TANGENT TO THE ADJACENT SURFACES").contains("FLATS AND REVERSALS")
+                        .doesNotContain("SIZE ONLY").doesNotContain("FAIR CURVE").doesNotContain("EVERY POINT BETWEEN");
+                assertThat(cr).as(name + " CR, " + style).containsAnyOf("WITHOUT FLATS OR REVERSALS", "NO FLATS, NO REVERSALS").containsAnyOf("EVERY LOCAL RADIUS", "AT EVERY POINT BETWEEN");
+                if (style == DrawingStyle.ASME || name.equals("inspection-plan")) {
+                    assertThat(cr).as(name + " CR, " + style).contains("TANGENT TO THE ADJACENT SURFACES");
+                }
+            }
+        }
+    }
+
+    @Test
+    void aCompositeProfilePlanSaysWhatEachTierRequires() {
+        // ASME Y14.5-2018 composite profile (from memory): every tier's zone holds the surface; the
+        // upper tier is located by its datums, a lower tier only oriented by the datums it repeats.
+        // Before: "upper tier in the datum reference frame — zone 0.5 to A, B — zone 0.1 to A".
+        Callout comp = new Callout.CompositeProfile(List.of(
+                new ProfileTier(0.5, List.of(DatumReference.parse("A"), DatumReference.parse("B"))),
+                new ProfileTier(0.1, List.of(DatumReference.parse("A"))), new ProfileTier(0.05, List.of())), Extent.THIS_RADIUS);
+        Recommendation rec = new Recommendation("demo", comp, "composite", 1.0, List.of("why"), List.of(), List.of(),
+                Map.of("zone", 0.5), List.of(), List.of(), false);
+        PartWorksheet w = demo.withFeature(demo.features().get(2).withChosen(rec));
+        String plan = NoteTemplates.load(PackStack.builtIn()).fill("inspection-plan", w, "F3", "t");
+        assertThat(plan).contains("every point within each tier's zone about the true profile")
+                .contains("0.5 mm to A, B; 0.1 mm to A; 0.05 mm with no datums;")
+                .contains("the upper tier located and oriented by its datums").contains("free in location");
     }
 
     @Test
