@@ -347,4 +347,22 @@ class HostileInputTest {
                 """);
         assertThat(CliRun.of("clearance", corner.toString()).out()).contains("not judged: no requiredSupport given");
     }
+
+    @Test
+    void packCheckReportsATemplateThatWouldBreakEverySheet() throws Exception {
+        Path pack = Files.createDirectories(dir.resolve("template-pack"));
+        Files.writeString(pack.resolve("pack.json"), "{\"name\": \"Template test pack\", \"version\": \"1\"}");
+        Path templates = Files.createDirectories(pack.resolve("templates"));
+        Files.writeString(templates.resolve("deep.mustache"), "{{#part}}".repeat(5000) + "x" + "{{/part}}".repeat(5000));
+        Files.writeString(templates.resolve("fine.mustache"), "PART {{part.number}}\n");
+        Path secret = file("id_demo_key", "PRIVATE-KEY-OF-A-DEMO-USER");
+        Files.createSymbolicLink(templates.resolve("leak.mustache"), secret);
+        // before: PASS, exit 0, and then every sheet and drawing note with this pack was refused
+        CliRun r = CliRun.of("pack", "check", pack.toString(), "--no-settings");
+        assertThat(r.exitCode()).as(r.out() + r.err()).isEqualTo(Cli.FAIL);
+        assertThat(r.out()).contains("deep.mustache:1:", "nested more than 24 deep", "leak.mustache", "outside its pack's folder",
+                "FAIL: 2 problem(s)").doesNotContain("fine.mustache", "PRIVATE-KEY");
+        CliRun json = CliRun.of("pack", "check", pack.toString(), "--no-settings", "--format", "json");
+        assertThat(json.out()).contains("\"passed\" : false", "deep.mustache");
+    }
 }
