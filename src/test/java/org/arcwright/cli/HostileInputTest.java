@@ -365,4 +365,25 @@ class HostileInputTest {
         CliRun json = CliRun.of("pack", "check", pack.toString(), "--no-settings", "--format", "json");
         assertThat(json.out()).contains("\"passed\" : false", "deep.mustache");
     }
+
+    @Test
+    void aSheetSaysAFilletLargerThanItsStepCannotBeBuiltAsDrawn() throws Exception {
+        // F1's shoulder steps from Ø42 to Ø35: h = (D - d)/2 = 3.5 mm, so R5 cannot meet the shoulder face
+        // (common practice: a fillet no larger than the step it blends)
+        String ws = Files.readString(Path.of(example("tarnbeck-output-shaft.arcpart")))
+                .replaceFirst("\"nominalRadius\": 2.0", "\"nominalRadius\": 5.0").replaceFirst("R2 ±0.2", "R5 ±0.2");
+        Path part = file("too-big.arcpart", ws);
+        Path out = dir.resolve("too-big.md");
+        // before: the sheet listed only "no control chosen" and suggested a demoted card, without a word
+        // about the drawing (advise says "R5 cannot be built as drawn" first)
+        CliRun r = CliRun.of("sheet", part.toString(), "--out", out.toString(), "--no-settings");
+        assertThat(r.exitCode()).as(r.err()).isZero();
+        assertThat(Files.readString(out)).contains("R5 cannot be built as drawn", "h = (D − d)/2 = 3.5 mm");
+        Path table = dir.resolve("too-big.csv");
+        Files.writeString(table, Files.readString(Path.of(example("advisor/tarnbeck-output-shaft.csv")))
+                .replaceFirst(",2.0,stress-relief", ",5.0,stress-relief").replaceFirst("R2 ±0.2", "R5 ±0.2"));
+        CliRun batch = CliRun.of("advise", "--batch", table.toString(), "--no-notes", "--no-settings");
+        assertThat(batch.exitCode()).as(batch.err()).isZero();
+        assertThat(batch.out()).contains("R5 cannot be built as drawn", "== F2");
+    }
 }
