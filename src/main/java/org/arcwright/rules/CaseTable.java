@@ -75,7 +75,7 @@ public final class CaseTable {
                     header = (CsvSchema) it.getParserSchema();
                     checkHeader(src, header);
                 }
-                rows.add(row(src, line, values));
+                rows.add(row(src, line, values, header));
             }
         } catch (NoSuchFileException e) {
             throw new InputProblem(src, 0, 0, null, "file not found");
@@ -109,7 +109,7 @@ public final class CaseTable {
         }
     }
 
-    private static Row row(String src, int line, Map<String, String> v) {
+    private static Row row(String src, int line, Map<String, String> v, CsvSchema header) {
         String field = null;
         try {
             field = "feature";
@@ -152,7 +152,7 @@ public final class CaseTable {
                 String kt = text(v, "stress.targetKt");
                 field = "stress.targetKf";
                 String kf = text(v, "stress.targetKf");
-                field = "stress.shape";
+                field = "stress.D";
                 stress = new DesignCase.StressInputs(shape, load, bigD, smallD, strength, kt == null ? null : number(kt),
                         kf == null ? null : number(kf));
             }
@@ -175,10 +175,28 @@ public final class CaseTable {
                     process, stress, mating, text(v, "tolerance"), cornerAngle);
             return new Row(line, feature == null ? "line " + line : feature, c);
         } catch (InputProblem p) {
-            throw new InputProblem(src, line, 0, field, p.problem());
+            throw cell(src, line, header, field, p.problem());
         } catch (IllegalArgumentException e) {
-            throw new InputProblem(src, line, 0, field, e.getMessage());
+            throw cell(src, line, header, field, e.getMessage());
         }
+    }
+
+    /**
+     * A bad cell, at its line and column. A message that starts with a column's name ("nominalRadius
+     * must be ...") names the column at fault, and is not repeated after it.
+     */
+    private static InputProblem cell(String src, int line, CsvSchema header, String field, String problem) {
+        String f = field;
+        String m = problem == null ? "not readable" : problem;
+        for (String name : COLUMNS) {
+            if (m.startsWith(name + " ")) {
+                f = name;
+                m = m.substring(name.length() + 1);
+                break;
+            }
+        }
+        CsvSchema.Column c = f == null ? null : header.column(f);
+        return new InputProblem(src, line, c == null ? 0 : c.getIndex() + 1, f, m);
     }
 
     private static String text(Map<String, String> v, String key) {

@@ -386,4 +386,19 @@ class HostileInputTest {
         assertThat(batch.exitCode()).as(batch.err()).isZero();
         assertThat(batch.out()).contains("R5 cannot be built as drawn", "== F2");
     }
+
+    @Test
+    void aBadCellOfABatchTableNamesItsLineAndColumn() throws Exception {
+        String table = Files.readString(Path.of(example("advisor/tarnbeck-output-shaft.csv")));
+        String[] lines = table.split("\n", -1);
+        lines[2] = lines[2].replaceFirst(",0.8,", ",-0.8,");
+        Path f = file("negative.csv", String.join("\n", lines));
+        // before: "negative.csv:3: nominalRadius: nominalRadius must be ..." (no column, the field said twice)
+        badInput(CliRun.of("advise", "--batch", f.toString(), "--no-notes", "--no-settings"),
+                "negative.csv:3:5: nominalRadius: must be a number greater than zero, got -0.8");
+        lines = table.split("\n", -1);
+        lines[1] = lines[1].replaceFirst(",42,35,", ",30,35,");
+        Path g = file("step.csv", String.join("\n", lines));
+        badInput(CliRun.of("advise", "--batch", g.toString(), "--no-notes", "--no-settings"), "step.csv:2:15: stress.D: need D > d > 0");
+    }
 }
