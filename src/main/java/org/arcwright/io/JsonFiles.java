@@ -101,7 +101,9 @@ public final class JsonFiles {
         try {
             value = mapper.readValue(text, type);
         } catch (JsonProcessingException e) {
-            throw refine(located(e, source), text);
+            // a syntax error is where the parser stopped; a value refused by a check is at its field
+            InputProblem p = located(e, source);
+            throw e instanceof JsonMappingException ? refine(p, text) : p;
         }
         if (value == null || value instanceof NullNode) {
             throw new InputProblem(source, 1, 1, null, "the file holds only null; expected " + expected(type));
@@ -171,7 +173,8 @@ public final class JsonFiles {
         }
         if (field == null) return p;
         int[] at = position(text, field);
-        if (at == null) return p;
+        // the object enclosing a missing field, only when nothing better is known
+        if (at == null || at[2] == 0 && p.line() > 0) return p;
         return new InputProblem(p.source(), at[0], at[1], field, problem, p.getCause());
     }
 

@@ -175,7 +175,7 @@ public final class CaseTable {
                     process, stress, mating, text(v, "tolerance"), cornerAngle);
             return new Row(line, feature == null ? "line " + line : feature, c);
         } catch (InputProblem p) {
-            throw cell(src, line, header, field, p.problem());
+            throw cell(src, line, header, p.field() != null && COLUMNS.contains(p.field()) ? p.field() : field, p.problem());
         } catch (IllegalArgumentException e) {
             throw cell(src, line, header, field, e.getMessage());
         }

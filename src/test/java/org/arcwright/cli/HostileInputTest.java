@@ -401,4 +401,21 @@ class HostileInputTest {
         Path g = file("step.csv", String.join("\n", lines));
         badInput(CliRun.of("advise", "--batch", g.toString(), "--no-notes", "--no-settings"), "step.csv:2:15: stress.D: need D > d > 0");
     }
+
+    @Test
+    void aTypoInACasesToleranceIsLocatedInTheFileThatHoldsIt() throws Exception {
+        // found by the fuzz suite: the tolerance was read only when the advisor sized the card, and the
+        // refusal named neither file nor line ("arcwright advise: tolerance: F1 ....callout: ...")
+        Path json = file("typo-case.json", Files.readString(Path.of(example("advisor/gear-seat-shoulder.json")))
+                .replace("\"R2 ±0.2\"", "\"R2 +0.2/31\""));
+        badInput(CliRun.of("advise", json.toString(), "--no-notes", "--no-settings"), "typo-case.json:15:16: tolerance:",
+                "no sign");
+        Path csv = file("typo-table.csv", Files.readString(Path.of(example("advisor/tarnbeck-output-shaft.csv")))
+                .replaceFirst("R2 ±0.2", "Q2"));
+        badInput(CliRun.of("advise", "--batch", csv.toString(), "--no-notes", "--no-settings"), "typo-table.csv:2:12: tolerance:");
+        Path part = file("typo.arcpart", Files.readString(Path.of(example("tarnbeck-output-shaft.arcpart")))
+                .replaceFirst("R2 ±0.2", "Q2"));
+        badInput(CliRun.of("sheet", part.toString(), "--out", dir.resolve("typo.md").toString(), "--no-settings"),
+                "typo.arcpart:", "features[0].case.tolerance:");
+    }
 }
