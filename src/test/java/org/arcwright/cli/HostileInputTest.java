@@ -418,4 +418,33 @@ class HostileInputTest {
         badInput(CliRun.of("sheet", part.toString(), "--out", dir.resolve("typo.md").toString(), "--no-settings"),
                 "typo.arcpart:", "features[0].case.tolerance:");
     }
+
+    @Test
+    void aByteOrderMarkIsAcceptedInEveryFileTheCommandsRead() throws Exception {
+        // as a spreadsheet's "CSV UTF-8" export writes it, and some editors before JSON (common practice)
+        byte[] bom = {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF};
+        Path table = dir.resolve("bom-table.csv");
+        Files.write(table, concat(bom, Files.readAllBytes(Path.of(example("advisor/tarnbeck-output-shaft.csv")))));
+        CliRun batch = CliRun.of("advise", "--batch", table.toString(), "--no-notes", "--no-settings");
+        assertThat(batch.exitCode()).as(batch.err()).isZero();
+        assertThat(batch.out()).contains("== F1 gear seat shoulder");
+        Path points = dir.resolve("housing-fillet-section.csv");
+        Files.write(points, concat(bom, Files.readAllBytes(Path.of(example("inspect/housing-fillet-section.csv")))));
+        Path section = dir.resolve("section.json");
+        Files.write(section, concat(bom, Files.readAllBytes(Path.of(example("inspect/housing-fillet-profile.json")))));
+        CliRun inspect = CliRun.of("inspect", section.toString());
+        assertThat(inspect.exitCode()).as(inspect.err()).isIn(Cli.OK, Cli.FAIL);
+        assertThat(inspect.out()).contains("profile");
+        Path part = dir.resolve("bom.arcpart");
+        Files.write(part, concat(bom, Files.readAllBytes(Path.of(example("tarnbeck-output-shaft-decided.arcpart")))));
+        CliRun sheet = CliRun.of("sheet", part.toString(), "--out", dir.resolve("bom.md").toString(), "--no-settings",
+                "--no-suggest");
+        assertThat(sheet.exitCode()).as(sheet.err()).isZero();
+    }
+
+    private static byte[] concat(byte[] a, byte[] b) {
+        byte[] out = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
+    }
 }
