@@ -103,6 +103,8 @@ public final class JsonFiles {
         } catch (JsonProcessingException e) {
             // a syntax error is where the parser stopped; a value refused by a check is at its field
             InputProblem p = located(e, source);
+            if (p.line() == 0 && p.problem().contains(" digits; at most ")) p = atLongNumber(p, text);
+            if (p.line() == 0 && p.problem().contains(" levels are read")) p = atDepth(p, text);
             throw e instanceof JsonMappingException ? refine(p, text) : p;
         }
         if (value == null || value instanceof NullNode) {
@@ -134,6 +136,53 @@ public final class JsonFiles {
     /** Serialises a value and replaces {@code file} atomically. */
     public void writeAtomically(Path file, Object value) {
         AtomicFiles.writeString(file, write(value) + System.lineSeparator());
+    }
+
+    /** Nesting too deep to read, placed where it first goes deeper than the parser reads. */
+    private static InputProblem atDepth(InputProblem p, String text) {
+        int max = mapperDepthLimit();
+        int depth = 0;
+        int line = 1;
+        int lineStart = 0;
+        boolean inText = false;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '\n') {
+                line++;
+                lineStart = i + 1;
+            } else if (inText) {
+                if (c == '\\') i++;
+                else if (c == '"') inText = false;
+            } else if (c == '"') {
+                inText = true;
+            } else if (c == '[' || c == '{') {
+                if (++depth > max) return new InputProblem(p.source(), line, i - lineStart + 1, p.field(), p.problem(), p.getCause());
+            } else if (c == ']' || c == '}') {
+                depth--;
+            }
+        }
+        return p;
+    }
+
+    private static int mapperDepthLimit() {
+        return com.fasterxml.jackson.core.StreamReadConstraints.defaults().getMaxNestingDepth();
+    }
+
+    /** A number too long to read, placed at the first such run of digits and named by the field before it. */
+    private static InputProblem atLongNumber(InputProblem p, String text) {
+        Matcher m = LONG_NUMBER.matcher(text);
+        if (!m.find()) return p;
+        int line = 1;
+        int lineStart = 0;
+        for (int i = 0; i < m.start(); i++) {
+            if (text.charAt(i) == '\n') {
+                line++;
+                lineStart = i + 1;
+            }
+        }
+        Matcher f = FIELD_BEFORE.matcher(text.substring(Math.max(0, m.start() - 200), m.start()));
+        return new InputProblem(p.source(), line, m.start() - lineStart + 1, f.find() ? f.group(1) : p.field(),
+                p.problem(), p.getCause());
     }
 
     /**
@@ -278,6 +327,12 @@ public final class JsonFiles {
         return sb.length() == 0 ? null : sb.toString();
     }
 
+    /** Jackson's read constraints (StreamReadConstraints): number and text lengths, nesting depth. */
+    private static final Pattern LIMIT = Pattern.compile(
+            "(Number value length|String value length|Document nesting depth|Document length|Token count) \\((\\d+)\\) exceeds the maximum allowed \\((\\d+)");
+    /** A run of number characters longer than any number read (its position, when the parser gave none). */
+    private static final Pattern LONG_NUMBER = Pattern.compile("-?[0-9][0-9.eE+-]{999,}");
+    private static final Pattern FIELD_BEFORE = Pattern.compile("\"([^\"\\\\]+)\"\\s*:\\s*$");
     private static final Pattern UNEXPECTED = Pattern.compile("Unexpected character \\('(.{1,2})'\\)");
     private static final Pattern FROM_VALUE = Pattern.compile("from (\\w+) value");
     private static final Pattern TYPE = Pattern.compile("`([\\w.$\\[\\]]+)`");
@@ -324,6 +379,21 @@ public final class JsonFiles {
 
     private static String parseMessage(String msg) {
         String m = msg.replaceAll(" \\(code \\d+\\)", "");
+        Matcher limit = LIMIT.matcher(m);
+        if (limit.find()) {
+            String n = limit.group(2);
+            String max = limit.group(3);
+            switch (limit.group(1)) {
+                case "Number value length":
+                    return "a number of " + n + " digits; at most " + max + " digits are read (a value pasted twice?)";
+                case "String value length":
+                    return "a text of " + n + " characters; at most " + max + " characters are read in one value";
+                case "Document nesting depth":
+                    return "lists or objects nested " + n + " deep; at most " + max + " levels are read";
+                default:
+                    return "the file is too large to read (" + n + "; at most " + max + ")";
+            }
+        }
         if (m.contains("'NaN'") || m.contains("Infinity") || m.contains("ALLOW_NON_NUMERIC_NUMBERS")) {
             return "NaN and Infinity are not numbers here; give a finite number";
         }

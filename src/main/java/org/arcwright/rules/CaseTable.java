@@ -21,6 +21,8 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
@@ -69,7 +71,7 @@ public final class CaseTable {
                 try {
                     values = it.nextValue();
                 } catch (IOException | RuntimeException e) {
-                    throw new InputProblem(src, line, 0, null, "unreadable row: " + firstLine(e.getMessage()));
+                    throw new InputProblem(src, line, 0, null, "unreadable row: " + csvWords(firstLine(e.getMessage())));
                 }
                 if (header == null) {
                     header = (CsvSchema) it.getParserSchema();
@@ -225,6 +227,20 @@ public final class CaseTable {
             case "false", "no", "n", "0" -> false;
             default -> throw new IllegalArgumentException("expected true or false, got '" + s + "'");
         };
+    }
+
+    private static final Pattern AFTER_QUOTE = Pattern.compile("^Unexpected character \\('(.{1,2})'\\): Expected column separator");
+    private static final Pattern TOO_MANY = Pattern.compile("^Too many entries: expected at most (\\d+)");
+
+    /** The CSV reader's message in the user's terms: no character codes, no reader vocabulary. */
+    private static String csvWords(String m) {
+        String w = m.replaceAll(" \\(code \\d+\\)", "");
+        Matcher ch = AFTER_QUOTE.matcher(w);
+        if (ch.find()) return "unexpected '" + ch.group(1) + "' after a quoted value; a comma or the end of the line should follow it";
+        Matcher many = TOO_MANY.matcher(w);
+        if (many.find()) return "more cells than the header has columns (" + many.group(1) + ")";
+        if (w.startsWith("Missing closing quote")) return "a quoted value is not closed (a missing \")";
+        return w;
     }
 
     private static String firstLine(String s) {

@@ -400,6 +400,17 @@ class HostileInputTest {
         lines[1] = lines[1].replaceFirst(",42,35,", ",30,35,");
         Path g = file("step.csv", String.join("\n", lines));
         badInput(CliRun.of("advise", "--batch", g.toString(), "--no-notes", "--no-settings"), "step.csv:2:15: stress.D: need D > d > 0");
+        // the CSV reader's own words carried character codes and its terms
+        lines = table.split("\n", -1);
+        lines[2] = "\"F2\"x" + lines[2].substring(lines[2].indexOf(','));
+        CliRun quote = CliRun.of("advise", "--batch", file("quote.csv", String.join("\n", lines)).toString(), "--no-notes",
+                "--no-settings");
+        badInput(quote, "quote.csv:3:", "unexpected 'x' after a quoted value");
+        assertThat(quote.err()).doesNotContain("(code ");
+        lines = table.split("\n", -1);
+        lines[2] = lines[2] + ",extra,cells";
+        badInput(CliRun.of("advise", "--batch", file("extra.csv", String.join("\n", lines)).toString(), "--no-notes",
+                "--no-settings"), "extra.csv:3:", "more cells than the header has columns (20)");
     }
 
     @Test

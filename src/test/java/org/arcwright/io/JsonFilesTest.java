@@ -136,4 +136,19 @@ class JsonFilesTest {
         }
         throw new AssertionError("no input problem");
     }
+
+    @Test
+    void theParsersOwnLimitsAreSaidInTheUsersTermsAndLocated() {
+        // Jackson's read constraints (from memory: 1,000 digits in a number, 1,000 levels of nesting) spoke of
+        // StreamReadConstraints and gave no line
+        String longNumber = "{\"units\": \"mm\",\n \"zone\": " + "9".repeat(1500) + "}";
+        InputProblem n = catchProblem(() -> json.parse(longNumber, "n.json", Sample.class));
+        assertThat(n.getMessage()).startsWith("n.json:2:10: ").contains("1500 digits", "at most 1000");
+        String deep = "{\"units\": \"mm\", \"x\":\n" + "[".repeat(1200) + "]".repeat(1200) + "}";
+        InputProblem d = catchProblem(() -> json.parse(deep, "d.json", com.fasterxml.jackson.databind.JsonNode.class));
+        assertThat(d.getMessage()).startsWith("d.json:2:").contains("nested", "at most 1000");
+        for (InputProblem p : List.of(n, d)) {
+            assertThat(p.getMessage()).doesNotContain("StreamReadConstraints", "`", "()", "java.");
+        }
+    }
 }
