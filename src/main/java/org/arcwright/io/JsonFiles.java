@@ -330,6 +330,7 @@ public final class JsonFiles {
     /** Jackson's read constraints (StreamReadConstraints): number and text lengths, nesting depth. */
     private static final Pattern LIMIT = Pattern.compile(
             "(Number value length|String value length|Document nesting depth|Document length|Token count) \\((\\d+)\\) exceeds the maximum allowed \\((\\d+)");
+    private static final Pattern OUT_OF_RANGE = Pattern.compile("Numeric value \\(([^)]{1,40})[^)]*\\) out of range of (int|long)");
     /** A run of number characters longer than any number read (its position, when the parser gave none). */
     private static final Pattern LONG_NUMBER = Pattern.compile("-?[0-9][0-9.eE+-]{999,}");
     private static final Pattern FIELD_BEFORE = Pattern.compile("\"([^\"\\\\]+)\"\\s*:\\s*$");
@@ -393,6 +394,11 @@ public final class JsonFiles {
                 default:
                     return "the file is too large to read (" + n + "; at most " + max + ")";
             }
+        }
+        Matcher range = OUT_OF_RANGE.matcher(m);
+        if (range.find()) {
+            return "the number " + range.group(1) + " is too large for a whole number here (at most "
+                    + (range.group(2).equals("int") ? "2147483647" : "9223372036854775807") + ")";
         }
         if (m.contains("'NaN'") || m.contains("Infinity") || m.contains("ALLOW_NON_NUMERIC_NUMBERS")) {
             return "NaN and Infinity are not numbers here; give a finite number";

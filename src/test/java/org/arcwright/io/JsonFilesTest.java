@@ -151,4 +151,13 @@ class JsonFilesTest {
             assertThat(p.getMessage()).doesNotContain("StreamReadConstraints", "`", "()", "java.");
         }
     }
+
+    record Counted(@JsonProperty("weight") Integer weight) {}
+
+    @Test
+    void aWholeNumberOutOfRangeIsSaidWithoutJavaTypeNames() {
+        InputProblem p = catchProblem(() -> json.parse("{\"weight\": 1e999}", "w.json", Counted.class));
+        assertThat(p.getMessage()).startsWith("w.json:1:").contains("weight", "too large for a whole number")
+                .doesNotContain(" int ", "out of range of");
+    }
 }
