@@ -11,7 +11,7 @@ import picocli.CommandLine.Command;
         description = {
                 "Tolerancing assistant for fillets, rounds and edge radii.",
                 "Run with no arguments on a desktop to open the window."},
-        footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage, 70 internal error (a fault in Arcwright).",
+        footer = {"", "Exit codes: 0 done or pass, 1 fail, 2 bad input or usage, 3 inspect only: indeterminate (the measurement proves neither pass nor fail), 70 internal error (a fault in Arcwright).",
                 "Design guidance only: defer to the governing standard, your company's practice and licensed engineering judgement."})
 public final class ArcwrightCommand implements Runnable {
     /**

@@ -1,11 +1,6 @@
 package org.arcwright.cli;
 
-import java.io.IOException;
 import java.io.PrintWriter;
-import java.io.UncheckedIOException;
-import java.nio.charset.MalformedInputException;
-import java.nio.file.Files;
-import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.LinkedHashMap;
@@ -14,6 +9,7 @@ import java.util.Locale;
 import java.util.Map;
 import java.util.concurrent.Callable;
 import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.notes.FacetCount;
@@ -257,15 +253,7 @@ final class NotesCommand implements Runnable {
         }
 
         private static String readable(Path file) {
-            try {
-                return Files.readString(file);
-            } catch (NoSuchFileException e) {
-                throw new InputProblem(file.toString(), 0, 0, null, "file not found");
-            } catch (MalformedInputException e) {
-                throw new InputProblem(file.toString(), 0, 0, null, "not UTF-8 text");
-            } catch (IOException e) {
-                throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
-            }
+            return InputFiles.readText(file);
         }
     }
 

@@ -8,6 +8,7 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.concurrent.Callable;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.pack.ConfigDirectory;
@@ -18,6 +19,8 @@ import org.arcwright.pack.PracticePack;
 import org.arcwright.rules.PackCheck;
 import org.arcwright.rules.RuleBook;
 import org.arcwright.rules.RuleConflict;
+import org.arcwright.templates.NoteTemplate;
+import org.arcwright.templates.NoteTemplates;
 import picocli.CommandLine.Command;
 import picocli.CommandLine.Model.CommandSpec;
 import picocli.CommandLine.Option;
@@ -75,6 +78,9 @@ final class PackCommand implements Runnable {
             }
             RuleBook book = RuleBook.load(stack);
             PackCheck.Report report = new PackCheck(Advisors.standard(stack, book)).run(checked.name());
+            List<InputProblem> problems = new ArrayList<>(report.problems());
+            problems.addAll(templateProblems(stack, checked.name()));
+            report = new PackCheck.Report(report.pack(), problems, report.conflicts(), report.examples());
             PrintWriter out = spec.commandLine().getOut();
             if (format == OutputFormat.json) {
                 Map<String, Object> m = new LinkedHashMap<>();
@@ -88,6 +94,26 @@ final class PackCommand implements Runnable {
                 printText(out, report, book);
             }
             return report.passed() ? Cli.OK : Cli.FAIL;
+        }
+
+        /**
+         * Every template of the checked pack compiled on its own: a template that breaks (too deep, a
+         * list inside itself, a link out of the pack) would otherwise refuse every sheet and drawing
+         * note made with the pack, long after the check said it passed.
+         */
+        private static List<InputProblem> templateProblems(PackStack stack, String packName) {
+            List<InputProblem> out = new ArrayList<>();
+            for (PackStack.PackFile f : stack.files(NoteTemplates.FOLDER, NoteTemplates.EXTENSION)) {
+                if (!f.pack().name().equals(packName)) continue;
+                String file = f.path().getFileName().toString();
+                try {
+                    NoteTemplate.compile(file.substring(0, file.length() - NoteTemplates.EXTENSION.length()),
+                            InputFiles.readPackText(f.path(), f.pack().root()), f.path().toString(), packName);
+                } catch (InputProblem p) {
+                    out.add(p);
+                }
+            }
+            return out;
         }
 
         /** The settings' team packs under the checked one: those listed before it, or all when it is not listed. */

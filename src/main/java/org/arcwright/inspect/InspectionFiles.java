@@ -18,6 +18,7 @@ import java.util.Objects;
 import java.util.Set;
 import java.util.function.Supplier;
 import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.tolerance.RadiusKind;
@@ -65,14 +66,18 @@ public final class InspectionFiles {
 
     /** Reads {@code file}; a {@code pointsFile} is resolved against its folder. */
     public InspectionRequest read(Path file) {
-        FileDto dto = json.read(file, FileDto.class);
-        Path dir = file.toAbsolutePath().getParent();
-        return toRequest(dto, file.toString(), dir);
+        return parse(InputFiles.readText(file), file.toString(), file.toAbsolutePath().getParent());
     }
 
     /** Parses inspection JSON text; {@code baseDir} resolves a {@code pointsFile} (may be null). */
     public InspectionRequest parse(String text, String source, Path baseDir) {
-        return toRequest(json.parse(text, source, FileDto.class), source, baseDir);
+        FileDto dto = json.parse(text, source, FileDto.class);
+        try {
+            return toRequest(dto, source, baseDir);
+        } catch (InputProblem p) {
+            // checks made after reading (the request's own) are located at their field in the file
+            throw source.equals(p.source()) ? JsonFiles.locate(p, text) : p;
+        }
     }
 
     private static InspectionRequest toRequest(FileDto d, String source, Path dir) {

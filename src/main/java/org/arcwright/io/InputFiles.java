@@ -47,7 +47,14 @@ public final class InputFiles {
 
     /** The whole of {@code file} as text, refusing files over {@code maxBytes}. */
     public static String readText(Path file, long maxBytes) {
-        byte[] bytes = readBytes(file, maxBytes);
+        return decode(readBytes(file, maxBytes), file);
+    }
+
+    /**
+     * Bytes already read from {@code file} (a note whose bytes are also hashed) as text, as
+     * {@link #readText(Path)} would give it: BOM dropped, strict UTF-8.
+     */
+    public static String decode(byte[] bytes, Path file) {
         int start = startsWithBom(bytes) ? BOM.length : 0;
         try {
             return StandardCharsets.UTF_8.newDecoder()

@@ -2,7 +2,11 @@ package org.arcwright.io;
 
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
+import com.fasterxml.jackson.core.JsonStreamContext;
+import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.core.JsonProcessingException;
+import com.fasterxml.jackson.databind.DeserializationContext;
 import com.fasterxml.jackson.databind.DeserializationFeature;
 import com.fasterxml.jackson.databind.JsonMappingException;
 import com.fasterxml.jackson.databind.JsonNode;
@@ -14,13 +18,18 @@ import com.fasterxml.jackson.databind.exc.InvalidFormatException;
 import com.fasterxml.jackson.databind.exc.InvalidTypeIdException;
 import com.fasterxml.jackson.databind.exc.MismatchedInputException;
 import com.fasterxml.jackson.databind.exc.UnrecognizedPropertyException;
+import com.fasterxml.jackson.databind.deser.std.NumberDeserializers;
 import com.fasterxml.jackson.databind.json.JsonMapper;
+import com.fasterxml.jackson.databind.module.SimpleModule;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.NullNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
+import java.io.IOException;
 import java.math.BigDecimal;
 import java.nio.file.Path;
+import java.util.ArrayList;
 import java.util.Collection;
+import java.util.List;
 import java.util.Locale;
 import java.util.regex.Matcher;
 import java.util.regex.Pattern;
@@ -43,6 +52,9 @@ public final class JsonFiles {
                 .enable(JsonParser.Feature.STRICT_DUPLICATE_DETECTION)
                 .enable(SerializationFeature.INDENT_OUTPUT)
                 .disable(SerializationFeature.FAIL_ON_EMPTY_BEANS)
+                .addModule(new SimpleModule("finite-numbers")
+                        .addDeserializer(Double.class, new FiniteDouble(Double.class, null))
+                        .addDeserializer(double.class, new FiniteDouble(double.class, 0.0)))
                 .build();
         // "" for a number, a list or an object is a mistake, not "absent": absent would quietly
         // switch an optional check off
@@ -89,7 +101,11 @@ public final class JsonFiles {
         try {
             value = mapper.readValue(text, type);
         } catch (JsonProcessingException e) {
-            throw located(e, source);
+            // a syntax error is where the parser stopped; a value refused by a check is at its field
+            InputProblem p = located(e, source);
+            if (p.line() == 0 && p.problem().contains(" digits; at most ")) p = atLongNumber(p, text);
+            if (p.line() == 0 && p.problem().contains(" levels are read")) p = atDepth(p, text);
+            throw e instanceof JsonMappingException ? refine(p, text) : p;
         }
         if (value == null || value instanceof NullNode) {
             throw new InputProblem(source, 1, 1, null, "the file holds only null; expected " + expected(type));
@@ -120,6 +136,161 @@ public final class JsonFiles {
     /** Serialises a value and replaces {@code file} atomically. */
     public void writeAtomically(Path file, Object value) {
         AtomicFiles.writeString(file, write(value) + System.lineSeparator());
+    }
+
+    /** Nesting too deep to read, placed where it first goes deeper than the parser reads. */
+    private static InputProblem atDepth(InputProblem p, String text) {
+        int max = mapperDepthLimit();
+        int depth = 0;
+        int line = 1;
+        int lineStart = 0;
+        boolean inText = false;
+        for (int i = 0; i < text.length(); i++) {
+            char c = text.charAt(i);
+            if (c == '\n') {
+                line++;
+                lineStart = i + 1;
+            } else if (inText) {
+                if (c == '\\') i++;
+                else if (c == '"') inText = false;
+            } else if (c == '"') {
+                inText = true;
+            } else if (c == '[' || c == '{') {
+                if (++depth > max) return new InputProblem(p.source(), line, i - lineStart + 1, p.field(), p.problem(), p.getCause());
+            } else if (c == ']' || c == '}') {
+                depth--;
+            }
+        }
+        return p;
+    }
+
+    private static int mapperDepthLimit() {
+        return com.fasterxml.jackson.core.StreamReadConstraints.defaults().getMaxNestingDepth();
+    }
+
+    /** A number too long to read, placed at the first such run of digits and named by the field before it. */
+    private static InputProblem atLongNumber(InputProblem p, String text) {
+        Matcher m = LONG_NUMBER.matcher(text);
+        if (!m.find()) return p;
+        int line = 1;
+        int lineStart = 0;
+        for (int i = 0; i < m.start(); i++) {
+            if (text.charAt(i) == '\n') {
+                line++;
+                lineStart = i + 1;
+            }
+        }
+        Matcher f = FIELD_BEFORE.matcher(text.substring(Math.max(0, m.start() - 200), m.start()));
+        return new InputProblem(p.source(), line, m.start() - lineStart + 1, f.find() ? f.group(1) : p.field(),
+                p.problem(), p.getCause());
+    }
+
+    /**
+     * A problem found after the JSON was read (by a record's constructor or a check of the whole
+     * file), located in {@code text}: at the value of its field, or at the object that should hold a
+     * field that is missing. A problem that already has a line, or text that does not parse, is
+     * returned as it is.
+     */
+    public static InputProblem locate(InputProblem p, String text) {
+        return p.line() > 0 || text == null ? p : refine(p, text);
+    }
+
+    private static final Pattern LEADING_FIELD =
+            Pattern.compile("^([A-Za-z_]\\w*(?:\\[\\d+])*(?:\\.[A-Za-z_]\\w*(?:\\[\\d+])*)*)(: | (?=must |is |should |needs? ))");
+
+    /**
+     * The problem placed at its field in {@code text}. A constructor's message that starts with a
+     * field ("zone must be ...", "tiers[1].zone: ...") names a field below the one the parser knew,
+     * when the text has it; the parser's own position (after the object, where it stopped) is
+     * replaced by the position of the value.
+     */
+    private static InputProblem refine(InputProblem p, String text) {
+        String field = p.field();
+        String problem = p.problem();
+        Matcher m = LEADING_FIELD.matcher(problem);
+        if (m.find()) {
+            String lead = m.group(1);
+            boolean simple = lead.matches("\\w+");
+            for (String deeper : field == null ? List.of(lead) : List.of(field + "." + lead, lead)) {
+                int[] at = position(text, deeper);
+                // a simple name the text lacks ("when is missing") is shown at the object that lacks it
+                if (at != null && (at[2] == 1 || simple && !m.group(2).equals(": ") && field != null
+                        && deeper.startsWith(field + "."))) {
+                    return new InputProblem(p.source(), at[0], at[1], deeper, problem.substring(m.end()), p.getCause());
+                }
+            }
+        }
+        if (field == null) return p;
+        int[] at = position(text, field);
+        // the object enclosing a missing field, only when nothing better is known
+        if (at == null || at[2] == 0 && p.line() > 0) return p;
+        return new InputProblem(p.source(), at[0], at[1], field, problem, p.getCause());
+    }
+
+    /**
+     * Line, column and whether it was found exactly (1) or only its nearest enclosing value (0), of
+     * the value at {@code field} ({@code a.b[2].c}) in JSON {@code text}; null when the text does not
+     * parse that far or the field's path is not in it at all.
+     */
+    private static int[] position(String text, String field) {
+        List<String> path = new ArrayList<>();
+        for (String part : field.replace("[", ".").replace("]", "").split("\\.")) {
+            if (!part.isEmpty()) path.add(part);
+        }
+        for (int keep = path.size(); keep >= 0; keep--) {
+            StringBuilder pointer = new StringBuilder();
+            for (String part : path.subList(0, keep)) {
+                pointer.append('/').append(part.replace("~", "~0").replace("/", "~1"));
+            }
+            int[] at = valueAt(text, pointer.toString());
+            if (at != null) return new int[] {at[0], at[1], keep == path.size() ? 1 : 0};
+        }
+        return null;
+    }
+
+    private static final com.fasterxml.jackson.core.JsonFactory FACTORY = com.fasterxml.jackson.core.JsonFactory.builder()
+            .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS).build();
+
+    private static int[] valueAt(String text, String pointer) {
+        try (JsonParser p = FACTORY.createParser(text)) {
+            JsonToken t;
+            while ((t = p.nextToken()) != null) {
+                if (t == JsonToken.FIELD_NAME || t == JsonToken.END_OBJECT || t == JsonToken.END_ARRAY) continue;
+                JsonStreamContext ctx = p.getParsingContext();
+                if (t.isStructStart()) ctx = ctx.getParent();
+                if (pointer.equals(ctx.pathAsPointer().toString())) {
+                    JsonLocation l = p.currentTokenLocation();
+                    return new int[] {l.getLineNr(), l.getColumnNr()};
+                }
+            }
+        } catch (IOException | RuntimeException e) {
+            return null;
+        }
+        return null;
+    }
+
+    /**
+     * A number too large for a double reads as infinity, which no check below the boundary expects:
+     * it is refused here, as NaN is, with the text the user wrote.
+     */
+    private static final class FiniteDouble extends NumberDeserializers.DoubleDeserializer {
+        private static final long serialVersionUID = 1L;
+
+        FiniteDouble(Class<Double> type, Double nullValue) {
+            super(type, nullValue);
+        }
+
+        @Override
+        public Double deserialize(JsonParser p, DeserializationContext ctxt) throws IOException {
+            Double v = super.deserialize(p, ctxt);
+            if (v != null && Double.isInfinite(v)) {
+                String written = p.getText();
+                throw JsonMappingException.from(p, "too large",
+                        new InputProblem(null, 0, 0, null, "the number " + (written.length() > 24 ? written.substring(0, 24) + "..." : written)
+                                + " is too large (beyond 1.8e308); give a finite number"));
+            }
+            return v;
+        }
     }
 
     /** Turns a Jackson exception into a located {@link InputProblem}. */
@@ -156,6 +327,14 @@ public final class JsonFiles {
         return sb.length() == 0 ? null : sb.toString();
     }
 
+    /** Jackson's read constraints (StreamReadConstraints): number and text lengths, nesting depth. */
+    private static final Pattern LIMIT = Pattern.compile(
+            "(Number value length|String value length|Document nesting depth|Document length|Token count) \\((\\d+)\\) exceeds the maximum allowed \\((\\d+)");
+    private static final Pattern OUT_OF_RANGE = Pattern.compile("Numeric value \\(([^)]{1,40})[^)]*\\) out of range of (int|long)");
+    /** A run of number characters longer than any number read (its position, when the parser gave none). */
+    private static final Pattern LONG_NUMBER = Pattern.compile("-?[0-9][0-9.eE+-]{999,}");
+    private static final Pattern FIELD_BEFORE = Pattern.compile("\"([^\"\\\\]+)\"\\s*:\\s*$");
+    private static final Pattern UNEXPECTED = Pattern.compile("Unexpected character \\('(.{1,2})'\\)");
     private static final Pattern FROM_VALUE = Pattern.compile("from (\\w+) value");
     private static final Pattern TYPE = Pattern.compile("`([\\w.$\\[\\]]+)`");
 
@@ -163,7 +342,9 @@ public final class JsonFiles {
     private static String cleanMessage(JsonProcessingException e) {
         Throwable root = e;
         while (root.getCause() != null && root.getCause() != root) {
-            if (root.getCause() instanceof InputProblem ip) return ip.problem();
+            if (root.getCause() instanceof InputProblem ip) {
+                return ip.field() == null ? ip.problem() : ip.field() + ": " + ip.problem();
+            }
             if (root.getCause() instanceof IllegalArgumentException iae && iae.getMessage() != null) return iae.getMessage();
             if (root.getCause() instanceof NullPointerException) return "missing a required value";
             root = root.getCause();
@@ -199,6 +380,26 @@ public final class JsonFiles {
 
     private static String parseMessage(String msg) {
         String m = msg.replaceAll(" \\(code \\d+\\)", "");
+        Matcher limit = LIMIT.matcher(m);
+        if (limit.find()) {
+            String n = limit.group(2);
+            String max = limit.group(3);
+            switch (limit.group(1)) {
+                case "Number value length":
+                    return "a number of " + n + " digits; at most " + max + " digits are read (a value pasted twice?)";
+                case "String value length":
+                    return "a text of " + n + " characters; at most " + max + " characters are read in one value";
+                case "Document nesting depth":
+                    return "lists or objects nested " + n + " deep; at most " + max + " levels are read";
+                default:
+                    return "the file is too large to read (" + n + "; at most " + max + ")";
+            }
+        }
+        Matcher range = OUT_OF_RANGE.matcher(m);
+        if (range.find()) {
+            return "the number " + range.group(1) + " is too large for a whole number here (at most "
+                    + (range.group(2).equals("int") ? "2147483647" : "9223372036854775807") + ")";
+        }
         if (m.contains("'NaN'") || m.contains("Infinity") || m.contains("ALLOW_NON_NUMERIC_NUMBERS")) {
             return "NaN and Infinity are not numbers here; give a finite number";
         }
@@ -222,7 +423,32 @@ public final class JsonFiles {
         if (m.contains("ALLOW_TRAILING_COMMA") || m.contains("was expecting double-quote to start field name")) {
             return "expected a field name in double quotes (a trailing comma?)";
         }
-        if (m.contains("ALLOW_LEADING_") || m.contains("Leading zeroes")) return "not a valid JSON number";
+        if (m.contains("ALLOW_LEADING_") || m.contains("Leading zeroes") || m.contains("in numeric value")) {
+            return "not a valid JSON number";
+        }
+        Matcher ch = UNEXPECTED.matcher(m);
+        String c = ch.find() ? ch.group(1) : null;
+        if (m.contains("was expecting comma to separate")) {
+            return "unexpected " + (c == null ? "character" : "'" + c + "'") + " where a comma between fields (or list items) "
+                    + "or the closing bracket should be";
+        }
+        if (m.contains("was expecting a colon")) return "expected a colon after the field name";
+        if (m.startsWith("Unrecognized token")) {
+            int q = m.indexOf('\'');
+            int q2 = q < 0 ? -1 : m.indexOf('\'', q + 1);
+            return "unexpected " + (q2 > q ? m.substring(q, q2 + 1) : "word") + " where a value should be (text in double "
+                    + "quotes, a number, a list, an object, true, false or null)";
+        }
+        if (m.startsWith("Unexpected close marker")) return "a closing } or ] with nothing open to close";
+        if (m.startsWith("Illegal unquoted character")) {
+            return "a control character (a line break or tab?) inside text; write it as \\n or \\t";
+        }
+        if (m.startsWith("Unrecognized character escape")) {
+            return "an unknown backslash escape inside text; write a backslash itself as \\\\";
+        }
+        if (m.startsWith("Unexpected character")) {
+            return "unexpected " + (c == null ? "character" : "'" + c + "'");
+        }
         return scrub(m);
     }
 

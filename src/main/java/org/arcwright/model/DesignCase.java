@@ -7,6 +7,8 @@ import com.fasterxml.jackson.annotation.JsonProperty;
 import java.util.List;
 import java.util.Objects;
 import org.arcwright.io.DecimalText;
+import org.arcwright.io.InputProblem;
+import org.arcwright.tolerance.CalloutParser;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 
@@ -91,6 +93,15 @@ public record DesignCase(Units units, DrawingStyle standard, String feature, Ble
         this.stress = stress;
         this.mating = mating;
         this.tolerance = tolerance == null || tolerance.isBlank() ? null : tolerance.trim();
+        if (this.tolerance != null) {
+            // read here, at the file, so that a typo is refused where it stands, not when a card is sized
+            try {
+                CalloutParser.parse(this.tolerance, units);
+            } catch (InputProblem p) {
+                throw InputProblem.ofField("tolerance", p.problem()
+                        + (p.column() > 0 ? " (at character " + p.column() + " of '" + this.tolerance + "')" : ""));
+            }
+        }
         if (cornerAngle != null && !(Double.isFinite(cornerAngle) && cornerAngle > 0 && cornerAngle < 180)) {
             throw new IllegalArgumentException("cornerAngle must be between 0 and 180 degrees (exclusive), got " + DecimalText.exact(cornerAngle));
         }

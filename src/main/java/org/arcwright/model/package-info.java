@@ -17,8 +17,8 @@
  * where these types live.
  *
  * <p>May import: the JDK, Jackson, {@code org.arcwright.io} and {@code org.arcwright.tolerance}.
- * Of {@code tolerance} a case uses only the two vocabulary types it carries ({@code Units},
- * {@code DrawingStyle}); {@code tolerance} itself imports only the JDK, Jackson and {@code io}, so no
+ * Of {@code tolerance} a case uses the two vocabulary types it carries ({@code Units},
+ * {@code DrawingStyle}) and {@code CalloutParser}, to refuse a mistyped tolerance where it is read; {@code tolerance} itself imports only the JDK, Jackson and {@code io}, so no
  * cycle can form. Must not import Swing/AWT or print.
  */
 package org.arcwright.model;

@@ -2,11 +2,6 @@ package org.arcwright.notes;
 
 import java.io.IOException;
 import java.io.InterruptedIOException;
-import java.io.UncheckedIOException;
-import java.nio.ByteBuffer;
-import java.nio.charset.CharacterCodingException;
-import java.nio.charset.CodingErrorAction;
-import java.nio.charset.StandardCharsets;
 import java.nio.file.Files;
 import java.nio.file.NoSuchFileException;
 import java.nio.file.Path;
@@ -366,24 +361,11 @@ final class NoteSync {
     }
 
     private static String decode(byte[] bytes, Path file) {
-        try {
-            return StandardCharsets.UTF_8.newDecoder()
-                    .onMalformedInput(CodingErrorAction.REPORT)
-                    .onUnmappableCharacter(CodingErrorAction.REPORT)
-                    .decode(ByteBuffer.wrap(bytes)).toString();
-        } catch (CharacterCodingException e) {
-            throw new InputProblem(file.toString(), 0, 0, null, "not UTF-8 text (a truncated or binary file?)");
-        }
+        return InputFiles.decode(bytes, file);
     }
 
     /** The text of a note file, UTF-8 checked; a missing or undecodable file is an {@link InputProblem}. */
     static String readNoteText(Path file) {
-        try {
-            return decode(Files.readAllBytes(file), file);
-        } catch (NoSuchFileException e) {
-            throw new InputProblem(file.toString(), 0, 0, null, "file not found");
-        } catch (IOException e) {
-            throw new UncheckedIOException("could not read " + file + ": " + e.getMessage(), e);
-        }
+        return InputFiles.readText(file);
     }
 }

@@ -35,6 +35,12 @@ final class SheetProblems {
         if (c.units() != ws.units()) {
             out.add("units mixed: the feature is in " + c.units().symbol() + ", the part in " + ws.units().symbol());
         }
+        DesignCase.StressInputs st = c.stress();
+        if (st != null && c.nominalRadius() > st.stepHeight() + 1e-9) {
+            // the advisor's first warning for this case; a sheet must not hide it behind a suggestion
+            out.add("R" + DecimalText.exact(c.nominalRadius()) + " cannot be built as drawn: larger than the step h = (D − d)/2 = "
+                    + DecimalText.exact(st.stepHeight()) + " " + c.units().symbol() + " it blends into the shoulder");
+        }
         Recommendation r = f.chosen();
         if (r == null) {
             out.add("no control chosen");

@@ -21,6 +21,8 @@ import java.util.ArrayList;
 import java.util.Arrays;
 import java.util.List;
 import java.util.Map;
+import java.util.regex.Matcher;
+import java.util.regex.Pattern;
 import org.arcwright.io.InputProblem;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
@@ -69,13 +71,13 @@ public final class CaseTable {
                 try {
                     values = it.nextValue();
                 } catch (IOException | RuntimeException e) {
-                    throw new InputProblem(src, line, 0, null, "unreadable row: " + firstLine(e.getMessage()));
+                    throw new InputProblem(src, line, 0, null, "unreadable row: " + csvWords(firstLine(e.getMessage())));
                 }
                 if (header == null) {
                     header = (CsvSchema) it.getParserSchema();
                     checkHeader(src, header);
                 }
-                rows.add(row(src, line, values));
+                rows.add(row(src, line, values, header));
             }
         } catch (NoSuchFileException e) {
             throw new InputProblem(src, 0, 0, null, "file not found");
@@ -109,7 +111,7 @@ public final class CaseTable {
         }
     }
 
-    private static Row row(String src, int line, Map<String, String> v) {
+    private static Row row(String src, int line, Map<String, String> v, CsvSchema header) {
         String field = null;
         try {
             field = "feature";
@@ -152,7 +154,7 @@ public final class CaseTable {
                 String kt = text(v, "stress.targetKt");
                 field = "stress.targetKf";
                 String kf = text(v, "stress.targetKf");
-                field = "stress.shape";
+                field = "stress.D";
                 stress = new DesignCase.StressInputs(shape, load, bigD, smallD, strength, kt == null ? null : number(kt),
                         kf == null ? null : number(kf));
             }
@@ -175,10 +177,28 @@ public final class CaseTable {
                     process, stress, mating, text(v, "tolerance"), cornerAngle);
             return new Row(line, feature == null ? "line " + line : feature, c);
         } catch (InputProblem p) {
-            throw new InputProblem(src, line, 0, field, p.problem());
+            throw cell(src, line, header, p.field() != null && COLUMNS.contains(p.field()) ? p.field() : field, p.problem());
         } catch (IllegalArgumentException e) {
-            throw new InputProblem(src, line, 0, field, e.getMessage());
+            throw cell(src, line, header, field, e.getMessage());
         }
+    }
+
+    /**
+     * A bad cell, at its line and column. A message that starts with a column's name ("nominalRadius
+     * must be ...") names the column at fault, and is not repeated after it.
+     */
+    private static InputProblem cell(String src, int line, CsvSchema header, String field, String problem) {
+        String f = field;
+        String m = problem == null ? "not readable" : problem;
+        for (String name : COLUMNS) {
+            if (m.startsWith(name + " ")) {
+                f = name;
+                m = m.substring(name.length() + 1);
+                break;
+            }
+        }
+        CsvSchema.Column c = f == null ? null : header.column(f);
+        return new InputProblem(src, line, c == null ? 0 : c.getIndex() + 1, f, m);
     }
 
     private static String text(Map<String, String> v, String key) {
@@ -207,6 +227,20 @@ public final class CaseTable {
             case "false", "no", "n", "0" -> false;
             default -> throw new IllegalArgumentException("expected true or false, got '" + s + "'");
         };
+    }
+
+    private static final Pattern AFTER_QUOTE = Pattern.compile("^Unexpected character \\('(.{1,2})'\\): Expected column separator");
+    private static final Pattern TOO_MANY = Pattern.compile("^Too many entries: expected at most (\\d+)");
+
+    /** The CSV reader's message in the user's terms: no character codes, no reader vocabulary. */
+    private static String csvWords(String m) {
+        String w = m.replaceAll(" \\(code \\d+\\)", "");
+        Matcher ch = AFTER_QUOTE.matcher(w);
+        if (ch.find()) return "unexpected '" + ch.group(1) + "' after a quoted value; a comma or the end of the line should follow it";
+        Matcher many = TOO_MANY.matcher(w);
+        if (many.find()) return "more cells than the header has columns (" + many.group(1) + ")";
+        if (w.startsWith("Missing closing quote")) return "a quoted value is not closed (a missing \")";
+        return w;
     }
 
     private static String firstLine(String s) {

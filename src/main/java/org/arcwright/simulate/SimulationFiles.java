@@ -9,6 +9,7 @@ import java.util.Objects;
 import java.util.function.Supplier;
 import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionFiles;
+import org.arcwright.io.InputFiles;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
 import org.arcwright.tolerance.Units;
@@ -50,12 +51,17 @@ public final class SimulationFiles {
 
     /** Reads a process file. */
     public Simulation read(Path file) {
-        return toSimulation(json.read(file, FileDto.class), file.toString());
+        return parse(InputFiles.readText(file), file.toString());
     }
 
     /** Parses process-file text, attributing errors to {@code source}. */
     public Simulation parse(String text, String source) {
-        return toSimulation(json.parse(text, source, FileDto.class), source);
+        FileDto dto = json.parse(text, source, FileDto.class);
+        try {
+            return toSimulation(dto, source);
+        } catch (InputProblem p) {
+            throw JsonFiles.locate(p, text);
+        }
     }
 
     private static Simulation toSimulation(FileDto d, String source) {

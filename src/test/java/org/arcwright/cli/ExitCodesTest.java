@@ -19,8 +19,9 @@ import org.junit.jupiter.api.io.TempDir;
 import picocli.CommandLine;
 
 /**
- * The exit codes, as the README states them once: 0 done or pass, 1 fail, 2 bad input or usage, 70
- * internal error. Held here command by command, on the invented examples shipped in {@code examples/}.
+ * The exit codes, as the README states them once: 0 done or pass, 1 fail, 2 bad input or usage, 3
+ * indeterminate ({@code inspect} only), 70 internal error. Held here command by command, on the
+ * invented examples shipped in {@code examples/}.
  */
 class ExitCodesTest {
     @TempDir
@@ -54,6 +55,12 @@ class ExitCodesTest {
                 .replace("\"shoulderHeight\": 3.0", "\"shoulderHeight\": 4.0")).toString();
         String part = ex("tarnbeck-output-shaft-decided.arcpart");
         String callout = ex("callout-composite.json");
+        String table = Files.readString(Path.of(ex("advisor/tarnbeck-output-shaft.csv")));
+        String dupUnits = write("dup-units.csv", table.replaceFirst("feature,units,", "feature,units,units,")).toString();
+        Path failingPack = Files.createDirectories(dir.resolve("failing-pack").resolve("rules"));
+        write("failing-pack/pack.json", "{\"name\": \"Exit code pack (invented)\", \"version\": \"1\"}");
+        write("failing-pack/rules/null.json", "null");
+        failingPack = failingPack.getParent();
         Path note = write("note.md", "---\nid: exit-code-note\ntitle: An exit code note\ntags: [test]\n---\nBody text.\n");
         List<Case> cases = new ArrayList<>(List.of(
                 new Case(Cli.OK, "--help"),
@@ -88,7 +95,20 @@ class ExitCodesTest {
                 new Case(Cli.BAD_INPUT, "sheet", bad, "--out", dir.resolve("sheet2.md").toString(), "--no-settings"),
                 new Case(Cli.OK, "notes", "add", note.toString(), "--index-cache", notes, "--personal", personal),
                 new Case(Cli.OK, "notes", "search", "fillet", "--index-cache", notes, "--personal", personal),
-                new Case(Cli.BAD_INPUT, "notes", "add", bad, "--index-cache", notes, "--personal", personal)));
+                new Case(Cli.BAD_INPUT, "notes", "add", bad, "--index-cache", notes, "--personal", personal),
+                new Case(Cli.OK, "notes", "show", "profile-with-datums", "--index-cache", notes, "--personal", personal),
+                new Case(Cli.BAD_INPUT, "notes", "show", "no-such-note", "--index-cache", notes, "--personal", personal),
+                new Case(Cli.OK, "notes", "reindex", "--index-cache", notes, "--personal", personal),
+                new Case(Cli.BAD_INPUT, "notes", "search", "fillet", "--limit", "many", "--index-cache", notes,
+                        "--personal", personal),
+                new Case(Cli.BAD_INPUT, "general-tolerance", "--class", "q", "--radius", "4"),
+                new Case(Cli.OK, "advise", "--batch", ex("advisor/tarnbeck-output-shaft.csv"), "--no-notes", "--no-settings"),
+                new Case(Cli.BAD_INPUT, "advise", "--batch", dupUnits, "--no-notes", "--no-settings"),
+                new Case(Cli.FAIL, "pack", "check", failingPack.toString(), "--no-settings"),
+                new Case(Cli.OK, "simulate", ex("simulate/pump-bracket.json"), "--parts", "20", "--points", "50"),
+                new Case(Cli.BAD_INPUT, "simulate", bad),
+                new Case(Cli.OK, "limits", "--help"),
+                new Case(Cli.BAD_INPUT, "limits", "R3 +0.2/31")));
         return cases.stream().map(c -> DynamicTest.dynamicTest(String.join(" ", c.args()), () -> {
             CliRun r = CliRun.of(c.args());
             assertThat(r.exitCode()).as(r.out() + r.err()).isEqualTo(c.code());
@@ -127,5 +147,15 @@ class ExitCodesTest {
         CliRun r = runWithCrash("crash", "--debug");
         assertThat(r.exitCode()).isEqualTo(Cli.INTERNAL_ERROR);
         assertThat(r.err()).contains("IllegalStateException", "a fault in the code", "\tat ");
+    }
+
+    @Test
+    void theReadmeAndTheHelpStateTheSameCodesAsTheCode() throws IOException {
+        String readme = Files.readString(Path.of("README.md"));
+        String help = CliRun.of("--help").out().replaceAll("\\s+", " ");
+        for (int code : new int[] {Cli.OK, Cli.FAIL, Cli.BAD_INPUT, Cli.INDETERMINATE, Cli.INTERNAL_ERROR}) {
+            assertThat(readme).contains("| " + code + " | ");
+            assertThat(help).contains(" " + code + " ");
+        }
     }
 }

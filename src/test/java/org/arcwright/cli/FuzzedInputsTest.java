@@ -56,7 +56,9 @@ class FuzzedInputsTest {
             new Format("inspect", "examples/inspect/bracket-round-composite.json", ".json", List.of("--format", "json")),
             new Format("advise", "examples/advisor/gear-seat-shoulder.json", ".json", List.of("--no-notes", "--no-settings")),
             new Format("render", "examples/callout-composite.json", ".json", List.of()),
-            new Format("drawing-note", "examples/tarnbeck-output-shaft-decided.arcpart", ".arcpart", List.of("--no-settings")));
+            new Format("drawing-note", "examples/tarnbeck-output-shaft-decided.arcpart", ".arcpart", List.of("--no-settings")),
+            new Format("simulate", "examples/simulate/pump-bracket.json", ".json",
+                    List.of("--parts", "20", "--points", "40", "--threads", "1", "--format", "json")));
 
     @BeforeContainer
     static void makeFolder() throws IOException {
@@ -77,7 +79,7 @@ class FuzzedInputsTest {
     Arbitrary<Mutation> mutations() {
         Arbitrary<String> raws = Arbitraries.of("", "\"\"", "\" \"", "null", "\"abc\"", "NaN", "-1", "0", "1e308",
                 "-0.0", "1e-300", "[]", "{}", "true", "\"1.5f\"", "\"0x1p1\"", "[null]", "{\"x\": 1}", "\"\\u0000\"",
-                "\"" + "9".repeat(400) + "\"");
+                "\"" + "9".repeat(400) + "\"", "1e999", "-1e999");
         return Combinators.combine(Arbitraries.integers().between(0, FORMATS.size() - 1),
                 Arbitraries.integers().between(0, 10_000), Arbitraries.integers().between(0, 5),
                 Arbitraries.integers().between(0, 1_000_000), raws).as(Mutation::new);
@@ -114,6 +116,35 @@ class FuzzedInputsTest {
         Files.writeString(pack.resolve("rules").resolve("fuzzed.json"), mutate(rules, m));
         CliRun check = CliRun.of("pack", "check", pack.toString(), "--no-settings");
         assertClean(check, "pack check");
+    }
+
+    /** The CSV formats: an advise --batch table and a measured section's points file. */
+    @Property(tries = 40, seed = "20261205")
+    void tablesNeverCrash(@ForAll("mutations") Mutation m) throws IOException {
+        String table = Files.readString(Path.of("examples/advisor/tarnbeck-output-shaft.csv"));
+        Path t = Files.writeString(dir.resolve("fuzzed-table.csv"), mutateCsv(table, m));
+        CliRun batch = CliRun.of("advise", "--batch", t.toString(), "--no-notes", "--no-settings", "--format", "csv");
+        assertClean(batch, "table");
+        if (batch.exitCode() == Cli.BAD_INPUT) assertThat(batch.err()).contains("fuzzed-table.csv");
+        String points = Files.readString(Path.of("examples/inspect/housing-fillet-section.csv"));
+        Path csv = Files.writeString(dir.resolve("fuzzed-points.csv"), mutateCsv(points, m));
+        JsonNode section = JSON.readTree(Files.readString(Path.of("examples/inspect/housing-fillet-profile.json")));
+        ((ObjectNode) section).put("pointsFile", csv.toString());
+        Path f = Files.writeString(dir.resolve("fuzzed-section.json"), section.toString());
+        CliRun r = CliRun.of("inspect", f.toString(), "--format", "json");
+        assertClean(r, "points");
+        if (r.exitCode() != Cli.BAD_INPUT) verdictAgreesWithWorstPoint(r);
+    }
+
+    /** Cut, spliced, or one cell replaced (or emptied) among the first lines. */
+    private static String mutateCsv(String text, Mutation m) {
+        if (m.kind() < 2) return mutate(text, m);
+        String[] lines = text.split("\n", -1);
+        int line = m.target() % Math.min(lines.length, 12);
+        String[] cells = lines[line].split(",", -1);
+        cells[m.position() % cells.length] = m.kind() == 2 ? "" : m.raw().replace(",", ";");
+        lines[line] = String.join(",", cells);
+        return String.join("\n", lines);
     }
 
     @Provide

@@ -75,7 +75,7 @@ class HostileInputTest {
     @Test
     void renderWithNullUnitsNamesTheField() throws Exception {
         Path f = file("callout.json", "{\"units\": null, \"standard\": \"asme\", \"callout\": {\"type\": \"profile\", \"zone\": 0.1}}");
-        badInput(CliRun.of("render", f.toString()), "callout.json:1:", "units is null");
+        badInput(CliRun.of("render", f.toString()), "callout.json:1:11: units: is null");
     }
 
     @Test
@@ -86,11 +86,11 @@ class HostileInputTest {
         int text = ws.indexOf("\"text\"", callout);
         Path noCallout = file("no-callout.arcpart", ws.substring(0, callout) + ws.substring(text));
         badInput(CliRun.of("sheet", noCallout.toString(), "--out", dir.resolve("s.md").toString(), "--no-settings",
-                "--no-suggest"), "no-callout.arcpart:", "features[0].chosen", "callout is missing");
-        badInput(CliRun.of("drawing-note", "callout-note", noCallout.toString(), "--no-settings"), "callout is missing");
+                "--no-suggest"), "no-callout.arcpart:", "features[0].chosen.callout: is missing");
+        badInput(CliRun.of("drawing-note", "callout-note", noCallout.toString(), "--no-settings"), "callout: is missing");
         Path noTitle = file("no-title.arcpart", ws.replaceFirst("\"title\": \"[^\"]*\",", ""));
         badInput(CliRun.of("sheet", noTitle.toString(), "--out", dir.resolve("s.md").toString(), "--no-settings",
-                "--no-suggest"), "no-title.arcpart:", "notes[0]", "title is missing");
+                "--no-suggest"), "no-title.arcpart:", "notes[0].title: is missing");
     }
 
     @Test
@@ -169,7 +169,7 @@ class HostileInputTest {
             Files.writeString(pack.resolve("rules").resolve("always.json"), rule.formatted(when));
             CliRun r = CliRun.of("pack", "check", pack.toString(), "--no-settings");
             assertThat(r.exitCode()).as(r.out() + r.err()).isEqualTo(Cli.FAIL);
-            assertThat(r.out()).contains("always.json:", "when is missing or null", "\"when\": {}");
+            assertThat(r.out()).contains("always.json:", "when: is missing or null", "\"when\": {}");
         }
         Files.writeString(pack.resolve("rules").resolve("always.json"), rule.formatted("\"when\": {},"));
         CliRun ok = CliRun.of("pack", "check", pack.toString(), "--no-settings");
@@ -273,5 +273,189 @@ class HostileInputTest {
                 """);
         assertThat(CliRun.of("clearance", bare.toString()).out()).contains("not checked: no shoulderHeight given");
         assertThat(CliRun.of("clearance", bare.toString(), "--format", "json").out()).contains("\"notChecked\"");
+    }
+
+    @Test
+    void checksMadeAfterReadingNameTheLineAndColumnOfTheirField() throws Exception {
+        String section = """
+                {"units": "mm",
+                 "corner": {"vertex": [0, 0], "legA": [1, 0], "legB": [0, 1], "kind": "round"},
+                 "nominalRadius": %s,
+                 "callout": {"type": "radius", "min": 1.95, "max": 2.0},
+                 "resolution": %s,
+                 "points": [[4, 0], [2.586, 0.586], [2, 2], [0.586, 2.586], [0, 4]]}
+                """;
+        // the record's own checks (resolution against the band, nominal against the limits) were located
+        // at the file only, never at a line
+        badInput(CliRun.of("inspect", file("wide.json", section.formatted("2.0", "10")).toString()),
+                "wide.json:5:16: resolution: is 10 mm, more than a tenth of the tolerance");
+        badInput(CliRun.of("inspect", file("nominal.json", section.formatted("5", "0.001")).toString()),
+                "nominal.json:3:19: nominalRadius: is 5 mm, 3 mm outside the callout's limits");
+        Path process = file("process.json", Files.readString(Path.of(example("simulate/pump-bracket.json")))
+                .replace("\"noise\": 0.001", "\"noise\": -1"));
+        badInput(CliRun.of("simulate", process.toString(), "--parts", "10"), "process.json:9:14: process.noise: must be zero or more");
+        Path corner = file("no-mating.json", "{\"units\": \"mm\",\n \"fillet\": {\"rMin\": 0.8, \"rMax\": 1.2}}\n");
+        badInput(CliRun.of("clearance", corner.toString()), "no-mating.json:1:1: mating: missing");
+        Path huge = file("huge.json", Files.readString(Path.of(example("mechanics/drive-shaft-fillet.json")))
+                .replace("\"D\": 38", "\"D\": 1e999"));
+        badInput(CliRun.of("fillet-stress", huge.toString()), "huge.json:6:8: D: the number 1e999 is too large");
+    }
+
+    @Test
+    void aDeviceOrAFolderGivenAsANoteIsRefusedAtOnce() throws Exception {
+        Assumptions.assumeTrue(Files.exists(Path.of("/dev/zero")));
+        String cache = dir.resolve("cache").toString();
+        String personal = dir.resolve("personal").toString();
+        // before: read whole, /dev/zero ran the heap out (exit 70 after seconds)
+        badInput(CliRun.of("notes", "add", "/dev/zero", "--index-cache", cache, "--personal", personal),
+                "/dev/zero", "not a regular file");
+        badInput(CliRun.of("notes", "add", dir.toString(), "--index-cache", cache, "--personal", personal),
+                "is a folder, not a file");
+    }
+
+    @Test
+    void aNoteSavedWithAByteOrderMarkIsAdded() throws Exception {
+        Path note = dir.resolve("bom-note.md");
+        Files.write(note, ("\uFEFF---\nid: bom-note\ntitle: A note saved with a byte-order mark\ntags: [test]\n---\nBody.\n")
+                .getBytes(java.nio.charset.StandardCharsets.UTF_8));
+        CliRun r = CliRun.of("notes", "add", note.toString(), "--index-cache", dir.resolve("cache").toString(),
+                "--personal", dir.resolve("personal").toString());
+        assertThat(r.exitCode()).as(r.err()).isZero();
+        assertThat(r.out()).contains("bom-note");
+    }
+
+    @Test
+    void aProcessFileOfJustNullIsLocatedToo() throws Exception {
+        Path f = file("null-process.json", "null");
+        badInput(CliRun.of("simulate", f.toString()), "null-process.json:1:1", "null");
+    }
+
+    @Test
+    void anExplicitNullForAnOptionalNumberMeansNotGivenAndIsSaid() throws Exception {
+        // decided: null is "not given" (saved worksheets write null for an absent value); the check it
+        // would switch on is said not to be made, and "" stays an error
+        Path shaft = file("null-target.json", """
+                {"units": "mm", "shape": "stepped-shaft", "load": "bending", "D": 38, "d": 32, "rMin": 0.8, "rMax": 1.2,
+                 "ultimateStrength": {"value": 690, "units": "MPa"}, "targetKf": null}
+                """);
+        CliRun r = CliRun.of("fillet-stress", shaft.toString());
+        assertThat(r.exitCode()).isZero();
+        assertThat(r.out()).contains("not checked: no targetKt or targetKf given");
+        Path corner = file("null-support.json", """
+                {"units": "mm", "fillet": {"rMin": 0.8, "rMax": 1.0}, "mating": {"type": "bearing", "chamferMin": 1.1},
+                 "shoulderHeight": 3.0, "requiredSupport": null}
+                """);
+        assertThat(CliRun.of("clearance", corner.toString()).out()).contains("not judged: no requiredSupport given");
+    }
+
+    @Test
+    void packCheckReportsATemplateThatWouldBreakEverySheet() throws Exception {
+        Path pack = Files.createDirectories(dir.resolve("template-pack"));
+        Files.writeString(pack.resolve("pack.json"), "{\"name\": \"Template test pack\", \"version\": \"1\"}");
+        Path templates = Files.createDirectories(pack.resolve("templates"));
+        Files.writeString(templates.resolve("deep.mustache"), "{{#part}}".repeat(5000) + "x" + "{{/part}}".repeat(5000));
+        Files.writeString(templates.resolve("fine.mustache"), "PART {{part.number}}\n");
+        Path secret = file("id_demo_key", "PRIVATE-KEY-OF-A-DEMO-USER");
+        Files.createSymbolicLink(templates.resolve("leak.mustache"), secret);
+        // before: PASS, exit 0, and then every sheet and drawing note with this pack was refused
+        CliRun r = CliRun.of("pack", "check", pack.toString(), "--no-settings");
+        assertThat(r.exitCode()).as(r.out() + r.err()).isEqualTo(Cli.FAIL);
+        assertThat(r.out()).contains("deep.mustache:1:", "nested more than 24 deep", "leak.mustache", "outside its pack's folder",
+                "FAIL: 2 problem(s)").doesNotContain("fine.mustache", "PRIVATE-KEY");
+        CliRun json = CliRun.of("pack", "check", pack.toString(), "--no-settings", "--format", "json");
+        assertThat(json.out()).contains("\"passed\" : false", "deep.mustache");
+    }
+
+    @Test
+    void aSheetSaysAFilletLargerThanItsStepCannotBeBuiltAsDrawn() throws Exception {
+        // F1's shoulder steps from Ø42 to Ø35: h = (D - d)/2 = 3.5 mm, so R5 cannot meet the shoulder face
+        // (common practice: a fillet no larger than the step it blends)
+        String ws = Files.readString(Path.of(example("tarnbeck-output-shaft.arcpart")))
+                .replaceFirst("\"nominalRadius\": 2.0", "\"nominalRadius\": 5.0").replaceFirst("R2 ±0.2", "R5 ±0.2");
+        Path part = file("too-big.arcpart", ws);
+        Path out = dir.resolve("too-big.md");
+        // before: the sheet listed only "no control chosen" and suggested a demoted card, without a word
+        // about the drawing (advise says "R5 cannot be built as drawn" first)
+        CliRun r = CliRun.of("sheet", part.toString(), "--out", out.toString(), "--no-settings");
+        assertThat(r.exitCode()).as(r.err()).isZero();
+        assertThat(Files.readString(out)).contains("R5 cannot be built as drawn", "h = (D − d)/2 = 3.5 mm");
+        Path table = dir.resolve("too-big.csv");
+        Files.writeString(table, Files.readString(Path.of(example("advisor/tarnbeck-output-shaft.csv")))
+                .replaceFirst(",2.0,stress-relief", ",5.0,stress-relief").replaceFirst("R2 ±0.2", "R5 ±0.2"));
+        CliRun batch = CliRun.of("advise", "--batch", table.toString(), "--no-notes", "--no-settings");
+        assertThat(batch.exitCode()).as(batch.err()).isZero();
+        assertThat(batch.out()).contains("R5 cannot be built as drawn", "== F2");
+    }
+
+    @Test
+    void aBadCellOfABatchTableNamesItsLineAndColumn() throws Exception {
+        String table = Files.readString(Path.of(example("advisor/tarnbeck-output-shaft.csv")));
+        String[] lines = table.split("\n", -1);
+        lines[2] = lines[2].replaceFirst(",0.8,", ",-0.8,");
+        Path f = file("negative.csv", String.join("\n", lines));
+        // before: "negative.csv:3: nominalRadius: nominalRadius must be ..." (no column, the field said twice)
+        badInput(CliRun.of("advise", "--batch", f.toString(), "--no-notes", "--no-settings"),
+                "negative.csv:3:5: nominalRadius: must be a number greater than zero, got -0.8");
+        lines = table.split("\n", -1);
+        lines[1] = lines[1].replaceFirst(",42,35,", ",30,35,");
+        Path g = file("step.csv", String.join("\n", lines));
+        badInput(CliRun.of("advise", "--batch", g.toString(), "--no-notes", "--no-settings"), "step.csv:2:15: stress.D: need D > d > 0");
+        // the CSV reader's own words carried character codes and its terms
+        lines = table.split("\n", -1);
+        lines[2] = "\"F2\"x" + lines[2].substring(lines[2].indexOf(','));
+        CliRun quote = CliRun.of("advise", "--batch", file("quote.csv", String.join("\n", lines)).toString(), "--no-notes",
+                "--no-settings");
+        badInput(quote, "quote.csv:3:", "unexpected 'x' after a quoted value");
+        assertThat(quote.err()).doesNotContain("(code ");
+        lines = table.split("\n", -1);
+        lines[2] = lines[2] + ",extra,cells";
+        badInput(CliRun.of("advise", "--batch", file("extra.csv", String.join("\n", lines)).toString(), "--no-notes",
+                "--no-settings"), "extra.csv:3:", "more cells than the header has columns (20)");
+    }
+
+    @Test
+    void aTypoInACasesToleranceIsLocatedInTheFileThatHoldsIt() throws Exception {
+        // found by the fuzz suite: the tolerance was read only when the advisor sized the card, and the
+        // refusal named neither file nor line ("arcwright advise: tolerance: F1 ....callout: ...")
+        Path json = file("typo-case.json", Files.readString(Path.of(example("advisor/gear-seat-shoulder.json")))
+                .replace("\"R2 ±0.2\"", "\"R2 +0.2/31\""));
+        badInput(CliRun.of("advise", json.toString(), "--no-notes", "--no-settings"), "typo-case.json:15:16: tolerance:",
+                "no sign");
+        Path csv = file("typo-table.csv", Files.readString(Path.of(example("advisor/tarnbeck-output-shaft.csv")))
+                .replaceFirst("R2 ±0.2", "Q2"));
+        badInput(CliRun.of("advise", "--batch", csv.toString(), "--no-notes", "--no-settings"), "typo-table.csv:2:12: tolerance:");
+        Path part = file("typo.arcpart", Files.readString(Path.of(example("tarnbeck-output-shaft.arcpart")))
+                .replaceFirst("R2 ±0.2", "Q2"));
+        badInput(CliRun.of("sheet", part.toString(), "--out", dir.resolve("typo.md").toString(), "--no-settings"),
+                "typo.arcpart:", "features[0].case.tolerance:");
+    }
+
+    @Test
+    void aByteOrderMarkIsAcceptedInEveryFileTheCommandsRead() throws Exception {
+        // as a spreadsheet's "CSV UTF-8" export writes it, and some editors before JSON (common practice)
+        byte[] bom = {(byte) 0xEF, (byte) 0xBB, (byte) 0xBF};
+        Path table = dir.resolve("bom-table.csv");
+        Files.write(table, concat(bom, Files.readAllBytes(Path.of(example("advisor/tarnbeck-output-shaft.csv")))));
+        CliRun batch = CliRun.of("advise", "--batch", table.toString(), "--no-notes", "--no-settings");
+        assertThat(batch.exitCode()).as(batch.err()).isZero();
+        assertThat(batch.out()).contains("== F1 gear seat shoulder");
+        Path points = dir.resolve("housing-fillet-section.csv");
+        Files.write(points, concat(bom, Files.readAllBytes(Path.of(example("inspect/housing-fillet-section.csv")))));
+        Path section = dir.resolve("section.json");
+        Files.write(section, concat(bom, Files.readAllBytes(Path.of(example("inspect/housing-fillet-profile.json")))));
+        CliRun inspect = CliRun.of("inspect", section.toString());
+        assertThat(inspect.exitCode()).as(inspect.err()).isIn(Cli.OK, Cli.FAIL);
+        assertThat(inspect.out()).contains("profile");
+        Path part = dir.resolve("bom.arcpart");
+        Files.write(part, concat(bom, Files.readAllBytes(Path.of(example("tarnbeck-output-shaft-decided.arcpart")))));
+        CliRun sheet = CliRun.of("sheet", part.toString(), "--out", dir.resolve("bom.md").toString(), "--no-settings",
+                "--no-suggest");
+        assertThat(sheet.exitCode()).as(sheet.err()).isZero();
+    }
+
+    private static byte[] concat(byte[] a, byte[] b) {
+        byte[] out = java.util.Arrays.copyOf(a, a.length + b.length);
+        System.arraycopy(b, 0, out, a.length, b.length);
+        return out;
     }
 }

@@ -223,7 +223,7 @@ class RuleNeedsTest {
             an unknown need           | "needs": [{"id": "radius-flor", "min": 1, "units": "mm", "why": "w", "source": "s"}]         | radius-flor
             a need without source     | "needs": [{"id": "form", "why": "w"}]                                                        | source
             nothing to do             | "cautions": ["c"]                                                                            | must recommend a control
-            a preference, no weight   | "prefer": ["profile"]                                                                        | weight is required
+            a preference, no weight   | "prefer": ["profile"]                                                                        | weight: is required
             an unknown preference     | "prefer": ["profil"], "weight": 5                                                            | profil
             """)
     void aBadNeedOrPreferenceIsALocatedProblem(String name, String fields, String says) throws Exception {

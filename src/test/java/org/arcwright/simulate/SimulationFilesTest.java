@@ -59,8 +59,9 @@ class SimulationFilesTest {
                     InputProblem p = (InputProblem) e;
                     assertThat(p.source()).isEqualTo("part.json");
                     assertThat(p.line()).isEqualTo(6);
-                    assertThat(p.field()).isEqualTo("process.radius");
-                    assertThat(p.problem()).contains("sd").contains("-0.05");
+                    // the value itself, not only its object
+                    assertThat(p.field()).isEqualTo("process.radius.sd");
+                    assertThat(p.problem()).contains("-0.05");
                 });
     }
 

@@ -52,6 +52,6 @@ class WorksheetFilesTest {
                 .isInstanceOf(InputProblem.class)
                 .hasMessageContaining("bad.arcpart:")
                 .hasMessageContaining("features[0].case")
-                .hasMessageContaining("nominalRadius must be a number greater than zero");
+                .hasMessageContaining("nominalRadius: must be a number greater than zero");
     }
 }
