@@ -53,7 +53,12 @@ public final class Figures {
             new Known("targetKf", "largest acceptable Kf", Kind.FACTOR),
             new Known("minRadiusForTarget", "smallest radius meeting the target", Kind.LENGTH),
             new Known("seats", "mating part seats", Kind.TEXT),
-            new Known("largestSeatingRadius", "largest fillet that still seats", Kind.LENGTH));
+            new Known("largestSeatingRadius", "largest fillet that still seats", Kind.LENGTH),
+            new Known("callout", "callout judged", Kind.TEXT),
+            new Known("worst", "worst finding", Kind.TEXT),
+            new Known("smallestRadius", "smallest radius the points meet", Kind.LENGTH),
+            new Known("largestRadius", "largest radius the points meet", Kind.LENGTH),
+            new Known("uncertainty", "measurement uncertainty U", Kind.LENGTH));
 
     /** Keys that are context, not figures: left out of the list. */
     private static final Set<String> SKIPPED = Set.of("units");

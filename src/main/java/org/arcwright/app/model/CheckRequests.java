@@ -17,6 +17,7 @@ import org.arcwright.inspect.InspectionCallout;
 import org.arcwright.inspect.InspectionFiles;
 import org.arcwright.inspect.InspectionRequest;
 import org.arcwright.inspect.InspectionResult;
+import org.arcwright.inspect.Inspector;
 import org.arcwright.inspect.Nominal;
 import org.arcwright.inspect.PointSet;
 import org.arcwright.inspect.PointsCsv;
@@ -224,8 +225,8 @@ public final class CheckRequests {
         figures.put("callout", r.request().callout().describe());
         figures.put("units", r.request().units().symbol());
         if (r.worst() != null) {
-            figures.put("worstExcess", round(r.worst().excess()));
-            figures.put("worstMeasure", r.worst().measure());
+            // the finding in words with its unit and what it measures: a bare excess read as a length it is not
+            figures.put("worst", Inspector.worstLabel(r));
         }
         if (r.radius() != null) {
             figures.put("smallestRadius", round(r.radius().smallest()));

@@ -71,6 +71,9 @@ class CheckBindingTest {
         assertThat(r.request().callout().describe()).isEqualTo("CR 1.8-2.2");
         InspectionRecord rec = CheckRequests.record(r, HOUSING.toString(), LocalDate.of(2026, 12, 5));
         assertThat(rec.figures()).containsEntry("callout", "CR 1.8-2.2").containsEntry("units", "mm");
+        // the worst finding is kept in words, with its unit and what it measures, never as a bare excess
+        assertThat(rec.figures()).doesNotContainKeys("worstExcess", "worstMeasure");
+        assertThat(String.valueOf(rec.figures().get("worst"))).startsWith("worst #").contains(" mm");
     }
 
     @Test
