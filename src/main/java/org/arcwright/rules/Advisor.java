@@ -267,7 +267,8 @@ public final class Advisor {
         double score = demoted ? rule.weight() * DEMOTED_SCORE_FACTOR : rule.weight();
         List<NoteLink> linked = rule.noteTags().isEmpty() ? List.of()
                 : notes.related(rule.noteTags(), rule.summary(), NOTES_PER_RECOMMENDATION);
-        return finish(rule.id(), d, datums, needs, score, rule.because(), cautions, rule.references(), trace, linked,
+        Sizer.Citations cited = sizer.citations(d, rule.because(), rule.references());
+        return finish(rule.id(), d, datums, needs, score, cited.because(), cautions, cited.references(), trace, linked,
                 demoted);
     }
 

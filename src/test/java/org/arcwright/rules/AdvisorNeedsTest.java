@@ -276,6 +276,31 @@ class AdvisorNeedsTest {
                 if (first.callout() instanceof Callout.General g) {
                     assertThat(g.table()).doesNotStartWith("iso2768");
                 }
+                // Nor in its words: before, the first card of a cast fillet said "the general tolerance of ISO 2768-1
+                // covers it" and cited "ISO 2768-1:1989: Table 2, broken edges" above a caution that it does not.
+                String what = p + " " + k;
+                assertThat(first.because()).as(what).noneMatch(b -> b.contains("ISO 2768"));
+                assertThat(first.references()).as(what).noneMatch(r -> r.startsWith("ISO 2768"));
+                if (first.callout() instanceof Callout.General) {
+                    assertThat(first.references()).as(what).anyMatch(r -> r.contains(p == Process.CAST ? "ISO 8062-3" : "ISO 20457"));
+                }
+            }
+        }
+    }
+
+    @Test
+    void aGeneralToleranceCardCitesTheIso2768TableItReads() {
+        // ISO 2768-1:1989: an internal fillet radius is a linear size (Table 1), an external radius a broken edge
+        // (Table 2). Before: the card for a fillet read Table 1 and cited "Table 2, broken edges".
+        for (BlendKind k : BlendKind.values()) {
+            DesignCase c = new DesignCase(Units.MM, DrawingStyle.ISO, null, k, 4.0, BlendFunction.COSMETIC, Loading.NONE,
+                    false, false, List.of(), Process.MACHINED, null, null, null);
+            for (Recommendation r : real.advise(c).recommendations()) {
+                if (!(r.callout() instanceof Callout.General)) continue;
+                String table = k == BlendKind.FILLET ? "Table 1" : "Table 2";
+                String other = k == BlendKind.FILLET ? "Table 2" : "Table 1";
+                assertThat(r.references()).as(k + " " + r.ruleId()).anyMatch(ref -> ref.startsWith("ISO 2768-1") && ref.contains(table))
+                        .noneMatch(ref -> ref.startsWith("ISO 2768-1") && ref.contains(other));
             }
         }
     }
