@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.IntFunction;
+import org.arcwright.callout.CalloutFormatter;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
@@ -106,7 +107,8 @@ final class AdviceOutput {
             Recommendation r = recs.get(i);
             out.println();
             out.printf("%d. %s%n", i + 1, r.text());
-            out.printf("   %s, score %s%s%s, rule %s%n", r.callout().typeName(), DecimalText.significant(r.score(), 4),
+            out.printf("   %s, score %s%s%s, rule %s%n", CalloutFormatter.controlName(r.callout(), c.standard()),
+                    DecimalText.significant(r.score(), 4),
                     r.demoted() ? " (DEMOTED)" : "", Boolean.FALSE.equals(r.meetsAll()) ? " (MISSES A NEED)" : "", r.ruleId());
             for (String b : r.because()) out.println("   because   " + b);
             out.println("   numbers   " + numbersLine(r.numbers().asMap()));

@@ -10,6 +10,7 @@ import org.arcwright.model.DesignCase;
 import org.arcwright.model.Process;
 import org.arcwright.rules.CalloutPlan.CalloutKind;
 import org.arcwright.tolerance.CalloutParser;
+import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.GeneralTolerance;
 import org.arcwright.tolerance.GeneralToleranceTable;
 import org.arcwright.tolerance.RadiusCallout;
@@ -184,6 +185,7 @@ final class Sizer {
      * unchanged when the draft was not sized from a title-block table.
      */
     Citations citations(Draft d, List<String> because, List<String> references) {
+        references = ownStandard(references, d.c.standard());
         if (d.generalTable == null) return new Citations(because, references);
         boolean iso = d.generalTable.startsWith("iso2768-1");
         String cite = switch (d.generalTable) {
@@ -208,6 +210,18 @@ final class Sizer {
                     + "tolerance (" + d.generalLabel + ")").replace("ISO 2768-1", d.generalLabel)).toList();
         }
         return new Citations(reasons, refs);
+    }
+
+    /**
+     * The references that apply to a drawing in {@code style}: a rule written for both standards cites how each one
+     * indicates a radius (ISO 129-1 / ISO 1101, ASME Y14.5); the other standard's drawing rules are left out. A
+     * reference naming both, or a general standard (ISO 2768-1, ISO 13715, a handbook), stays.
+     */
+    static List<String> ownStandard(List<String> references, DrawingStyle style) {
+        List<String> other = style == DrawingStyle.ASME ? List.of("ISO 129", "ISO 1101") : List.of("ASME Y14.5");
+        List<String> kept = references.stream().filter(r -> other.stream().noneMatch(r::startsWith)
+                || r.contains(style == DrawingStyle.ASME ? "ASME" : " ISO ")).toList();
+        return kept.isEmpty() ? references : kept;
     }
 
     /** A card's reasons and references. */
