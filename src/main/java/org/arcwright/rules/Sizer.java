@@ -60,7 +60,7 @@ final class Sizer {
 
     /** True when the process is one ISO 2768-1 covers (metal removal, sheet metal). */
     static boolean iso2768Covers(Process p) {
-        return p == Process.MACHINED || p == Process.SHEET_METAL;
+        return p.coveredByIso2768();
     }
 
     /**
