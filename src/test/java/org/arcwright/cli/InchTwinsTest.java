@@ -15,7 +15,8 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * An inch twin of a millimetre run for every command: the same part written in inches (1 in =
  * 25.4 mm exactly, ISO 31-1 / NIST SP 811) must give the same answer, reported in inches, with no
- * length read in the wrong unit. Clearance's twins live in {@link ClearanceCommandTest}.
+ * length read in the wrong unit. Clearance's twins live in {@link ClearanceCommandTest}; limits,
+ * general-tolerance, fillet-stress, inspect, render, drawing-note, sheet, advise and simulate are here.
  */
 class InchTwinsTest {
     private static final double MM = 25.4;
