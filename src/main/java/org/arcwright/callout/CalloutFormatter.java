@@ -77,7 +77,8 @@ public final class CalloutFormatter {
     // ---- the advisor's one-line text
 
     /**
-     * One profile frame on the advisor's line: {@code |⌓|zone[ modifier]|A|B|}, datums as {@code B(M)}, ASME's
+     * One profile frame on the advisor's line: {@code |⌓|zone[ modifier]|A|B|}, datums with their symbols ({@code BⓂ})
+     * as the zone cell has its own, ASME's
      * dynamic modifier as the word after the frame.
      *
      * @param outward the ASME unequally disposed value, or null for an equal-bilateral zone
@@ -85,7 +86,7 @@ public final class CalloutFormatter {
     public String frame(double zone, Double outward, List<DatumReference> datums, boolean dynamic) {
         StringBuilder sb = new StringBuilder("|").append(PROFILE).append('|')
                 .append(zoneCell(zone, outward, dynamic && style == DrawingStyle.ISO, true)).append('|');
-        for (DatumReference r : datums) sb.append(r.text()).append('|');
+        for (DatumReference r : datums) sb.append(datum(r, true)).append('|');
         if (dynamic && style == DrawingStyle.ASME) sb.append(" dynamic");
         return sb.toString();
     }

@@ -8,6 +8,7 @@ import java.util.List;
 import java.util.Locale;
 import java.util.Map;
 import java.util.function.IntFunction;
+import org.arcwright.callout.CalloutFormatter;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
 import org.arcwright.io.JsonFiles;
@@ -106,7 +107,8 @@ final class AdviceOutput {
             Recommendation r = recs.get(i);
             out.println();
             out.printf("%d. %s%n", i + 1, r.text());
-            out.printf("   %s, score %s%s%s, rule %s%n", r.callout().typeName(), DecimalText.significant(r.score(), 4),
+            out.printf("   %s, score %s%s%s, rule %s%n", CalloutFormatter.controlName(r.callout(), c.standard()),
+                    DecimalText.significant(r.score(), 4),
                     r.demoted() ? " (DEMOTED)" : "", Boolean.FALSE.equals(r.meetsAll()) ? " (MISSES A NEED)" : "", r.ruleId());
             for (String b : r.because()) out.println("   because   " + b);
             out.println("   numbers   " + numbersLine(r.numbers().asMap()));
@@ -157,18 +159,25 @@ final class AdviceOutput {
         int p = "in".equals(u) ? 4 : 3;
         append(sb, m.containsKey("zone") ? "radius range the zone admits" : "limits", num(m, "min", p) + " to "
                 + num(m, "max", p) + " " + u);
-        if (m.containsKey("zone")) append(sb, "zone", m.get("zone") + (m.containsKey("tierZones") ? " (tiers " + m.get("tierZones") + ")" : ""));
+        if (m.containsKey("zone")) append(sb, "zone", exact(m.get("zone")) + (m.get("tierZones") instanceof List<?> tiers
+                ? " (tiers " + String.join(", ", tiers.stream().map(AdviceOutput::exact).toList()) + ")" : ""));
         Object angle = m.get("angle");
         boolean square = angle instanceof Number n && n.doubleValue() == DesignCase.SQUARE_CORNER;
         append(sb, "crescent", num(m, "crescentWidth", p + 1)
                 + (angle == null || square ? "" : " at a " + DecimalText.significant(((Number) angle).doubleValue(), 4) + "° corner"));
-        append(sb, "equivalent profile zone", num(m, "equivalentProfileZone", p + 1));
+        append(sb, "equivalent profile zone", num(m, "equivalentProfileZone", p + 1)
+                + (m.get("nominal") instanceof Number n ? " about R" + DecimalText.exact(n.doubleValue()) : ""));
         if (m.containsKey("ktAtMin")) append(sb, "Kt at min/max", num(m, "ktAtMin", 2) + "/" + num(m, "ktAtMax", 2));
         if (m.containsKey("kfAtMin")) append(sb, "Kf at min/max", num(m, "kfAtMin", 2) + "/" + num(m, "kfAtMax", 2));
         if (m.containsKey("minRadiusForTarget")) append(sb, "smallest radius meeting the target", num(m, "minRadiusForTarget", p));
         if (m.containsKey("seats")) append(sb, "seats", m.get("seats") + ", margin " + num(m, "seatingMargin", p) + " " + u);
         sb.append("\n             tolerance from ").append(m.get("toleranceSource"));
         return sb.toString();
+    }
+
+    /** A figure as the advisor rounded it: {@code 0.0001}, not {@code 1.0E-4}. */
+    private static String exact(Object v) {
+        return v instanceof Number n ? DecimalText.exact(n.doubleValue()) : String.valueOf(v);
     }
 
     private static String num(Map<String, Object> m, String key, int places) {

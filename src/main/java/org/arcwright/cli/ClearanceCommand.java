@@ -64,7 +64,7 @@ final class ClearanceCommand implements Callable<Integer> {
         m.put("units", c.units().symbol());
         m.put("filletMin", c.filletMin());
         m.put("filletMax", c.filletMax());
-        m.put("mating", c.corner().describe());
+        m.put("mating", c.corner().describe(c.units()));
         m.put("seats", r.seats());
         m.put("margin", r.margin());
         m.put("allowedFilletMax", r.allowedFilletMax());
@@ -96,7 +96,7 @@ final class ClearanceCommand implements Callable<Integer> {
         int places = Math.max(1, Math.max(scale(c.filletMin()), scale(c.filletMax())));
         String fillet = c.filletMin() == c.filletMax() ? "R " + DecimalText.significant(c.filletMax(), 4)
                 : "R " + DecimalText.fixed(c.filletMin(), places) + "–" + DecimalText.fixed(c.filletMax(), places);
-        out.printf("Fillet %s %s against the mating part's %s%n", fillet, u, c.corner().describe());
+        out.printf("Fillet %s %s against the mating part's %s%n", fillet, u, c.corner().describe(c.units()));
         out.printf("  relief     %s along the seat, %s up the shoulder%n", DecimalText.fixed(r.reliefAlongSeat(), d),
                 DecimalText.fixed(r.reliefAlongShoulder(), d));
         out.printf("  admits     fillets up to %s %s (%s)%n", DecimalText.fixed(r.allowedFilletMax(), d), u, r.governing());
@@ -104,7 +104,7 @@ final class ClearanceCommand implements Callable<Integer> {
             out.printf("  verdict    SEATS: margin %s %s at the largest fillet%n", DecimalText.fixed(r.margin(), d), u);
         } else {
             out.printf("  verdict    INTERFERES: the largest fillet exceeds what the corner admits by %s %s; the part will not seat flush%n",
-                    DecimalText.fixed(-r.margin(), d), u);
+                    atLeastOneDigit(-r.margin(), d), u);
         }
         CornerClearance.ShoulderSupport s = r.support();
         if (s != null) {
@@ -120,6 +120,15 @@ final class ClearanceCommand implements Callable<Integer> {
         }
         for (String n : r.notes()) out.println("  note: " + n);
         for (String n : r.cautions()) out.println("  caution: " + n);
+    }
+
+    /**
+     * {@code v} at {@code places} decimals, or, when that would print as zero (an interference of 0.76 µm in an inch
+     * file), to one significant digit: an interference is never written as 0.
+     */
+    private static String atLeastOneDigit(double v, int places) {
+        String s = DecimalText.fixed(v, places);
+        return v > 0 && new BigDecimal(s).signum() == 0 ? DecimalText.significant(v, 1) : s;
     }
 
     private static int scale(double v) {

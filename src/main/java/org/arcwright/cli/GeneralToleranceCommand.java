@@ -107,7 +107,7 @@ final class GeneralToleranceCommand implements Callable<Integer> {
             m.put("class", t.toleranceClass());
             m.put("className", table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()));
             m.put("range", t.range() + " mm");
-            m.put("quantity", q.key());
+            m.put("quantity", tableId == null ? q.key() : table.quantity().key());
             m.put("size", size);
             m.put("units", u.symbol());
             m.put("table", table.id());
@@ -126,13 +126,18 @@ final class GeneralToleranceCommand implements Callable<Integer> {
             }
             out.println(new JsonFiles().write(m));
         } else {
-            String what = switch (q) {
+            String reading = switch (q) {
                 case RADIUS_CHAMFER -> blend == null ? "radius/chamfer (read as an external round or chamfer height)"
                         : "external round/chamfer";
                 case LINEAR -> "fillet".equals(blend) ? "internal fillet radius (a linear size)" : "linear size";
                 case ANGULAR -> "angle, shorter side";
             };
-            out.printf("%s %s %s, class %s (%s): %s%s%n", what, DecimalText.significant(size, 4), u.symbol(), t.toleranceClass(),
+            // a table named by --table (a castings, mouldings or company table) is read as it is: ISO 2768-1's two
+            // readings of a radius do not apply to it
+            if (tableId != null && what.radius != null) {
+                reading = blend == null ? "radius" : "fillet".equals(blend) ? "internal fillet radius" : "external round";
+            }
+            out.printf("%s %s %s, class %s (%s): %s%s%n", reading, DecimalText.significant(size, 4), u.symbol(), t.toleranceClass(),
                     table.classNames().getOrDefault(t.toleranceClass(), t.toleranceClass()),
                     q == ToleranceQuantity.ANGULAR ? t.formatted() : "±" + DecimalText.significant(tol, 4),
                     q == ToleranceQuantity.ANGULAR ? "" : " " + u.symbol());

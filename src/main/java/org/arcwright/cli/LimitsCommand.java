@@ -68,8 +68,17 @@ final class LimitsCommand implements Callable<Integer> {
 
     /** Why a figure is omitted for this form, or null when it is given. */
     private static String omitted(LimitsReport r) {
+        if (r.max() == null && r.min() != null) return "a MIN-only radius has no upper limit, so no crescent and no deviation";
         if (r.crescent() == null || r.nominal() != null) return null;
         return "a MAX-only radius has no nominal arc and no deviation";
+    }
+
+    /**
+     * A centred zone's offset as 0.0: the two half-widths cancel only to rounding (2.4E-17, or -0.0), which a reader of
+     * the JSON would take for an offset.
+     */
+    private static double centred(double offset, double width) {
+        return Math.abs(offset) <= 1e-12 * Math.max(1, width) ? 0.0 : offset;
     }
 
     /** The limit arc nearest the nominal: where the true profile is drawn when the zone does not reach the nominal. */
@@ -83,7 +92,7 @@ final class LimitsCommand implements Callable<Integer> {
         Map<String, Object> m = new LinkedHashMap<>();
         m.put("blend", fillet ? "fillet" : "round");
         m.put("zone", c.width());
-        m.put("isoOffset", c.isoOffset(fillet));
+        m.put("isoOffset", centred(c.isoOffset(fillet), c.width()));
         if (c.holdsNominal()) {
             m.put("outward", c.outwardPortion(fillet).getAsDouble());
             m.put("asmeBasicRadius", r.nominal());
@@ -164,6 +173,7 @@ final class LimitsCommand implements Callable<Integer> {
         out.printf("  ASME Y14.5     %s%n", r.asme());
         out.printf("  ISO 129-1      %s%n", r.iso());
         CrescentZone z = r.crescent();
+        if (z == null && omitted(r) != null) out.printf("  profile zone   —  omitted: %s%n", omitted(r));
         if (z != null) {
             if (r.nominal() == null) {
                 out.printf("  crescent       %s wide on the bisector, between the sharp corner and the R%s arc%n",

@@ -68,7 +68,7 @@ public sealed interface InspectionCallout {
                 if (tiers.get(i).zone() > tiers.get(i - 1).zone()) {
                     throw InputProblem.ofField("callout.tiers[" + i + "].zone", "tier " + (i + 1) + "'s zone " + DecimalText.exact(tiers.get(i).zone())
                             + " is larger than tier " + i + "'s " + DecimalText.exact(tiers.get(i - 1).zone())
-                            + "; each lower tier refines the one above it (ASME Y14.5-2018 composite profile, from memory)");
+                            + "; each lower tier refines the one above it (ASME Y14.5-2018, composite profile tolerancing)");
                 }
             }
         }

@@ -91,12 +91,12 @@ public record BearingChamferLimits(String id, String title, String source, Strin
             }
         }
         if (listed == null) {
-            throw InputProblem.ofField("mating.chamferMin", "r_s min " + DecimalText.exact(chamferMin) + " mm is above the largest in the "
+            throw InputProblem.ofField("mating.chamferMin", "r_s min " + DecimalText.significant(chamferMin, 4) + " mm is above the largest in the "
                     + "chamfer-limit table (" + DecimalText.exact(rows.get(rows.size() - 1).chamferMin()) + " mm)");
         }
         StringBuilder note = new StringBuilder();
         if (Math.abs(listed - chamferMin) > BearingSeatTable.ROUNDING) {
-            note.append("r_s min ").append(DecimalText.exact(chamferMin)).append(" mm is not a listed chamfer dimension; r_s max is taken "
+            note.append("r_s min ").append(DecimalText.significant(chamferMin, 4)).append(" mm is not a listed chamfer dimension; r_s max is taken "
                     + "from the row for ").append(DecimalText.exact(listed)).append(" mm (the next larger). ");
         }
         Row use = null;
@@ -161,7 +161,7 @@ public record BearingChamferLimits(String id, String title, String source, Strin
         /** The row in words for a report. */
         public String describe() {
             return String.format(Locale.ROOT, "r_s min %s mm, %s: r_s max %s mm radial, %s mm axial",
-                    DecimalText.exact(chamferMin), boreRange(), DecimalText.exact(radialMax), DecimalText.exact(axialMax));
+                    DecimalText.significant(chamferMin, 4), boreRange(), DecimalText.exact(radialMax), DecimalText.exact(axialMax));
         }
     }
 

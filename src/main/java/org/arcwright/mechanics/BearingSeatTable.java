@@ -83,13 +83,13 @@ public record BearingSeatTable(String id, String title, String source, String un
             if (r.chamferMin() <= chamferMin + ROUNDING) use = r;
         }
         if (use == null) {
-            throw InputProblem.ofField("mating.chamferMin", "r_s min " + DecimalText.exact(chamferMin) + " mm is below the table's smallest, "
+            throw InputProblem.ofField("mating.chamferMin", "r_s min " + DecimalText.significant(chamferMin, 4) + " mm is below the table's smallest, "
                     + DecimalText.exact(rows.get(0).chamferMin()) + " mm");
         }
         boolean exact = Math.abs(use.chamferMin() - chamferMin) <= ROUNDING;
         String note = exact ? "" : String.format(Locale.ROOT,
                 "r_s min %s mm is not a listed chamfer dimension; using the row for %s mm (the next smaller)",
-                DecimalText.exact(chamferMin), DecimalText.exact(use.chamferMin()));
+                DecimalText.significant(chamferMin, 4), DecimalText.exact(use.chamferMin()));
         return new Lookup(use, exact, note);
     }
 

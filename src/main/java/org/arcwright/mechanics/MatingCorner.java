@@ -3,6 +3,7 @@ package org.arcwright.mechanics;
 import java.util.Locale;
 import org.arcwright.io.DecimalText;
 import org.arcwright.io.InputProblem;
+import org.arcwright.tolerance.Units;
 
 /**
  * The corner of the part that seats against a shoulder: its relief is what room the fillet has.
@@ -20,6 +21,14 @@ public sealed interface MatingCorner permits MatingCorner.Chamfer, MatingCorner.
 
     /** Words for reports, e.g. {@code "chamfer 1.5 × 30°"}. */
     String describe();
+
+    /**
+     * Words for a report of a file in {@code fileUnits}: lengths as the file gives them. Chamfers and radii are held
+     * in the file's units already; a bearing's are held in mm (its tables are metric) and are shown in both.
+     */
+    default String describe(Units fileUnits) {
+        return describe();
+    }
 
     /**
      * A chamfer on the mating part.
@@ -84,6 +93,18 @@ public sealed interface MatingCorner permits MatingCorner.Chamfer, MatingCorner.
         @Override
         public String describe() {
             return "rolling-bearing ring, r_s min " + DecimalText.significant(chamferMin, 4) + " mm" + (bore == null ? "" : ", bore " + DecimalText.significant(bore, 4) + " mm");
+        }
+
+        /** In an inch file: {@code r_s min 0.06 in (1.524 mm)}, the inch value as converted back to 4 significant digits. */
+        @Override
+        public String describe(Units fileUnits) {
+            if (fileUnits != Units.INCH) return describe();
+            double per = fileUnits.millimetres();
+            return "rolling-bearing ring, r_s min " + both(chamferMin, per) + (bore == null ? "" : ", bore " + both(bore, per));
+        }
+
+        private static String both(double mm, double perUnit) {
+            return DecimalText.significant(mm / perUnit, 4) + " in (" + DecimalText.significant(mm, 4) + " mm)";
         }
     }
 

@@ -207,6 +207,7 @@ public record SheetContent(String title, String partNumber, List<Fact> partFacts
         }
         Set<String> cautions = new LinkedHashSet<>(usualCautions(ws.standard()));
         SheetProblems.mixedGeneralTolerance(ws).ifPresent(cautions::add);
+        SheetProblems.generalToleranceScope(ws).ifPresent(cautions::add);
         for (Map.Entry<String, List<String>> e : byCaution.entrySet()) {
             cautions.add(String.join(", ", e.getValue()) + ": " + e.getKey());
         }

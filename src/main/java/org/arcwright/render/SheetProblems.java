@@ -20,7 +20,8 @@ import org.arcwright.worksheet.RadiusFeature;
  * The open problems of a feature that a sheet must never hide behind a status such as
  * "measured: pass": a stress target the chosen limits miss, a mating part that does not seat, an
  * inspection judged against another callout (or against one it did not record), a feature drawn to
- * another standard or in other units than the part, a demoted or missing choice.
+ * another standard or in other units than the part, a demoted or missing choice, a cast or moulded
+ * radius left to an ISO 2768 title block.
  */
 final class SheetProblems {
     private SheetProblems() {}
@@ -64,6 +65,10 @@ final class SheetProblems {
                     + (margin == null ? "" : " by " + DecimalText.exact(-margin) + " " + c.units().symbol()));
         }
         if (r.demoted()) out.add("the chosen control failed one of its checks (demoted)");
+        if (r.callout() instanceof Callout.General g && isIso2768(g.table() == null ? ws.titleBlock().table() : g.table())
+                && !c.process().coveredByIso2768()) {
+            out.add("general tolerance out of scope: ISO 2768-1 does not cover " + c.process().key() + " radii");
+        }
         InspectionRecord i = f.inspection();
         if (i != null) {
             if (i.undecided()) {
@@ -93,6 +98,29 @@ final class SheetProblems {
                     + "company practice decides.");
         }
         return Optional.empty();
+    }
+
+    /**
+     * A caution when the title block invokes ISO 2768 and some features are not machined or sheet metal: ISO 2768-1
+     * covers parts made by metal removal or formed from sheet metal only (ISO 2768-1:1989, clause 1). Castings take
+     * ISO 8062-3 grades, mouldings a moulding standard or the moulder's tolerance groups.
+     */
+    static Optional<String> generalToleranceScope(PartWorksheet ws) {
+        if (!isIso2768(ws.titleBlock().table())) return Optional.empty();
+        List<String> outside = new ArrayList<>();
+        for (RadiusFeature f : ws.features()) {
+            if (!f.designCase().process().coveredByIso2768()) outside.add(f.id() + " (" + f.designCase().process().key() + ")");
+        }
+        if (outside.isEmpty()) return Optional.empty();
+        return Optional.of("General tolerance out of scope: ISO 2768-1 covers parts made by metal removal or formed from "
+                + "sheet metal, and " + String.join(", ", outside) + (outside.size() == 1 ? " is not" : " are not")
+                + ". Give their radii a tolerance of their own, or state on the title block the general tolerance for "
+                + "them (for castings an ISO 8062-3 casting tolerance grade, for mouldings the moulder's tolerance group); "
+                + "company practice decides.");
+    }
+
+    private static boolean isIso2768(String table) {
+        return table != null && table.toLowerCase(Locale.ROOT).startsWith("iso2768");
     }
 
     /** Whether an inspection record's callout text names the chosen callout. */

@@ -13,6 +13,7 @@ import java.util.Objects;
 import java.util.Optional;
 import java.util.Set;
 import org.arcwright.callout.Callout;
+import org.arcwright.callout.CalloutFormatter;
 import org.arcwright.io.InputProblem;
 import org.arcwright.model.BlendFunction;
 import org.arcwright.model.BlendKind;
@@ -146,7 +147,7 @@ public final class Advisor {
                 distinctRanks.add(r);
             }
         }
-        List<String> conflicts = conflicts(distinctRanks);
+        List<String> conflicts = conflicts(distinctRanks, c.standard());
         boolean usable = anyUsable(distinct);
         double band = Double.isNaN(processBand) ? c.nominalRadius() * 0.2 : processBand;
         // only shown when nothing is usable or the nominal lies outside the needs' room: not worked out otherwise
@@ -197,7 +198,7 @@ public final class Advisor {
         return sb.toString();
     }
 
-    private List<String> conflicts(List<Ranking> ranked) {
+    private List<String> conflicts(List<Ranking> ranked, DrawingStyle style) {
         List<String> conflicts = new ArrayList<>();
         for (int i = 0; i < ranked.size(); i++) {
             Ranking a = ranked.get(i);
@@ -207,8 +208,9 @@ public final class Advisor {
                 if (b.needsClass() != 0 || b.preferred() != a.preferred() || b.elements() != a.elements()
                         || b.recommendation().score() != a.recommendation().score()) break;
                 if (!a.recommendation().callout().typeName().equals(b.recommendation().callout().typeName())) {
-                    conflicts.add("'" + a.recommendation().ruleId() + "' (" + a.recommendation().callout().typeName()
-                            + ") and '" + b.recommendation().ruleId() + "' (" + b.recommendation().callout().typeName()
+                    conflicts.add("'" + a.recommendation().ruleId() + "' ("
+                            + CalloutFormatter.controlName(a.recommendation().callout(), style) + ") and '"
+                            + b.recommendation().ruleId() + "' (" + CalloutFormatter.controlName(b.recommendation().callout(), style)
                             + ") rank equal at " + plain(a.recommendation().score()) + "; they are listed by rule id, which "
                             + "is not a decision: choose, or ask the pack's author to weigh them");
                 }
@@ -267,7 +269,8 @@ public final class Advisor {
         double score = demoted ? rule.weight() * DEMOTED_SCORE_FACTOR : rule.weight();
         List<NoteLink> linked = rule.noteTags().isEmpty() ? List.of()
                 : notes.related(rule.noteTags(), rule.summary(), NOTES_PER_RECOMMENDATION);
-        return finish(rule.id(), d, datums, needs, score, rule.because(), cautions, rule.references(), trace, linked,
+        Sizer.Citations cited = sizer.citations(d, rule.because(), rule.references());
+        return finish(rule.id(), d, datums, needs, score, cited.because(), cautions, cited.references(), trace, linked,
                 demoted);
     }
 
@@ -410,7 +413,7 @@ public final class Advisor {
         String text = d.text(callout);
         if (callout instanceof Callout.CompositeProfile && c.standard() == DrawingStyle.ISO) {
             cautions.add("On an ISO drawing write the tiers as two profile frames stacked on one leader (ISO 1101), the "
-                    + "upper with the datums, the lower without; the composite frame is ASME's form (common practice).");
+                    + "upper with the datums, the lower without; ISO has no single frame of two tiers (common practice).");
         }
         Proof proof = Proof.of(needs, callout, d.refinement, d.lo(), d.hi(), d.places);
         List<String> allCautions = new ArrayList<>(proof.unmet().size() + cautions.size() + 1);

@@ -138,7 +138,8 @@ final class Candidates {
                 : "ISO 1101:2017: profile related to a datum system; ISO 129-1:2018: radii"), cautions, narrow));
         Draft composite = composite(c, places, lo, hi);
         if (composite != null) {
-            out.add(new Built("needs.composite", composite, datums, List.of("A composite profile: the upper tier to "
+            out.add(new Built("needs.composite", composite, datums, List.of((asme ? "A composite profile" : "Two stacked "
+                    + "profile frames") + ": the upper tier to "
                     + String.join(", ", datums) + " locates the blend, the lower tier without datums holds " + bandWords + "."),
                     List.of(asme ? "ASME Y14.5-2018: composite profile" : "ISO 1101:2017: combined zone, stacked frames"),
                     cautions, narrow));

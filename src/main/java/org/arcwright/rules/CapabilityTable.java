@@ -21,9 +21,10 @@ import java.util.Optional;
  * @param processes for each process key, steps of nominal radius (mm) and the ± value (mm)
  * @param rowSources for each process key, where its row comes from (a source named, or common practice); a
  *     process without one falls back to {@code source}
+ * @param provenance how the values were obtained and checked, for maintainers; never shown in advice
  */
 public record CapabilityTable(String id, String title, String source, Map<String, List<Step>> processes,
-                              Map<String, String> rowSources) {
+                              Map<String, String> rowSources, String provenance) {
 
     /** The id of the built-in table. */
     public static final String DEFAULT_ID = "process-capability";
@@ -33,7 +34,8 @@ public record CapabilityTable(String id, String title, String source, Map<String
                            @JsonProperty(value = "title", required = true) String title,
                            @JsonProperty(value = "source", required = true) String source,
                            @JsonProperty(value = "processes", required = true) Map<String, List<Step>> processes,
-                           @JsonProperty("rowSources") Map<String, String> rowSources) {
+                           @JsonProperty("rowSources") Map<String, String> rowSources,
+                           @JsonProperty("provenance") String provenance) {
         for (var e : processes.entrySet()) {
             Process.fromKey(e.getKey());
             List<Step> steps = e.getValue();
@@ -58,6 +60,7 @@ public record CapabilityTable(String id, String title, String source, Map<String
         this.processes = Collections.unmodifiableMap(new LinkedHashMap<>(processes));
         if (rowSources != null) rowSources.keySet().forEach(Process::fromKey);
         this.rowSources = rowSources == null ? Map.of() : Map.copyOf(rowSources);
+        this.provenance = provenance == null ? "" : provenance;
     }
 
     /** Where the row of {@code process} comes from: its own source, else the table's. */

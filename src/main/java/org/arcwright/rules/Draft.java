@@ -64,7 +64,8 @@ final class Draft {
         intent = rc;
         min = rc.min().getAsDouble();
         max = rc.max().getAsDouble();
-        nominal = Math.min(Math.max(rc.nominalOrMean(), min), max);
+        // The nominal as drawn, even outside the limits (R3 +0.3/+0.1): a profile built from it is drawn about it.
+        nominal = rc.nominalOrMean();
         source = "the engineer's tolerance " + c.tolerance();
     }
 
@@ -269,18 +270,29 @@ final class Draft {
         return new RadiusCallout(kind, c.units(), new ToleranceForm.Deviations(nom, plus, minus));
     }
 
+    /**
+     * The radius the figures are about, as {@code limits} reads the same callout: the nominal a radius or CR callout
+     * draws (R3 in R3 +0.3/+0.1, even outside its limits), the mean of the limits for a callout drawn as limits only
+     * (no nominal on the drawing), and the basic radius of a profile or a title-block tolerance.
+     */
+    private double aboutRadius(double lo, double hi) {
+        if (plan.callout() != CalloutKind.RADIUS && plan.callout() != CalloutKind.CONTROLLED_RADIUS) return nominal;
+        RadiusCallout drawn = radiusCallout(RadiusKind.R);
+        return drawn.nominal().isPresent() ? drawn.nominal().getAsDouble() : (lo + hi) / 2;
+    }
+
     /** The figures of the control as it stands, without the mechanics. */
     AdviceFigures figures() {
         double lo = lo();
         double hi = hi();
-        double nomIn = Math.min(Math.max(nominal, lo), hi);
-        CrescentZone z = CrescentZone.of(lo, nomIn, hi, angle);
+        double about = aboutRadius(lo, hi);
+        CrescentZone z = CrescentZone.of(lo, about, hi, angle);
         List<Double> tiers = null;
         if (isProfile() && zones.length > 1) {
             tiers = new ArrayList<>();
             for (double v : zones) tiers.add(v);
         }
-        return new AdviceFigures(c.units(), Advisor.round(nominal), Advisor.round(lo), Advisor.round(hi),
+        return new AdviceFigures(c.units(), Advisor.round(about), Advisor.round(lo), Advisor.round(hi),
                 Advisor.round(hi - lo), angle, Advisor.round(z.width()), Advisor.round(z.equalBilateralProfile()),
                 isProfile() ? zones[0] : null, isProfile() ? outward : null,
                 isProfile() && outward != null ? Advisor.round(outward - zones[0] / 2) : null, tiers, source, adjusted, null, null, null,

@@ -10,6 +10,7 @@ import org.arcwright.model.DesignCase;
 import org.arcwright.model.Process;
 import org.arcwright.rules.CalloutPlan.CalloutKind;
 import org.arcwright.tolerance.CalloutParser;
+import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.GeneralTolerance;
 import org.arcwright.tolerance.GeneralToleranceTable;
 import org.arcwright.tolerance.RadiusCallout;
@@ -59,7 +60,7 @@ final class Sizer {
 
     /** True when the process is one ISO 2768-1 covers (metal removal, sheet metal). */
     static boolean iso2768Covers(Process p) {
-        return p == Process.MACHINED || p == Process.SHEET_METAL;
+        return p.coveredByIso2768();
     }
 
     /**
@@ -176,9 +177,60 @@ final class Sizer {
         return plusMinus(c, h).map(t -> 2 * t).filter(band -> band > h - minRadius + 1e-9);
     }
 
+    /**
+     * A rule's reasons and references as they apply to the title-block table the draft was sized from: a rule names
+     * ISO 2768-1 (often its Table 2), but an internal fillet reads Table 1 and a cast or moulded radius the pack's
+     * castings or mouldings table. References to ISO 2768-1 are replaced by the citation of the table read; a reason
+     * naming ISO 2768-1 names the title block's tolerance instead when that is not ISO 2768-1. Lists are returned
+     * unchanged when the draft was not sized from a title-block table.
+     */
+    Citations citations(Draft d, List<String> because, List<String> references) {
+        references = ownStandard(references, d.c.standard());
+        if (d.generalTable == null) return new Citations(because, references);
+        boolean iso = d.generalTable.startsWith("iso2768-1");
+        String cite = switch (d.generalTable) {
+            case ISO_LINEAR -> "ISO 2768-1:1989: Table 1, linear sizes (an internal fillet radius is one)";
+            case ISO_EDGES -> "ISO 2768-1:1989: Table 2, broken edges (external radii and chamfer heights)";
+            default -> book.generalTables().byId(d.generalTable).map(t -> t.title() + ": " + t.source()).orElse(null);
+        };
+        List<String> refs = new java.util.ArrayList<>();
+        boolean cited = false;
+        for (String r : references) {
+            if (r.startsWith("ISO 2768-1") && (r.contains("Table") || !iso)) {
+                if (!cited && cite != null) refs.add(cite);
+                cited = true;
+            } else {
+                refs.add(r);
+            }
+        }
+        if (!cited && !iso && cite != null) refs.add(cite);
+        List<String> reasons = because;
+        if (!iso) {
+            reasons = because.stream().map(b -> b.replace("the general tolerance of ISO 2768-1", "the title block's general "
+                    + "tolerance (" + d.generalLabel + ")").replace("ISO 2768-1", d.generalLabel)).toList();
+        }
+        return new Citations(reasons, refs);
+    }
+
+    /**
+     * The references that apply to a drawing in {@code style}: a rule written for both standards cites how each one
+     * indicates a radius (ISO 129-1 / ISO 1101, ASME Y14.5); the other standard's drawing rules are left out. A
+     * reference naming both, or a general standard (ISO 2768-1, ISO 13715, a handbook), stays.
+     */
+    static List<String> ownStandard(List<String> references, DrawingStyle style) {
+        List<String> other = style == DrawingStyle.ASME ? List.of("ISO 129", "ISO 1101") : List.of("ASME Y14.5");
+        List<String> kept = references.stream().filter(r -> other.stream().noneMatch(r::startsWith)
+                || r.contains(style == DrawingStyle.ASME ? "ASME" : " ISO ")).toList();
+        return kept.isEmpty() ? references : kept;
+    }
+
+    /** A card's reasons and references. */
+    record Citations(List<String> because, List<String> references) {}
+
     static String generalLabel(GeneralToleranceTable table, String cls) {
         if (table.id().equals(ISO_LINEAR)) return "ISO 2768-" + cls + " (Table 1, linear sizes)";
         if (table.id().startsWith("iso2768-1")) return "ISO 2768-" + cls;
-        return table.title() + ", class " + cls;
+        String name = table.classNames().get(cls);
+        return table.title() + ", class " + cls + (name == null ? "" : " (" + name + ")");
     }
 }

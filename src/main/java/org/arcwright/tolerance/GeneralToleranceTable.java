@@ -18,10 +18,13 @@ import org.arcwright.io.InputProblem;
  *
  * <p>Tables are data ({@code tables/*.json} in a practice pack); the built-in pack carries ISO
  * 2768-1. A company table with the same {@code id} replaces the built-in one, a new id adds one.
+ *
+ * <p>{@code source} is the plain citation users see; {@code provenance} says for maintainers how the
+ * values were obtained and checked (a recalled value is marked there, never in {@code source}).
  */
 public record GeneralToleranceTable(String id, String title, String source, ToleranceQuantity quantity, String units,
                                     List<SizeRange> ranges, Map<String, List<Double>> classes,
-                                    Map<String, String> classNames, String note) {
+                                    Map<String, String> classNames, String note, String provenance) {
 
     @JsonCreator
     public GeneralToleranceTable(@JsonProperty(value = "id", required = true) String id,
@@ -32,7 +35,8 @@ public record GeneralToleranceTable(String id, String title, String source, Tole
                                  @JsonProperty(value = "ranges", required = true) List<SizeRange> ranges,
                                  @JsonProperty(value = "classes", required = true) Map<String, List<Double>> classes,
                                  @JsonProperty("classNames") Map<String, String> classNames,
-                                 @JsonProperty("note") String note) {
+                                 @JsonProperty("note") String note,
+                                 @JsonProperty("provenance") String provenance) {
         if (id == null || id.isBlank()) throw new IllegalArgumentException("id must not be blank");
         if (ranges.isEmpty()) throw new IllegalArgumentException("ranges must not be empty");
         for (int i = 1; i < ranges.size(); i++) {
@@ -63,6 +67,7 @@ public record GeneralToleranceTable(String id, String title, String source, Tole
         this.classes = Collections.unmodifiableMap(new LinkedHashMap<>(classes));
         this.classNames = classNames == null ? Map.of() : Map.copyOf(classNames);
         this.note = note;
+        this.provenance = provenance == null ? "" : provenance;
     }
 
     /**

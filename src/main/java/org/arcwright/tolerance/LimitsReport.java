@@ -48,7 +48,7 @@ public record LimitsReport(RadiusCallout callout, double includedAngleDeg, Doubl
             crescent = CrescentZone.of(lo, nominal == null ? max : nominal, max, includedAngleDeg);
         }
         Double profileZone = crescent == null || nominal == null ? null : crescent.equalBilateralProfile();
-        Double shortcut = crescent == null || nominal == null ? null : crescent.shortcutProfile();
+        Double shortcut = crescent == null || nominal == null ? null : shortcut(callout.form(), crescent);
         List<String> remarks = new ArrayList<>();
         remarks.add(callout.kind() == RadiusKind.CR
                 ? "A controlled radius (CR) bounds size and requires a fair curve: no flats, no reversals, every local radius within the limits."
@@ -82,5 +82,17 @@ public record LimitsReport(RadiusCallout callout, double includedAngleDeg, Doubl
         }
         return new LimitsReport(callout, includedAngleDeg, min, max, nominal, band, crescent, profileZone, shortcut,
                 DrawingStyle.ASME.format(callout), DrawingStyle.ISO.format(callout), remarks);
+    }
+
+    /**
+     * Twice the larger deviation, from the deviations as written (2 × 0.3 = 0.6, where 3.3 − 3 in doubles gives
+     * 0.29999999999999982); for limits written without a nominal, the band (twice the half-band about the mean).
+     */
+    private static double shortcut(ToleranceForm form, CrescentZone crescent) {
+        BigDecimal two = BigDecimal.valueOf(2);
+        if (form instanceof ToleranceForm.Deviations d) return two.multiply(d.plus().abs().max(d.minus().abs())).doubleValue();
+        if (form instanceof ToleranceForm.EqualBilateral e) return two.multiply(e.plusMinus().abs()).doubleValue();
+        if (form instanceof ToleranceForm.Limits l) return l.max().subtract(l.min()).doubleValue();
+        return crescent.shortcutProfile();
     }
 }

@@ -19,6 +19,24 @@ class AdviseNeedsCommandTest {
             """;
 
     @Test
+    void aCardSaysWhatItsEquivalentProfileZoneIsAbout(@TempDir Path dir) throws Exception {
+        // R3 +0.3/+0.1 at 90°: 2 × 0.3 × (1/sin 45° − 1) = 0.2485 about the drawn R3, the figure `limits` gives
+        // (worked by hand). Before: 0.1657 about R3.1, with nothing saying so; JSON nominal 3.1.
+        Path f = Files.writeString(dir.resolve("case.json"), """
+                {"units": "mm", "standard": "iso", "kind": "fillet", "nominalRadius": 3, "function": "stress-relief",
+                 "loading": "fatigue", "formMatters": true, "process": "machined", "tolerance": "R3 +0.3/+0.1"}""");
+        CliRun text = CliRun.of("advise", f.toString(), "--no-notes", "--no-settings", "--all");
+        assertThat(text.exitCode()).as(text.err()).isZero();
+        assertThat(text.out()).contains("limits 3.100 to 3.300 mm; crescent 0.0828; equivalent profile zone 0.2485 about R3");
+        JsonNode root = new ObjectMapper().readTree(CliRun.of("advise", f.toString(), "--no-notes", "--no-settings",
+                "--format", "json").out());
+        assertThat(root.path("recommendations")).anySatisfy(r -> {
+            assertThat(r.path("text").asText()).isEqualTo("R3 +0.3/+0.1");
+            assertThat(r.at("/numbers/nominal").asDouble()).isEqualTo(3.0);
+        });
+    }
+
+    @Test
     void jsonCarriesNeedsMeetsAndDesignChanges(@TempDir Path dir) throws Exception {
         Path f = Files.writeString(dir.resolve("case.json"), CONFLICT);
         CliRun run = CliRun.of("advise", f.toString(), "--no-notes", "--no-settings", "--format", "json");

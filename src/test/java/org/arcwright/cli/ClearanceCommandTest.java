@@ -96,6 +96,29 @@ class ClearanceCommandTest {
     }
 
     @Test
+    void anInchRingIsDescribedInInchesAndItsConvertedChamferIsNotPrintedRaw() throws Exception {
+        // 0.06 in = 1.524 mm (1 in = 25.4 mm exactly, NIST SP 811). Before: "r_s min 1.5239999999999998 mm is not a
+        // listed chamfer dimension" and the ring described as "r_s min 1.524 mm" only, in a file written in inches.
+        int code = run("""
+                {"units": "in", "fillet": {"rMin": 0.03, "rMax": 0.04}, "mating": {"type": "bearing", "chamferMin": 0.06}}
+                """);
+        assertThat(code).isZero();
+        assertThat(out.toString()).contains("r_s min 0.06 in (1.524 mm)").contains("r_s min 1.524 mm is not a listed")
+                .doesNotContain("1.5239999");
+    }
+
+    @Test
+    void anInterferenceSmallerThanThePlacesShownIsNotPrintedAsZero() throws Exception {
+        // R 0.0394 in = 1.00076 mm against a ring with r_s min 1.1 (0.0433 in), which admits fillets up to 1 mm
+        // (rolling-bearing seat table): it fouls by 0.00003 in. Before: "exceeds what the corner admits by 0.0000 in".
+        int code = run("""
+                {"units": "in", "fillet": {"rMin": 0.0354, "rMax": 0.0394}, "mating": {"type": "bearing", "chamferMin": 0.0433, "bore": 1.26}}
+                """);
+        assertThat(code).isEqualTo(Cli.FAIL);
+        assertThat(out.toString()).contains("INTERFERES").contains("by 0.00003 in").doesNotContain("by 0.0000 in");
+    }
+
+    @Test
     void textSaysWhatGovernsAndCarriesTheCaution() throws Exception {
         int code = run("""
                 {"units": "mm", "fillet": {"r": 0.8}, "mating": {"type": "radius", "rMin": 1.0},

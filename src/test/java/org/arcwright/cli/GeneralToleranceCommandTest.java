@@ -58,6 +58,22 @@ class GeneralToleranceCommandTest {
     }
 
     @Test
+    void aCastRadiusReadsTheCastingsTableWithoutIso2768Readings() throws Exception {
+        // ISO 8062-3:2007 Table 2, DCTG 10 (class m of the castings table): 2 mm total up to 10 mm, so R5 is ±1 mm,
+        // fillet or round alike. Before: the text read it "as an external round or chamfer height", an ISO 2768-1
+        // Table 2 reading, and JSON said "quantity": "radius-chamfer" for a linear-size table.
+        CliRun text = CliRun.of("general-tolerance", "--table", "castings-radius-general", "--class", "m", "--radius", "5");
+        assertThat(text.exitCode()).isZero();
+        assertThat(text.out()).startsWith("radius 5 mm, class m (DCTG 10").contains("±1 mm").doesNotContain("chamfer height")
+                .doesNotContain("--blend");
+        JsonNode n = json.readTree(CliRun.of("general-tolerance", "--table", "castings-radius-general", "--class", "m",
+                "--radius", "5", "--blend", "fillet", "--format", "json").out());
+        assertThat(n.get("tolerance").asDouble()).isEqualTo(1.0);
+        assertThat(n.get("quantity").asText()).isEqualTo("linear");
+        assertThat(n.get("table").asText()).isEqualTo("castings-radius-general");
+    }
+
+    @Test
     void linearAndAngularUseTheirOwnTables() throws Exception {
         // ISO 2768-1:1989 Table 1: class c, over 120 up to 400 mm: ±1.2.
         assertThat(json.readTree(CliRun.of("general-tolerance", "--class", "c", "--linear", "250", "--format", "json")

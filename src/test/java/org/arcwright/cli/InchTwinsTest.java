@@ -15,7 +15,8 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * An inch twin of a millimetre run for every command: the same part written in inches (1 in =
  * 25.4 mm exactly, ISO 31-1 / NIST SP 811) must give the same answer, reported in inches, with no
- * length read in the wrong unit. Clearance's twins live in {@link ClearanceCommandTest}.
+ * length read in the wrong unit. Clearance's twins live in {@link ClearanceCommandTest}; limits,
+ * general-tolerance, fillet-stress, inspect, render, drawing-note, sheet, advise and simulate are here.
  */
 class InchTwinsTest {
     private static final double MM = 25.4;
@@ -46,6 +47,61 @@ class InchTwinsTest {
         JsonNode in = run("general-tolerance", "--class", "m", "--radius", "0.1575", "--units", "in", "--format", "json");
         assertThat(in.get("toleranceUnits").asText()).isEqualTo("in");
         assertThat(in.get("tolerance").asDouble()).isCloseTo(0.5 / MM, within(1e-12));
+    }
+
+    @Test
+    void generalToleranceByBlendKind() throws Exception {
+        // ISO 2768-1:1989 class m, R4 (over 3 up to 6 mm): internal fillet = linear size, Table 1, ±0.1 mm; external
+        // round = broken edge, Table 2, ±0.5 mm. 4 mm = 0.15748 in; each tolerance comes back in inches, with its unit.
+        for (String[] k : new String[][] {{"fillet", "0.1"}, {"round", "0.5"}}) {
+            JsonNode mm = run("general-tolerance", "--class", "m", "--radius", "4", "--blend", k[0], "--format", "json");
+            JsonNode in = run("general-tolerance", "--class", "m", "--radius", "0.15748", "--units", "in", "--blend", k[0],
+                    "--format", "json");
+            assertThat(mm.get("tolerance").asDouble()).isEqualTo(Double.parseDouble(k[1]));
+            assertThat(in.get("tolerance").asDouble() * MM).as(k[0]).isCloseTo(mm.get("tolerance").asDouble(), within(1e-9));
+            assertThat(in.get("table").asText()).isEqualTo(mm.get("table").asText());
+            assertThat(in.get("formatted").asText()).endsWith(" in").doesNotContain("±" + k[1] + " ");
+        }
+    }
+
+    @Test
+    void simulate() throws Exception {
+        // The pump-bracket process (invented) written in inches: every length / 25.4 (a flat's width and centre are
+        // fractions of the sweep, not lengths), so the same parts are drawn and judged, and every share agrees.
+        ObjectNode c = (ObjectNode) json.readTree(Path.of("examples/simulate/pump-bracket.json").toFile());
+        c.put("parts", 400);
+        Path mmFile = dir.resolve("mm.json");
+        Files.writeString(mmFile, c.toString());
+        c.put("units", "in");
+        c.put("nominalRadius", c.get("nominalRadius").asDouble() / MM);
+        ObjectNode p = (ObjectNode) c.get("process");
+        ObjectNode radius = (ObjectNode) p.get("radius");
+        for (String k : new String[] {"mean", "sd"}) radius.put(k, radius.get(k).asDouble() / MM);
+        ArrayNode size = (ArrayNode) p.get("step").get("size");
+        for (int i = 0; i < size.size(); i++) size.set(i, json.getNodeFactory().numberNode(size.get(i).asDouble() / MM));
+        p.put("noise", p.get("noise").asDouble() / MM);
+        ObjectNode needs = (ObjectNode) c.get("needs");
+        for (String k : new String[] {"minRadius", "maxRadius"}) needs.put(k, needs.get(k).asDouble() / MM);
+        for (JsonNode callout : c.get("callouts")) {
+            ObjectNode o = (ObjectNode) callout;
+            for (String k : new String[] {"min", "max", "zone"}) if (o.has(k)) o.put(k, o.get(k).asDouble() / MM);
+        }
+        Path inFile = dir.resolve("in.json");
+        Files.writeString(inFile, c.toString());
+        CliRun mm = CliRun.of("simulate", mmFile.toString());
+        CliRun in = CliRun.of("simulate", inFile.toString());
+        assertThat(mm.exitCode()).as(mm.err()).isZero();
+        assertThat(in.exitCode()).as(in.err()).isZero();
+        assertThat(in.out()).contains("(lengths in in)").contains("points within 0.0002 in");
+        assertThat(mm.out()).contains("points within 0.00508 mm"); // 0.0002 in × 25.4 (NIST SP 811)
+        // the table of shares, line by line after the callout column, is the same
+        assertThat(shares(in.out())).isEqualTo(shares(mm.out()));
+    }
+
+    /** The share columns of a simulate report (each callout row without its name). */
+    private static java.util.List<String> shares(String report) {
+        return report.lines().filter(l -> l.contains("%") && l.contains("(") && !l.contains("note:")).map(l -> l.replaceFirst("^.*?\\s{2,}(\\d)", "$1"))
+                .toList();
     }
 
     @Test

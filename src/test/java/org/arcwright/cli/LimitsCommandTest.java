@@ -115,6 +115,33 @@ class LimitsCommandTest {
     }
 
     @Test
+    void aCentredZoneHasAPlainZeroOffsetInJson() throws Exception {
+        // R0.55 ±0.05 round: the zone is centred on the nominal arc (crescent geometry, common practice), so its ISO
+        // offset is 0. Before: JSON "isoOffset": -0.0.
+        CliRun run = CliRun.of("limits", "R0.55 ±0.05", "--blend", "round", "--format", "json");
+        assertThat(json.readTree(run.out()).at("/unequalProfile/isoOffset").toString()).isEqualTo("0.0");
+    }
+
+    @Test
+    void minOnlySaysWhyNoZoneIsGivenInTextAndJson() throws Exception {
+        // R1 MIN has no upper limit: no crescent, no zone about a nominal, no shortcut (no deviation).
+        CliRun text = CliRun.of("limits", "R1 MIN");
+        assertThat(text.out()).contains("profile zone   —  omitted: a MIN-only radius has no upper limit");
+        JsonNode n = json.readTree(CliRun.of("limits", "R1 MIN", "--format", "json").out());
+        assertThat(n.get("profileZone").isNull()).isTrue();
+        assertThat(n.get("profileZoneOmitted").asText()).contains("no upper limit");
+    }
+
+    @Test
+    void theShortcutIsTwiceTheLargerDeviationAsWritten() throws Exception {
+        // 2 × 0.3 = 0.6 exactly (the shortcut's own definition). Before: 0.5999999999999996 from 3.3 − 3.
+        JsonNode n = json.readTree(CliRun.of("limits", "R3 +0.3/+0.1", "--format", "json").out());
+        assertThat(n.get("profileZoneShortcut").asText()).isEqualTo("0.6");
+        JsonNode in = json.readTree(CliRun.of("limits", "R.120 +.010/+.004", "--units", "in", "--format", "json").out());
+        assertThat(in.get("profileZoneShortcut").asText()).isEqualTo("0.02");
+    }
+
+    @Test
     void aTinyAngleIsRefusedAndANearlyStraightOneKeepsItsDigits() {
         CliRun tiny = CliRun.of("limits", "R1 ±0.1", "--angle", "1e-300");
         assertThat(tiny.exitCode()).isEqualTo(2);

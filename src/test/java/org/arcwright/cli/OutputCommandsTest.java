@@ -94,6 +94,44 @@ class OutputCommandsTest {
     }
 
     @Test
+    void anIsoDynamicProfileIsDrawnWithOzAndAnAsmeOneWithTheTriangle(@TempDir Path dir) throws Exception {
+        // ISO 1101:2017: a zone whose offset is not specified is marked OZ; ASME Y14.5-2018 marks a dynamic profile
+        // with the triangle. Before: an ISO frame carried "(DYN)" and the triangle. Inch twin: .1 in (ASME) / 0.1 (ISO).
+        for (String units : new String[] {"mm", "in"}) {
+            Run iso = run("render", callout(dir, "{\"units\": \"" + units + "\", \"standard\": \"iso\", \"callout\": "
+                    + "{\"type\": \"profile\", \"zone\": 0.1, \"dynamic\": true, \"datums\": [\"A\"]}}").toString());
+            assertThat(iso.code()).isZero();
+            assertThat(iso.out()).contains("| PROFILE | 0.1 OZ | A |").contains("|\u2313|0.1 OZ|A|")
+                    .doesNotContain("(DYN)").doesNotContain("\u25B3");
+            Run asme = run("render", callout(dir, "{\"units\": \"" + units + "\", \"standard\": \"asme\", \"callout\": "
+                    + "{\"type\": \"profile\", \"zone\": 0.1, \"dynamic\": true, \"datums\": [\"A\"]}}").toString());
+            assertThat(asme.out()).contains("(DYN)").contains("\u25B3").doesNotContain("OZ");
+        }
+        // UZ and OZ together: ISO 1101 states an offset or leaves it unspecified, not both; refused with the field
+        Run both = run("render", callout(dir, "{\"units\": \"mm\", \"standard\": \"iso\", \"callout\": "
+                + "{\"type\": \"profile\", \"zone\": 0.1, \"dynamic\": true, \"outward\": 0.02}}").toString());
+        assertThat(both.code()).isEqualTo(Cli.BAD_INPUT);
+        assertThat(both.err()).contains("callout.json:1:").contains("either a stated offset (UZ) or an unspecified one (OZ");
+    }
+
+    @Test
+    void isoNotesSayControlledRadiusOnlyAsACompanyNoteIsoDoesNotDefine(@TempDir Path dir) throws Exception {
+        // ISO 1101 / ISO 129-1 define no controlled radius (ASME Y14.5-2018 does): under ISO the CR's smoothness is a
+        // company note, and the title-block note speaks of indications, not of CR callouts.
+        String demo = Files.readString(Path.of(DEMO)).replace("\"standard\": \"asme\"", "\"standard\": \"iso\"");
+        Path iso = dir.resolve("iso.arcpart");
+        Files.writeString(iso, demo);
+        Run note = run("drawing-note", "callout-note", iso.toString(), "--feature", "F1", "--no-settings");
+        assertThat(note.code()).as(note.err()).isZero();
+        assertThat(note.out()).contains("R2 ±0.2").contains("COMPANY NOTE, NOT DEFINED BY ISO 1101 OR ISO 129-1")
+                .doesNotContain("CONTROLLED RADIUS").doesNotContain("CR2");
+        Run block = run("drawing-note", "title-block-notes", iso.toString(), "--no-settings");
+        assertThat(block.out()).contains("ISO 2768-1 TABLE 1").doesNotContain(" CR ").doesNotContain("CONTROLLED RADIUS");
+        Run asme = run("drawing-note", "callout-note", DEMO, "--feature", "F1", "--no-settings");
+        assertThat(asme.out()).contains("CONTROLLED RADIUS: A FAIR CURVE");
+    }
+
+    @Test
     void renderingAControlledRadiusOnAnIsoDrawingSaysIsoHasNone(@TempDir Path dir) throws Exception {
         Path in = callout(dir, "{\"units\": \"mm\", \"standard\": \"iso\", \"callout\": "
                 + "{\"type\": \"controlled-radius\", \"min\": 1.8, \"max\": 2.2}}");

@@ -82,6 +82,32 @@ class SheetExporterTest {
     }
 
     @Test
+    void aCastOrMouldedRadiusUnderAnIso2768TitleBlockIsFlaggedOnThePartAndItsRow(@TempDir Path dir) throws Exception {
+        // ISO 2768-1:1989, scope: parts made by metal removal or formed from sheet metal, not castings or mouldings.
+        // Before: a cast F4 left to "ISO 2768-m" passed the sheet without a word.
+        com.fasterxml.jackson.databind.ObjectMapper m = new com.fasterxml.jackson.databind.ObjectMapper();
+        com.fasterxml.jackson.databind.node.ObjectNode root = (com.fasterxml.jackson.databind.node.ObjectNode)
+                m.readTree(Path.of("examples/tarnbeck-output-shaft-decided.arcpart").toFile());
+        root.put("standard", "iso");
+        for (com.fasterxml.jackson.databind.JsonNode f : root.get("features")) {
+            ((com.fasterxml.jackson.databind.node.ObjectNode) f.get("case")).put("standard", "iso");
+            if (f.get("id").asText().equals("F4")) ((com.fasterxml.jackson.databind.node.ObjectNode) f.get("case")).put("process", "cast");
+            if (f.get("id").asText().equals("F2")) ((com.fasterxml.jackson.databind.node.ObjectNode) f.get("case")).put("process", "molded");
+        }
+        Path file = dir.resolve("cast.arcpart");
+        java.nio.file.Files.writeString(file, m.writeValueAsString(root));
+        PartWorksheet cast = new WorksheetFiles(new JsonFiles()).read(file);
+        SheetContent content = exporter.content(cast, templates, "t");
+        assertThat(content.cautions()).anySatisfy(c -> assertThat(c).contains("ISO 2768-1 covers parts made by metal removal")
+                .contains("F4 (cast)").contains("F2 (molded)").contains("ISO 8062-3"));
+        // F4 is left to the title block: its row says so; F2 has a tolerance of its own, so its row does not.
+        assertThat(content.summary().get(3).problems()).anySatisfy(p -> assertThat(p).contains("general tolerance out of scope"));
+        assertThat(content.summary().get(1).problems()).noneSatisfy(p -> assertThat(p).contains("out of scope"));
+        // a machined part with the same title block gets neither
+        assertThat(exporter.content(demo, templates, "t").cautions()).noneSatisfy(c -> assertThat(c).contains("metal removal"));
+    }
+
+    @Test
     void everyRadiusCarriesItsOwnCalloutOnlyWhenEveryFeatureIsDecided() {
         // Four of five features decided: the edge note must not claim every radius has its own callout.
         SheetContent content = exporter.content(demo, templates, "t");

@@ -2,18 +2,14 @@ package org.arcwright.render;
 
 import static org.assertj.core.api.Assertions.assertThat;
 import static org.assertj.core.api.Assertions.assertThatThrownBy;
+import static org.arcwright.testing.StandardMarks.assertOwnMarks;
 
 import com.fasterxml.jackson.databind.ObjectMapper;
 import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
-import java.util.ArrayList;
-import java.util.Collections;
-import java.util.LinkedHashMap;
 import java.util.List;
-import java.util.Map;
-import java.util.regex.Pattern;
 import org.apache.pdfbox.Loader;
 import org.apache.pdfbox.text.PDFTextStripper;
 import org.arcwright.callout.Callout;
@@ -36,37 +32,10 @@ import org.junit.jupiter.api.io.TempDir;
 /**
  * Every callout kind × standard × units through every output (frame text, SVG, one-line text,
  * words, the built-in drawing notes, the sheet in all three formats), failing on a mark or term of
- * the other standard. The lists of marks are from ASME Y14.5-2018 and ISO 1101:2017 (from memory):
- * ASME alone has the controlled radius (CR), the circled U, the dynamic-profile triangle and the
- * composite frame; ISO alone has the UZ and OZ zone modifiers.
+ * the other standard ({@code testing.StandardMarks}: ASME Y14.5-2018 and ISO 1101:2017, from memory). The
+ * advisor's own words are swept by {@code cli.AdviseMarksSweepTest}.
  */
 class StandardMarksSweepTest {
-    private static final Map<String, Pattern> ASME_ONLY;
-    private static final Map<String, Pattern> ISO_ONLY;
-
-    static {
-        Map<String, Pattern> asme = new LinkedHashMap<>();
-        Map<String, Pattern> iso = new LinkedHashMap<>();
-        asme.put("CR callout", Pattern.compile("\\bCR\\s?[0-9.]"));
-        asme.put("controlled radius", Pattern.compile("(?i)controlled radius"));
-        asme.put("circled U", Pattern.compile("\\(U\\)|\u24CA"));
-        asme.put("dynamic triangle", Pattern.compile("\\(DYN\\)|\u25B3|(?i)\\bdynamic\\b"));
-        asme.put("composite frame", Pattern.compile("(?i)composite"));
-        asme.put("unequally disposed", Pattern.compile("(?i)unequally disposed"));
-        iso.put("UZ", Pattern.compile("\\bUZ[+-]?[0-9.]"));
-        iso.put("OZ", Pattern.compile("\\bOZ\\b"));
-        iso.put("ISO 129-1 dimensioning", Pattern.compile("ISO 129-1"));
-        iso.put("stacked ISO frames", Pattern.compile("(?i)stacked frames"));
-        ASME_ONLY = Collections.unmodifiableMap(asme);
-        ISO_ONLY = Collections.unmodifiableMap(iso);
-    }
-
-    /** Sentences that name the other standard to warn about it, which is what they are for. */
-    private static final List<String> EXPLANATIONS = List.of(
-            "Controlled radius (CR) is an ASME Y14.5 concept with no ISO equivalent",
-            "Arcwright's readings of ASME Y14.5 and ISO 1101 are summaries",
-            "(ASME Y14.5-2018 or ISO 1101 as the drawing states)");
-
     static List<Callout> kinds() {
         List<DatumReference> ab = List.of(DatumReference.parse("A"), DatumReference.parse("B"));
         return List.of(
@@ -133,20 +102,6 @@ class StandardMarksSweepTest {
 
     private static boolean refused(Callout c, DrawingStyle style) {
         return style == DrawingStyle.ISO && c instanceof Callout.Profile p && p.isUnequal() && p.dynamic();
-    }
-
-    private static void assertOwnMarks(String what, DrawingStyle style, String output) {
-        String text = output;
-        for (String e : EXPLANATIONS) text = text.replace(e, "");
-        Map<String, Pattern> forbidden = style == DrawingStyle.ISO ? ASME_ONLY : ISO_ONLY;
-        for (Map.Entry<String, Pattern> m : forbidden.entrySet()) {
-            var found = m.getValue().matcher(text);
-            if (found.find()) {
-                int at = found.start();
-                throw new AssertionError(what + ": " + m.getKey() + " in a " + style + " output near '"
-                        + text.substring(Math.max(0, at - 60), Math.min(text.length(), at + 60)) + "'");
-            }
-        }
     }
 
     /**

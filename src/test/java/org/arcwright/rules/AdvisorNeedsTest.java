@@ -276,6 +276,67 @@ class AdvisorNeedsTest {
                 if (first.callout() instanceof Callout.General g) {
                     assertThat(g.table()).doesNotStartWith("iso2768");
                 }
+                // Nor in its words: before, the first card of a cast fillet said "the general tolerance of ISO 2768-1
+                // covers it" and cited "ISO 2768-1:1989: Table 2, broken edges" above a caution that it does not.
+                String what = p + " " + k;
+                assertThat(first.because()).as(what).noneMatch(b -> b.contains("ISO 2768"));
+                assertThat(first.references()).as(what).noneMatch(r -> r.startsWith("ISO 2768"));
+                if (first.callout() instanceof Callout.General) {
+                    assertThat(first.references()).as(what).anyMatch(r -> r.contains(p == Process.CAST ? "ISO 8062-3" : "ISO 20457"));
+                }
+            }
+        }
+    }
+
+    @Test
+    void anIntentCardWithSameSignDeviationsReportsItsZoneAboutTheDrawnNominal() {
+        // R3 +0.3/+0.1 at 90°: limit arcs 0.0414 and 0.1243 beyond the nominal arc, so the equal-bilateral zone about
+        // the drawn R3 that holds them is 2 × 0.3 × (1/sin 45° − 1) = 0.2485 (worked by hand, as `limits` gives it).
+        // Before: the card reported nominal 3.1 (the nominal clamped into the limits) and the zone about R3.1, 0.1657.
+        DesignCase c = new DesignCase(Units.MM, DrawingStyle.ISO, null, BlendKind.FILLET, 3.0, BlendFunction.STRESS_RELIEF,
+                Loading.FATIGUE, true, false, List.of(), Process.MACHINED, null, null, "R3 +0.3/+0.1");
+        Recommendation r = real.advise(c).recommendations().stream()
+                .filter(x -> x.text().equals("R3 +0.3/+0.1")).findFirst().orElseThrow();
+        assertThat(r.numbers().nominal()).isEqualTo(3.0);
+        assertThat(r.numbers().min()).isEqualTo(3.1);
+        assertThat(r.numbers().max()).isEqualTo(3.3);
+        assertThat(r.numbers().equivalentProfileZone()).isCloseTo(0.6 * (Math.sqrt(2) - 1), offset(1e-6));
+    }
+
+    @Test
+    void aLimitsFormCardReportsItsZoneAboutTheMeanOfItsLimits() {
+        // A callout drawn as limits (no nominal) is read about the mean of its limits, as `limits` reads CR 1.5-2.0;
+        // the equal-bilateral zone about the mean is the crescent width itself (common practice, crescent geometry).
+        for (DrawingStyle style : DrawingStyle.values()) {
+            for (Recommendation r : real.advise(gearSeat(style, 2, 1.75, null, false, null, BlendFunction.STRESS_RELIEF))
+                    .recommendations()) {
+                if (!(r.callout() instanceof Callout.Radius || r.callout() instanceof Callout.ControlledRadius)) continue;
+                Double drawn = r.callout() instanceof Callout.Radius rr ? rr.nominal()
+                        : ((Callout.ControlledRadius) r.callout()).nominal();
+                AdviceFigures f = r.numbers();
+                if (drawn == null) {
+                    assertThat(f.nominal()).as(r.text()).isCloseTo((f.min() + f.max()) / 2, offset(1e-6));
+                    assertThat(f.equivalentProfileZone()).as(r.text()).isCloseTo(f.crescentWidth(), offset(2e-6));
+                } else {
+                    assertThat(f.nominal()).as(r.text()).isEqualTo(drawn);
+                }
+            }
+        }
+    }
+
+    @Test
+    void aGeneralToleranceCardCitesTheIso2768TableItReads() {
+        // ISO 2768-1:1989: an internal fillet radius is a linear size (Table 1), an external radius a broken edge
+        // (Table 2). Before: the card for a fillet read Table 1 and cited "Table 2, broken edges".
+        for (BlendKind k : BlendKind.values()) {
+            DesignCase c = new DesignCase(Units.MM, DrawingStyle.ISO, null, k, 4.0, BlendFunction.COSMETIC, Loading.NONE,
+                    false, false, List.of(), Process.MACHINED, null, null, null);
+            for (Recommendation r : real.advise(c).recommendations()) {
+                if (!(r.callout() instanceof Callout.General)) continue;
+                String table = k == BlendKind.FILLET ? "Table 1" : "Table 2";
+                String other = k == BlendKind.FILLET ? "Table 2" : "Table 1";
+                assertThat(r.references()).as(k + " " + r.ruleId()).anyMatch(ref -> ref.startsWith("ISO 2768-1") && ref.contains(table))
+                        .noneMatch(ref -> ref.startsWith("ISO 2768-1") && ref.contains(other));
             }
         }
     }

@@ -144,9 +144,9 @@ class AdvisorScenarioTest {
         Callout.Profile p = (Callout.Profile) r.callout();
         assertThat(p.datums()).extracting(dr -> dr.label()).containsExactly("A", "B");
         assertThat(p.extent().kind()).isEqualTo(Extent.Kind.WITH_ADJACENT);
-        // cast R2: ±0.6 mm (capability table: ISO 8062-3 DCTG 10, from memory); the zone holding the same radius band
-        // at a 90° corner is 2 × 0.6 × (1/sin 45° − 1) = 0.4971, rounded up to 0.5
-        assertThat(r.text()).isEqualTo("|⌓|0.5|A|B| on the radius and its adjacent surfaces");
+        // cast R2: ±1.0 mm (capability table: ISO 8062-3:2007 Table 2, DCTG 10, 2 mm total up to 10 mm); the zone
+        // holding the same radius band at a 90° corner is 2 × 1.0 × (1/sin 45° − 1) = 0.8284, rounded up to 0.83
+        assertThat(r.text()).isEqualTo("|⌓|0.83|A|B| on the radius and its adjacent surfaces");
     }
 
     @Test
