@@ -202,7 +202,13 @@ public final class DecideForm {
         if (!text(Question.TOLERANCE).isBlank()) {
             try {
                 RadiusCallout c = CalloutParser.parse(text(Question.TOLERANCE), units, "tolerance");
-                if (nominal.isPresent() && nominal.get() > 0 && c.isFullyToleranced()
+                // a tolerance that draws its own nominal must draw this one; deviations of the same sign
+                // (R3 +0.3/+0.1) put it outside the limits, which is allowed. Limits alone must hold it.
+                if (nominal.isPresent() && nominal.get() > 0 && c.nominal().isPresent()
+                        && Math.abs(c.nominal().getAsDouble() - nominal.get()) > 1e-9 * Math.max(1, nominal.get())) {
+                    p.put(Question.TOLERANCE, "This tolerance is drawn about R" + Numbers.trim(c.nominal().getAsDouble())
+                            + ", not about the nominal radius " + Numbers.trim(nominal.get()) + ".");
+                } else if (nominal.isPresent() && nominal.get() > 0 && c.nominal().isEmpty() && c.isFullyToleranced()
                         && (nominal.get() < c.min().getAsDouble() || nominal.get() > c.max().getAsDouble())) {
                     p.put(Question.TOLERANCE, "The nominal radius " + Numbers.trim(nominal.get())
                             + " lies outside these limits.");

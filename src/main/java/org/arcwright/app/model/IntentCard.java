@@ -1,10 +1,12 @@
 package org.arcwright.app.model;
 
+import java.util.ArrayList;
 import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
 import org.arcwright.callout.Callout;
+import org.arcwright.io.DecimalText;
 import org.arcwright.model.DesignCase;
 import org.arcwright.rules.Recommendation;
 import org.arcwright.tolerance.CalloutParser;
@@ -37,18 +39,30 @@ public final class IntentCard {
         double min = report.min();
         double max = report.max();
         Double nominal = rc.nominal().isPresent() ? rc.nominal().getAsDouble() : null;
-        Callout callout = rc.kind() == RadiusKind.CR ? new Callout.ControlledRadius(min, max, nominal)
-                : new Callout.Radius(min, max, nominal);
+        // deviations of the same sign (R3 +0.3/+0.1) draw a nominal outside the limits, which a chosen
+        // callout does not hold: the card keeps the limits it allows and says how it was drawn
+        boolean outside = nominal != null && (nominal < min || nominal > max);
+        Double kept = outside ? null : nominal;
+        Callout callout = rc.kind() == RadiusKind.CR ? new Callout.ControlledRadius(min, max, kept)
+                : new Callout.Radius(min, max, kept);
         Map<String, Object> numbers = new LinkedHashMap<>();
         numbers.put("min", min);
         numbers.put("max", max);
+        // what the zone figures are about: the drawn nominal, which same-sign deviations put outside the limits
+        if (report.nominal() != null) numbers.put("nominal", report.nominal());
         if (report.crescent() != null) {
             numbers.put("crescentWidth", report.crescent().width());
             numbers.put("equalBilateralProfile", report.crescent().equalBilateralProfile());
         }
         String text = c.standard().format(rc);
-        return Optional.of(new Recommendation(RULE_ID, callout, text, 0, List.of(
-                "Your tolerance intent as written; no practice rule has reviewed it."),
+        List<String> because = new ArrayList<>(List.of("Your tolerance intent as written; no practice rule has reviewed it."));
+        if (outside) {
+            because.add("Drawn as " + text + ": both deviations have the same sign, so the nominal R"
+                    + DecimalText.exact(nominal) + " lies outside the limits; chosen, it is kept as its limits "
+                    + DecimalText.places(min, 6) + " to " + DecimalText.places(max, 6) + " " + c.units().symbol()
+                    + ", the same zone.");
+        }
+        return Optional.of(new Recommendation(RULE_ID, callout, text, 0, List.copyOf(because),
                 report.remarks(), List.of(), numbers, List.of(RULE_ID), List.of(), false));
     }
 }

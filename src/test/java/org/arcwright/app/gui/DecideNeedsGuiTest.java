@@ -1,6 +1,7 @@
 package org.arcwright.app.gui;
 
 import static org.assertj.core.api.Assertions.assertThat;
+import static org.assertj.core.api.Assertions.within;
 
 import java.awt.Component;
 import java.awt.Container;
@@ -23,6 +24,7 @@ import org.arcwright.model.Process;
 import org.arcwright.rules.Advice;
 import org.arcwright.rules.Need;
 import org.arcwright.rules.Recommendation;
+import org.arcwright.callout.Callout.SizeLimits;
 import org.arcwright.tolerance.DrawingStyle;
 import org.arcwright.tolerance.Units;
 import org.assertj.swing.fixture.FrameFixture;
@@ -132,6 +134,32 @@ class DecideNeedsGuiTest {
         GuiSupport.settle(300);
         assertThat(GuiSupport.onEdt(zone::distortionWarning)).isEmpty();
         GuiSupport.onEdt(() -> window.showTab(0));
+    }
+
+    /**
+     * A tolerance with deviations of the same sign, typed as the engineer's intent: R3 +0.3/+0.1. The
+     * Decide panel advises on it and shows it as a card holding the limits R3.1-3.3. Before
+     * the fix the form refused the tolerance ("the nominal radius 3 lies outside these limits") and the
+     * card could not be built (its nominal lies outside its limits): no advice at all.
+     */
+    @Test
+    void aSameSignToleranceIsShownAsTheEngineersOwnCard() {
+        fixture.table("featureTable").selectRows(0);
+        GuiSupport.onEdt(() -> window.showTab(0));
+        DesignCase c = new DesignCase(Units.MM, DrawingStyle.ASME, "boss fillet", BlendKind.FILLET, 3, BlendFunction.COSMETIC,
+                Loading.STATIC, false, false, List.of(), Process.MACHINED, null, null, "R3 +0.3/+0.1");
+        GuiSupport.onEdt(() -> window.session().updateCase("F1", c));
+        GuiSupport.waitFor(() -> GuiSupport.onEdt(() -> {
+            Advice a = window.decidePanel().shownAdvice();
+            return a != null && a.recommendations().stream().anyMatch(r -> "R3 +0.3/+0.1".equals(r.text()));
+        }), 30);
+        Recommendation intent = GuiSupport.onEdt(() -> window.decidePanel().shownAdvice().recommendations().stream()
+                .filter(r -> "R3 +0.3/+0.1".equals(r.text())).findFirst().orElseThrow());
+        // the card judged and kept is the zone R3.1-R3.3 the tolerance allows
+        assertThat(((SizeLimits) intent.callout()).min()).isEqualTo(3.1, within(1e-9));
+        assertThat(((SizeLimits) intent.callout()).max()).isEqualTo(3.3, within(1e-9));
+        GuiSupport.settle(300);
+        shoot("decide-same-sign");
     }
 
     private static void shootZone(String name, ZoneViewPanel zone) {

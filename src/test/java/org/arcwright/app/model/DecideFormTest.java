@@ -50,7 +50,24 @@ class DecideFormTest {
     void aNominalOutsideTheLimitsIsRejected() {
         form.load(Fixtures.fillet(3, null));
         form.setText(Question.TOLERANCE, "R2 ±0.2");
-        assertThat(form.problem(Question.TOLERANCE)).hasValueSatisfying(p -> assertThat(p).contains("outside"));
+        assertThat(form.problem(Question.TOLERANCE)).hasValueSatisfying(p -> assertThat(p).contains("drawn about R2, not about the nominal radius 3"));
+        form.setText(Question.TOLERANCE, "R1.8-2.2");
+        assertThat(form.problem(Question.TOLERANCE)).hasValueSatisfying(p -> assertThat(p).contains("outside these limits"));
+    }
+
+    /**
+     * Deviations of the same sign draw the nominal outside its limits (R3 +0.3/+0.1 allows R3.1 to R3.3;
+     * ASME Y14.5-2018 and ISO 129-1 allow a nominal with two deviations of one sign, common practice).
+     * Before the fix the form refused it as "the nominal radius 3 lies outside these limits".
+     */
+    @Test
+    void aSameSignToleranceAboutTheNominalIsAccepted() {
+        form.load(Fixtures.fillet(3, null));
+        form.setText(Question.TOLERANCE, "R3 +0.3/+0.1");
+        assertThat(form.problem(Question.TOLERANCE)).isEmpty();
+        LimitsReport r = form.limits().orElseThrow();
+        assertThat(r.min()).isEqualTo(3.1, within(1e-12));
+        assertThat(r.max()).isEqualTo(3.3, within(1e-12));
     }
 
     @Test
