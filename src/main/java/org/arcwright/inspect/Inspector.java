@@ -24,9 +24,6 @@ import org.arcwright.zone.RadiusZone;
  * desktop app's check panel. A request in, a result out; nothing printed, nothing written.
  */
 public final class Inspector {
-    /** What a worst point measures when it lies beyond an adjacent surface (outside the sharp corner). */
-    static final String BEYOND_SURFACE = "distance beyond surface";
-
 
     /** Runs the inspection. @throws InputProblem for input no verdict can be given on */
     public InspectionResult inspect(InspectionRequest req) {
@@ -193,7 +190,7 @@ public final class Inspector {
         j.verdict = j.verdict.and(cr.verdict());
         if (cr.worst() != null && windowIsWorse(cr, byZone, j.worst)) {
             int i = cr.worstIndex();
-            j.worst = explain ? windowWorst(pts, cr, req.units()) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, "");
+            j.worst = explain ? windowWorst(pts, cr, req.units()) : new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), Worst.LOCAL_RADIUS, unit, "");
         }
         if (explain) {
             j.notes.add(String.format(Locale.ROOT, "local radius from Taubin circle fits over %s %s windows along the blend, stepped by a quarter window (75 %% overlap, %d windows); "
@@ -217,7 +214,7 @@ public final class Inspector {
         if (zoneWorst == null) return true;
         int window = standing(cr.verdict()), zone = standing(byZone);
         if (window != zone) return window > zone;
-        return !BEYOND_SURFACE.equals(zoneWorst.measure()) && cr.worstExcess() > zoneWorst.excess();
+        return !Worst.BEYOND_SURFACE.equals(zoneWorst.measure()) && cr.worstExcess() > zoneWorst.excess();
     }
 
     private static int standing(Verdict v) {
@@ -238,7 +235,7 @@ public final class Inspector {
      */
     private static void noiseNote(Worst worst, AdjacentSurfaces surfaces, RadiusZone zone, InspectionCallout.RadiusLimits rl,
                                   double u, String unit, List<String> notes) {
-        if (worst == null || !BEYOND_SURFACE.equals(worst.measure())) return;
+        if (worst == null || !Worst.BEYOND_SURFACE.equals(worst.measure())) return;
         double[] h = legOffsets(zone.corner(), worst.x(), worst.y());
         AdjacentSurfaces.Surface s = h[0] < h[1] ? surfaces.a() : surfaces.b();
         if (!s.fitted() || !(s.rms() > 0) || worst.excess() > SCATTER_SPAN * s.rms()) return;
@@ -371,7 +368,7 @@ public final class Inspector {
             double depth = -Math.min(ha, hb);
             String text = String.format(Locale.ROOT, "%s %s beyond surface %s (outside the sharp corner: no radius allows it) at %s",
                     fmt(depth), unit, ha < hb ? "a" : "b", where);
-            return new Worst(i, x, y, depth, BEYOND_SURFACE, unit, text);
+            return new Worst(i, x, y, depth, Worst.BEYOND_SURFACE, unit, text);
         }
         double e = env.worstExcess();
         double r = c.blendRadiusThrough(x, y);
@@ -385,7 +382,7 @@ public final class Inspector {
                     where, ha < hb ? "a" : "b", fmt(zone.min() - e), unit, limit, fmt(zone.min()), unit,
                     e > 0 ? "short of it" : "within it", fmt(Math.abs(e)), unit);
         }
-        return new Worst(i, x, y, e, "radius", unit, text);
+        return new Worst(i, x, y, e, Worst.RADIUS, unit, text);
     }
 
     /**
@@ -400,7 +397,7 @@ public final class Inspector {
         String u = w.unit().isEmpty() ? "" : " " + w.unit();
         double e = w.excess();
         switch (w.measure()) {
-            case "local radius": {
+            case Worst.LOCAL_RADIUS: {
                 ControlledRadiusOutcome cr = r.controlled();
                 ControlledRadiusOutcome.LocalWindow lw = cr == null ? null : cr.worst();
                 if (lw == null) break;
@@ -410,11 +407,11 @@ public final class Inspector {
                 return head + "local radius " + fmt(lw.radius()) + u + " ± " + length(lw.uncertainty(), r.request().units()) + u
                         + ", limit " + fmt(cr.worstLimit()) + u;
             }
-            case "radius":
+            case Worst.RADIUS:
                 return "worst #" + w.index() + ": " + (e > 0 ? "beyond a limit" : "within the limits") + " by " + fmt(Math.abs(e)) + u + " of radius";
-            case "distance beyond surface":
+            case Worst.BEYOND_SURFACE:
                 return "worst #" + w.index() + ": " + fmt(e) + u + " beyond a fitted surface (no radius allows it)";
-            case "distance":
+            case Worst.DISTANCE:
                 return "worst #" + w.index() + ": " + fmt(Math.abs(e)) + u + (e > 0 ? " outside" : " inside") + " the zone";
             default:
                 break;
@@ -429,8 +426,8 @@ public final class Inspector {
         double x = pts.xs()[i], y = pts.ys()[i];
         double[] h = legOffsets(zone.corner(), x, y);
         double nearest = Math.min(h[0], h[1]);
-        if (nearest < -zone.resolution()) return new Worst(i, x, y, -nearest, BEYOND_SURFACE, unit, "");
-        return new Worst(i, x, y, env.worstExcess(), "radius", unit, "");
+        if (nearest < -zone.resolution()) return new Worst(i, x, y, -nearest, Worst.BEYOND_SURFACE, unit, "");
+        return new Worst(i, x, y, env.worstExcess(), Worst.RADIUS, unit, "");
     }
 
     /** The signed distances of (x, y) from legs a and b, positive into the angle between them. */
@@ -456,7 +453,7 @@ public final class Inspector {
             text = String.format(Locale.ROOT, "local radius %s %s ± %s %s over %s; limit %s %s", fmt(w.radius()), unit, length(w.uncertainty(), units),
                     unit, span, fmt(cr.worstLimit()), unit);
         }
-        return new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), "local radius", unit, text);
+        return new Worst(i, pts.xs()[i], pts.ys()[i], cr.worstExcess(), Worst.LOCAL_RADIUS, unit, text);
     }
 
     private static Worst profileWorst(PointSet pts, ProfileOutcome o, Units units, boolean explain) {
@@ -464,10 +461,10 @@ public final class Inspector {
         int i = o.worst();
         if (i < 0) return null;
         double d = o.deviations()[i], e = o.worstExcess();
-        if (!explain) return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, "");
+        if (!explain) return new Worst(i, pts.xs()[i], pts.ys()[i], e, Worst.DISTANCE, unit, "");
         String text = String.format(Locale.ROOT, "point #%d lies %s %s %s the zone (deviation %s %s %s after registration)", i, fmt(Math.abs(e)),
                 unit, e > 0 ? "outside" : "inside", length(Math.abs(d), units), unit, d >= 0 ? "toward air" : "into the material");
-        return new Worst(i, pts.xs()[i], pts.ys()[i], e, "distance", unit, text);
+        return new Worst(i, pts.xs()[i], pts.ys()[i], e, Worst.DISTANCE, unit, text);
     }
 
     private static ProfileCheck profileCheck(InspectionRequest req, MeasuredSection section) {
@@ -587,7 +584,7 @@ public final class Inspector {
         } else if (r.radius() != null) {
             double res = r.request().resolution();
             RadiusEnvelope e = r.radius();
-            figure = e.outside() > 0 && r.worst() != null && "distance beyond surface".equals(r.worst().measure())
+            figure = e.outside() > 0 && r.worst() != null && Worst.BEYOND_SURFACE.equals(r.worst().measure())
                     ? e.outside() + " point(s) beyond the fitted surfaces, up to " + fmt(r.worst().excess()) + u + "; largest radius " + up(e.largest(), res) + u
                     : "envelope " + down(e.smallest(), res) + " to " + up(e.largest(), res) + u;
         } else if (r.profile() != null) {

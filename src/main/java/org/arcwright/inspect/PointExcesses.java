@@ -55,9 +55,9 @@ public final class PointExcesses {
      */
     public String measure(int i) {
         if (radiusZone != null) {
-            return radiusZone.beyondSurface(request.points().xs()[i], request.points().ys()[i]) ? Inspector.BEYOND_SURFACE : "radius";
+            return radiusZone.beyondSurface(request.points().xs()[i], request.points().ys()[i]) ? Worst.BEYOND_SURFACE : Worst.RADIUS;
         }
-        return "distance";
+        return Worst.DISTANCE;
     }
 
     /** The width the excess is read against: the radius band for R and CR, the zone for a profile. */

@@ -19,6 +19,15 @@ import java.util.Locale;
  *     {@code 0.0009 mm beyond surface a (outside the sharp corner) at point #41, s = 2.31 mm along the contour}
  */
 public record Worst(int index, double x, double y, double excess, String measure, String unit, String text) {
+    /** {@link #measure()} of a point judged by the radius through it (R and CR zones). */
+    public static final String RADIUS = "radius";
+    /** {@link #measure()} of a CR window judged by its local radius. */
+    public static final String LOCAL_RADIUS = "local radius";
+    /** {@link #measure()} of a point judged by its distance from a profile zone. */
+    public static final String DISTANCE = "distance";
+    /** {@link #measure()} of a point beyond an adjacent surface (outside the sharp corner): a distance, not a radius. */
+    public static final String BEYOND_SURFACE = "distance beyond surface";
+
     /** A worst point without unit or text (described from its fields). */
     public Worst(int index, double x, double y, double excess, String measure) {
         this(index, x, y, excess, measure, "", String.format(Locale.ROOT, "point #%d: %s %s (%s)", index,

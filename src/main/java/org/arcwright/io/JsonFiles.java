@@ -1,9 +1,11 @@
 package org.arcwright.io;
 
+import com.fasterxml.jackson.core.JsonFactory;
 import com.fasterxml.jackson.core.JsonLocation;
 import com.fasterxml.jackson.core.JsonParser;
 import com.fasterxml.jackson.core.JsonStreamContext;
 import com.fasterxml.jackson.core.JsonToken;
+import com.fasterxml.jackson.core.StreamReadConstraints;
 import com.fasterxml.jackson.core.json.JsonReadFeature;
 import com.fasterxml.jackson.core.JsonProcessingException;
 import com.fasterxml.jackson.databind.DeserializationContext;
@@ -165,7 +167,7 @@ public final class JsonFiles {
     }
 
     private static int mapperDepthLimit() {
-        return com.fasterxml.jackson.core.StreamReadConstraints.defaults().getMaxNestingDepth();
+        return StreamReadConstraints.defaults().getMaxNestingDepth();
     }
 
     /** A number too long to read, placed at the first such run of digits and named by the field before it. */
@@ -248,7 +250,7 @@ public final class JsonFiles {
         return null;
     }
 
-    private static final com.fasterxml.jackson.core.JsonFactory FACTORY = com.fasterxml.jackson.core.JsonFactory.builder()
+    private static final JsonFactory FACTORY = JsonFactory.builder()
             .enable(JsonReadFeature.ALLOW_NON_NUMERIC_NUMBERS).build();
 
     private static int[] valueAt(String text, String pointer) {

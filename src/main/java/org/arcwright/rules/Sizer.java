@@ -1,6 +1,7 @@
 package org.arcwright.rules;
 
 import java.math.BigDecimal;
+import java.util.ArrayList;
 import java.util.List;
 import java.util.Map;
 import java.util.Optional;
@@ -193,7 +194,7 @@ final class Sizer {
             case ISO_EDGES -> "ISO 2768-1:1989: Table 2, broken edges (external radii and chamfer heights)";
             default -> book.generalTables().byId(d.generalTable).map(t -> t.title() + ": " + t.source()).orElse(null);
         };
-        List<String> refs = new java.util.ArrayList<>();
+        List<String> refs = new ArrayList<>();
         boolean cited = false;
         for (String r : references) {
             if (r.startsWith("ISO 2768-1") && (r.contains("Table") || !iso)) {

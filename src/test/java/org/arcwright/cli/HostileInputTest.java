@@ -2,10 +2,12 @@ package org.arcwright.cli;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import java.nio.charset.StandardCharsets;
 import java.nio.file.FileSystems;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.nio.file.attribute.PosixFilePermissions;
+import java.util.Arrays;
 import org.junit.jupiter.api.Assumptions;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
@@ -317,7 +319,7 @@ class HostileInputTest {
     void aNoteSavedWithAByteOrderMarkIsAdded() throws Exception {
         Path note = dir.resolve("bom-note.md");
         Files.write(note, ("\uFEFF---\nid: bom-note\ntitle: A note saved with a byte-order mark\ntags: [test]\n---\nBody.\n")
-                .getBytes(java.nio.charset.StandardCharsets.UTF_8));
+                .getBytes(StandardCharsets.UTF_8));
         CliRun r = CliRun.of("notes", "add", note.toString(), "--index-cache", dir.resolve("cache").toString(),
                 "--personal", dir.resolve("personal").toString());
         assertThat(r.exitCode()).as(r.err()).isZero();
@@ -454,7 +456,7 @@ class HostileInputTest {
     }
 
     private static byte[] concat(byte[] a, byte[] b) {
-        byte[] out = java.util.Arrays.copyOf(a, a.length + b.length);
+        byte[] out = Arrays.copyOf(a, a.length + b.length);
         System.arraycopy(b, 0, out, a.length, b.length);
         return out;
     }

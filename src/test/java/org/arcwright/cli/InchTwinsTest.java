@@ -9,6 +9,7 @@ import com.fasterxml.jackson.databind.node.ArrayNode;
 import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
+import java.util.List;
 import org.junit.jupiter.api.Test;
 import org.junit.jupiter.api.io.TempDir;
 
@@ -99,7 +100,7 @@ class InchTwinsTest {
     }
 
     /** The share columns of a simulate report (each callout row without its name). */
-    private static java.util.List<String> shares(String report) {
+    private static List<String> shares(String report) {
         return report.lines().filter(l -> l.contains("%") && l.contains("(") && !l.contains("note:")).map(l -> l.replaceFirst("^.*?\\s{2,}(\\d)", "$1"))
                 .toList();
     }

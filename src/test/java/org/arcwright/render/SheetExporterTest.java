@@ -2,6 +2,9 @@ package org.arcwright.render;
 
 import static org.assertj.core.api.Assertions.assertThat;
 
+import com.fasterxml.jackson.databind.JsonNode;
+import com.fasterxml.jackson.databind.ObjectMapper;
+import com.fasterxml.jackson.databind.node.ObjectNode;
 import java.nio.file.Files;
 import java.nio.file.Path;
 import java.util.ArrayList;
@@ -85,17 +88,17 @@ class SheetExporterTest {
     void aCastOrMouldedRadiusUnderAnIso2768TitleBlockIsFlaggedOnThePartAndItsRow(@TempDir Path dir) throws Exception {
         // ISO 2768-1:1989, scope: parts made by metal removal or formed from sheet metal, not castings or mouldings.
         // Before: a cast F4 left to "ISO 2768-m" passed the sheet without a word.
-        com.fasterxml.jackson.databind.ObjectMapper m = new com.fasterxml.jackson.databind.ObjectMapper();
-        com.fasterxml.jackson.databind.node.ObjectNode root = (com.fasterxml.jackson.databind.node.ObjectNode)
+        ObjectMapper m = new ObjectMapper();
+        ObjectNode root = (ObjectNode)
                 m.readTree(Path.of("examples/tarnbeck-output-shaft-decided.arcpart").toFile());
         root.put("standard", "iso");
-        for (com.fasterxml.jackson.databind.JsonNode f : root.get("features")) {
-            ((com.fasterxml.jackson.databind.node.ObjectNode) f.get("case")).put("standard", "iso");
-            if (f.get("id").asText().equals("F4")) ((com.fasterxml.jackson.databind.node.ObjectNode) f.get("case")).put("process", "cast");
-            if (f.get("id").asText().equals("F2")) ((com.fasterxml.jackson.databind.node.ObjectNode) f.get("case")).put("process", "molded");
+        for (JsonNode f : root.get("features")) {
+            ((ObjectNode) f.get("case")).put("standard", "iso");
+            if (f.get("id").asText().equals("F4")) ((ObjectNode) f.get("case")).put("process", "cast");
+            if (f.get("id").asText().equals("F2")) ((ObjectNode) f.get("case")).put("process", "molded");
         }
         Path file = dir.resolve("cast.arcpart");
-        java.nio.file.Files.writeString(file, m.writeValueAsString(root));
+        Files.writeString(file, m.writeValueAsString(root));
         PartWorksheet cast = new WorksheetFiles(new JsonFiles()).read(file);
         SheetContent content = exporter.content(cast, templates, "t");
         assertThat(content.cautions()).anySatisfy(c -> assertThat(c).contains("ISO 2768-1 covers parts made by metal removal")

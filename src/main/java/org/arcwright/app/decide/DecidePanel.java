@@ -161,9 +161,9 @@ public final class DecidePanel extends JPanel {
         if (split.getWidth() <= 0) return;
         split.setDividerLocation(0.45);
         split.removeComponentListener(self);
-        split.addComponentListener(new java.awt.event.ComponentAdapter() {
+        split.addComponentListener(new ComponentAdapter() {
             @Override
-            public void componentResized(java.awt.event.ComponentEvent e) { keepMinimums(split); }
+            public void componentResized(ComponentEvent e) { keepMinimums(split); }
         });
     }
 

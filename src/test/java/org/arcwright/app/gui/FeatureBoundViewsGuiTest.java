@@ -327,7 +327,11 @@ class FeatureBoundViewsGuiTest {
         assertThat(verdict()).startsWith("The measured contour of F1 can be neither accepted nor rejected against its chosen "
                 + "callout, CR 1.8-2.2 (mm)").contains("U = 0.01 mm").doesNotContain("does not conform");
         GuiSupport.settle(200);
-        GuiSupport.screenshot(window.frame(), "check-indeterminate");
+        GuiSupport.screenshot(window.frame(), "check-indeterminate-light");
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.DARK));
+        GuiSupport.settle(300);
+        GuiSupport.screenshot(window.frame(), "check-indeterminate-dark");
+        GuiSupport.onEdt(() -> window.setTheme(ThemeChoice.LIGHT));
         fixture.button("checkKeep").click();
         GuiSupport.waitFor(() -> window.session().worksheet().feature("F1").orElseThrow().inspection().undecided(), 10);
         RadiusFeature f1 = window.session().worksheet().feature("F1").orElseThrow();
